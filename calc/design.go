@@ -1,0 +1,142 @@
+package calc
+
+// This file holds the input and output types of a whole evaluation. All
+// values are SI: metres, amperes, volts, ohms, tesla, kelvin for absolute
+// temperatures, watts, newton-metres. Fractions are 0..1.
+
+// Form is a coil's geometric form.
+type Form int
+
+const (
+	Loop     Form = iota // circular coil; thin unless Length/RadialBuild are set
+	Solenoid             // circular coil wound along its axis over Length
+	Rectangle
+	Pair // two identical circular coils on a common axis
+)
+
+// Drive says which electrical quantity is imposed.
+type Drive int
+
+const (
+	CurrentDrive Drive = iota
+	VoltageDrive
+)
+
+// Vec is a Cartesian vector in metres, tesla, A·m² … as the context says.
+type Vec [3]float64
+
+// Wire is a round conductor.
+type Wire struct {
+	Gauge    int     // AWG number, or NoGauge when a bare diameter was given
+	Bare     float64 // bare conductor diameter, m
+	Outer    float64 // overall diameter over insulation, m
+	Material Material
+}
+
+// NoGauge marks a wire given by diameter rather than AWG.
+const NoGauge = -100
+
+// Coil is one coil block in SI.
+type Coil struct {
+	Name string
+	Form Form
+
+	// Circular forms: MeanDiameter is always set by the reader (from
+	// inner+outer when those were given). InnerDiameter/OuterDiameter are
+	// zero unless given.
+	MeanDiameter  float64
+	InnerDiameter float64
+	OuterDiameter float64
+	Length        float64 // axial winding length; 0 for a thin coil
+	RadialBuild   float64 // radial depth of the winding; 0 for one layer
+
+	Width, Height float64 // Rectangle: outer dimensions of the mean turn
+
+	Turns int // per coil (per coil of a pair)
+	Wire  Wire
+
+	Drive   Drive
+	Current float64 // A, when Drive == CurrentDrive
+	Voltage float64 // V, when Drive == VoltageDrive (across one coil; a pair's coils in series see 2× turns of wire)
+	Duty    float64 // 0..1, 1 when not given
+
+	InsulationClass float64 // K, absolute temperature limit of the insulation
+
+	Spacing  float64 // Pair: distance between the two coil centres
+	Opposing bool    // Pair: currents in opposite senses
+
+	Axis   Vec // unit vector, default (0,0,1)
+	Centre Vec // m
+}
+
+// Cooling describes how the winding sheds heat.
+type Cooling struct {
+	Vacuum     bool    // radiation only
+	H          float64 // convective coefficient W/(m²·K); 0 in vacuum
+	HGiven     bool    // true when the spec stated h
+	Emissivity float64 // surface emissivity for radiation
+}
+
+// Conditions is the environment of the design.
+type Conditions struct {
+	Ambient         float64 // K
+	BackgroundField Vec     // T, e.g. geomagnetic field in orbit
+	// DesignAngle is the angle between the moment and the background field
+	// at which torque is reported, rad; the worst case (π/2) when not given.
+	DesignAngle float64
+	Cooling     Cooling
+}
+
+// Probe is a named point where the field is reported.
+type Probe struct {
+	Name string
+	At   Vec // m
+}
+
+// Relation of a limit.
+type Relation int
+
+const (
+	AtLeast Relation = iota // >=
+	AtMost                  // <=
+)
+
+// Limit is one requirement line: Quantity Relation Required (SI).
+type Limit struct {
+	Quantity string // a key of LimitQuantities
+	Relation Relation
+	Required float64 // SI, in the unit LimitQuantities gives
+	Line     int     // source line, for messages
+}
+
+// Design is everything calc needs.
+type Design struct {
+	Coils      []Coil
+	Conditions Conditions
+	Probes     []Probe
+	Limits     []Limit
+}
+
+// LimitQuantity describes a quantity a requirement line may constrain.
+type LimitQuantity struct {
+	Unit        string // SI unit as the units parser reads it, e.g. "A m2"
+	Description string
+}
+
+// LimitQuantities lists the names a `limits` block accepts. Totals are over
+// all coils (moment is the magnitude of the vector sum; power is the sum;
+// temperature is the hottest winding).
+var LimitQuantities = map[string]LimitQuantity{
+	"moment":          {"A m2", "magnitude of the total magnetic moment"},
+	"field-center":    {"T", "|B| at the origin"},
+	"power":           {"W", "total electrical power"},
+	"temperature":     {"degC", "hottest steady winding temperature"},
+	"current":         {"A", "largest coil current"},
+	"voltage":         {"V", "largest coil voltage"},
+	"resistance":      {"ohm", "largest hot coil resistance"},
+	"mass":            {"kg", "total conductor mass"},
+	"wire-length":     {"m", "longest coil wire length"},
+	"current-density": {"A/mm2", "largest current density in a conductor"},
+	"inductance":      {"H", "largest coil self-inductance"},
+	"torque":          {"N m", "largest torque in the background field"},
+}

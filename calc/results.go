@@ -1,0 +1,73 @@
+package calc
+
+// Layer is one layer of a winding: all its turns share one radius.
+type Layer struct {
+	Radius float64   // m, radius of the wire centres
+	Z      []float64 // m, axial position of each turn's centre, coil-local
+}
+
+// Winding is the laid-out winding of one coil (one coil of a pair).
+type Winding struct {
+	Layers        []Layer
+	TurnsPerLayer int     // turns that fit along Length (1 for a thin coil)
+	LayerCount    int     // layers that fit in RadialBuild (1 for one layer)
+	Thin          bool    // all turns treated on the mean diameter
+	MeanTurn      float64 // m, mean length of one turn
+	WireLength    float64 // m, per coil
+	AreaSum       float64 // m², Σ of the area enclosed by every turn
+	FillFactor    float64 // conductor area / winding cross-section (NaN for thin)
+	SurfaceArea   float64 // m², area shedding heat (see thermal model)
+	Mass          float64 // kg, conductor only, per coil
+}
+
+// CoilResult is every figure computed for one coil block.
+type CoilResult struct {
+	Name    string
+	Winding Winding
+
+	R20      float64 // Ω at 20 °C, whole coil block (both coils of a pair in series)
+	RHot     float64 // Ω at the steady winding temperature
+	Current  float64 // A at the steady state
+	Voltage  float64 // V across the coil block at the steady state
+	Power    float64 // W dissipated at the steady state (× duty for the average)
+	Density  float64 // A/m², current density in the conductor
+	Mass     float64 // kg, conductor of the coil block
+	Length   float64 // m, wire length of the coil block
+	Inductance float64 // H, NaN when no method applies to the form
+
+	Moment         Vec     // A·m², m = I·ΣA along the axis (a pair: sum of both, 0 when opposing)
+	MomentMeanArea float64 // A·m², N·I·π·R_mean² per coil, the cross-check
+
+	Temperature float64 // K, steady winding temperature
+	Runaway     bool    // no steady temperature below the search bound exists
+	ColdCurrent float64 // A, current at 20 °C resistance (voltage drive: the moment lost to heating shows here)
+
+	FieldCentre Vec // T, field of this coil block at the origin
+}
+
+// ProbeResult is the field at one probe, all coils summed.
+type ProbeResult struct {
+	Name string
+	At   Vec
+	B    Vec
+}
+
+// LimitResult is one requirement checked.
+type LimitResult struct {
+	Limit    Limit
+	Computed float64 // SI
+	Pass     bool
+}
+
+// Results is the evaluation of a whole design.
+type Results struct {
+	Coils       []CoilResult
+	FieldCentre Vec // T, all coils at the origin
+	Moment      Vec // A·m², total
+	Torque      Vec // N·m, m × B_background with m as designed
+	TorqueMax   float64
+	// TorqueDesign is |τ| at Conditions.DesignAngle between m and B.
+	TorqueDesign float64
+	Probes       []ProbeResult
+	Limits       []LimitResult
+}
