@@ -1,0 +1,167 @@
+// Package fonts holds the typefaces the memo is set in, embedded in the
+// binary so that a memo never depends on what happens to be installed on
+// the machine that builds it.
+//
+// The family is DejaVu (Sans, Sans Bold, Sans Oblique, Sans Bold Oblique,
+// Sans Mono, Sans Mono Bold and Serif Italic). It was chosen for its glyph
+// coverage: an engineering memo needs Greek letters (α … ω, Φ, Ω), the
+// micro sign µ, the degree sign °, superscript digits ² and ³, the middle
+// dot ·, ≤, ≥, ≈, ±, √, ×, −, the arrows, and the check and cross marks,
+// and DejaVu has all of them in every weight we use, with tabular digits so
+// that columns of numbers line up.
+//
+// The same bytes feed two consumers: the PDF writer embeds them (as subsets)
+// and gonum/plot measures and draws figure text with a font.Collection built
+// from them, so a plot's layout is computed with exactly the metrics of the
+// glyphs that end up in the file.
+package fonts
+
+import (
+	"fmt"
+	"sync"
+
+	"github.com/go-fonts/dejavu/dejavusans"
+	"github.com/go-fonts/dejavu/dejavusansbold"
+	"github.com/go-fonts/dejavu/dejavusansboldoblique"
+	"github.com/go-fonts/dejavu/dejavusansmono"
+	"github.com/go-fonts/dejavu/dejavusansmonobold"
+	"github.com/go-fonts/dejavu/dejavusansoblique"
+	"github.com/go-fonts/dejavu/dejavuserifitalic"
+	stdfont "golang.org/x/image/font"
+	"golang.org/x/image/font/opentype"
+
+	"gonum.org/v1/plot/font"
+	"gonum.org/v1/plot/text"
+)
+
+// Typeface is the gonum/plot typeface name of the embedded family.
+const Typeface font.Typeface = "DejaVu"
+
+// Variants of the family in the plot collection.
+const (
+	Sans  font.Variant = "Sans"
+	Mono  font.Variant = "Mono"
+	Serif font.Variant = "Serif"
+)
+
+// Style is one embedded font file.
+type Style struct {
+	// Family and Style are the names under which the PDF writer registers
+	// the font ("sans" with "", "B", "I", "BI"; "mono" with "", "B";
+	// "serif" with "I").
+	Family string
+	Style  string
+	// Font is the gonum/plot descriptor (size zero).
+	Font font.Font
+	// TTF is the TrueType file.
+	TTF []byte
+}
+
+// All lists every embedded font, in a fixed order.
+func All() []Style {
+	return []Style{
+		{"sans", "", font.Font{Typeface: Typeface, Variant: Sans}, dejavusans.TTF},
+		{"sans", "B", font.Font{Typeface: Typeface, Variant: Sans, Weight: stdfont.WeightBold}, dejavusansbold.TTF},
+		{"sans", "I", font.Font{Typeface: Typeface, Variant: Sans, Style: stdfont.StyleItalic}, dejavusansoblique.TTF},
+		{"sans", "BI", font.Font{Typeface: Typeface, Variant: Sans, Weight: stdfont.WeightBold, Style: stdfont.StyleItalic}, dejavusansboldoblique.TTF},
+		{"mono", "", font.Font{Typeface: Typeface, Variant: Mono}, dejavusansmono.TTF},
+		{"mono", "B", font.Font{Typeface: Typeface, Variant: Mono, Weight: stdfont.WeightBold}, dejavusansmonobold.TTF},
+		{"serif", "I", font.Font{Typeface: Typeface, Variant: Serif, Style: stdfont.StyleItalic}, dejavuserifitalic.TTF},
+	}
+}
+
+// Lookup returns the embedded font for a PDF family and style, or nil.
+func Lookup(family, style string) *Style {
+	for _, s := range All() {
+		if s.Family == family && s.Style == style {
+			return &s
+		}
+	}
+	return nil
+}
+
+// ForFace maps a gonum/plot font descriptor to the PDF family and style
+// that renders it. Any typeface maps onto the embedded family: a variant
+// of "Mono" goes to the mono face, "Serif" italic to the serif italic, and
+// everything else to the sans faces with matching weight and slant.
+func ForFace(f font.Font) (family, style string) {
+	bold := f.Weight >= stdfont.WeightSemiBold
+	slanted := f.Style == stdfont.StyleItalic || f.Style == stdfont.StyleOblique
+	switch f.Variant {
+	case Mono:
+		if bold {
+			return "mono", "B"
+		}
+		return "mono", ""
+	case Serif:
+		if slanted {
+			return "serif", "I"
+		}
+	}
+	style = ""
+	if bold {
+		style += "B"
+	}
+	if slanted {
+		style += "I"
+	}
+	return "sans", style
+}
+
+var (
+	once  sync.Once
+	coll  font.Collection
+	cache *font.Cache
+	err   error
+)
+
+func load() {
+	for _, s := range All() {
+		var f *opentype.Font
+		f, err = opentype.Parse(s.TTF)
+		if err != nil {
+			err = fmt.Errorf("fonts: parse %s %s: %w", s.Family, s.Style, err)
+			return
+		}
+		coll = append(coll, font.Face{Font: s.Font, Face: f})
+	}
+	coll = coll[:len(coll):len(coll)]
+	cache = font.NewCache(coll)
+}
+
+// Collection returns the embedded family as a gonum/plot font collection.
+// The first face is DejaVu Sans, which the cache uses as its default.
+func Collection() font.Collection {
+	once.Do(load)
+	if err != nil {
+		panic(err)
+	}
+	return coll
+}
+
+// Cache returns a gonum/plot font cache holding only the embedded faces.
+func Cache() *font.Cache {
+	once.Do(load)
+	if err != nil {
+		panic(err)
+	}
+	return cache
+}
+
+// Handler returns a plain-text handler for gonum/plot text styles that
+// measures with the embedded faces.
+func Handler() text.Handler {
+	return text.Plain{Fonts: Cache()}
+}
+
+// Face returns a sized plot font of the embedded family.
+func Face(v font.Variant, bold, italic bool, size font.Length) font.Font {
+	f := font.Font{Typeface: Typeface, Variant: v, Size: size}
+	if bold {
+		f.Weight = stdfont.WeightBold
+	}
+	if italic {
+		f.Style = stdfont.StyleItalic
+	}
+	return f
+}
