@@ -18,6 +18,11 @@ type Winding struct {
 	FillFactor    float64 // conductor area / winding cross-section (NaN for thin)
 	SurfaceArea   float64 // m², area shedding heat (see thermal model)
 	Mass          float64 // kg, conductor only, per coil
+
+	// Overfull is set when the turns do not fit in the length or radial
+	// build given; Problem then says why (see LayOut, CheckWinding).
+	Overfull bool
+	Problem  string
 }
 
 // CoilResult is every figure computed for one coil block.
@@ -25,14 +30,14 @@ type CoilResult struct {
 	Name    string
 	Winding Winding
 
-	R20      float64 // Ω at 20 °C, whole coil block (both coils of a pair in series)
-	RHot     float64 // Ω at the steady winding temperature
-	Current  float64 // A at the steady state
-	Voltage  float64 // V across the coil block at the steady state
-	Power    float64 // W dissipated at the steady state (× duty for the average)
-	Density  float64 // A/m², current density in the conductor
-	Mass     float64 // kg, conductor of the coil block
-	Length   float64 // m, wire length of the coil block
+	R20        float64 // Ω at 20 °C, whole coil block (both coils of a pair in series)
+	RHot       float64 // Ω at the steady winding temperature
+	Current    float64 // A at the steady state
+	Voltage    float64 // V across the coil block at the steady state
+	Power      float64 // W dissipated at the steady state (× duty for the average)
+	Density    float64 // A/m², current density in the conductor
+	Mass       float64 // kg, conductor of the coil block
+	Length     float64 // m, wire length of the coil block
 	Inductance float64 // H, NaN when no method applies to the form
 
 	Moment         Vec     // A·m², m = I·ΣA along the axis (a pair: sum of both, 0 when opposing)

@@ -1,0 +1,192 @@
+package calc
+
+import (
+	"errors"
+	"fmt"
+	"math"
+)
+
+// LayOut places every turn of one coil (one coil of a pair) and derives the
+// winding's geometry. Three cases, by the coil's dimensions:
+//
+// Thin coil (Length == 0 and RadialBuild == 0, and always for a Rectangle):
+// all N turns are taken on the mean diameter. Layers holds one Layer whose Z
+// lists N coincident turns (all z = 0), so that every entry of every Layer is
+// exactly one turn and field sums need no weights; TurnsPerLayer and
+// LayerCount are 1 as for a single filament bundle. For a Rectangle the
+// Layer's Radius is half the Width (the conductor's distance from the axis
+// along the width direction).
+//
+// Single-layer coil (Length > 0, RadialBuild == 0): N turns evenly spaced over
+// Length at the mean radius, pitch p = Length/N, the first and last turn
+// p/2 inside the ends. TurnsPerLayer is N. If p is less than the wire's
+// overall diameter the winding cannot be made: Overfull is set and Problem
+// says why.
+//
+// Multilayer coil (RadialBuild > 0): turns touch along the axis, so the turns
+// per layer are tpl = ⌊Length/d_outer⌋ (at least 1; Length == 0 is a flat
+// pancake, one turn per layer), layers = ⌈N/tpl⌉, layer k (from 0) has its
+// wire centres at radius r_k = r_in + d_outer/2 + k·d_outer, with r_in half
+// the InnerDiameter when given, else the mean radius less half the
+// RadialBuild. Every layer is centred on z = 0 and the last may be partial.
+// If the layers need more depth than RadialBuild the winding is Overfull.
+//
+// When the overall diameter is not given (Wire.Outer ≤ 0) the bare diameter
+// stands in for it.
+//
+// Derived quantities, each over the turns as laid out: WireLength = Σ 2π r_i
+// (Rectangle: N × 2(W + H)), MeanTurn = WireLength/N, AreaSum = Σ π r_i²
+// (Rectangle: N·W·H), FillFactor = N (π d_bare²/4) / (winding cross-section:
+// Length × d_outer for one layer, Length × RadialBuild for several; NaN for a
+// thin coil), Mass = density × π d_bare²/4 × WireLength.
+//
+// SurfaceArea is the area assumed to shed heat (the thermal model's A):
+// a thin coil is a torus whose tube is the round bundle of N wires
+// hexagonally packed, d_bundle = d_outer √(N/0.9069) (0.9069 = π/(2√3), the
+// densest packing), so A = π d_bundle × MeanTurn (Rectangle likewise along
+// its perimeter); a single-layer coil sheds heat from its outer cylinder
+// only, A = π D_out Length with D_out = mean diameter + d_outer (the bore
+// side sits on the former); a multilayer coil from its outer cylinder and
+// both end annuli, A = π D_out L + 2 π (R_out² − R_in²), R_out = R_in +
+// RadialBuild.
+func LayOut(c Coil) Winding {
+	n := c.Turns
+	if n < 0 {
+		n = 0
+	}
+	bare := c.Wire.Bare
+	outer := c.Wire.Outer
+	if !(outer > 0) {
+		outer = bare
+	}
+	rm := c.MeanDiameter / 2
+	cond := ConductorArea(bare)
+	dens := c.Wire.Material.Density
+	var w Winding
+
+	thin := c.Form == Rectangle || (c.Length <= 0 && c.RadialBuild <= 0)
+	switch {
+	case thin:
+		w.Thin = true
+		w.TurnsPerLayer, w.LayerCount = 1, 1
+		r := rm
+		turn := 2 * math.Pi * rm
+		area := math.Pi * rm * rm
+		if c.Form == Rectangle {
+			r = c.Width / 2
+			turn = 2 * (c.Width + c.Height)
+			area = c.Width * c.Height
+		}
+		w.Layers = []Layer{{Radius: r, Z: make([]float64, n)}}
+		w.MeanTurn = turn
+		w.WireLength = float64(n) * turn
+		w.AreaSum = float64(n) * area
+		w.FillFactor = math.NaN()
+		w.SurfaceArea = math.Pi * BundleDiameter(outer, n) * turn
+	case c.RadialBuild <= 0: // single layer
+		pitch := c.Length / float64(max(n, 1))
+		z := make([]float64, n)
+		for i := range z {
+			z[i] = -c.Length/2 + pitch*(float64(i)+0.5)
+		}
+		w.Layers = []Layer{{Radius: rm, Z: z}}
+		w.TurnsPerLayer, w.LayerCount = n, 1
+		if n > 0 && pitch < outer*(1-1e-9) {
+			w.Overfull = true
+			w.Problem = fmt.Sprintf("%d turns of %.4g mm wire need %.4g mm of length, more than the %.4g mm given",
+				n, outer*1e3, float64(n)*outer*1e3, c.Length*1e3)
+		}
+		w.MeanTurn = 2 * math.Pi * rm
+		w.WireLength = float64(n) * w.MeanTurn
+		w.AreaSum = float64(n) * math.Pi * rm * rm
+		w.FillFactor = float64(n) * cond / (c.Length * outer)
+		w.SurfaceArea = math.Pi * (2*rm + outer) * c.Length
+	default: // multilayer
+		rin := rm - c.RadialBuild/2
+		if c.InnerDiameter > 0 {
+			rin = c.InnerDiameter / 2
+		}
+		length := c.Length
+		tpl := 1
+		if outer > 0 && length > 0 {
+			tpl = int(math.Floor(length/outer + 1e-9))
+		}
+		if tpl < 1 {
+			tpl = 1
+			if length > 0 {
+				w.Overfull = true
+				w.Problem = fmt.Sprintf("winding length %.4g mm is shorter than one wire (%.4g mm)", length*1e3, outer*1e3)
+			}
+		}
+		if length <= 0 {
+			length = outer // flat pancake: one wire wide
+		}
+		layers := (n + tpl - 1) / tpl
+		w.TurnsPerLayer, w.LayerCount = tpl, layers
+		w.Layers = make([]Layer, layers)
+		left := n
+		var wl, as float64
+		for k := range w.Layers {
+			nk := min(tpl, left)
+			left -= nk
+			r := rin + outer/2 + float64(k)*outer
+			z := make([]float64, nk)
+			for j := range z {
+				z[j] = (float64(j) - float64(nk-1)/2) * outer
+			}
+			w.Layers[k] = Layer{Radius: r, Z: z}
+			wl += float64(nk) * 2 * math.Pi * r
+			as += float64(nk) * math.Pi * r * r
+		}
+		if float64(layers)*outer > c.RadialBuild*(1+1e-9) && !w.Overfull {
+			w.Overfull = true
+			w.Problem = fmt.Sprintf("%d turns at %d per layer need %d layers of %.4g mm wire = %.4g mm, more than the radial build of %.4g mm",
+				n, tpl, layers, outer*1e3, float64(layers)*outer*1e3, c.RadialBuild*1e3)
+		}
+		w.WireLength = wl
+		w.MeanTurn = 2 * math.Pi * rm
+		if n > 0 {
+			w.MeanTurn = wl / float64(n)
+		}
+		w.AreaSum = as
+		w.FillFactor = float64(n) * cond / (length * c.RadialBuild)
+		rout := rin + c.RadialBuild
+		w.SurfaceArea = math.Pi*2*rout*length + 2*math.Pi*(rout*rout-rin*rin)
+	}
+	w.Mass = dens * cond * w.WireLength
+	return w
+}
+
+// BundleDiameter returns the diameter of a round bundle of n wires of overall
+// diameter d packed hexagonally: d_bundle = d √(n / 0.9069), the bundle's
+// area being the wires' total area over the densest-packing fraction
+// π/(2√3) ≈ 0.9069. One wire is its own bundle (d).
+func BundleDiameter(d float64, n int) float64 {
+	if n <= 1 {
+		return d
+	}
+	return d * math.Sqrt(float64(n)/hexPacking)
+}
+
+// ErrOverfull is wrapped by CheckWinding when the turns do not fit.
+var ErrOverfull = errors.New("winding overfull")
+
+// CheckWinding lays out the coil and returns nil when its turns fit in the
+// space given, or an error wrapping ErrOverfull that says by how much they
+// do not, for the spec reader to report against the coil block.
+func CheckWinding(c Coil) error {
+	w := LayOut(c)
+	if w.Overfull {
+		return fmt.Errorf("%w: %s", ErrOverfull, w.Problem)
+	}
+	return nil
+}
+
+// TurnCount returns the number of turns laid out in w.
+func (w Winding) TurnCount() int {
+	n := 0
+	for _, l := range w.Layers {
+		n += len(l.Z)
+	}
+	return n
+}
