@@ -48,6 +48,14 @@ type CoilResult struct {
 	ColdCurrent float64 // A, current at 20 °C resistance (voltage drive: the moment lost to heating shows here)
 
 	FieldCentre Vec // T, field of this coil block at the origin
+
+	PowerOn          float64 // W while energised (Power = duty × PowerOn)
+	Duty             float64 // 0..1 as used (1 when not given)
+	InsulationMargin float64 // K, InsulationClass − Temperature (NaN when no class given or runaway)
+	TimeConstant     float64 // s, electrical L/R at the hot resistance
+	Energy           float64 // J, stored magnetic energy L I²/2
+	ThermalTau       float64 // s, time constant of the warm-up (linearised)
+	DipoleRange      float64 // m, on-axis distance beyond which the dipole field is within 1 % of the exact field
 }
 
 // ProbeResult is the field at one probe, all coils summed.

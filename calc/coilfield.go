@@ -1,0 +1,103 @@
+package calc
+
+import "math"
+
+// CoilField returns the field, T, at the global point p of one coil block
+// (a Pair: both its coils) with its winding w laid out by LayOut and current
+// I in every turn. The point is taken into the coil's frame (CoilFrame of
+// its Axis, origin at its Centre), the field of every turn filament is
+// summed there with LoopField (superposition; coincident turns of a thin
+// coil are counted once and multiplied), and the local (Bρ, Bz) are turned
+// back into global components: B = Bz U + Bρ ρ̂.
+//
+// A Pair's coils sit at Centre ∓ (Spacing/2) U; when Opposing, the second
+// (at +Spacing/2) carries the current reversed. A Rectangle takes all its
+// turns as one thin rectangle Width × Height (RectangleField × N).
+func CoilField(c Coil, w Winding, I float64, p Vec) Vec {
+	if I == 0 {
+		return Vec{}
+	}
+	if math.IsNaN(I) {
+		return nanVec()
+	}
+	fr := CoilFrame(c.Axis)
+	if c.Form == Rectangle {
+		return RectangleField(fr, c.Centre, c.Width, c.Height, I*float64(w.TurnCount()), p)
+	}
+	if c.Form == Pair {
+		s := fr.U.Scale(c.Spacing / 2)
+		I2 := I
+		if c.Opposing {
+			I2 = -I
+		}
+		return windingField(fr, c.Centre.Sub(s), w, I, p).Add(windingField(fr, c.Centre.Add(s), w, I2, p))
+	}
+	return windingField(fr, c.Centre, w, I, p)
+}
+
+// windingField sums the turn filaments of w centred on centre in frame fr.
+func windingField(fr Frame, centre Vec, w Winding, I float64, p Vec) Vec {
+	r := p.Sub(centre)
+	z := r.Dot(fr.U)
+	radial := r.Sub(fr.U.Scale(z))
+	rho := radial.Norm()
+	var br, bz float64
+	for _, l := range w.Layers {
+		zs := l.Z
+		for i := 0; i < len(zs); {
+			j := i + 1
+			for j < len(zs) && zs[j] == zs[i] {
+				j++
+			}
+			dr, dz := LoopField(l.Radius, I, rho, z-zs[i])
+			k := float64(j - i)
+			br += k * dr
+			bz += k * dz
+			i = j
+		}
+	}
+	B := fr.U.Scale(bz)
+	if rho > 0 {
+		B = B.Add(radial.Scale(br / rho))
+	}
+	return B
+}
+
+// FieldModel is a design made ready for many field evaluations: every
+// coil's winding laid out and its steady operating current found once.
+type FieldModel struct {
+	Coils    []Coil
+	Windings []Winding
+	Currents []float64 // A, the steady operating current of each coil block
+}
+
+// NewFieldModel lays out every coil of d and finds its steady operating
+// current (OperatingPoint: the imposed current, or for voltage drive the
+// voltage over the hot resistance). The field is that of the energised
+// coil; the duty cycle does not reduce it.
+func NewFieldModel(d Design) *FieldModel {
+	f := &FieldModel{}
+	for _, c := range d.Coils {
+		w := LayOut(c)
+		op := OperatingPoint(c, w, d.Conditions)
+		f.Coils = append(f.Coils, c)
+		f.Windings = append(f.Windings, w)
+		f.Currents = append(f.Currents, op.Current)
+	}
+	return f
+}
+
+// At returns the field, T, of all coils at the global point p (the
+// background field is not included).
+func (f *FieldModel) At(p Vec) Vec {
+	var B Vec
+	for i, c := range f.Coils {
+		B = B.Add(CoilField(c, f.Windings[i], f.Currents[i], p))
+	}
+	return B
+}
+
+// FieldAt returns the field, T, of all coils of d at the global point p,
+// each at its steady operating current (see NewFieldModel; for many points
+// build the model once).
+func FieldAt(d Design, p Vec) Vec { return NewFieldModel(d).At(p) }

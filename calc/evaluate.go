@@ -1,0 +1,90 @@
+package calc
+
+import "math"
+
+// DipoleTolerance is the relative agreement of dipole and exact field that
+// defines CoilResult.DipoleRange.
+const DipoleTolerance = 0.01
+
+// Evaluate computes every result of design d. For each coil block: the
+// winding (LayOut), the steady operating point (OperatingPoint: resistance,
+// current, voltage, power, temperature, runaway), current density, mass and
+// wire length of the block, inductance (CoilInductance), moment
+// (MagneticMoment) and its mean-area cross-check, field at the origin, L/R,
+// stored energy, thermal time constant, insulation margin and dipole range.
+// Then the totals: field at the origin, total moment, torque in the
+// background field (τ = m × B; maximum |m||B|; at Conditions.DesignAngle,
+// read as π/2 when 0), the field at every probe, and every limit checked
+// (see CheckLimits). Unknown quantities are NaN. Evaluate does not panic on
+// degenerate input (no coils, no turns, no current, no wire): it returns NaN
+// or zero as the case is.
+func Evaluate(d Design) Results {
+	var res Results
+	fm := &FieldModel{}
+	for _, c := range d.Coils {
+		cr := evaluateCoil(c, d.Conditions)
+		res.Coils = append(res.Coils, cr)
+		fm.Coils = append(fm.Coils, c)
+		fm.Windings = append(fm.Windings, cr.Winding)
+		fm.Currents = append(fm.Currents, cr.Current)
+		res.FieldCentre = res.FieldCentre.Add(cr.FieldCentre)
+		res.Moment = res.Moment.Add(cr.Moment)
+	}
+	bg := d.Conditions.BackgroundField
+	res.Torque = Torque(res.Moment, bg)
+	res.TorqueMax = TorqueMax(res.Moment, bg)
+	angle := d.Conditions.DesignAngle
+	if angle == 0 {
+		angle = math.Pi / 2
+	}
+	res.TorqueDesign = TorqueAtAngle(res.Moment.Norm(), bg.Norm(), angle)
+	for _, p := range d.Probes {
+		res.Probes = append(res.Probes, ProbeResult{Name: p.Name, At: p.At, B: fm.At(p.At)})
+	}
+	res.Limits = CheckLimits(d.Limits, res)
+	return res
+}
+
+// evaluateCoil computes the CoilResult of one coil block.
+func evaluateCoil(c Coil, cond Conditions) CoilResult {
+	w := LayOut(c)
+	op := OperatingPoint(c, w, cond)
+	n := float64(SeriesCoils(c))
+	cr := CoilResult{
+		Name:        c.Name,
+		Winding:     w,
+		R20:         op.R20,
+		RHot:        op.RHot,
+		Current:     op.Current,
+		Voltage:     op.Voltage,
+		Power:       op.Power,
+		PowerOn:     op.PowerOn,
+		Duty:        op.Thermal.Duty,
+		Mass:        w.Mass * n,
+		Length:      w.WireLength * n,
+		Temperature: op.Temperature,
+		Runaway:     op.Runaway,
+		ColdCurrent: op.ColdCurrent,
+	}
+	area := ConductorArea(c.Wire.Bare)
+	cr.Density = math.NaN()
+	if area > 0 {
+		cr.Density = op.Current / area
+	}
+	cr.Inductance = CoilInductance(c, w)
+	cr.Moment = MagneticMoment(c, w, op.Current)
+	cr.MomentMeanArea = MomentMeanArea(c, op.Current)
+	cr.FieldCentre = CoilField(c, w, op.Current, Vec{})
+	cr.TimeConstant = cr.Inductance / op.RHot
+	if op.RHot == 0 {
+		cr.TimeConstant = math.NaN()
+	}
+	cr.Energy = cr.Inductance * op.Current * op.Current / 2
+	cr.ThermalTau = op.Thermal.ThermalTimeConstant(cr.Mass*c.Wire.Material.SpecificHeat, op.Temperature)
+	cr.InsulationMargin = math.NaN()
+	if c.InsulationClass > 0 {
+		cr.InsulationMargin = c.InsulationClass - op.Temperature
+	}
+	cr.DipoleRange = DipoleRange(c, w, op.Current, DipoleTolerance)
+	return cr
+}
