@@ -27,10 +27,13 @@ type Vec [3]float64
 
 // Wire is a round conductor.
 type Wire struct {
-	Gauge    int     // AWG number, or NoGauge when a bare diameter was given
-	Bare     float64 // bare conductor diameter, m
-	Outer    float64 // overall diameter over insulation, m
-	Material Material
+	Gauge int     // AWG number, or NoGauge when a bare diameter was given
+	Bare  float64 // bare conductor diameter, m
+	Outer float64 // overall diameter over insulation, m
+	// OuterEstimated is set when the spec gave no overall diameter and the
+	// reader filled Outer with HeavyBuildOuter's estimate.
+	OuterEstimated bool
+	Material       Material
 }
 
 // NoGauge marks a wire given by diameter rather than AWG.
