@@ -139,7 +139,7 @@ var LimitQuantities = map[string]LimitQuantity{
 	"resistance":      {"ohm", "largest hot coil resistance"},
 	"mass":            {"kg", "total conductor mass"},
 	"wire-length":     {"m", "longest coil wire length"},
-	"current-density": {"A/mm2", "largest current density in a conductor"},
+	"current-density": {"A/m2", "largest current density in a conductor"},
 	"inductance":      {"H", "largest coil self-inductance"},
 	"torque":          {"N m", "largest torque in the background field"},
 }

@@ -135,8 +135,9 @@ func (d Dim) String() string {
 	return d.Symbol()
 }
 
-// example returns a unit to suggest when a value of dimension d is wanted.
-func (d Dim) example() string {
+// Example returns a unit to suggest when a value of dimension d is wanted:
+// "mm" for a length, "uT" for a flux density.
+func (d Dim) Example() string {
 	if i, ok := dimNames[d]; ok {
 		return i.example
 	}

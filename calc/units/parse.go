@@ -109,7 +109,7 @@ func ParseAs(s string, want Dim) (Quantity, error) {
 	}
 	t := strings.TrimSpace(s)
 	if _, unit, _ := Split(s); unit == "" {
-		return q, fmt.Errorf("no unit given: %s (expected %s such as %s)", t, withArticle(want.Name()), want.example())
+		return q, fmt.Errorf("no unit given: %s (expected %s such as %s)", t, withArticle(want.Name()), want.Example())
 	}
 	if _, named := dimNames[q.Dim]; !named {
 		return q, fmt.Errorf("%s has dimension %s; want %s", t, q.Dim.Symbol(), Describe(want))
