@@ -84,7 +84,7 @@ func Parse(s string) (Quantity, error) {
 	if err != nil {
 		return Quantity{}, err
 	}
-	si := v*u.factor + u.offset
+	si := u.size.apply(v) + u.offset
 	if math.IsInf(si, 0) || math.IsNaN(si) {
 		return Quantity{}, fmt.Errorf("%s: value out of range", strings.TrimSpace(s))
 	}
@@ -153,7 +153,7 @@ func In(si float64, unit string) (float64, error) {
 	if err != nil {
 		return 0, err
 	}
-	return (si - u.offset) / u.factor, nil
+	return u.size.invert(si - u.offset), nil
 }
 
 // Split separates the leading number of s from the unit that follows it:
@@ -258,11 +258,15 @@ func (e exps) dim() (Dim, bool) {
 	return Dim{M: d[iM], Kg: d[iKg], S: d[iS], A: d[iA], K: d[iK], Rad: d[iRad]}, true
 }
 
+// unitDef is one unit symbol: its size is factor × 10^pow10 SI units.
+// Keeping the power of ten apart lets 20 uT become 20/1e6 = 2e-5 exactly
+// rounded rather than 20 × 1e-6 = 1.9999999999999998e-5.
 type unitDef struct {
 	factor float64
+	pow10  int
 	dim    exps
 	prefix bool    // accepts SI prefixes
-	offset float64 // affine units (degC, degF) standing alone: SI = v·factor + offset
+	offset float64 // affine units (degC, degF) standing alone: SI = v·size + offset
 }
 
 var (
@@ -288,55 +292,56 @@ var (
 // is 25.4 mm exactly (international yard and pound agreement, 1959), the
 // gauss is 1e-4 T, 0 °C is 273.15 K and a Fahrenheit degree is 5/9 K.
 var unitTable = map[string]unitDef{
-	"m":      {1, eLen, true, 0},
-	"g":      {1e-3, eMass, true, 0},
-	"s":      {1, eTime, true, 0},
-	"min":    {60, eTime, false, 0},
-	"A":      {1, eCur, true, 0},
-	"V":      {1, eVolt, true, 0},
-	"W":      {1, eWatt, true, 0},
-	"\u03a9": {1, eOhm, true, 0}, // Greek capital omega
-	"\u2126": {1, eOhm, true, 0}, // ohm sign
-	"ohm":    {1, eOhm, true, 0},
-	"T":      {1, eTesla, true, 0},
-	"G":      {1e-4, eTesla, true, 0},
-	"gauss":  {1e-4, eTesla, true, 0},
-	"H":      {1, eHenry, true, 0},
-	"Hz":     {1, eHertz, true, 0},
-	"N":      {1, eNewt, true, 0},
-	"J":      {1, eJoule, true, 0},
-	"Pa":     {1, ePa, true, 0},
-	"Wb":     {1, eWeber, true, 0},
-	"K":      {1, eTemp, true, 0},
-	"rad":    {1, eAngle, true, 0},
-	"deg":    {math.Pi / 180, eAngle, false, 0},
-	"°":      {math.Pi / 180, eAngle, false, 0},
-	"degC":   {1, eTemp, false, 273.15},
-	"°C":     {1, eTemp, false, 273.15},
-	"℃":      {1, eTemp, false, 273.15},
-	"degF":   {5.0 / 9.0, eTemp, false, 273.15 - 32*5.0/9.0},
-	"°F":     {5.0 / 9.0, eTemp, false, 273.15 - 32*5.0/9.0},
-	"℉":      {5.0 / 9.0, eTemp, false, 273.15 - 32*5.0/9.0},
-	"in":     {0.0254, eLen, false, 0},
-	"inch":   {0.0254, eLen, false, 0},
-	"mil":    {25.4e-6, eLen, false, 0},
-	"thou":   {25.4e-6, eLen, false, 0},
-	"ft":     {0.3048, eLen, false, 0},
-	"%":      {0.01, exps{}, false, 0},
-	"ppm":    {1e-6, exps{}, false, 0},
+	"m":      {1, 0, eLen, true, 0},
+	"g":      {1, -3, eMass, true, 0},
+	"s":      {1, 0, eTime, true, 0},
+	"min":    {60, 0, eTime, false, 0},
+	"A":      {1, 0, eCur, true, 0},
+	"V":      {1, 0, eVolt, true, 0},
+	"W":      {1, 0, eWatt, true, 0},
+	"\u03a9": {1, 0, eOhm, true, 0}, // Greek capital omega
+	"\u2126": {1, 0, eOhm, true, 0}, // ohm sign
+	"ohm":    {1, 0, eOhm, true, 0},
+	"T":      {1, 0, eTesla, true, 0},
+	"G":      {1, -4, eTesla, true, 0},
+	"gauss":  {1, -4, eTesla, true, 0},
+	"H":      {1, 0, eHenry, true, 0},
+	"Hz":     {1, 0, eHertz, true, 0},
+	"N":      {1, 0, eNewt, true, 0},
+	"J":      {1, 0, eJoule, true, 0},
+	"Pa":     {1, 0, ePa, true, 0},
+	"Wb":     {1, 0, eWeber, true, 0},
+	"K":      {1, 0, eTemp, true, 0},
+	"rad":    {1, 0, eAngle, true, 0},
+	"deg":    {math.Pi / 180, 0, eAngle, false, 0},
+	"°":      {math.Pi / 180, 0, eAngle, false, 0},
+	"degC":   {1, 0, eTemp, false, 273.15},
+	"°C":     {1, 0, eTemp, false, 273.15},
+	"℃":      {1, 0, eTemp, false, 273.15},
+	"degF":   {5.0 / 9.0, 0, eTemp, false, 273.15 - 32*5.0/9.0},
+	"°F":     {5.0 / 9.0, 0, eTemp, false, 273.15 - 32*5.0/9.0},
+	"℉":      {5.0 / 9.0, 0, eTemp, false, 273.15 - 32*5.0/9.0},
+	"in":     {254, -4, eLen, false, 0},
+	"inch":   {254, -4, eLen, false, 0},
+	"mil":    {254, -7, eLen, false, 0},
+	"thou":   {254, -7, eLen, false, 0},
+	"ft":     {3048, -4, eLen, false, 0},
+	"%":      {1, -2, exps{}, false, 0},
+	"ppm":    {1, -6, exps{}, false, 0},
 }
 
-var prefixes = map[rune]float64{
-	'p':      1e-12,
-	'n':      1e-9,
-	'u':      1e-6,
-	'\u00b5': 1e-6, // micro sign
-	'\u03bc': 1e-6, // Greek small mu
-	'm':      1e-3,
-	'c':      1e-2,
-	'k':      1e3,
-	'M':      1e6,
-	'G':      1e9,
+// prefixes gives each SI prefix's power of ten.
+var prefixes = map[rune]int{
+	'p':      -12,
+	'n':      -9,
+	'u':      -6,
+	'\u00b5': -6, // micro sign
+	'\u03bc': -6, // Greek small mu
+	'm':      -3,
+	'c':      -2,
+	'k':      3,
+	'M':      6,
+	'G':      9,
 }
 
 // lookupAtom resolves one unit symbol, with or without an SI prefix.
@@ -347,7 +352,7 @@ func lookupAtom(name string) (unitDef, bool) {
 	r, size := utf8.DecodeRuneInString(name)
 	if p, ok := prefixes[r]; ok && size < len(name) {
 		if d, ok := unitTable[name[size:]]; ok && d.prefix {
-			d.factor *= p
+			d.pow10 += p
 			d.prefix = false
 			return d, true
 		}
@@ -374,9 +379,41 @@ func unknownUnit(name string) error {
 	return fmt.Errorf("unknown unit %q", name)
 }
 
-// parsedUnit is a unit expression reduced to a factor (and offset) to SI.
+// size is f × 10^p.
+type size struct {
+	f float64
+	p int
+}
+
+func (a size) mul(b size) size { return size{a.f * b.f, a.p + b.p} }
+func (a size) div(b size) size { return size{a.f / b.f, a.p - b.p} }
+func (a size) pow(n int) size  { return size{math.Pow(a.f, float64(n)), a.p * n} }
+
+// apply returns v in SI: v·f·10^p, dividing by an exact power of ten for
+// negative p so that 120 mm is exactly 0.12 m.
+func (a size) apply(v float64) float64 {
+	v *= a.f
+	if a.p < 0 {
+		return v / math.Pow10(-a.p)
+	}
+	return v * math.Pow10(a.p)
+}
+
+// invert returns the number of units in the SI value si.
+func (a size) invert(si float64) float64 {
+	if a.p < 0 {
+		return si * math.Pow10(-a.p) / a.f
+	}
+	return si / math.Pow10(a.p) / a.f
+}
+
+func (a size) ok() bool {
+	return a.f != 0 && !math.IsInf(a.f, 0) && !math.IsNaN(a.f) && a.p > -300 && a.p < 300
+}
+
+// parsedUnit is a unit expression reduced to a size (and offset) in SI.
 type parsedUnit struct {
-	factor   float64
+	size     size
 	offset   float64
 	dim      Dim
 	absolute bool // a lone temperature unit: values below 0 K are refused
@@ -389,7 +426,7 @@ func parseUnit(unit string) (parsedUnit, error) {
 	}
 	// A temperature unit standing alone reads as an absolute temperature.
 	if d, ok := unitTable[unit]; ok && d.offset != 0 {
-		return parsedUnit{factor: d.factor, offset: d.offset, dim: Temperature, absolute: true}, nil
+		return parsedUnit{size: size{d.factor, d.pow10}, offset: d.offset, dim: Temperature, absolute: true}, nil
 	}
 	p := &unitParser{src: unit, rs: []rune(unit)}
 	f, e, err := p.expr()
@@ -404,11 +441,11 @@ func parseUnit(unit string) (parsedUnit, error) {
 		return parsedUnit{}, err
 	}
 	d, ok := e.dim()
-	if !ok || math.IsInf(f, 0) || f == 0 || math.IsNaN(f) {
+	if !ok || !f.ok() {
 		return parsedUnit{}, fmt.Errorf("unit %q is out of range", unit)
 	}
 	abs := p.atoms == 1 && d == Temperature
-	return parsedUnit{factor: f, dim: d, absolute: abs}, nil
+	return parsedUnit{size: f, dim: d, absolute: abs}, nil
 }
 
 type unitParser struct {
@@ -437,11 +474,11 @@ func (p *unitParser) skipSpace() {
 }
 
 // expr := product { "/" product }
-func (p *unitParser) expr() (float64, exps, error) {
+func (p *unitParser) expr() (size, exps, error) {
 	p.skipSpace()
 	f, e, err := p.product(true)
 	if err != nil {
-		return 0, e, err
+		return size{}, e, err
 	}
 	for {
 		p.skipSpace()
@@ -452,9 +489,9 @@ func (p *unitParser) expr() (float64, exps, error) {
 		p.skipSpace()
 		g, d, err := p.product(false)
 		if err != nil {
-			return 0, e, err
+			return size{}, e, err
 		}
-		f /= g
+		f = f.div(g)
 		for i := range e {
 			e[i] -= d[i]
 		}
@@ -466,20 +503,20 @@ func isSep(r rune) bool {
 }
 
 // product := factor { [sep] factor }, or the literal 1 before a "/".
-func (p *unitParser) product(first bool) (float64, exps, error) {
+func (p *unitParser) product(first bool) (size, exps, error) {
 	var e exps
 	if first && p.peek() == '1' {
 		save := p.pos
 		p.pos++
 		p.skipSpace()
 		if p.peek() == '/' {
-			return 1, e, nil
+			return size{1, 0}, e, nil
 		}
 		p.pos = save
 	}
 	f, e, err := p.factor()
 	if err != nil {
-		return 0, e, err
+		return size{}, e, err
 	}
 	for {
 		save := p.pos
@@ -493,16 +530,16 @@ func (p *unitParser) product(first bool) (float64, exps, error) {
 		r := p.peek()
 		if r == 0 || r == '/' || r == ')' {
 			if sep {
-				return 0, e, p.errorf("nothing after %q", string(p.rs[save:p.pos]))
+				return size{}, e, p.errorf("nothing after %q", string(p.rs[save:p.pos]))
 			}
 			p.pos = save
 			return f, e, nil
 		}
 		g, d, err := p.factor()
 		if err != nil {
-			return 0, e, err
+			return size{}, e, err
 		}
-		f *= g
+		f = f.mul(g)
 		for i := range e {
 			e[i] += d[i]
 		}
@@ -514,25 +551,25 @@ func isUnitLetter(r rune) bool {
 }
 
 // factor := ( "(" expr ")" | atom ) [exponent]
-func (p *unitParser) factor() (float64, exps, error) {
+func (p *unitParser) factor() (size, exps, error) {
 	var e exps
-	var f float64
+	var f size
 	r := p.peek()
 	switch {
 	case r == '(':
 		p.depth++
 		if p.depth > 8 {
-			return 0, e, p.errorf("too many parentheses")
+			return size{}, e, p.errorf("too many parentheses")
 		}
 		p.pos++
 		var err error
 		f, e, err = p.expr()
 		if err != nil {
-			return 0, e, err
+			return size{}, e, err
 		}
 		p.skipSpace()
 		if p.peek() != ')' {
-			return 0, e, p.errorf("missing \")\"")
+			return size{}, e, p.errorf("missing \")\"")
 		}
 		p.pos++
 		p.depth--
@@ -551,22 +588,22 @@ func (p *unitParser) factor() (float64, exps, error) {
 		name := string(p.rs[start:p.pos])
 		d, ok := lookupAtom(name)
 		if !ok {
-			return 0, e, unknownUnit(name)
+			return size{}, e, unknownUnit(name)
 		}
 		p.atoms++
-		f, e = d.factor, d.dim
+		f, e = size{d.factor, d.pow10}, d.dim
 	case r == 0:
-		return 0, e, p.errorf("unit missing")
+		return size{}, e, p.errorf("unit missing")
 	default:
-		return 0, e, p.errorf("unexpected %q", string(r))
+		return size{}, e, p.errorf("unexpected %q", string(r))
 	}
 	n, err := p.exponent()
 	if err != nil {
-		return 0, e, err
+		return size{}, e, err
 	}
 	if n != 1 {
 		p.atoms += 1 // a powered unit is no longer a lone temperature
-		f = math.Pow(f, float64(n))
+		f = f.pow(n)
 		for i := range e {
 			e[i] *= n
 		}

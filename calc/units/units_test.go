@@ -100,6 +100,22 @@ func TestParseKnown(t *testing.T) {
 	}
 }
 
+// Decimal prefixes give the correctly rounded SI value, not one off by an
+// ulp from multiplying by an inexact 1e-6.
+func TestParseExactDecimal(t *testing.T) {
+	cases := map[string]float64{
+		"20 uT": 2e-5, "120 mm": 0.12, "45 µT": 45e-6, "0.321 mm": 0.321e-3,
+		"1.5 in": 0.0381, "20 mil": 0.000508, "0.5 G": 5e-5, "3 mA": 0.003,
+		"4 A/mm2": 4e6, "50 %": 0.5,
+	}
+	for in, want := range cases {
+		q, err := Parse(in)
+		if err != nil || q.Value != want {
+			t.Errorf("Parse(%q) = %v, %v; want exactly %v", in, q.Value, err, want)
+		}
+	}
+}
+
 func TestParseErrors(t *testing.T) {
 	cases := []struct{ in, msg string }{
 		{"", "empty value"},
