@@ -1,0 +1,436 @@
+package spec
+
+import (
+	"fmt"
+	"math"
+	"sort"
+	"strconv"
+	"strings"
+
+	"coilmemo/calc"
+	"coilmemo/calc/units"
+)
+
+// ---- conditions ----
+
+// conditionsBlock reads the conditions block; b has no lines when the spec
+// has none, and then only the defaults are set.
+func (p *parser) conditionsBlock(b *rawBlock) {
+	cond := &p.spec.Design.Conditions
+	*cond = calc.Conditions{
+		Ambient:     defaultAmbientC + zeroCelsius,
+		DesignAngle: math.Pi / 2,
+		Cooling:     calc.Cooling{H: stillAirH, Emissivity: defaultEmissivity},
+	}
+	given := map[string]bool{}
+	vacuum, vacuumLine := false, 0
+	hLine := 0
+	for _, e := range p.keyValues(b, false) {
+		given[e.key] = true
+		si := ""
+		switch e.key {
+		case "ambient":
+			if q, err := units.ParseAs(e.value, units.Temperature); err != nil {
+				p.errf(e.line, "ambient: %v", err)
+			} else {
+				cond.Ambient = q.Value
+				si = q.String()
+			}
+		case "background-field":
+			v, err := parseField(e.value)
+			if err != nil {
+				p.errf(e.line, "background-field: %v", err)
+			} else {
+				cond.BackgroundField = v
+				si = formatVec(v, units.FluxDensity)
+			}
+		case "design-angle":
+			q, err := units.ParseAs(e.value, units.Angle)
+			switch {
+			case err != nil:
+				p.errf(e.line, "design-angle: %v", err)
+			case q.Value < 0 || q.Value > math.Pi*(1+1e-12):
+				p.errf(e.line, "design-angle: %s is outside 0..180 deg", e.value)
+			default:
+				cond.DesignAngle = q.Value
+				si = q.String()
+			}
+		case "cooling":
+			v := strings.ToLower(strings.TrimSpace(e.value))
+			switch {
+			case v == "still-air":
+				cond.Cooling.Vacuum = false
+				si = "still-air (h = " + units.Format(stillAirH, units.HeatTransfer) + ", assumed)"
+			case v == "vacuum":
+				cond.Cooling.Vacuum, cond.Cooling.H = true, 0
+				vacuum, vacuumLine = true, e.line
+				si = "vacuum (radiation only)"
+			case strings.HasPrefix(v, "h") && strings.HasPrefix(strings.TrimSpace(v[1:]), "="):
+				// the inline form: cooling = h = 12 W/m2K
+				if hLine != 0 {
+					p.errf(e.line, "h given twice (first on line %d)", hLine)
+					break
+				}
+				hLine = e.line
+				rest := strings.TrimSpace(strings.TrimSpace(e.value)[1:])
+				si = p.heatTransfer(kv{key: "cooling", value: strings.TrimSpace(rest[1:]), line: e.line}, cond)
+			default:
+				p.errf(e.line, "cooling = %s: want one of still-air, vacuum, h = <value> W/m2K", e.value)
+			}
+		case "h":
+			if hLine != 0 {
+				p.errf(e.line, "h given twice (first on line %d)", hLine)
+				break
+			}
+			hLine = e.line
+			si = p.heatTransfer(e, cond)
+		case "emissivity":
+			q, err := units.ParseAs(e.value, units.Dimensionless)
+			switch {
+			case err != nil:
+				p.errf(e.line, "emissivity: %v", err)
+			case !(q.Value > 0 && q.Value <= 1):
+				p.errf(e.line, "emissivity: %s is outside 0..1 (above 0, at most 1)", e.value)
+			default:
+				cond.Cooling.Emissivity = q.Value
+				si = units.FormatNumber(q.Value)
+			}
+		default:
+			p.unknownKey(e, blockConditions, conditionKeys)
+			continue
+		}
+		p.entry(blockConditions, e, si)
+	}
+	if vacuum && hLine != 0 {
+		p.errf(max(vacuumLine, hLine), "cooling = vacuum takes no convective coefficient h")
+	}
+	if vacuum {
+		cond.Cooling.H, cond.Cooling.HGiven = 0, false
+	}
+	add := func(key, si string) {
+		if !given[key] {
+			p.defaultEntry(blockConditions, key, si, b.fence, "")
+		}
+	}
+	add("ambient", units.Format(cond.Ambient, units.Temperature)+" (20 °C)")
+	add("background-field", "(0, 0, 0) T")
+	add("design-angle", units.Format(cond.DesignAngle, units.Angle)+" (90°)")
+	if !given["cooling"] && hLine == 0 {
+		add("cooling", "still-air (h = "+units.Format(stillAirH, units.HeatTransfer)+", assumed)")
+	}
+	add("emissivity", units.FormatNumber(defaultEmissivity))
+}
+
+func (p *parser) heatTransfer(e kv, cond *calc.Conditions) string {
+	q, err := units.ParseAs(e.value, units.HeatTransfer)
+	switch {
+	case err != nil:
+		p.errf(e.line, "%s: %v", e.key, err)
+	case q.Value <= 0:
+		p.errf(e.line, "%s: h = %s must be greater than zero", e.key, e.value)
+	default:
+		cond.Cooling.H, cond.Cooling.HGiven = q.Value, true
+		return "h = " + q.String()
+	}
+	return ""
+}
+
+// parseField reads a background field: a magnitude along x ("50 uT") or a
+// vector ("(20, 0, 45) uT").
+func parseField(s string) (calc.Vec, error) {
+	if strings.HasPrefix(strings.TrimSpace(s), "(") {
+		return parseVector(s, units.FluxDensity)
+	}
+	q, err := units.ParseAs(s, units.FluxDensity)
+	if err != nil {
+		return calc.Vec{}, err
+	}
+	if q.Value < 0 {
+		return calc.Vec{}, fmt.Errorf("magnitude %s is negative; give a vector such as (-50, 0, 0) uT for a direction", strings.TrimSpace(s))
+	}
+	return calc.Vec{q.Value, 0, 0}, nil
+}
+
+// ---- limits ----
+
+func limitNames() []string {
+	names := make([]string, 0, len(calc.LimitQuantities))
+	for k := range calc.LimitQuantities {
+		names = append(names, k)
+	}
+	sort.Strings(names)
+	return names
+}
+
+var relations = []struct {
+	text string
+	rel  calc.Relation
+}{{"<=", calc.AtMost}, {">=", calc.AtLeast}, {"≤", calc.AtMost}, {"≥", calc.AtLeast}}
+
+func (p *parser) limitsBlock(b *rawBlock) {
+	seen := map[string]int{}
+	for _, l := range b.lines {
+		i, rel, relText := -1, calc.AtLeast, ""
+		for _, r := range relations {
+			if j := strings.Index(l.text, r.text); j >= 0 && (i < 0 || j < i) {
+				i, rel, relText = j, r.rel, r.text
+			}
+		}
+		if i < 0 {
+			if j := strings.IndexAny(l.text, "<>="); j >= 0 {
+				op := l.text[j : j+1]
+				if j+1 < len(l.text) && strings.ContainsRune("<>=", rune(l.text[j+1])) {
+					op = l.text[j : j+2]
+				}
+				p.errf(l.line, "bad relation %q in %q: want <= (at most) or >= (at least)", op, l.text)
+			} else {
+				p.errf(l.line, "malformed limit %q: want <quantity> <= or >= <value with unit>, e.g. moment >= 0.2 A m2", l.text)
+			}
+			continue
+		}
+		name := strings.ToLower(strings.TrimSpace(l.text[:i]))
+		value := strings.TrimSpace(l.text[i+len(relText):])
+		e := kv{key: name, value: value, raw: relText + " " + value, line: l.line}
+		if name == "" {
+			p.errf(l.line, "limit %q names no quantity", l.text)
+			continue
+		}
+		lq, ok := calc.LimitQuantities[name]
+		if !ok {
+			names := limitNames()
+			if s := nearest(name, names); s != "" {
+				p.errf(l.line, "unknown limit quantity %q; did you mean %q?", name, s)
+			} else {
+				p.errf(l.line, "unknown limit quantity %q (known: %s)", name, strings.Join(names, ", "))
+			}
+			continue
+		}
+		key := name + relString(rel)
+		if prev, ok := seen[key]; ok {
+			p.errf(l.line, "duplicate limit %s %s (first given on line %d)", name, relString(rel), prev)
+			continue
+		}
+		seen[key] = l.line
+		si := ""
+		want, err := units.DimOf(lq.Unit)
+		if err != nil {
+			// a unit calc's table gives that this package cannot read
+			p.errf(l.line, "limit %s: internal: unit %q of the quantity is unreadable: %v", name, lq.Unit, err)
+			continue
+		}
+		if value == "" {
+			p.errf(l.line, "limit %s: no value after %s", name, relText)
+		} else if q, err := units.ParseAs(value, want); err != nil {
+			p.errf(l.line, "limit %s: %v", name, err)
+		} else if q.Value < 0 {
+			p.errf(l.line, "limit %s: %s is negative; limits bound magnitudes", name, value)
+		} else {
+			p.spec.Design.Limits = append(p.spec.Design.Limits, calc.Limit{Quantity: name, Relation: rel, Required: q.Value, Line: l.line})
+			si = relString(rel) + " " + q.String()
+		}
+		p.entry(blockLimits, e, si)
+	}
+}
+
+func relString(r calc.Relation) string {
+	if r == calc.AtMost {
+		return "<="
+	}
+	return ">="
+}
+
+// ---- probes ----
+
+func (p *parser) probesBlock(b *rawBlock) {
+	for _, e := range p.keyValues(b, true) {
+		si := ""
+		v, err := parseVector(e.value, units.Length)
+		if err != nil {
+			p.errf(e.line, "probe %s: %v", e.key, err)
+		} else {
+			p.spec.Design.Probes = append(p.spec.Design.Probes, calc.Probe{Name: e.key, At: v})
+			si = formatVec(v, units.Length)
+		}
+		p.entry(blockProbes, e, si)
+	}
+}
+
+// ---- sweep ----
+
+// sweepDims gives the dimension of each coil key a sweep may step.
+var sweepDims = map[string]units.Dim{
+	"mean-diameter": units.Length, "inner-diameter": units.Length, "outer-diameter": units.Length,
+	"length": units.Length, "radial-build": units.Length, "width": units.Length, "height": units.Length,
+	"spacing": units.Length, "wire-outer-diameter": units.Length,
+	"turns": units.Dimensionless, "current": units.Current, "voltage": units.Voltage,
+	"duty": units.Dimensionless,
+}
+
+func sweepKeys() []string {
+	k := make([]string, 0, len(sweepDims))
+	for _, c := range coilKeys {
+		if _, ok := sweepDims[c]; ok {
+			k = append(k, c)
+		}
+	}
+	return k
+}
+
+const maxSweepSteps = 1000
+
+func (p *parser) sweepBlock(b *rawBlock, coils []*coilIn) {
+	var sw *Sweep
+	rejected := false
+	coilName, coilLine := "", 0
+	for _, e := range p.keyValues(b, false) {
+		if e.key == "coil" {
+			coilName, coilLine = e.value, e.line
+			p.entry(blockSweep, e, e.value)
+			continue
+		}
+		dim, ok := sweepDims[e.key]
+		if !ok {
+			isCoilKey := false
+			for _, k := range coilKeys {
+				isCoilKey = isCoilKey || k == e.key
+			}
+			if isCoilKey {
+				p.errf(e.line, "cannot sweep %q: a sweep steps one of %s", e.key, strings.Join(sweepKeys(), ", "))
+			} else {
+				p.unknownKey(e, blockSweep, append(sweepKeys(), "coil"))
+			}
+			continue
+		}
+		if sw != nil {
+			p.errf(e.line, "a sweep steps one parameter; %q is a second one (the first, %q, is on line %d)", e.key, sw.Param, sw.Line)
+			continue
+		}
+		s, err := parseRange(e.key, e.value, dim)
+		if err != nil {
+			p.errf(e.line, "sweep %s: %v", e.key, err)
+			p.entry(blockSweep, e, "")
+			sw, rejected = &Sweep{Param: e.key, Line: e.line}, true
+			continue
+		}
+		s.Line = e.line
+		sw = &s
+		p.entry(blockSweep, e, fmt.Sprintf("%s .. %s step %s", units.Format(s.From, dim), units.Format(s.To, dim), units.Format(s.Step, dim)))
+	}
+	if sw == nil {
+		p.errf(b.fence, "sweep block has no parameter line: write e.g. turns = 100 .. 400 step 50")
+		return
+	}
+	if rejected {
+		return
+	}
+	targets := coils
+	if coilName != "" {
+		targets = nil
+		var names []string
+		for _, c := range coils {
+			names = append(names, strconv.Quote(c.c.Name))
+			if c.c.Name == coilName {
+				targets = append(targets, c)
+			}
+		}
+		if len(targets) == 0 {
+			p.errf(coilLine, "sweep: no coil named %q (coils: %s)", coilName, strings.Join(names, ", "))
+			return
+		}
+		sw.Coil = coilName
+	}
+	for _, c := range targets {
+		_, byCurrent := c.given["current"]
+		_, byVoltage := c.given["voltage"]
+		if (sw.Param == "current" && byVoltage && !byCurrent) || (sw.Param == "voltage" && byCurrent && !byVoltage) {
+			drive := "voltage"
+			if sw.Param == "voltage" {
+				drive = "current"
+			}
+			p.errf(sw.Line, "sweep %s: coil %q is driven by %s", sw.Param, c.c.Name, drive)
+			return
+		}
+	}
+	p.spec.Sweep = sw
+}
+
+// parseRange reads "<from> .. <to> step <step>". A bound or step written
+// without a unit takes the unit of the others: 40 .. 80 mm step 5.
+func parseRange(key, s string, dim units.Dim) (Sweep, error) {
+	sw := Sweep{Param: key, Dim: dim}
+	i := strings.Index(s, "..")
+	if i < 0 {
+		return sw, fmt.Errorf("bad range %q: want <from> .. <to> step <step>", s)
+	}
+	from, rest := strings.TrimSpace(s[:i]), strings.TrimSpace(s[i+2:])
+	j := strings.Index(strings.ToLower(rest), "step")
+	if j < 0 {
+		return sw, fmt.Errorf("bad range %q: missing step (want <from> .. <to> step <step>)", s)
+	}
+	to, step := strings.TrimSpace(rest[:j]), strings.TrimSpace(rest[j+4:])
+	parts := []string{from, to, step}
+	unit := ""
+	for _, x := range []string{to, from, step} {
+		if _, u, err := units.Split(x); err == nil && u != "" {
+			unit = u
+			break
+		}
+	}
+	var v [3]float64
+	for k, x := range parts {
+		if x == "" {
+			return sw, fmt.Errorf("bad range %q: want <from> .. <to> step <step>", s)
+		}
+		if n, u, err := units.Split(x); err == nil && u == "" && unit != "" {
+			x = n + " " + unit
+		}
+		var (
+			q   units.Quantity
+			err error
+		)
+		switch {
+		case key != "duty":
+			q, err = units.ParseAs(x, dim)
+		case k < 2:
+			q.Value, err = parsePercent(x)
+		default: // a duty step is a difference of percentages
+			if _, u, e := units.Split(x); e != nil || u != "%" {
+				err = fmt.Errorf("step %s: want a percentage such as 10 %%", x)
+			} else {
+				q, err = units.Parse(x)
+			}
+		}
+		if err != nil {
+			return sw, err
+		}
+		v[k] = q.Value
+	}
+	sw.From, sw.To, sw.Step = v[0], v[1], v[2]
+	switch {
+	case !(sw.Step > 0):
+		return sw, fmt.Errorf("step %s must be greater than zero", step)
+	case !(sw.To > sw.From):
+		return sw, fmt.Errorf("%s .. %s: the end must be greater than the start", from, to)
+	case (sw.To-sw.From)/sw.Step > maxSweepSteps:
+		return sw, fmt.Errorf("%s .. %s step %s is more than %d steps", from, to, step, maxSweepSteps)
+	}
+	if dim == units.Length && sw.From <= 0 {
+		return sw, fmt.Errorf("start %s must be greater than zero", from)
+	}
+	if key == "current" || key == "voltage" {
+		if sw.From <= 0 {
+			return sw, fmt.Errorf("start %s must be greater than zero", from)
+		}
+	}
+	if key == "turns" {
+		for _, x := range v {
+			if x != math.Trunc(x) {
+				return sw, fmt.Errorf("turns must be whole numbers")
+			}
+		}
+		if sw.From < 1 || sw.To > maxTurns {
+			return sw, fmt.Errorf("turns must lie between 1 and %d", maxTurns)
+		}
+	}
+	return sw, nil
+}
