@@ -1,0 +1,283 @@
+package memo
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"coilmemo/calc"
+	"coilmemo/memo/doc"
+	"coilmemo/templates"
+)
+
+// composer accumulates blocks and numbers figures.
+type composer struct {
+	j      *Job
+	blocks []doc.Block
+	figure int
+}
+
+func (c *composer) add(b ...doc.Block) { c.blocks = append(c.blocks, b...) }
+
+func (c *composer) heading(level int, text string) { c.add(doc.Heading{Level: level, Text: text}) }
+
+func (c *composer) para(text string) { c.add(doc.Text(text)) }
+
+func (c *composer) fig(f doc.Figure) int {
+	c.figure++
+	f.Number = c.figure
+	c.add(f)
+	return c.figure
+}
+
+// Compose builds the memo's document model from an evaluated spec. The
+// order is the memo's: identification and answers on page 1, then purpose,
+// inputs, assumptions, method and results, field, verification, safety,
+// record.
+func Compose(j *Job) *doc.Document {
+	s := j.Spec
+	m := s.Memo
+	title := m.Title
+	if title == "" {
+		title = "Coil calculation memo"
+	}
+	c := &composer{j: j}
+	c.titlePage(title)
+	c.purpose()
+	c.inputs()
+	c.assumptions()
+	c.method()
+	c.field()
+	c.torque()
+	c.verification()
+	c.safety()
+	c.record()
+	var names []string
+	for _, co := range s.Design.Coils {
+		names = append(names, co.Name)
+	}
+	return &doc.Document{
+		Meta: doc.Meta{
+			Title:    title,
+			Subject:  "Coil calculation memo: " + strings.Join(names, ", "),
+			Author:   m.Author,
+			Keywords: strings.Join(append([]string{"coil", "calculation memo", m.Project, m.Client}, names...), ", "),
+			DocID:    m.DocumentID,
+			Revision: m.Revision,
+			Created:  j.Created,
+		},
+		Blocks: c.blocks,
+	}
+}
+
+// titlePage: identification, headline results, limits compliance.
+func (c *composer) titlePage(title string) {
+	m := c.j.Spec.Memo
+	field := func(label, v string) [2]string {
+		if v == "" {
+			v = "—"
+		}
+		return [2]string{label, v}
+	}
+	c.add(doc.TitleBlock{Title: title, Fields: [][2]string{
+		field("Client", m.Client), field("Project", m.Project),
+		field("Document", m.DocumentID), field("Revision", m.Revision),
+		field("Date", m.Date), field("Status", m.Status),
+		field("Prepared by", m.Author), field("Checked by", m.Checker),
+	}})
+	c.heading(1, "Results summary")
+	c.add(c.verdict())
+	c.add(c.summaryTable())
+	if len(c.j.Results.Limits) > 0 {
+		c.add(c.limitsTable())
+	}
+	c.add(doc.PageBreak{})
+}
+
+// verdict is the one-paragraph answer at the top of page 1.
+func (c *composer) verdict() doc.Paragraph {
+	r := c.j.Results
+	failedLimits, failedChecks := c.j.Failed()
+	var s []doc.Span
+	switch {
+	case len(r.Limits) == 0:
+		s = append(s, doc.Span{Text: "No requirements were stated in the spec. "})
+	case failedLimits == 0:
+		s = append(s, doc.Span{Text: fmt.Sprintf("All %d stated requirements are met.", len(r.Limits)), Strong: true}, doc.Span{Text: " "})
+	default:
+		s = append(s, doc.Span{Text: fmt.Sprintf("%d of %d stated requirements are NOT met.", failedLimits, len(r.Limits)), Strong: true}, doc.Span{Text: " "})
+	}
+	if failedChecks > 0 {
+		s = append(s, doc.Span{Text: fmt.Sprintf("%d verification check(s) failed: see the Verification section before relying on these results.", failedChecks), Strong: true}, doc.Span{Text: " "})
+	} else if len(c.j.Checks) > 0 {
+		s = append(s, doc.Span{Text: fmt.Sprintf("All %d verification checks agree within tolerance. ", len(c.j.Checks))})
+	}
+	for _, cr := range r.Coils {
+		if cr.Runaway {
+			s = append(s, doc.Span{Text: fmt.Sprintf("Coil %q has no steady temperature: thermal runaway.", cr.Name), Strong: true}, doc.Span{Text: " "})
+		}
+	}
+	s = append(s, doc.Span{Text: "Safety cautions for this design are listed in the Safety section."})
+	return doc.Paragraph{Spans: s}
+}
+
+func (c *composer) summaryTable() doc.Table {
+	r := c.j.Results
+	d := c.j.Spec.Design
+	head := []string{"Result"}
+	for _, cr := range r.Coils {
+		head = append(head, cr.Name)
+	}
+	row := func(name string, f func(i int, cr calc.CoilResult) string) []doc.Cell {
+		cells := []doc.Cell{{Text: name}}
+		for i, cr := range r.Coils {
+			cells = append(cells, doc.Cell{Text: f(i, cr)})
+		}
+		return cells
+	}
+	rows := [][]doc.Cell{
+		row("Magnetic moment |m|", func(_ int, cr calc.CoilResult) string { return Eng(cr.Moment.Norm(), "A·m²", 3) }),
+		row("Field at own centre |B|", func(_ int, cr calc.CoilResult) string { return Eng(cr.FieldCentre.Norm(), "T", 3) }),
+		row("Current", func(_ int, cr calc.CoilResult) string { return Eng(cr.Current, "A", 3) }),
+		row("Voltage", func(_ int, cr calc.CoilResult) string { return Eng(cr.Voltage, "V", 3) }),
+		row("Power (duty-averaged)", func(_ int, cr calc.CoilResult) string { return Eng(cr.Power, "W", 3) }),
+		row("Resistance at 20 °C / hot", func(_ int, cr calc.CoilResult) string {
+			return Eng(cr.R20, "Ω", 3) + " / " + Eng(cr.RHot, "Ω", 3)
+		}),
+		row("Winding temperature", func(i int, cr calc.CoilResult) string {
+			if cr.Runaway {
+				return "runaway"
+			}
+			return Eng(Celsius(cr.Temperature), "°C", 3)
+		}),
+		row("Insulation class", func(i int, cr calc.CoilResult) string {
+			return Eng(Celsius(d.Coils[i].InsulationClass), "°C", 3)
+		}),
+		row("Inductance", func(_ int, cr calc.CoilResult) string { return Eng(cr.Inductance, "H", 3) }),
+		row("Wire length / conductor mass", func(_ int, cr calc.CoilResult) string {
+			return Eng(cr.Length, "m", 3) + " / " + Eng(cr.Mass, "kg", 3)
+		}),
+	}
+	if len(r.Coils) > 1 {
+		total := func(name, v string) []doc.Cell {
+			cells := []doc.Cell{{Text: name}, {Text: v, Strong: true}}
+			for range r.Coils[1:] {
+				cells = append(cells, doc.Cell{})
+			}
+			return cells
+		}
+		rows = append(rows,
+			total("All coils: moment |m|", Eng(r.Moment.Norm(), "A·m²", 3)),
+			total("All coils: |B| at origin", Eng(r.FieldCentre.Norm(), "T", 3)))
+	}
+	if d.Conditions.BackgroundField.Norm() > 0 {
+		cells := []doc.Cell{{Text: "Torque in background field (max / design angle)"}, {Text: Eng(r.TorqueMax, "N·m", 3) + " / " + Eng(r.TorqueDesign, "N·m", 3)}}
+		for range r.Coils[1:] {
+			cells = append(cells, doc.Cell{})
+		}
+		rows = append(rows, cells)
+	}
+	align := []doc.Align{doc.Left}
+	widths := []float64{2.2}
+	for range r.Coils {
+		align = append(align, doc.Right)
+		widths = append(widths, 1.5)
+	}
+	return doc.Table{Caption: "Headline results at the steady operating point", Header: head, Rows: rows, Align: align, Widths: widths}
+}
+
+func (c *composer) limitsTable() doc.Table {
+	var rows [][]doc.Cell
+	for _, l := range c.j.Results.Limits {
+		q := calc.LimitQuantities[l.Limit.Quantity]
+		unit := displayUnit(q.Unit)
+		rel := "≥"
+		if l.Limit.Relation == calc.AtMost {
+			rel = "≤"
+		}
+		req, got := l.Limit.Required, l.Computed
+		if unit == "°C" {
+			req, got = Celsius(req), Celsius(got)
+		}
+		margin := "n/a"
+		switch {
+		case math.IsNaN(got):
+		case unit == "°C":
+			// A temperature margin is a difference, not a ratio.
+			mg := got - req
+			if l.Limit.Relation == calc.AtMost {
+				mg = -mg
+			}
+			margin = strings.Replace(fmt.Sprintf("%+.1f K", mg), "-", "−", 1)
+		case req != 0:
+			mg := (got - req) / math.Abs(req)
+			if l.Limit.Relation == calc.AtMost {
+				mg = -mg
+			}
+			margin = strings.Replace(fmt.Sprintf("%+.1f %%", 100*mg), "-", "−", 1)
+		}
+		st := doc.Pass
+		if !l.Pass {
+			st = doc.Fail
+		}
+		rows = append(rows, []doc.Cell{
+			{Text: l.Limit.Quantity + " (" + q.Description + ")"},
+			{Text: rel + " " + Eng(req, unit, 3)},
+			{Text: Eng(got, unit, 4)},
+			{Text: margin},
+			{Text: st.String(), Status: st, Strong: true},
+		})
+	}
+	return doc.Table{Caption: "Requirements compliance (margin: positive means met with room to spare)",
+		Header: []string{"Requirement", "Required", "Computed", "Margin", "Status"},
+		Rows:   rows, Widths: []float64{3.2, 1.4, 1.4, 1, 0.9},
+		Align: []doc.Align{doc.Left, doc.Right, doc.Right, doc.Right, doc.Center}}
+}
+
+// displayUnit maps a LimitQuantities unit to the unit Eng prints.
+func displayUnit(u string) string {
+	switch u {
+	case "A m2":
+		return "A·m²"
+	case "degC":
+		return "°C"
+	case "ohm":
+		return "Ω"
+	case "A/m2":
+		return "A/m²"
+	case "N m":
+		return "N·m"
+	}
+	return u
+}
+
+func (c *composer) purpose() {
+	c.heading(1, "Purpose and description")
+	if len(c.j.Spec.Narrative) == 0 {
+		c.para(templates.Text("purpose-default", nil))
+		return
+	}
+	for _, b := range c.j.Spec.Narrative {
+		// The spec's own headings sit below the memo's section heading.
+		if h, ok := b.(doc.Heading); ok {
+			h.Level = min(h.Level+1, 3)
+			b = h
+		}
+		c.add(b)
+	}
+}
+
+func (c *composer) inputs() {
+	c.heading(1, "Inputs")
+	c.para(templates.Text("inputs", map[string]string{"File": c.j.Spec.File}))
+	var rows [][]doc.Cell
+	for _, e := range c.j.Spec.Entries {
+		rows = append(rows, []doc.Cell{
+			{Text: e.Block}, {Text: e.Key}, {Text: e.Raw}, {Text: e.SI}, {Text: fmt.Sprint(e.Line)},
+		})
+	}
+	c.add(doc.Table{Caption: "Spec parameters as written and in SI units",
+		Header: []string{"Block", "Key", "As written", "SI", "Line"},
+		Rows:   rows, Widths: []float64{1, 1.5, 2, 2.2, 0.5},
+		Align: []doc.Align{doc.Left, doc.Left, doc.Left, doc.Left, doc.Right}})
+}

@@ -1,0 +1,116 @@
+package doc
+
+import (
+	"bufio"
+	"fmt"
+	"io"
+	"strings"
+)
+
+// WriteText writes a plain-text rendering of the document: every block's
+// content in order, without layout. It is the backend of the golden tests,
+// so memo content can be reviewed and diffed without comparing PDF bytes.
+func WriteText(w io.Writer, d *Document) error {
+	b := bufio.NewWriter(w)
+	fmt.Fprintf(b, "# %s\n", d.Meta.Title)
+	fmt.Fprintf(b, "document %s, revision %s\n", d.Meta.DocID, d.Meta.Revision)
+	section := 0
+	for _, blk := range d.Blocks {
+		b.WriteString("\n")
+		writeBlock(b, blk, "", &section)
+	}
+	return b.Flush()
+}
+
+func writeBlock(b *bufio.Writer, blk Block, indent string, section *int) {
+	switch v := blk.(type) {
+	case Heading:
+		if v.Level == 1 {
+			*section++
+			fmt.Fprintf(b, "%s %d %s\n", strings.Repeat("#", v.Level+1), *section, v.Text)
+		} else {
+			fmt.Fprintf(b, "%s %s\n", strings.Repeat("#", v.Level+1), v.Text)
+		}
+	case Paragraph:
+		fmt.Fprintf(b, "%s%s\n", indent, spansText(v.Spans))
+	case List:
+		for i, item := range v.Items {
+			mark := "- "
+			if v.Ordered {
+				mark = fmt.Sprintf("%d. ", i+1)
+			}
+			for j, sub := range item {
+				prefix := indent + strings.Repeat(" ", len(mark))
+				if j == 0 {
+					b.WriteString(indent + mark)
+					prefix = indent + strings.Repeat(" ", len(mark))
+					if p, ok := sub.(Paragraph); ok {
+						fmt.Fprintf(b, "%s\n", spansText(p.Spans))
+						continue
+					}
+					b.WriteString("\n")
+				}
+				writeBlock(b, sub, prefix, section)
+			}
+		}
+	case Table:
+		if v.Caption != "" {
+			fmt.Fprintf(b, "Table: %s\n", v.Caption)
+		}
+		if len(v.Header) > 0 {
+			fmt.Fprintf(b, "| %s |\n", strings.Join(v.Header, " | "))
+		}
+		for _, row := range v.Rows {
+			cells := make([]string, len(row))
+			for i, c := range row {
+				cells[i] = c.Text
+				if c.Status != NoStatus && c.Text != c.Status.String() {
+					cells[i] += " [" + c.Status.String() + "]"
+				}
+			}
+			fmt.Fprintf(b, "| %s |\n", strings.Join(cells, " | "))
+		}
+	case Figure:
+		fmt.Fprintf(b, "[Figure %d: %s]\n", v.Number, v.Caption)
+		if v.Summary != "" {
+			fmt.Fprintf(b, "%s\n", v.Summary)
+		}
+	case Callout:
+		title := v.Severity.String()
+		if v.Title != "" {
+			title += " – " + v.Title
+		}
+		fmt.Fprintf(b, "%s[%s] %s\n", indent, title, spansText(v.Spans))
+	case TitleBlock:
+		fmt.Fprintf(b, "== %s ==\n", v.Title)
+		for _, f := range v.Fields {
+			fmt.Fprintf(b, "%s: %s\n", f[0], f[1])
+		}
+	case Code:
+		for _, line := range strings.Split(strings.TrimRight(v.Text, "\n"), "\n") {
+			fmt.Fprintf(b, "%s    %s\n", indent, line)
+		}
+	case PageBreak:
+		b.WriteString("---- page break ----\n")
+	default:
+		fmt.Fprintf(b, "%s<unknown block %T>\n", indent, blk)
+	}
+}
+
+// spansText flattens spans, marking emphasis the Markdown way.
+func spansText(spans []Span) string {
+	var s strings.Builder
+	for _, sp := range spans {
+		switch {
+		case sp.Code:
+			s.WriteString("`" + sp.Text + "`")
+		case sp.Strong:
+			s.WriteString("**" + sp.Text + "**")
+		case sp.Emph:
+			s.WriteString("*" + sp.Text + "*")
+		default:
+			s.WriteString(sp.Text)
+		}
+	}
+	return s.String()
+}

@@ -1,0 +1,152 @@
+package memo
+
+import (
+	"encoding/json"
+	"math"
+	"strconv"
+
+	"coilmemo/calc"
+)
+
+// Num is a float that encodes NaN and ±Inf (an unknown value) as JSON null.
+type Num float64
+
+// MarshalJSON implements json.Marshaler.
+func (n Num) MarshalJSON() ([]byte, error) {
+	f := float64(n)
+	if math.IsNaN(f) || math.IsInf(f, 0) {
+		return []byte("null"), nil
+	}
+	return strconv.AppendFloat(nil, f, 'g', -1, 64), nil
+}
+
+func vec(v calc.Vec) [3]Num { return [3]Num{Num(v[0]), Num(v[1]), Num(v[2])} }
+
+// Report is the stable `calc --json` interface: SI values, snake_case keys
+// with the unit in the name. Keys are only ever added, never renamed.
+type Report struct {
+	Tool         string        `json:"tool"`
+	Spec         string        `json:"spec"`
+	SpecSHA256   string        `json:"spec_sha256"`
+	Coils        []CoilReport  `json:"coils"`
+	FieldCenter  [3]Num        `json:"field_center_T"`
+	Moment       [3]Num        `json:"moment_A_m2"`
+	Probes       []ProbeReport `json:"probes"`
+	TorqueMax    Num           `json:"torque_max_N_m"`
+	TorqueDesign Num           `json:"torque_N_m"`
+	TorqueVector [3]Num        `json:"torque_vector_N_m"`
+	Limits       []LimitReport `json:"limits"`
+	Checks       []CheckReport `json:"checks"`
+	LimitsFailed int           `json:"limits_failed"`
+	ChecksFailed int           `json:"checks_failed"`
+}
+
+// CoilReport is one coil block.
+type CoilReport struct {
+	Name               string `json:"name"`
+	Form               string `json:"form"`
+	Turns              int    `json:"turns"`
+	Moment             Num    `json:"moment_A_m2"`
+	MomentVector       [3]Num `json:"moment_vector_A_m2"`
+	Resistance20C      Num    `json:"resistance_20C_ohm"`
+	ResistanceHot      Num    `json:"resistance_hot_ohm"`
+	Current            Num    `json:"current_A"`
+	CurrentCold        Num    `json:"current_cold_A"`
+	Voltage            Num    `json:"voltage_V"`
+	Power              Num    `json:"power_W"`
+	WireLength         Num    `json:"wire_length_m"`
+	ConductorMass      Num    `json:"conductor_mass_kg"`
+	CurrentDensity     Num    `json:"current_density_A_m2"`
+	Inductance         Num    `json:"inductance_H"`
+	WindingTemperature Num    `json:"winding_temperature_C"`
+	Runaway            bool   `json:"runaway"`
+	FieldCenter        [3]Num `json:"field_center_T"`
+	TurnsPerLayer      int    `json:"turns_per_layer"`
+	Layers             int    `json:"layers"`
+}
+
+// ProbeReport is the field at one probe.
+type ProbeReport struct {
+	Name string `json:"name"`
+	At   [3]Num `json:"at_m"`
+	B    [3]Num `json:"B_T"`
+	BMag Num    `json:"B_magnitude_T"`
+}
+
+// LimitReport is one requirement. Temperatures are in °C (unit "degC"),
+// everything else in the SI unit named.
+type LimitReport struct {
+	Quantity string `json:"quantity"`
+	Relation string `json:"relation"`
+	Required Num    `json:"required"`
+	Computed Num    `json:"computed"`
+	Unit     string `json:"unit"`
+	Pass     bool   `json:"pass"`
+}
+
+// CheckReport is one verification check.
+type CheckReport struct {
+	Coil      string `json:"coil,omitempty"`
+	Name      string `json:"name"`
+	Method    string `json:"method"`
+	Reference string `json:"reference"`
+	Value     Num    `json:"value"`
+	Expected  Num    `json:"expected"`
+	Unit      string `json:"unit"`
+	RelDiff   Num    `json:"rel_diff"`
+	Tolerance Num    `json:"tolerance"`
+	Pass      bool   `json:"pass"`
+}
+
+// Report builds the JSON report of an evaluated spec.
+func (j *Job) Report() Report {
+	r := j.Results
+	d := j.Spec.Design
+	rep := Report{
+		Tool: "coilmemo " + Version, Spec: j.Spec.File, SpecSHA256: j.SHA256,
+		FieldCenter: vec(r.FieldCentre), Moment: vec(r.Moment),
+		TorqueMax: Num(r.TorqueMax), TorqueDesign: Num(r.TorqueDesign), TorqueVector: vec(r.Torque),
+		Coils: []CoilReport{}, Probes: []ProbeReport{}, Limits: []LimitReport{}, Checks: []CheckReport{},
+	}
+	rep.LimitsFailed, rep.ChecksFailed = j.Failed()
+	for i, cr := range r.Coils {
+		co := d.Coils[i]
+		rep.Coils = append(rep.Coils, CoilReport{
+			Name: cr.Name, Form: formName(co), Turns: co.Turns,
+			Moment: Num(cr.Moment.Norm()), MomentVector: vec(cr.Moment),
+			Resistance20C: Num(cr.R20), ResistanceHot: Num(cr.RHot),
+			Current: Num(cr.Current), CurrentCold: Num(cr.ColdCurrent), Voltage: Num(cr.Voltage), Power: Num(cr.Power),
+			WireLength: Num(cr.Length), ConductorMass: Num(cr.Mass), CurrentDensity: Num(cr.Density),
+			Inductance: Num(cr.Inductance), WindingTemperature: Num(Celsius(cr.Temperature)), Runaway: cr.Runaway,
+			FieldCenter: vec(cr.FieldCentre), TurnsPerLayer: cr.Winding.TurnsPerLayer, Layers: cr.Winding.LayerCount,
+		})
+	}
+	for _, p := range r.Probes {
+		rep.Probes = append(rep.Probes, ProbeReport{Name: p.Name, At: vec(p.At), B: vec(p.B), BMag: Num(p.B.Norm())})
+	}
+	for _, l := range r.Limits {
+		unit := calc.LimitQuantities[l.Limit.Quantity].Unit
+		req, got := l.Limit.Required, l.Computed
+		if unit == "degC" {
+			req, got = Celsius(req), Celsius(got)
+		}
+		rel := ">="
+		if l.Limit.Relation == calc.AtMost {
+			rel = "<="
+		}
+		rep.Limits = append(rep.Limits, LimitReport{Quantity: l.Limit.Quantity, Relation: rel,
+			Required: Num(req), Computed: Num(got), Unit: unit, Pass: l.Pass})
+	}
+	for _, k := range j.Checks {
+		rep.Checks = append(rep.Checks, CheckReport{Coil: k.Coil, Name: k.Name, Method: k.Method, Reference: k.Reference,
+			Value: Num(k.Value), Expected: Num(k.Expected), Unit: k.Unit, RelDiff: Num(k.RelDiff),
+			Tolerance: Num(k.Tolerance), Pass: k.Pass})
+	}
+	return rep
+}
+
+// JSON is the indented JSON report.
+func (j *Job) JSON() ([]byte, error) {
+	b, err := json.MarshalIndent(j.Report(), "", "  ")
+	return append(b, '\n'), err
+}

@@ -1,0 +1,147 @@
+package memo
+
+import (
+	"fmt"
+	"math"
+
+	"coilmemo/calc"
+	"coilmemo/memo/doc"
+	"coilmemo/templates"
+)
+
+// ImplantField is the flux density above which active implanted medical
+// devices may be affected: 0.5 mT, ICNIRP Guidelines on limits of exposure
+// to static magnetic fields, Health Physics 96(4):504–514 (2009).
+const ImplantField = 0.5e-3
+
+// HotSurface is the surface temperature above which brief contact can burn,
+// 60 °C: common practice for touchable surfaces of equipment.
+const HotSurface = 60 + 273.15
+
+// ELV is the usual bound of extra-low d.c. voltage, 60 V (IEC 61140 /
+// IEC 60364-4-41, ripple-free d.c.).
+const ELV = 60.0
+
+// reach returns the largest distance from the design's origin along the
+// unit direction u at which |B| ≥ level, searching inward from far away
+// and refining by bisection; 0 when the level is not reached beyond
+// rmin. Valid because every coil's field falls monotonically far away.
+func reach(fm *calc.FieldModel, origin, u calc.Vec, level, rmin, rmax float64) float64 {
+	at := func(r float64) float64 { return fm.At(origin.Add(u.Scale(r))).Norm() }
+	if at(rmax) >= level {
+		return rmax
+	}
+	// Walk inward in steps of 2 % until the level is reached.
+	hi := rmax
+	lo := hi
+	for lo > rmin {
+		lo = hi / 1.02
+		if at(lo) >= level {
+			break
+		}
+		hi = lo
+	}
+	if lo <= rmin && at(lo) < level {
+		return 0
+	}
+	for range 60 {
+		mid := 0.5 * (lo + hi)
+		if at(mid) >= level {
+			lo = mid
+		} else {
+			hi = mid
+		}
+	}
+	return lo
+}
+
+// Cautions lists the safety cautions raised by the results, in order of
+// severity, always closing with the general caution.
+func Cautions(j *Job) []doc.Callout {
+	d := j.Spec.Design
+	r := j.Results
+	var out []doc.Callout
+	fm := calc.NewFieldModel(d)
+	for i, co := range d.Coils {
+		cr := r.Coils[i]
+		name := fmt.Sprintf("coil %q", co.Name)
+		if cr.Runaway {
+			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Thermal runaway, " + name,
+				Spans: []doc.Span{{Text: templates.Text("caution-runaway", map[string]string{"Bound": Eng(Celsius(calc.TempSearchMax), "°C", 3)})}}})
+			continue
+		}
+		if cr.Temperature > co.InsulationClass {
+			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Insulation class exceeded, " + name,
+				Spans: []doc.Span{{Text: templates.Text("caution-class", map[string]string{
+					"Temperature": Eng(Celsius(cr.Temperature), "°C", 3), "Class": Eng(Celsius(co.InsulationClass), "°C", 3)})}}})
+		}
+		if cr.Temperature > HotSurface {
+			out = append(out, doc.Callout{Severity: doc.Caution, Title: "Hot surface, " + name,
+				Spans: []doc.Span{{Text: templates.Text("caution-hot", map[string]string{"Temperature": Eng(Celsius(cr.Temperature), "°C", 3)})}}})
+		}
+		if math.Abs(cr.Voltage) > ELV {
+			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Hazardous voltage, " + name,
+				Spans: []doc.Span{{Text: templates.Text("caution-voltage", map[string]string{"Voltage": Eng(cr.Voltage, "V", 3)})}}})
+		}
+		if e := 0.5 * cr.Inductance * cr.Current * cr.Current; !math.IsNaN(e) && e > 0 {
+			out = append(out, doc.Callout{Severity: doc.Caution, Title: "Switch-off voltage, " + name,
+				Spans: []doc.Span{{Text: templates.Text("caution-inductive", map[string]string{"Energy": Eng(e, "J", 3)})}}})
+		}
+	}
+	// Implant field: along the z axis and in the xy plane from the origin.
+	ext := designExtent(d)
+	if ext > 0 {
+		axial := reach(fm, calc.Vec{}, calc.Vec{0, 0, 1}, ImplantField, ext*0.5, ext*1e3)
+		axial = math.Max(axial, reach(fm, calc.Vec{}, calc.Vec{0, 0, -1}, ImplantField, ext*0.5, ext*1e3))
+		radial := reach(fm, calc.Vec{}, calc.Vec{1, 0, 0}, ImplantField, ext, ext*1e3)
+		radial = math.Max(radial, reach(fm, calc.Vec{}, calc.Vec{0, 1, 0}, ImplantField, ext, ext*1e3))
+		if axial > 0 || radial > 0 {
+			where := func(v float64, dir string) string {
+				if v == 0 {
+					return "nowhere " + dir + " outside the winding"
+				}
+				return "up to " + Eng(v, "m", 2) + " from the origin " + dir
+			}
+			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Field above 0.5 mT: implanted medical devices",
+				Spans: []doc.Span{{Text: templates.Text("caution-implant", map[string]string{
+					"Axial": where(axial, "along the z axis"), "Radial": where(radial, "in the xy plane")})}}})
+		} else {
+			out = append(out, doc.Callout{Severity: doc.Note, Title: "Field near the winding",
+				Spans: []doc.Span{{Text: templates.Text("caution-implant-none", nil)}}})
+		}
+	}
+	general := templates.Paragraphs("caution-general", nil)
+	for i, p := range general {
+		t := "Limits of this memo"
+		if i > 0 {
+			t = "Codes and licensed practice"
+		}
+		out = append(out, doc.Callout{Severity: doc.Note, Title: t, Spans: []doc.Span{{Text: p}}})
+	}
+	return out
+}
+
+// designExtent is the largest distance of any winding from the origin.
+func designExtent(d calc.Design) float64 {
+	e := 0.0
+	for _, co := range d.Coils {
+		r := co.MeanDiameter/2 + co.RadialBuild/2
+		if co.Form == calc.Rectangle {
+			r = math.Hypot(co.Width, co.Height) / 2
+		}
+		half := co.Length / 2
+		if co.Form == calc.Pair {
+			half += co.Spacing / 2
+		}
+		e = math.Max(e, co.Centre.Norm()+math.Hypot(r, half))
+	}
+	return e
+}
+
+func (c *composer) safety() {
+	c.heading(1, "Safety")
+	c.para(templates.Text("safety", nil))
+	for _, co := range Cautions(c.j) {
+		c.add(co)
+	}
+}
