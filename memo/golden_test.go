@@ -1,0 +1,104 @@
+package memo
+
+import (
+	"bytes"
+	"flag"
+	"fmt"
+	"os"
+	"path/filepath"
+	"testing"
+
+	"golang.org/x/tools/txtar"
+
+	"coilmemo/memo/doc"
+)
+
+var update = flag.Bool("update", false, "rewrite the golden files in testdata/golden")
+
+// TestGolden builds each testdata/golden/*.txtar archive's spec.md into the
+// memo's text rendering and its JSON report, and compares them with the
+// archive's memo.txt and calc.json. Run with -update to accept changes
+// after reviewing the diff.
+func TestGolden(t *testing.T) {
+	files, err := filepath.Glob("../testdata/golden/*.txtar")
+	if err != nil || len(files) == 0 {
+		t.Fatalf("no golden files: %v", err)
+	}
+	for _, file := range files {
+		t.Run(filepath.Base(file), func(t *testing.T) {
+			ar, err := txtar.ParseFile(file)
+			if err != nil {
+				t.Fatal(err)
+			}
+			var specSrc []byte
+			for _, f := range ar.Files {
+				if f.Name == "spec.md" {
+					specSrc = f.Data
+				}
+			}
+			if specSrc == nil {
+				t.Fatal("archive has no spec.md")
+			}
+			j, diags := Evaluate("spec.md", specSrc)
+			if len(diags) > 0 {
+				t.Fatalf("spec problems:\n%v", diags)
+			}
+			var text bytes.Buffer
+			if err := doc.WriteText(&text, j.Document()); err != nil {
+				t.Fatal(err)
+			}
+			js, err := j.JSON()
+			if err != nil {
+				t.Fatal(err)
+			}
+			got := map[string][]byte{"memo.txt": text.Bytes(), "calc.json": js}
+			if *update {
+				out := &txtar.Archive{Comment: ar.Comment}
+				out.Files = append(out.Files, txtar.File{Name: "spec.md", Data: specSrc})
+				for _, name := range []string{"memo.txt", "calc.json"} {
+					out.Files = append(out.Files, txtar.File{Name: name, Data: got[name]})
+				}
+				if err := os.WriteFile(file, txtar.Format(out), 0o644); err != nil {
+					t.Fatal(err)
+				}
+				return
+			}
+			for _, name := range []string{"memo.txt", "calc.json"} {
+				var want []byte
+				found := false
+				for _, f := range ar.Files {
+					if f.Name == name {
+						want, found = f.Data, true
+					}
+				}
+				if !found {
+					t.Errorf("archive has no %s (run go test ./memo -update)", name)
+					continue
+				}
+				if !bytes.Equal(got[name], want) {
+					t.Errorf("%s differs from the golden file; run go test ./memo -run TestGolden -update and review the diff\n%s",
+						name, firstDiff(string(want), string(got[name])))
+				}
+			}
+		})
+	}
+}
+
+// firstDiff shows the first differing line of two texts.
+func firstDiff(want, got string) string {
+	wl := bytes.Split([]byte(want), []byte("\n"))
+	gl := bytes.Split([]byte(got), []byte("\n"))
+	for i := 0; i < len(wl) || i < len(gl); i++ {
+		var w, g []byte
+		if i < len(wl) {
+			w = wl[i]
+		}
+		if i < len(gl) {
+			g = gl[i]
+		}
+		if !bytes.Equal(w, g) {
+			return fmt.Sprintf("line %d:\n  want: %s\n  got:  %s", i+1, w, g)
+		}
+	}
+	return ""
+}

@@ -1,0 +1,79 @@
+package memo
+
+import (
+	"bytes"
+	"os"
+	"testing"
+)
+
+func readExample(t *testing.T, name string) []byte {
+	t.Helper()
+	b, err := os.ReadFile("../examples/" + name)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return b
+}
+
+// The same spec and tool version give byte-identical PDFs.
+func TestPDFReproducible(t *testing.T) {
+	src := readExample(t, "torque-coil.md")
+	var out [2][]byte
+	for i := range out {
+		j, diags := Evaluate("torque-coil.md", src)
+		if len(diags) > 0 {
+			t.Fatal(diags)
+		}
+		b, err := j.PDF()
+		if err != nil {
+			t.Fatal(err)
+		}
+		out[i] = b
+	}
+	if !bytes.Equal(out[0], out[1]) {
+		t.Fatal("two builds of the same spec differ")
+	}
+	if !bytes.HasPrefix(out[0], []byte("%PDF-")) {
+		t.Fatal("not a PDF")
+	}
+}
+
+// SOURCE_DATE_EPOCH overrides the spec's date as the build date.
+func TestBuildDate(t *testing.T) {
+	src := readExample(t, "torque-coil.md")
+	j, _ := Evaluate("torque-coil.md", src)
+	if got := j.Created.Format("2006-01-02"); got != "2026-11-30" || !j.Dated {
+		t.Errorf("build date from the spec = %s, %v; want 2026-11-30 from the memo block", got, j.Dated)
+	}
+	t.Setenv("SOURCE_DATE_EPOCH", "1780000000")
+	j, _ = Evaluate("torque-coil.md", src)
+	if got := j.Created.Unix(); got != 1780000000 {
+		t.Errorf("build date with SOURCE_DATE_EPOCH = %d", got)
+	}
+}
+
+func TestEngineeringFormat(t *testing.T) {
+	cases := []struct {
+		v    float64
+		unit string
+		sig  int
+		want string
+	}{
+		{0.00123, "T", 3, "1.23 mT"},
+		{483e-6, "T", 3, "483 µT"},
+		{999.96, "V", 3, "1.00 kV"},
+		{0.15, "A·m²", 3, "150 mA·m²"},
+		{-2.5e-3, "A", 2, "−2.5 mA"},
+		{0.0143, "kg", 3, "14.3 g"},
+		{3.2e-8, "m²", 2, "0.032 mm²"},
+		{4.8e6, "A/m²", 2, "4.8 A/mm²"},
+		{71.5, "°C", 3, "71.5 °C"},
+		{0, "T", 3, "0 T"},
+		{1.7241e-8, "", 5, "1.7241×10⁻⁸"},
+	}
+	for _, c := range cases {
+		if got := Eng(c.v, c.unit, c.sig); got != c.want {
+			t.Errorf("Eng(%g, %q, %d) = %q, want %q", c.v, c.unit, c.sig, got, c.want)
+		}
+	}
+}
