@@ -189,3 +189,16 @@ func TestTurnSumEqualsDirectDoubleSum(t *testing.T) {
 	}
 	checkRel(t, "turn sum", TurnSumInductance(w, 0.45e-3), direct, 1e-13)
 }
+
+func TestCellMethodApproximatesTurnSum(t *testing.T) {
+	// The coarse cell method against the exact turn sum on a 60 × 60 coil.
+	c := Coil{Form: Solenoid, MeanDiameter: 0.2, Length: 0.06, RadialBuild: 0.06, Turns: 3600,
+		Wire: Wire{Bare: 0.9e-3, Outer: 1e-3, Material: Copper()}}
+	w := LayOut(c)
+	exact := TurnSumInductance(w, 0.45e-3)
+	for _, g := range []int{2, 3, 6} {
+		checkRel(t, "cell method", CellInductance(w, 1e-3, g), exact, 1e-3)
+	}
+	exactM := WindingMutual(w, w, 0.1)
+	checkRel(t, "cell mutual", CellMutual(w, 1e-3, 3, 0.1), exactM, 1e-3)
+}

@@ -32,6 +32,10 @@ func rowsOf(w Winding) []row {
 		if len(z) == 0 {
 			continue
 		}
+		if len(z) == 1 {
+			rs = append(rs, row{r: l.Radius, z0: z[0], n: 1, mult: 1})
+			continue
+		}
 		// Coincident turns (a thin coil).
 		same := true
 		for _, v := range z {
@@ -136,7 +140,8 @@ func WindingMutual(w1, w2 Winding, dz float64) float64 {
 // winding w: a thin circular coil by RingInductance with the hexagonal
 // bundle radius (BundleDiameter/2 of the overall wire diameter); a
 // single-layer coil by SolenoidInductance (current sheet, Nagaoka); a
-// multilayer coil by TurnSumInductance. A Pair is its two coils in series,
+// multilayer coil by TurnSumInductance, or by CellInductance when the exact
+// sum would need more than 4 million Maxwell evaluations. A Pair is its two coils in series,
 // L = 2 L₁ ± 2 M with M the WindingMutual at the spacing (thin: N² times the
 // filament mutual), minus when opposing. NaN for a Rectangle (no method
 // implemented) and wherever the method's data are missing.
@@ -160,16 +165,23 @@ func CoilInductance(c Coil, w Winding) float64 {
 	case w.LayerCount <= 1 && c.RadialBuild <= 0:
 		L = SolenoidInductance(rm, c.Length, n)
 	default:
-		L = TurnSumInductance(w, c.Wire.Bare/2)
+		if rs := rowsOf(w); rowPairCost(rs, rs, true) <= turnSumBudget {
+			L = TurnSumInductance(w, c.Wire.Bare/2)
+		} else {
+			L = CellInductance(w, outer, cellSize(n))
+		}
 	}
 	if c.Form != Pair {
 		return L
 	}
 	var M float64
-	if w.Thin {
+	switch rs := rowsOf(w); {
+	case w.Thin:
 		M = float64(n) * float64(n) * MutualInductance(rm, rm, c.Spacing)
-	} else {
+	case rowPairCost(rs, rs, false) <= turnSumBudget:
 		M = WindingMutual(w, w, c.Spacing)
+	default:
+		M = CellMutual(w, outer, cellSize(n), c.Spacing)
 	}
 	if c.Opposing {
 		return 2*L - 2*M

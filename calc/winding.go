@@ -54,8 +54,19 @@ func LayOut(c Coil) Winding {
 	if n < 0 {
 		n = 0
 	}
-	bare := c.Wire.Bare
-	outer := c.Wire.Outer
+	if n > MaxTurns {
+		return Winding{
+			MeanTurn: math.NaN(), WireLength: math.NaN(), AreaSum: math.NaN(), FillFactor: math.NaN(),
+			SurfaceArea: math.NaN(), Mass: math.NaN(), Overfull: true,
+			Problem: fmt.Sprintf("%d turns: more than the %d turns that are laid out one by one", n, MaxTurns),
+		}
+	}
+	// Dimensions that are not positive finite numbers count as not given.
+	c.MeanDiameter, c.InnerDiameter = dim(c.MeanDiameter), dim(c.InnerDiameter)
+	c.Length, c.RadialBuild = dim(c.Length), dim(c.RadialBuild)
+	c.Width, c.Height = dim(c.Width), dim(c.Height)
+	bare := dim(c.Wire.Bare)
+	outer := dim(c.Wire.Outer)
 	if !(outer > 0) {
 		outer = bare
 	}
@@ -106,10 +117,16 @@ func LayOut(c Coil) Winding {
 		if c.InnerDiameter > 0 {
 			rin = c.InnerDiameter / 2
 		}
+		if rin < 0 {
+			w.Overfull = true
+			w.Problem = fmt.Sprintf("a radial build of %.4g mm does not fit inside a mean diameter of %.4g mm",
+				c.RadialBuild*1e3, c.MeanDiameter*1e3)
+			rin = 0
+		}
 		length := c.Length
 		tpl := 1
 		if outer > 0 && length > 0 {
-			tpl = int(math.Floor(length/outer + 1e-9))
+			tpl = int(math.Min(math.Floor(length/outer+1e-9), float64(max(n, 1))))
 		}
 		if tpl < 1 {
 			tpl = 1
@@ -155,6 +172,18 @@ func LayOut(c Coil) Winding {
 	}
 	w.Mass = dens * cond * w.WireLength
 	return w
+}
+
+// MaxTurns is the most turns LayOut places one by one; a coil with more
+// gets an empty Winding with NaN figures and a Problem.
+const MaxTurns = 1_000_000
+
+// dim returns x when it is a positive finite number, else 0 (not given).
+func dim(x float64) float64 {
+	if x > 0 && !math.IsInf(x, 1) {
+		return x
+	}
+	return 0
 }
 
 // BundleDiameter returns the diameter of a round bundle of n wires of overall
