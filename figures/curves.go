@@ -1,0 +1,277 @@
+package figures
+
+import (
+	"math"
+	"strconv"
+
+	"gonum.org/v1/plot"
+	"gonum.org/v1/plot/text"
+	"gonum.org/v1/plot/vg"
+	"gonum.org/v1/plot/vg/draw"
+)
+
+// Mark is a labelled vertical reference line at an abscissa in the data's
+// own unit (metres for OnAxis), e.g. a winding end or a limit distance.
+type Mark struct {
+	X     float64
+	Label string
+}
+
+// OnAxis plots the axial flux density |B| against axial position: the
+// exact solution (z in m, exact in T) and the dipole approximation (T; NaN
+// where it is not drawn, e.g. inside the winding) overlaid. The y axis is
+// logarithmic when the data span more than two decades. Units get the
+// engineering prefix that suits the data (mm, mT, µT, …).
+func OnAxis(z, exact, dipole []float64, marks ...Mark) DrawFunc {
+	zp := EngPrefix(z...)
+	if zp.Factor > 1 {
+		zp = Prefix{"", 1} // no km of coil axis
+	}
+	bp := EngPrefix(exact...)
+
+	lo, hi, ok := positiveRange(exact, dipole)
+	logY := ok && hi/lo > 100
+
+	p := NewPlot("Axial position z ("+zp.Symbol+"m)", "Flux density |B| ("+bp.Symbol+"T)")
+	exSegs := segments(z, exact, zp.Factor, bp.Factor, logY)
+	diSegs := segments(z, dipole, zp.Factor, bp.Factor, logY)
+
+	if logY {
+		p.Y.Scale = plot.LogScale{}
+		p.Y.Tick.Marker = decadeTicks{}
+		// Decades enclosing the exact curve; the approximation is clipped
+		// to them rather than stretching the axis.
+		elo, ehi, _ := positiveRange(exact, nil)
+		p.Y.Min = math.Pow(10, math.Floor(math.Log10(math.Max(elo, lo)/bp.Factor)))
+		p.Y.Max = math.Pow(10, math.Ceil(math.Log10(ehi/bp.Factor)))
+	} else {
+		_, ehi, _ := finiteRange(exact)
+		p.Y.Min = 0
+		p.Y.Max = ehi / bp.Factor * 1.08
+	}
+	// The approximation is drawn under the exact curve, but listed after it.
+	di := addCurve(p, diSegs, draw.LineStyle{Color: Secondary, Width: vg.Points(1), Dashes: Dashed})
+	ex := addCurve(p, exSegs, draw.LineStyle{Color: Accent, Width: LineWidth})
+	if ex != nil {
+		p.Legend.Add("Exact (finite winding)", ex)
+	}
+	if di != nil {
+		p.Legend.Add("Dipole approximation", di)
+	}
+
+	if xlo, xhi, ok := finiteRange(z); ok {
+		p.X.Min, p.X.Max = xlo/zp.Factor, xhi/zp.Factor
+	}
+	top := vg.Length(0)
+	if len(marks) > 0 {
+		m := &markLines{marks: marks, scale: zp.Factor}
+		p.Add(m)
+		top = m.height()
+	}
+	return drawer(p, top, append(exSegs, diSegs...))
+}
+
+// TorqueAngle plots torque (N·m) against angle (degrees).
+func TorqueAngle(angleDeg, torque []float64) DrawFunc {
+	tp := EngPrefix(torque...)
+	unit := tp.Symbol + "N·m"
+	p := NewPlot("Angle θ (°)", "Torque τ ("+unit+")")
+	segs := segments(angleDeg, torque, 1, tp.Factor, false)
+	if lo, hi, ok := finiteRange(torque); ok && lo < 0 && hi > 0 {
+		p.Add(zeroLine{})
+	}
+	addCurve(p, segs, draw.LineStyle{Color: Accent, Width: LineWidth})
+	if lo, hi, ok := finiteRange(angleDeg); ok {
+		p.X.Min, p.X.Max = lo, hi
+		p.X.Tick.Marker = angleTicks{}
+	}
+	if lo, hi, ok := finiteRange(torque); ok {
+		lo, hi = lo/tp.Factor, hi/tp.Factor
+		pad := 0.06 * (hi - lo)
+		if pad == 0 {
+			pad = 1
+		}
+		p.Y.Min, p.Y.Max = math.Min(lo-pad, 0), hi+pad
+		if lo < 0 {
+			p.Y.Min = lo - pad
+		}
+	}
+	return Drawer(p, segs...)
+}
+
+func positiveRange(a, b []float64) (lo, hi float64, ok bool) {
+	lo, hi = math.Inf(1), 0
+	for _, v := range [][]float64{a, b} {
+		for _, x := range v {
+			if x > 0 && !math.IsInf(x, 0) {
+				lo, hi, ok = math.Min(lo, x), math.Max(hi, x), true
+			}
+		}
+	}
+	return lo, hi, ok
+}
+
+// decadeTicks labels every decade of a log axis and marks 2…9 between.
+type decadeTicks struct{}
+
+func (decadeTicks) Ticks(min, max float64) []plot.Tick {
+	var ticks []plot.Tick
+	e0 := int(math.Floor(math.Log10(min) + 1e-9))
+	e1 := int(math.Ceil(math.Log10(max) - 1e-9))
+	for e := e0; e <= e1; e++ {
+		d := math.Pow(10, float64(e))
+		for k := 1; k < 10; k++ {
+			v := d * float64(k)
+			if v < min*(1-1e-9) || v > max*(1+1e-9) {
+				continue
+			}
+			t := plot.Tick{Value: v}
+			if k == 1 {
+				t.Label = strconv.FormatFloat(v, 'f', -1, 64)
+			}
+			ticks = append(ticks, t)
+		}
+	}
+	return ticks
+}
+
+// angleTicks puts ticks on round angles.
+type angleTicks struct{}
+
+func (angleTicks) Ticks(min, max float64) []plot.Tick {
+	span := max - min
+	step := 15.0
+	switch {
+	case span > 400:
+		step = 90
+	case span > 200:
+		step = 45
+	case span > 100:
+		step = 30
+	case span > 50:
+		step = 15
+	case span > 20:
+		step = 5
+	default:
+		return plot.DefaultTicks{}.Ticks(min, max)
+	}
+	var ticks []plot.Tick
+	for v := math.Ceil(min/step) * step; v <= max+1e-9; v += step {
+		ticks = append(ticks, plot.Tick{Value: v, Label: strconv.FormatFloat(v, 'f', -1, 64)})
+		for k := 1; k < 3; k++ {
+			m := v + float64(k)*step/3
+			if m <= max {
+				ticks = append(ticks, plot.Tick{Value: m})
+			}
+		}
+	}
+	return ticks
+}
+
+// zeroLine draws the y = 0 line of a plot whose data change sign.
+type zeroLine struct{}
+
+func (zeroLine) Plot(c draw.Canvas, p *plot.Plot) {
+	_, trY := p.Transforms(&c)
+	y := trY(0)
+	c.StrokeLine2(draw.LineStyle{Color: Muted, Width: vg.Points(0.6)}, c.Min.X, y, c.Max.X, y)
+}
+
+// markLines draws labelled vertical reference lines; the labels sit above
+// the data area, in up to two rows so that neighbours do not collide.
+type markLines struct {
+	marks []Mark
+	scale float64
+}
+
+const markLabelSize = vg.Length(6.8)
+
+func (m *markLines) labelStyle() text.Style {
+	sty := style(markLabelSize, Highlight)
+	sty.XAlign = draw.XCenter
+	sty.YAlign = draw.YBottom
+	return sty
+}
+
+// height is the room the labels need above the data area.
+func (m *markLines) height() vg.Length {
+	return 2*m.labelStyle().Height("0") + vg.Points(4)
+}
+
+func (m *markLines) Plot(c draw.Canvas, p *plot.Plot) {
+	trX, _ := p.Transforms(&c)
+	ls := draw.LineStyle{Color: Highlight, Width: vg.Points(0.6), Dashes: []vg.Length{vg.Points(1.5), vg.Points(1.5)}}
+	sty := m.labelStyle()
+	rowH := sty.Height("0")
+	// right ends of the labels set so far, per row
+	ends := []vg.Length{vg.Length(math.Inf(-1)), vg.Length(math.Inf(-1))}
+	for _, mk := range m.marks {
+		v := mk.X / m.scale
+		if v < p.X.Min || v > p.X.Max || math.IsNaN(v) {
+			continue
+		}
+		x := trX(v)
+		c.StrokeLine2(ls, x, c.Min.Y, x, c.Max.Y)
+		if mk.Label == "" {
+			continue
+		}
+		w := sty.Width(mk.Label)
+		row := 0
+		if x-w/2 < ends[0]+vg.Points(4) {
+			row = 1
+		}
+		ends[row] = x + w/2
+		c.FillText(sty, vg.Point{X: x, Y: c.Max.Y + vg.Points(2) + vg.Length(row)*rowH}, mk.Label)
+	}
+}
+
+// niceTicks labels round values, about six per axis, with unlabelled
+// minor ticks between them.
+type niceTicks struct{}
+
+func (niceTicks) Ticks(min, max float64) []plot.Tick {
+	if !(max > min) {
+		return plot.DefaultTicks{}.Ticks(min, max)
+	}
+	raw := (max - min) / 6
+	mag := math.Pow(10, math.Floor(math.Log10(raw)))
+	var step float64
+	minor := 5
+	for _, f := range []float64{1, 2, 2.5, 5, 10} {
+		step = f * mag
+		if step >= raw {
+			if f == 2.5 || f == 5 {
+				minor = 5
+			}
+			if f == 2 {
+				minor = 4
+			}
+			break
+		}
+	}
+	prec := int(math.Max(0, -math.Floor(math.Log10(step)+1e-9)))
+	if math.Abs(step*math.Pow(10, float64(prec))-math.Round(step*math.Pow(10, float64(prec)))) > 1e-9 {
+		prec++
+	}
+	var ticks []plot.Tick
+	first := math.Ceil(min/step-1e-9) * step
+	for k := -1; ; k++ {
+		v := first + float64(k)*step
+		if v > max+step*1e-9 {
+			break
+		}
+		if v >= min-step*1e-9 {
+			if math.Abs(v) < step*1e-9 {
+				v = 0
+			}
+			ticks = append(ticks, plot.Tick{Value: v, Label: strconv.FormatFloat(v, 'f', prec, 64)})
+		}
+		for j := 1; j < minor; j++ {
+			mv := v + float64(j)*step/float64(minor)
+			if mv >= min && mv <= max {
+				ticks = append(ticks, plot.Tick{Value: mv})
+			}
+		}
+	}
+	return ticks
+}

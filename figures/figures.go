@@ -1,0 +1,330 @@
+// Package figures draws the memo's plots with gonum/plot. Each function
+// returns a drawing function with the signature of doc.Figure.Draw, so the
+// memo backend decides where and how large a plot is placed; the plot is
+// laid out for exactly that size.
+//
+// All text is set in the embedded DejaVu family (memo/fonts), which is also
+// what the PDF embeds, so labels are measured with the glyphs that are
+// drawn. The house style: thin lines, the accent colour for the primary
+// curve, grey dashes for approximations, a light grid and a legend placed
+// in whichever corner of the data area the curves leave free.
+package figures
+
+import (
+	"image/color"
+	"math"
+
+	"gonum.org/v1/plot"
+	"gonum.org/v1/plot/plotter"
+	"gonum.org/v1/plot/text"
+	"gonum.org/v1/plot/vg"
+	"gonum.org/v1/plot/vg/draw"
+
+	"coilmemo/memo/fonts"
+)
+
+// DrawFunc paints a figure of size w×h into c (origin bottom left).
+type DrawFunc = func(c vg.Canvas, w, h vg.Length)
+
+// Colours and sizes of the house style.
+var (
+	Accent    = color.NRGBA{R: 0x17, G: 0x5c, B: 0x66, A: 0xff}
+	Secondary = color.NRGBA{R: 0x80, G: 0x86, B: 0x8c, A: 0xff}
+	Ink       = color.NRGBA{R: 0x1c, G: 0x22, B: 0x27, A: 0xff}
+	Muted     = color.NRGBA{R: 0x5b, G: 0x66, B: 0x70, A: 0xff}
+	GridColor = color.NRGBA{R: 0xdd, G: 0xe2, B: 0xe5, A: 0xff}
+	Highlight = color.NRGBA{R: 0xb0, G: 0x5a, B: 0x1c, A: 0xff}
+
+	LabelSize  = vg.Points(8.5)
+	TickSize   = vg.Points(7.5)
+	LegendSize = vg.Points(7.5)
+	LineWidth  = vg.Points(1.2)
+	ThinWidth  = vg.Points(0.6)
+)
+
+// Dashed is the dash pattern of approximations and reference lines.
+var Dashed = []vg.Length{vg.Points(4), vg.Points(2.5)}
+
+func style(size vg.Length, c color.Color) text.Style {
+	return restyle(text.Style{}, size, c)
+}
+
+// restyle sets font, size and colour of a text style, keeping its
+// alignment and rotation.
+func restyle(s text.Style, size vg.Length, c color.Color) text.Style {
+	s.Color = c
+	s.Font = fonts.Face(fonts.Sans, false, false, size)
+	s.Handler = fonts.Handler()
+	return s
+}
+
+// NewPlot returns a plot in the house style with the given axis labels.
+func NewPlot(xLabel, yLabel string) *plot.Plot {
+	p := plot.New()
+	h := fonts.Handler()
+	p.TextHandler = h
+	p.BackgroundColor = nil
+	p.Title.TextStyle = restyle(p.Title.TextStyle, LabelSize, Ink)
+	for _, ax := range []*plot.Axis{&p.X, &p.Y} {
+		ax.Label.TextStyle = restyle(ax.Label.TextStyle, LabelSize, Ink)
+		ax.Tick.Label = restyle(ax.Tick.Label, TickSize, Muted)
+		ax.LineStyle.Width = ThinWidth
+		ax.LineStyle.Color = Muted
+		ax.Tick.LineStyle.Width = ThinWidth
+		ax.Tick.LineStyle.Color = Muted
+		ax.Tick.Length = vg.Points(3.5)
+		ax.Padding = vg.Points(3)
+		ax.Tick.Marker = niceTicks{}
+	}
+	p.X.Label.Text = xLabel
+	p.Y.Label.Text = yLabel
+	p.X.Label.Padding = vg.Points(4)
+	p.Y.Label.Padding = vg.Points(4)
+	p.Legend.TextStyle = restyle(p.Legend.TextStyle, LegendSize, Ink)
+	p.Legend.ThumbnailWidth = vg.Points(22)
+	p.Legend.Padding = vg.Points(2)
+
+	g := plotter.NewGrid()
+	g.Vertical.Color = GridColor
+	g.Vertical.Width = vg.Points(0.4)
+	g.Horizontal.Color = GridColor
+	g.Horizontal.Width = vg.Points(0.4)
+	p.Add(g)
+	return p
+}
+
+// Drawer returns a DrawFunc that draws p at the canvas size, first moving
+// the legend into the corner of the data area that covers the fewest of
+// the given curves (in data coordinates).
+func Drawer(p *plot.Plot, curves ...plotter.XYs) DrawFunc {
+	return drawer(p, 0, curves)
+}
+
+// drawer is Drawer with top points kept free above the data area (for
+// labels that plotters set there).
+//
+// The y-axis label is set here rather than by gonum/plot, which reserves
+// room for it at the arithmetic midpoint of the axis range — far off
+// centre on a log axis — and so squeezes the data area.
+func drawer(p *plot.Plot, top vg.Length, curves []plotter.XYs) DrawFunc {
+	return func(c vg.Canvas, w, h vg.Length) {
+		dc := draw.Canvas{Canvas: c, Rectangle: vg.Rectangle{Max: vg.Point{X: w, Y: h}}}
+		// Keep a little room so the outermost tick labels are not clipped.
+		dc = draw.Crop(dc, vg.Points(1), -vg.Points(8), vg.Points(1), -vg.Points(4)-top)
+		label := p.Y.Label.Text
+		sty := p.Y.Label.TextStyle
+		var lw vg.Length
+		if label != "" {
+			lw = sty.Height(label) + sty.FontExtents().Descent + p.Y.Label.Padding
+			p.Y.Label.Text = ""
+			defer func() { p.Y.Label.Text = label }()
+			dc = draw.Crop(dc, lw, 0, 0, 0)
+		}
+		placeLegend(p, dc, curves)
+		if p.Legend.Rectangle(dc).Size().X > 0 {
+			p.Add(legendBackdrop{dc})
+		}
+		if label != "" {
+			da := p.DataCanvas(dc)
+			sty.Rotation = math.Pi / 2
+			sty.XAlign = draw.XCenter
+			sty.YAlign = draw.YBottom
+			x := dc.Min.X - lw + sty.Height(label)
+			dc.FillText(sty, vg.Point{X: x - sty.FontExtents().Descent, Y: da.Center().Y}, label)
+		}
+		p.Draw(dc)
+	}
+}
+
+// legendBackdrop clears the area behind the legend (grid lines) just
+// before the legend is drawn; it must be the last plotter added.
+type legendBackdrop struct{ outer draw.Canvas }
+
+func (b legendBackdrop) Plot(c draw.Canvas, p *plot.Plot) {
+	// The legend is laid out in the data area without axis padding.
+	lc := c
+	lc.Min.X -= p.X.Padding
+	lc.Max.X += p.X.Padding
+	lc.Min.Y -= p.Y.Padding
+	lc.Max.Y += p.Y.Padding
+	l := p.Legend
+	size := l.Rectangle(lc).Size()
+	const m = 2
+	var r vg.Rectangle
+	if l.Left {
+		r.Min.X = lc.Min.X + l.XOffs
+	} else {
+		r.Min.X = lc.Max.X + l.XOffs - size.X
+	}
+	if l.Top {
+		r.Min.Y = lc.Max.Y + l.YOffs - size.Y
+	} else {
+		r.Min.Y = lc.Min.Y + l.YOffs
+	}
+	r.Max = vg.Point{X: r.Min.X + size.X + m, Y: r.Min.Y + size.Y + m}
+	r.Min = vg.Point{X: r.Min.X - m, Y: r.Min.Y - m}
+	c.SetColor(color.White)
+	c.Fill(r.Path())
+}
+
+// placeLegend picks the legend corner with the least data under it.
+func placeLegend(p *plot.Plot, dc draw.Canvas, curves []plotter.XYs) {
+	da := p.DataCanvas(dc)
+	size := p.Legend.Rectangle(da).Size()
+	if size.X == 0 {
+		return
+	}
+	trX, trY := p.Transforms(&da)
+	var pts []vg.Point
+	inRange := func(x, y float64) bool {
+		if math.IsNaN(x) || math.IsNaN(y) || math.IsInf(x, 0) || math.IsInf(y, 0) {
+			return false
+		}
+		if _, ok := p.Y.Scale.(plot.LogScale); ok && y <= 0 {
+			return false
+		}
+		if _, ok := p.X.Scale.(plot.LogScale); ok && x <= 0 {
+			return false
+		}
+		return true
+	}
+	for _, xy := range curves {
+		for i := range xy {
+			if !inRange(xy[i].X, xy[i].Y) {
+				continue
+			}
+			a := vg.Point{X: trX(xy[i].X), Y: trY(xy[i].Y)}
+			pts = append(pts, a)
+			if i+1 < len(xy) && inRange(xy[i+1].X, xy[i+1].Y) {
+				b := vg.Point{X: trX(xy[i+1].X), Y: trY(xy[i+1].Y)}
+				for k := 1; k < 8; k++ {
+					t := vg.Length(k) / 8
+					pts = append(pts, vg.Point{X: a.X + (b.X-a.X)*t, Y: a.Y + (b.Y-a.Y)*t})
+				}
+			}
+		}
+	}
+	const inset = 5
+	type corner struct{ top, left bool }
+	best, bestN := corner{true, false}, -1
+	for _, k := range []corner{{true, false}, {true, true}, {false, false}, {false, true}} {
+		var r vg.Rectangle
+		if k.left {
+			r.Min.X = da.Min.X + inset
+		} else {
+			r.Min.X = da.Max.X - inset - size.X
+		}
+		if k.top {
+			r.Min.Y = da.Max.Y - inset - size.Y
+		} else {
+			r.Min.Y = da.Min.Y + inset
+		}
+		r.Max = vg.Point{X: r.Min.X + size.X, Y: r.Min.Y + size.Y}
+		n := 0
+		for _, q := range pts {
+			if q.X >= r.Min.X-4 && q.X <= r.Max.X+4 && q.Y >= r.Min.Y-4 && q.Y <= r.Max.Y+4 {
+				n++
+			}
+		}
+		if bestN < 0 || n < bestN {
+			best, bestN = k, n
+		}
+	}
+	p.Legend.Top, p.Legend.Left = best.top, best.left
+	p.Legend.XOffs = -inset
+	if best.left {
+		p.Legend.XOffs = inset
+	}
+	p.Legend.YOffs = inset
+	if best.top {
+		p.Legend.YOffs = -inset
+	}
+}
+
+// Prefix is an SI prefix with its factor.
+type Prefix struct {
+	Symbol string
+	Factor float64
+}
+
+var prefixes = []Prefix{
+	{"G", 1e9}, {"M", 1e6}, {"k", 1e3}, {"", 1},
+	{"m", 1e-3}, {"µ", 1e-6}, {"n", 1e-9}, {"p", 1e-12},
+}
+
+// EngPrefix returns the SI prefix under which the largest magnitude in v
+// reads between 1 and 1000. NaNs and infinities are ignored.
+func EngPrefix(v ...float64) Prefix {
+	m := 0.0
+	for _, x := range v {
+		if !math.IsNaN(x) && !math.IsInf(x, 0) {
+			m = math.Max(m, math.Abs(x))
+		}
+	}
+	if m == 0 {
+		return Prefix{"", 1}
+	}
+	for _, p := range prefixes {
+		if m >= p.Factor*0.9995 {
+			return p
+		}
+	}
+	return prefixes[len(prefixes)-1]
+}
+
+// segments splits x/y into runs of finite points (and positive y if
+// positive is set); NaN marks a gap.
+func segments(x, y []float64, sx, sy float64, positive bool) []plotter.XYs {
+	var out []plotter.XYs
+	var cur plotter.XYs
+	n := min(len(x), len(y))
+	for i := 0; i < n; i++ {
+		ok := !math.IsNaN(x[i]) && !math.IsNaN(y[i]) && !math.IsInf(x[i], 0) && !math.IsInf(y[i], 0)
+		if positive && !(y[i] > 0) {
+			ok = false
+		}
+		if !ok {
+			if len(cur) > 0 {
+				out = append(out, cur)
+				cur = nil
+			}
+			continue
+		}
+		cur = append(cur, plotter.XY{X: x[i] / sx, Y: y[i] / sy})
+	}
+	if len(cur) > 0 {
+		out = append(out, cur)
+	}
+	return out
+}
+
+// addCurve adds the segments as lines in one style and returns the first
+// line (for a legend entry), or nil if there was nothing to draw.
+func addCurve(p *plot.Plot, segs []plotter.XYs, ls draw.LineStyle) *plotter.Line {
+	var first *plotter.Line
+	for _, s := range segs {
+		l, err := plotter.NewLine(s)
+		if err != nil {
+			continue
+		}
+		l.LineStyle = ls
+		p.Add(l)
+		if first == nil {
+			first = l
+		}
+	}
+	return first
+}
+
+func finiteRange(vs ...[]float64) (lo, hi float64, ok bool) {
+	lo, hi = math.Inf(1), math.Inf(-1)
+	for _, v := range vs {
+		for _, x := range v {
+			if math.IsNaN(x) || math.IsInf(x, 0) {
+				continue
+			}
+			lo, hi, ok = math.Min(lo, x), math.Max(hi, x), true
+		}
+	}
+	return lo, hi, ok
+}

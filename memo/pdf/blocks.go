@@ -1,0 +1,890 @@
+package pdf
+
+import (
+	"fmt"
+	"strings"
+
+	"coilmemo/memo/doc"
+)
+
+var (
+	styBody    = textStyle{size: sizeBody, lead: leadBody, color: colInk}
+	styCaption = textStyle{size: sizeCaption, lead: leadCaption, color: colInk}
+	styTable   = textStyle{size: sizeTable, lead: leadTable, color: colInk}
+	styCode    = textStyle{size: sizeCode, lead: leadCode, color: colInk, mono: true}
+	styMarker  = textStyle{size: sizeBody, lead: leadBody, color: colAccent}
+)
+
+// ---- headings ----
+
+type headingStyle struct {
+	st          textStyle
+	before      float64
+	after       float64
+	rule        bool
+	numberWidth float64
+}
+
+func headingStyleFor(level int) headingStyle {
+	switch level {
+	case 1:
+		return headingStyle{st: textStyle{size: sizeH1, lead: 17, color: colAccent, bold: true}, before: 20, after: 8, rule: true, numberWidth: 26}
+	case 2:
+		return headingStyle{st: textStyle{size: sizeH2, lead: 14.5, color: colInk, bold: true}, before: 14, after: 5}
+	default:
+		return headingStyle{st: textStyle{size: sizeH3, lead: 13, color: colInk, bold: true, italic: true}, before: 10, after: 3}
+	}
+}
+
+const headingRuleGap = 3.5
+
+type headingLayout struct {
+	hs     headingStyle
+	number string
+	lines  []line
+	h      float64
+}
+
+func (r *renderer) layoutHeading(h doc.Heading, number int) headingLayout {
+	hs := headingStyleFor(h.Level)
+	hl := headingLayout{hs: hs}
+	indent := 0.0
+	if h.Level <= 1 {
+		hl.number = fmt.Sprint(number)
+		fam, sty := hs.st.face()
+		indent = max(hs.numberWidth, textWidthOf(fam, sty, hs.st.size, hl.number)+8)
+		hl.hs.numberWidth = indent
+	}
+	hl.lines = layoutSpans(plainSpans(h.Text), hs.st, r.w-indent, r.w-indent)
+	hl.h = float64(len(hl.lines)) * hs.st.lead
+	if hs.rule {
+		hl.h += headingRuleGap
+	}
+	return hl
+}
+
+func (r *renderer) heading(h doc.Heading, next doc.Block) {
+	number := r.h1
+	if h.Level <= 1 {
+		number++
+	}
+	hl := r.layoutHeading(h, number)
+	// Keep the heading with the start of what follows it.
+	if !r.fresh && hl.h+hl.hs.after+r.minHeight(next) > r.room(hl.hs.before) {
+		r.newPage()
+	}
+	r.need(hl.hs.before, hl.h)
+	if h.Level <= 1 {
+		r.h1 = number
+		r.bookmark(hl.number+" "+h.Text, 0)
+	} else {
+		r.bookmark(h.Text, h.Level-1)
+	}
+	y := r.y
+	x := r.x
+	if hl.number != "" {
+		r.simpleText(hl.number, hl.hs.st, x, y+baselineOffset(hl.hs.st.size, hl.hs.st.lead))
+		x += hl.hs.numberWidth
+	}
+	for _, l := range hl.lines {
+		r.drawLine(l, x, y+baselineOffset(hl.hs.st.size, hl.hs.st.lead))
+		y += hl.hs.st.lead
+	}
+	if hl.hs.rule {
+		r.rule(r.x, y+1.5, r.x+r.w, 0.5, colRule)
+		y += headingRuleGap
+	}
+	r.y = y
+	r.after(hl.hs.after)
+}
+
+// minHeight is the least of a block that must follow a heading on the
+// same page.
+func (r *renderer) minHeight(b doc.Block) float64 {
+	switch b := b.(type) {
+	case *doc.Paragraph:
+		return r.minHeight(*b)
+	case *doc.List:
+		return r.minHeight(*b)
+	case *doc.Table:
+		return r.minHeight(*b)
+	case *doc.Figure:
+		return r.minHeight(*b)
+	case *doc.Callout:
+		return r.minHeight(*b)
+	case *doc.Code:
+		return r.minHeight(*b)
+	case *doc.TitleBlock:
+		return r.minHeight(*b)
+	case *doc.Heading:
+		return r.minHeight(*b)
+	case doc.Paragraph:
+		n := len(layoutSpans(b.Spans, styBody, r.w, r.w))
+		return float64(min(n, 2)) * leadBody
+	case doc.List:
+		return 2 * leadBody
+	case doc.Table:
+		tl := r.layoutTable(b, 0)
+		h := tl.capH + tl.headH
+		if len(tl.rowH) > 0 {
+			h += tl.rowH[0]
+		}
+		return h
+	case doc.Figure:
+		fl := r.layoutFigure(b)
+		return fl.total
+	case doc.Callout:
+		return min(r.layoutCallout(b).h, 3*leadBody)
+	case doc.Code:
+		return 3*leadCode + 2*codePad
+	case doc.TitleBlock:
+		return r.layoutTitleBlock(b).h
+	case doc.Heading:
+		return r.layoutHeading(b, 0).h + 2*leadBody
+	}
+	return 0
+}
+
+// ---- paragraphs and lists ----
+
+func (r *renderer) paragraph(p doc.Paragraph) {
+	lines := layoutSpans(p.Spans, styBody, r.w, r.w)
+	after := 6.5
+	if r.depth > 0 {
+		after = 2.5
+	}
+	r.flowLines(lines, styBody, 0, after)
+}
+
+// flowLines sets lines at the cursor, breaking pages between lines with
+// no single first line at the foot of a page and no single last line at
+// the head of the next.
+func (r *renderer) flowLines(lines []line, st textStyle, before, after float64) {
+	first := true
+	for i := 0; i < len(lines); {
+		rest := len(lines) - i
+		gap := 0.0
+		if first {
+			gap = before
+		}
+		n := int((r.room(gap) + 0.01) / st.lead)
+		if n < rest {
+			if first && n < 2 && !r.fresh {
+				r.newPage()
+				continue
+			}
+			if rest-n == 1 && n >= 2 && len(lines) >= 3 {
+				n--
+			}
+			n = max(n, 1)
+		} else {
+			n = rest
+		}
+		r.need(gap, float64(n)*st.lead)
+		for _, l := range lines[i : i+n] {
+			base := r.y + baselineOffset(st.size, st.lead)
+			if r.marker != nil {
+				r.drawMarker(base)
+			}
+			r.drawLine(l, r.x, base)
+			r.y += st.lead
+		}
+		i += n
+		first = false
+		if i < len(lines) {
+			r.newPage()
+		}
+	}
+	r.after(after)
+}
+
+func (r *renderer) drawMarker(baseline float64) {
+	m := r.marker
+	r.marker = nil
+	f := makeFrag(styMarker, m.text)
+	r.text(f, m.right-f.w, baseline)
+}
+
+// pendingMarker sets a list marker whose item does not start with text on
+// a line of its own.
+func (r *renderer) pendingMarker() {
+	if r.marker == nil {
+		return
+	}
+	r.need(0, leadBody)
+	r.drawMarker(r.y + baselineOffset(sizeBody, leadBody))
+	r.y += leadBody
+}
+
+func listMarker(ordered bool, depth, i int) string {
+	if !ordered {
+		return [...]string{"•", "–", "◦"}[depth%3]
+	}
+	switch depth % 3 {
+	case 1:
+		return string(rune('a'+i%26)) + ")"
+	case 2:
+		return roman(i+1) + "."
+	}
+	return fmt.Sprintf("%d.", i+1)
+}
+
+func roman(n int) string {
+	vals := []int{1000, 900, 500, 400, 100, 90, 50, 40, 10, 9, 5, 4, 1}
+	syms := []string{"m", "cm", "d", "cd", "c", "xc", "l", "xl", "x", "ix", "v", "iv", "i"}
+	var b strings.Builder
+	for i, v := range vals {
+		for n >= v {
+			b.WriteString(syms[i])
+			n -= v
+		}
+	}
+	return b.String()
+}
+
+func (r *renderer) list(l doc.List) {
+	indent := 15.0
+	if l.Ordered {
+		widest := 0.0
+		for i := range l.Items {
+			widest = max(widest, textWidthOf("sans", "", sizeBody, listMarker(true, r.depth, i)))
+		}
+		indent = max(indent, widest+6)
+	}
+	for i, item := range l.Items {
+		ox, ow := r.x, r.w
+		r.x += indent
+		r.w -= indent
+		r.marker = &marker{text: listMarker(l.Ordered, r.depth, i), right: r.x - 4.5}
+		r.depth++
+		for j, b := range item {
+			if _, ok := b.(doc.Paragraph); !ok {
+				if _, ok := b.(*doc.Paragraph); !ok {
+					r.pendingMarker()
+				}
+			}
+			var next doc.Block
+			if j+1 < len(item) {
+				next = item[j+1]
+			}
+			r.block(b, next)
+		}
+		r.pendingMarker()
+		r.depth--
+		r.x, r.w = ox, ow
+	}
+	if r.depth == 0 {
+		r.after(6.5)
+	} else {
+		r.after(2.5)
+	}
+}
+
+// ---- tables ----
+
+const (
+	cellPadX = 4.5
+	cellPadY = 3.2
+)
+
+type cellBox struct {
+	lines  []line
+	status doc.Status
+}
+
+type tableLayout struct {
+	widths []float64
+	align  []doc.Align
+	head   []cellBox
+	headH  float64
+	rows   [][]cellBox
+	rowH   []float64
+	cap    []line
+	capH   float64
+	label  string
+}
+
+func statusColors(s doc.Status) (fg, bg rgb) {
+	switch s {
+	case doc.Pass:
+		return colPass, colPassBg
+	case doc.Fail:
+		return colFail, colFailBg
+	case doc.Warn:
+		return colWarn, colWarnBg
+	}
+	return colInk, colWhite
+}
+
+// cellRuns is the styled text of a cell. A status cell always shows its
+// status word, so the outcome never rests on colour alone.
+func cellRuns(c doc.Cell) []styled {
+	st := styTable
+	if c.Strong {
+		st.bold = true
+	}
+	if c.Status == doc.NoStatus {
+		return []styled{{c.Text, st}}
+	}
+	fg, _ := statusColors(c.Status)
+	st.color = fg
+	label := c.Status.String()
+	bold := st
+	bold.bold = true
+	text := strings.TrimSpace(c.Text)
+	switch {
+	case text == "":
+		return []styled{{label, bold}}
+	case strings.Contains(strings.ToUpper(text), label):
+		return []styled{{text, bold}}
+	}
+	return []styled{{label + " ", bold}, {text, st}}
+}
+
+func headRuns(s string) []styled {
+	st := styTable
+	st.bold = true
+	return []styled{{s, st}}
+}
+
+// naturalWidths returns, per run list, the single-line width and the widest
+// unbreakable word.
+func naturalWidths(runs []styled) (nat, minw float64) {
+	for _, w := range words(runs) {
+		minw = max(minw, w.w)
+		nat += w.w
+		if w.space.text != "" {
+			nat += w.space.w
+		}
+	}
+	return nat, minw
+}
+
+func (r *renderer) layoutTable(t doc.Table, number int) *tableLayout {
+	ncol := len(t.Header)
+	for _, row := range t.Rows {
+		ncol = max(ncol, len(row))
+	}
+	tl := &tableLayout{}
+	if ncol == 0 {
+		return tl
+	}
+	headRunList := make([][]styled, 0)
+	if len(t.Header) > 0 {
+		for j := 0; j < ncol; j++ {
+			h := ""
+			if j < len(t.Header) {
+				h = t.Header[j]
+			}
+			headRunList = append(headRunList, headRuns(h))
+		}
+	}
+	rowRuns := make([][][]styled, len(t.Rows))
+	statuses := make([][]doc.Status, len(t.Rows))
+	for i, row := range t.Rows {
+		for j := 0; j < ncol; j++ {
+			c := doc.Cell{}
+			if j < len(row) {
+				c = row[j]
+			}
+			rowRuns[i] = append(rowRuns[i], cellRuns(c))
+			statuses[i] = append(statuses[i], c.Status)
+		}
+	}
+
+	// Column widths.
+	W := r.w
+	tl.widths = make([]float64, ncol)
+	if len(t.Widths) == ncol && positive(t.Widths) {
+		sum := 0.0
+		for _, v := range t.Widths {
+			sum += v
+		}
+		for j, v := range t.Widths {
+			tl.widths[j] = W * v / sum
+		}
+	} else {
+		nat := make([]float64, ncol)
+		mins := make([]float64, ncol)
+		measure := func(j int, runs []styled) {
+			n, m := naturalWidths(runs)
+			nat[j] = max(nat[j], n+2*cellPadX)
+			mins[j] = max(mins[j], m+2*cellPadX)
+		}
+		for j, runs := range headRunList {
+			measure(j, runs)
+		}
+		for _, row := range rowRuns {
+			for j, runs := range row {
+				measure(j, runs)
+			}
+		}
+		sumNat, sumMin := 0.0, 0.0
+		for j := range nat {
+			nat[j] = max(nat[j], 3*cellPadX)
+			mins[j] = max(mins[j], 3*cellPadX)
+			sumNat += nat[j]
+			sumMin += mins[j]
+		}
+		switch {
+		case sumNat <= W:
+			for j := range nat {
+				tl.widths[j] = nat[j] * W / sumNat
+			}
+		case sumMin >= W:
+			for j := range nat {
+				tl.widths[j] = mins[j] * W / sumMin
+			}
+		default:
+			slack := sumNat - sumMin
+			for j := range nat {
+				tl.widths[j] = mins[j] + (W-sumMin)*(nat[j]-mins[j])/slack
+			}
+		}
+	}
+	tl.align = make([]doc.Align, ncol)
+	copy(tl.align, t.Align)
+
+	box := func(runs []styled, j int, s doc.Status) cellBox {
+		inner := tl.widths[j] - 2*cellPadX
+		return cellBox{lines: layoutStyled(runs, inner, inner), status: s}
+	}
+	height := func(cells []cellBox) float64 {
+		n := 1
+		for _, c := range cells {
+			n = max(n, len(c.lines))
+		}
+		return float64(n)*leadTable + 2*cellPadY
+	}
+	for j, runs := range headRunList {
+		tl.head = append(tl.head, box(runs, j, doc.NoStatus))
+	}
+	if len(tl.head) > 0 {
+		tl.headH = height(tl.head)
+	}
+	for i, row := range rowRuns {
+		cells := make([]cellBox, ncol)
+		for j, runs := range row {
+			cells[j] = box(runs, j, statuses[i][j])
+		}
+		tl.rows = append(tl.rows, cells)
+		tl.rowH = append(tl.rowH, height(cells))
+	}
+	if number > 0 {
+		tl.label = fmt.Sprintf("Table %d", number)
+	}
+	if t.Caption != "" {
+		tl.cap = captionLines(tl.label, t.Caption, r.w)
+		tl.capH = float64(len(tl.cap))*leadCaption + 3
+	}
+	return tl
+}
+
+func positive(v []float64) bool {
+	for _, x := range v {
+		if !(x > 0) {
+			return false
+		}
+	}
+	return true
+}
+
+// captionLines lays out "Label – caption" with the label in bold.
+func captionLines(label, caption string, width float64) []line {
+	bold := styCaption
+	bold.bold = true
+	var runs []styled
+	if label != "" {
+		runs = append(runs, styled{label, bold}, styled{" – ", styCaption})
+	}
+	runs = append(runs, styled{caption, styCaption})
+	return layoutStyled(runs, width, width)
+}
+
+func (r *renderer) table(t doc.Table) {
+	number := 0
+	if t.Caption != "" {
+		r.tab++
+		number = r.tab
+	}
+	tl := r.layoutTable(t, number)
+	if len(tl.widths) == 0 {
+		return
+	}
+	first := tl.capH + tl.headH
+	if len(tl.rowH) > 0 {
+		first += tl.rowH[0]
+	}
+	r.need(8, first)
+	y := r.y
+	for _, l := range tl.cap {
+		r.drawLine(l, r.x, y+baselineOffset(sizeCaption, leadCaption))
+		y += leadCaption
+	}
+	if len(tl.cap) > 0 {
+		y += 3
+	}
+	y = r.tableHead(tl, y)
+	onPage := 0
+	for i, cells := range tl.rows {
+		h := tl.rowH[i]
+		if onPage > 0 && y+h > bodyBottom {
+			r.rule(r.x, y, r.x+r.w, 0.9, colAccent)
+			r.newPage()
+			r.fresh = false
+			y = r.y
+			cont := "(continued)"
+			if tl.label != "" {
+				cont = tl.label + " (continued)"
+			}
+			st := styCaption
+			st.color = colMuted
+			st.italic = true
+			r.simpleText(cont, st, r.x, y+baselineOffset(sizeCaption, leadCaption))
+			y += leadCaption + 3
+			y = r.tableHead(tl, y)
+			onPage = 0
+		}
+		if onPage > 0 {
+			r.rule(r.x, y, r.x+r.w, 0.3, colRule)
+		}
+		r.tableRow(tl, cells, y, h)
+		y += h
+		onPage++
+	}
+	r.rule(r.x, y, r.x+r.w, 0.9, colAccent)
+	r.y = y
+	r.fresh = false
+	r.after(11)
+}
+
+func (r *renderer) tableHead(tl *tableLayout, y float64) float64 {
+	r.rule(r.x, y, r.x+r.w, 0.9, colAccent)
+	if len(tl.head) == 0 {
+		return y
+	}
+	r.fillRect(r.x, y+0.45, r.w, tl.headH-0.45, colAccentBg)
+	r.tableRow(tl, tl.head, y, tl.headH)
+	y += tl.headH
+	r.rule(r.x, y, r.x+r.w, 0.5, colAccent)
+	return y
+}
+
+func (r *renderer) tableRow(tl *tableLayout, cells []cellBox, y, h float64) {
+	x := r.x
+	for j, c := range cells {
+		w := tl.widths[j]
+		if c.status != doc.NoStatus {
+			_, bg := statusColors(c.status)
+			r.fillRect(x+0.8, y+0.8, w-1.6, h-1.6, bg)
+		}
+		ty := y + cellPadY
+		for _, l := range c.lines {
+			ax := x + cellPadX
+			inner := w - 2*cellPadX
+			switch tl.align[j] {
+			case doc.Right:
+				ax += inner - l.w
+			case doc.Center:
+				ax += (inner - l.w) / 2
+			}
+			r.drawLine(l, ax, ty+baselineOffset(sizeTable, leadTable))
+			ty += leadTable
+		}
+		x += w
+	}
+}
+
+// ---- title block ----
+
+const (
+	tbPad       = 7.0
+	tbLabelSize = 6.6
+	tbLabelLead = 9.5
+	tbValueLead = 12.4
+	tbTitleLead = 21.0
+)
+
+type titleLayout struct {
+	title  []line
+	titleH float64
+	cols   int
+	cells  [][]tbCell // rows of cells
+	rowH   []float64
+	h      float64
+}
+
+type tbCell struct {
+	label string
+	value []line
+	span  int
+}
+
+func (r *renderer) layoutTitleBlock(tb doc.TitleBlock) titleLayout {
+	tl := titleLayout{}
+	tst := textStyle{size: sizeTitle, lead: tbTitleLead, color: colInk, bold: true}
+	tl.title = layoutSpans(plainSpans(tb.Title), tst, r.w-2*tbPad, r.w-2*tbPad)
+	tl.titleH = float64(len(tl.title))*tbTitleLead + 2*tbPad + 12
+	n := len(tb.Fields)
+	switch {
+	case n >= 5:
+		tl.cols = 3
+	case n >= 2:
+		tl.cols = 2
+	default:
+		tl.cols = 1
+	}
+	colW := r.w / float64(tl.cols)
+	vst := textStyle{size: sizeBody, lead: tbValueLead, color: colInk}
+	for i := 0; i < n; i += tl.cols {
+		var row []tbCell
+		end := min(i+tl.cols, n)
+		hmax := 0.0
+		for k := i; k < end; k++ {
+			span := 1
+			if k == end-1 {
+				span = tl.cols - (end - 1 - i)
+			}
+			inner := colW*float64(span) - 2*tbPad
+			c := tbCell{label: tb.Fields[k][0], value: layoutSpans(plainSpans(tb.Fields[k][1]), vst, inner, inner), span: span}
+			row = append(row, c)
+			hmax = max(hmax, tbPad-1+tbLabelLead+float64(len(c.value))*tbValueLead+tbPad-2)
+		}
+		tl.cells = append(tl.cells, row)
+		tl.rowH = append(tl.rowH, hmax)
+	}
+	tl.h = tl.titleH
+	for _, h := range tl.rowH {
+		tl.h += h
+	}
+	return tl
+}
+
+func (r *renderer) titleBlock(tb doc.TitleBlock) {
+	tl := r.layoutTitleBlock(tb)
+	r.need(0, tl.h)
+	x, y, w := r.x, r.y, r.w
+	// Title band.
+	r.fillRect(x, y, w, tl.titleH, colAccentBg)
+	kicker := textStyle{size: tbLabelSize + 0.4, lead: tbLabelLead, color: colAccent, bold: true}
+	r.simpleText("CALCULATION MEMO", kicker, x+tbPad, y+tbPad+7)
+	ty := y + tbPad + 12
+	for _, l := range tl.title {
+		r.drawLine(l, x+tbPad, ty+baselineOffset(sizeTitle, tbTitleLead))
+		ty += tbTitleLead
+	}
+	gy := y + tl.titleH
+	r.rule(x, gy, x+w, 0.8, colAccent)
+	colW := w / float64(tl.cols)
+	lst := textStyle{size: tbLabelSize, lead: tbLabelLead, color: colMuted, bold: true}
+	for i, row := range tl.cells {
+		h := tl.rowH[i]
+		cx := x
+		for k, c := range row {
+			cw := colW * float64(c.span)
+			if k > 0 {
+				r.vrule(cx, gy, gy+h, 0.4, colRule)
+			}
+			r.simpleText(strings.ToUpper(c.label), lst, cx+tbPad, gy+tbPad-1+7)
+			vy := gy + tbPad - 1 + tbLabelLead
+			for _, l := range c.value {
+				r.drawLine(l, cx+tbPad, vy+baselineOffset(sizeBody, tbValueLead))
+				vy += tbValueLead
+			}
+			cx += cw
+		}
+		if i+1 < len(tl.cells) {
+			r.rule(x, gy+h, x+w, 0.4, colRule)
+		}
+		gy += h
+	}
+	r.strokeRect(x, y, w, tl.h, 1.0, colAccent)
+	r.y = y + tl.h
+	r.after(16)
+}
+
+// ---- figures ----
+
+type figureLayout struct {
+	w, h  float64
+	cap   []line
+	total float64
+}
+
+const figureCaptionGap = 6
+
+func (r *renderer) layoutFigure(f doc.Figure) figureLayout {
+	w, h := f.Width.Points(), f.Height.Points()
+	if w <= 0 {
+		w = r.w
+	}
+	if h <= 0 {
+		h = w * 0.62
+	}
+	if w > r.w {
+		h *= r.w / w
+		w = r.w
+	}
+	fl := figureLayout{w: w, h: h}
+	num := f.Number
+	if num == 0 {
+		num = r.fig + 1
+	}
+	if f.Caption != "" {
+		fl.cap = captionLines(fmt.Sprintf("Figure %d", num), f.Caption, min(r.w, max(w, 0.75*r.w)))
+	}
+	maxH := bodyBottom - bodyTop - float64(len(fl.cap))*leadCaption - figureCaptionGap
+	if fl.h > maxH {
+		fl.w *= maxH / fl.h
+		fl.h = maxH
+	}
+	fl.total = fl.h + figureCaptionGap + float64(len(fl.cap))*leadCaption
+	return fl
+}
+
+func (r *renderer) figure(f doc.Figure) {
+	fl := r.layoutFigure(f)
+	if f.Number > 0 {
+		r.fig = f.Number
+	} else {
+		r.fig++
+	}
+	r.need(8, fl.total)
+	x := r.x + (r.w-fl.w)/2
+	if !r.dry && f.Draw != nil {
+		c := newCanvas(r.pdf, r.fonts, pageH, x, r.y, vgLen(fl.w), vgLen(fl.h))
+		c.Begin()
+		f.Draw(c, vgLen(fl.w), vgLen(fl.h))
+		c.End()
+		r.pdf.SetDashPattern([]float64{}, 0)
+		r.pdf.SetAlpha(1, "Normal")
+	}
+	y := r.y + fl.h + figureCaptionGap
+	for _, l := range fl.cap {
+		r.drawLine(l, r.x+(r.w-l.w)/2, y+baselineOffset(sizeCaption, leadCaption))
+		y += leadCaption
+	}
+	r.y = y
+	r.after(14)
+}
+
+// ---- callouts ----
+
+const (
+	calloutPad = 7.0
+	calloutBar = 3.0
+)
+
+type calloutLayout struct {
+	head  []line
+	body  []line
+	h     float64
+	fg    rgb
+	bg    rgb
+	inner float64
+}
+
+func severityColors(s doc.Severity) (fg, bg rgb) {
+	switch s {
+	case doc.Warning:
+		return colFail, colFailBg
+	case doc.Caution:
+		return colWarn, colWarnBg
+	}
+	return colAccent, colAccentBg
+}
+
+func (r *renderer) layoutCallout(c doc.Callout) calloutLayout {
+	cl := calloutLayout{}
+	cl.fg, cl.bg = severityColors(c.Severity)
+	cl.inner = r.w - calloutBar - 2*calloutPad
+	label := c.Severity.String()
+	if c.Severity != doc.Note {
+		label = "⚠ " + label
+	}
+	lst := textStyle{size: sizeSmall + 0.5, lead: leadBody, color: cl.fg, bold: true}
+	tst := textStyle{size: sizeBody, lead: leadBody, color: colInk, bold: true}
+	runs := []styled{{label, lst}}
+	if c.Title != "" {
+		runs = append(runs, styled{"  " + c.Title, tst})
+	}
+	cl.head = layoutStyled(runs, cl.inner, cl.inner)
+	cl.body = layoutSpans(c.Spans, styBody, cl.inner, cl.inner)
+	if len(c.Spans) == 0 {
+		cl.body = nil
+	}
+	cl.h = 2*calloutPad + float64(len(cl.head)+len(cl.body))*leadBody
+	return cl
+}
+
+func (r *renderer) callout(c doc.Callout) {
+	cl := r.layoutCallout(c)
+	if cl.h > bodyBottom-bodyTop {
+		// Too long to box on one page: set it as plain paragraphs.
+		r.flowLines(cl.head, styBody, 8, 0)
+		r.flowLines(cl.body, styBody, 0, 8)
+		return
+	}
+	r.need(8, cl.h)
+	x, y := r.x, r.y
+	r.fillRect(x, y, r.w, cl.h, cl.bg)
+	r.fillRect(x, y, calloutBar, cl.h, cl.fg)
+	ty := y + calloutPad
+	tx := x + calloutBar + calloutPad
+	for _, l := range append(append([]line(nil), cl.head...), cl.body...) {
+		r.drawLine(l, tx, ty+baselineOffset(sizeBody, leadBody))
+		ty += leadBody
+	}
+	r.y = y + cl.h
+	r.after(10)
+}
+
+// ---- code ----
+
+const codePad = 6.0
+
+func codeLines(text string, width float64) []line {
+	text = strings.TrimRight(strings.ReplaceAll(text, "\t", "    "), "\n")
+	var out []line
+	for _, raw := range strings.Split(text, "\n") {
+		raw = strings.TrimRight(raw, " \r")
+		if raw == "" {
+			out = append(out, line{})
+			continue
+		}
+		// Hard-wrap: keep every space, break between characters.
+		f := makeFrag(styCode, raw)
+		w := word{frags: []frag{f}, w: f.w}
+		for _, piece := range splitWord(w, width, width) {
+			out = append(out, line{frags: piece.frags, w: piece.w})
+		}
+	}
+	return out
+}
+
+func (r *renderer) code(c doc.Code) {
+	lines := codeLines(c.Text, r.w-2*codePad)
+	for i := 0; i < len(lines); {
+		n := int((r.room(6) - 2*codePad + 0.01) / leadCode)
+		if n < min(3, len(lines)-i) && !r.fresh {
+			r.newPage()
+			continue
+		}
+		n = max(1, min(n, len(lines)-i))
+		h := float64(n)*leadCode + 2*codePad
+		r.need(6, h)
+		r.fillRect(r.x, r.y, r.w, h, colCodeBg)
+		r.vrule(r.x, r.y, r.y+h, 1.2, colRule)
+		y := r.y + codePad
+		for _, l := range lines[i : i+n] {
+			r.drawLine(l, r.x+codePad, y+baselineOffset(sizeCode, leadCode))
+			y += leadCode
+		}
+		r.y += h
+		i += n
+		if i < len(lines) {
+			r.newPage()
+		}
+	}
+	r.after(8)
+}

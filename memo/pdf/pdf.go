@@ -1,0 +1,339 @@
+// Package pdf typesets a memo document (memo/doc) as an A4 PDF.
+//
+// The house style: DejaVu type embedded as subsets, one accent colour (a
+// deep teal) on neutral greys, numbered level-1 headings, a bordered title
+// block on page 1, a running header (title, document id) and footer
+// (revision, date, "Page X of Y") on every page, and a PDF outline built
+// from the headings. Figures are drawn as vector graphics straight into the
+// page through a vg.Canvas implementation (Canvas).
+//
+// The output is deterministic: the same Document gives the same bytes. All
+// dates come from Meta.Created, resources are written in sorted order and
+// nothing depends on map iteration order or the clock.
+package pdf
+
+import (
+	"bytes"
+	"fmt"
+	"strings"
+	"time"
+
+	"github.com/go-pdf/fpdf"
+
+	"coilmemo/memo/doc"
+)
+
+// Render typesets d and returns the PDF file.
+func Render(d *doc.Document) ([]byte, error) {
+	return render(d, options{compress: true})
+}
+
+type options struct {
+	compress bool
+	// onText, if set, sees every string set on a page (tests).
+	onText func(page int, s string)
+}
+
+func render(d *doc.Document, o options) (out []byte, err error) {
+	defer func() {
+		if p := recover(); p != nil {
+			out, err = nil, fmt.Errorf("pdf: render: %v", p)
+		}
+	}()
+	// Pass 1 lays the document out without setting any text, to learn the
+	// page count; pass 2 sets everything, with "Page X of Y" known exactly
+	// (so it can be right-aligned with the true width of Y).
+	dry := newRenderer(d, options{}, 0, true)
+	if err := dry.run(); err != nil {
+		return nil, err
+	}
+	r := newRenderer(d, o, dry.pdf.PageNo(), false)
+	if err := r.run(); err != nil {
+		return nil, err
+	}
+	if r.pdf.PageNo() != dry.pdf.PageNo() {
+		return nil, fmt.Errorf("pdf: layout passes disagree: %d pages, then %d", dry.pdf.PageNo(), r.pdf.PageNo())
+	}
+	var buf bytes.Buffer
+	if err := r.pdf.Output(&buf); err != nil {
+		return nil, fmt.Errorf("pdf: %w", err)
+	}
+	return buf.Bytes(), nil
+}
+
+// epoch stands in for a missing creation date so output stays reproducible.
+var epoch = time.Date(2000, 1, 1, 0, 0, 0, 0, time.UTC)
+
+type renderer struct {
+	pdf    *fpdf.Fpdf
+	fonts  *fontSet
+	meta   doc.Meta
+	blocks []doc.Block
+	total  int  // page count, 0 while unknown
+	dry    bool // lay out only
+	onText func(page int, s string)
+
+	x, w  float64 // current column
+	y     float64 // cursor, points from the top edge
+	fresh bool    // nothing placed on this page yet
+	space float64 // pending vertical space before the next block
+
+	h1, fig, tab int
+	depth        int     // list nesting
+	marker       *marker // list marker waiting for its item's first line
+	outline      int     // level of the last bookmark, -1 before the first
+}
+
+type marker struct {
+	text  string
+	right float64 // right edge of the marker
+}
+
+func newRenderer(d *doc.Document, o options, total int, dry bool) *renderer {
+	pdf := fpdf.NewCustom(&fpdf.InitType{OrientationStr: "P", UnitStr: "pt", SizeStr: "A4"})
+	r := &renderer{
+		pdf:     pdf,
+		fonts:   &fontSet{pdf: pdf},
+		meta:    d.Meta,
+		blocks:  d.Blocks,
+		total:   total,
+		dry:     dry,
+		onText:  o.onText,
+		outline: -1,
+	}
+	created := d.Meta.Created
+	if created.IsZero() {
+		created = epoch
+	}
+	created = created.UTC()
+	pdf.SetCompression(o.compress)
+	pdf.SetCatalogSort(true)
+	pdf.SetCreationDate(created)
+	pdf.SetModificationDate(created)
+	pdf.SetTitle(d.Meta.Title, true)
+	pdf.SetSubject(d.Meta.Subject, true)
+	pdf.SetAuthor(d.Meta.Author, true)
+	pdf.SetKeywords(d.Meta.Keywords, true)
+	pdf.SetCreator("coilmemo", true)
+	pdf.SetProducer("coilmemo", true)
+	pdf.SetDisplayMode("fullwidth", "OneColumn")
+	pdf.SetMargins(marginLeft, bodyTop, marginRight)
+	pdf.SetAutoPageBreak(false, 0)
+	pdf.SetHeaderFuncMode(r.header, false)
+	pdf.SetFooterFunc(r.footer)
+	return r
+}
+
+func (r *renderer) run() error {
+	r.x, r.w = marginLeft, textWidth
+	r.newPage()
+	r.blockList(r.blocks)
+	return r.pdf.Error()
+}
+
+// newPage starts a page; the current column (list indentation) carries on.
+func (r *renderer) newPage() {
+	r.pdf.AddPage()
+	r.y = bodyTop
+	r.fresh = true
+	r.space = 0
+}
+
+// need places the cursor for a block of height h that wants gap points of
+// space above it, starting a new page if the block does not fit. Space is
+// collapsed with the previous block's space below and dropped at the top of
+// a page.
+func (r *renderer) need(gap, h float64) {
+	if r.space < gap {
+		r.space = gap
+	}
+	if r.fresh {
+		r.space = 0
+	}
+	if !r.fresh && r.y+r.space+h > bodyBottom+0.01 {
+		r.newPage()
+	}
+	r.y += r.space
+	r.space = 0
+	r.fresh = false
+}
+
+// room is the height left on the page after the pending space.
+func (r *renderer) room(gap float64) float64 {
+	if r.fresh {
+		return bodyBottom - r.y
+	}
+	return bodyBottom - r.y - max(r.space, gap)
+}
+
+func (r *renderer) after(gap float64) { r.space = gap }
+
+func (r *renderer) blockList(bs []doc.Block) {
+	for i, b := range bs {
+		var next doc.Block
+		if i+1 < len(bs) {
+			next = bs[i+1]
+		}
+		r.block(b, next)
+	}
+}
+
+func (r *renderer) block(b doc.Block, next doc.Block) {
+	switch b := b.(type) {
+	case doc.Heading:
+		r.heading(b, next)
+	case *doc.Heading:
+		r.heading(*b, next)
+	case doc.Paragraph:
+		r.paragraph(b)
+	case *doc.Paragraph:
+		r.paragraph(*b)
+	case doc.List:
+		r.list(b)
+	case *doc.List:
+		r.list(*b)
+	case doc.Table:
+		r.table(b)
+	case *doc.Table:
+		r.table(*b)
+	case doc.Figure:
+		r.figure(b)
+	case *doc.Figure:
+		r.figure(*b)
+	case doc.Callout:
+		r.callout(b)
+	case *doc.Callout:
+		r.callout(*b)
+	case doc.TitleBlock:
+		r.titleBlock(b)
+	case *doc.TitleBlock:
+		r.titleBlock(*b)
+	case doc.Code:
+		r.code(b)
+	case *doc.Code:
+		r.code(*b)
+	case doc.PageBreak, *doc.PageBreak:
+		if !r.fresh {
+			r.newPage()
+		}
+	case nil:
+	default:
+		r.pdf.SetError(fmt.Errorf("pdf: unknown block type %T", b))
+	}
+}
+
+// ---- running header and footer ----
+
+var (
+	styHeader     = textStyle{size: 7.5, lead: 9, color: colMuted}
+	styHeaderBold = textStyle{size: 7.5, lead: 9, color: colAccent, bold: true}
+)
+
+func (r *renderer) header() {
+	if r.dry {
+		return
+	}
+	base := mm(12.2)
+	id := r.meta.DocID
+	idW := 0.0
+	if id != "" {
+		idW = textWidthOf("sans", "B", styHeaderBold.size, id)
+		r.simpleText(id, styHeaderBold, pageW-marginRight-idW, base)
+	}
+	title := fit(r.meta.Title, styHeader, textWidth-idW-mm(8))
+	if title != "" {
+		r.simpleText(title, styHeader, marginLeft, base)
+	}
+	r.rule(marginLeft, mm(14.2), pageW-marginRight, 0.6, colAccent)
+}
+
+func (r *renderer) footer() {
+	if r.dry {
+		return
+	}
+	r.rule(marginLeft, pageH-mm(14.5), pageW-marginRight, 0.35, colRule)
+	base := pageH - mm(10.8)
+	var left []string
+	if r.meta.DocID != "" {
+		left = append(left, r.meta.DocID)
+	}
+	if r.meta.Revision != "" {
+		left = append(left, "Revision "+r.meta.Revision)
+	}
+	if !r.meta.Created.IsZero() {
+		left = append(left, r.meta.Created.UTC().Format("2006-01-02"))
+	}
+	if len(left) > 0 {
+		r.simpleText(strings.Join(left, "  ·  "), styHeader, marginLeft, base)
+	}
+	page := fmt.Sprintf("Page %d of %d", r.pdf.PageNo(), r.total)
+	w := textWidthOf("sans", "", styHeader.size, page)
+	r.simpleText(page, styHeader, pageW-marginRight-w, base)
+}
+
+// fit shortens s with an ellipsis until it is at most w wide.
+func fit(s string, st textStyle, w float64) string {
+	fam, sty := st.face()
+	if textWidthOf(fam, sty, st.size, s) <= w {
+		return s
+	}
+	rs := []rune(s)
+	for len(rs) > 0 {
+		rs = rs[:len(rs)-1]
+		t := strings.TrimRight(string(rs), " ") + "…"
+		if textWidthOf(fam, sty, st.size, t) <= w {
+			return t
+		}
+	}
+	return ""
+}
+
+// ---- drawing helpers ----
+
+func (r *renderer) rule(x0, y, x1, width float64, c rgb) {
+	if r.dry {
+		return
+	}
+	r.pdf.SetLineWidth(width)
+	r.pdf.SetDrawColor(c.r, c.g, c.b)
+	r.pdf.Line(x0, y, x1, y)
+}
+
+func (r *renderer) vrule(x, y0, y1, width float64, c rgb) {
+	if r.dry {
+		return
+	}
+	r.pdf.SetLineWidth(width)
+	r.pdf.SetDrawColor(c.r, c.g, c.b)
+	r.pdf.Line(x, y0, x, y1)
+}
+
+func (r *renderer) fillRect(x, y, w, h float64, c rgb) {
+	if r.dry {
+		return
+	}
+	r.pdf.SetFillColor(c.r, c.g, c.b)
+	r.pdf.Rect(x, y, w, h, "F")
+}
+
+func (r *renderer) strokeRect(x, y, w, h, width float64, c rgb) {
+	if r.dry {
+		return
+	}
+	r.pdf.SetLineWidth(width)
+	r.pdf.SetDrawColor(c.r, c.g, c.b)
+	r.pdf.Rect(x, y, w, h, "D")
+}
+
+// bookmark adds an outline entry at the cursor.
+func (r *renderer) bookmark(text string, level int) {
+	if level > r.outline+1 {
+		level = r.outline + 1
+	}
+	r.outline = level
+	if r.dry {
+		return
+	}
+	r.fonts.use("sans", "", sizeBody) // the outline text is UTF-16 only with a UTF-8 font current
+	r.pdf.Bookmark(text, level, r.y)
+}
