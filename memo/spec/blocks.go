@@ -24,7 +24,7 @@ func (p *parser) conditionsBlock(b *rawBlock) {
 	}
 	given := map[string]bool{}
 	vacuum, vacuumLine := false, 0
-	hLine := 0
+	hLine, stillAirEntry := 0, -1
 	for _, e := range p.keyValues(b, false) {
 		given[e.key] = true
 		si := ""
@@ -60,7 +60,8 @@ func (p *parser) conditionsBlock(b *rawBlock) {
 			switch {
 			case v == "still-air":
 				cond.Cooling.Vacuum = false
-				si = "still-air (h = " + units.Format(stillAirH, units.HeatTransfer) + ", assumed)"
+				si = "still-air"
+				stillAirEntry = len(p.spec.Entries)
 			case v == "vacuum":
 				cond.Cooling.Vacuum, cond.Cooling.H = true, 0
 				vacuum, vacuumLine = true, e.line
@@ -106,6 +107,9 @@ func (p *parser) conditionsBlock(b *rawBlock) {
 	}
 	if vacuum {
 		cond.Cooling.H, cond.Cooling.HGiven = 0, false
+	}
+	if stillAirEntry >= 0 && hLine == 0 {
+		p.spec.Entries[stillAirEntry].SI = "still-air (h = " + units.Format(stillAirH, units.HeatTransfer) + ", assumed)"
 	}
 	add := func(key, si string) {
 		if !given[key] {

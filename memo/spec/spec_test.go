@@ -523,3 +523,42 @@ func FuzzParse(f *testing.F) {
 		}
 	})
 }
+
+func TestInsulationAndCooling(t *testing.T) {
+	for in, want := range map[string]float64{"F": 428.15, "class F": 428.15, "Class h": 453.15, "155": 428.15,
+		"155 degC": 428.15, "155 °C": 428.15, "428.15 K": 428.15, "B": 403.15, "N": 473.15} {
+		got, _, err := parseInsulation(in)
+		if err != nil || !near(got, want) {
+			t.Errorf("parseInsulation(%q) = %v, %v; want %v", in, got, err, want)
+		}
+	}
+	cases := []struct {
+		body   string
+		h      float64
+		given  bool
+		vacuum bool
+		si     string
+	}{
+		{"cooling = still-air\n", 10, false, false, "still-air (h = 10 W/(m²·K), assumed)"},
+		{"cooling = still-air\nh = 6 W/m2K\n", 6, true, false, "still-air"},
+		{"h = 25 W/(m2 K)\n", 25, true, false, ""},
+		{"cooling = h = 12 W/m2K\n", 12, true, false, "h = 12 W/(m²·K)"},
+		{"cooling = vacuum\n", 0, false, true, "vacuum (radiation only)"},
+	}
+	for _, c := range cases {
+		s, ds := Parse("c.md", []byte(fenced("coil", coilBody)+fenced("conditions", c.body)))
+		if len(ds) > 0 {
+			t.Errorf("%q: %s", c.body, ds.Error())
+			continue
+		}
+		co := s.Design.Conditions.Cooling
+		if co.H != c.h || co.HGiven != c.given || co.Vacuum != c.vacuum {
+			t.Errorf("%q: cooling %+v", c.body, co)
+		}
+		for _, e := range s.Entries {
+			if e.Key == "cooling" && !e.Default && e.SI != c.si {
+				t.Errorf("%q: cooling entry SI %q, want %q", c.body, e.SI, c.si)
+			}
+		}
+	}
+}
