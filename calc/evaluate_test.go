@@ -56,17 +56,15 @@ func TestEvaluateSample(t *testing.T) {
 		{Quantity: "temperature", Relation: AtMost, Required: CelsiusToKelvin(120)}, // PASS
 		{Quantity: "power", Relation: AtMost, Required: 1e-3},                       // ≈ 0.4 W: FAIL
 		{Quantity: "mass", Relation: AtMost, Required: 10},                          // PASS
-		{Quantity: "inductance", Relation: AtMost, Required: 1},                     // rectangle NaN: FAIL
+		{Quantity: "inductance", Relation: AtMost, Required: 1e-9},                  // ≈ mH: FAIL
 		{Quantity: "torque", Relation: AtLeast, Required: 1e-6},                     // ≈ 3e-6: PASS
 		{Quantity: "no-such-thing", Relation: AtMost, Required: 1},                  // FAIL
 	}
 	r := Evaluate(d)
-	// Known-unknowns: thin-coil fill factor, the rectangle's inductance and
-	// what follows from it. Nothing else may be NaN.
+	// Known-unknowns: thin-coil fill factor, and the insulation margin of
+	// coils without a class. Nothing else may be NaN.
 	allowed := map[string]bool{
 		"torquer.Winding.FillFactor": true, "helmholtz.Winding.FillFactor": true, "frame.Winding.FillFactor": true,
-		"frame.Inductance": true, "frame.TimeConstant": true, "frame.Energy": true,
-		"torquer.InsulationMargin": false,
 	}
 	for _, c := range r.Coils {
 		var nans []string
@@ -130,9 +128,6 @@ func TestEvaluateSample(t *testing.T) {
 	}
 	// Every quantity name is computable.
 	for q := range LimitQuantities {
-		if q == "inductance" {
-			continue
-		}
 		if v := LimitValue(q, r); math.IsNaN(v) {
 			t.Errorf("limit quantity %s is NaN", q)
 		}

@@ -154,10 +154,43 @@ func TestPairAndRingInductance(t *testing.T) {
 		}
 	}
 	checkRel(t, "row sum vs direct double sum", Ms, direct, 1e-12)
-	// Rectangle: no method, NaN.
+	// Rectangle: N² times the single-turn formula with the bundle radius.
 	r := Coil{Form: Rectangle, Width: 0.1, Height: 0.1, Turns: 10, Wire: WireFromGauge(24, Copper())}
-	if !math.IsNaN(CoilInductance(r, LayOut(r))) {
-		t.Error("rectangle inductance should be NaN")
+	br := BundleDiameter(r.Wire.Outer, 10) / 2
+	checkRel(t, "rectangle coil", CoilInductance(r, LayOut(r)), RectangleInductance(0.1, 0.1, br, 10), 1e-15)
+}
+
+func TestRectangleInductance(t *testing.T) {
+	// Square of side s in round wire of radius ρ, uniform current:
+	// L = 2μ0 s/π (ln(s/ρ) − 0.77401 + 1/4) (Grover 1946, square of round
+	// wire, −0.77401 being the constant without the internal-inductance term
+	// Y/4; recalled from memory).
+	s, rho := 0.2, 5e-4
+	checkRel(t, "square", RectangleInductance(s, s, rho, 1), 2*Mu0*s/math.Pi*(math.Log(s/rho)-0.77401+0.25), 2e-6)
+	// The mutual inductance of two parallel wires ℓ long, d apart, that the
+	// formula subtracts, against the Neumann double integral
+	// μ0/(4π) ∫∫ dx dx' / √((x − x')² + d²) by quadrature.
+	l, d := 0.15, 0.08
+	q := 0.0
+	for i := range 4 {
+		for j := range 4 {
+			lo1, hi1 := float64(i)*l/4, float64(i+1)*l/4
+			lo2, hi2 := float64(j)*l/4, float64(j+1)*l/4
+			q += quad.Fixed(func(x float64) float64 {
+				return quad.Fixed(func(y float64) float64 { return 1 / math.Hypot(x-y, d) }, lo2, hi2, 32, quad.Legendre{}, 0)
+			}, lo1, hi1, 32, quad.Legendre{}, 0)
+		}
+	}
+	q *= Mu0 / (4 * math.Pi)
+	checkRel(t, "parallel-wire mutual", Mu0/(2*math.Pi)*(l*math.Asinh(l/d)-math.Hypot(l, d)+d), q, 1e-12)
+	// Rectangle = 2 L(w) + 2 L(h) − 2 M(w at h) − 2 M(h at w), each part as
+	// stated in the doc comment.
+	w, h := 0.15, 0.08
+	self := func(l float64) float64 { return Mu0*l/(2*math.Pi)*(math.Log(2*l/rho)-1) + Mu0*l/(8*math.Pi) }
+	mut := func(l, d float64) float64 { return Mu0 / (2 * math.Pi) * (l*math.Asinh(l/d) - math.Hypot(l, d) + d) }
+	checkRel(t, "rectangle parts", RectangleInductance(w, h, rho, 3), 9*(2*self(w)+2*self(h)-2*mut(w, h)-2*mut(h, w)), 1e-13)
+	if !math.IsNaN(RectangleInductance(0.1, 0.1, 0.06, 1)) {
+		t.Error("bundle wider than the coil: NaN expected")
 	}
 }
 

@@ -143,19 +143,19 @@ func WindingMutual(w1, w2 Winding, dz float64) float64 {
 // multilayer coil by TurnSumInductance, or by CellInductance when the exact
 // sum would need more than 4 million Maxwell evaluations. A Pair is its two coils in series,
 // L = 2 L₁ ± 2 M with M the WindingMutual at the spacing (thin: N² times the
-// filament mutual), minus when opposing. NaN for a Rectangle (no method
-// implemented) and wherever the method's data are missing.
+// filament mutual), minus when opposing. A Rectangle by RectangleInductance
+// with the bundle radius. NaN wherever the method's data are missing.
 func CoilInductance(c Coil, w Winding) float64 {
 	n := w.TurnCount()
-	if c.Form == Rectangle || n == 0 {
-		if n == 0 && c.Form != Rectangle {
-			return 0
-		}
-		return math.NaN()
+	if n == 0 {
+		return 0
 	}
 	outer := c.Wire.Outer
 	if !(outer > 0) {
 		outer = c.Wire.Bare
+	}
+	if c.Form == Rectangle {
+		return RectangleInductance(c.Width, c.Height, BundleDiameter(outer, n)/2, n)
 	}
 	rm := c.MeanDiameter / 2
 	var L float64
