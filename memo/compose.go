@@ -272,8 +272,12 @@ func (c *composer) inputs() {
 	c.para(templates.Text("inputs", map[string]string{"File": c.j.Spec.File}))
 	var rows [][]doc.Cell
 	for _, e := range c.j.Spec.Entries {
+		raw, line := e.Raw, fmt.Sprint(e.Line)
+		if e.Default {
+			raw, line = "(default)", ""
+		}
 		rows = append(rows, []doc.Cell{
-			{Text: e.Block}, {Text: e.Key}, {Text: e.Raw}, {Text: e.SI}, {Text: fmt.Sprint(e.Line)},
+			{Text: e.Block}, {Text: e.Key}, {Text: raw}, {Text: e.SI}, {Text: line},
 		})
 	}
 	c.add(doc.Table{Caption: "Spec parameters as written and in SI units",

@@ -291,7 +291,18 @@ func (p *parser) coilBlock(b *rawBlock, index int) *coilIn {
 		p.entry(blockCoil, e, si)
 		ci.entries = append(ci.entries, len(p.spec.Entries)-1)
 	}
+	before := len(p.diags)
 	p.checkCoil(ci)
+	// Only a coil whose keys are all sound is laid out: do its turns fit?
+	if len(p.diags) == before && len(ci.bad) == 0 {
+		if err := calc.CheckWinding(*c); err != nil {
+			line := ci.lines["turns"]
+			for _, k := range []string{"length", "radial-build"} {
+				line = max(line, ci.lines[k])
+			}
+			p.errf(line, "coil %q: %v", c.Name, err)
+		}
+	}
 	for _, i := range ci.entries {
 		p.spec.Entries[i].Coil = c.Name
 	}
@@ -475,7 +486,7 @@ func (p *parser) checkCoil(ci *coilIn) {
 	}
 	if ok("wire-outer-diameter") && ok("wire") && c.Wire.Outer <= c.Wire.Bare {
 		p.errf(ci.lines["wire-outer-diameter"], "wire-outer-diameter %s is not more than the bare diameter %s",
-			ci.given["wire-outer-diameter"].value, units.Format(c.Wire.Bare, units.Length))
+			ci.given["wire-outer-diameter"].value, fmt.Sprintf("%.4g mm", c.Wire.Bare*1e3))
 	}
 	if c.Wire.Bare > 0 && c.Wire.Outer == 0 {
 		c.Wire.Outer = calc.HeavyBuildOuter(c.Wire.Bare)

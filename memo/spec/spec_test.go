@@ -23,6 +23,10 @@ func TestBroken(t *testing.T) {
 		line int
 		msg  string
 	}{
+		{"overfull single layer", fenced("coil", "form = solenoid\nmean-diameter = 32 mm\nlength = 120 mm\nturns = 300\nwire = AWG 26\nwire-outer-diameter = 0.45 mm\ncurrent = 1 A\n"), 5,
+			`coil "coil 1": winding overfull: 300 turns of 0.45 mm wire need 135 mm of length, more than the 120 mm given`},
+		{"overfull multilayer", fenced("coil", "form = solenoid\ninner-diameter = 20 mm\nlength = 10 mm\nradial-build = 1 mm\nturns = 100\nwire = 0.5 mm\nwire-outer-diameter = 0.55 mm\ncurrent = 1 A\n"), 6,
+			`coil "coil 1": winding overfull`},
 		{"misspelt key", fenced("coil", coilBody+"mean-diamter = 41 mm\n"), 6,
 			`unknown key "mean-diamter" in coil block; did you mean "mean-diameter"?`},
 		{"center", fenced("coil", coilBody+"center = (0, 0, 1) mm\n"), 6,
@@ -100,7 +104,7 @@ func TestBroken(t *testing.T) {
 		{"wire bare number", fenced("coil", "mean-diameter = 40 mm\nturns = 100\nwire = 24\ncurrent = 1 A\n"), 4,
 			`for a gauge write AWG 24`},
 		{"outer over bare", fenced("coil", coilBody+"wire-outer-diameter = 0.2 mm\n"), 6,
-			`wire-outer-diameter 0.2 mm is not more than the bare diameter`},
+			`wire-outer-diameter 0.2 mm is not more than the bare diameter 0.`},
 		{"insulation class", fenced("coil", coilBody+"insulation-class = Q\n"), 6,
 			`insulation-class: "Q": want a temperature such as 155 degC, or a class letter`},
 		{"insulation no unit", fenced("coil", coilBody+"insulation-class = 150\n"), 6,
