@@ -104,7 +104,7 @@ func (j *Job) Report() Report {
 	d := j.Spec.Design
 	rep := Report{
 		Tool: "coilmemo " + Version, Spec: j.Spec.File, SpecSHA256: j.SHA256,
-		FieldCenter: vec(r.FieldCentre), Moment: vec(r.Moment),
+		FieldCenter: vec(r.FieldCentre), Moment: Num(r.Moment.Norm()), MomentVector: vec(r.Moment),
 		TorqueMax: Num(r.TorqueMax), TorqueDesign: Num(r.TorqueDesign), TorqueVector: vec(r.Torque),
 		Coils: []CoilReport{}, Probes: []ProbeReport{}, Limits: []LimitReport{}, Checks: []CheckReport{},
 	}
