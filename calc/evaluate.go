@@ -2,6 +2,10 @@ package calc
 
 import "math"
 
+// HomogeneityTolerance is the relative deviation from the centre field
+// that bounds a pair's homogeneous region in CoilResult.
+const HomogeneityTolerance = 0.01
+
 // DipoleTolerance is the relative agreement of dipole and exact field that
 // defines CoilResult.DipoleRange.
 const DipoleTolerance = 0.01
@@ -11,7 +15,8 @@ const DipoleTolerance = 0.01
 // current, voltage, power, temperature, runaway), current density, mass and
 // wire length of the block, inductance (CoilInductance), moment
 // (MagneticMoment) and its mean-area cross-check, field at the origin, L/R,
-// stored energy, thermal time constant, insulation margin and dipole range.
+// stored energy, thermal time constant, insulation margin, dipole range and
+// the force between a pair's coils and its 1 % homogeneous region.
 // Then the totals: field at the origin, total moment, torque in the
 // background field (τ = m × B; maximum |m||B|; at Conditions.DesignAngle,
 // read as π/2 when 0), the field at every probe, and every limit checked
@@ -86,5 +91,10 @@ func evaluateCoil(c Coil, cond Conditions) CoilResult {
 		cr.InsulationMargin = c.InsulationClass - op.Temperature
 	}
 	cr.DipoleRange = DipoleRange(c, w, op.Current, DipoleTolerance)
+	cr.PairForce = PairForce(c, w, op.Current)
+	cr.HomogeneityAxial, cr.HomogeneityRadial = math.NaN(), math.NaN()
+	if c.Form == Pair {
+		cr.HomogeneityAxial, cr.HomogeneityRadial = Homogeneity(c, w, op.Current, HomogeneityTolerance)
+	}
 	return cr
 }

@@ -56,6 +56,11 @@ type CoilResult struct {
 	Energy           float64 // J, stored magnetic energy L I²/2
 	ThermalTau       float64 // s, time constant of the warm-up (linearised)
 	DipoleRange      float64 // m, on-axis distance beyond which the dipole field is within 1 % of the exact field
+	PairForce        float64 // N, axial force between the coils of a pair (+ apart, − together; 0 for other forms)
+	// HomogeneityAxial and HomogeneityRadial are the distances from a
+	// pair's centre, along its axis and in its mid-plane, within which the
+	// field stays within 1 % of the centre field (NaN for other forms).
+	HomogeneityAxial, HomogeneityRadial float64
 }
 
 // ProbeResult is the field at one probe, all coils summed.

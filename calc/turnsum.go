@@ -67,10 +67,10 @@ func rowsOf(w Winding) []row {
 	return rs
 }
 
-// rowMutual sums M over all turn pairs (i in p, j in q) with q displaced by
-// dz. With self set, p and q are the same row and the coincident pairs
-// (i = j) take the turn self-inductance with wire radius wr.
-func rowMutual(p, q row, dz float64, self bool, wr float64) float64 {
+// rowSum sums kernel(r_p, r_q, Δz) over all turn pairs (i in p, j in q)
+// with q displaced by dz, Δz = z_j + dz − z_i, grouping equal index
+// differences as rowMutual does.
+func rowSum(p, q row, dz float64, kernel func(a, b, d float64) float64) float64 {
 	mult := float64(p.mult * q.mult)
 	off := q.z0 + dz - p.z0
 	sum := 0.0
@@ -80,28 +80,35 @@ func rowMutual(p, q row, dz float64, self bool, wr float64) float64 {
 		if p.n == 1 {
 			s = q.s
 		}
-		// Index difference d = j − i from −(p.n−1) to q.n−1.
 		for d := -(p.n - 1); d < q.n; d++ {
 			cnt := min(p.n, q.n-d) - max(0, -d)
-			if cnt <= 0 {
-				continue
+			if cnt > 0 {
+				sum += float64(cnt) * kernel(p.r, q.r, off+float64(d)*s)
 			}
-			var m float64
-			if self && d == 0 {
-				m = TurnSelfInductance(p.r, wr)
-			} else {
-				m = MutualInductance(p.r, q.r, off+float64(d)*s)
-			}
-			sum += float64(cnt) * m
 		}
 	default:
 		for i := range p.n {
 			for j := range q.n {
-				sum += MutualInductance(p.r, q.r, off+float64(j)*q.s-float64(i)*p.s)
+				sum += kernel(p.r, q.r, off+float64(j)*q.s-float64(i)*p.s)
 			}
 		}
 	}
 	return mult * sum
+}
+
+// rowMutual sums M over all turn pairs (i in p, j in q) with q displaced by
+// dz. With self set, p and q are the same row and the coincident pairs
+// (i = j) take the turn self-inductance with wire radius wr.
+func rowMutual(p, q row, dz float64, self bool, wr float64) float64 {
+	if !self {
+		return rowSum(p, q, dz, MutualInductance)
+	}
+	return rowSum(p, q, dz, func(a, b, d float64) float64 {
+		if d == 0 && a == b {
+			return TurnSelfInductance(a, wr)
+		}
+		return MutualInductance(a, b, d)
+	})
 }
 
 // TurnSumInductance returns the self-inductance, H, of winding w of round
