@@ -30,7 +30,8 @@ type Report struct {
 	SpecSHA256   string        `json:"spec_sha256"`
 	Coils        []CoilReport  `json:"coils"`
 	FieldCenter  [3]Num        `json:"field_center_T"`
-	Moment       [3]Num        `json:"moment_A_m2"`
+	Moment       Num           `json:"moment_A_m2"`
+	MomentVector [3]Num        `json:"moment_vector_A_m2"`
 	Probes       []ProbeReport `json:"probes"`
 	TorqueMax    Num           `json:"torque_max_N_m"`
 	TorqueDesign Num           `json:"torque_N_m"`

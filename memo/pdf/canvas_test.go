@@ -2,6 +2,7 @@ package pdf
 
 import (
 	"bytes"
+	"fmt"
 	"image"
 	"image/color"
 	"math"
@@ -157,20 +158,5 @@ func TestCanvasOutput(t *testing.T) {
 	}
 }
 
-func formatPt(x, y float64) string {
-	return strings.TrimSpace(strings.Join([]string{fmtF(x), fmtF(y)}, " "))
-}
-
-func fmtF(v float64) string {
-	return strings.TrimRight(strings.TrimRight(formatNum2(v), "0"), ".")
-}
-
-func formatNum2(v float64) string { return fpdfNum(v) }
-
-// fpdfNum formats like fpdf's path operators (%.2f).
-func fpdfNum(v float64) string {
-	s := []byte(strings.TrimSpace(strings.Replace(string(append([]byte(nil), []byte(fmtFloat2(v))...)), " ", "", -1)))
-	return string(s)
-}
-
-func fmtFloat2(v float64) string { return strconvFormat(v) }
+// formatPt formats a point as fpdf's path operators do.
+func formatPt(x, y float64) string { return fmt.Sprintf("%.2f %.2f", x, y) }
