@@ -128,7 +128,7 @@ func TestCanvasOutput(t *testing.T) {
 	face := fonts.Cache().Lookup(fonts.Face(fonts.Sans, false, false, 10), 10)
 	c.Rotate(math.Pi / 2)
 	c.FillString(face, vg.Point{X: 5, Y: 0}, "µΩ°")
-	img := image.NewRGBA(image.Rect(0, 0, 2, 2))
+	img := image.NewGray(image.Rect(0, 0, 2, 2))
 	c.DrawImage(vg.Rectangle{Max: vg.Point{X: 10, Y: 10}}, img)
 	c.DrawImage(vg.Rectangle{Max: vg.Point{X: 20, Y: 20}}, img)
 	c.End()
@@ -144,9 +144,9 @@ func TestCanvasOutput(t *testing.T) {
 		// move to the figure origin, line to its top-right corner
 		formatPt(100, ph-150) + " m",
 		formatPt(150, ph-100) + " l",
-		" c ", // the arc as Béziers
-		"cm",  // text and image placement
-		"/I",  // the image XObject
+		" c\n", // the arc as Béziers
+		"cm",   // text and image placement
+		"/I",   // the image XObject
 	} {
 		if !strings.Contains(out, want) {
 			t.Errorf("content lacks %q", want)

@@ -275,7 +275,6 @@ func BenchmarkRender10Pages(b *testing.B) {
 	if _, err := render(d, options{compress: true, onText: func(p int, _ string) { pages = max(pages, p) }}); err != nil {
 		b.Fatal(err)
 	}
-	b.ReportMetric(float64(pages), "pages")
 	b.ResetTimer()
 	for i := 0; i < b.N; i++ {
 		out, err := Render(d)
@@ -284,4 +283,5 @@ func BenchmarkRender10Pages(b *testing.B) {
 		}
 		b.SetBytes(int64(len(out)))
 	}
+	b.ReportMetric(float64(pages), "pages")
 }
