@@ -25,7 +25,7 @@ func sampleDesign() Design {
 			{Name: "frame", Form: Rectangle, Width: 0.1, Height: 0.06, Turns: 30, Wire: WireFromGauge(28, cu),
 				Drive: CurrentDrive, Current: 0.05, Duty: 1, Axis: Vec{0, 0, 1}, Centre: Vec{0, 0, -1}},
 		},
-		Conditions: Conditions{Ambient: T20, BackgroundField: Vec{0, 3e-5, 0}, Cooling: StillAir()},
+		Conditions: Conditions{Ambient: T20, BackgroundField: Vec{0, 3e-5, 0}, DesignAngle: math.Pi / 6, Cooling: StillAir()},
 		Probes:     []Probe{{Name: "sensor", At: Vec{0, 0, 0.12}}},
 	}
 }
@@ -115,7 +115,7 @@ func TestEvaluateSample(t *testing.T) {
 		t.Errorf("total moment %v vs sum %v", r.Moment, sum)
 	}
 	checkRel(t, "torque max", r.TorqueMax, r.Moment.Norm()*3e-5, 1e-14)
-	checkRel(t, "torque design (π/2 default)", r.TorqueDesign, r.TorqueMax, 1e-14)
+	checkRel(t, "torque design at 30°", r.TorqueDesign, r.TorqueMax/2, 1e-14)
 	if vecRelErr(r.Torque, r.Moment.Cross(Vec{0, 3e-5, 0})) > 1e-15 {
 		t.Error("torque vector")
 	}

@@ -32,7 +32,10 @@ import (
 // If the layers need more depth than RadialBuild the winding is Overfull.
 //
 // When the overall diameter is not given (Wire.Outer ≤ 0) the bare diameter
-// stands in for it.
+// stands in for it. Dimensions that are not positive finite numbers count as
+// not given. A radial build deeper than the mean radius is reported as a
+// Problem (the inner radius is then taken as 0). More than MaxTurns turns
+// are not laid out: the Winding is empty, its figures NaN, with a Problem.
 //
 // Derived quantities, each over the turns as laid out: WireLength = Σ 2π r_i
 // (Rectangle: N × 2(W + H)), MeanTurn = WireLength/N, AreaSum = Σ π r_i²
