@@ -5,6 +5,7 @@ import (
 	"strconv"
 
 	"gonum.org/v1/plot"
+	"gonum.org/v1/plot/plotter"
 	"gonum.org/v1/plot/text"
 	"gonum.org/v1/plot/vg"
 	"gonum.org/v1/plot/vg/draw"
@@ -23,6 +24,11 @@ type Mark struct {
 // logarithmic when the data span more than two decades. Units get the
 // engineering prefix that suits the data (mm, mT, µT, …).
 func OnAxis(z, exact, dipole []float64, marks ...Mark) DrawFunc {
+	p, top, curves := onAxisPlot(z, exact, dipole, marks)
+	return drawer(p, top, curves)
+}
+
+func onAxisPlot(z, exact, dipole []float64, marks []Mark) (*plot.Plot, vg.Length, []plotter.XYs) {
 	zp := EngPrefix(z...)
 	if zp.Factor > 1 {
 		zp = Prefix{"", 1} // no km of coil axis
@@ -50,8 +56,8 @@ func OnAxis(z, exact, dipole []float64, marks ...Mark) DrawFunc {
 		p.Y.Max = ehi / bp.Factor * 1.08
 	}
 	// The approximation is drawn under the exact curve, but listed after it.
-	di := addCurve(p, diSegs, draw.LineStyle{Color: Secondary, Width: vg.Points(1), Dashes: Dashed})
-	ex := addCurve(p, exSegs, draw.LineStyle{Color: Accent, Width: LineWidth})
+	di := addCurve(p, diSegs, lineStyle(Secondary, vg.Points(1), Dashed))
+	ex := addCurve(p, exSegs, lineStyle(Accent, LineWidth, nil))
 	if ex != nil {
 		p.Legend.Add("Exact (finite winding)", ex)
 	}
@@ -68,7 +74,7 @@ func OnAxis(z, exact, dipole []float64, marks ...Mark) DrawFunc {
 		p.Add(m)
 		top = m.height()
 	}
-	return drawer(p, top, append(exSegs, diSegs...))
+	return p, top, append(exSegs, diSegs...)
 }
 
 // TorqueAngle plots torque (N·m) against angle (degrees).
@@ -80,7 +86,7 @@ func TorqueAngle(angleDeg, torque []float64) DrawFunc {
 	if lo, hi, ok := finiteRange(torque); ok && lo < 0 && hi > 0 {
 		p.Add(zeroLine{})
 	}
-	addCurve(p, segs, draw.LineStyle{Color: Accent, Width: LineWidth})
+	addCurve(p, segs, lineStyle(Accent, LineWidth, nil))
 	if lo, hi, ok := finiteRange(angleDeg); ok {
 		p.X.Min, p.X.Max = lo, hi
 		p.X.Tick.Marker = angleTicks{}

@@ -298,6 +298,11 @@ func segments(x, y []float64, sx, sy float64, positive bool) []plotter.XYs {
 	return out
 }
 
+// lineStyle is a solid (dashes nil) or dashed line style.
+func lineStyle(c color.Color, w vg.Length, dashes []vg.Length) draw.LineStyle {
+	return draw.LineStyle{Color: c, Width: w, Dashes: dashes}
+}
+
 // addCurve adds the segments as lines in one style and returns the first
 // line (for a legend entry), or nil if there was nothing to draw.
 func addCurve(p *plot.Plot, segs []plotter.XYs, ls draw.LineStyle) *plotter.Line {

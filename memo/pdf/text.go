@@ -53,6 +53,7 @@ type word struct {
 	frags []frag
 	w     float64
 	space frag // the space after the word; text "" if none
+	glue  bool // no line break at the space after the word
 }
 
 // line is one laid-out line of text.
@@ -150,58 +151,118 @@ func layoutSpans(spans []doc.Span, base textStyle, first, width float64) []line 
 	return layoutStyled(styleSpans(spans, base), first, width)
 }
 
-// layoutStyled breaks runs into lines no wider than width. The first line
-// may have a different width (first), for hanging labels.
+// layoutStyled breaks runs into lines no wider than width (the first line
+// no wider than first). Lines break at spaces, but not between a number
+// and a short word after it ("61 °C", "12.57 mT", "8 layers") nor before
+// a relation sign ("k =" stays together), unless a line holds nothing else.
 func layoutStyled(runs []styled, first, width float64) []line {
-	ws := words(runs)
+	ws := fitWords(words(runs), min(first, width))
+	setGlue(ws)
 	var (
 		lines []line
-		cur   line
+		start int
+		lineW float64
 		limit = first
-		// pending space between the last word on the line and the next
-		gap frag
 	)
-	finish := func() {
-		lines = append(lines, cur)
-		cur = line{}
-		limit = width
-		gap = frag{}
-	}
-	for _, w := range ws {
-		need := w.w
-		if len(cur.frags) > 0 {
-			need += gap.w
-		}
-		if len(cur.frags) > 0 && cur.w+need > limit+0.01 {
-			finish()
-		}
-		if len(cur.frags) == 0 && w.w > limit+0.01 {
-			// A word wider than the line: break it between characters.
-			for _, piece := range splitWord(w, limit, width) {
-				if len(cur.frags) > 0 {
-					finish()
-				}
-				cur.frags = append(cur.frags, piece.frags...)
-				cur.w = piece.w
+	emit := func(from, to int) { // words[from..to] inclusive
+		var l line
+		for j := from; j <= to; j++ {
+			l.frags = append(l.frags, ws[j].frags...)
+			l.w += ws[j].w
+			if j < to && ws[j].space.text != "" {
+				l.frags = append(l.frags, ws[j].space)
+				l.w += ws[j].space.w
 			}
-			gap = w.space
+		}
+		l.frags = mergeFrags(l.frags)
+		lines = append(lines, l)
+	}
+	for i := 0; i < len(ws); {
+		add := ws[i].w
+		if i > start {
+			add += ws[i-1].space.w
+		}
+		if i > start && lineW+add > limit+0.01 {
+			k := i - 1
+			for k >= start && ws[k].glue {
+				k--
+			}
+			if k < start {
+				k = i - 1
+			}
+			emit(start, k)
+			start, limit, lineW = k+1, width, 0
+			for j := start; j < i; j++ {
+				lineW += ws[j].w
+				if j > start {
+					lineW += ws[j-1].space.w
+				}
+			}
 			continue
 		}
-		if len(cur.frags) > 0 && gap.text != "" {
-			cur.frags = append(cur.frags, gap)
-			cur.w += gap.w
-		}
-		cur.frags = append(cur.frags, w.frags...)
-		cur.w += w.w
-		gap = w.space
+		lineW += add
+		i++
 	}
-	if len(cur.frags) > 0 || len(lines) == 0 {
-		lines = append(lines, cur)
+	if start < len(ws) {
+		emit(start, len(ws)-1)
 	}
-	for i := range lines {
-		lines[i].frags = mergeFrags(lines[i].frags)
+	if len(lines) == 0 {
+		lines = append(lines, line{})
 	}
 	return lines
+}
+
+// fitWords splits words wider than width between characters.
+func fitWords(ws []word, width float64) []word {
+	var out []word
+	for _, w := range ws {
+		if w.w <= width+0.01 {
+			out = append(out, w)
+			continue
+		}
+		pieces := splitWord(w, width, width)
+		for k := range pieces {
+			if k == len(pieces)-1 {
+				pieces[k].space = w.space
+			}
+			out = append(out, pieces[k])
+		}
+	}
+	return out
+}
+
+// setGlue marks the spaces at which a line should not break.
+func setGlue(ws []word) {
+	for i := 0; i+1 < len(ws); i++ {
+		if ws[i].space.text == "" {
+			continue
+		}
+		prev, _ := utf8.DecodeLastRuneInString(ws[i].frags[len(ws[i].frags)-1].text)
+		next := wordText(ws[i+1])
+		r0, _ := utf8.DecodeRuneInString(next)
+		switch {
+		case unicode.IsDigit(prev) && !unicode.IsDigit(r0) && utf8.RuneCountInString(next) <= 6:
+			ws[i].glue = true
+		case isRelation(next):
+			ws[i].glue = true
+		}
+	}
+}
+
+func wordText(w word) string {
+	var b strings.Builder
+	for _, f := range w.frags {
+		b.WriteString(f.text)
+	}
+	return b.String()
+}
+
+func isRelation(s string) bool {
+	switch s {
+	case "=", "≈", "≤", "≥", "<", ">", "≠", "×", "·", "±", "+", "−", "→", "∝":
+		return true
+	}
+	return false
 }
 
 // splitWord cuts an over-long word into pieces, the first at most first

@@ -1,0 +1,157 @@
+package figures
+
+import (
+	"math"
+	"strings"
+	"testing"
+
+	"gonum.org/v1/plot"
+	"gonum.org/v1/plot/vg/recorder"
+
+	"coilmemo/memo/fonts"
+)
+
+func TestEngPrefix(t *testing.T) {
+	for _, c := range []struct {
+		v    []float64
+		want string
+	}{
+		{[]float64{0.0123}, "m"},
+		{[]float64{0.5e-3, -2e-6}, "µ"},
+		{[]float64{12.5}, ""},
+		{[]float64{998}, ""},
+		{[]float64{999.9}, "k"}, // reads 1.00 k rather than 999.9
+		{[]float64{1000}, "k"},
+		{[]float64{3e-9, math.NaN(), math.Inf(1)}, "n"},
+		{[]float64{0}, ""},
+		{nil, ""},
+	} {
+		if got := EngPrefix(c.v...).Symbol; got != c.want {
+			t.Errorf("EngPrefix(%v) = %q, want %q", c.v, got, c.want)
+		}
+	}
+}
+
+func TestNiceTicks(t *testing.T) {
+	ticks := niceTicks{}.Ticks(-300, 300)
+	var labels []string
+	for _, tk := range ticks {
+		if tk.Label != "" {
+			labels = append(labels, tk.Label)
+		}
+	}
+	if got := strings.Join(labels, " "); got != "-300 -200 -100 0 100 200 300" {
+		t.Errorf("labels %q", got)
+	}
+	ticks = niceTicks{}.Ticks(0, 12.9)
+	labels = labels[:0]
+	for _, tk := range ticks {
+		if tk.Label != "" {
+			labels = append(labels, tk.Label)
+		}
+	}
+	if got := strings.Join(labels, " "); got != "0.0 2.5 5.0 7.5 10.0 12.5" {
+		t.Errorf("labels %q", got)
+	}
+}
+
+func TestSegments(t *testing.T) {
+	nan := math.NaN()
+	s := segments([]float64{1, 2, 3, 4, 5, 6}, []float64{1, nan, 3, 4, -1, 6}, 1, 1, true)
+	if len(s) != 3 || len(s[0]) != 1 || len(s[1]) != 2 || len(s[2]) != 1 {
+		t.Errorf("segments = %v", s)
+	}
+}
+
+func sampleAxis(n int, decay float64) (z, ex, di []float64) {
+	for i := 0; i <= n; i++ {
+		zz := -0.2 + 0.4*float64(i)/float64(n)
+		z = append(z, zz)
+		ex = append(ex, 0.01/math.Pow(1+(zz/0.03)*(zz/0.03), decay))
+		d := math.NaN()
+		if math.Abs(zz) > 0.05 {
+			d = 0.01 * math.Pow(0.03/math.Abs(zz), 2*decay)
+		}
+		di = append(di, d)
+	}
+	return
+}
+
+// Every string a figure sets uses the embedded family, with units chosen
+// from the data.
+func TestOnAxisText(t *testing.T) {
+	z, ex, di := sampleAxis(200, 1.5)
+	var c recorder.Canvas
+	OnAxis(z, ex, di, Mark{X: 0.03, Label: "end"})(&c, 400, 240)
+	var texts []string
+	for _, a := range c.Actions {
+		if fs, ok := a.(*recorder.FillString); ok {
+			if fs.Font.Typeface != fonts.Typeface {
+				t.Errorf("text %q set in %v", fs.String, fs.Font)
+			}
+			texts = append(texts, fs.String)
+		}
+	}
+	all := strings.Join(texts, "|")
+	for _, want := range []string{"Axial position z (mm)", "Flux density |B| (mT)", "Exact (finite winding)", "Dipole approximation", "end", "|0.1|"} {
+		if !strings.Contains(all, want) {
+			t.Errorf("figure text lacks %q: %s", want, all)
+		}
+	}
+}
+
+func TestOnAxisScale(t *testing.T) {
+	// Steep decay over the range: log axis. Gentle: linear from zero.
+	for _, c := range []struct {
+		decay float64
+		log   bool
+	}{{1.5, true}, {0.2, false}} {
+		z, ex, di := sampleAxis(50, c.decay)
+		p, _, _ := onAxisPlot(z, ex, di, nil)
+		_, isLog := p.Y.Scale.(plot.LogScale)
+		if isLog != c.log {
+			t.Errorf("decay %g: log scale %v, want %v", c.decay, isLog, c.log)
+		}
+	}
+}
+
+func TestTorqueAngle(t *testing.T) {
+	var ang, tq []float64
+	for a := -180.0; a <= 180; a += 5 {
+		ang = append(ang, a)
+		tq = append(tq, 2e-3*math.Sin(a*math.Pi/180))
+	}
+	var c recorder.Canvas
+	TorqueAngle(ang, tq)(&c, 300, 200)
+	var all []string
+	for _, a := range c.Actions {
+		if fs, ok := a.(*recorder.FillString); ok {
+			all = append(all, fs.String)
+		}
+	}
+	s := strings.Join(all, "|")
+	for _, want := range []string{"Torque τ (mN·m)", "Angle θ (°)", "|-180|", "|90|"} {
+		if !strings.Contains(s, want) {
+			t.Errorf("torque figure lacks %q: %s", want, s)
+		}
+	}
+}
+
+// The legend goes to a corner the curve leaves free.
+func TestLegendCorner(t *testing.T) {
+	// A curve rising to the right leaves the top left free.
+	var x, y []float64
+	for i := 0; i <= 50; i++ {
+		x = append(x, float64(i))
+		y = append(y, float64(i*i))
+	}
+	p := NewPlot("x", "y")
+	segs := segments(x, y, 1, 1, false)
+	l := addCurve(p, segs, lineStyle(Accent, LineWidth, nil))
+	p.Legend.Add("rising", l)
+	var c recorder.Canvas
+	Drawer(p, segs...)(&c, 300, 200)
+	if !p.Legend.Top || !p.Legend.Left {
+		t.Errorf("legend top=%v left=%v, want top left", p.Legend.Top, p.Legend.Left)
+	}
+}
