@@ -231,7 +231,7 @@ func (m *markLines) Plot(c draw.Canvas, p *plot.Plot) {
 	}
 }
 
-// niceTicks labels round values, about six per axis, with unlabelled
+// niceTicks labels round values, about seven per axis, with unlabelled
 // minor ticks between them.
 type niceTicks struct{}
 
@@ -239,7 +239,7 @@ func (niceTicks) Ticks(min, max float64) []plot.Tick {
 	if !(max > min) {
 		return plot.DefaultTicks{}.Ticks(min, max)
 	}
-	raw := (max - min) / 6
+	raw := (max - min) / 7
 	mag := math.Pow(10, math.Floor(math.Log10(raw)))
 	var step float64
 	minor := 5

@@ -50,7 +50,7 @@ func TestNiceTicks(t *testing.T) {
 			labels = append(labels, tk.Label)
 		}
 	}
-	if got := strings.Join(labels, " "); got != "0.0 2.5 5.0 7.5 10.0 12.5" {
+	if got := strings.Join(labels, " "); got != "0 2 4 6 8 10 12" {
 		t.Errorf("labels %q", got)
 	}
 }

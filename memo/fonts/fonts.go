@@ -2,8 +2,9 @@
 // binary so that a memo never depends on what happens to be installed on
 // the machine that builds it.
 //
-// The family is DejaVu (Sans, Sans Bold, Sans Oblique, Sans Bold Oblique,
-// Sans Mono, Sans Mono Bold and Serif Italic). It was chosen for its glyph
+// The family is DejaVu: Sans in four styles for text, Sans Mono (regular
+// and bold) for code and Serif in four styles for mathematics (italic
+// variables, upright numbers and operators). It was chosen for its glyph
 // coverage: an engineering memo needs Greek letters (α … ω, Φ, Ω), the
 // micro sign µ, the degree sign °, superscript digits ² and ³, the middle
 // dot ·, ≤, ≥, ≈, ±, √, ×, −, the arrows, and the check and cross marks,
@@ -26,6 +27,9 @@ import (
 	"github.com/go-fonts/dejavu/dejavusansmono"
 	"github.com/go-fonts/dejavu/dejavusansmonobold"
 	"github.com/go-fonts/dejavu/dejavusansoblique"
+	"github.com/go-fonts/dejavu/dejavuserif"
+	"github.com/go-fonts/dejavu/dejavuserifbold"
+	"github.com/go-fonts/dejavu/dejavuserifbolditalic"
 	"github.com/go-fonts/dejavu/dejavuserifitalic"
 	stdfont "golang.org/x/image/font"
 	"golang.org/x/image/font/opentype"
@@ -47,8 +51,8 @@ const (
 // Style is one embedded font file.
 type Style struct {
 	// Family and Style are the names under which the PDF writer registers
-	// the font ("sans" with "", "B", "I", "BI"; "mono" with "", "B";
-	// "serif" with "I").
+	// the font ("sans" and "serif" with "", "B", "I", "BI"; "mono" with
+	// "" and "B").
 	Family string
 	Style  string
 	// Font is the gonum/plot descriptor (size zero).
@@ -66,7 +70,10 @@ func All() []Style {
 		{"sans", "BI", font.Font{Typeface: Typeface, Variant: Sans, Weight: stdfont.WeightBold, Style: stdfont.StyleItalic}, dejavusansboldoblique.TTF},
 		{"mono", "", font.Font{Typeface: Typeface, Variant: Mono}, dejavusansmono.TTF},
 		{"mono", "B", font.Font{Typeface: Typeface, Variant: Mono, Weight: stdfont.WeightBold}, dejavusansmonobold.TTF},
+		{"serif", "", font.Font{Typeface: Typeface, Variant: Serif}, dejavuserif.TTF},
+		{"serif", "B", font.Font{Typeface: Typeface, Variant: Serif, Weight: stdfont.WeightBold}, dejavuserifbold.TTF},
 		{"serif", "I", font.Font{Typeface: Typeface, Variant: Serif, Style: stdfont.StyleItalic}, dejavuserifitalic.TTF},
+		{"serif", "BI", font.Font{Typeface: Typeface, Variant: Serif, Weight: stdfont.WeightBold, Style: stdfont.StyleItalic}, dejavuserifbolditalic.TTF},
 	}
 }
 
@@ -82,30 +89,44 @@ func Lookup(family, style string) *Style {
 
 // ForFace maps a gonum/plot font descriptor to the PDF family and style
 // that renders it. Any typeface maps onto the embedded family: a variant
-// of "Mono" goes to the mono face, "Serif" italic to the serif italic, and
-// everything else to the sans faces with matching weight and slant.
+// of "Mono" goes to the mono faces, "Serif" to the serif faces and
+// everything else to the sans faces, with matching weight and slant.
 func ForFace(f font.Font) (family, style string) {
 	bold := f.Weight >= stdfont.WeightSemiBold
 	slanted := f.Style == stdfont.StyleItalic || f.Style == stdfont.StyleOblique
-	switch f.Variant {
-	case Mono:
-		if bold {
-			return "mono", "B"
-		}
-		return "mono", ""
-	case Serif:
-		if slanted {
-			return "serif", "I"
-		}
-	}
-	style = ""
 	if bold {
 		style += "B"
+	}
+	switch f.Variant {
+	case Mono:
+		return "mono", style
+	case Serif:
+		family = "serif"
+	default:
+		family = "sans"
 	}
 	if slanted {
 		style += "I"
 	}
-	return "sans", style
+	return family, style
+}
+
+// ForOpentype returns the PDF family and style of a parsed face from
+// Collection, identified by identity; ok is false for any other face.
+// Text handlers that pass glyph faces separately from their descriptors
+// (the LaTeX handler does) are mapped with it.
+func ForOpentype(f *opentype.Font) (family, style string, ok bool) {
+	if f == nil {
+		return "", "", false
+	}
+	c := Collection()
+	for i, face := range c {
+		if face.Face == f {
+			s := All()[i]
+			return s.Family, s.Style, true
+		}
+	}
+	return "", "", false
 }
 
 var (

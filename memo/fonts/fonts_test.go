@@ -41,6 +41,9 @@ func TestCollection(t *testing.T) {
 		if fam != s.Family || sty != s.Style {
 			t.Errorf("ForFace(%v) = %s %q, want %s %q", s.Font, fam, sty, s.Family, s.Style)
 		}
+		if fam, sty, ok := ForOpentype(Cache().Lookup(s.Font, 10).Face); !ok || fam != s.Family || sty != s.Style {
+			t.Errorf("ForOpentype(%s %q) = %s %q %v", s.Family, s.Style, fam, sty, ok)
+		}
 		if Lookup(s.Family, s.Style) == nil {
 			t.Errorf("Lookup(%s, %q) = nil", s.Family, s.Style)
 		}

@@ -756,8 +756,14 @@ func (r *renderer) figure(f doc.Figure) {
 		c.Begin()
 		f.Draw(c, vgLen(fl.w), vgLen(fl.h))
 		c.End()
+		// The figure's graphics state ended with its clip; bring fpdf's
+		// idea of the current state back in line with the page's.
 		r.pdf.SetDashPattern([]float64{}, 0)
 		r.pdf.SetAlpha(1, "Normal")
+		r.pdf.SetDrawColor(colInk.r, colInk.g, colInk.b)
+		r.pdf.SetFillColor(colInk.r, colInk.g, colInk.b)
+		r.pdf.SetTextColor(colInk.r, colInk.g, colInk.b)
+		r.pdf.SetLineWidth(1)
 	}
 	y := r.y + fl.h + figureCaptionGap
 	for _, l := range fl.cap {

@@ -340,14 +340,18 @@ func arcToCubics(center vg.Point, r vg.Length, start, sweep float64) [][3]vg.Poi
 }
 
 // FillString implements vg.Canvas: pt is the left end of the baseline.
-// Whatever typeface the face names, the text is set in the embedded family
-// (weight, slant and mono/serif variant preserved), so plots built with
+// A face parsed by memo/fonts is set in exactly that font; any other
+// typeface is set in the embedded family with the weight, slant and
+// mono/serif variant of its descriptor, so plots built with
 // fonts.Collection measure exactly what is drawn.
 func (c *Canvas) FillString(f font.Face, pt vg.Point, s string) {
 	if f.Font.Size == 0 || s == "" {
 		return
 	}
-	fam, sty := fonts.ForFace(f.Font)
+	fam, sty, ok := fonts.ForOpentype(f.Face)
+	if !ok {
+		fam, sty = fonts.ForFace(f.Font)
+	}
 	c.applyColor(false)
 	c.fonts.use(fam, sty, f.Font.Size.Points())
 	m := c.st.m.then(affine{a: 1, d: 1, e: pt.X.Points(), f: pt.Y.Points()})

@@ -285,3 +285,47 @@ func BenchmarkRender10Pages(b *testing.B) {
 	}
 	b.ReportMetric(float64(pages), "pages")
 }
+
+// Text after a figure is set in its own colour, not in whatever fill the
+// page had before the figure (the figure's state is discarded with its
+// clip, so the renderer has to restate colours).
+func TestTextColourAfterFigure(t *testing.T) {
+	b, err := render(exampleDocument(0), options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	ops := regexp.MustCompile(`(?s)\bq\b|\bQ\b|([\d.]+) ([\d.]+) ([\d.]+) rg|([\d.]+) g\b|\(((?:\\.|[^\\)])*)\) Tj`)
+	type fill struct{ r, g, b float64 }
+	cur := fill{}
+	var stack []fill
+	checked := 0
+	for _, m := range ops.FindAllSubmatch(b, -1) {
+		switch {
+		case string(m[0]) == "q":
+			stack = append(stack, cur)
+		case string(m[0]) == "Q":
+			if len(stack) > 0 {
+				cur, stack = stack[len(stack)-1], stack[:len(stack)-1]
+			}
+		case m[1] != nil:
+			r, _ := strconv.ParseFloat(string(m[1]), 64)
+			g, _ := strconv.ParseFloat(string(m[2]), 64)
+			bl, _ := strconv.ParseFloat(string(m[3]), 64)
+			cur = fill{r, g, bl}
+		case m[4] != nil:
+			v, _ := strconv.ParseFloat(string(m[4]), 64)
+			cur = fill{v, v, v}
+		case m[5] != nil:
+			if bytes.Contains(m[5], utf16Text("Figure ")) {
+				checked++
+				ink := fill{0.110, 0.133, 0.153}
+				if cur != ink {
+					t.Errorf("figure caption set in %v, want the ink colour %v", cur, ink)
+				}
+			}
+		}
+	}
+	if checked < 2 {
+		t.Errorf("checked %d captions, want ≥ 2", checked)
+	}
+}
