@@ -28,7 +28,7 @@ type headingStyle struct {
 func headingStyleFor(level int) headingStyle {
 	switch level {
 	case 1:
-		return headingStyle{st: textStyle{size: sizeH1, lead: 17, color: colAccent, bold: true}, before: 20, after: 8, rule: true, numberWidth: 26}
+		return headingStyle{st: textStyle{size: sizeH1, lead: 17, color: colAccent, bold: true}, before: 20, after: 8, rule: true, numberWidth: 28}
 	case 2:
 		return headingStyle{st: textStyle{size: sizeH2, lead: 14.5, color: colInk, bold: true}, before: 14, after: 5}
 	default:
@@ -392,56 +392,41 @@ func (r *renderer) layoutTable(t doc.Table, number int) *tableLayout {
 		}
 	}
 
-	// Column widths.
+	// Column widths: the natural (one-line) and least (widest word) width
+	// of every column's content.
 	W := r.w
-	tl.widths = make([]float64, ncol)
+	nat := make([]float64, ncol)
+	mins := make([]float64, ncol)
+	measure := func(j int, runs []styled) {
+		n, m := naturalWidths(runs)
+		nat[j] = max(nat[j], n+2*cellPadX)
+		mins[j] = max(mins[j], m+2*cellPadX)
+	}
+	for j, runs := range headRunList {
+		measure(j, runs)
+	}
+	for _, row := range rowRuns {
+		for j, runs := range row {
+			measure(j, runs)
+		}
+	}
+	for j := range nat {
+		nat[j] = max(nat[j], 3*cellPadX)
+		mins[j] = max(mins[j], 3*cellPadX)
+	}
 	if len(t.Widths) == ncol && positive(t.Widths) {
 		sum := 0.0
 		for _, v := range t.Widths {
 			sum += v
 		}
+		tl.widths = make([]float64, ncol)
 		for j, v := range t.Widths {
 			tl.widths[j] = W * v / sum
 		}
 	} else {
-		nat := make([]float64, ncol)
-		mins := make([]float64, ncol)
-		measure := func(j int, runs []styled) {
-			n, m := naturalWidths(runs)
-			nat[j] = max(nat[j], n+2*cellPadX)
-			mins[j] = max(mins[j], m+2*cellPadX)
-		}
-		for j, runs := range headRunList {
-			measure(j, runs)
-		}
-		for _, row := range rowRuns {
-			for j, runs := range row {
-				measure(j, runs)
-			}
-		}
-		sumNat, sumMin := 0.0, 0.0
-		for j := range nat {
-			nat[j] = max(nat[j], 3*cellPadX)
-			mins[j] = max(mins[j], 3*cellPadX)
-			sumNat += nat[j]
-			sumMin += mins[j]
-		}
-		switch {
-		case sumNat <= W:
-			for j := range nat {
-				tl.widths[j] = nat[j] * W / sumNat
-			}
-		case sumMin >= W:
-			for j := range nat {
-				tl.widths[j] = mins[j] * W / sumMin
-			}
-		default:
-			slack := sumNat - sumMin
-			for j := range nat {
-				tl.widths[j] = mins[j] + (W-sumMin)*(nat[j]-mins[j])/slack
-			}
-		}
+		tl.widths = autoWidths(nat, mins, W)
 	}
+	tl.widths = keepWordsWhole(tl.widths, mins, W)
 	tl.align = make([]doc.Align, ncol)
 	copy(tl.align, t.Align)
 
@@ -478,6 +463,61 @@ func (r *renderer) layoutTable(t doc.Table, number int) *tableLayout {
 		tl.capH = float64(len(tl.cap))*leadCaption + 3
 	}
 	return tl
+}
+
+// autoWidths shares the width W among columns by their content: natural
+// widths if they fit (stretched to W), else at least every column's widest
+// word with the rest shared by how much more each would like.
+func autoWidths(nat, mins []float64, W float64) []float64 {
+	out := make([]float64, len(nat))
+	sumNat, sumMin := 0.0, 0.0
+	for j := range nat {
+		sumNat += nat[j]
+		sumMin += mins[j]
+	}
+	switch {
+	case sumNat <= W:
+		for j := range nat {
+			out[j] = nat[j] * W / sumNat
+		}
+	case sumMin >= W:
+		for j := range nat {
+			out[j] = mins[j] * W / sumMin
+		}
+	default:
+		slack := sumNat - sumMin
+		for j := range nat {
+			out[j] = mins[j] + (W-sumMin)*(nat[j]-mins[j])/slack
+		}
+	}
+	return out
+}
+
+// keepWordsWhole widens columns narrower than their widest word, taking
+// the room from columns with width to spare, so that numbers such as
+// "7.5×10⁻⁹" are not split between characters. If the words cannot all
+// fit, the widths are left as they are.
+func keepWordsWhole(w, mins []float64, W float64) []float64 {
+	need, spare := 0.0, 0.0
+	for j := range w {
+		if w[j] < mins[j] {
+			need += mins[j] - w[j]
+		} else {
+			spare += w[j] - mins[j]
+		}
+	}
+	if need == 0 || spare < need {
+		return w
+	}
+	out := make([]float64, len(w))
+	for j := range w {
+		if w[j] < mins[j] {
+			out[j] = mins[j]
+		} else {
+			out[j] = w[j] - (w[j]-mins[j])*need/spare
+		}
+	}
+	return out
 }
 
 func positive(v []float64) bool {
