@@ -221,6 +221,11 @@ func TestOutlineAndNumbering(t *testing.T) {
 	if n := bytes.Count(b, []byte("/Parent")) - pages; n != 10 {
 		t.Errorf("outline has %d entries, want 10 (7 sections, 3 subsections)", n)
 	}
+	for _, title := range []string{"1 Summary of results", "As given", "7 Record"} {
+		if !bytes.Contains(b, append([]byte("(\xfe\xff"), utf16Text(title)...)) {
+			t.Errorf("no bookmark %q", title)
+		}
+	}
 	joined := strings.Join(texts, "\n")
 	for i, h := range []string{"Summary of results", "Inputs", "Assumptions", "Field on the axis", "Verification", "Safety cautions", "Record"} {
 		if !strings.Contains(joined, fmt.Sprintf("%d\n%s", i+1, h)) {
