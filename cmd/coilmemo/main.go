@@ -2,6 +2,9 @@
 //
 //	coilmemo build SPEC… [-o OUT] [--strict]   write the memo PDF(s)
 //	coilmemo calc SPEC [--json] [--strict]     print the results
+//	coilmemo diff OLD NEW                      what changed between revisions
+//	coilmemo watch SPEC [-o OUT]               rebuild on save
+//	coilmemo new [FILE]                        a starter spec
 //
 // Exit status: 0 done; 1 internal failure, or a failed requirement with
 // --strict; 2 bad input or usage.
@@ -24,11 +27,17 @@ const usage = `coilmemo %s – coil calculation memos from Markdown specs
 Usage:
   coilmemo build SPEC... [-o OUT] [--strict]
   coilmemo calc SPEC [--json] [--strict]
+  coilmemo diff OLD NEW
+  coilmemo watch SPEC [-o OUT]
+  coilmemo new [FILE]
   coilmemo help [COMMAND]
 
 Commands:
   build   write a PDF calculation memo for each spec
   calc    print the results of a spec on the terminal, or as JSON
+  diff    show the inputs and results that changed between two revisions
+  watch   rebuild the memo each time the spec is saved
+  new     write a starter spec
 
 Exit status: 0 done, 1 internal failure (or a failed requirement with
 --strict), 2 bad input or usage. Run 'coilmemo help COMMAND' for details.
@@ -61,6 +70,8 @@ Options:
   --json     print JSON instead of a table
   --strict   exit with status 1 when a requirement or verification fails
 `
+
+var helps = map[string]string{"build": buildHelp, "calc": calcHelp, "diff": diffHelp, "watch": watchHelp, "new": newHelp}
 
 // exitError carries an exit status.
 type exitError struct {
@@ -100,17 +111,20 @@ func run(args []string, stdout, stderr io.Writer) error {
 		return build(args[1:], stdout, stderr)
 	case "calc":
 		return calcCmd(args[1:], stdout, stderr)
+	case "diff":
+		return diffCmd(args[1:], stdout, stderr)
+	case "watch":
+		return watchCmd(args[1:], stdout, stderr)
+	case "new":
+		return newCmd(args[1:], stdout)
 	case "help", "-h", "-help", "--help":
 		if len(args) > 1 {
-			switch args[1] {
-			case "build":
-				fmt.Fprint(stdout, buildHelp)
-				return nil
-			case "calc":
-				fmt.Fprint(stdout, calcHelp)
-				return nil
+			h, ok := helps[args[1]]
+			if !ok {
+				return usageErr("no help for %q", args[1])
 			}
-			return usageErr("no help for %q", args[1])
+			fmt.Fprint(stdout, h)
+			return nil
 		}
 		fmt.Fprintf(stdout, usage, memo.Version)
 		return nil

@@ -8,6 +8,7 @@ import (
 	"path/filepath"
 	"strings"
 	"testing"
+	"time"
 )
 
 func code(err error) int {
@@ -139,5 +140,68 @@ func TestUsage(t *testing.T) {
 	}
 	if c := code(run([]string{"build", "no-such-file.md"}, &o, &e)); c != 2 {
 		t.Errorf("missing spec file: exit %d, want 2", c)
+	}
+}
+
+// The starter spec is a sound spec whose requirements are met, and new
+// never overwrites a file.
+func TestNew(t *testing.T) {
+	path := filepath.Join(t.TempDir(), "s.md")
+	var o, e bytes.Buffer
+	if err := run([]string{"new", path}, &o, &e); err != nil {
+		t.Fatal(err)
+	}
+	o.Reset()
+	if err := run([]string{"calc", "--strict", path}, &o, &e); err != nil {
+		t.Fatalf("starter spec: %v\n%s", err, e.String())
+	}
+	if c := code(run([]string{"new", path}, &o, &e)); c != 2 {
+		t.Errorf("new over an existing file: exit %d, want 2", c)
+	}
+}
+
+// diff names the changed inputs and results, and only those.
+func TestDiff(t *testing.T) {
+	src, _ := os.ReadFile("../../examples/torque-coil.md")
+	changed := strings.Replace(string(src), "turns            = 200", "turns            = 240", 1)
+	if changed == string(src) {
+		t.Fatal("example changed: the turns line was not found")
+	}
+	path := filepath.Join(t.TempDir(), "new.md")
+	os.WriteFile(path, []byte(changed), 0o644)
+	var o, e bytes.Buffer
+	if err := run([]string{"diff", "../../examples/torque-coil.md", path}, &o, &e); err != nil {
+		t.Fatalf("%v\n%s", err, e.String())
+	}
+	out := o.String()
+	for _, want := range []string{"turns: 200 → 240", "coils[torque coil Z].wire_length_m", "(+20 %)"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("diff lacks %q:\n%s", want, out)
+		}
+	}
+	if strings.Contains(out, "mean-diameter") || strings.Contains(out, "spec_sha256") {
+		t.Errorf("diff shows unchanged or irrelevant items:\n%s", out)
+	}
+	o.Reset()
+	run([]string{"diff", path, path}, &o, &e)
+	if strings.Count(o.String(), "no change") != 2 {
+		t.Errorf("diff of a spec with itself:\n%s", o.String())
+	}
+}
+
+// watch builds at once and stops when told.
+func TestWatchBuildsOnce(t *testing.T) {
+	dir := t.TempDir()
+	path := filepath.Join(dir, "w.md")
+	src, _ := os.ReadFile("../../examples/torque-coil.md")
+	os.WriteFile(path, src, 0o644)
+	stop := make(chan struct{})
+	close(stop)
+	var o, e bytes.Buffer
+	if err := watch(path, "", &o, &e, time.Millisecond, stop); err != nil {
+		t.Fatal(err)
+	}
+	if _, err := os.Stat(filepath.Join(dir, "w.pdf")); err != nil {
+		t.Fatalf("no memo built: %v\n%s", err, o.String())
 	}
 }
