@@ -146,8 +146,15 @@ func numericCoilField(c calc.Coil, w calc.Winding, I float64, p calc.Vec) calc.V
 	}
 	for k, ctr := range centres {
 		for _, l := range w.Layers {
-			for _, z := range l.Z {
-				B = B.Add(loopIntegral(fr, ctr.Add(fr.U.Scale(z)), l.Radius, currents[k], p))
+			// Coincident turns (a thin coil) are integrated once and counted.
+			for i := 0; i < len(l.Z); {
+				j := i + 1
+				for j < len(l.Z) && l.Z[j] == l.Z[i] {
+					j++
+				}
+				b := loopIntegral(fr, ctr.Add(fr.U.Scale(l.Z[i])), l.Radius, currents[k], p)
+				B = B.Add(b.Scale(float64(j - i)))
+				i = j
 			}
 		}
 	}
