@@ -25,9 +25,10 @@ type Job struct {
 	Spec    *spec.Spec
 	Results calc.Results
 	Checks  []Check
-	SHA256  string    // of the spec bytes
-	Created time.Time // build date written into the memo
-	Dated   bool      // Created came from the spec or SOURCE_DATE_EPOCH
+	Sweep   []SweepStep // one per swept value, when the spec has a sweep
+	SHA256  string      // of the spec bytes
+	Created time.Time   // build date written into the memo
+	Dated   bool        // Created came from the spec or SOURCE_DATE_EPOCH
 }
 
 // Evaluate parses and calculates a spec. Diagnostics are returned (and
@@ -41,6 +42,7 @@ func Evaluate(file string, src []byte) (*Job, spec.Diagnostics) {
 	j := &Job{Spec: s, SHA256: hex.EncodeToString(sum[:])}
 	j.Results = calc.Evaluate(s.Design)
 	j.Checks = Verify(s.Design, j.Results)
+	j.Sweep = RunSweep(s)
 	j.Created, j.Dated = buildDate(s)
 	return j, nil
 }

@@ -49,6 +49,7 @@ func Compose(j *Job) *doc.Document {
 	c.method()
 	c.field()
 	c.torque()
+	c.sweep()
 	c.verification()
 	c.safety()
 	c.record()

@@ -38,8 +38,29 @@ type Report struct {
 	TorqueVector [3]Num        `json:"torque_vector_N_m"`
 	Limits       []LimitReport `json:"limits"`
 	Checks       []CheckReport `json:"checks"`
+	Sweep        *SweepReport  `json:"sweep,omitempty"`
 	LimitsFailed int           `json:"limits_failed"`
 	ChecksFailed int           `json:"checks_failed"`
+}
+
+// SweepReport is the design re-evaluated over one parameter's range.
+type SweepReport struct {
+	Parameter string            `json:"parameter"`
+	Coil      string            `json:"coil,omitempty"`
+	Steps     []SweepStepReport `json:"steps"`
+}
+
+// SweepStepReport is one step; Value is SI (a count for turns, a fraction
+// for duty). The figures are absent for a winding that does not fit.
+type SweepStepReport struct {
+	Value              Num    `json:"value"`
+	Feasible           bool   `json:"feasible"`
+	Problem            string `json:"problem,omitempty"`
+	Moment             *Num   `json:"moment_A_m2,omitempty"`
+	FieldCenter        *Num   `json:"field_center_magnitude_T,omitempty"`
+	Power              *Num   `json:"power_W,omitempty"`
+	WindingTemperature *Num   `json:"winding_temperature_C,omitempty"`
+	LimitsFailed       *int   `json:"limits_failed,omitempty"`
 }
 
 // CoilReport is one coil block.
@@ -137,6 +158,28 @@ func (j *Job) Report() Report {
 		}
 		rep.Limits = append(rep.Limits, LimitReport{Quantity: l.Limit.Quantity, Relation: rel,
 			Required: Num(req), Computed: Num(got), Unit: unit, Pass: l.Pass})
+	}
+	if sw := j.Spec.Sweep; sw != nil {
+		rep.Sweep = &SweepReport{Parameter: sw.Param, Coil: sw.Coil, Steps: []SweepStepReport{}}
+		for _, st := range j.Sweep {
+			sr := SweepStepReport{Value: Num(st.Value), Feasible: st.Feasible, Problem: st.Problem}
+			if st.Feasible {
+				n := func(v float64) *Num { x := Num(v); return &x }
+				hot, pw, failed := math.Inf(-1), 0.0, 0
+				for _, cr := range st.Results.Coils {
+					hot = math.Max(hot, cr.Temperature)
+					pw += cr.Power
+				}
+				for _, l := range st.Results.Limits {
+					if !l.Pass {
+						failed++
+					}
+				}
+				sr.Moment, sr.FieldCenter = n(st.Results.Moment.Norm()), n(st.Results.FieldCentre.Norm())
+				sr.Power, sr.WindingTemperature, sr.LimitsFailed = n(pw), n(Celsius(hot)), &failed
+			}
+			rep.Sweep.Steps = append(rep.Sweep.Steps, sr)
+		}
 	}
 	for _, k := range j.Checks {
 		rep.Checks = append(rep.Checks, CheckReport{Coil: k.Coil, Name: k.Name, Method: k.Method, Reference: k.Reference,
