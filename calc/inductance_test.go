@@ -143,7 +143,7 @@ func TestPairAndRingInductance(t *testing.T) {
 	// Single-layer pair uses the turn-by-turn mutual.
 	s := Coil{Form: Pair, MeanDiameter: 0.1, Length: 0.02, Turns: 40, Spacing: 0.05, Wire: WireFromGauge(24, Copper())}
 	ws := LayOut(s)
-	Ls := SolenoidInductance(0.05, 0.02, 40)
+	Ls := RoundWireSolenoidInductance(0.05, 0.02, 40, s.Wire.Bare)
 	Ms := WindingMutual(ws, ws, 0.05)
 	checkRel(t, "single-layer pair", CoilInductance(s, ws), 2*Ls+2*Ms, 1e-14)
 	// The mutual by rows equals the plain double sum over turns.

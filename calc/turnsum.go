@@ -146,7 +146,8 @@ func WindingMutual(w1, w2 Winding, dz float64) float64 {
 // CoilInductance returns the self-inductance, H, of a coil block with its
 // winding w: a thin circular coil by RingInductance with the hexagonal
 // bundle radius (BundleDiameter/2 of the overall wire diameter); a
-// single-layer coil by SolenoidInductance (current sheet, Nagaoka); a
+// single-layer coil by RoundWireSolenoidInductance (current sheet, Nagaoka,
+// with Rosa's round-wire correction); a
 // multilayer coil by TurnSumInductance, or by CellInductance when the exact
 // sum would need more than 4 million Maxwell evaluations. A Pair is its two coils in series,
 // L = 2 L₁ ± 2 M with M the WindingMutual at the spacing (thin: N² times the
@@ -170,7 +171,7 @@ func CoilInductance(c Coil, w Winding) float64 {
 	case w.Thin:
 		L = RingInductance(rm, BundleDiameter(outer, n)/2, n)
 	case w.LayerCount <= 1 && c.RadialBuild <= 0:
-		L = SolenoidInductance(rm, c.Length, n)
+		L = RoundWireSolenoidInductance(rm, c.Length, n, c.Wire.Bare)
 	default:
 		if rs := rowsOf(w); rowPairCost(rs, rs, true) <= turnSumBudget {
 			L = TurnSumInductance(w, c.Wire.Bare/2)
