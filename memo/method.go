@@ -170,7 +170,7 @@ func (c *composer) method() {
 func inductanceRelation(co calc.Coil, w calc.Winding) string {
 	switch {
 	case co.Form == calc.Solenoid && co.RadialBuild == 0:
-		return "L = μ0 π a² N² k_N / ℓ  (Lorenz; Nagaoka coefficient k_N)"
+		return "L = μ0 π a² N² k_N / ℓ − μ0 a N (A + B)  (Lorenz; Nagaoka coefficient k_N; Rosa round-wire correction)"
 	case w.Thin:
 		return "L = μ0 N² a [ln(8a/r_b) − 7/4]  (thin loop, bundle radius r_b)"
 	}
