@@ -44,12 +44,30 @@ type Paragraph struct {
 	Spans []Span
 }
 
-// Span is a run of inline text in one style.
+// Span is a run of inline text in one style. A Math span holds notation
+// (see Equation) set as inline mathematics.
 type Span struct {
 	Text   string
 	Emph   bool
 	Strong bool
 	Code   bool
+	Math   bool
+}
+
+// Equation is displayed mathematics: one or more lines of notation set one
+// under the other, e.g. the relation in symbols, the same with the numbers
+// put in, and the result. A line that starts with a relation sign (=, ≈,
+// ≤ …) continues the one above and lines up with its first relation sign.
+//
+// The notation is a compact TeX-like language: R_{20} = \frac{\rho_{20}
+// \ell_w}{A}, \sqrt{…}, x^{2}, Greek by name, \vec{m}, \hat{r}, \cdot,
+// \times, \left( … \right), \sum, and upright units in \unit{…} or words
+// in \text{…}; memo/mathlayout documents it in full.
+type Equation struct {
+	Label       string   // the equation's number, e.g. "5.3"; "" for none
+	Description string   // what the equation gives, in plain words
+	Lines       []string // notation, one string a line
+	Result      bool     // the last line is the result: backends emphasise it
 }
 
 // List is a bulleted or numbered list; each item is a sequence of blocks
@@ -145,6 +163,7 @@ func (Figure) isBlock()     {}
 func (Callout) isBlock()    {}
 func (TitleBlock) isBlock() {}
 func (Code) isBlock()       {}
+func (Equation) isBlock()   {}
 func (PageBreak) isBlock()  {}
 
 // Text is a convenience for a one-span plain paragraph.

@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"io"
 	"strings"
+	"unicode/utf8"
 )
 
 // WriteText writes a plain-text rendering of the document: every block's
@@ -90,6 +91,8 @@ func writeBlock(b *bufio.Writer, blk Block, indent string, section *int) {
 		for _, line := range strings.Split(strings.TrimRight(v.Text, "\n"), "\n") {
 			fmt.Fprintf(b, "%s    %s\n", indent, line)
 		}
+	case Equation:
+		writeEquation(b, v, indent)
 	case PageBreak:
 		b.WriteString("---- page break ----\n")
 	default:
@@ -102,6 +105,8 @@ func spansText(spans []Span) string {
 	var s strings.Builder
 	for _, sp := range spans {
 		switch {
+		case sp.Math:
+			s.WriteString("$" + sp.Text + "$")
 		case sp.Code:
 			s.WriteString("`" + sp.Text + "`")
 		case sp.Strong:
@@ -113,4 +118,57 @@ func spansText(spans []Span) string {
 		}
 	}
 	return s.String()
+}
+
+// writeEquation prints an equation's notation as written, one line under
+// the other, a continuation line's leading relation sign under the first
+// relation sign of the line above:
+//
+//	(5.3) Resistance at 20 °C
+//	      R_{20} = \frac{\rho_{20} \ell_w}{A}
+//	             = 4.039\,\unit{Ω}  ◀
+//
+// The last line of a result is marked ◀.
+func writeEquation(b *bufio.Writer, e Equation, indent string) {
+	head := ""
+	if e.Label != "" {
+		head = "(" + e.Label + ") "
+	}
+	fmt.Fprintf(b, "%s%s%s\n", indent, head, e.Description)
+	pad := indent + strings.Repeat(" ", max(utf8.RuneCountInString(head), 4))
+	col := -1
+	for i, l := range e.Lines {
+		l = strings.TrimSpace(l)
+		prefix := pad
+		if r := relationAt(l); r == 0 && col >= 0 {
+			prefix += strings.Repeat(" ", col)
+		} else if col < 0 && r >= 0 {
+			col = r
+		}
+		mark := ""
+		if e.Result && i == len(e.Lines)-1 {
+			mark = "  ◀"
+		}
+		fmt.Fprintf(b, "%s%s%s\n", prefix, l, mark)
+	}
+}
+
+// relationAt returns the rune column of the first relation sign of a line
+// of notation outside braces, or -1.
+func relationAt(l string) int {
+	depth, col := 0, 0
+	for _, r := range l {
+		switch r {
+		case '{':
+			depth++
+		case '}':
+			depth--
+		case '=', '≈', '≤', '≥', '<', '>', '≠', '∝', '→':
+			if depth == 0 {
+				return col
+			}
+		}
+		col++
+	}
+	return -1
 }

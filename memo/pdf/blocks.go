@@ -118,6 +118,10 @@ func (r *renderer) minHeight(b doc.Block) float64 {
 		return r.minHeight(*b)
 	case *doc.Heading:
 		return r.minHeight(*b)
+	case *doc.Equation:
+		return r.minHeight(*b)
+	case doc.Equation:
+		return r.layoutEquation(b).h
 	case doc.Paragraph:
 		n := len(layoutSpans(b.Spans, styBody, r.w, r.w))
 		return float64(min(n, 2)) * leadBody

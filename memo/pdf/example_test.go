@@ -123,6 +123,27 @@ func exampleDocument(extra int) *doc.Document {
 	}})
 	add(doc.Callout{Severity: doc.Note, Title: "Validity",
 		Spans: []doc.Span{{Text: "The thermal model holds for 20–40 °C ambient and natural convection; forced air needs a new estimate."}}})
+	add(doc.Heading{Level: 1, Text: "Method"})
+	add(doc.Paragraph{Spans: []doc.Span{{Text: "The winding resistance "}, {Text: `R_{20}`, Math: true},
+		{Text: " follows from the wire length "}, {Text: `\ell_w`, Math: true}, {Text: " and the conductor area "},
+		{Text: `A = \pi d^2/4`, Math: true}, {Text: "; the field of one turn of radius "}, {Text: `r_i`, Math: true},
+		{Text: " on its axis is "}, {Text: `\frac{\mu_0 I r_i^2}{2 (r_i^2 + z^2)^{3/2}}`, Math: true}, {Text: "."}}})
+	add(doc.Equation{Label: "4.1", Description: "Resistance at 20 °C", Result: true, Lines: []string{
+		`R_{20} = \frac{\rho_{20}\,\ell_w}{A}`,
+		`= \frac{1.7241×10⁻⁸\,\unit{Ω·m} \cdot 68.4\,\unit{m}}{0.2463\,\unit{mm^2}}`,
+		`= 4.788\,\unit{Ω}`}})
+	add(doc.Equation{Label: "4.2", Description: "Field at the centre, summed over every turn (elliptic integrals reduce to this on the axis)", Result: true, Lines: []string{
+		`B_0 = \sum_{i=1}^{N} \frac{\mu_0 I r_i^2}{2 \left( r_i^2 + z_i^2 \right)^{3/2}}`,
+		`= 12.57\,\unit{mT}`}})
+	add(doc.Equation{Label: "4.3", Description: "Steady winding temperature: heat balance with convection and radiation", Lines: []string{
+		`I^2 R(T) \cdot \delta = h A_s (T - T_a) + \varepsilon \sigma A_s \left( T^4 - T_a^4 \right)`,
+		`R(T) = R_{20} \left[ 1 + \alpha_{20} (T - 20\,\unit{°C}) \right]`}})
+	add(doc.Equation{Label: "4.4", Description: "Dipole far field", Lines: []string{
+		`\vec{B} = \frac{\mu_0}{4\pi} \, \frac{3 (\vec{m} \cdot \hat{r}) \hat{r} - \vec{m}}{r^3}`,
+		`\tau = |\vec{m} \times \vec{B}| = m B \sin\theta`}})
+	add(doc.Equation{Label: "4.5", Description: "Roots, brackets and bars", Lines: []string{
+		`k = \sqrt{\frac{4 a r}{(a + r)^2 + z^2}} \quad \bar{D} = \frac{D_i + D_o}{2} \quad \left[ \frac{a}{b} \right] \left\{ x \right\} \left| \frac{1}{x} \right| \sqrt[3]{x}`}})
+	add(doc.Equation{Description: "Bad notation falls back to its source", Lines: []string{`x = \frac{1}{`}})
 	add(doc.Heading{Level: 1, Text: "Field on the axis"})
 	add(doc.Paragraph{Spans: []doc.Span{{Text: "Figure 1 compares the exact on-axis solution with the dipole far-field approximation. The two agree within 3 % beyond |z| = 120 mm."}}})
 	add(doc.Figure{Number: 1, Caption: "Axial flux density |B| against position z; exact solution and dipole approximation.",

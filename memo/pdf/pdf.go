@@ -212,6 +212,10 @@ func (r *renderer) block(b doc.Block, next doc.Block) {
 		r.code(b)
 	case *doc.Code:
 		r.code(*b)
+	case doc.Equation:
+		r.equation(b)
+	case *doc.Equation:
+		r.equation(*b)
 	case doc.PageBreak, *doc.PageBreak:
 		if !r.fresh {
 			r.newPage()

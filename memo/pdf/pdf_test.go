@@ -216,18 +216,18 @@ func TestOutlineAndNumbering(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	// Seven level-1 headings, numbered 1…7, each a bookmark; plus level 2.
+	// Eight level-1 headings, numbered 1…8, each a bookmark; plus level 2.
 	pages := len(regexp.MustCompile(`/Type /Page\b`).FindAll(b, -1))
-	if n := bytes.Count(b, []byte("/Parent")) - pages; n != 10 {
-		t.Errorf("outline has %d entries, want 10 (7 sections, 3 subsections)", n)
+	if n := bytes.Count(b, []byte("/Parent")) - pages; n != 11 {
+		t.Errorf("outline has %d entries, want 11 (8 sections, 3 subsections)", n)
 	}
-	for _, title := range []string{"1 Summary of results", "As given", "7 Record"} {
+	for _, title := range []string{"1 Summary of results", "As given", "8 Record"} {
 		if !bytes.Contains(b, append([]byte("(\xfe\xff"), utf16Text(title)...)) {
 			t.Errorf("no bookmark %q", title)
 		}
 	}
 	joined := strings.Join(texts, "\n")
-	for i, h := range []string{"Summary of results", "Inputs", "Assumptions", "Field on the axis", "Verification", "Safety cautions", "Record"} {
+	for i, h := range []string{"Summary of results", "Inputs", "Assumptions", "Method", "Field on the axis", "Verification", "Safety cautions", "Record"} {
 		if !strings.Contains(joined, fmt.Sprintf("%d\n%s", i+1, h)) {
 			t.Errorf("heading %q not numbered %d", h, i+1)
 		}

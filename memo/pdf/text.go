@@ -6,6 +6,7 @@ import (
 	"unicode/utf8"
 
 	"coilmemo/memo/doc"
+	"coilmemo/memo/mathlayout"
 )
 
 // textStyle is the base style of a run of inline text.
@@ -16,6 +17,7 @@ type textStyle struct {
 	bold   bool
 	italic bool
 	mono   bool
+	math   bool // the text is notation, set as inline mathematics
 }
 
 // face returns the fpdf family and style for the style.
@@ -41,10 +43,11 @@ type frag struct {
 	size  float64
 	color rgb
 	w     float64
+	math  *mathlayout.Box // inline mathematics, drawn instead of text
 }
 
 func (f frag) sameFace(g frag) bool {
-	return f.fam == g.fam && f.sty == g.sty && f.size == g.size && f.color == g.color
+	return f.math == nil && g.math == nil && f.fam == g.fam && f.sty == g.sty && f.size == g.size && f.color == g.color
 }
 
 // word is an unbreakable sequence of fragments followed by an optional
@@ -74,6 +77,9 @@ func spanStyle(base textStyle, sp doc.Span) textStyle {
 	if sp.Code {
 		s.mono = true
 		s.size = base.size * 0.92
+	}
+	if sp.Math {
+		s.math = true
 	}
 	return s
 }
@@ -121,6 +127,13 @@ func words(runs []styled) []word {
 	for _, run := range runs {
 		st := run.st
 		text := run.text
+		if st.math {
+			// a formula is one unbreakable piece of its word
+			f := mathFrag(st, text)
+			cur.frags = append(cur.frags, f)
+			cur.w += f.w
+			continue
+		}
 		for text != "" {
 			i := strings.IndexFunc(text, isBreakSpace)
 			if i < 0 {
@@ -274,6 +287,16 @@ func splitWord(w word, first, width float64) []word {
 		limit = first
 	)
 	for _, f := range w.frags {
+		if f.math != nil {
+			if cur.w+f.w > limit && len(cur.frags) > 0 {
+				out = append(out, cur)
+				cur = word{}
+				limit = width
+			}
+			cur.frags = append(cur.frags, f)
+			cur.w += f.w
+			continue
+		}
 		rest := f.text
 		for rest != "" {
 			// take as many runes as fit
@@ -320,7 +343,7 @@ func mergeFrags(fs []frag) []frag {
 		out = append(out, f)
 	}
 	// a trailing space carries no ink
-	if n := len(out); n > 0 {
+	if n := len(out); n > 0 && out[n-1].math == nil {
 		t := strings.TrimRightFunc(out[n-1].text, unicode.IsSpace)
 		if t != out[n-1].text {
 			out[n-1].w = textWidthOf(out[n-1].fam, out[n-1].sty, out[n-1].size, t)
@@ -341,7 +364,10 @@ func baselineOffset(size, lead float64) float64 {
 // drawLine sets one line with its left end at x and baseline at y.
 func (r *renderer) drawLine(l line, x, y float64) {
 	for _, f := range l.frags {
-		if f.text != "" {
+		switch {
+		case f.math != nil:
+			r.drawMath(*f.math, x, y, f.color)
+		case f.text != "":
 			r.text(f, x, y)
 		}
 		x += f.w

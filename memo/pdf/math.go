@@ -1,0 +1,245 @@
+package pdf
+
+import (
+	"fmt"
+
+	"coilmemo/memo/doc"
+	"coilmemo/memo/mathlayout"
+)
+
+// Mathematics is typeset by memo/mathlayout and drawn here: glyph runs as
+// text in the embedded serif faces, bars as filled rectangles, roots,
+// growing brackets and accents as vector paths.
+
+const (
+	sizeMath       = 10.2 // displayed equations
+	sizeMathInline = 10.0 // inline mathematics in 9.5 pt running text
+	eqDescShare    = 0.3  // description column, share of the text width
+	eqGap          = 12.0 // between the description and the equation
+	eqLabelW       = 34.0 // room for the equation number at the right
+	eqLineGap      = 4.0  // least white between two lines of an equation
+	eqBefore       = 7.0
+	eqAfter        = 8.0
+)
+
+var styEqDesc = textStyle{size: sizeSmall + 0.3, lead: leadSmall + 0.4, color: colMuted}
+
+// drawMath draws a laid-out formula with its baseline's left end at (x, base).
+func (r *renderer) drawMath(b mathlayout.Box, x, base float64, c rgb) {
+	if r.dry {
+		return
+	}
+	for _, it := range b.Items {
+		switch it.Kind {
+		case mathlayout.Glyphs:
+			r.text(frag{text: it.Text, fam: it.Face.Family, sty: it.Face.Style, size: it.Size, color: c}, x+it.X, base-it.Y)
+		case mathlayout.Rule:
+			r.fillRect(x+it.X, base-it.Y-it.H, it.W, it.H, c)
+		case mathlayout.Path:
+			r.mathPath(it, x, base, c)
+		}
+	}
+}
+
+func (r *renderer) mathPath(it mathlayout.Item, x, base float64, c rgb) {
+	p := r.pdf
+	for _, s := range it.Segs {
+		switch s.Op {
+		case 'M':
+			p.MoveTo(x+s.X, base-s.Y)
+		case 'L':
+			p.LineTo(x+s.X, base-s.Y)
+		case 'C':
+			p.CurveBezierCubicTo(x+s.X1, base-s.Y1, x+s.X2, base-s.Y2, x+s.X, base-s.Y)
+		case 'Z':
+			p.ClosePath()
+		}
+	}
+	if it.Stroke > 0 {
+		p.SetDrawColor(c.r, c.g, c.b)
+		p.SetLineWidth(it.Stroke)
+		p.SetLineCapStyle("round")
+		p.SetLineJoinStyle("round")
+		p.DrawPath("D")
+		p.SetLineCapStyle("butt")
+		p.SetLineJoinStyle("miter")
+		return
+	}
+	p.SetFillColor(c.r, c.g, c.b)
+	p.DrawPath("F")
+}
+
+// ---- displayed equations ----
+
+// eqLine is one line of an equation as set.
+type eqLine struct {
+	box    mathlayout.Box
+	x      float64 // offset from the equation column's left edge
+	base   float64 // baseline below the block's top
+	result bool
+}
+
+type eqLayout struct {
+	desc    []line
+	descTop bool    // description above the equation, not beside it
+	mathX   float64 // equation column, from the column's left edge
+	lines   []eqLine
+	label   string
+	h       float64
+	errs    []error
+}
+
+// layoutEquation sets an equation's lines in a column beside its
+// description; when a line will not fit there even when broken, the
+// description goes above and the equation takes the full width.
+func (r *renderer) layoutEquation(e doc.Equation) eqLayout {
+	if el, ok := r.layoutEquationIn(e, false); ok {
+		return el
+	}
+	el, _ := r.layoutEquationIn(e, true)
+	return el
+}
+
+func (r *renderer) layoutEquationIn(e doc.Equation, stacked bool) (eqLayout, bool) {
+	el := eqLayout{descTop: stacked}
+	if e.Label != "" {
+		el.label = "(" + e.Label + ")"
+	}
+	W := r.w
+	descW := eqDescShare * W
+	mathX := descW + eqGap
+	if stacked {
+		mathX = 14
+		descW = W - eqLabelW
+	}
+	mathW := W - mathX - eqLabelW
+	if e.Description != "" {
+		el.desc = layoutSpans(plainSpans(e.Description), styEqDesc, descW, descW)
+	}
+	el.mathX = mathX
+	opt := mathlayout.Options{Size: sizeMath, Display: true}
+	fits := true
+	align := -1.0 // x of the first line's relation sign
+	em := sizeMath
+	for i, src := range e.Lines {
+		result := e.Result && i == len(e.Lines)-1
+		whole, err := mathlayout.Layout(src, opt)
+		if err != nil {
+			el.errs = append(el.errs, err)
+		}
+		// A line that starts with its relation continues the line above,
+		// lined up under its relation sign.
+		x := 0.0
+		if i > 0 && whole.Align == 0 {
+			if align >= 0 {
+				x = align
+			} else {
+				x = 2 * em
+			}
+		}
+		boxes := []mathlayout.Box{whole}
+		if x+whole.Width > mathW && err == nil {
+			boxes, _ = mathlayout.Lines(src, opt, mathW-x)
+		}
+		for k, b := range boxes {
+			bx := x
+			if k > 0 {
+				// a broken line's continuation: a relation lines up with
+				// the relation signs, a binary sign goes further in
+				if b.Align >= 0 && b.Align < em {
+					bx = max(x, align)
+				} else {
+					bx = max(x, align) + 1.5*em
+				}
+			}
+			if bx+b.Width > mathW+0.01 {
+				fits = false
+			}
+			el.lines = append(el.lines, eqLine{box: b, x: bx, result: result})
+		}
+		if i == 0 && whole.Align >= 0 {
+			align = whole.Align
+		}
+	}
+	if !fits && !stacked {
+		return el, false
+	}
+	// Baselines.
+	y := 0.0
+	if stacked && len(el.desc) > 0 {
+		y = float64(len(el.desc))*styEqDesc.lead + 2
+	}
+	descBase := 0.0
+	for i := range el.lines {
+		l := &el.lines[i]
+		if i == 0 {
+			y += max(l.box.Ascent, 0.75*em)
+			descBase = y
+		} else {
+			prev := el.lines[i-1].box
+			y += max(prev.Descent+eqLineGap+l.box.Ascent, 1.45*em)
+		}
+		l.base = y
+	}
+	h := y
+	if n := len(el.lines); n > 0 {
+		h += max(el.lines[n-1].box.Descent, 0.25*em)
+	}
+	if !stacked && len(el.desc) > 0 {
+		// the description's first baseline on the first line's
+		top := descBase - baselineOffset(styEqDesc.size, styEqDesc.lead)
+		h = max(h, top+float64(len(el.desc))*styEqDesc.lead)
+	}
+	el.h = h
+	return el, true
+}
+
+func (r *renderer) equation(e doc.Equation) {
+	el := r.layoutEquation(e)
+	r.need(eqBefore, el.h)
+	top := r.y
+	x0 := r.x
+	if len(el.desc) > 0 {
+		y := top
+		if !el.descTop && len(el.lines) > 0 {
+			y = top + el.lines[0].base - baselineOffset(styEqDesc.size, styEqDesc.lead)
+		}
+		for _, l := range el.desc {
+			r.drawLine(l, x0, y+baselineOffset(styEqDesc.size, styEqDesc.lead))
+			y += styEqDesc.lead
+		}
+	}
+	for _, l := range el.lines {
+		c := colInk
+		if l.result {
+			c = colAccent
+		}
+		r.drawMath(l.box, x0+el.mathX+l.x, top+l.base, c)
+	}
+	if el.label != "" && len(el.lines) > 0 {
+		st := textStyle{size: sizeSmall + 0.5, lead: leadSmall, color: colMuted}
+		w := textWidthOf("sans", "", st.size, el.label)
+		r.simpleText(el.label, st, x0+r.w-w, top+el.lines[0].base)
+	}
+	r.y = top + el.h
+	r.after(eqAfter)
+}
+
+// ---- inline mathematics ----
+
+// mathFrag lays out inline notation as one unbreakable fragment.
+func mathFrag(st textStyle, src string) frag {
+	size := sizeMathInline * st.size / sizeBody
+	b, _ := mathlayout.Layout(src, mathlayout.Options{Size: size})
+	return frag{size: st.size, color: st.color, w: b.Width, math: &b}
+}
+
+// MathError reports whether notation cannot be read, for tests of the
+// documents the memo composes.
+func MathError(src string) error {
+	_, err := mathlayout.Layout(src, mathlayout.Options{Size: sizeMath})
+	if err != nil {
+		return fmt.Errorf("%q: %w", src, err)
+	}
+	return nil
+}
