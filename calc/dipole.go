@@ -21,30 +21,122 @@ func DipoleField(m, r Vec) Vec {
 
 // DipoleRange returns the distance, m, from the centre of the coil block
 // along its axis beyond which the dipole field of its moment agrees with
-// the exact field within the relative tolerance tol (e.g. 0.01), found by
-// bisection between the winding's outer extent and 10⁴ times it. The
-// on-axis error of a loop falls as (3/2)(a/z)², so for one thin loop the
-// 1 % distance is about 12.2 a. NaN when no current flows or the coil has
-// no extent.
+// the exact field within the relative tolerance tol (e.g. 0.01): the
+// vector difference |B_dipole − B_exact| ≤ tol·|B_exact| at every distance
+// beyond it (see dipoleBeyond). The on-axis error of a loop falls as
+// (3/2)(a/z)², so for one thin loop the 1 % distance is about 12.2 a. NaN
+// when no current flows, the coil has no extent or no moment (an opposing
+// pair), or the tolerance is not positive.
 func DipoleRange(c Coil, w Winding, I, tol float64) float64 {
-	m := MagneticMoment(c, w, I)
+	return dipoleRange(NewCoilSource(c, w, I), w, []Vec{CoilFrame(c.Axis).U}, tol)
+}
+
+// DipoleRangePlane is DipoleRange in the plane of the coil (for a pair, its
+// mid-plane), through the centre at right angles to the axis. For a
+// circular coil every direction in the plane is alike; for a Rectangle the
+// largest distance over the directions 0°, 15°, … 90° from its width (by
+// its two mirror symmetries these stand for the whole plane) is returned.
+// For a thin loop the in-plane field is B = −μ0 m/(4π ρ³) · [1 + (9/8)(a/ρ)²
+// + (75/64)(a/ρ)⁴ + …] (the Legendre expansion of the loop's scalar
+// potential, Jackson, Classical Electrodynamics, 3rd ed., §5.5, taken at
+// θ = π/2), so its 1 % distance is about 10.6 a.
+func DipoleRangePlane(c Coil, w Winding, I, tol float64) float64 {
+	fr := CoilFrame(c.Axis)
+	dirs := []Vec{fr.E1}
+	if c.Form == Rectangle {
+		dirs = nil
+		for k := 0; k <= 6; k++ {
+			s, co := math.Sincos(float64(k) * math.Pi / 12)
+			dirs = append(dirs, fr.E1.Scale(co).Add(fr.E2.Scale(s)))
+		}
+	}
+	return dipoleRange(NewCoilSource(c, w, I), w, dirs, tol)
+}
+
+// DipoleReach holds the distances, m, from a coil block's centre beyond
+// which its point-dipole field is within 1 % and 0.1 % of the exact field,
+// on its axis and in its plane (NaN where there is no dipole moment).
+type DipoleReach struct {
+	Axis1, Axis01   float64 // on the axis, 1 % and 0.1 %
+	Plane1, Plane01 float64 // in the coil's (mid-)plane, 1 % and 0.1 %
+}
+
+// DipoleDistances returns the DipoleReach of coil block c (DipoleRange and
+// DipoleRangePlane at 1 % and 0.1 %).
+func DipoleDistances(c Coil, w Winding, I float64) DipoleReach {
+	s := NewCoilSource(c, w, I)
+	fr := CoilFrame(c.Axis)
+	plane := []Vec{fr.E1}
+	if c.Form == Rectangle {
+		plane = nil
+		for k := 0; k <= 6; k++ {
+			sn, co := math.Sincos(float64(k) * math.Pi / 12)
+			plane = append(plane, fr.E1.Scale(co).Add(fr.E2.Scale(sn)))
+		}
+	}
+	axis := []Vec{fr.U}
+	return DipoleReach{
+		Axis1: dipoleRange(s, w, axis, 0.01), Axis01: dipoleRange(s, w, axis, 0.001),
+		Plane1: dipoleRange(s, w, plane, 0.01), Plane01: dipoleRange(s, w, plane, 0.001),
+	}
+}
+
+// dipoleRange returns the largest over dirs of the distance beyond which
+// the dipole field of the source's moment is within tol of its exact
+// field along that direction from the centre.
+func dipoleRange(s *CoilSource, w Winding, dirs []Vec, tol float64) float64 {
+	c := s.coil
+	m := MagneticMoment(c, w, s.current)
 	size := coilExtent(c, w)
 	if !(size > 0) || m.Norm() == 0 || m.IsNaN() || !(tol > 0) {
 		return math.NaN()
 	}
-	fr := CoilFrame(c.Axis)
-	relErr := func(d float64) float64 {
-		p := c.Centre.Add(fr.U.Scale(d))
-		ex := CoilField(c, w, I, p)
-		dp := DipoleField(m, fr.U.Scale(d))
-		return dp.Sub(ex).Norm() / ex.Norm()
+	out := 0.0
+	for _, u := range dirs {
+		relErr := func(d float64) float64 {
+			ex := s.At(c.Centre.Add(u.Scale(d)))
+			return DipoleField(m, u.Scale(d)).Sub(ex).Norm() / ex.Norm()
+		}
+		r := dipoleBeyond(relErr, size, tol)
+		if math.IsNaN(r) {
+			return r
+		}
+		out = math.Max(out, r)
 	}
-	lo, hi := size, 1e4*size
-	if relErr(lo) <= tol {
-		return lo
-	}
+	return out
+}
+
+// dipoleBeyond returns the distance beyond which relErr(d) ≤ tol for every
+// d, searching between the winding's extent `size` and far out. The
+// relative error of the dipole field falls as (size/d)² (the next
+// multipole) or faster, so it is within tol beyond 10 size/√tol; from
+// there the search steps inwards by 2 % until the error first exceeds
+// tol, and refines that crossing by bisection to 10⁻⁹. An error that dips
+// below tol nearer in (it may pass through zero where the next multipole
+// changes sign) does not count. The winding's extent is returned when the
+// error is within tol all the way in to it.
+func dipoleBeyond(relErr func(float64) float64, size, tol float64) float64 {
+	hi := 10 * size / math.Sqrt(tol)
 	if !(relErr(hi) <= tol) {
-		return math.NaN()
+		hi *= 100
+		if !(relErr(hi) <= tol) {
+			return math.NaN()
+		}
+	}
+	lo := hi
+	for {
+		lo = hi / 1.02
+		if lo <= size {
+			if relErr(size) <= tol {
+				return size
+			}
+			lo = size
+			break
+		}
+		if !(relErr(lo) <= tol) {
+			break
+		}
+		hi = lo
 	}
 	for range 100 {
 		mid := math.Sqrt(lo * hi)

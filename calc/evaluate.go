@@ -87,11 +87,13 @@ func evaluateCoil(c Coil, cond Conditions) CoilResult {
 	if c.InsulationClass > 0 {
 		cr.InsulationMargin = c.InsulationClass - op.Temperature
 	}
-	cr.DipoleRange = DipoleRange(c, w, op.Current, DipoleTolerance)
+	cr.Dipole = DipoleDistances(c, w, op.Current)
+	cr.DipoleRange = cr.Dipole.Axis1
+	cr.Pair = AnalysePair(c, w, op.Current)
 	cr.PairForce = PairForce(c, w, op.Current)
 	cr.HomogeneityAxial, cr.HomogeneityRadial = math.NaN(), math.NaN()
 	if c.Form == Pair {
-		cr.HomogeneityAxial, cr.HomogeneityRadial = Homogeneity(c, w, op.Current, HomogeneityTolerance)
+		cr.HomogeneityAxial, cr.HomogeneityRadial = cr.Pair.Axial1, cr.Pair.Radial1
 	}
 	return cr
 }

@@ -61,6 +61,13 @@ type CoilResult struct {
 	// pair's centre, along its axis and in its mid-plane, within which the
 	// field stays within 1 % of the centre field (NaN for other forms).
 	HomogeneityAxial, HomogeneityRadial float64
+	// Dipole holds the distances beyond which the point-dipole field is
+	// within 1 % and 0.1 % of the exact field, on the axis and in the
+	// coil's plane (DipoleDistances).
+	Dipole DipoleReach
+	// Pair is a pair's homogeneous region (aiding) or centre gradient and
+	// its linear region (opposing); NaN for other forms (AnalysePair).
+	Pair PairRegion
 }
 
 // ProbeResult is the field at one probe, all coils summed.
