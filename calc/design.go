@@ -70,13 +70,23 @@ type Coil struct {
 
 	Axis   Vec // unit vector, default (0,0,1)
 	Centre Vec // m
+
+	// Switching and a.c. drive; zero means not given.
+	SwitchOff    float64 // s, time in which the driver opens the circuit
+	DriverRating float64 // V, voltage the driver's switch withstands
+	Frequency    float64 // Hz, frequency of an a.c. drive
+
+	// Heating; zero means not given.
+	OnTime              float64 // s, one energised period of the duty cycle
+	Former              Former  // former lumped with the winding's heat capacity
+	WindingConductivity float64 // W/(m·K), effective across the layers (DefaultWindingConductivity when 0)
 }
 
 // Cooling describes how the winding sheds heat.
 type Cooling struct {
 	Vacuum     bool    // radiation only
 	H          float64 // convective coefficient W/(m²·K); 0 in vacuum
-	HGiven     bool    // true when the spec stated h
+	HGiven     bool    // true when the spec stated h; else still air by a natural-convection correlation
 	Emissivity float64 // surface emissivity for radiation
 }
 
@@ -88,6 +98,16 @@ type Conditions struct {
 	// at which torque is reported, rad; the worst case (π/2) when not given.
 	DesignAngle float64
 	Cooling     Cooling
+	// FieldGradient is a stated gradient of the background field, T/m: the
+	// rate of change of the field component along a moment, per metre along
+	// it (0: none).
+	FieldGradient float64
+	// MountResistance is the thermal resistance, K/W, from each coil's
+	// winding to a mount held at the ambient temperature (0: no mount).
+	MountResistance float64
+	// AxisVertical says the coil axes are vertical (for natural
+	// convection); false: horizontal.
+	AxisVertical bool
 }
 
 // Probe is a named point where the field is reported.

@@ -43,6 +43,12 @@ func Evaluate(d Design) Results {
 	for _, p := range d.Probes {
 		res.Probes = append(res.Probes, ProbeResult{Name: p.Name, At: p.At, B: fm.At(p.At)})
 	}
+	var selfL []float64
+	for _, cr := range res.Coils {
+		selfL = append(selfL, cr.Inductance)
+	}
+	res.Couplings = Couplings(fm.Coils, fm.Windings, fm.Currents, selfL)
+	res.GradientForce = GradientForce(res.Moment.Norm(), d.Conditions.FieldGradient)
 	res.Limits = CheckLimits(d.Limits, res)
 	return res
 }
@@ -82,10 +88,24 @@ func evaluateCoil(c Coil, cond Conditions) CoilResult {
 		cr.TimeConstant = math.NaN()
 	}
 	cr.Energy = cr.Inductance * op.Current * op.Current / 2
-	cr.ThermalTau = op.Thermal.ThermalTimeConstant(cr.Mass*c.Wire.Material.SpecificHeat, op.Temperature)
+	cr.Heat = Heating(c, w, op)
+	cr.ThermalTau = op.Thermal.ThermalTimeConstant(cr.Heat.HeatCapacity, op.State.Mean)
+	if c.OnTime > 0 && cr.Heat.Cycle.On > 0 && op.State.Settled {
+		// An on/off cycle of stated on-time: its peak is the hottest state.
+		cy := cr.Heat.Cycle
+		cr.Temperature = cy.PeakHot
+		if !cy.Settled {
+			cr.Temperature, cr.Runaway = math.NaN(), true
+		} else if c.Drive == CurrentDrive && c.InsulationClass > 0 && cy.PeakHot > c.InsulationClass {
+			cr.Runaway = true
+		}
+	}
+	cr.Switch = Switching(cr.Inductance, op.RHot, op.Current, op.Voltage, c.SwitchOff, c.DriverRating)
+	cr.AC = AC(c, cr.Inductance, op.RHot, op.State.Mean, c.Frequency)
+	cr.GradientForce = GradientForce(cr.Moment.Norm(), cond.FieldGradient)
 	cr.InsulationMargin = math.NaN()
 	if c.InsulationClass > 0 {
-		cr.InsulationMargin = c.InsulationClass - op.Temperature
+		cr.InsulationMargin = c.InsulationClass - cr.Temperature
 	}
 	cr.Dipole = DipoleDistances(c, w, op.Current)
 	cr.DipoleRange = cr.Dipole.Axis1

@@ -5,15 +5,20 @@ import "math"
 // Operating is a coil block's electrical and thermal steady state.
 type Operating struct {
 	R20         float64 // Ω at 20 °C, whole block (a pair's two coils in series)
-	RHot        float64 // Ω at Temperature
+	RHot        float64 // Ω at the mean winding temperature
 	Current     float64 // A while energised
 	ColdCurrent float64 // A at the 20 °C resistance
 	Voltage     float64 // V across the block while energised
 	PowerOn     float64 // W while energised, I² R(T)
 	Power       float64 // W averaged over the duty cycle
-	Temperature float64 // K, steady uniform winding temperature
-	Runaway     bool    // no steady temperature below TempSearchMax
-	Thermal     ThermalProblem
+	Temperature float64 // K, steady hot-spot winding temperature (State.HotSpot)
+	// Runaway is set when no steady state exists below TempSearchMax, and
+	// under current drive also when the steady hot spot lies above the
+	// insulation class: no steady temperature exists that the insulation
+	// survives, the winding heats past its class.
+	Runaway bool
+	Thermal ThermalProblem
+	State   ThermalState
 }
 
 // SeriesCoils returns the number of coils in series in a block: 2 for a
@@ -46,11 +51,15 @@ func Ambient(cond Conditions) float64 {
 
 // ThermalFor returns the heat-balance data of coil c with winding w in the
 // given conditions: R20 = R'20 × wire length of the block, area = surface
-// of one coil × SeriesCoils, cooling from EffectiveCooling.
+// of one coil × SeriesCoils, cooling from EffectiveCooling — in still air
+// without a stated h the natural-convection correlation of ConvectionFor —,
+// a mount conductance SeriesCoils / MountResistance when one is given, and
+// the internal rises of WindingRise with the coil's winding conductivity
+// (DefaultWindingConductivity when not given).
 func ThermalFor(c Coil, w Winding, cond Conditions) ThermalProblem {
 	n := float64(SeriesCoils(c))
 	cool := EffectiveCooling(cond.Cooling)
-	return ThermalProblem{
+	tp := ThermalProblem{
 		Drive:      c.Drive,
 		Current:    c.Current,
 		Voltage:    c.Voltage,
@@ -62,14 +71,70 @@ func ThermalFor(c Coil, w Winding, cond Conditions) ThermalProblem {
 		Emissivity: cool.Emissivity,
 		Ambient:    Ambient(cond),
 	}
+	if !cool.Vacuum && !cool.HGiven {
+		tp.Convection = ConvectionFor(c, w, cond)
+	}
+	if cond.MountResistance > 0 && !math.IsInf(cond.MountResistance, 1) {
+		tp.Mount = n / cond.MountResistance
+	}
+	tp.RiseMean, tp.RiseMax = WindingRise(c, w, WindingConductivity(c))
+	return tp
 }
 
-// OperatingPoint returns the steady state of coil block c: the winding
-// temperature from SteadyTemperature, then R(T), the current (imposed, or
+// WindingConductivity returns the coil's effective conductivity across
+// its turns as used, W/(m·K): the given one, else
+// DefaultWindingConductivity.
+func WindingConductivity(c Coil) float64 {
+	if c.WindingConductivity > 0 {
+		return c.WindingConductivity
+	}
+	return DefaultWindingConductivity
+}
+
+// ConvectionFor returns the natural-convection model of the outer shape of
+// coil c with winding w: a thin coil (and a rectangle) is the tube of its
+// round bundle, a horizontal cylinder of the bundle diameter whatever the
+// axis; a single- or multilayer coil is a horizontal cylinder of its outer
+// diameter when its axis is horizontal, and a vertical surface as high as
+// its winding length when the axis is vertical (Conditions.AxisVertical).
+// The one correlation is applied to the coil's whole heat-shedding surface.
+// Nil when the data are missing.
+func ConvectionFor(c Coil, w Winding, cond Conditions) *NaturalConvection {
+	outer := c.Wire.Outer
+	if !(outer > 0) {
+		outer = c.Wire.Bare
+	}
+	n := w.TurnCount()
+	if n == 0 || !(outer > 0) {
+		return nil
+	}
+	if w.Thin {
+		return &NaturalConvection{Shape: HorizontalCylinder, Length: BundleDiameter(outer, n)}
+	}
+	if cond.AxisVertical {
+		l := c.Length
+		if !(l > 0) {
+			l = outer
+		}
+		return &NaturalConvection{Shape: VerticalSurface, Length: l}
+	}
+	d := c.MeanDiameter + outer
+	if w.LayerCount > 1 || c.RadialBuild > 0 {
+		d = 2 * (w.Layers[0].Radius - outer/2 + math.Max(c.RadialBuild, float64(w.LayerCount)*outer))
+	}
+	if !(d > 0) {
+		return nil
+	}
+	return &NaturalConvection{Shape: HorizontalCylinder, Length: d}
+}
+
+// OperatingPoint returns the steady state of coil block c: the thermal
+// state from ThermalProblem.Steady (mean, surface and hot-spot
+// temperatures), then R at the mean temperature, the current (imposed, or
 // V/R(T) under voltage drive — the Voltage is across the whole block), the
 // voltage I·R(T) and the power I² R(T), on and averaged. Unknown values are
-// NaN: all the temperature-dependent ones on runaway, except an imposed
-// current.
+// NaN: all the temperature-dependent ones when there is no steady state,
+// except an imposed current.
 func OperatingPoint(c Coil, w Winding, cond Conditions) Operating {
 	tp := ThermalFor(c, w, cond)
 	op := Operating{R20: tp.R20, Thermal: tp}
@@ -83,18 +148,28 @@ func OperatingPoint(c Coil, w Winding, cond Conditions) Operating {
 		op.RHot, op.Voltage, op.PowerOn, op.Power, op.Temperature = math.NaN(), math.NaN(), math.NaN(), math.NaN(), math.NaN()
 		op.ColdCurrent = math.NaN()
 		op.Current = math.NaN()
+		n := math.NaN()
+		op.State = ThermalState{Mean: n, Surface: n, HotSpot: n, PowerOn: n, Power: n, Convected: n, Radiated: n, Mounted: n,
+			Convection: ConvectionState{H: n, Ra: n, Nu: n, Film: n}}
 		if c.Drive == CurrentDrive {
 			op.Current, op.ColdCurrent = c.Current, c.Current
 		}
 		if w.WireLength == 0 && c.Drive == CurrentDrive {
 			op.R20, op.RHot, op.Voltage, op.PowerOn, op.Power = 0, 0, 0, 0, 0
 			op.Temperature = Ambient(cond)
+			a := op.Temperature
+			op.State = ThermalState{Mean: a, Surface: a, HotSpot: a, Convection: ConvectionState{H: n, Ra: n, Nu: n, Film: a}, Settled: true}
 		}
 		return op
 	}
-	T, runaway := SteadyTemperature(tp)
-	op.Temperature, op.Runaway = T, runaway
-	op.RHot = ResistanceAt(tp.R20, tp.Alpha20, T)
+	st := tp.Steady()
+	op.State = st
+	op.Temperature = st.HotSpot
+	op.Runaway = !st.Settled && !math.IsNaN(tp.residual(tp.Ambient))
+	if c.Drive == CurrentDrive && c.InsulationClass > 0 && st.HotSpot > c.InsulationClass {
+		op.Runaway = true
+	}
+	op.RHot = ResistanceAt(tp.R20, tp.Alpha20, st.Mean)
 	if c.Drive == VoltageDrive {
 		op.Current = c.Voltage / op.RHot
 		op.Voltage = c.Voltage

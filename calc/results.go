@@ -43,8 +43,8 @@ type CoilResult struct {
 	Moment         Vec     // A·m², m = I·ΣA along the axis (a pair: sum of both, 0 when opposing)
 	MomentMeanArea float64 // A·m², N·I·π·R_mean² per coil, the cross-check
 
-	Temperature float64 // K, steady winding temperature
-	Runaway     bool    // no steady temperature below the search bound exists
+	Temperature float64 // K, hottest winding temperature: steady hot spot, or the peak of an on/off cycle
+	Runaway     bool    // no steady temperature exists (under current drive: none at or below the insulation class)
 	ColdCurrent float64 // A, current at 20 °C resistance (voltage drive: the moment lost to heating shows here)
 
 	FieldCentre Vec // T, field of this coil block at the origin
@@ -61,6 +61,17 @@ type CoilResult struct {
 	// pair's centre, along its axis and in its mid-plane, within which the
 	// field stays within 1 % of the centre field (NaN for other forms).
 	HomogeneityAxial, HomogeneityRadial float64
+
+	// Heat is the thermal detail (surface and hot-spot temperatures, heat
+	// flows, warm-up, duty cycle); Temperature above is its hot spot.
+	Heat HeatResult
+	// Switch is the switching detail (rise time, switch-off voltage,
+	// suppression); AC the figures at a drive frequency.
+	Switch SwitchResult
+	AC     ACResult
+	// GradientForce is |m| × Conditions.FieldGradient, N (NaN when no
+	// gradient is stated).
+	GradientForce float64
 	// Dipole holds the distances beyond which the point-dipole field is
 	// within 1 % and 0.1 % of the exact field, on the axis and in the
 	// coil's plane (DipoleDistances).
@@ -95,4 +106,9 @@ type Results struct {
 	TorqueDesign float64
 	Probes       []ProbeResult
 	Limits       []LimitResult
+	// Couplings holds the mutual inductance and force of every pair of coil
+	// blocks; GradientForce is |m| × Conditions.FieldGradient for the total
+	// moment, N (NaN when no gradient is stated).
+	Couplings     []Coupling
+	GradientForce float64
 }

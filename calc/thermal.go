@@ -2,26 +2,29 @@ package calc
 
 import "math"
 
-// Thermal model (first steady state). The whole winding is taken at one
-// uniform temperature T; its resistance follows R(T) = R20 (1 + α20 (T −
-// 20 °C)); it sheds heat from the surface A of Winding.SurfaceArea by
-// convection with a constant coefficient h (Newton's law of cooling) and by
-// grey-body radiation to surroundings at the ambient temperature Ta
-// (Stefan–Boltzmann law); see e.g. Incropera & DeWitt, Fundamentals of Heat
-// and Mass Transfer, ch. 1. The heat balance at steady state is
+// Thermal model. The winding's resistance follows R(T) = R20 (1 + α20 (T −
+// 20 °C)) at its volume-mean temperature T; it sheds heat from the surface
+// A of Winding.SurfaceArea at the surface temperature T_s by convection
+// (a given coefficient h, Newton's law of cooling, or still air by a
+// natural-convection correlation, see convection.go), by grey-body
+// radiation to surroundings at the ambient temperature Ta
+// (Stefan–Boltzmann law) and, when a thermal resistance R_m to a mount at
+// Ta is given, by conduction through it (Incropera & DeWitt, Fundamentals
+// of Heat and Mass Transfer, ch. 1 and 3). The heat balance at steady state
+// is
 //
-//	duty · P(T) = h A (T − Ta) + ε σ A (T⁴ − Ta⁴)
+//	duty · P(T) = h A (T_s − Ta) + ε σ A (T_s⁴ − Ta⁴) + (T_s − Ta)/R_m
 //
 // with P(T) = I² R(T) under current drive and P(T) = V²/R(T) under voltage
-// drive; in vacuum h = 0 (radiation only). The duty cycle enters as the
-// average power, valid when the on/off period is short against the thermal
-// time constant. Limits: no temperature gradient through the winding (the
-// hot spot of a thick winding is hotter than this mean), h independent of
-// temperature, no conduction to mounts, the radiative sink at ambient.
+// drive; in vacuum h = 0. Inside the winding the heat flows out by
+// conduction, so the mean and the hottest point lie above the surface by
+// RiseMean·P̄ and RiseMax·P̄ (see WindingRise). The duty cycle enters as the
+// average power P̄ = duty · P, valid when the on/off period is short against
+// the thermal time constant (see PeriodicCycle for long periods).
 //
 // Under voltage drive the power falls as the winding heats, so a steady
-// temperature always exists. Under current drive the power rises with T and
-// when it outruns the losses there is no steady state: thermal runaway.
+// temperature always exists. Under current drive the power rises with T,
+// and when it outruns the losses there is no steady state: thermal runaway.
 
 // TempSearchMax is the upper bound, K, of the steady-temperature search.
 const TempSearchMax = 1500.0
@@ -35,16 +38,27 @@ type ThermalProblem struct {
 	Alpha20    float64 // 1/K
 	Duty       float64 // 0..1
 	Area       float64 // m², heat-shedding surface
-	H          float64 // W/(m²·K), convective coefficient (0 in vacuum)
+	H          float64 // W/(m²·K), convective coefficient (0 in vacuum); ignored when Convection is set
 	Emissivity float64 // 0..1
 	Ambient    float64 // K
+
+	// Convection, when set, gives h from a natural-convection correlation
+	// at the surface temperature instead of the constant H.
+	Convection *NaturalConvection
+	// Mount is the thermal conductance, W/K, to a mount at Ambient (0: none).
+	Mount float64
+	// RiseMean and RiseMax are the rises, K/W, of the winding's mean and
+	// hottest temperature above its surface per watt generated in it.
+	RiseMean, RiseMax float64
 }
 
 // StillAir returns the cooling assumed for a coil in still room air: a
 // natural-convection coefficient h = 10 W/(m²·K), inside the 2–25 W/(m²·K)
 // range given for free convection of gases by Incropera & DeWitt (Table 1.1,
 // recalled from memory), and the emissivity 0.9 typical of enamel and
-// varnish coatings (recalled from memory, not from a table).
+// varnish coatings (recalled from memory, not from a table). Evaluate
+// replaces the constant by the natural-convection correlation when h was
+// not stated (HGiven false).
 func StillAir() Cooling { return Cooling{H: 10, Emissivity: 0.9} }
 
 // VacuumCooling returns radiation-only cooling with emissivity 0.9.
@@ -66,46 +80,92 @@ func EffectiveCooling(c Cooling) Cooling {
 // ResistanceFactor).
 func ResistanceAt(r20, alpha20, T float64) float64 { return r20 * ResistanceFactor(alpha20, T) }
 
-// HeatIn returns the average heat input, W, at winding temperature T:
-// duty × I² R(T) or duty × V²/R(T).
-func (tp ThermalProblem) HeatIn(T float64) float64 {
+// PowerOn returns the power while energised, W, at mean winding
+// temperature T: I² R(T) or V²/R(T).
+func (tp ThermalProblem) PowerOn(T float64) float64 {
 	R := ResistanceAt(tp.R20, tp.Alpha20, T)
 	if tp.Drive == VoltageDrive {
-		return tp.Duty * tp.Voltage * tp.Voltage / R
+		return tp.Voltage * tp.Voltage / R
 	}
-	return tp.Duty * tp.Current * tp.Current * R
+	return tp.Current * tp.Current * R
 }
 
-// HeatOut returns the heat shed, W, at winding temperature T:
-// h A (T − Ta) + ε σ A (T⁴ − Ta⁴).
-func (tp ThermalProblem) HeatOut(T float64) float64 {
+// HeatIn returns the average heat input, W, at mean winding temperature T:
+// duty × PowerOn(T).
+func (tp ThermalProblem) HeatIn(T float64) float64 { return tp.Duty * tp.PowerOn(T) }
+
+// HeatOut returns the heat shed, W, at surface temperature Ts:
+// h A (Ts − Ta) + ε σ A (Ts⁴ − Ta⁴) + Mount (Ts − Ta).
+func (tp ThermalProblem) HeatOut(Ts float64) float64 {
+	conv, rad, mount := tp.HeatOutParts(Ts)
+	return conv + rad + mount
+}
+
+// HeatOutParts returns the convected, radiated and conducted (mount) parts
+// of HeatOut, W.
+func (tp ThermalProblem) HeatOutParts(Ts float64) (conv, rad, mount float64) {
 	ta := tp.Ambient
-	return tp.H*tp.Area*(T-ta) + tp.Emissivity*StefanBoltzmann*tp.Area*(T*T*T*T-ta*ta*ta*ta)
+	conv = tp.ConvectionCoefficient(Ts) * tp.Area * (Ts - ta)
+	rad = tp.Emissivity * StefanBoltzmann * tp.Area * (Ts*Ts*Ts*Ts - ta*ta*ta*ta)
+	mount = tp.Mount * (Ts - ta)
+	return
 }
 
-// SteadyTemperature solves the heat balance HeatIn(T) = HeatOut(T) for the
-// winding temperature T, K, by bisection on [Ta, max(TempSearchMax, Ta+1)]
-// (the bracket is valid because HeatOut − HeatIn ≤ 0 at Ta; bisection to
-// 10⁻¹² relative). It returns Ta when no heat is input, and runaway = true
-// with T = NaN when the losses are still below the input at the upper bound
-// (or the data are not numbers).
+// ConvectionCoefficient returns h, W/(m²·K), at surface temperature Ts: the
+// correlation's when Convection is set, else H.
+func (tp ThermalProblem) ConvectionCoefficient(Ts float64) float64 {
+	if tp.Convection != nil {
+		return tp.Convection.At(Ts, tp.Ambient).H
+	}
+	return tp.H
+}
+
+// Surface returns the surface temperature, K, of a winding at mean
+// temperature T generating P watts: T − RiseMean·P.
+func (tp ThermalProblem) Surface(T, P float64) float64 { return T - tp.RiseMean*P }
+
+// residual is HeatOut(surface) − HeatIn at mean temperature T.
+func (tp ThermalProblem) residual(T float64) float64 {
+	p := tp.HeatIn(T)
+	return tp.HeatOut(tp.Surface(T, p)) - p
+}
+
+// SteadyTemperature solves the heat balance HeatIn(T) = HeatOut(T_s) for
+// the winding's mean temperature T, K: it steps up from Ta in steps of 1 K
+// (then 2 %) to the first sign change of HeatOut − HeatIn — the stable
+// steady state, where losses overtake the input — and bisects that step to
+// 10⁻¹² relative. It returns Ta when no heat is input, and runaway = true
+// with T = NaN when the losses are still below the input at
+// max(TempSearchMax, Ta + 1) (or the data are not numbers).
 func SteadyTemperature(tp ThermalProblem) (T float64, runaway bool) {
 	lo := tp.Ambient
-	g := func(T float64) float64 { return tp.HeatOut(T) - tp.HeatIn(T) }
-	g0 := g(lo)
+	g0 := tp.residual(lo)
 	if math.IsNaN(g0) {
 		return math.NaN(), false
 	}
 	if g0 >= 0 {
 		return lo, false
 	}
-	hi := math.Max(TempSearchMax, lo+1)
-	if !(g(hi) > 0) {
-		return math.NaN(), true
+	top := math.Max(TempSearchMax, lo+1)
+	hi := lo
+	for {
+		step := math.Max(1, 0.02*(hi-tp.Ambient))
+		hi = math.Min(lo+step, top)
+		g := tp.residual(hi)
+		if math.IsNaN(g) {
+			return math.NaN(), false
+		}
+		if g > 0 {
+			break
+		}
+		if hi >= top {
+			return math.NaN(), true
+		}
+		lo = hi
 	}
 	for range 200 {
 		mid := lo + (hi-lo)/2
-		if g(mid) > 0 {
+		if tp.residual(mid) > 0 {
 			hi = mid
 		} else {
 			lo = mid
@@ -117,34 +177,69 @@ func SteadyTemperature(tp ThermalProblem) (T float64, runaway bool) {
 	return lo + (hi-lo)/2, false
 }
 
+// ThermalState is the steady thermal state of a coil block.
+type ThermalState struct {
+	Mean, Surface, HotSpot float64 // K
+	PowerOn, Power         float64 // W, while energised and duty-averaged
+	// Heat shed, W, by convection, radiation and the mount.
+	Convected, Radiated, Mounted float64
+	Convection                   ConvectionState // at the surface (H: the constant h when given)
+	Settled                      bool            // a steady state exists below TempSearchMax
+}
+
+// Steady returns the steady state of the heat balance (SteadyTemperature)
+// with the surface and hot-spot temperatures and the heat flows. When
+// there is no steady state every temperature and power is NaN and Settled
+// is false.
+func (tp ThermalProblem) Steady() ThermalState {
+	T, runaway := SteadyTemperature(tp)
+	if runaway || math.IsNaN(T) {
+		n := math.NaN()
+		return ThermalState{Mean: n, Surface: n, HotSpot: n, PowerOn: n, Power: n, Convected: n, Radiated: n, Mounted: n,
+			Convection: ConvectionState{H: n, Ra: n, Nu: n, Film: n}}
+	}
+	s := ThermalState{Mean: T, PowerOn: tp.PowerOn(T), Settled: true}
+	s.Power = tp.Duty * s.PowerOn
+	s.Surface = tp.Surface(T, s.Power)
+	s.HotSpot = s.Surface + tp.RiseMax*s.Power
+	s.Convected, s.Radiated, s.Mounted = tp.HeatOutParts(s.Surface)
+	if tp.Convection != nil {
+		s.Convection = tp.Convection.At(s.Surface, tp.Ambient)
+	} else {
+		s.Convection = ConvectionState{H: tp.H, Ra: math.NaN(), Nu: math.NaN(), Film: (s.Surface + tp.Ambient) / 2, InRange: true}
+	}
+	return s
+}
+
 // ThermalTimeConstant returns the time constant, s, of the winding's
-// approach to its steady temperature Ts, for heat capacity C (J/K, mass ×
-// specific heat): τ = C / (d(HeatOut − HeatIn)/dT) at Ts, the linearised
-// heat balance C dT/dt = HeatIn − HeatOut. NaN when there is no steady
-// state.
+// approach to its steady mean temperature Ts, for heat capacity C (J/K,
+// mass × specific heat): τ = C / (d(HeatOut − HeatIn)/dT) at Ts, the
+// linearised heat balance C dT/dt = HeatIn − HeatOut. NaN when there is no
+// steady state.
 func (tp ThermalProblem) ThermalTimeConstant(C, Ts float64) float64 {
 	if math.IsNaN(Ts) {
 		return math.NaN()
 	}
 	h := 1e-3 * math.Max(Ts, 1)
-	g := func(T float64) float64 { return tp.HeatOut(T) - tp.HeatIn(T) }
-	slope := (g(Ts+h) - g(Ts-h)) / (2 * h)
+	slope := (tp.residual(Ts+h) - tp.residual(Ts-h)) / (2 * h)
 	if !(slope > 0) {
 		return math.NaN()
 	}
 	return C / slope
 }
 
-// WarmUp integrates the lumped heat balance C dT/dt = HeatIn(T) − HeatOut(T)
-// from T = Ta at t = 0 to tEnd (s) in `steps` equal steps of the classical
-// fourth-order Runge–Kutta method, C the winding's heat capacity, J/K. It
-// returns steps+1 times and temperatures. The duty cycle enters as the
-// average power. A runaway coil's temperature is returned as it climbs.
+// WarmUp integrates the lumped heat balance C dT/dt = HeatIn(T) −
+// HeatOut(T_s) from T = Ta at t = 0 to tEnd (s) in `steps` equal steps of
+// the classical fourth-order Runge–Kutta method, C the winding's heat
+// capacity, J/K. It returns steps+1 times and mean temperatures. The duty
+// cycle enters as the average power. A runaway coil's temperature is
+// returned as it climbs. (WarmUpCurve integrates with step control and an
+// on/off schedule.)
 func (tp ThermalProblem) WarmUp(C, tEnd float64, steps int) (t, T []float64) {
 	if steps < 1 || !(C > 0) || !(tEnd > 0) {
 		return []float64{0}, []float64{tp.Ambient}
 	}
-	f := func(T float64) float64 { return (tp.HeatIn(T) - tp.HeatOut(T)) / C }
+	f := func(T float64) float64 { return -tp.residual(T) / C }
 	dt := tEnd / float64(steps)
 	t = make([]float64, steps+1)
 	T = make([]float64, steps+1)
@@ -159,4 +254,80 @@ func (tp ThermalProblem) WarmUp(C, tEnd float64, steps int) (t, T []float64) {
 		t[i+1] = dt * float64(i+1)
 	}
 	return t, T
+}
+
+// DefaultWindingConductivity is the effective thermal conductivity, W/(m·K),
+// taken across the layers of a winding of round enamelled wire without
+// impregnation when none is given: 0.3 W/(m·K), common practice (such
+// windings are usually quoted between about 0.1 and 0.5 W/(m·K); varnish or
+// resin impregnation raises it to about 0.5–1.5 W/(m·K)). It is not taken
+// from a published table.
+const DefaultWindingConductivity = 0.3
+
+// AnnulusRise returns the rises, K/W, of the mean and of the hottest
+// temperature above the outer surface of a cylindrical annulus (inner
+// radius ri ≥ 0, outer ro, length ℓ, conductivity k) in which heat is
+// generated uniformly and leaves by radial conduction through the outer
+// surface only, the bore and ends adiabatic. With q = P/(π (ro² − ri²) ℓ)
+// the solution of (1/r) d/dr (k r dT/dr) = −q with dT/dr = 0 at ri is
+// (Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, §3.5)
+//
+//	T(r) − T(ro) = q/(2k) [(ro² − r²)/2 − ri² ln(ro/r)]
+//	max  (r = ri): q/(4k) [ro² − ri² − 2 ri² ln(ro/ri)]
+//	mean (area-weighted): q/(2k) [(ro² − ri²)²/4 − ri² (ro² − ri²)/2 + ri⁴ ln(ro/ri)] / (ro² − ri²)
+//
+// which for ri = 0 (a solid round bundle) are q ro²/(4k) and q ro²/(8k).
+// Routing all the heat out through the outer cylinder makes these upper
+// bounds for a winding that also loses heat from its ends. NaN for bad
+// data.
+func AnnulusRise(ri, ro, l, k float64) (mean, max float64) {
+	if !(ri >= 0) || !(ro > ri) || !(l > 0) || !(k > 0) {
+		return math.NaN(), math.NaN()
+	}
+	a2 := ro*ro - ri*ri
+	q := 1 / (math.Pi * a2 * l) // per watt
+	lg := 0.0
+	if ri > 0 {
+		lg = math.Log(ro / ri)
+	}
+	max = q / (4 * k) * (a2 - 2*ri*ri*lg)
+	mean = q / (2 * k) * (a2*a2/4 - ri*ri*a2/2 + ri*ri*ri*ri*lg) / a2
+	return mean, max
+}
+
+// WindingRise returns the internal rises, K/W of the block's power, of the
+// mean and the hottest winding temperature above the winding surface for
+// coil c with winding w and effective conductivity k (W/(m·K)) across the
+// turns (AnnulusRise): a thin coil is a solid round bundle of the
+// hexagonal-packing diameter along its mean turn; a single-layer coil an
+// annulus one overall wire diameter deep over its length; a multilayer
+// coil the annulus of its radial build over its length. A pair's two coils
+// share the block's power. Zero rises when the data are missing.
+func WindingRise(c Coil, w Winding, k float64) (mean, max float64) {
+	outer := c.Wire.Outer
+	if !(outer > 0) {
+		outer = c.Wire.Bare
+	}
+	n := w.TurnCount()
+	switch {
+	case n == 0 || !(outer > 0):
+		return 0, 0
+	case w.Thin:
+		mean, max = AnnulusRise(0, BundleDiameter(outer, n)/2, w.MeanTurn, k)
+	case w.LayerCount <= 1 && c.RadialBuild <= 0:
+		rm := c.MeanDiameter / 2
+		mean, max = AnnulusRise(math.Max(rm-outer/2, 0), rm+outer/2, c.Length, k)
+	default:
+		rin := w.Layers[0].Radius - outer/2
+		length := c.Length
+		if !(length > 0) {
+			length = outer
+		}
+		mean, max = AnnulusRise(math.Max(rin, 0), math.Max(rin, 0)+math.Max(c.RadialBuild, float64(w.LayerCount)*outer), length, k)
+	}
+	if math.IsNaN(mean) || math.IsNaN(max) {
+		return 0, 0
+	}
+	s := float64(SeriesCoils(c))
+	return mean / s, max / s
 }

@@ -1,0 +1,63 @@
+package calc
+
+import (
+	"math"
+	"testing"
+)
+
+func TestSwitching(t *testing.T) {
+	// L = 20 mH, R = 8 Ω, 1.5 A from 12 V, opened in 10 µs, a 40 V driver.
+	s := Switching(20e-3, 8, 1.5, 12, 10e-6, 40)
+	checkRel(t, "τ", s.TimeConstant, 2.5e-3, 1e-15)
+	// i(t₉₀)/I = 1 − e^(−ln 10) = 0.9 exactly.
+	checkRel(t, "90 % at t₉₀", 1-math.Exp(-s.RiseTime/s.TimeConstant), 0.9, 1e-15)
+	checkRel(t, "energy", s.Energy, 0.5*20e-3*1.5*1.5, 1e-15)
+	checkRel(t, "unsuppressed spike", s.Spike, 20e-3*1.5/10e-6+12, 1e-15)
+	// The resistor keeps the switch at the rating: supply + I R_s = 40 V.
+	checkRel(t, "clamped switch voltage", s.Supply+1.5*s.Resistor, 40, 1e-15)
+	if !s.ClampFromRating {
+		t.Error("the rating was given")
+	}
+	checkRel(t, "R–D decay", s.ResistorDecay, 20e-3/(8+s.Resistor), 1e-15)
+	if !(s.ResistorTime10 < s.DiodeTime10) {
+		t.Error("a resistor in the freewheel path must speed the decay")
+	}
+	// The decay i = I e^(−t/τ) reaches 10 % at τ ln 10.
+	checkRel(t, "10 % after t₁₀", math.Exp(-s.ResistorTime10/s.ResistorDecay), 0.1, 1e-14)
+	// Energy shares: resistor + coil = ½ L I².
+	checkRel(t, "energy in R_s", s.ResistorEnergy+s.Energy*8/(8+s.Resistor), s.Energy, 1e-15)
+	// No rating: twice the supply; no switch-off time: no spike.
+	s = Switching(20e-3, 8, 1.5, 12, 0, 0)
+	checkRel(t, "default clamp", s.Clamp, 24, 0)
+	if !math.IsNaN(s.Spike) || s.ClampFromRating {
+		t.Errorf("spike %g without a switch-off time", s.Spike)
+	}
+	// A rating below the supply leaves no room for a resistor.
+	if s = Switching(20e-3, 8, 1.5, 12, 0, 10); !math.IsNaN(s.Resistor) {
+		t.Errorf("rating under the supply: R_s = %g", s.Resistor)
+	}
+}
+
+func TestSkinDepth(t *testing.T) {
+	// Copper at 20 °C (ρ = 1/58 µΩ·m, IEC 60028) at 60 Hz: δ ≈ 8.5 mm, and
+	// δ ∝ 1/√f (66 µm at 1 MHz; both widely tabulated, recalled).
+	rho := Copper().Rho20
+	checkRel(t, "60 Hz", SkinDepth(rho, 60), 8.5e-3, 5e-3)
+	checkRel(t, "1 MHz", SkinDepth(rho, 1e6), 66e-6, 1e-2)
+	checkRel(t, "scaling", SkinDepth(rho, 400)/SkinDepth(rho, 100), 0.5, 1e-15)
+	if !math.IsNaN(SkinDepth(rho, 0)) {
+		t.Error("no frequency: NaN")
+	}
+	// A.c. figures of a coil at 1 kHz.
+	c := Coil{Drive: VoltageDrive, Voltage: 10, Wire: WireFromGauge(20, Copper())}
+	a := AC(c, 10e-3, 5, T20, 1000)
+	checkRel(t, "X", a.Reactance, 2*math.Pi*1000*10e-3, 1e-15)
+	checkRel(t, "|Z|", a.Impedance, math.Hypot(5, a.Reactance), 1e-15)
+	checkRel(t, "I = V/|Z|", a.Current, 10/a.Impedance, 1e-15)
+	if !a.Reactive || a.SkinLimited {
+		t.Errorf("1 kHz on AWG 20: reactive %v, skin-limited %v (δ = %g m, r = %g m)", a.Reactive, a.SkinLimited, a.SkinDepth, a.WireRadius)
+	}
+	if a = AC(c, 10e-3, 5, T20, 100e3); !a.SkinLimited {
+		t.Errorf("100 kHz on AWG 20: δ = %g m, r = %g m", a.SkinDepth, a.WireRadius)
+	}
+}

@@ -1,0 +1,251 @@
+package calc
+
+import (
+	"math"
+	"testing"
+)
+
+func TestChurchillChuWorkedExample(t *testing.T) {
+	// Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, 6th ed.,
+	// Example 9.3 (figures recalled from memory): a horizontal steam pipe of
+	// 0.1 m diameter at 165 °C in room air at 23 °C, emissivity 0.85. Film
+	// 367 K: Ra_D = 5.07×10⁶, Nu_D = 23.3, h = 7.29 W/(m²·K), so 325 W per
+	// metre of pipe by convection.
+	nc := NaturalConvection{Shape: HorizontalCylinder, Length: 0.1}
+	Ts, Ta := CelsiusToKelvin(165), CelsiusToKelvin(23)
+	s := nc.At(Ts, Ta)
+	checkRel(t, "Ra_D", s.Ra, 5.07e6, 0.01)
+	checkRel(t, "Nu_D", s.Nu, 23.3, 0.01)
+	checkRel(t, "h", s.H, 7.29, 0.01)
+	tp := ThermalProblem{Area: math.Pi * 0.1, Emissivity: 0.85, Ambient: Ta, Convection: &nc}
+	conv, rad, _ := tp.HeatOutParts(Ts)
+	checkRel(t, "convected W/m", conv, 325, 0.01)
+	checkRel(t, "radiated W/m", rad, 0.85*StefanBoltzmann*math.Pi*0.1*(math.Pow(Ts, 4)-math.Pow(Ta, 4)), 1e-14)
+	if !s.InRange {
+		t.Error("the example lies inside the correlation's range")
+	}
+	// Limits of the correlations at Ra → 0: Nu → 0.60² and 0.825².
+	checkRel(t, "cylinder Ra → 0", ChurchillChuCylinder(0, 0.7), 0.36, 1e-12)
+	checkRel(t, "plate Ra → 0", ChurchillChuPlate(0, 0.7), 0.825*0.825, 1e-12)
+	// The table at a tabulated point, and out of range flagged.
+	if nu, k, pr, ok := AirProperties(300); !ok || nu != 15.89e-6 || k != 26.3e-3 || pr != 0.707 {
+		t.Errorf("air at 300 K: %g %g %g %v", nu, k, pr, ok)
+	}
+	if _, _, _, ok := AirProperties(900); ok {
+		t.Error("900 K is outside the table")
+	}
+}
+
+// copperCoil is a thin coil of AWG 30 copper for the thermal tests.
+func copperCoil(I float64) (Coil, Winding) {
+	c := Coil{Name: "t", Form: Loop, MeanDiameter: 0.05, Turns: 100, Wire: WireFromGauge(30, Copper()),
+		Drive: CurrentDrive, Current: I, Duty: 1, InsulationClass: CelsiusToKelvin(155)}
+	return c, LayOut(c)
+}
+
+func TestAdiabaticHeatingRate(t *testing.T) {
+	// With no heat shed and a constant resistance, C dT/dt = P exactly, so
+	// the temperature climbs at P/(m c) — copper's c = 385 J/(kg·K), CRC
+	// Handbook of Chemistry and Physics (recalled from memory; Copper()).
+	c, w := copperCoil(0.5)
+	tp := ThermalFor(c, w, Conditions{Ambient: T20, Cooling: Cooling{HGiven: true, H: 0}})
+	tp.Alpha20, tp.Emissivity, tp.RiseMean, tp.RiseMax = 0, 0, 0, 0
+	C := HeatCapacity(c, w)
+	checkRel(t, "heat capacity", C, w.Mass*385, 1e-15)
+	P := 0.25 * tp.R20
+	checkRel(t, "initial rate", tp.rate(C, true)(T20), P/(w.Mass*385), 1e-14)
+	// Integrated: the time to a limit 100 K up is C·100/P.
+	checkRel(t, "adiabatic time to +100 K", tp.TimeToReach(C, T20+100, 1e6), C*100/P, 1e-9)
+	// A former adds its heat capacity: 10 g of aluminium at 903 J/(kg·K).
+	c.Former = Former{Material: "aluminium", Mass: 0.01, SpecificHeat: 903}
+	checkRel(t, "with former", HeatCapacity(c, w), w.Mass*385+9.03, 1e-15)
+}
+
+func TestTransientTendsToSteady(t *testing.T) {
+	// Natural convection, radiation, R(T) and an internal rise: after ten
+	// time constants the warm-up has reached the steady state.
+	c, w := copperCoil(0.3)
+	c.Form, c.Length, c.RadialBuild, c.Turns = Solenoid, 0.01, 0.004, 150
+	w = LayOut(c)
+	tp := ThermalFor(c, w, Conditions{Ambient: T20, Cooling: Cooling{Emissivity: 0.85}})
+	if tp.Convection == nil || tp.RiseMax <= tp.RiseMean || tp.RiseMean <= 0 {
+		t.Fatalf("model: %+v", tp)
+	}
+	s := tp.Steady()
+	C := HeatCapacity(c, w)
+	tau := tp.ThermalTimeConstant(C, s.Mean)
+	ts, mean, hot := tp.WarmUpCurve(C, 10*tau, 0)
+	last := len(ts) - 1
+	checkRel(t, "end time", ts[last], 10*tau, 1e-12)
+	if math.Abs(mean[last]-s.Mean) > 1e-3*(s.Mean-T20) || math.Abs(hot[last]-s.HotSpot) > 1e-3*(s.HotSpot-T20) {
+		t.Errorf("after 10 τ: mean %.6g hot %.6g, steady %.6g %.6g", mean[last], hot[last], s.Mean, s.HotSpot)
+	}
+	for i := 1; i < len(mean); i++ {
+		if mean[i] < mean[i-1]-1e-9 {
+			t.Fatalf("warm-up not monotonic at %g s", ts[i])
+		}
+	}
+	// The fixed-step integrator of the average-power balance agrees.
+	_, T := tp.WarmUp(C, 10*tau, 2000)
+	checkRel(t, "fixed-step RK4", T[len(T)-1], mean[last], 1e-6)
+}
+
+func TestEnergyBalanceAtSolution(t *testing.T) {
+	// At the steady state the heat generated equals the heat shed by
+	// convection (correlation), radiation and the mount, to 10⁻⁹.
+	for _, drive := range []Drive{CurrentDrive, VoltageDrive} {
+		c, w := copperCoil(0.4)
+		c.Drive, c.Voltage, c.Duty = drive, 12, 0.6
+		tp := ThermalFor(c, w, Conditions{Ambient: CelsiusToKelvin(35), MountResistance: 40, Cooling: Cooling{Emissivity: 0.85}})
+		s := tp.Steady()
+		if !s.Settled {
+			t.Fatalf("drive %d did not settle", drive)
+		}
+		out := s.Convected + s.Radiated + s.Mounted
+		if r := math.Abs(s.Power-out) / s.Power; r > 1e-9 {
+			t.Errorf("drive %d: heat in %.15g W, out %.15g W (relative %.2g)", drive, s.Power, out, r)
+		}
+		checkRel(t, "mount share", s.Mounted, (s.Surface-tp.Ambient)/40, 1e-12)
+		if !(s.HotSpot > s.Mean && s.Mean > s.Surface && s.Surface > tp.Ambient) {
+			t.Errorf("ordering: hot %g mean %g surface %g", s.HotSpot, s.Mean, s.Surface)
+		}
+	}
+}
+
+func TestVacuumRunsHotterThanAir(t *testing.T) {
+	c, w := copperCoil(0.15)
+	air := OperatingPoint(c, w, Conditions{Ambient: T20, Cooling: Cooling{Emissivity: 0.85}})
+	vac := OperatingPoint(c, w, Conditions{Ambient: T20, Cooling: Cooling{Vacuum: true, Emissivity: 0.85}})
+	if !(vac.Temperature > air.Temperature+5) {
+		t.Errorf("vacuum %.1f K, still air %.1f K", vac.Temperature, air.Temperature)
+	}
+	// A mount conducts heat away in vacuum.
+	mounted := OperatingPoint(c, w, Conditions{Ambient: T20, MountResistance: 20, Cooling: Cooling{Vacuum: true, Emissivity: 0.85}})
+	if !(mounted.Temperature < vac.Temperature) {
+		t.Errorf("mounted %.1f K, free %.1f K", mounted.Temperature, vac.Temperature)
+	}
+}
+
+func TestRunawayAndSelfLimiting(t *testing.T) {
+	// The same coil, in vacuum, pushed hard: under current drive no steady
+	// temperature exists at or below the 155 °C class (runaway); driven
+	// from the voltage that gives the same cold current, it settles,
+	// drawing less current and giving less moment hot than cold.
+	c, w := copperCoil(0.6)
+	cond := Conditions{Ambient: T20, Cooling: Cooling{Vacuum: true, Emissivity: 0.85}}
+	cur := OperatingPoint(c, w, cond)
+	if !cur.Runaway {
+		t.Errorf("current drive at %.3g A: hot spot %.1f °C, want runaway", c.Current, KelvinToCelsius(cur.Temperature))
+	}
+	v := c
+	v.Drive, v.Voltage = VoltageDrive, cur.R20*c.Current
+	vol := OperatingPoint(v, w, cond)
+	if vol.Runaway || math.IsNaN(vol.Temperature) || !vol.State.Settled {
+		t.Fatalf("voltage drive should settle: %+v", vol.State)
+	}
+	if !(vol.Current < vol.ColdCurrent) {
+		t.Errorf("hot current %g not below cold %g", vol.Current, vol.ColdCurrent)
+	}
+	r := Evaluate(Design{Coils: []Coil{v}, Conditions: cond})
+	cr := r.Coils[0]
+	if !(cr.Heat.ColdMoment > cr.Moment.Norm()) {
+		t.Errorf("cold moment %g not above hot %g", cr.Heat.ColdMoment, cr.Moment.Norm())
+	}
+	checkRel(t, "moment ratio = current ratio", cr.Moment.Norm()/cr.Heat.ColdMoment, cr.Current/cr.ColdCurrent, 1e-12)
+	// The runaway coil reaches its class in a finite time.
+	rc := Evaluate(Design{Coils: []Coil{c}, Conditions: cond}).Coils[0]
+	if !rc.Runaway || !(rc.Heat.TimeToLimit > 0) {
+		t.Errorf("runaway %v, time to limit %g s", rc.Runaway, rc.Heat.TimeToLimit)
+	}
+	// Without a class, runaway means no steady state at all.
+	c.InsulationClass = 0
+	if op := OperatingPoint(c, w, cond); op.Runaway {
+		t.Errorf("no class: a steady state at %.0f K exists, not runaway", op.Temperature)
+	}
+}
+
+func TestTimeToReachLinear(t *testing.T) {
+	// Constant R, Newton cooling: T = Ta + ΔT∞ (1 − e^(−t/τ)), τ = C/(hA),
+	// so the time to a temperature T₁ is −τ ln(1 − (T₁ − Ta)/ΔT∞).
+	tp := baseThermal() // 12 W, hA = 0.1 W/K: ΔT∞ = 120 K
+	C := 50.0
+	tau := C / (tp.H * tp.Area)
+	want := -tau * math.Log(1-100.0/120)
+	checkRel(t, "time to +100 K", tp.TimeToReach(C, T20+100, 50*tau), want, 1e-7)
+	if !math.IsNaN(tp.TimeToReach(C, T20+130, 50*tau)) {
+		t.Error("a limit above the steady state is never reached")
+	}
+}
+
+func TestPeriodicCycleLinear(t *testing.T) {
+	// Constant R, Newton cooling, on for t₁ and off for t₂: the periodic
+	// state has peak T_p and trough T_t with (θ = T − Ta, θ∞ = P/(hA))
+	// θ_p = θ∞ + (θ_t − θ∞) e^(−t₁/τ), θ_t = θ_p e^(−t₂/τ), so
+	// θ_p = θ∞ (1 − a)/(1 − a b), a = e^(−t₁/τ), b = e^(−t₂/τ).
+	tp := baseThermal()
+	tp.Duty = 0.25
+	C := 50.0
+	tau := C / (tp.H * tp.Area)
+	on := 0.3 * tau
+	off := on * 3
+	cy := tp.PeriodicCycle(C, on)
+	a, b := math.Exp(-on/tau), math.Exp(-off/tau)
+	thetaInf := 120.0
+	peak := thetaInf * (1 - a) / (1 - a*b)
+	checkRel(t, "off time", cy.Off, off, 1e-15)
+	checkRel(t, "peak", cy.PeakMean-T20, peak, 1e-7)
+	checkRel(t, "trough", cy.Trough-T20, peak*b, 1e-7)
+	checkRel(t, "average power", cy.AveragePow, 12*0.25, 1e-6)
+	// Short period: peak and trough close in on the average-power state,
+	// a swing of about P t₁ (1 − duty)/C = 0.09 K either side.
+	cy = tp.PeriodicCycle(C, 1e-3*tau)
+	avg, _ := SteadyTemperature(tp)
+	if !(cy.Trough < avg && avg < cy.PeakMean) || cy.PeakMean-cy.Trough > 0.1 || math.Abs((cy.PeakMean+cy.Trough)/2-avg) > 1e-3 {
+		t.Errorf("short cycle: peak %g trough %g, average-power state %g", cy.PeakMean, cy.Trough, avg)
+	}
+}
+
+func TestPeriodicCycleRunaway(t *testing.T) {
+	// Current drive, convection only, α > 0, even a 50 % duty of a current
+	// that runs away on average: no periodic state.
+	tp := baseThermal()
+	tp.Alpha20, tp.Duty = 0.00393, 0.5
+	tp.Current = math.Sqrt(3 * tp.H * tp.Area / (tp.R20 * tp.Alpha20))
+	if cy := tp.PeriodicCycle(50, 10); cy.Settled {
+		t.Errorf("expected no periodic state: %+v", cy)
+	}
+}
+
+func TestAnnulusRiseAgainstFiniteDifferences(t *testing.T) {
+	// Radial conduction with uniform generation, adiabatic bore, outer
+	// surface held: the closed forms against a finite-volume solution of
+	// (1/r) d/dr (k r dT/dr) = −q on 4000 cells.
+	for _, c := range [][2]float64{{0, 0.004}, {0.01, 0.016}, {0.02, 0.021}} {
+		ri, ro := c[0], c[1]
+		const l, k = 0.03, 0.3
+		mean, hot := AnnulusRise(ri, ro, l, k)
+		q := 1 / (math.Pi * (ro*ro - ri*ri) * l)
+		const n = 4000
+		dr := (ro - ri) / n
+		// Heat flowing out through radius r: q π (r² − ri²) per unit length;
+		// march inward from the surface.
+		T := make([]float64, n+1) // at faces r_j = ri + j dr; T[n] = 0
+		for j := n - 1; j >= 0; j-- {
+			r := ri + (float64(j)+0.5)*dr
+			flux := q * math.Pi * (r*r - ri*ri) / (2 * math.Pi * r * k) // −dT/dr
+			T[j] = T[j+1] + flux*dr
+		}
+		avg, area := 0.0, 0.0
+		for j := range n {
+			r := ri + (float64(j)+0.5)*dr
+			avg += (T[j] + T[j+1]) / 2 * r
+			area += r
+		}
+		avg /= area
+		checkRel(t, "hot spot", hot, T[0], 1e-5)
+		checkRel(t, "mean", mean, avg, 1e-5)
+	}
+	if m, h := AnnulusRise(0, 0.002, 0.1, 0.5); math.Abs(h-2*m) > 1e-15*h {
+		t.Errorf("solid cylinder: max %g should be twice the mean %g", h, m)
+	}
+}

@@ -1,0 +1,373 @@
+package calc
+
+import (
+	"math"
+	"strings"
+)
+
+// Warm-up, time to the insulation limit and the periodic state of an
+// on/off duty cycle. The winding (and its former, when given) is one
+// lumped thermal mass of heat capacity C at its mean temperature T, with
+// the internal rise of WindingRise following the power at once
+// (quasi-steady conduction inside the winding):
+//
+//	C dT/dt = s(t) · P(T) − HeatOut(T − RiseMean · s(t) P(T)),  s = 1 on, 0 off
+//
+// Integrated with the classical fourth-order Runge–Kutta method under
+// step-doubling error control (each step is taken once whole and once as two
+// halves; their difference estimates the error, the step is rejected or
+// resized to keep it within integrationTol, and the two results are
+// combined by Richardson extrapolation: Press, Teukolsky, Vetterling &
+// Flannery, Numerical Recipes, 3rd ed., 2007, §17.2). gonum offers no
+// general ODE solver, so this one is ours.
+
+// integrationTol is the largest local error, K, accepted per step.
+const integrationTol = 1e-6
+
+// Former is the coil former (bobbin) whose heat capacity is lumped with the
+// winding's; per coil (each coil of a pair has its own).
+type Former struct {
+	Material     string  // material name as given ("" when not given)
+	Mass         float64 // kg (0: not given)
+	SpecificHeat float64 // J/(kg·K), from FormerMaterials
+	HeatCapacity float64 // J/K, when given directly (then Mass is 0)
+}
+
+// Capacity returns the former's heat capacity, J/K: HeatCapacity when
+// given, else Mass × SpecificHeat (0 when nothing is given).
+func (f Former) Capacity() float64 {
+	if f.HeatCapacity > 0 {
+		return f.HeatCapacity
+	}
+	if f.Mass > 0 && f.SpecificHeat > 0 {
+		return f.Mass * f.SpecificHeat
+	}
+	return 0
+}
+
+// FormerMaterial is a former material's specific heat near room
+// temperature with its source.
+type FormerMaterial struct {
+	Name         string
+	SpecificHeat float64 // J/(kg·K)
+	Source       string
+}
+
+// FormerMaterials are the former materials the spec names. Metals from
+// Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, 6th ed.,
+// Table A.1 at 300 K (recalled from memory); plastics are typical
+// data-sheet values (common practice; grades differ by ±10 %).
+var FormerMaterials = []FormerMaterial{
+	{"aluminium", 903, "Incropera & DeWitt Table A.1, pure aluminium (recalled)"},
+	{"brass", 380, "Incropera & DeWitt Table A.1, cartridge brass (recalled)"},
+	{"copper", 385, "Incropera & DeWitt Table A.1, pure copper (recalled)"},
+	{"stainless-steel", 477, "Incropera & DeWitt Table A.1, AISI 304 (recalled)"},
+	{"peek", 1340, "typical data-sheet value (common practice)"},
+	{"nylon", 1670, "typical data-sheet value for PA 66 (common practice)"},
+	{"acrylic", 1470, "typical data-sheet value for PMMA (common practice)"},
+	{"ptfe", 1000, "typical data-sheet value (common practice)"},
+	{"fr4", 1100, "typical data-sheet value for glass–epoxy laminate (common practice)"},
+}
+
+// FormerMaterialByName returns the former material of that name
+// (case-insensitive; also aluminum, stainless, pmma, pa66, g10).
+func FormerMaterialByName(name string) (FormerMaterial, bool) {
+	n := strings.ToLower(strings.TrimSpace(name))
+	switch n {
+	case "aluminum":
+		n = "aluminium"
+	case "stainless", "stainless steel":
+		n = "stainless-steel"
+	case "pmma":
+		n = "acrylic"
+	case "pa66", "pa 66", "polyamide":
+		n = "nylon"
+	case "g10", "g-10", "fr-4":
+		n = "fr4"
+	}
+	for _, m := range FormerMaterials {
+		if m.Name == n {
+			return m, true
+		}
+	}
+	return FormerMaterial{}, false
+}
+
+// HeatCapacity returns the heat capacity, J/K, of coil block c with winding
+// w: conductor mass × the conductor's specific heat plus the former, per
+// coil, × SeriesCoils. Insulation and impregnation are left out (they add a
+// few per cent and make the warm-up a little slower than computed).
+func HeatCapacity(c Coil, w Winding) float64 {
+	return float64(SeriesCoils(c)) * (w.Mass*c.Wire.Material.SpecificHeat + c.Former.Capacity())
+}
+
+// rk4Step advances dy/dt = f(y) by one classical Runge–Kutta step of h.
+func rk4Step(f func(float64) float64, y, h float64) float64 {
+	k1 := f(y)
+	k2 := f(y + h/2*k1)
+	k3 := f(y + h/2*k2)
+	k4 := f(y + h*k3)
+	return y + h/6*(k1+2*k2+2*k3+k4)
+}
+
+// integrate advances dy/dt = f(y) from y0 over the time span with step
+// control (see the file comment), calling visit(t, y) after each accepted
+// step (t from 0). It stops early, returning the time and value, when
+// stop(y) turns true, the crossing located by bisection on the last
+// step's length; else it returns (span, y(span)). hmax bounds the step.
+func integrate(f func(float64) float64, y0, span, hmax float64, stop func(float64) bool, visit func(t, y float64)) (float64, float64) {
+	t, y := 0.0, y0
+	h := math.Min(hmax, span/64)
+	if !(h > 0) {
+		return 0, y0
+	}
+	for n := 0; t < span && n < 200000; n++ {
+		h = math.Min(h, span-t)
+		one := rk4Step(f, y, h)
+		half := rk4Step(f, y, h/2)
+		two := rk4Step(f, half, h/2)
+		err := math.Abs(two - one)
+		if math.IsNaN(err) || math.IsInf(two, 0) {
+			return t, math.NaN()
+		}
+		if err > integrationTol && h > span*1e-12 {
+			h *= math.Max(0.2, 0.9*math.Pow(integrationTol/err, 0.2))
+			continue
+		}
+		next := two + (two-one)/15
+		if stop != nil && stop(next) {
+			lo, hi := 0.0, h
+			for range 60 {
+				mid := (lo + hi) / 2
+				if stop(rk4Step(f, y, mid)) {
+					hi = mid
+				} else {
+					lo = mid
+				}
+			}
+			yv := rk4Step(f, y, hi)
+			if visit != nil {
+				visit(t+hi, yv)
+			}
+			return t + hi, yv
+		}
+		t, y = t+h, next
+		if visit != nil {
+			visit(t, y)
+		}
+		grow := 5.0
+		if err > 0 {
+			grow = math.Min(5, 0.9*math.Pow(integrationTol/err, 0.2))
+		}
+		h = math.Min(h*grow, hmax)
+	}
+	return t, y
+}
+
+// rate returns dT/dt of the lumped balance, K/s, with the power on (on) or
+// off, for heat capacity C.
+func (tp ThermalProblem) rate(C float64, on bool) func(float64) float64 {
+	return func(T float64) float64 {
+		if !on {
+			return -tp.HeatOut(T) / C
+		}
+		p := tp.PowerOn(T)
+		return (p - tp.HeatOut(tp.Surface(T, p))) / C
+	}
+}
+
+// HotSpotOn returns the hottest winding temperature, K, at mean
+// temperature T with the power on: T + (RiseMax − RiseMean) · P(T).
+func (tp ThermalProblem) HotSpotOn(T float64) float64 {
+	return T + (tp.RiseMax-tp.RiseMean)*tp.PowerOn(T)
+}
+
+// runawayCeiling is the temperature, K, at which an integration gives up:
+// far beyond any insulation.
+const runawayCeiling = 2 * TempSearchMax
+
+// TimeToReach returns the time, s, in which the hot spot of a winding
+// energised continuously from ambient (no duty cycle) reaches the
+// temperature limit (K), for heat capacity C (J/K); NaN when it never does
+// (its steady hot spot stays below the limit) or within tMax.
+func (tp ThermalProblem) TimeToReach(C, limit, tMax float64) float64 {
+	if !(C > 0) || !(limit > tp.Ambient) || !(tMax > 0) {
+		return math.NaN()
+	}
+	on := tp
+	on.Duty = 1
+	if s := on.Steady(); s.Settled && s.HotSpot < limit {
+		return math.NaN()
+	}
+	stop := func(T float64) bool { return on.HotSpotOn(T) >= limit }
+	t, T := integrate(on.rate(C, true), tp.Ambient, tMax, tMax/50, stop, nil)
+	if math.IsNaN(T) || !stop(T) {
+		return math.NaN()
+	}
+	return t
+}
+
+// WarmUpCurve returns the warm-up from ambient over tEnd (s) for heat
+// capacity C: sample times, mean and hot-spot temperatures. With onTime > 0
+// and 0 < duty < 1 the power is switched on for onTime and off for
+// onTime·(1/duty − 1), repeatedly; otherwise it stays on. The hot spot
+// with the power off is the mean (the internal gradient gone). Samples are
+// the accepted integration steps, at most tEnd/200 apart.
+func (tp ThermalProblem) WarmUpCurve(C, tEnd, onTime float64) (t, mean, hot []float64) {
+	t, mean, hot = []float64{0}, []float64{tp.Ambient}, []float64{tp.Ambient}
+	if !(C > 0) || !(tEnd > 0) {
+		return
+	}
+	cycling := onTime > 0 && tp.Duty > 0 && tp.Duty < 1
+	offTime := 0.0
+	if cycling {
+		offTime = onTime * (1/tp.Duty - 1)
+	}
+	hmax := tEnd / 200
+	T := tp.Ambient
+	t0 := 0.0
+	ceiling := func(T float64) bool { return T >= runawayCeiling }
+	for t0 < tEnd && !ceiling(T) {
+		phases := []struct {
+			on   bool
+			span float64
+		}{{true, tEnd - t0}}
+		if cycling {
+			phases = []struct {
+				on   bool
+				span float64
+			}{{true, math.Min(onTime, tEnd-t0)}, {false, math.Min(offTime, tEnd-t0-onTime)}}
+		}
+		for _, ph := range phases {
+			if !(ph.span > 0) {
+				continue
+			}
+			on := ph.on
+			if on {
+				// The hot spot jumps up when the power comes on.
+				t, mean, hot = append(t, t0), append(mean, T), append(hot, tp.HotSpotOn(T))
+			} else {
+				t, mean, hot = append(t, t0), append(mean, T), append(hot, T)
+			}
+			start := t0
+			_, T = integrate(tp.rate(C, on), T, ph.span, math.Min(hmax, ph.span/8), ceiling, func(s, y float64) {
+				t, mean = append(t, start+s), append(mean, y)
+				if on {
+					hot = append(hot, tp.HotSpotOn(y))
+				} else {
+					hot = append(hot, y)
+				}
+			})
+			t0 += ph.span
+			if math.IsNaN(T) || ceiling(T) {
+				return
+			}
+		}
+	}
+	return
+}
+
+// Cycle is the periodic steady state of an on/off duty cycle.
+type Cycle struct {
+	On, Off    float64 // s
+	PeakMean   float64 // K, mean winding temperature at the end of the on period
+	PeakHot    float64 // K, hot spot at the end of the on period
+	Trough     float64 // K, winding temperature at the end of the off period
+	Periods    float64 // periods from cold until within 1 K of the periodic state (estimate: 5 τ / period)
+	Settled    bool    // a periodic state exists below TempSearchMax
+	AveragePow float64 // W, duty-averaged power in the periodic state
+}
+
+// PeriodicCycle returns the periodic steady state of the duty cycle: the
+// power on for onTime, off for onTime·(1/duty − 1), repeated, for heat
+// capacity C. The state at the start of an on period, T₀, is the fixed
+// point of the one-period map Φ (integrate), found with the Illinois
+// variant of regula falsi on Φ(T₀) − T₀ between Ta (where the coil warms
+// over a period) and the first of Ta + 2ⁿ K at which it cools. Settled is
+// false when no such state exists below TempSearchMax (runaway).
+func (tp ThermalProblem) PeriodicCycle(C, onTime float64) Cycle {
+	n := math.NaN()
+	cy := Cycle{On: onTime, PeakMean: n, PeakHot: n, Trough: n, Periods: n, AveragePow: n}
+	if !(C > 0) || !(onTime > 0) || !(tp.Duty > 0 && tp.Duty < 1) {
+		return cy
+	}
+	cy.Off = onTime * (1/tp.Duty - 1)
+	ceiling := func(T float64) bool { return T >= runawayCeiling }
+	phase := func(T0 float64, on bool, span float64) float64 {
+		_, T := integrate(tp.rate(C, on), T0, span, span/4, ceiling, nil)
+		return T
+	}
+	period := func(T0 float64) (peak, end float64) {
+		peak = phase(T0, true, onTime)
+		if ceiling(peak) || math.IsNaN(peak) {
+			return peak, math.Inf(1)
+		}
+		return peak, phase(peak, false, cy.Off)
+	}
+	g := func(T0 float64) float64 { _, e := period(T0); return e - T0 }
+	a := tp.Ambient
+	ga := g(a)
+	if !(ga > 0) {
+		// Nothing to warm (no power): the ambient is the periodic state.
+		if ga == 0 {
+			cy.PeakMean, cy.PeakHot, cy.Trough, cy.Settled, cy.AveragePow = a, a, a, true, 0
+		}
+		return cy
+	}
+	b := math.NaN()
+	for d := 1.0; a+d <= TempSearchMax; d *= 2 {
+		if g(a+d) < 0 {
+			b = a + d
+			break
+		}
+	}
+	if math.IsNaN(b) {
+		return cy
+	}
+	lo, hi := a, b
+	glo, ghi := ga, g(b)
+	side := 0
+	for range 100 {
+		x := hi - ghi*(hi-lo)/(ghi-glo)
+		if !(x > lo && x < hi) {
+			x = (lo + hi) / 2
+		}
+		gx := g(x)
+		if gx > 0 {
+			lo, glo = x, gx
+			if side == -1 {
+				ghi /= 2
+			}
+			side = -1
+		} else {
+			hi, ghi = x, gx
+			if side == 1 {
+				glo /= 2
+			}
+			side = 1
+		}
+		if hi-lo <= 1e-9*hi || gx == 0 {
+			break
+		}
+	}
+	T0 := lo + (hi-lo)/2
+	peak, end := period(T0)
+	cy.PeakMean, cy.Trough = peak, end
+	cy.PeakHot = tp.HotSpotOn(peak)
+	cy.Settled = !math.IsNaN(peak) && !ceiling(peak)
+	// Average power over the period, from the energy balance of the
+	// periodic state: the heat put in equals the heat shed.
+	// Average power over the period: the energy of the on period by the
+	// trapezoidal rule over the integration's steps (at most onTime/64).
+	var e float64
+	prevT, prevY := 0.0, T0
+	integrate(tp.rate(C, true), T0, onTime, onTime/64, nil, func(s, y float64) {
+		e += (s - prevT) * (tp.PowerOn(prevY) + tp.PowerOn(y)) / 2
+		prevT, prevY = s, y
+	})
+	cy.AveragePow = e / (onTime + cy.Off)
+	if tau := tp.ThermalTimeConstant(C, T0); tau > 0 {
+		cy.Periods = 5 * tau / (onTime + cy.Off)
+	}
+	return cy
+}
