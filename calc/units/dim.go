@@ -52,6 +52,12 @@ var (
 	SpecificHeat   = Dim{M: 2, S: -2, K: -1}
 	Conductivity   = Dim{M: 1, Kg: 1, S: -3, K: -1} // thermal, W/(m·K)
 	PerKelvin      = Dim{K: -1}
+	// FieldGradient is a flux density per length, T/m.
+	FieldGradient = Dim{M: -1, Kg: 1, S: -2, A: -1}
+	// ThermalResistance is a temperature difference per heat flow, K/W.
+	ThermalResistance = Dim{M: -2, Kg: -1, S: 3, K: 1}
+	// HeatCapacity is heat per temperature difference, J/K.
+	HeatCapacity = Dim{M: 2, Kg: 1, S: -2, K: -1}
 )
 
 type dimInfo struct {
@@ -89,6 +95,10 @@ var dimNames = map[Dim]dimInfo{
 	SpecificHeat:   {"specific heat", "J/(kg·K)", "J/(kg K)"},
 	Conductivity:   {"thermal conductivity", "W/(m·K)", "W/(m K)"},
 	PerKelvin:      {"temperature coefficient", "1/K", "1/K"},
+
+	FieldGradient:     {"field gradient", "T/m", "mT/m"},
+	ThermalResistance: {"thermal resistance", "K/W", "K/W"},
+	HeatCapacity:      {"heat capacity", "J/K", "J/K"},
 }
 
 // Name returns the dimension's everyday name ("length", "flux density"),

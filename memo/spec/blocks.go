@@ -85,6 +85,27 @@ func (p *parser) conditionsBlock(b *rawBlock) {
 			}
 			hLine = e.line
 			si = p.heatTransfer(e, cond)
+		case "field-gradient", "mount-resistance":
+			want := units.FieldGradient
+			if e.key == "mount-resistance" {
+				want = units.ThermalResistance
+			}
+			if v, ok := p.positive(e, want); ok {
+				if e.key == "field-gradient" {
+					cond.FieldGradient = v
+				} else {
+					cond.MountResistance = v
+				}
+				si = units.Format(v, want)
+			}
+		case "orientation":
+			switch v := strings.ToLower(strings.TrimSpace(e.value)); v {
+			case "horizontal", "vertical":
+				cond.AxisVertical = v == "vertical"
+				si = "coil axes " + v
+			default:
+				p.errf(e.line, "orientation = %s: want horizontal or vertical (the coil axes, for natural convection)", e.value)
+			}
 		case "emissivity":
 			q, err := units.ParseAs(e.value, units.Dimensionless)
 			switch {
@@ -109,7 +130,7 @@ func (p *parser) conditionsBlock(b *rawBlock) {
 		cond.Cooling.H, cond.Cooling.HGiven = 0, false
 	}
 	if stillAirEntry >= 0 && hLine == 0 {
-		p.spec.Entries[stillAirEntry].SI = "still-air (h = " + units.Format(stillAirH, units.HeatTransfer) + ", assumed)"
+		p.spec.Entries[stillAirEntry].SI = "still-air (natural convection, Churchill–Chu)"
 	}
 	add := func(key, si string) {
 		if !given[key] {
@@ -120,9 +141,10 @@ func (p *parser) conditionsBlock(b *rawBlock) {
 	add("background-field", "(0, 0, 0) T")
 	add("design-angle", units.Format(cond.DesignAngle, units.Angle)+" (90°)")
 	if !given["cooling"] && hLine == 0 {
-		add("cooling", "still-air (h = "+units.Format(stillAirH, units.HeatTransfer)+", assumed)")
+		add("cooling", "still-air (natural convection, Churchill–Chu)")
 	}
 	add("emissivity", units.FormatNumber(defaultEmissivity))
+	add("orientation", "coil axes horizontal")
 }
 
 func (p *parser) heatTransfer(e kv, cond *calc.Conditions) string {

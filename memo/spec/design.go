@@ -24,8 +24,11 @@ var (
 	memoKeys = []string{"title", "client", "project", "document-id", "revision", "date", "author", "checker", "status"}
 	coilKeys = []string{"name", "form", "mean-diameter", "inner-diameter", "outer-diameter", "length",
 		"radial-build", "width", "height", "turns", "wire", "wire-outer-diameter", "conductor",
-		"insulation-class", "current", "voltage", "duty", "spacing", "sense", "axis", "centre"}
-	conditionKeys = []string{"ambient", "background-field", "design-angle", "cooling", "h", "emissivity"}
+		"insulation-class", "current", "voltage", "duty", "spacing", "sense", "axis", "centre",
+		"switch-off", "driver-rating", "frequency", "on-time", "former-mass", "former-material",
+		"former-heat-capacity", "winding-conductivity"}
+	conditionKeys = []string{"ambient", "background-field", "design-angle", "cooling", "h", "emissivity",
+		"field-gradient", "mount-resistance", "orientation"}
 )
 
 // Defaults.
@@ -429,6 +432,43 @@ func (p *parser) coilValue(ci *coilIn, e kv) (string, bool) {
 		}
 		c.Duty = v
 		return units.FormatNumber(v), true
+	case "switch-off", "on-time", "driver-rating", "frequency", "former-mass", "former-heat-capacity", "winding-conductivity":
+		want := map[string]units.Dim{"switch-off": units.Time, "on-time": units.Time, "driver-rating": units.Voltage,
+			"frequency": units.Frequency, "former-mass": units.Mass, "former-heat-capacity": units.HeatCapacity,
+			"winding-conductivity": units.Conductivity}[e.key]
+		v, ok := p.positive(e, want)
+		if !ok {
+			return "", false
+		}
+		switch e.key {
+		case "switch-off":
+			c.SwitchOff = v
+		case "on-time":
+			c.OnTime = v
+		case "driver-rating":
+			c.DriverRating = v
+		case "frequency":
+			c.Frequency = v
+		case "former-mass":
+			c.Former.Mass = v
+		case "former-heat-capacity":
+			c.Former.HeatCapacity = v
+		case "winding-conductivity":
+			c.WindingConductivity = v
+		}
+		return units.Format(v, want), true
+	case "former-material":
+		m, ok := calc.FormerMaterialByName(e.value)
+		if !ok {
+			var names []string
+			for _, f := range calc.FormerMaterials {
+				names = append(names, f.Name)
+			}
+			p.errf(e.line, "former-material = %s: want one of %s, or give former-heat-capacity", e.value, strings.Join(names, ", "))
+			return "", false
+		}
+		c.Former.Material, c.Former.SpecificHeat = m.Name, m.SpecificHeat
+		return fmt.Sprintf("%s (c = %s J/(kg·K))", m.Name, strconv.FormatFloat(m.SpecificHeat, 'f', -1, 64)), true
 	case "sense":
 		switch strings.ToLower(e.value) {
 		case "aiding":
@@ -492,6 +532,7 @@ func (p *parser) checkCoil(ci *coilIn) {
 		c.Wire.Outer = calc.HeavyBuildOuter(c.Wire.Bare)
 		c.Wire.OuterEstimated = true
 	}
+	p.checkHeating(ci)
 	if !ci.formOK {
 		return // the form-dependent rules would only add noise
 	}
@@ -849,4 +890,34 @@ func formatVec(v calc.Vec, d units.Dim) string {
 		s += " " + sym
 	}
 	return s
+}
+
+// checkHeating applies the rules among the switching and heating keys of a
+// coil block: on-time needs a duty below 100 %; a former is a mass with a
+// material or a heat capacity, not both; a driver rating must exceed a
+// stated supply voltage.
+func (p *parser) checkHeating(ci *coilIn) {
+	c := &ci.c
+	has := func(k string) bool { _, ok := ci.lines[k]; return ok }
+	ok := func(k string) bool { _, ok := ci.given[k]; return ok }
+	where := fmt.Sprintf("coil %q", c.Name)
+	if ok("on-time") && !(ok("duty") && c.Duty < 1) && !ci.bad["duty"] {
+		p.errf(ci.lines["on-time"], "%s: on-time needs a duty below 100 %% (the coil is off for on-time × (1/duty − 1) each cycle)", where)
+	}
+	switch {
+	case has("former-heat-capacity") && (has("former-mass") || has("former-material")):
+		k := "former-mass"
+		if !has(k) {
+			k = "former-material"
+		}
+		p.errf(max(ci.lines["former-heat-capacity"], ci.lines[k]), "%s: give former-heat-capacity or former-mass + former-material, not both", where)
+	case has("former-mass") && !has("former-material"):
+		p.errf(ci.lines["former-mass"], "%s: former-mass needs former-material (or give former-heat-capacity instead)", where)
+	case has("former-material") && !has("former-mass"):
+		p.errf(ci.lines["former-material"], "%s: former-material needs former-mass", where)
+	}
+	if ok("driver-rating") && ok("voltage") && c.DriverRating <= c.Voltage {
+		p.errf(ci.lines["driver-rating"], "%s: driver-rating %s is not above the supply voltage %s", where,
+			ci.given["driver-rating"].value, ci.given["voltage"].value)
+	}
 }

@@ -339,8 +339,8 @@ func TestDefaults(t *testing.T) {
 			}
 		}
 	}
-	if n != 5 {
-		t.Errorf("%d condition defaults, want 5", n)
+	if n != 6 {
+		t.Errorf("%d condition defaults, want 6", n)
 	}
 }
 
@@ -543,7 +543,7 @@ func TestInsulationAndCooling(t *testing.T) {
 		vacuum bool
 		si     string
 	}{
-		{"cooling = still-air\n", 10, false, false, "still-air (h = 10 W/(m²·K), assumed)"},
+		{"cooling = still-air\n", 10, false, false, "still-air (natural convection, Churchill–Chu)"},
 		{"cooling = still-air\nh = 6 W/m2K\n", 6, true, false, "still-air"},
 		{"h = 25 W/(m2 K)\n", 25, true, false, ""},
 		{"cooling = h = 12 W/m2K\n", 12, true, false, "h = 12 W/(m²·K)"},
