@@ -22,37 +22,35 @@ const HotSurface = 60 + 273.15
 // IEC 60364-4-41, ripple-free d.c.).
 const ELV = 60.0
 
-// reach returns the largest distance from the design's origin along the
-// unit direction u at which |B| ≥ level, searching inward from far away
-// and refining by bisection; 0 when the level is not reached beyond
-// rmin. Valid because every coil's field falls monotonically far away.
+// reach returns the largest distance from origin along the unit direction
+// u at which |B| ≥ level, searching inward from rmax in steps of 25 % and
+// refining by bisection; 0 when the level is not reached at or beyond rmin,
+// which must lie outside every winding. Valid because the field outside
+// the windings falls monotonically with distance.
 func reach(fm *calc.FieldModel, origin, u calc.Vec, level, rmin, rmax float64) float64 {
 	at := func(r float64) float64 { return fm.At(origin.Add(u.Scale(r))).Norm() }
 	if at(rmax) >= level {
 		return rmax
 	}
-	// Walk inward in steps of 2 % until the level is reached.
 	hi := rmax
-	lo := hi
-	for lo > rmin {
-		lo = hi / 1.02
+	for {
+		lo := math.Max(hi/1.25, rmin)
 		if at(lo) >= level {
-			break
+			for range 50 {
+				mid := 0.5 * (lo + hi)
+				if at(mid) >= level {
+					lo = mid
+				} else {
+					hi = mid
+				}
+			}
+			return lo
+		}
+		if lo == rmin {
+			return 0
 		}
 		hi = lo
 	}
-	if lo <= rmin && at(lo) < level {
-		return 0
-	}
-	for range 60 {
-		mid := 0.5 * (lo + hi)
-		if at(mid) >= level {
-			lo = mid
-		} else {
-			hi = mid
-		}
-	}
-	return lo
 }
 
 // Cautions lists the safety cautions raised by the results, in order of
@@ -121,15 +119,24 @@ func Cautions(j *Job) []doc.Callout {
 	return out
 }
 
-// designExtent is the largest distance of any winding from the origin.
+// designExtent is the largest distance of any conductor from the origin:
+// the winding's outer radius (a thin coil's round bundle included) and
+// half its axial extent.
 func designExtent(d calc.Design) float64 {
 	e := 0.0
 	for _, co := range d.Coils {
-		r := co.MeanDiameter/2 + co.RadialBuild/2
-		if co.Form == calc.Rectangle {
-			r = math.Hypot(co.Width, co.Height) / 2
+		depth := co.RadialBuild
+		if depth == 0 {
+			depth = co.Wire.Outer
+			if co.Length == 0 {
+				depth = calc.BundleDiameter(co.Wire.Outer, co.Turns)
+			}
 		}
-		half := co.Length / 2
+		r := co.MeanDiameter/2 + depth/2
+		if co.Form == calc.Rectangle {
+			r = math.Hypot(co.Width, co.Height)/2 + depth/2
+		}
+		half := math.Max(co.Length, depth) / 2
 		if co.Form == calc.Pair {
 			half += co.Spacing / 2
 		}

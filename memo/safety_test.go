@@ -1,0 +1,77 @@
+package memo
+
+import (
+	"strings"
+	"testing"
+
+	"coilmemo/memo/doc"
+)
+
+func cautionsFor(t *testing.T, coil, conditions string) []doc.Callout {
+	t.Helper()
+	src := "# T\n\n```coil\n" + coil + "```\n"
+	if conditions != "" {
+		src += "\n```conditions\n" + conditions + "```\n"
+	}
+	j, diags := Evaluate("t.md", []byte(src))
+	if len(diags) > 0 {
+		t.Fatalf("spec problems: %v", diags)
+	}
+	return Cautions(j)
+}
+
+func hasCaution(cs []doc.Callout, sev doc.Severity, word string) bool {
+	for _, c := range cs {
+		if c.Severity == sev && strings.Contains(strings.ToLower(c.Title), word) {
+			return true
+		}
+	}
+	return false
+}
+
+// Cautions follow from the results, and the memo always closes them by
+// deferring to local codes and licensed practice.
+func TestCautionsFromResults(t *testing.T) {
+	// 2 A through AWG 30 in a 60-turn thin loop: far beyond what still air
+	// carries away (≈ 0.34 Ω/m · 11 m · 4 A² ≈ 15 W into a few cm²).
+	hot := cautionsFor(t, "mean-diameter = 60 mm\nturns = 60\nwire = AWG 30\ncurrent = 2 A\n", "")
+	if !hasCaution(hot, doc.Warning, "runaway") && !hasCaution(hot, doc.Warning, "insulation") {
+		t.Errorf("an overdriven coil raises no thermal warning: %v", titles(hot))
+	}
+	// 100 V across a coil: above the 60 V d.c. extra-low-voltage bound.
+	hv := cautionsFor(t, "mean-diameter = 200 mm\nturns = 2000\nwire = AWG 30\nvoltage = 100 V\n", "")
+	if !hasCaution(hv, doc.Warning, "hazardous") {
+		t.Errorf("100 V supply raises no voltage warning: %v", titles(hv))
+	}
+	// A strong small coil: the 0.5 mT region extends beyond the winding.
+	strong := cautionsFor(t, "mean-diameter = 50 mm\nturns = 500\nwire = AWG 22\ncurrent = 1 A\n", "")
+	if !hasCaution(strong, doc.Warning, "0.5 mt") {
+		t.Errorf("a 12 mT coil raises no implant warning: %v", titles(strong))
+	}
+	// A gentle coil raises none of these, but still closes with the
+	// general cautions.
+	calm := cautionsFor(t, "mean-diameter = 100 mm\nturns = 10\nwire = AWG 20\ncurrent = 0.1 A\n", "")
+	for _, w := range []string{"runaway", "insulation", "hazardous", "0.5 mt", "hot"} {
+		if hasCaution(calm, doc.Warning, w) || hasCaution(calm, doc.Caution, w) {
+			t.Errorf("a 10 mA·m² coil raises a %q caution: %v", w, titles(calm))
+		}
+	}
+	for _, cs := range [][]doc.Callout{hot, hv, strong, calm} {
+		last := cs[len(cs)-1]
+		text := ""
+		for _, s := range last.Spans {
+			text += s.Text
+		}
+		if !strings.Contains(text, "licensed") || !strings.Contains(text, "local codes") {
+			t.Errorf("the last caution does not defer to local codes and licensed practice: %q", text)
+		}
+	}
+}
+
+func titles(cs []doc.Callout) []string {
+	var out []string
+	for _, c := range cs {
+		out = append(out, c.Severity.String()+": "+c.Title)
+	}
+	return out
+}
