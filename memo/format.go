@@ -10,7 +10,7 @@ import (
 // figures and an SI prefix on unit: Eng(0.00123, "T", 3) = "1.23 mT".
 // A few units are shown the way the trade reads them rather than with a
 // prefix: kg as g or kg, m² as mm² or m², A/m² as A/mm², and °C, %, ratios
-// plain.
+// and material data (Ω·m, kg/m³, W/(m²·K)) plain.
 func Eng(v float64, unit string, sig int) string {
 	if math.IsNaN(v) {
 		return "n/a"
@@ -34,6 +34,9 @@ func Eng(v float64, unit string, sig int) string {
 		return Sig(v, sig) + " m²"
 	case "A/m²":
 		return Sig(v/1e6, sig) + " A/mm²"
+	case "Ω·m", "kg/m³", "W/(m²·K)", "J/(kg·K)":
+		// material data read as handbooks print them, without a prefix
+		return Sig(v, sig) + " " + unit
 	case "°C", "%", "", "K", "°":
 		s := Sig(v, sig)
 		if unit == "" {

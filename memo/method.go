@@ -88,91 +88,228 @@ func (c *composer) assumptions() {
 	c.add(doc.List{Items: items})
 }
 
-// eqRow is one line of a derivation table: quantity, relation, value.
-func eqRow(q, rel, val string) []doc.Cell {
-	return []doc.Cell{{Text: q}, {Text: rel}, {Text: val, Strong: true}}
-}
-
-// method gives, coil by coil, each result with the relation that yields it
-// and the value, in the order of derivation.
+// method gives, coil by coil, each result as a numbered equation — the
+// relation in symbols, the numbers put in, the result — in the order of
+// derivation.
 func (c *composer) method() {
 	c.heading(1, "Method and results")
 	c.para(templates.Text("method", nil))
 	d := c.j.Spec.Design
 	r := c.j.Results
 	for i, co := range d.Coils {
-		cr := r.Coils[i]
-		w := cr.Winding
+		if i >= len(r.Coils) {
+			break
+		}
 		c.heading(2, fmt.Sprintf("Coil %q (%s, %d turns, %s)", co.Name, formName(co), co.Turns, wireName(co.Wire)))
-		var rows [][]doc.Cell
-		if co.Wire.Gauge != calc.NoGauge {
-			rows = append(rows, eqRow("Bare diameter, AWG n = "+fmt.Sprint(co.Wire.Gauge),
-				"d = 0.127 mm · 92^((36 − n)/39)  (ASTM B258)", Eng(co.Wire.Bare, "m", 4)))
-		}
-		A := calc.ConductorArea(co.Wire.Bare)
-		rows = append(rows,
-			eqRow("Conductor area", "A = π d²/4", Eng(A, "m²", 4)),
-			eqRow("Overall wire diameter", "d₀ (insulated)", Eng(co.Wire.Outer, "m", 3)))
-		switch {
-		case w.Thin:
-			rows = append(rows, eqRow("Winding", "all N turns on the mean diameter D̄", fmt.Sprintf("D̄ = %s", Eng(co.MeanDiameter, "m", 4))))
-		default:
-			rows = append(rows,
-				eqRow("Turns per layer", "n_l = ⌊ℓ/d₀⌋ (or N for one layer)", fmt.Sprint(w.TurnsPerLayer)),
-				eqRow("Layers", "⌈N/n_l⌉", fmt.Sprint(w.LayerCount)))
-			if !math.IsNaN(w.FillFactor) {
-				rows = append(rows, eqRow("Copper fill factor", "N·A / winding cross-section", Sig(w.FillFactor, 3)))
-			}
-		}
-		series := calc.SeriesCoils(co)
-		wl := "ℓ_w = Σ 2π rᵢ over every turn"
-		if series == 2 {
-			wl += ", × 2 coils"
-		}
-		rows = append(rows,
-			eqRow("Mean turn length", "ℓ_t = ℓ_w / N", Eng(w.MeanTurn, "m", 4)),
-			eqRow("Wire length", wl, Eng(cr.Length, "m", 4)),
-			eqRow("Conductor mass", "m_c = ρ_m · A · ℓ_w", Eng(cr.Mass, "kg", 3)),
-			eqRow("Resistance at 20 °C", fmt.Sprintf("R₂₀ = ρ₂₀ ℓ_w / A,  ρ₂₀ = %s Ω·m", Sig(co.Wire.Material.Rho20, 5)), Eng(cr.R20, "Ω", 4)))
-		if cr.Runaway {
-			rows = append(rows, eqRow("Winding temperature", "P(T) = h A (T − T_a) + ε σ A (T⁴ − T_a⁴)", "no solution: runaway"))
-		} else {
-			rows = append(rows,
-				eqRow("Winding temperature", "I² R(T) · duty = h A (T − T_a) + ε σ A (T⁴ − T_a⁴)", Eng(Celsius(cr.Temperature), "°C", 3)),
-				eqRow("Hot resistance", fmt.Sprintf("R = R₂₀ [1 + α₂₀ (T − 20 °C)],  α₂₀ = %s /K", Sig(co.Wire.Material.Alpha20, 3)), Eng(cr.RHot, "Ω", 4)))
-		}
-		if co.Drive == calc.VoltageDrive {
-			rows = append(rows,
-				eqRow("Current (voltage drive)", "I = V / R(T)", Eng(cr.Current, "A", 4)),
-				eqRow("Current when cold", "I₂₀ = V / R₂₀", Eng(cr.ColdCurrent, "A", 4)))
-		} else {
-			rows = append(rows, eqRow("Voltage (current drive)", "V = I · R(T)", Eng(cr.Voltage, "V", 4)))
-		}
-		rows = append(rows,
-			eqRow("Power while energised", "P = I² R(T)", Eng(cr.Current*cr.Current*cr.RHot, "W", 4)),
-			eqRow("Power, duty-averaged", fmt.Sprintf("P̄ = P · duty,  duty = %s %%", Sig(100*calc.Duty(co), 3)), Eng(cr.Power, "W", 4)),
-			eqRow("Current density", "J = I / A", Eng(cr.Density, "A/m²", 3)))
-		if co.Form != calc.Rectangle {
-			rows = append(rows,
-				eqRow("Magnetic moment", "m = I · Σ π rᵢ² over every turn", Eng(cr.Moment.Norm(), "A·m²", 4)),
-				eqRow("Field at the coil centre", "B = Σ μ0 I rᵢ² / (2 (rᵢ² + zᵢ²)^(3/2))", Eng(cr.FieldCentre.Norm(), "T", 4)))
-		} else {
-			rows = append(rows, eqRow("Magnetic moment", "m = N I W H", Eng(cr.Moment.Norm(), "A·m²", 4)))
-		}
-		if !math.IsNaN(cr.Inductance) {
-			rows = append(rows, eqRow("Self-inductance", inductanceRelation(co, w), Eng(cr.Inductance, "H", 3)))
-		}
-		c.add(doc.Table{Header: []string{"Quantity", "Relation", "Value"}, Rows: rows,
-			Widths: []float64{1.6, 3.2, 1.2}, Align: []doc.Align{doc.Left, doc.Left, doc.Right}})
+		c.derive(coilSteps(co, r.Coils[i], d.Conditions)...)
 	}
+}
+
+// coilSteps derives one coil block's results: wire and winding, resistance,
+// temperature and operating point, moment, field and inductance.
+func coilSteps(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) []Step {
+	w := cr.Winding
+	mat := co.Wire.Material
+	var steps []Step
+	add := func(s ...Step) { steps = append(steps, s...) }
+	if co.Wire.Gauge != calc.NoGauge {
+		n := co.Wire.Gauge
+		add(Step{What: fmt.Sprintf("Bare wire diameter of AWG %d (ASTM B258 rule)", n),
+			Symbolic: `d = 0.127\,\unit{mm} \cdot 92^{(36 - n)/39}`,
+			Numbers:  fmt.Sprintf(`0.127\,\unit{mm} \cdot 92^{(36 - %s)/39}`, N(float64(n), 2)),
+			Result:   Q(co.Wire.Bare, "m", 4)})
+	}
+	A := calc.ConductorArea(co.Wire.Bare)
+	add(Step{What: "Conductor cross-section", Symbolic: `A = \frac{\pi d^2}{4}`,
+		Numbers: fmt.Sprintf(`\frac{\pi \cdot %s^2}{4}`, Paren(Q(co.Wire.Bare, "m", 4))), Result: Q(A, "m²", 4)})
+	outer := "Overall wire diameter over the insulation, as specified"
+	if co.Wire.OuterEstimated {
+		outer = "Overall wire diameter over the insulation (heavy-build estimate, see Assumptions)"
+	}
+	add(Step{What: outer, Symbolic: `d_o = ` + Q(co.Wire.Outer, "m", 3)})
+	series := calc.SeriesCoils(co)
+	total := co.Turns * series
+	pair := ""
+	if series == 2 {
+		pair = `2 \cdot `
+	}
+	R := co.MeanDiameter / 2
+	switch {
+	case co.Form == calc.Rectangle:
+		add(Step{What: "Wire length: N turns round the rectangle", Symbolic: `\ell_w = N \cdot 2 (W + H)`,
+			Numbers: fmt.Sprintf(`%d \cdot 2 \left(%s + %s\right)`, co.Turns, Q(co.Width, "m", 4), Q(co.Height, "m", 4)),
+			Result:  Q(cr.Length, "m", 4)})
+	case w.Thin:
+		add(Step{What: "Thin winding: every turn on the mean diameter", Symbolic: `r_i = \frac{\bar{D}}{2}`,
+			Numbers: fmt.Sprintf(`\frac{%s}{2}`, Q(co.MeanDiameter, "m", 4)), Result: Q(R, "m", 4)})
+		add(Step{What: "Wire length, every turn", Symbolic: pair + `\ell_w = \sum_{i=1}^{N} 2\pi r_i`,
+			Numbers: fmt.Sprintf(`%s%d \cdot 2\pi \cdot %s`, pair, co.Turns, Q(R, "m", 4)), Result: Q(cr.Length, "m", 4)})
+	case w.LayerCount <= 1:
+		add(Step{What: "Single layer: turn pitch along the winding length", Symbolic: `p = \frac{\ell}{N}`,
+			Numbers: fmt.Sprintf(`\frac{%s}{%d}`, Q(co.Length, "m", 4), co.Turns), Result: Q(co.Length/float64(max(co.Turns, 1)), "m", 4)})
+		add(Step{What: "Wire length, every turn on the mean diameter", Symbolic: pair + `\ell_w = \sum_{i=1}^{N} 2\pi r_i`,
+			Numbers: fmt.Sprintf(`%s%d \cdot 2\pi \cdot %s`, pair, co.Turns, Q(R, "m", 4)), Result: Q(cr.Length, "m", 4)})
+	default:
+		add(Step{What: "Turns per layer: touching turns along the winding length", Symbolic: `n_l = \left\lfloor \frac{\ell}{d_o} \right\rfloor`,
+			Numbers: fmt.Sprintf(`\left\lfloor \frac{%s}{%s} \right\rfloor`, Q(co.Length, "m", 4), Q(co.Wire.Outer, "m", 3)),
+			Result:  fmt.Sprint(w.TurnsPerLayer)})
+		add(Step{What: "Layers", Symbolic: `n_L = \left\lceil \frac{N}{n_l} \right\rceil`,
+			Numbers: fmt.Sprintf(`\left\lceil \frac{%d}{%d} \right\rceil`, co.Turns, w.TurnsPerLayer), Result: fmt.Sprint(w.LayerCount)})
+		if !math.IsNaN(w.FillFactor) && co.RadialBuild > 0 && co.Length > 0 {
+			add(Step{What: "Copper fill factor of the winding cross-section", Symbolic: `\lambda = \frac{N A}{\ell\, b}`,
+				Numbers: fmt.Sprintf(`\frac{%d \cdot %s}{%s \cdot %s}`, co.Turns, Q(A, "m²", 4), Q(co.Length, "m", 4), Q(co.RadialBuild, "m", 4)),
+				Result:  N(w.FillFactor, 3)})
+		}
+		sumR := 0.0
+		for _, l := range w.Layers {
+			sumR += float64(len(l.Z)) * l.Radius
+		}
+		add(Step{What: "Wire length, layer by layer (nₖ turns at radius rₖ)", Symbolic: pair + `\ell_w = \sum_{k=1}^{n_L} n_k\, 2\pi r_k`,
+			Numbers: fmt.Sprintf(`%s2\pi \cdot %s`, pair, Q(sumR, "m", 5)), Result: Q(cr.Length, "m", 4)})
+	}
+	if total > 0 {
+		add(Step{What: "Mean turn length", Symbolic: `\ell_t = \frac{\ell_w}{` + map[bool]string{true: "2N", false: "N"}[series == 2] + `}`,
+			Numbers: fmt.Sprintf(`\frac{%s}{%d}`, Q(cr.Length, "m", 4), total), Result: Q(cr.Length/float64(total), "m", 4)})
+	}
+	add(Step{What: "Conductor mass, density " + Eng(mat.Density, "kg/m³", 4), Symbolic: `m_c = \rho_m A \ell_w`,
+		Numbers: fmt.Sprintf(`%s \cdot %s \cdot %s`, Q(mat.Density, "kg/m³", 4), Q(A, "m²", 4), Q(cr.Length, "m", 4)),
+		Result:  Q(cr.Mass, "kg", 3)})
+	add(Step{What: fmt.Sprintf("Resistance at 20 °C, resistivity of %s %s", mat.Name, Eng(mat.Rho20, "Ω·m", 5)),
+		Symbolic: `R_{20} = \frac{\rho_{20}\, \ell_w}{A}`,
+		Numbers:  fmt.Sprintf(`\frac{%s \cdot %s}{%s}`, Q(mat.Rho20, "Ω·m", 5), Q(cr.Length, "m", 4), Q(A, "m²", 4)),
+		Result:   Q(cr.R20, "Ω", 4)})
+	add(thermalSteps(co, cr, cond)...)
+	if !cr.Runaway && !math.IsNaN(cr.RHot) {
+		// the temperature the resistance was taken at (the winding's mean)
+		T := 20 + (cr.RHot/cr.R20-1)/mat.Alpha20
+		add(Step{What: fmt.Sprintf("Resistance at the mean winding temperature, temperature coefficient %s /K", Sig(mat.Alpha20, 3)),
+			Symbolic: `R(T) = R_{20} \left[ 1 + \alpha_{20} (T - 20\,\unit{°C}) \right]`,
+			Numbers:  fmt.Sprintf(`%s \left[ 1 + %s\,\unit{K^{-1}} \cdot (%s - 20\,\unit{°C}) \right]`, Q(cr.R20, "Ω", 4), N(mat.Alpha20, 3), Q(T, "°C", 3)),
+			Result:   Q(cr.RHot, "Ω", 4)})
+	}
+	if co.Drive == calc.VoltageDrive {
+		add(Step{What: "Current under voltage drive, at the hot resistance", Symbolic: `I = \frac{V}{R(T)}`,
+			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(co.Voltage, "V", 4), Q(cr.RHot, "Ω", 4)), Result: Q(cr.Current, "A", 4)})
+		add(Step{What: "Current when cold (switch-on)", Symbolic: `I_{20} = \frac{V}{R_{20}}`,
+			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(co.Voltage, "V", 4), Q(cr.R20, "Ω", 4)), Result: Q(cr.ColdCurrent, "A", 4)})
+	} else {
+		add(Step{What: "Voltage under current drive, at the hot resistance", Symbolic: `V = I\, R(T)`,
+			Numbers: fmt.Sprintf(`%s \cdot %s`, Q(cr.Current, "A", 4), Q(cr.RHot, "Ω", 4)), Result: Q(cr.Voltage, "V", 4)})
+	}
+	pOn := cr.Current * cr.Current * cr.RHot
+	add(Step{What: "Power while energised", Symbolic: `P = I^2 R(T)`,
+		Numbers: fmt.Sprintf(`%s^2 \cdot %s`, Paren(Q(cr.Current, "A", 4)), Q(cr.RHot, "Ω", 4)), Result: Q(pOn, "W", 4)})
+	if duty := calc.Duty(co); duty < 1 {
+		add(Step{What: "Power averaged over the duty cycle δ", Symbolic: `\bar{P} = \delta P`,
+			Numbers: fmt.Sprintf(`%s \cdot %s`, N(duty, 3), Q(pOn, "W", 4)), Result: Q(cr.Power, "W", 4)})
+	}
+	add(Step{What: "Current density in the conductor", Symbolic: `J = \frac{I}{A}`,
+		Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(cr.Current, "A", 4), Q(A, "m²", 4)), Result: Q(cr.Density, "A/m²", 3)})
+	add(momentSteps(co, cr)...)
+	if !math.IsNaN(cr.Inductance) {
+		add(Step{What: inductanceWhat(co, w), Symbolic: inductanceRelation(co, w), Result: Q(cr.Inductance, "H", 3)})
+	}
+	return steps
+}
+
+// thermalSteps solve the steady-state heat balance for the winding's mean
+// temperature T (the one its resistance follows), at surface temperature
+// T_s, and give the hottest point where the winding is thick enough for
+// it to differ.
+func thermalSteps(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) []Step {
+	tp := calc.ThermalFor(co, cr.Winding, cond)
+	cool := calc.EffectiveCooling(cond.Cooling)
+	s := Step{What: "Steady winding temperature: the heat generated leaves the winding surface Aₛ by convection and radiation (solved numerically)",
+		Symbolic: `\delta\, P(T) = h A_s (T_s - T_a) + \varepsilon \sigma A_s \left( T_s^4 - T_a^4 \right)`, Solve: "T"}
+	Ta := Q(tp.Ambient, "K", 5)
+	conv := ""
+	switch {
+	case cool.Vacuum:
+		s.What = "Steady winding temperature in vacuum: the heat generated is radiated from the winding surface Aₛ (solved numerically)"
+		s.Symbolic = `\delta\, P(T) = \varepsilon \sigma A_s \left( T_s^4 - T_a^4 \right)`
+	case cond.Cooling.HGiven:
+		conv = fmt.Sprintf(`%s \cdot %s \left(T_s - %s\right) + `, Q(tp.H, "W/(m²·K)", 3), Q(tp.Area, "m²", 4), Ta)
+	default:
+		conv = fmt.Sprintf(`h(T_s) \cdot %s \left(T_s - %s\right) + `, Q(tp.Area, "m²", 4), Ta)
+	}
+	s.Numbers = fmt.Sprintf(`\delta\, P(T) = %s%s \cdot \sigma \cdot %s \left(T_s^4 - %s^4\right)`,
+		conv, N(tp.Emissivity, 2), Q(tp.Area, "m²", 4), Paren(Ta))
+	if cr.Runaway || math.IsNaN(cr.RHot) {
+		s.Result = Words("no steady state: thermal runaway")
+		return []Step{s}
+	}
+	// The mean temperature is the one the hot resistance was taken at.
+	mean := 20 + (cr.RHot/cr.R20-1)/co.Wire.Material.Alpha20
+	s.Result = Q(mean, "°C", 3)
+	steps := []Step{s}
+	if hot := Celsius(cr.Temperature); math.Abs(hot-mean) >= 0.05 {
+		steps = append(steps, Step{What: "Hottest point of the winding: heat conducted out across the turns",
+			Symbolic: `T_{\mathrm{max}} = ` + Q(hot, "°C", 3)})
+	}
+	return steps
+}
+
+// momentSteps derive the magnetic moment and the field at the centre.
+func momentSteps(co calc.Coil, cr calc.CoilResult) []Step {
+	w := cr.Winding
+	I := Q(cr.Current, "A", 4)
+	m := Q(cr.Moment.Norm(), "A·m²", 4)
+	R := co.MeanDiameter / 2
+	switch {
+	case co.Form == calc.Rectangle:
+		return []Step{{What: "Magnetic moment of N rectangular turns", Symbolic: `m = N I W H`,
+			Numbers: fmt.Sprintf(`%d \cdot %s \cdot %s \cdot %s`, co.Turns, I, Q(co.Width, "m", 4), Q(co.Height, "m", 4)), Result: m}}
+	case co.Form == calc.Pair && co.Opposing:
+		return []Step{{What: "Magnetic moment of an opposing pair: the two coils' moments cancel", Symbolic: `m = I \sum_i \pi r_i^2 - I \sum_i \pi r_i^2 = 0`}}
+	}
+	pair := ""
+	if co.Form == calc.Pair {
+		pair = `2 \cdot `
+	}
+	var steps []Step
+	mom := Step{What: "Magnetic moment: current times the area of every turn", Symbolic: `m = ` + pair + `I \sum_{i=1}^{N} \pi r_i^2`, Result: m}
+	if w.Thin || w.LayerCount <= 1 {
+		mom.Numbers = fmt.Sprintf(`%s%d \cdot %s \cdot \pi \cdot %s^2`, pair, co.Turns, I, Paren(Q(R, "m", 4)))
+	} else {
+		mom.Numbers = fmt.Sprintf(`%s%s \cdot %s`, pair, I, Q(w.AreaSum, "m²", 5))
+	}
+	steps = append(steps, mom)
+	if co.Centre.Norm() != 0 {
+		return steps
+	}
+	B := Q(cr.FieldCentre.Norm(), "T", 4)
+	switch {
+	case w.Thin && co.Form == calc.Pair:
+		z := co.Spacing / 2
+		steps = append(steps, Step{What: "Field at the centre of the pair, on the axis, both coils", Symbolic: `B_0 = 2 \cdot \frac{\mu_0 N I r^2}{2 \left( r^2 + (s/2)^2 \right)^{3/2}}`,
+			Numbers: fmt.Sprintf(`2 \cdot \frac{\mu_0 \cdot %d \cdot %s \cdot %s^2}{2 \left( %s^2 + %s^2 \right)^{3/2}}`, co.Turns, I, Paren(Q(R, "m", 4)), Paren(Q(R, "m", 4)), Paren(Q(z, "m", 4))),
+			Result:  B})
+	case w.Thin:
+		steps = append(steps, Step{What: "Field at the centre of a thin coil", Symbolic: `B_0 = \frac{\mu_0 N I}{2 r}`,
+			Numbers: fmt.Sprintf(`\frac{\mu_0 \cdot %d \cdot %s}{2 \cdot %s}`, co.Turns, I, Q(R, "m", 4)), Result: B})
+	default:
+		steps = append(steps, Step{What: "Field at the centre: the on-axis field of every turn (radius rᵢ, axial distance zᵢ from the centre), summed",
+			Symbolic: `B_0 = \sum_{i} \frac{\mu_0 I r_i^2}{2 \left( r_i^2 + z_i^2 \right)^{3/2}}`, Result: B})
+	}
+	return steps
+}
+
+func inductanceWhat(co calc.Coil, w calc.Winding) string {
+	switch {
+	case co.Form == calc.Solenoid && co.RadialBuild == 0:
+		return "Self-inductance of a single-layer coil: Lorenz's current sheet with Nagaoka's coefficient, less Rosa's round-wire correction (A, B)"
+	case w.Thin:
+		return "Self-inductance of a thin circular coil whose winding is a round bundle"
+	}
+	return "Self-inductance: self and mutual inductances of every pair of turn filaments (Maxwell), summed"
 }
 
 func inductanceRelation(co calc.Coil, w calc.Winding) string {
 	switch {
 	case co.Form == calc.Solenoid && co.RadialBuild == 0:
-		return "L = μ0 π a² N² k_N / ℓ − μ0 a N (A + B)  (Lorenz; Nagaoka coefficient k_N; Rosa round-wire correction)"
+		return `L = \frac{\mu_0 \pi a^2 N^2 k_N}{\ell} - \mu_0 a N (A + B)`
 	case w.Thin:
-		return "L = μ0 N² a [ln(8a/r_b) − 7/4]  (thin loop, bundle radius r_b)"
+		return `L = \mu_0 N^2 a \left[ \ln\frac{8a}{r_b} - \frac{7}{4} \right]`
 	}
-	return "L = Σᵢ Σⱼ Mᵢⱼ over turn filaments (Maxwell)"
+	return `L = \sum_i \sum_j M_{ij}`
 }

@@ -54,7 +54,7 @@ var symbolCmds = map[string]struct {
 	"le": {'≤', rel, false}, "leq": {'≤', rel, false}, "ge": {'≥', rel, false},
 	"geq": {'≥', rel, false}, "approx": {'≈', rel, false}, "ne": {'≠', rel, false},
 	"neq": {'≠', rel, false}, "to": {'→', rel, false}, "rightarrow": {'→', rel, false},
-	"leftarrow": {'←', rel, false}, "propto": {'∝', rel, false}, "equiv": {'≡', rel, false},
+	"leftarrow": {'←', rel, false}, "Rightarrow": {'⇒', rel, false}, "implies": {'⇒', rel, false}, "propto": {'∝', rel, false}, "equiv": {'≡', rel, false},
 	"sim": {'∼', rel, false}, "simeq": {'≃', rel, false}, "ll": {'≪', rel, false},
 	"gg": {'≫', rel, false}, "parallel": {'∥', rel, false}, "perp": {'⊥', rel, false},
 	"infty": {'∞', ord, false}, "partial": {'∂', ord, true}, "nabla": {'∇', ord, false},

@@ -71,12 +71,20 @@ func (r *renderer) mathPath(it mathlayout.Item, x, base float64, c rgb) {
 
 // ---- displayed equations ----
 
-// eqLine is one line of an equation as set.
-type eqLine struct {
+// eqPart is one source line of an equation as set: a whole line, a
+// continuation set on the line above, or one piece of a broken line.
+type eqPart struct {
 	box    mathlayout.Box
 	x      float64 // offset from the equation column's left edge
-	base   float64 // baseline below the block's top
 	result bool
+}
+
+// eqLine is one line of an equation as set.
+type eqLine struct {
+	parts []eqPart
+	base  float64 // baseline below the block's top
+	asc   float64
+	desc  float64
 }
 
 type eqLayout struct {
@@ -100,6 +108,11 @@ func (r *renderer) layoutEquation(e doc.Equation) eqLayout {
 	return el
 }
 
+// layoutEquationIn sets the lines: a line that starts with a relation sign
+// continues the one above, on the same line when both fit (as a hand
+// calculation runs on: A = πd²/4 = … = 0.032 mm²), else on a line of its
+// own with its sign under the first line's relation sign. A line too wide
+// for the column is broken before a sign.
 func (r *renderer) layoutEquationIn(e doc.Equation, stacked bool) (eqLayout, bool) {
 	el := eqLayout{descTop: stacked}
 	if e.Label != "" {
@@ -118,23 +131,32 @@ func (r *renderer) layoutEquationIn(e doc.Equation, stacked bool) (eqLayout, boo
 	}
 	el.mathX = mathX
 	opt := mathlayout.Options{Size: sizeMath, Display: true}
+	em := sizeMath
+	relGap := 5.0 / 18 * em // the space before a relation sign
 	fits := true
 	align := -1.0 // x of the first line's relation sign
-	em := sizeMath
 	for i, src := range e.Lines {
 		result := e.Result && i == len(e.Lines)-1
 		whole, err := mathlayout.Layout(src, opt)
 		if err != nil {
 			el.errs = append(el.errs, err)
 		}
-		// A line that starts with its relation continues the line above,
-		// lined up under its relation sign.
+		cont := i > 0 && whole.Align == 0
+		// run on: the line above ends with room for this one
+		if cont && len(el.lines) > 0 {
+			last := &el.lines[len(el.lines)-1]
+			end := last.parts[len(last.parts)-1]
+			x := end.x + end.box.Width + relGap
+			if x+whole.Width <= mathW {
+				last.parts = append(last.parts, eqPart{box: whole, x: x, result: result})
+				continue
+			}
+		}
 		x := 0.0
-		if i > 0 && whole.Align == 0 {
+		if cont {
+			x = 2 * em
 			if align >= 0 {
 				x = align
-			} else {
-				x = 2 * em
 			}
 		}
 		boxes := []mathlayout.Box{whole}
@@ -155,7 +177,7 @@ func (r *renderer) layoutEquationIn(e doc.Equation, stacked bool) (eqLayout, boo
 			if bx+b.Width > mathW+0.01 {
 				fits = false
 			}
-			el.lines = append(el.lines, eqLine{box: b, x: bx, result: result})
+			el.lines = append(el.lines, eqLine{parts: []eqPart{{box: b, x: bx, result: result}}})
 		}
 		if i == 0 && whole.Align >= 0 {
 			align = whole.Align
@@ -169,25 +191,26 @@ func (r *renderer) layoutEquationIn(e doc.Equation, stacked bool) (eqLayout, boo
 	if stacked && len(el.desc) > 0 {
 		y = float64(len(el.desc))*styEqDesc.lead + 2
 	}
-	descBase := 0.0
 	for i := range el.lines {
 		l := &el.lines[i]
+		for _, p := range l.parts {
+			l.asc = max(l.asc, p.box.Ascent)
+			l.desc = max(l.desc, p.box.Descent)
+		}
 		if i == 0 {
-			y += max(l.box.Ascent, 0.75*em)
-			descBase = y
+			y += max(l.asc, 0.75*em)
 		} else {
-			prev := el.lines[i-1].box
-			y += max(prev.Descent+eqLineGap+l.box.Ascent, 1.45*em)
+			y += max(el.lines[i-1].desc+eqLineGap+l.asc, 1.45*em)
 		}
 		l.base = y
 	}
 	h := y
 	if n := len(el.lines); n > 0 {
-		h += max(el.lines[n-1].box.Descent, 0.25*em)
+		h += max(el.lines[n-1].desc, 0.25*em)
 	}
-	if !stacked && len(el.desc) > 0 {
+	if !stacked && len(el.desc) > 0 && len(el.lines) > 0 {
 		// the description's first baseline on the first line's
-		top := descBase - baselineOffset(styEqDesc.size, styEqDesc.lead)
+		top := el.lines[0].base - baselineOffset(styEqDesc.size, styEqDesc.lead)
 		h = max(h, top+float64(len(el.desc))*styEqDesc.lead)
 	}
 	el.h = h
@@ -210,11 +233,13 @@ func (r *renderer) equation(e doc.Equation) {
 		}
 	}
 	for _, l := range el.lines {
-		c := colInk
-		if l.result {
-			c = colAccent
+		for _, p := range l.parts {
+			c := colInk
+			if p.result {
+				c = colAccent
+			}
+			r.drawMath(p.box, x0+el.mathX+p.x, top+l.base, c)
 		}
-		r.drawMath(l.box, x0+el.mathX+l.x, top+l.base, c)
 	}
 	if el.label != "" && len(el.lines) > 0 {
 		st := textStyle{size: sizeSmall + 0.5, lead: leadSmall, color: colMuted}
