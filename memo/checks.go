@@ -107,9 +107,83 @@ func Verify(d calc.Design, r calc.Results) []Check {
 			out = append(out, newCheck(c.Name, fmt.Sprintf("on-axis field at %s", Eng(z, "m", 3)),
 				"Σ exact loop fields", "point dipole μ0·m/(2π z³)", ex, dip, "T", 0.01))
 		}
+		out = append(out, inductanceChecks(c, cr)...)
+		out = append(out, helmholtzCheck(c, cr)...)
 		out = append(out, wireCheck(c)...)
 	}
 	return out
+}
+
+// inductanceChecks verify a single-layer coil's inductance: Nagaoka's
+// coefficient against Grover's table (interpolated at the design's ℓ/D,
+// when the embedded part of the table covers it) and against a numerical
+// integration over the current sheet, and the current-sheet inductance
+// against Wheeler's formula.
+func inductanceChecks(c calc.Coil, cr calc.CoilResult) []Check {
+	if c.Form != calc.Solenoid || c.RadialBuild > 0 || !(c.Length > 0) || !(c.MeanDiameter > 0) || math.IsNaN(cr.Inductance) {
+		return nil
+	}
+	a, l := c.MeanDiameter/2, c.Length
+	x := l / (2 * a)
+	kN := calc.NagaokaCoefficient(a, l)
+	method := "Lorenz's formula in Nagaoka's form (elliptic integrals)"
+	var out []Check
+	name := fmt.Sprintf("Nagaoka coefficient at ℓ/D = %s", Sig(x, 3))
+	if tab, errEst, ok := groverInterpolate(x); ok {
+		out = append(out, newCheck(c.Name, name, method,
+			groverSource+", interpolated (embedded, ℓ/D ≤ 1)", kN, tab, "", (groverPrecision+errEst)/tab+1e-9))
+	}
+	out = append(out, newCheck(c.Name, name, method,
+		"Maxwell's mutual inductance of the sheet's rings, integrated numerically (gonum quad)", kN, sheetNagaoka(a, l), "", 1e-6))
+	// Wheeler states 1 % for ℓ > 0.8 a.
+	if l > 0.8*a {
+		sheet := calc.SolenoidInductance(a, l, c.Turns)
+		out = append(out, newCheck(c.Name, "current-sheet inductance", "μ0·π·a²·N²·k_N/ℓ (Lorenz–Nagaoka)",
+			"Wheeler (1928): μ0·π·a²·N²/(ℓ + 0.9·a)", sheet, calc.WheelerInductance(a, l, c.Turns), "H", 0.01))
+	}
+	return out
+}
+
+// sheetNagaoka returns Nagaoka's coefficient of a current sheet of radius
+// a and length ℓ by direct numerical integration: the sheet's inductance
+// is the mutual inductance of its rings summed over every pair,
+//
+//	L = n² ∫₀^ℓ ∫₀^ℓ M(a, a, |z₁ − z₂|) dz₁ dz₂ = n² ∫₀^ℓ 2 (ℓ − u) M(a, a, u) du,
+//
+// (n turns per metre, M Maxwell's formula, see ringMutual), and k_N =
+// L / (μ0 π a² n² ℓ). M has a logarithmic singularity at u = 0, so the
+// range is cut into panels halving towards 0, each integrated by 24-point
+// Gauss–Legendre; the last sliver below ℓ·2⁻⁴⁸ contributes less than
+// 10⁻¹².
+func sheetNagaoka(a, l float64) float64 {
+	f := func(u float64) float64 { return 2 * (l - u) * ringMutual(a, u) }
+	sum := 0.0
+	hi := l
+	for range 48 {
+		lo := hi / 2
+		sum += quad.Fixed(f, lo, hi, 24, quad.Legendre{}, 0)
+		hi = lo
+	}
+	return sum / (calc.Mu0 * math.Pi * a * a * l)
+}
+
+// helmholtzCheck compares the centre field of an aiding pair at Helmholtz
+// spacing (spacing = radius, within 1 %) with the Helmholtz closed form
+// B = (4/5)^(3/2) μ0 N I / R. The tolerance allows for a spacing off R by
+// δ (the centre field changes by 0.6 δ/R to first order) and for a
+// winding of length ℓ and build b (of order ((ℓ/R)² + (b/R)²)/40 by the
+// exact field).
+func helmholtzCheck(c calc.Coil, cr calc.CoilResult) []Check {
+	R := c.MeanDiameter / 2
+	if c.Form != calc.Pair || c.Opposing || !(R > 0) || math.Abs(c.Spacing/R-1) > 0.01 {
+		return nil
+	}
+	fr := calc.CoilFrame(c.Axis)
+	B := calc.CoilField(c, cr.Winding, cr.Current, c.Centre).Dot(fr.U)
+	want := math.Pow(0.8, 1.5) * calc.Mu0 * float64(c.Turns) * cr.Current / R
+	tol := 1e-9 + 0.6*math.Abs(c.Spacing/R-1) + ((c.Length/R)*(c.Length/R)+(c.RadialBuild/R)*(c.RadialBuild/R))/40
+	return []Check{newCheck(c.Name, "field at the centre of the Helmholtz pair",
+		"Σ exact loop fields (elliptic integrals)", "Helmholtz pair: (4/5)^(3/2)·μ0·N·I/R", B, want, "T", tol)}
 }
 
 // wireCheck compares the copper wire's resistance per length with the
@@ -175,4 +249,34 @@ func loopIntegral(fr calc.Frame, ctr calc.Vec, a, I float64, p calc.Vec) calc.Ve
 		B[comp] = calc.Mu0 * I / (4 * math.Pi) * quad.Fixed(f, 0, 2*math.Pi, 96, quad.Legendre{}, 0)
 	}
 	return B
+}
+
+// ringMutual is Maxwell's mutual inductance of two coaxial circles of
+// radius a whose planes are u apart (Maxwell, Treatise, 1873, §701),
+//
+//	M = μ0 a [(2/k − k) K − (2/k) E],  k² = 4a²/(4a² + u²),
+//
+// with the complete elliptic integrals K and E by the arithmetic–geometric
+// mean (Abramowitz and Stegun, Handbook of Mathematical Functions, 17.6),
+// started from the complementary modulus k' = u/√(4a² + u²) itself so that
+// close circles (k → 1) keep their precision. Written here, apart from
+// calc's elliptic integrals, so the check is independent of them.
+func ringMutual(a, u float64) float64 {
+	h := math.Sqrt(4*a*a + u*u)
+	k, kc := 2*a/h, u/h
+	an, bn := 1.0, kc
+	sum := 0.5 * k * k // Σ 2^(n−1) c_n², c_0 = k
+	pow := 0.5
+	for range 40 {
+		cn := (an - bn) / 2
+		an, bn = (an+bn)/2, math.Sqrt(an*bn)
+		pow *= 2
+		sum += pow * cn * cn
+		if cn < 1e-17*an {
+			break
+		}
+	}
+	K := math.Pi / (2 * an)
+	E := K * (1 - sum)
+	return calc.Mu0 * a * ((2/k-k)*K - 2/k*E)
 }

@@ -124,6 +124,27 @@ func Sig(v float64, sig int) string {
 	return strings.Replace(s, "-", "−", 1)
 }
 
+// Percent formats a ratio as a percentage to two significant figures,
+// with a power of ten below 0.001 %: 0.0031 → "0.31 %", 1.6e-8 →
+// "1.6×10⁻⁶ %". The verification table writes every relative difference
+// and tolerance this one way.
+func Percent(v float64) string {
+	switch {
+	case math.IsNaN(v):
+		return "n/a"
+	case v == 0:
+		return "0 %"
+	}
+	p := 100 * v
+	if math.Abs(p) >= 1e-3 {
+		return Sig(p, 2) + " %"
+	}
+	s := strconv.FormatFloat(p, 'e', 1, 64)
+	mant, exp, _ := strings.Cut(s, "e")
+	e, _ := strconv.Atoi(exp)
+	return strings.Replace(mant, "-", "−", 1) + "×10" + superscript(strconv.Itoa(e)) + " %"
+}
+
 // Celsius converts kelvin to degrees Celsius.
 func Celsius(k float64) float64 { return k - 273.15 }
 

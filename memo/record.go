@@ -28,7 +28,7 @@ func (c *composer) verification() {
 		rows = append(rows, []doc.Cell{
 			{Text: name}, {Text: k.Method + " → " + Eng(k.Value, k.Unit, 6)},
 			{Text: k.Reference + " → " + Eng(k.Expected, k.Unit, 6)},
-			{Text: Sig(k.RelDiff, 2)}, {Text: Sig(k.Tolerance, 2)},
+			{Text: Percent(k.RelDiff)}, {Text: Percent(k.Tolerance)},
 			{Text: st.String(), Status: st, Strong: true},
 		})
 	}
