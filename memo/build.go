@@ -29,6 +29,9 @@ type Job struct {
 	SHA256  string      // of the spec bytes
 	Created time.Time   // build date written into the memo
 	Dated   bool        // Created came from the spec or SOURCE_DATE_EPOCH
+	// DateSource says where Created came from: "SOURCE_DATE_EPOCH", "memo
+	// date" or "" (not dated).
+	DateSource string
 }
 
 // Evaluate parses and calculates a spec. Diagnostics are returned (and
@@ -44,12 +47,26 @@ func Evaluate(file string, src []byte) (*Job, spec.Diagnostics) {
 	j.Checks = Verify(s.Design, j.Results)
 	j.Sweep = RunSweep(s)
 	j.Created, j.Dated = buildDate(s)
+	j.DateSource = dateSource(s)
 	return j, nil
 }
 
 // buildDate is SOURCE_DATE_EPOCH when set (the reproducible-builds
 // convention), else the memo date of the spec, else the Unix epoch, so the
 // same spec always yields the same bytes.
+// dateSource names where buildDate takes the date from.
+func dateSource(s *spec.Spec) string {
+	if v := os.Getenv("SOURCE_DATE_EPOCH"); v != "" {
+		if _, err := strconv.ParseInt(v, 10, 64); err == nil {
+			return "SOURCE_DATE_EPOCH"
+		}
+	}
+	if !s.Memo.DateValue.IsZero() {
+		return "memo date"
+	}
+	return ""
+}
+
 func buildDate(s *spec.Spec) (time.Time, bool) {
 	if v := os.Getenv("SOURCE_DATE_EPOCH"); v != "" {
 		if sec, err := strconv.ParseInt(v, 10, 64); err == nil {

@@ -130,10 +130,10 @@ func inductanceChecks(c calc.Coil, cr calc.CoilResult) []Check {
 	var out []Check
 	name := fmt.Sprintf("Nagaoka coefficient at ℓ/D = %s", Sig(x, 3))
 	if tab, errEst, ok := groverInterpolate(x); ok {
-		out = append(out, newCheck(c.Name, name, method,
+		out = append(out, newCheck(c.Name, name+", handbook table", method,
 			groverSource+", interpolated (embedded, ℓ/D ≤ 1)", kN, tab, "", (groverPrecision+errEst)/tab+1e-9))
 	}
-	out = append(out, newCheck(c.Name, name, method,
+	out = append(out, newCheck(c.Name, name+", numerical integral", method,
 		"Maxwell's mutual inductance of the sheet's rings, integrated numerically (gonum quad)", kN, sheetNagaoka(a, l), "", 1e-6))
 	// Wheeler states 1 % for ℓ > 0.8 a.
 	if l > 0.8*a {

@@ -79,21 +79,12 @@ const shortSolenoid = "```coil\nname = s\nform = solenoid\nmean-diameter = 50 mm
 func TestVerifyHandbookRows(t *testing.T) {
 	// A short single-layer coil: Grover's table applies.
 	j := evaluateSpec(t, shortSolenoid)
-	var grover, sheet *Check
-	for i := range j.Checks {
-		c := &j.Checks[i]
-		if c.Name == "Nagaoka coefficient at ℓ/D = 0.400" {
-			if strings.HasPrefix(c.Reference, groverSource) {
-				grover = c
-			} else {
-				sheet = c
-			}
-		}
-	}
+	grover := checkNamed(j.Checks, "Nagaoka coefficient at ℓ/D = 0.400, handbook table")
+	sheet := checkNamed(j.Checks, "Nagaoka coefficient at ℓ/D = 0.400, numerical integral")
 	if grover == nil || sheet == nil {
 		t.Fatalf("no Grover or current-sheet row: %+v", j.Checks)
 	}
-	if !grover.Pass || !sheet.Pass || math.Abs(grover.Expected-0.471865) > 1e-9 {
+	if !grover.Pass || !sheet.Pass || math.Abs(grover.Expected-0.471865) > 1e-9 || !strings.HasPrefix(grover.Reference, groverSource) {
 		t.Errorf("Grover row %+v", *grover)
 	}
 	// ℓ = 20 mm < 0.8 a: Wheeler's formula makes no claim there.

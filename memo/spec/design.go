@@ -21,7 +21,7 @@ type kv struct {
 
 // Keys of each block, in the order the reference documents them.
 var (
-	memoKeys = []string{"title", "client", "project", "document-id", "revision", "date", "author", "checker", "status"}
+	memoKeys = []string{"title", "client", "project", "document-id", "revision", "date", "author", "checker", "status", "history"}
 	coilKeys = []string{"name", "form", "mean-diameter", "inner-diameter", "outer-diameter", "length",
 		"radial-build", "width", "height", "turns", "wire", "wire-outer-diameter", "conductor",
 		"insulation-class", "current", "voltage", "duty", "spacing", "sense", "axis", "centre",
@@ -134,7 +134,7 @@ func (p *parser) keyValues(b *rawBlock, keepCase bool) []kv {
 			p.errf(l.line, "%s: no value after \"=\"", key)
 			continue
 		}
-		if prev, ok := seen[key]; ok {
+		if prev, ok := seen[key]; ok && !(b.kind == blockMemo && key == "history") {
 			p.errf(l.line, "duplicate key %q in %s block (first given on line %d)", key, b.kind, prev)
 			continue
 		}
@@ -207,6 +207,8 @@ func (p *parser) memoBlock(b *rawBlock) {
 			m.Checker = e.value
 		case "status":
 			m.Status = e.value
+		case "history":
+			si = p.historyLine(e)
 		case "date":
 			m.Date = e.value
 			t, err := parseDate(e.value)
@@ -223,6 +225,7 @@ func (p *parser) memoBlock(b *rawBlock) {
 		}
 		p.entry(blockMemo, e, si)
 	}
+	p.checkHistory()
 }
 
 func parseDate(s string) (time.Time, error) {

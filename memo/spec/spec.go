@@ -68,6 +68,22 @@ type Memo struct {
 	Title, Client, Project, DocumentID, Revision, Date, Author, Checker, Status string
 
 	DateValue time.Time // Date parsed (UTC midnight for a plain date); zero when none
+
+	// History is the revision history, one `history` line each, in the
+	// order written.
+	History []Revision
+}
+
+// Revision is one line of the memo's revision history:
+//
+//	history = B | 2026-11-30 | R. Okonkwo | raised the moment to 0.15 A m2
+type Revision struct {
+	Revision  string    // revision mark
+	Date      string    // as written
+	DateValue time.Time // parsed
+	Author    string    // who made the revision
+	Change    string    // what changed
+	Line      int       // source line
 }
 
 // Sweep is the sweep block: one coil parameter stepped over a range.
