@@ -70,7 +70,12 @@ const HelmholtzTolerance = 0.01
 // mid-plane. Distances are from the centre, m; NaN where they do not apply.
 type PairRegion struct {
 	SpacingRatio float64 // spacing / mean radius
-	Helmholtz    bool    // |SpacingRatio − 1| ≤ HelmholtzTolerance and aiding
+	Helmholtz    bool    // aiding and |SpacingRatio − 1| ≤ HelmholtzTolerance
+	// Maxwell is set for an opposing pair at √3 times the mean radius
+	// (within HelmholtzTolerance), the spacing at which the cubic term of
+	// the axial field of two thin opposed coils vanishes, making the
+	// gradient most uniform.
+	Maxwell bool
 
 	Axial1, Radial1   float64 // 1 % homogeneous region (aiding)
 	Axial01, Radial01 float64 // 0.1 % homogeneous region (aiding)
@@ -109,6 +114,7 @@ func AnalysePair(c Coil, w Winding, I float64) PairRegion {
 		p.Axial01, p.Radial01 = homogeneity(s, w, 0.001)
 		return p
 	}
+	p.Maxwell = math.Abs(p.SpacingRatio/math.Sqrt(3)-1) <= HelmholtzTolerance
 	size := coilExtent(c, w)
 	G := s.axialGradientOnAxis(0)
 	if G == 0 || math.IsNaN(G) || !(size > 0) || !(R > 0) {

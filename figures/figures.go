@@ -60,6 +60,18 @@ func restyle(s text.Style, size vg.Length, c color.Color) text.Style {
 
 // NewPlot returns a plot in the house style with the given axis labels.
 func NewPlot(xLabel, yLabel string) *plot.Plot {
+	p := newAxes(xLabel, yLabel)
+	g := plotter.NewGrid()
+	g.Vertical.Color = GridColor
+	g.Vertical.Width = vg.Points(0.4)
+	g.Horizontal.Color = GridColor
+	g.Horizontal.Width = vg.Points(0.4)
+	p.Add(g)
+	return p
+}
+
+// newAxes is NewPlot without the grid.
+func newAxes(xLabel, yLabel string) *plot.Plot {
 	p := plot.New()
 	h := fonts.Handler()
 	p.TextHandler = h
@@ -83,13 +95,6 @@ func NewPlot(xLabel, yLabel string) *plot.Plot {
 	p.Legend.TextStyle = restyle(p.Legend.TextStyle, LegendSize, Ink)
 	p.Legend.ThumbnailWidth = vg.Points(22)
 	p.Legend.Padding = vg.Points(2)
-
-	g := plotter.NewGrid()
-	g.Vertical.Color = GridColor
-	g.Vertical.Width = vg.Points(0.4)
-	g.Horizontal.Color = GridColor
-	g.Horizontal.Width = vg.Points(0.4)
-	p.Add(g)
 	return p
 }
 

@@ -3,6 +3,7 @@ package memo
 import (
 	"fmt"
 	"math"
+	"strconv"
 
 	"coilmemo/calc"
 	"coilmemo/figures"
@@ -22,18 +23,9 @@ type axisProfile struct {
 func profileOnAxis(co calc.Coil, cr calc.CoilResult, n int) axisProfile {
 	w := cr.Winding
 	fr := calc.CoilFrame(co.Axis)
-	R := co.MeanDiameter / 2
-	if co.Form == calc.Rectangle {
-		R = math.Max(co.Width, co.Height) / 2
-	}
-	size := math.Max(R+co.RadialBuild/2, co.Length/2)
-	if co.Form == calc.Pair {
-		size = math.Max(size, co.Spacing/2+co.Length/2)
-	}
-	p := axisProfile{Dipole1pc: math.NaN()}
-	if !(co.Form == calc.Pair && co.Opposing) && co.Form != calc.Rectangle {
-		p.Dipole1pc = calc.DipoleRange(co, w, cr.Current, 0.01)
-	}
+	src := calc.NewCoilSource(co, w, cr.Current)
+	size := axialSize(co)
+	p := axisProfile{Dipole1pc: cr.Dipole.Axis1}
 	zmax := 6 * size
 	if !math.IsNaN(p.Dipole1pc) {
 		zmax = math.Max(zmax, 1.5*p.Dipole1pc)
@@ -42,11 +34,11 @@ func profileOnAxis(co calc.Coil, cr calc.CoilResult, n int) axisProfile {
 		z := -zmax + 2*zmax*float64(i)/float64(n-1)
 		pt := co.Centre.Add(fr.U.Scale(z))
 		p.Z = append(p.Z, z)
-		p.Exact = append(p.Exact, calc.CoilField(co, w, cr.Current, pt).Norm())
+		p.Exact = append(p.Exact, src.At(pt).Norm())
 		dip := math.NaN()
 		// The dipole curve is drawn only outside the winding, where the
 		// comparison means something.
-		if math.Abs(z) > size {
+		if math.Abs(z) > size && cr.Moment.Norm() > 0 {
 			dip = calc.DipoleField(cr.Moment, fr.U.Scale(z)).Norm()
 		}
 		p.Dipole = append(p.Dipole, dip)
@@ -54,7 +46,23 @@ func profileOnAxis(co calc.Coil, cr calc.CoilResult, n int) axisProfile {
 	return p
 }
 
-// field reports the field: probes, the on-axis profile of each coil.
+// axialSize is the larger of a coil block's outer radius and its axial
+// half-extent.
+func axialSize(co calc.Coil) float64 {
+	R := co.MeanDiameter/2 + co.RadialBuild/2
+	if co.Form == calc.Rectangle {
+		R = math.Max(co.Width, co.Height) / 2
+	}
+	size := math.Max(R, co.Length/2)
+	if co.Form == calc.Pair {
+		size = math.Max(size, math.Abs(co.Spacing)/2+co.Length/2)
+	}
+	return size
+}
+
+// field reports the field: probes, then coil by coil the winding sketch,
+// the on-axis profile, the field map, the dipole distances and, for
+// pairs, the homogeneous region or the gradient.
 func (c *composer) field() {
 	c.heading(1, "Magnetic field")
 	d := c.j.Spec.Design
@@ -62,6 +70,7 @@ func (c *composer) field() {
 	B0 := r.FieldCentre
 	c.para(fmt.Sprintf("With every coil at its steady operating current, the flux density at the origin is |B| = %s (Bx = %s, By = %s, Bz = %s). The background field is not included in these figures.",
 		Eng(B0.Norm(), "T", 4), Eng(B0[0], "T", 3), Eng(B0[1], "T", 3), Eng(B0[2], "T", 3)))
+	c.para("Fields are computed from the exact field of each circular turn (complete elliptic integrals) or of each straight side of a rectangle (closed-form Biot–Savart integral), superposed. For maps and profiles the turns of a thick winding are grouped by Gauss quadrature over the winding cross-section, which reproduces the turn-by-turn sum to better than one part in 10⁹ and falls back to the individual turns near the winding.")
 	if len(r.Probes) > 0 {
 		var rows [][]doc.Cell
 		for _, p := range r.Probes {
@@ -77,23 +86,412 @@ func (c *composer) field() {
 	}
 	for i, co := range d.Coils {
 		cr := r.Coils[i]
-		if co.Form == calc.Rectangle {
-			continue
+		c.heading(2, fmt.Sprintf("Field of coil %q", co.Name))
+		c.crossSection(co, cr)
+		c.axisFigure(co, cr)
+		c.fieldMap(co, cr)
+		c.dipoleDistances(co, cr)
+		if co.Form == calc.Pair {
+			c.pairRegion(co, cr)
 		}
-		p := profileOnAxis(co, cr, 241)
-		caption := fmt.Sprintf("Flux density on the axis of coil %q: exact field (solid) and point-dipole approximation (dashed)", co.Name)
-		summary := fmt.Sprintf("|B| on axis from %s to %s; peak %s.", Eng(p.Z[0], "m", 3), Eng(p.Z[len(p.Z)-1], "m", 3), Eng(maxOf(p.Exact), "T", 3))
-		var marks []figures.Mark
-		if !math.IsNaN(p.Dipole1pc) {
-			marks = []figures.Mark{{X: -p.Dipole1pc, Label: "1 %"}, {X: p.Dipole1pc, Label: "1 %"}}
-			caption += "; dotted lines: distance beyond which the dipole is within 1 %"
-			summary += fmt.Sprintf(" Dipole within 1 %% beyond ±%s.", Eng(p.Dipole1pc, "m", 3))
+	}
+}
+
+// mmText prints a length in millimetres to 0.01 mm without trailing zeros.
+func mmText(v float64) string {
+	s := strconv.FormatFloat(math.Round(v*1e5)/100, 'f', 2, 64)
+	for s[len(s)-1] == '0' {
+		s = s[:len(s)-1]
+	}
+	s = trimDot(s)
+	return s + " mm"
+}
+
+func trimDot(s string) string {
+	if s[len(s)-1] == '.' {
+		return s[:len(s)-1]
+	}
+	return s
+}
+
+// envelope is a winding's cross-section in its own frame: radii r0…r1 and
+// axial extent z0…z1 about its centre, m; round for a thin coil's bundle.
+type envelope struct {
+	r0, r1, z0, z1 float64
+	round          bool
+}
+
+// windingEnvelope is the cross-section of one coil (one of a pair) as
+// given: a thin coil's round bundle (hexagonal packing) on the mean
+// radius; one layer of wire over the length; or the length × radial build.
+func windingEnvelope(co calc.Coil, w calc.Winding) envelope {
+	outer := co.Wire.Outer
+	if !(outer > 0) {
+		outer = co.Wire.Bare
+	}
+	rm := co.MeanDiameter / 2
+	switch {
+	case w.Thin:
+		b := calc.BundleDiameter(outer, co.Turns)
+		return envelope{r0: rm - b/2, r1: rm + b/2, z0: -b / 2, z1: b / 2, round: true}
+	case co.RadialBuild <= 0:
+		return envelope{r0: rm - outer/2, r1: rm + outer/2, z0: -co.Length / 2, z1: co.Length / 2}
+	}
+	rin := rm - co.RadialBuild/2
+	if co.InnerDiameter > 0 {
+		rin = co.InnerDiameter / 2
+	}
+	L := co.Length
+	if !(L > 0) {
+		L = outer
+	}
+	return envelope{r0: rin, r1: rin + co.RadialBuild, z0: -L / 2, z1: L / 2}
+}
+
+// placements are the axial positions of a block's coils in its frame.
+func placements(co calc.Coil) []float64 {
+	if co.Form == calc.Pair {
+		return []float64{-math.Abs(co.Spacing) / 2, math.Abs(co.Spacing) / 2}
+	}
+	return []float64{0}
+}
+
+// crossSection adds the dimensioned sketch of the winding.
+func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult) {
+	w := cr.Winding
+	n := c.figure + 1
+	if co.Form == calc.Rectangle {
+		outer := co.Wire.Outer
+		if !(outer > 0) {
+			outer = co.Wire.Bare
+		}
+		b := calc.BundleDiameter(outer, co.Turns)
+		c.para(fmt.Sprintf("Figure %d shows the coil in plan, to scale: %d turns in a bundle of about %s on a mean turn of %s × %s.",
+			n, co.Turns, mmText(b), mmText(co.Width), mmText(co.Height)))
+		c.fig(doc.Figure{Caption: fmt.Sprintf("Coil %q in plan, looking along its axis (to scale; dimensions to the mean turn)", co.Name),
+			Width: figWidth, Height: 70 * vg.Millimeter,
+			Draw: figures.RectangleSketch(figures.RectangleData{Width: co.Width, Height: co.Height, Bundle: b,
+				WidthLabel: mmText(co.Width), HeightLabel: mmText(co.Height),
+				Note: fmt.Sprintf("%d turns, bundle ≈ Ø %s", co.Turns, mmText(b))}),
+			Summary: fmt.Sprintf("Plan: %s × %s mean turn, bundle ≈ %s.", mmText(co.Width), mmText(co.Height), mmText(b))})
+		return
+	}
+	e := windingEnvelope(co, w)
+	var sd figures.SketchData
+	for _, z := range placements(co) {
+		sd.Sections = append(sd.Sections, figures.Section{X0: z + e.z0, X1: z + e.z1, Y0: e.r0, Y1: e.r1, Round: e.round})
+	}
+	rm := co.MeanDiameter / 2
+	var desc string
+	switch {
+	case w.Thin:
+		sd.Dimensions = append(sd.Dimensions, figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + mmText(co.MeanDiameter) + " mean"})
+		note := fmt.Sprintf("%d turns, bundle ≈ Ø %s", co.Turns, mmText(e.r1-e.r0))
+		sd.Notes = append(sd.Notes, figures.Note{X: sd.Sections[len(sd.Sections)-1].X1, Y: e.r1, Text: note})
+		desc = fmt.Sprintf("all %d turns in one round bundle of about %s on the mean diameter", co.Turns, mmText(e.r1-e.r0))
+	case co.RadialBuild <= 0:
+		sd.Dimensions = append(sd.Dimensions,
+			figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + mmText(co.MeanDiameter) + " mean"},
+			figures.Dimension{Kind: figures.Axial, A: e.z0 + placements(co)[0], B: e.z1 + placements(co)[0], Label: mmText(co.Length)})
+		desc = fmt.Sprintf("%d turns in one layer over %s", co.Turns, mmText(co.Length))
+	default:
+		sd.Dimensions = append(sd.Dimensions,
+			figures.Dimension{Kind: figures.Diameter, A: e.r0, Label: "Ø " + mmText(2*e.r0) + " inner"},
+			figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + mmText(co.MeanDiameter) + " mean"},
+			figures.Dimension{Kind: figures.Diameter, A: e.r1, Label: "Ø " + mmText(2*e.r1) + " outer"},
+			figures.Dimension{Kind: figures.Axial, A: e.z0 + placements(co)[0], B: e.z1 + placements(co)[0], Label: mmText(e.z1 - e.z0)},
+			figures.Dimension{Kind: figures.Radial, A: e.r0, B: e.r1, Label: mmText(co.RadialBuild)})
+		desc = fmt.Sprintf("%d turns in %d layers of up to %d turns, %s long with a radial build of %s",
+			co.Turns, w.LayerCount, w.TurnsPerLayer, mmText(e.z1-e.z0), mmText(co.RadialBuild))
+	}
+	if co.Form == calc.Pair {
+		s := math.Abs(co.Spacing)
+		sd.CentreLines = []float64{-s / 2, s / 2}
+		sd.Dimensions = append(sd.Dimensions, figures.Dimension{Kind: figures.Axial, A: -s / 2, B: s / 2, Label: "spacing " + mmText(s)})
+		desc = "each of the two coils holds " + desc + fmt.Sprintf("; their centres are %s apart", mmText(s))
+	}
+	c.para(fmt.Sprintf("Figure %d shows the winding cross-section in the half-plane above the axis, to scale: %s.", n, desc))
+	h := sketchHeight(co, e)
+	c.fig(doc.Figure{Caption: fmt.Sprintf("Cross-section of coil %q in the plane through its axis (to scale; the axis at the bottom)", co.Name),
+		Width: figWidth, Height: h, Draw: figures.CrossSection(sd),
+		Summary: fmt.Sprintf("Cross-section: %s.", desc)})
+}
+
+// sketchHeight fits the sketch's height to its proportions.
+func sketchHeight(co calc.Coil, e envelope) vg.Length {
+	zs := e.z1 - e.z0
+	if co.Form == calc.Pair {
+		zs += math.Abs(co.Spacing)
+	}
+	zs = math.Max(zs, 0.6*e.r1)
+	// Data width about 110 mm on the page.
+	h := vg.Length(110*e.r1/zs)*vg.Millimeter + 22*vg.Millimeter
+	top := 95 * vg.Millimeter
+	if e.round {
+		top = 70 * vg.Millimeter // a bundle on a diameter: little to see
+	}
+	return max(min(h, top), 50*vg.Millimeter)
+}
+
+// axisFigure adds the on-axis profile with the dipole overlay.
+func (c *composer) axisFigure(co calc.Coil, cr calc.CoilResult) {
+	p := profileOnAxis(co, cr, 241)
+	caption := fmt.Sprintf("Flux density on the axis of coil %q: exact field (solid) and point-dipole approximation (dashed)", co.Name)
+	if cr.Moment.Norm() == 0 {
+		caption = fmt.Sprintf("Flux density on the axis of coil %q (exact field; the coil has no dipole moment)", co.Name)
+	}
+	summary := fmt.Sprintf("|B| on axis from %s to %s; peak %s.", Eng(p.Z[0], "m", 3), Eng(p.Z[len(p.Z)-1], "m", 3), Eng(maxOf(p.Exact), "T", 3))
+	var marks []figures.Mark
+	if !math.IsNaN(p.Dipole1pc) {
+		marks = []figures.Mark{{X: -p.Dipole1pc, Label: "1 %"}, {X: p.Dipole1pc, Label: "1 %"}}
+		caption += "; dotted lines: distance beyond which the dipole is within 1 %"
+		summary += fmt.Sprintf(" Dipole within 1 %% beyond ±%s.", Eng(p.Dipole1pc, "m", 3))
+	}
+	n := c.figure + 1
+	text := fmt.Sprintf("Figure %d shows the flux density along the axis of coil %q", n, co.Name)
+	if cr.Moment.Norm() > 0 {
+		text += ", with the field of a point dipole of the coil's moment for comparison."
+	} else {
+		text += "; its two halves oppose, so it has no dipole moment."
+	}
+	c.para(text)
+	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight,
+		Draw: figures.OnAxis(p.Z, p.Exact, p.Dipole, marks...), Summary: summary})
+}
+
+// mapGrid is the number of nodes along the longer side of a field map.
+const mapGrid = 200
+
+// fieldMap adds the map of |B| over the meridian plane.
+func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult) {
+	w := cr.Winding
+	var sections []figures.Section
+	var zHalf, xHalf float64
+	xLabel, yLabel := "Axial position z", "Radial position ρ"
+	if co.Form == calc.Rectangle {
+		outer := co.Wire.Outer
+		if !(outer > 0) {
+			outer = co.Wire.Bare
+		}
+		b := calc.BundleDiameter(outer, co.Turns)
+		for _, x := range []float64{-co.Width / 2, co.Width / 2} {
+			sections = append(sections, figures.Section{X0: -b / 2, X1: b / 2, Y0: x - b/2, Y1: x + b/2, Round: true})
+		}
+		xHalf = 0.8 * co.Width
+		zHalf = math.Max(0.8*co.Width, 0.5*co.Height)
+		yLabel = "Position across the width x"
+	} else {
+		e := windingEnvelope(co, w)
+		for _, z := range placements(co) {
+			for _, s := range []float64{1, -1} {
+				sections = append(sections, figures.Section{X0: z + e.z0, X1: z + e.z1, Y0: s * e.r0, Y1: s * e.r1, Round: e.round})
+			}
+		}
+		half := e.z1
+		if co.Form == calc.Pair {
+			half += math.Abs(co.Spacing) / 2
+		}
+		xHalf = 1.6 * e.r1
+		zHalf = math.Max(half+0.9*e.r1, 0.75*xHalf)
+	}
+	nz, nx := mapGrid, mapGrid
+	if zHalf > xHalf {
+		nx = max(61, int(math.Round(mapGrid*xHalf/zHalf)))
+	} else {
+		nz = max(61, int(math.Round(mapGrid*zHalf/xHalf)))
+	}
+	// Odd counts put nodes on the axis and the mid-plane.
+	nx |= 1
+	nz |= 1
+	zs, xs := symmetricSpace(zHalf, nz), symmetricSpace(xHalf, nx)
+	// The figure's height follows the map's proportions (data width about
+	// 118 mm between the axis labels and the colour bar).
+	h := vg.Length(118*xHalf/zHalf)*vg.Millimeter + 24*vg.Millimeter
+	h = max(min(h, 125*vg.Millimeter), 60*vg.Millimeter)
+	I := cr.Current
+	drawMap := func(cv vg.Canvas, wd, ht vg.Length) {
+		g := calc.FieldMap(co, w, I, xs, zs)
+		// The figure's horizontal axis is z, its vertical the radial
+		// coordinate.
+		vals := make([]float64, len(zs)*len(xs))
+		for ix := range xs {
+			for iz := range zs {
+				vals[ix*len(zs)+iz] = g.Magnitude(ix, iz)
+			}
+		}
+		figures.FieldMap(figures.MapData{X: zs, Y: xs, B: vals, Sections: sections,
+			XLabel: xLabel, YLabel: yLabel})(cv, wd, ht)
+	}
+	n := c.figure + 1
+	plane := "the meridian plane (through the axis)"
+	if co.Form == calc.Rectangle {
+		plane = "the plane through the axis and across the width"
+	}
+	c.para(fmt.Sprintf("Figure %d maps the magnitude of the flux density of coil %q alone over %s, on a logarithmic colour scale with contour lines at 1–2–5 steps per decade; the winding cross-sections are drawn in.",
+		n, co.Name, plane))
+	c.fig(doc.Figure{
+		Caption: fmt.Sprintf("|B| of coil %q over %s (coil frame; colour scale: viridis, logarithmic; contours at the values marked on the colour bar)", co.Name, plane),
+		Width:   figWidth, Height: h, Draw: drawMap,
+		Summary: fmt.Sprintf("Map of |B|: z from %s to %s, %s from %s to %s, %d × %d points.",
+			Eng(-zHalf, "m", 3), Eng(zHalf, "m", 3), map[bool]string{true: "x", false: "ρ"}[co.Form == calc.Rectangle],
+			Eng(-xHalf, "m", 3), Eng(xHalf, "m", 3), nz, nx),
+	})
+}
+
+// linspace returns n evenly spaced values from lo to hi.
+func linspace(lo, hi float64, n int) []float64 {
+	v := make([]float64, n)
+	for i := range v {
+		v[i] = lo + (hi-lo)*float64(i)/float64(n-1)
+	}
+	return v
+}
+
+// symmetricSpace returns n evenly spaced values from −half to half that
+// are exact mirror images of each other (so the map's symmetries apply).
+func symmetricSpace(half float64, n int) []float64 {
+	v := linspace(-half, half, n)
+	for i := range n / 2 {
+		v[n-1-i] = -v[i]
+	}
+	if n%2 == 1 {
+		v[n/2] = 0
+	}
+	return v
+}
+
+// dipoleDistances adds the table of distances beyond which the coil may be
+// taken as a point dipole.
+func (c *composer) dipoleDistances(co calc.Coil, cr calc.CoilResult) {
+	dr := cr.Dipole
+	if math.IsNaN(dr.Axis1) {
+		if co.Form == calc.Pair && co.Opposing {
+			c.para("The two coils oppose, so the block has no net dipole moment: far away its field is that of a quadrupole and falls as 1/r⁴. The point-dipole description does not apply.")
+		}
+		return
+	}
+	R := co.MeanDiameter / 2
+	ref, refName := R, "R"
+	if co.Form == calc.Rectangle {
+		ref, refName = math.Sqrt(co.Width*co.Height/math.Pi), "a"
+	}
+	cell := func(v float64) doc.Cell {
+		if math.IsNaN(v) {
+			return doc.Cell{Text: "n/a"}
+		}
+		return doc.Cell{Text: fmt.Sprintf("%s (%s %s)", Eng(v, "m", 3), Sig(v/ref, 3), refName)}
+	}
+	plane := "In the plane of the coil"
+	if co.Form == calc.Pair {
+		plane = "In the mid-plane of the pair"
+	}
+	if co.Form == calc.Rectangle {
+		plane += " (worst direction)"
+	}
+	good1 := math.Max(dr.Axis1, dr.Plane1)
+	good01 := math.Max(dr.Axis01, dr.Plane01)
+	refText := fmt.Sprintf("%s = %s is the mean radius", refName, Eng(R, "m", 3))
+	if co.Form == calc.Rectangle {
+		refText = fmt.Sprintf("%s = √(W·H/π) = %s is the radius of the circle of the same area", refName, Eng(ref, "m", 3))
+	}
+	c.para(fmt.Sprintf("Far from the winding the field of coil %q is that of a point dipole of moment |m| = %s at its centre, B = μ0/4π · (3(m·r̂)r̂ − m)/r³. The table gives the distance from the centre beyond which that approximation stays within 1 %% and 0.1 %% of the exact field (vector difference; %s). The point-dipole description is good to 1 %% everywhere beyond %s from the centre of the coil, and to 0.1 %% beyond %s; nearer than that, use the exact field.",
+		co.Name, Eng(cr.Moment.Norm(), "A·m²", 3), refText, Eng(good1, "m", 3), Eng(good01, "m", 3)))
+	c.add(doc.Table{Caption: fmt.Sprintf("Distance beyond which the point-dipole field of coil %q is within tolerance", co.Name),
+		Header: []string{"Direction from the centre", "Within 1 %", "Within 0.1 %"},
+		Rows: [][]doc.Cell{
+			{{Text: "Along the axis"}, cell(dr.Axis1), cell(dr.Axis01)},
+			{{Text: plane}, cell(dr.Plane1), cell(dr.Plane01)},
+		},
+		Widths: []float64{2.2, 1.6, 1.6},
+		Align:  []doc.Align{doc.Left, doc.Right, doc.Right}})
+}
+
+// pairRegion reports a pair's centre field and homogeneous region, or its
+// gradient and linear region.
+func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult) {
+	pr := cr.Pair
+	R := co.MeanDiameter / 2
+	s := math.Abs(co.Spacing)
+	src := calc.NewCoilSource(co, cr.Winding, cr.Current)
+	fr := calc.CoilFrame(co.Axis)
+	B0 := src.At(co.Centre).Dot(fr.U)
+	rel := fmt.Sprintf("The coil centres are %s apart, %s times the mean radius R = %s", Eng(s, "m", 3), Sig(pr.SpacingRatio, 4), Eng(R, "m", 3))
+	pct := Sig(100*calc.HelmholtzTolerance, 2)
+	if !co.Opposing {
+		var cond string
+		if pr.Helmholtz {
+			cond = fmt.Sprintf("; the Helmholtz condition (spacing = radius, within ±%s %%) is met. For thin coils this spacing cancels the second derivative of the axial field at the centre, which makes the field there as flat as two coils can make it.", pct)
+		} else {
+			cond = fmt.Sprintf("; the Helmholtz condition (spacing = radius, within ±%s %%) is not met: the Helmholtz spacing for this radius would be %s.", pct, Eng(R, "m", 3))
+		}
+		c.para(rel + cond)
+		c.para(fmt.Sprintf("At the centre of the pair the flux density is %s along the axis. The table gives how far from the centre the field stays within ±1 %% and ±0.1 %% of that value (|B − B0| ≤ tol · |B0|), along the axis and radially in the mid-plane.",
+			Eng(B0, "T", 4)))
+		c.add(doc.Table{Caption: fmt.Sprintf("Homogeneous region of pair %q, distances from its centre", co.Name),
+			Header: []string{"Tolerance", "Along the axis (±)", "Radially in the mid-plane"},
+			Rows: [][]doc.Cell{
+				{{Text: "±1 %"}, {Text: fmt.Sprintf("%s (%s R)", Eng(pr.Axial1, "m", 3), Sig(pr.Axial1/R, 3)), Strong: true}, {Text: fmt.Sprintf("%s (%s R)", Eng(pr.Radial1, "m", 3), Sig(pr.Radial1/R, 3)), Strong: true}},
+				{{Text: "±0.1 %"}, {Text: fmt.Sprintf("%s (%s R)", Eng(pr.Axial01, "m", 3), Sig(pr.Axial01/R, 3))}, {Text: fmt.Sprintf("%s (%s R)", Eng(pr.Radial01, "m", 3), Sig(pr.Radial01/R, 3))}},
+			},
+			Widths: []float64{1.2, 2, 2},
+			Align:  []doc.Align{doc.Left, doc.Right, doc.Right}})
+		ext := 1.6 * math.Max(pr.Axial1, pr.Radial1)
+		if !(ext > 0) {
+			ext = 0.6 * R
+		}
+		ext = math.Min(ext, 1.2*R)
+		pos := linspace(0, ext, 61)
+		var ax, ra []float64
+		for _, x := range pos {
+			ax = append(ax, src.At(co.Centre.Add(fr.U.Scale(x))).Dot(fr.U)/B0-1)
+			ra = append(ra, src.At(co.Centre.Add(fr.E1.Scale(x))).Dot(fr.U)/B0-1)
 		}
 		n := c.figure + 1
-		c.para(fmt.Sprintf("Figure %d shows the flux density along the axis of coil %q.", n, co.Name))
-		c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight,
-			Draw: figures.OnAxis(p.Z, p.Exact, p.Dipole, marks...), Summary: summary})
+		c.para(fmt.Sprintf("Figure %d plots the departure of the field from its centre value along both directions, with the ±1 %% and ±0.1 %% bands.", n))
+		c.fig(doc.Figure{Caption: fmt.Sprintf("Homogeneity of pair %q: B(z)/B(0) − 1 along the axis and B(ρ)/B(0) − 1 radially in the mid-plane, axial components, with the ±1 %% and ±0.1 %% (shaded) bands", co.Name),
+			Width: figWidth, Height: figHeight * 0.85,
+			Draw: figures.DeviationPlot(figures.DeviationData{Pos: pos, Axial: ax, Radial: ra, Quantity: "B", Bands: []float64{0.01, 0.001}}),
+			Summary: fmt.Sprintf("Within ±1 %%: ±%s axially, %s radially; within ±0.1 %%: ±%s axially, %s radially.",
+				Eng(pr.Axial1, "m", 3), Eng(pr.Radial1, "m", 3), Eng(pr.Axial01, "m", 3), Eng(pr.Radial01, "m", 3))})
+		return
 	}
+	maxwell := ""
+	if pr.Maxwell {
+		maxwell = fmt.Sprintf(" The spacing is √3 times the mean radius (within ±%s %%): for thin coils this cancels the cubic term of the axial field at the centre, which makes the gradient as uniform as two coils can make it.", pct)
+	}
+	c.para(rel + ". The currents oppose: the field vanishes at the centre and grows linearly away from it, which makes the pair a gradient coil." + maxwell)
+	G := pr.Gradient
+	c.para(fmt.Sprintf("The axial gradient at the centre is ∂Bz/∂z = %s (the radial gradient is −½ of it, since ∇·B = 0). The local gradient stays within ±%s %% of the centre value up to %s from the centre along the axis and %s radially in the mid-plane: inside that region B ≈ G·(z ẑ − ρ/2 ρ̂) with G the centre gradient.",
+		Eng(G, "T/m", 4), Sig(100*calc.GradientTolerance, 2), Eng(pr.LinearAxial, "m", 3), Eng(pr.LinearRadial, "m", 3)))
+	c.add(doc.Table{Caption: fmt.Sprintf("Gradient of pair %q and its linear region", co.Name),
+		Header: []string{"Quantity", "Value"},
+		Rows: [][]doc.Cell{
+			{{Text: "Axial gradient at the centre, ∂Bz/∂z"}, {Text: Eng(G, "T/m", 4), Strong: true}},
+			{{Text: "Gradient within ±1 %: along the axis (±)"}, {Text: fmt.Sprintf("%s (%s R)", Eng(pr.LinearAxial, "m", 3), Sig(pr.LinearAxial/R, 3))}},
+			{{Text: "Gradient within ±1 %: radially in the mid-plane"}, {Text: fmt.Sprintf("%s (%s R)", Eng(pr.LinearRadial, "m", 3), Sig(pr.LinearRadial/R, 3))}},
+		},
+		Widths: []float64{3, 1.6},
+		Align:  []doc.Align{doc.Left, doc.Right}})
+	ext := math.Min(1.6*math.Max(pr.LinearAxial, pr.LinearRadial), 1.2*R)
+	if !(ext > 0) {
+		ext = 0.6 * R
+	}
+	pos := linspace(0, ext, 61)
+	h := 1e-4 * R
+	var ax, ra []float64
+	for _, x := range pos {
+		gz := (src.At(co.Centre.Add(fr.U.Scale(x+h))).Dot(fr.U) - src.At(co.Centre.Add(fr.U.Scale(x-h))).Dot(fr.U)) / (2 * h)
+		pr0 := co.Centre.Add(fr.E1.Scale(x))
+		gr := (src.At(pr0.Add(fr.U.Scale(h))).Dot(fr.U) - src.At(pr0.Sub(fr.U.Scale(h))).Dot(fr.U)) / (2 * h)
+		ax = append(ax, gz/G-1)
+		ra = append(ra, gr/G-1)
+	}
+	n := c.figure + 1
+	c.para(fmt.Sprintf("Figure %d plots the departure of the local gradient from its centre value, with the ±1 %% band.", n))
+	c.fig(doc.Figure{Caption: fmt.Sprintf("Linearity of gradient pair %q: local ∂Bz/∂z relative to the centre value, along the axis and radially in the mid-plane, with the ±1 %% band", co.Name),
+		Width: figWidth, Height: figHeight * 0.85,
+		Draw:    figures.DeviationPlot(figures.DeviationData{Pos: pos, Axial: ax, Radial: ra, Quantity: "G", Bands: []float64{0.01}}),
+		Summary: fmt.Sprintf("Gradient %s; within ±1 %%: ±%s axially, %s radially.", Eng(G, "T/m", 4), Eng(pr.LinearAxial, "m", 3), Eng(pr.LinearRadial, "m", 3))})
 }
 
 // Figure size in the memo: the text width of an A4 page with our margins.

@@ -85,6 +85,30 @@ type CoilReport struct {
 	FieldCenter        [3]Num `json:"field_center_T"`
 	TurnsPerLayer      int    `json:"turns_per_layer"`
 	Layers             int    `json:"layers"`
+	// Distances from the coil's centre beyond which the point-dipole field
+	// is within 1 % and 0.1 % of the exact field, on the axis and in the
+	// coil's plane (null without a dipole moment).
+	DipoleAxis1   Num         `json:"dipole_distance_axis_1pct_m"`
+	DipoleAxis01  Num         `json:"dipole_distance_axis_0p1pct_m"`
+	DipolePlane1  Num         `json:"dipole_distance_plane_1pct_m"`
+	DipolePlane01 Num         `json:"dipole_distance_plane_0p1pct_m"`
+	Pair          *PairReport `json:"pair,omitempty"`
+}
+
+// PairReport is the region of a pair of coils: for an aiding pair the
+// extents from the centre within which the field stays within 1 % and
+// 0.1 % of the centre field; for an opposing pair the axial gradient at the
+// centre and the extents within which it stays within 1 %.
+type PairReport struct {
+	SpacingToRadius     Num  `json:"spacing_to_radius"`
+	Helmholtz           bool `json:"helmholtz"`
+	HomogeneousAxial1   Num  `json:"homogeneous_axial_1pct_m"`
+	HomogeneousRadial1  Num  `json:"homogeneous_radial_1pct_m"`
+	HomogeneousAxial01  Num  `json:"homogeneous_axial_0p1pct_m"`
+	HomogeneousRadial01 Num  `json:"homogeneous_radial_0p1pct_m"`
+	Gradient            Num  `json:"gradient_center_T_per_m"`
+	LinearAxial         Num  `json:"gradient_linear_axial_1pct_m"`
+	LinearRadial        Num  `json:"gradient_linear_radial_1pct_m"`
 }
 
 // ProbeReport is the field at one probe.
@@ -141,7 +165,16 @@ func (j *Job) Report() Report {
 			WireLength: Num(cr.Length), ConductorMass: Num(cr.Mass), CurrentDensity: Num(cr.Density),
 			Inductance: Num(cr.Inductance), WindingTemperature: Num(Celsius(cr.Temperature)), Runaway: cr.Runaway,
 			FieldCenter: vec(cr.FieldCentre), TurnsPerLayer: cr.Winding.TurnsPerLayer, Layers: cr.Winding.LayerCount,
+			DipoleAxis1: Num(cr.Dipole.Axis1), DipoleAxis01: Num(cr.Dipole.Axis01),
+			DipolePlane1: Num(cr.Dipole.Plane1), DipolePlane01: Num(cr.Dipole.Plane01),
 		})
+		if co.Form == calc.Pair {
+			p := cr.Pair
+			rep.Coils[len(rep.Coils)-1].Pair = &PairReport{SpacingToRadius: Num(p.SpacingRatio), Helmholtz: p.Helmholtz,
+				HomogeneousAxial1: Num(p.Axial1), HomogeneousRadial1: Num(p.Radial1),
+				HomogeneousAxial01: Num(p.Axial01), HomogeneousRadial01: Num(p.Radial01),
+				Gradient: Num(p.Gradient), LinearAxial: Num(p.LinearAxial), LinearRadial: Num(p.LinearRadial)}
+		}
 	}
 	for _, p := range r.Probes {
 		rep.Probes = append(rep.Probes, ProbeReport{Name: p.Name, At: vec(p.At), B: vec(p.B), BMag: Num(p.B.Norm())})
