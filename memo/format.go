@@ -34,7 +34,7 @@ func Eng(v float64, unit string, sig int) string {
 		return Sig(v, sig) + " m²"
 	case "A/m²":
 		return Sig(v/1e6, sig) + " A/mm²"
-	case "Ω·m", "kg/m³", "W/(m²·K)", "J/(kg·K)":
+	case "Ω·m", "kg/m³", "W/(m²·K)", "J/(kg·K)", "W/(m·K)":
 		// material data read as handbooks print them, without a prefix
 		return Sig(v, sig) + " " + unit
 	case "°C", "%", "", "K", "°":
@@ -139,10 +139,42 @@ func Percent(v float64) string {
 	if math.Abs(p) >= 1e-3 {
 		return Sig(p, 2) + " %"
 	}
-	s := strconv.FormatFloat(p, 'e', 1, 64)
+	return Sci(p, 2) + " %"
+}
+
+// Sci formats v in scientific notation with sig significant figures,
+// "2.9×10⁶", for dimensionless numbers of any size (Rayleigh numbers).
+func Sci(v float64, sig int) string {
+	if math.IsNaN(v) {
+		return "n/a"
+	}
+	if v == 0 {
+		return "0"
+	}
+	s := strconv.FormatFloat(v, 'e', max(sig-1, 0), 64)
 	mant, exp, _ := strings.Cut(s, "e")
 	e, _ := strconv.Atoi(exp)
-	return strings.Replace(mant, "-", "−", 1) + "×10" + superscript(strconv.Itoa(e)) + " %"
+	if e == 0 {
+		return strings.Replace(mant, "-", "−", 1)
+	}
+	return strings.Replace(mant, "-", "−", 1) + "×10" + superscript(strconv.Itoa(e))
+}
+
+// Duration formats a time in the unit a reader expects for its size:
+// seconds up to two minutes, minutes up to two hours, then hours, to sig
+// significant figures (below a second, engineering prefixes: 1.58 ms).
+func Duration(v float64, sig int) string {
+	switch a := math.Abs(v); {
+	case math.IsNaN(v):
+		return "n/a"
+	case a < 1:
+		return Eng(v, "s", sig)
+	case a < 120:
+		return Sig(v, sig) + " s"
+	case a < 7200:
+		return Sig(v/60, sig) + " min"
+	}
+	return Sig(v/3600, sig) + " h"
 }
 
 // Celsius converts kelvin to degrees Celsius.

@@ -3,6 +3,9 @@ package memo
 import (
 	"fmt"
 	"math"
+	"strings"
+	"unicode"
+	"unicode/utf8"
 
 	"coilmemo/calc"
 	"coilmemo/memo/doc"
@@ -31,61 +34,213 @@ func wireName(w calc.Wire) string {
 	return Eng(w.Bare, "m", 3) + " " + w.Material.Name
 }
 
-// assumptions lists the modelling assumptions and the validity flags that
-// this design raises, each with what it means for the results.
+// assumptions lists the modelling assumptions, then the validity flags
+// this design raises — thin-wire ratio, dipole distance, d.c. against the
+// drive frequency, thermal-model range, Helmholtz condition — each with its
+// figure for this design and what it means for the results. A flag whose
+// model is stretched opens with "Check:".
 func (c *composer) assumptions() {
 	c.heading(1, "Assumptions and validity")
 	d := c.j.Spec.Design
 	r := c.j.Results
 	var items [][]doc.Block
-	item := func(s string) { items = append(items, []doc.Block{doc.Text(s)}) }
-	item(templates.Text("assume-dc", nil))
-	item(templates.Text("assume-filament", nil))
-	for i, co := range d.Coils {
-		cr := r.Coils[i]
-		w := cr.Winding
-		name := co.Name
-		R := co.MeanDiameter / 2
-		if co.Form != calc.Rectangle && R > 0 && co.Wire.Outer > 0 {
-			bundle := co.Wire.Outer
-			if w.Thin {
-				bundle = calc.BundleDiameter(co.Wire.Outer, co.Turns)
-			} else if co.RadialBuild > 0 {
-				bundle = math.Max(co.RadialBuild, co.Length)
-			} else {
-				bundle = co.Wire.Outer
-			}
-			ratio := bundle / (2 * R)
-			flag := "the filament model is accurate"
-			if ratio > 0.1 {
-				flag = "the winding is not thin compared with its diameter: the field within about one winding depth of the conductors is approximate, the field elsewhere is not affected"
-			}
-			item(fmt.Sprintf("%s: winding depth / diameter = %s; %s.", name, Sig(ratio, 2), flag))
+	item := func(lead string, flagged bool, text string) {
+		sp := []doc.Span{{Text: lead + ". ", Strong: true}}
+		if flagged {
+			sp = append(sp, doc.Span{Text: "Check: ", Strong: true})
 		}
-		if co.Wire.OuterEstimated {
-			item(fmt.Sprintf("%s: the wire's overall diameter (%s over %s bare) is an estimate for heavy-build enamelled wire; state wire-outer-diameter from the wire maker's data sheet for the actual build.",
-				name, Eng(co.Wire.Outer, "m", 3), Eng(co.Wire.Bare, "m", 3)))
-		}
-		if co.Form != calc.Rectangle && !(co.Form == calc.Pair && co.Opposing) {
-			if dr := calc.DipoleRange(co, w, cr.Current, 0.01); !math.IsNaN(dr) {
-				item(fmt.Sprintf("%s: on its axis the point-dipole field is within 1 %% of the exact field beyond %s from the coil centre (%s times the mean radius); nearer than that, use the exact field.",
-					name, Eng(dr, "m", 3), Sig(dr/R, 3)))
-			}
-		}
+		sp = append(sp, doc.Span{Text: capitalise(text)})
+		items = append(items, []doc.Block{doc.Paragraph{Spans: sp}})
 	}
-	cool := calc.EffectiveCooling(d.Conditions.Cooling)
-	if cool.Vacuum {
-		item(templates.Text("assume-vacuum", map[string]string{"Emissivity": Sig(cool.Emissivity, 2)}))
-	} else {
-		src := "as stated in the spec"
-		if !d.Conditions.Cooling.HGiven {
-			src = "a common-practice figure for natural convection in still air around small bodies"
-		}
-		item(templates.Text("assume-convection", map[string]string{
-			"H": Sig(cool.H, 3), "Source": src, "Emissivity": Sig(cool.Emissivity, 2)}))
-	}
-	item(templates.Text("assume-thermal", nil))
+	item("Filament model", false, templates.Text("assume-filament", nil))
+	item("Cooling", false, coolingAssumption(d, r))
 	c.add(doc.List{Items: items})
+	items = nil
+	for i, co := range d.Coils {
+		if i >= len(r.Coils) {
+			break
+		}
+		cr := r.Coils[i]
+		for _, f := range validityFlags(co, cr, d) {
+			item(fmt.Sprintf("%s, %s", f.what, co.Name), f.flagged, f.text)
+		}
+	}
+	if len(items) > 0 {
+		c.para("Validity of the models for this design, coil by coil:")
+		c.add(doc.List{Items: items})
+	}
+}
+
+type validity struct {
+	what    string
+	flagged bool
+	text    string
+}
+
+// validityFlags are one coil block's validity flags.
+func validityFlags(co calc.Coil, cr calc.CoilResult, d calc.Design) []validity {
+	var out []validity
+	w := cr.Winding
+	R := co.MeanDiameter / 2
+	// Thin-wire ratio: the winding's cross-section against its diameter.
+	if co.Form != calc.Rectangle && R > 0 && co.Wire.Outer > 0 {
+		depth := co.Wire.Outer
+		what := "wire diameter"
+		switch {
+		case w.Thin:
+			depth, what = calc.BundleDiameter(co.Wire.Outer, co.Turns), "bundle diameter"
+		case co.RadialBuild > 0:
+			depth, what = math.Max(co.RadialBuild, co.Length), "winding depth"
+		}
+		ratio := depth / (2 * R)
+		v := validity{what: "Thin-wire ratio"}
+		if ratio > 0.1 {
+			v.flagged = true
+			v.text = fmt.Sprintf("%s / coil diameter = %s, more than 0.1. The turns are laid out one by one, so the field everywhere outside the winding is exact; within about one winding depth of the conductors the field of round wires differs from that of filaments.", what, Sig(ratio, 2))
+		} else {
+			v.text = fmt.Sprintf("%s / coil diameter = %s (below 0.1): each turn is well represented by a filament; the field differs from the filament field only within a wire's width of the conductors.", what, Sig(ratio, 2))
+		}
+		out = append(out, v)
+	}
+	if co.Wire.OuterEstimated {
+		out = append(out, validity{what: "Wire build", flagged: true, text: fmt.Sprintf(
+			"the wire's overall diameter (%s over %s bare) is an estimate for heavy-build enamelled wire. The winding's length, layers, surface and so its temperature follow from it; state wire-outer-diameter from the wire maker's data sheet.",
+			Eng(co.Wire.Outer, "m", 3), Eng(co.Wire.Bare, "m", 3))})
+	}
+	// Dipole distance.
+	if co.Form != calc.Rectangle && !(co.Form == calc.Pair && co.Opposing) && R > 0 {
+		dr := cr.Dipole.Axis1
+		if math.IsNaN(dr) || dr == 0 {
+			dr = calc.DipoleRange(co, w, cr.Current, 0.01)
+		}
+		if !math.IsNaN(dr) && dr > 0 {
+			text := fmt.Sprintf("on the axis the point-dipole field μ0 m/(2π z³) is within 1 %% of the exact field beyond %s from the centre (%s mean radii)",
+				Eng(dr, "m", 3), Sig(dr/R, 3))
+			if p := cr.Dipole.Plane1; p > 0 && !math.IsNaN(p) {
+				text += fmt.Sprintf(", and in the coil's plane beyond %s", Eng(p, "m", 3))
+			}
+			text += ". This memo uses the exact field everywhere; the dipole figure is for estimates and for the far field, such as a magnetometer's reading of the coil."
+			for _, pr := range d.Probes {
+				switch dist := pr.At.Sub(co.Centre).Norm(); {
+				case dist == 0:
+					text += fmt.Sprintf(" Probe %q is at the centre: there, only the exact field is valid.", pr.Name)
+				case dist < dr:
+					text += fmt.Sprintf(" Probe %q is %s from the centre, inside that distance: there, only the exact field is valid.", pr.Name, Eng(dist, "m", 3))
+				}
+			}
+			out = append(out, validity{what: "Dipole distance", text: text})
+		}
+	}
+	// D.c. against the drive frequency.
+	switch ac := cr.AC; {
+	case ac.Frequency > 0:
+		v := validity{what: "Frequency"}
+		parts := []string{fmt.Sprintf("driven at %s: reactance X = %s against R = %s (X/R = %s)",
+			Eng(ac.Frequency, "Hz", 3), Eng(ac.Reactance, "Ω", 3), Eng(cr.RHot, "Ω", 3), Sig(ac.Reactance/cr.RHot, 2))}
+		if ac.Reactive {
+			v.flagged = true
+			parts = append(parts, fmt.Sprintf("the current is set by the impedance |Z| = %s, not by R alone: the d.c. current, moment and field of this memo are upper bounds, the a.c. values are lower", Eng(ac.Impedance, "Ω", 3)))
+		} else {
+			parts = append(parts, "the reactance is negligible and the d.c. figures hold")
+		}
+		if ac.SkinLimited {
+			v.flagged = true
+			parts = append(parts, fmt.Sprintf("the skin depth %s is less than the wire radius %s, so the a.c. resistance and heating exceed the d.c. figures", Eng(ac.SkinDepth, "m", 3), Eng(ac.WireRadius, "m", 3)))
+		} else if !math.IsNaN(ac.SkinDepth) {
+			parts = append(parts, fmt.Sprintf("the skin depth %s exceeds the wire radius %s: no skin effect", Eng(ac.SkinDepth, "m", 3), Eng(ac.WireRadius, "m", 3)))
+		}
+		v.text = strings.Join(parts, "; ") + "."
+		out = append(out, v)
+	case cr.TimeConstant > 0 && !math.IsInf(cr.TimeConstant, 0):
+		out = append(out, validity{what: "Direct current", text: fmt.Sprintf(
+			"the results are steady d.c. values. After switch-on the current rises with the time constant L/R = %s and is within 1 %% of its final value after 4.6 L/R = %s; faster switching or an a.c. drive (give frequency) changes current, field and heating.",
+			Eng(cr.TimeConstant, "s", 3), Eng(4.6*cr.TimeConstant, "s", 3))})
+	default:
+		out = append(out, validity{what: "Direct current", text: templates.Text("assume-dc", nil)})
+	}
+	// Thermal-model range.
+	if st := cr.Heat.Steady; st.Settled && !cr.Runaway {
+		v := validity{what: "Thermal model"}
+		text := fmt.Sprintf("the resistance follows the winding's mean temperature %s linearly (α20 of %s); heat crosses the turns with an effective conductivity of %s, so the hottest point is %s above the surface (%s); the insulation is judged at the hottest point",
+			Eng(Celsius(st.Mean), "°C", 3), co.Wire.Material.Name, Eng(cr.Heat.Conductivity, "W/(m·K)", 2), Eng(st.HotSpot-st.Surface, "K", 2), Eng(Celsius(st.Surface), "°C", 3))
+		if cv := st.Convection; cv.Ra > 0 {
+			if cv.InRange {
+				text += fmt.Sprintf("; the natural-convection correlation is used within its range (Rayleigh number %s)", Sci(cv.Ra, 2))
+			} else {
+				v.flagged = true
+				text += fmt.Sprintf("; the natural-convection correlation is outside its range (Rayleigh number %s, film temperature %s), so the convective loss, and with it the temperature, is uncertain", Sci(cv.Ra, 2), Eng(Celsius(cv.Film), "°C", 3))
+			}
+		}
+		if cr.ThermalTau > 0 && !math.IsInf(cr.ThermalTau, 0) {
+			text += fmt.Sprintf(". The steady temperature is reached after about three thermal time constants, 3τ = %s; a shorter on-time leaves the winding cooler", Duration(3*cr.ThermalTau, 2))
+		}
+		v.text = text + "."
+		out = append(out, v)
+	} else if cr.Runaway {
+		out = append(out, validity{what: "Thermal model", flagged: true, text: "no steady temperature exists (thermal runaway): the electrical figures at the steady state are not defined; see the Safety section."})
+	}
+	// Helmholtz condition and the pair's useful region.
+	if co.Form == calc.Pair && R > 0 {
+		ratio := co.Spacing / R
+		v := validity{what: "Helmholtz condition"}
+		pr := cr.Pair
+		switch {
+		case co.Opposing:
+			v.what = "Gradient pair"
+			v.text = fmt.Sprintf("opposing pair at spacing %s R", Sig(ratio, 3))
+			if !math.IsNaN(pr.Gradient) {
+				v.text += fmt.Sprintf(": centre gradient %s, linear within 1 %% for %s along the axis and %s radially", Eng(pr.Gradient, "T/m", 3), pmEng(pr.LinearAxial), pmEng(pr.LinearRadial))
+			}
+			v.text += "."
+		case math.Abs(ratio-1) <= calc.HelmholtzTolerance:
+			v.text = fmt.Sprintf("spacing / mean radius = %s: a Helmholtz pair, whose centre field is flat to the fourth order", Sig(ratio, 4))
+			if !math.IsNaN(pr.Axial1) {
+				v.text += fmt.Sprintf("; the field stays within 1 %% of its centre value for %s along the axis and %s radially", pmEng(pr.Axial1), pmEng(pr.Radial1))
+			}
+			v.text += "."
+		default:
+			v.flagged = true
+			shape := "a dip at the centre (spacing wider than the radius)"
+			if ratio < 1 {
+				shape = "a peak at the centre (spacing narrower than the radius)"
+			}
+			v.text = fmt.Sprintf("spacing / mean radius = %s, not 1: the field on the axis has %s", Sig(ratio, 3), shape)
+			if !math.IsNaN(pr.Axial1) {
+				v.text += fmt.Sprintf("; it stays within 1 %% of its centre value for %s along the axis and %s radially", pmEng(pr.Axial1), pmEng(pr.Radial1))
+			}
+			v.text += fmt.Sprintf(". Spacing the coils at %s would make it a Helmholtz pair.", Eng(R, "m", 3))
+		}
+		out = append(out, v)
+	}
+	return out
+}
+
+// capitalise upper-cases the first letter of a sentence.
+func capitalise(s string) string {
+	r, n := utf8.DecodeRuneInString(s)
+	return string(unicode.ToUpper(r)) + s[n:]
+}
+
+// pmEng writes a ± distance, "n/a" when unknown.
+func pmEng(v float64) string {
+	if math.IsNaN(v) {
+		return "n/a"
+	}
+	return "±" + Eng(v, "m", 2)
+}
+
+// coolingAssumption states how the winding sheds heat.
+func coolingAssumption(d calc.Design, r calc.Results) string {
+	cool := calc.EffectiveCooling(d.Conditions.Cooling)
+	switch {
+	case cool.Vacuum:
+		return templates.Text("assume-vacuum", map[string]string{"Emissivity": Sig(cool.Emissivity, 2)})
+	case d.Conditions.Cooling.HGiven:
+		return fmt.Sprintf("convection with the heat-transfer coefficient stated in the spec, h = %s, plus radiation with surface emissivity %s to surroundings at the ambient temperature.",
+			Eng(cool.H, "W/(m²·K)", 3), Sig(cool.Emissivity, 2))
+	}
+	return fmt.Sprintf("natural convection in still air, the heat-transfer coefficient h from a published correlation for the coil's outer shape at its surface temperature (so it rises as the coil warms), plus radiation with surface emissivity %s to surroundings at the ambient temperature.",
+		Sig(cool.Emissivity, 2))
 }
 
 // method gives, coil by coil, each result as a numbered equation — the
