@@ -11,10 +11,29 @@
 // and DejaVu has all of them in every weight we use, with tabular digits so
 // that columns of numbers line up.
 //
-// The same bytes feed two consumers: the PDF writer embeds them (as subsets)
-// and gonum/plot measures and draws figure text with a font.Collection built
-// from them, so a plot's layout is computed with exactly the metrics of the
-// glyphs that end up in the file.
+// Mathematics (memo/mathlayout) is set in DejaVu Serif: italic variables
+// from Serif Italic, digits, operators, units and upper-case Greek upright,
+// as in print. Serif was chosen over Sans for it because its italic is a
+// true italic with distinct letter shapes (v and ν, l and 1 apart) and it
+// carries the Greek alphabet in both styles. The few signs Serif lacks
+// (ℓ, ≪, ≫, ⋯) are taken from DejaVu Sans, which the typesetter measures
+// and the PDF embeds like any other face.
+//
+// No separate mathematics font is embedded. DejaVu Math TeX Gyre (in the
+// same Go module) was considered: its extra value lies in the larger
+// variants of radicals, brackets and big operators, which are reachable
+// only by glyph number through its OpenType MATH table, not by Unicode
+// character, and so not through the PDF writer's text strings. The
+// typesetter instead draws radicals and growing brackets as vector paths
+// sized to their content and scales ∑, ∏ and ∫, which keeps every memo to
+// one family and its files small.
+//
+// The same bytes feed three consumers: the PDF writer embeds them (as
+// subsets: only the glyphs a memo uses, so a memo stays around a hundred
+// kilobytes), the math typesetter measures formulas with their advances and
+// ink bounds, and gonum/plot measures and draws figure text with a
+// font.Collection built from them, so every layout is computed with exactly
+// the metrics of the glyphs that end up in the file.
 package fonts
 
 import (
