@@ -34,7 +34,7 @@ func Eng(v float64, unit string, sig int) string {
 		return Sig(v, sig) + " m²"
 	case "A/m²":
 		return Sig(v/1e6, sig) + " A/mm²"
-	case "Ω·m", "kg/m³", "W/(m²·K)", "J/(kg·K)", "W/(m·K)":
+	case "Ω·m", "kg/m³", "W/(m²·K)", "J/(kg·K)", "W/(m·K)", "K/W":
 		// material data read as handbooks print them, without a prefix
 		return Sig(v, sig) + " " + unit
 	case "°C", "%", "", "K", "°":

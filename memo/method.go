@@ -161,7 +161,7 @@ func validityFlags(co calc.Coil, cr calc.CoilResult, d calc.Design) []validity {
 	// Thermal-model range.
 	if st := cr.Heat.Steady; st.Settled && !cr.Runaway {
 		v := validity{what: "Thermal model"}
-		text := fmt.Sprintf("the resistance follows the winding's mean temperature %s linearly (α20 of %s); heat crosses the turns with an effective conductivity of %s, so the hottest point is %s above the surface (%s); the insulation is judged at the hottest point",
+		text := fmt.Sprintf("the resistance follows the winding's mean temperature %s linearly (α₂₀ of %s); heat crosses the turns with an effective conductivity of %s, so the hottest point is %s above the surface (%s); the insulation is judged at the hottest point",
 			Eng(Celsius(st.Mean), "°C", 3), co.Wire.Material.Name, Eng(cr.Heat.Conductivity, "W/(m·K)", 2), Eng(st.HotSpot-st.Surface, "K", 2), Eng(Celsius(st.Surface), "°C", 3))
 		if cv := st.Convection; cv.Ra > 0 {
 			if cv.InRange {
@@ -232,15 +232,19 @@ func pmEng(v float64) string {
 // coolingAssumption states how the winding sheds heat.
 func coolingAssumption(d calc.Design, r calc.Results) string {
 	cool := calc.EffectiveCooling(d.Conditions.Cooling)
+	mount := ""
+	if m := d.Conditions.MountResistance; m > 0 && !math.IsInf(m, 1) {
+		mount = fmt.Sprintf(", and by conduction through the stated thermal resistance of %s to a mount at the ambient temperature", Eng(m, "K/W", 3))
+	}
 	switch {
 	case cool.Vacuum:
-		return templates.Text("assume-vacuum", map[string]string{"Emissivity": Sig(cool.Emissivity, 2)})
+		return fmt.Sprintf("in vacuum the winding sheds heat by radiation only, with surface emissivity %s, to surroundings at the ambient temperature%s.", Sig(cool.Emissivity, 2), mount)
 	case d.Conditions.Cooling.HGiven:
-		return fmt.Sprintf("convection with the heat-transfer coefficient stated in the spec, h = %s, plus radiation with surface emissivity %s to surroundings at the ambient temperature.",
-			Eng(cool.H, "W/(m²·K)", 3), Sig(cool.Emissivity, 2))
+		return fmt.Sprintf("convection with the heat-transfer coefficient stated in the spec, h = %s, plus radiation with surface emissivity %s to surroundings at the ambient temperature%s.",
+			Eng(cool.H, "W/(m²·K)", 3), Sig(cool.Emissivity, 2), mount)
 	}
-	return fmt.Sprintf("natural convection in still air, the heat-transfer coefficient h from a published correlation for the coil's outer shape at its surface temperature (so it rises as the coil warms), plus radiation with surface emissivity %s to surroundings at the ambient temperature.",
-		Sig(cool.Emissivity, 2))
+	return fmt.Sprintf("natural convection in still air, the heat-transfer coefficient h from a published correlation for the coil's outer shape at its surface temperature (so it rises as the coil warms), plus radiation with surface emissivity %s to surroundings at the ambient temperature%s.",
+		Sig(cool.Emissivity, 2), mount)
 }
 
 // method gives, coil by coil, each result as a numbered equation — the

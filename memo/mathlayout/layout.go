@@ -137,24 +137,34 @@ func Lines(src string, o Options, width float64) ([]Box, error) {
 	items := l.items
 	first := true
 	for len(items) > 0 {
-		// the longest prefix that fits and ends before a break point
+		// The longest prefix that fits and ends before a break point:
+		// first before a relation or a plus or minus sign, else before
+		// any binary sign (a product).
 		best := -1
-		for i := 1; i <= len(items); i++ {
-			if i < len(items) && !breakBefore(items[i]) {
-				continue
-			}
-			b := layoutList(&mlist{items: lead(items[:i], !first)}, o)
-			if b.Width <= width {
+		for _, preferred := range []bool{true, false} {
+			for i := 1; i <= len(items); i++ {
+				if i < len(items) && !breakBefore(items[i], preferred) {
+					continue
+				}
+				b := layoutList(&mlist{items: lead(items[:i], !first)}, o)
+				if b.Width > width {
+					break
+				}
 				best = i
-				continue
 			}
-			if best < 0 {
-				best = i // nothing shorter: this part stays whole
+			if best > 0 {
+				break
 			}
-			break
 		}
 		if best < 0 {
+			// nothing fits: break at the first place there is
 			best = len(items)
+			for i := 1; i < len(items); i++ {
+				if breakBefore(items[i], false) {
+					best = i
+					break
+				}
+			}
 		}
 		out = append(out, layoutList(&mlist{items: lead(items[:best], !first)}, o))
 		items = items[best:]
@@ -163,9 +173,25 @@ func Lines(src string, o Options, width float64) ([]Box, error) {
 	return out, nil
 }
 
-func breakBefore(n node) bool {
+// breakBefore reports whether a line may break before n: before a
+// relation or a binary sign, or, if preferred, before a relation or a
+// sign of addition only.
+func breakBefore(n node, preferred bool) bool {
 	a, ok := n.(*atom)
-	return ok && (a.cls == rel || a.cls == bin)
+	if !ok {
+		return false
+	}
+	if a.cls == rel {
+		return true
+	}
+	if a.cls != bin {
+		return false
+	}
+	if !preferred {
+		return true
+	}
+	s, ok := a.nuc.(*symbol)
+	return ok && (s.text == "+" || s.text == "−" || s.text == "±" || s.text == "∓")
 }
 
 // lead puts an empty ordinary atom before a continuation line's sign so

@@ -81,10 +81,11 @@ type eqPart struct {
 
 // eqLine is one line of an equation as set.
 type eqLine struct {
-	parts []eqPart
-	base  float64 // baseline below the block's top
-	asc   float64
-	desc  float64
+	parts  []eqPart
+	base   float64 // baseline below the block's top
+	asc    float64
+	desc   float64
+	broken bool // a piece of a line too long for the column
 }
 
 type eqLayout struct {
@@ -143,7 +144,7 @@ func (r *renderer) layoutEquationIn(e doc.Equation, stacked bool) (eqLayout, boo
 		}
 		cont := i > 0 && whole.Align == 0
 		// run on: the line above ends with room for this one
-		if cont && len(el.lines) > 0 {
+		if cont && len(el.lines) > 0 && !el.lines[len(el.lines)-1].broken {
 			last := &el.lines[len(el.lines)-1]
 			end := last.parts[len(last.parts)-1]
 			x := end.x + end.box.Width + relGap
@@ -177,7 +178,7 @@ func (r *renderer) layoutEquationIn(e doc.Equation, stacked bool) (eqLayout, boo
 			if bx+b.Width > mathW+0.01 {
 				fits = false
 			}
-			el.lines = append(el.lines, eqLine{parts: []eqPart{{box: b, x: bx, result: result}}})
+			el.lines = append(el.lines, eqLine{parts: []eqPart{{box: b, x: bx, result: result}}, broken: len(boxes) > 1})
 		}
 		if i == 0 && whole.Align >= 0 {
 			align = whole.Align

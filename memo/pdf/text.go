@@ -254,7 +254,7 @@ func setGlue(ws []word) {
 		next := wordText(ws[i+1])
 		r0, _ := utf8.DecodeRuneInString(next)
 		switch {
-		case unicode.IsDigit(prev) && !unicode.IsDigit(r0) && utf8.RuneCountInString(next) <= 6:
+		case unicode.IsNumber(prev) && !unicode.IsDigit(r0) && utf8.RuneCountInString(next) <= 6:
 			ws[i].glue = true
 		case isRelation(next):
 			ws[i].glue = true
