@@ -47,7 +47,9 @@ func Eng(v float64, unit string, sig int) string {
 		}
 		return s + " " + unit
 	}
-	if v == 0 {
+	if math.Abs(v) < 1e-18 {
+		// below atto-units a figure here is rounding noise (a component
+		// that cancels by symmetry), not a result
 		return "0 " + unit
 	}
 	exp := int(math.Floor(math.Log10(math.Abs(v))/3)) * 3

@@ -120,13 +120,21 @@ func validityFlags(co calc.Coil, cr calc.CoilResult, d calc.Design) []validity {
 				text += fmt.Sprintf(", and in the coil's plane beyond %s", Eng(p, "m", 3))
 			}
 			text += ". This memo uses the exact field everywhere; the dipole figure is for estimates and for the far field, such as a magnetometer's reading of the coil."
+			var inside []string
 			for _, pr := range d.Probes {
 				switch dist := pr.At.Sub(co.Centre).Norm(); {
 				case dist == 0:
-					text += fmt.Sprintf(" Probe %q is at the centre: there, only the exact field is valid.", pr.Name)
+					inside = append(inside, fmt.Sprintf("%q (at the centre)", pr.Name))
 				case dist < dr:
-					text += fmt.Sprintf(" Probe %q is %s from the centre, inside that distance: there, only the exact field is valid.", pr.Name, Eng(dist, "m", 3))
+					inside = append(inside, fmt.Sprintf("%q (%s away)", pr.Name, Eng(dist, "m", 3)))
 				}
+			}
+			switch len(inside) {
+			case 0:
+			case 1:
+				text += " Probe " + inside[0] + " lies inside that distance: there only the exact field is valid."
+			default:
+				text += " Probes " + strings.Join(inside[:len(inside)-1], ", ") + " and " + inside[len(inside)-1] + " lie inside that distance: there only the exact field is valid."
 			}
 			out = append(out, validity{what: "Dipole distance", text: text})
 		}
@@ -301,12 +309,12 @@ func coilSteps(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) []Step {
 	case w.Thin:
 		add(Step{What: "Thin winding: every turn on the mean diameter", Symbolic: `r_i = \frac{\bar{D}}{2}`,
 			Numbers: fmt.Sprintf(`\frac{%s}{2}`, Q(co.MeanDiameter, "m", 4)), Result: Q(R, "m", 4)})
-		add(Step{What: "Wire length, every turn", Symbolic: pair + `\ell_w = \sum_{i=1}^{N} 2\pi r_i`,
+		add(Step{What: "Wire length, every turn", Symbolic: `\ell_w = ` + pair + `\sum_{i=1}^{N} 2\pi r_i`,
 			Numbers: fmt.Sprintf(`%s%d \cdot 2\pi \cdot %s`, pair, co.Turns, Q(R, "m", 4)), Result: Q(cr.Length, "m", 4)})
 	case w.LayerCount <= 1:
 		add(Step{What: "Single layer: turn pitch along the winding length", Symbolic: `p = \frac{\ell}{N}`,
 			Numbers: fmt.Sprintf(`\frac{%s}{%d}`, Q(co.Length, "m", 4), co.Turns), Result: Q(co.Length/float64(max(co.Turns, 1)), "m", 4)})
-		add(Step{What: "Wire length, every turn on the mean diameter", Symbolic: pair + `\ell_w = \sum_{i=1}^{N} 2\pi r_i`,
+		add(Step{What: "Wire length, every turn on the mean diameter", Symbolic: `\ell_w = ` + pair + `\sum_{i=1}^{N} 2\pi r_i`,
 			Numbers: fmt.Sprintf(`%s%d \cdot 2\pi \cdot %s`, pair, co.Turns, Q(R, "m", 4)), Result: Q(cr.Length, "m", 4)})
 	default:
 		add(Step{What: "Turns per layer: touching turns along the winding length", Symbolic: `n_l = \left\lfloor \frac{\ell}{d_o} \right\rfloor`,
@@ -323,7 +331,7 @@ func coilSteps(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) []Step {
 		for _, l := range w.Layers {
 			sumR += float64(len(l.Z)) * l.Radius
 		}
-		add(Step{What: "Wire length, layer by layer (nₖ turns at radius rₖ)", Symbolic: pair + `\ell_w = \sum_{k=1}^{n_L} n_k\, 2\pi r_k`,
+		add(Step{What: "Wire length, layer by layer (nₖ turns at radius rₖ)", Symbolic: `\ell_w = ` + pair + `\sum_{k=1}^{n_L} n_k\, 2\pi r_k`,
 			Numbers: fmt.Sprintf(`%s2\pi \cdot %s`, pair, Q(sumR, "m", 5)), Result: Q(cr.Length, "m", 4)})
 	}
 	if total > 0 {
@@ -455,6 +463,8 @@ func momentSteps(co calc.Coil, cr calc.CoilResult) []Step {
 
 func inductanceWhat(co calc.Coil, w calc.Winding) string {
 	switch {
+	case co.Form == calc.Rectangle:
+		return "Self-inductance of N rectangular turns bundled together: N² times one turn's, from the partial inductances of its four sides"
 	case co.Form == calc.Solenoid && co.RadialBuild == 0:
 		return "Self-inductance of a single-layer coil: Lorenz's current sheet with Nagaoka's coefficient, less Rosa's round-wire correction (A, B)"
 	case w.Thin:
@@ -465,6 +475,8 @@ func inductanceWhat(co calc.Coil, w calc.Winding) string {
 
 func inductanceRelation(co calc.Coil, w calc.Winding) string {
 	switch {
+	case co.Form == calc.Rectangle:
+		return `L = N^2 L_1`
 	case co.Form == calc.Solenoid && co.RadialBuild == 0:
 		return `L = \frac{\mu_0 \pi a^2 N^2 k_N}{\ell} - \mu_0 a N (A + B)`
 	case w.Thin:

@@ -34,7 +34,7 @@ func (c *composer) verification() {
 	}
 	c.add(doc.Table{Caption: "Independent checks of this design's results (relative difference against tolerance)",
 		Header: []string{"Check", "This memo", "Independent", "Rel. diff.", "Tol.", "Status"}, Rows: rows,
-		Widths: []float64{1.6, 2.1, 2.1, 0.95, 0.95, 0.75},
+		Widths: []float64{1.5, 1.95, 1.95, 1.15, 1.15, 0.75},
 		Align:  []doc.Align{doc.Left, doc.Left, doc.Left, doc.Right, doc.Right, doc.Center}})
 }
 
