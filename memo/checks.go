@@ -48,6 +48,7 @@ func Verify(d calc.Design, r calc.Results) []Check {
 		w := cr.Winding
 		I := cr.Current
 		if c.Form == calc.Rectangle || !(I != 0) || math.IsNaN(I) {
+			out = append(out, rectangleChecks(c, cr)...)
 			out = append(out, wireCheck(c)...)
 			continue
 		}
