@@ -262,4 +262,3 @@ func TestDeviationPlot(t *testing.T) {
 		}
 	}
 }
-
