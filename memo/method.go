@@ -52,8 +52,16 @@ func (c *composer) assumptions() {
 		sp = append(sp, doc.Span{Text: capitalise(text)})
 		items = append(items, []doc.Block{doc.Paragraph{Spans: sp}})
 	}
-	item("Filament model", false, templates.Text("assume-filament", nil))
-	item("Cooling", false, coolingAssumption(d, r))
+	general := func(lead, text string) {
+		// a template that opens with its own "Lead: " keeps it as the lead
+		if l, rest, ok := strings.Cut(text, ": "); ok && !strings.ContainsAny(l, ".;,") && len(l) < 40 {
+			lead, text = l, rest
+		}
+		item(lead, false, text)
+	}
+	general("Filament model", templates.Text("assume-filament", nil))
+	general("Cooling", coolingAssumption(d, r))
+	general("Thermal model", templates.Text("assume-thermal", nil))
 	c.add(doc.List{Items: items})
 	items = nil
 	for i, co := range d.Coils {
@@ -246,7 +254,7 @@ func coolingAssumption(d calc.Design, r calc.Results) string {
 	}
 	switch {
 	case cool.Vacuum:
-		return fmt.Sprintf("in vacuum the winding sheds heat by radiation only, with surface emissivity %s, to surroundings at the ambient temperature%s.", Sig(cool.Emissivity, 2), mount)
+		return templates.Text("assume-vacuum", map[string]string{"Emissivity": Sig(cool.Emissivity, 2)})
 	case d.Conditions.Cooling.HGiven:
 		return fmt.Sprintf("convection with the heat-transfer coefficient stated in the spec, h = %s, plus radiation with surface emissivity %s to surroundings at the ambient temperature%s.",
 			Eng(cool.H, "W/(m²·K)", 3), Sig(cool.Emissivity, 2), mount)
