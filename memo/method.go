@@ -49,7 +49,7 @@ func (c *composer) assumptions() {
 		if flagged {
 			sp = append(sp, doc.Span{Text: "Check: ", Strong: true})
 		}
-		sp = append(sp, doc.Span{Text: capitalise(text)})
+		sp = append(sp, mathSpans(capitalise(text))...)
 		items = append(items, []doc.Block{doc.Paragraph{Spans: sp}})
 	}
 	general := func(lead, text string) {
@@ -122,7 +122,7 @@ func validityFlags(co calc.Coil, cr calc.CoilResult, d calc.Design) []validity {
 			dr = calc.DipoleRange(co, w, cr.Current, 0.01)
 		}
 		if !math.IsNaN(dr) && dr > 0 {
-			text := fmt.Sprintf("on the axis the point-dipole field μ0 m/(2π z³) is within 1 %% of the exact field beyond %s from the centre (%s mean radii)",
+			text := fmt.Sprintf("on the axis the point-dipole field $B = \\mu_0 m/(2\\pi z^3)$ is within 1 %% of the exact field beyond %s from the centre (%s mean radii)",
 				Eng(dr, "m", 3), Sig(dr/R, 3))
 			if p := cr.Dipole.Plane1; p > 0 && !math.IsNaN(p) {
 				text += fmt.Sprintf(", and in the coil's plane beyond %s", Eng(p, "m", 3))
@@ -151,7 +151,7 @@ func validityFlags(co calc.Coil, cr calc.CoilResult, d calc.Design) []validity {
 	switch ac := cr.AC; {
 	case ac.Frequency > 0:
 		v := validity{what: "Frequency"}
-		parts := []string{fmt.Sprintf("driven at %s: reactance X = %s against R = %s (X/R = %s)",
+		parts := []string{fmt.Sprintf("driven at %s: reactance $X = 2\\pi f L$ = %s against $R$ = %s ($X/R$ = %s)",
 			Eng(ac.Frequency, "Hz", 3), Eng(ac.Reactance, "Ω", 3), Eng(cr.RHot, "Ω", 3), Sig(ac.Reactance/cr.RHot, 2))}
 		if ac.Reactive {
 			v.flagged = true
@@ -161,15 +161,15 @@ func validityFlags(co calc.Coil, cr calc.CoilResult, d calc.Design) []validity {
 		}
 		if ac.SkinLimited {
 			v.flagged = true
-			parts = append(parts, fmt.Sprintf("the skin depth %s is less than the wire radius %s, so the a.c. resistance and heating exceed the d.c. figures", Eng(ac.SkinDepth, "m", 3), Eng(ac.WireRadius, "m", 3)))
+			parts = append(parts, fmt.Sprintf("the skin depth $\\delta$ = %s is less than the wire radius %s, so the a.c. resistance and heating exceed the d.c. figures", Eng(ac.SkinDepth, "m", 3), Eng(ac.WireRadius, "m", 3)))
 		} else if !math.IsNaN(ac.SkinDepth) {
-			parts = append(parts, fmt.Sprintf("the skin depth %s exceeds the wire radius %s: no skin effect", Eng(ac.SkinDepth, "m", 3), Eng(ac.WireRadius, "m", 3)))
+			parts = append(parts, fmt.Sprintf("the skin depth $\\delta$ = %s exceeds the wire radius %s: no skin effect", Eng(ac.SkinDepth, "m", 3), Eng(ac.WireRadius, "m", 3)))
 		}
 		v.text = strings.Join(parts, "; ") + "."
 		out = append(out, v)
 	case cr.TimeConstant > 0 && !math.IsInf(cr.TimeConstant, 0):
 		out = append(out, validity{what: "Direct current", text: fmt.Sprintf(
-			"the results are steady d.c. values. After switch-on the current rises with the time constant L/R = %s and is within 1 %% of its final value after 4.6 L/R = %s; faster switching or an a.c. drive (give frequency) changes current, field and heating.",
+			"the results are steady d.c. values. After switch-on the current rises with the time constant $\\tau = L/R$ = %s and is within 1 %% of its final value after $4.6\\,\\tau$ = %s; faster switching or an a.c. drive (give frequency) changes current, field and heating.",
 			Eng(cr.TimeConstant, "s", 3), Eng(4.6*cr.TimeConstant, "s", 3))})
 	default:
 		out = append(out, validity{what: "Direct current", text: templates.Text("assume-dc", nil)})
@@ -177,7 +177,7 @@ func validityFlags(co calc.Coil, cr calc.CoilResult, d calc.Design) []validity {
 	// Thermal-model range.
 	if st := cr.Heat.Steady; st.Settled && !cr.Runaway {
 		v := validity{what: "Thermal model"}
-		text := fmt.Sprintf("the resistance follows the winding's mean temperature %s linearly (α₂₀ of %s); heat crosses the turns with an effective conductivity of %s, so the hottest point is %s above the surface (%s); the insulation is judged at the hottest point",
+		text := fmt.Sprintf("the resistance follows the winding's mean temperature %s linearly ($\\alpha_{20}$ of %s); heat crosses the turns with an effective conductivity of %s, so the hottest point is %s above the surface (%s); the insulation is judged at the hottest point",
 			Eng(Celsius(st.Mean), "°C", 3), co.Wire.Material.Name, Eng(cr.Heat.Conductivity, "W/(m·K)", 2), Eng(st.HotSpot-st.Surface, "K", 2), Eng(Celsius(st.Surface), "°C", 3))
 		if cv := st.Convection; cv.Ra > 0 {
 			if cv.InRange {
@@ -188,7 +188,7 @@ func validityFlags(co calc.Coil, cr calc.CoilResult, d calc.Design) []validity {
 			}
 		}
 		if cr.ThermalTau > 0 && !math.IsInf(cr.ThermalTau, 0) {
-			text += fmt.Sprintf(". The steady temperature is reached after about three thermal time constants, 3τ = %s; a shorter on-time leaves the winding cooler", Duration(3*cr.ThermalTau, 2))
+			text += fmt.Sprintf(". The steady temperature is reached after about three thermal time constants, $3\\tau_{\\mathrm{th}}$ = %s; a shorter on-time leaves the winding cooler", Duration(3*cr.ThermalTau, 2))
 		}
 		v.text = text + "."
 		out = append(out, v)
@@ -209,7 +209,7 @@ func validityFlags(co calc.Coil, cr calc.CoilResult, d calc.Design) []validity {
 			}
 			v.text += "."
 		case math.Abs(ratio-1) <= calc.HelmholtzTolerance:
-			v.text = fmt.Sprintf("spacing / mean radius = %s: a Helmholtz pair, whose centre field is flat to the fourth order", Sig(ratio, 4))
+			v.text = fmt.Sprintf("spacing / mean radius $s/R$ = %s: a Helmholtz pair, whose centre field is flat to the fourth order", Sig(ratio, 4))
 			if !math.IsNaN(pr.Axial1) {
 				v.text += fmt.Sprintf("; the field stays within 1 %% of its centre value for %s along the axis and %s radially", pmEng(pr.Axial1), pmEng(pr.Radial1))
 			}
@@ -220,13 +220,27 @@ func validityFlags(co calc.Coil, cr calc.CoilResult, d calc.Design) []validity {
 			if ratio < 1 {
 				shape = "a peak at the centre (spacing narrower than the radius)"
 			}
-			v.text = fmt.Sprintf("spacing / mean radius = %s, not 1: the field on the axis has %s", Sig(ratio, 3), shape)
+			v.text = fmt.Sprintf("spacing / mean radius $s/R$ = %s, not 1: the field on the axis has %s", Sig(ratio, 3), shape)
 			if !math.IsNaN(pr.Axial1) {
 				v.text += fmt.Sprintf("; it stays within 1 %% of its centre value for %s along the axis and %s radially", pmEng(pr.Axial1), pmEng(pr.Radial1))
 			}
 			v.text += fmt.Sprintf(". Spacing the coils at %s would make it a Helmholtz pair.", Eng(R, "m", 3))
 		}
 		out = append(out, v)
+	}
+	return out
+}
+
+// mathSpans splits text at "$" signs into plain spans and inline
+// mathematics: "the field $B_0$ at" is three spans, the middle one
+// notation.
+func mathSpans(text string) []doc.Span {
+	var out []doc.Span
+	for i, part := range strings.Split(text, "$") {
+		if part == "" {
+			continue
+		}
+		out = append(out, doc.Span{Text: part, Math: i%2 == 1})
 	}
 	return out
 }
@@ -339,7 +353,7 @@ func coilSteps(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) []Step {
 		for _, l := range w.Layers {
 			sumR += float64(len(l.Z)) * l.Radius
 		}
-		add(Step{What: "Wire length, layer by layer (nₖ turns at radius rₖ)", Symbolic: `\ell_w = ` + pair + `\sum_{k=1}^{n_L} n_k\, 2\pi r_k`,
+		add(Step{What: fmt.Sprintf("Wire length, layer by layer: nₖ turns at radius rₖ, Σ nₖrₖ = %s", Eng(sumR, "m", 5)), Symbolic: `\ell_w = ` + pair + `\sum_{k=1}^{n_L} n_k\, 2\pi r_k`,
 			Numbers: fmt.Sprintf(`%s2\pi \cdot %s`, pair, Q(sumR, "m", 5)), Result: Q(cr.Length, "m", 4)})
 	}
 	if total > 0 {

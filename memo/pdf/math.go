@@ -16,7 +16,7 @@ const (
 	sizeMathInline = 10.0 // inline mathematics in 9.5 pt running text
 	eqDescShare    = 0.3  // description column, share of the text width
 	eqGap          = 12.0 // between the description and the equation
-	eqLabelW       = 34.0 // room for the equation number at the right
+	eqLabelW       = 40.0 // room for the equation number at the right
 	eqLineGap      = 4.0  // least white between two lines of an equation
 	eqBefore       = 7.0
 	eqAfter        = 8.0
