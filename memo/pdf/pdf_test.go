@@ -98,8 +98,13 @@ func TestFontsEmbedded(t *testing.T) {
 			t.Errorf("font %d: descriptor has no embedded font file", n)
 		}
 	}
-	if fonts < 3 {
-		t.Errorf("found %d fonts, want at least 3 (sans, bold, mono)", fonts)
+	if fonts < 5 {
+		t.Errorf("found %d fonts, want at least 5 (sans, bold, mono, and the serif faces of the mathematics)", fonts)
+	}
+	for _, face := range []string{"/BaseFont /utf8serifI", "/BaseFont /utf8serif"} {
+		if !bytes.Contains(b, []byte(face)) {
+			t.Errorf("no %s: the equations' faces are not in the file", face)
+		}
 	}
 	if bytes.Contains(b, []byte("/Type1")) || bytes.Contains(b, []byte("/Helvetica")) {
 		t.Error("a non-embedded standard font is referenced")
