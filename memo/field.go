@@ -394,8 +394,11 @@ func (c *composer) dipoleDistances(co calc.Coil, cr calc.CoilResult) {
 	if co.Form == calc.Rectangle {
 		refText = fmt.Sprintf("%s = √(W·H/π) = %s is the radius of the circle of the same area", refName, Eng(ref, "m", 3))
 	}
-	c.para(fmt.Sprintf("Far from the winding the field of coil %q is that of a point dipole of moment |m| = %s at its centre, B = μ0/4π · (3(m·r̂)r̂ − m)/r³. The table gives the distance from the centre beyond which that approximation stays within 1 %% and 0.1 %% of the exact field (vector difference; %s). The point-dipole description is good to 1 %% everywhere beyond %s from the centre of the coil, and to 0.1 %% beyond %s; nearer than that, use the exact field.",
-		co.Name, Eng(cr.Moment.Norm(), "A·m²", 3), refText, Eng(good1, "m", 3), Eng(good01, "m", 3)))
+	c.para(fmt.Sprintf("Far from the winding the field of coil %q is that of a point dipole of moment |m| = %s at its centre:", co.Name, Eng(cr.Moment.Norm(), "A·m²", 3)))
+	c.derive(Step{What: "Field of a point dipole m at distance r in the direction of the unit vector r̂",
+		Symbolic: `\vec{B} = \frac{\mu_0}{4\pi}\, \frac{3 (\vec{m} \cdot \hat{r})\, \hat{r} - \vec{m}}{r^3}`})
+	c.para(fmt.Sprintf("The table gives the distance from the centre beyond which that approximation stays within 1 %% and 0.1 %% of the exact field (vector difference; %s). The point-dipole description is good to 1 %% everywhere beyond %s from the centre of the coil, and to 0.1 %% beyond %s; nearer than that, use the exact field.",
+		refText, Eng(good1, "m", 3), Eng(good01, "m", 3)))
 	c.add(doc.Table{Caption: fmt.Sprintf("Distance beyond which the point-dipole field of coil %q is within tolerance", co.Name),
 		Header: []string{"Direction from the centre", "Within 1 %", "Within 0.1 %"},
 		Rows: [][]doc.Cell{
