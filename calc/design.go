@@ -153,7 +153,7 @@ var LimitQuantities = map[string]LimitQuantity{
 	"moment":          {"A m2", "magnitude of the total magnetic moment"},
 	"field-center":    {"T", "|B| at the origin"},
 	"power":           {"W", "total electrical power"},
-	"temperature":     {"degC", "hottest steady winding temperature"},
+	"temperature":     {"degC", "hottest winding temperature"},
 	"current":         {"A", "largest coil current"},
 	"voltage":         {"V", "largest coil voltage"},
 	"resistance":      {"ohm", "largest hot coil resistance"},

@@ -91,16 +91,18 @@ func evaluateCoil(c Coil, cond Conditions) CoilResult {
 	cr.Heat = Heating(c, w, op)
 	cr.ThermalTau = op.Thermal.ThermalTimeConstant(cr.Heat.HeatCapacity, op.State.Mean)
 	if c.OnTime > 0 && cr.Heat.Cycle.On > 0 && op.State.Settled {
-		// An on/off cycle of stated on-time: its peak is the hottest state.
+		// An on/off cycle of stated on-time: its peak is the hottest state
+		// (at least the duty-averaged steady state's hot spot).
 		cy := cr.Heat.Cycle
-		cr.Temperature = cy.PeakHot
+		// Both are approximations of the same state; the hotter is kept.
+		cr.Temperature = math.Max(cy.PeakHot, op.Temperature)
 		if !cy.Settled {
 			cr.Temperature, cr.Runaway = math.NaN(), true
 		} else if c.Drive == CurrentDrive && c.InsulationClass > 0 && cy.PeakHot > c.InsulationClass {
 			cr.Runaway = true
 		}
 	}
-	cr.Switch = Switching(cr.Inductance, op.RHot, op.Current, op.Voltage, c.SwitchOff, c.DriverRating)
+	cr.Switch = Switching(cr.Inductance, op.RHot, op.Current, op.Voltage, c.SwitchOff, c.DriverRating, c.Drive == VoltageDrive)
 	cr.AC = AC(c, cr.Inductance, op.RHot, op.State.Mean, c.Frequency)
 	cr.GradientForce = GradientForce(cr.Moment.Norm(), cond.FieldGradient)
 	cr.InsulationMargin = math.NaN()

@@ -163,8 +163,9 @@ func TestHelmholtzTextbookExamples(t *testing.T) {
 	}{
 		// Giancoli, Physics for Scientists and Engineers, 4th ed., ch. 28,
 		// problem on Helmholtz coils (Fig. 28–61), part (c): R = 10.0 cm,
-		// N = 85, I = 3.0 A. Quoted answer 2.3 × 10⁻³ T — recalled, to the
-		// problem's two significant figures.
+		// N = 85, I = 3.0 A (data as the publisher's study pages state the
+		// problem). The answer to the data's two significant figures is
+		// 2.3 × 10⁻³ T; the book's printed answer was not checked.
 		{"Giancoli 4th ed. ch. 28", 0.100, 3.0, 85, 2.3e-3, 0.05e-3},
 		// An introductory-physics homework set (186 turns, R = 15.9 cm,
 		// I = 2.2 A), whose accepted answer 0.0023 T is quoted in a public

@@ -211,3 +211,28 @@ func RosaCorrection(a, p, d float64, N int) float64 {
 // Wheeler (1928) states his single-layer formula is within about 1 %:
 // ℓ > 0.8 a, i.e. ℓ/D > 0.4.
 const WheelerValidRatio = 0.4
+
+// MultilayerByCells reports whether CoilInductance sums the multilayer
+// winding w over cells of turns (CellInductance) rather than turn by turn.
+func MultilayerByCells(w Winding) bool {
+	rs := rowsOf(w)
+	return rowPairCost(rs, rs, true) > turnSumBudget
+}
+
+// WheelerMultilayerInductance returns Wheeler's approximation, H, to the
+// inductance of a multilayer coil of N turns, mean radius a, winding
+// length b and radial build c (Wheeler, "Simple inductance formulas for
+// radio coils", Proc. IRE 16, 1928; recalled from memory):
+// L = 0.8 a² N²/(6a + 9b + 10c) µH with the lengths in inches, i.e. in SI
+//
+//	L = (0.8 µH / 1 in) · a² N² / (6a + 9b + 10c)
+//
+// quoted to about 1 % when the three terms of the denominator are
+// comparable. NaN for non-positive dimensions.
+func WheelerMultilayerInductance(a, b, c float64, N int) float64 {
+	if !(a > 0) || !(b > 0) || !(c > 0) {
+		return math.NaN()
+	}
+	n := float64(N)
+	return 0.8e-6 / Inch * a * a * n * n / (6*a + 9*b + 10*c)
+}

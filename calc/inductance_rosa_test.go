@@ -102,3 +102,16 @@ func TestBrooksCoil(t *testing.T) {
 	want := 0.025491e-6 * (c * 100) * N * N
 	checkRel(t, "Brooks coil: multilayer method vs Grover's constant", CoilInductance(coil, w), want, 5e-4)
 }
+
+func TestWheelerMultilayerForm(t *testing.T) {
+	// The SI form against Wheeler's inch form, L = 0.8 a² N²/(6a + 9b + 10c)
+	// µH, at a = 1 in, b = c = 0.5 in, N = 100.
+	want := 0.8 * 1 * 1e4 / (6 + 4.5 + 5) * 1e-6
+	checkRel(t, "Wheeler multilayer in SI", WheelerMultilayerInductance(Inch, Inch/2, Inch/2, 100), want, 1e-14)
+	// A 20 × 20 winding is summed turn by turn.
+	small := Coil{Form: Solenoid, MeanDiameter: 0.2, Length: 0.02, RadialBuild: 0.02, Turns: 400,
+		Wire: Wire{Bare: 0.9e-3, Outer: 1e-3, Material: Copper()}}
+	if MultilayerByCells(LayOut(small)) {
+		t.Error("400 turns should be summed turn by turn")
+	}
+}

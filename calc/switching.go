@@ -36,7 +36,9 @@ type SwitchResult struct {
 	// (NaN without a switch-off time).
 	SwitchOff, Spike float64
 	// Clamp is the switch voltage the suppression must respect, V: the
-	// driver rating when given (ClampFromRating), else twice the supply.
+	// driver rating when given (ClampFromRating), else twice a stated
+	// supply voltage; NaN when neither is known (a current source whose
+	// compliance is not stated).
 	Clamp           float64
 	ClampFromRating bool
 	// Freewheel diode: decay time constant L/R and time to 10 %.
@@ -50,8 +52,10 @@ type SwitchResult struct {
 // Switching returns the switching figures of a coil block of inductance L
 // (H) and hot resistance R (Ω) carrying I (A) from a supply of V (V), with
 // switch-off time tOff (s, 0: not given) and driver rating rating (V, 0:
-// not given). Unknown values are NaN.
-func Switching(L, R, I, V, tOff, rating float64) SwitchResult {
+// not given); stated says the supply voltage is a stated one (voltage
+// drive) rather than I·R (current drive), and only a stated one sets the
+// default clamp of twice the supply. Unknown values are NaN.
+func Switching(L, R, I, V, tOff, rating float64, stated bool) SwitchResult {
 	n := math.NaN()
 	s := SwitchResult{TimeConstant: n, RiseTime: n, Energy: n, Supply: math.Abs(V), Spike: n, Clamp: n,
 		DiodeDecay: n, DiodeTime10: n, Resistor: n, ResistorDecay: n, ResistorTime10: n, ResistorEnergy: n}
@@ -66,9 +70,11 @@ func Switching(L, R, I, V, tOff, rating float64) SwitchResult {
 		s.SwitchOff = tOff
 		s.Spike = L*I/tOff + s.Supply
 	}
-	s.Clamp = 2 * s.Supply
-	if rating > 0 {
+	switch {
+	case rating > 0:
 		s.Clamp, s.ClampFromRating = rating, true
+	case stated:
+		s.Clamp = 2 * s.Supply
 	}
 	if s.Clamp > s.Supply && I > 0 && R >= 0 {
 		s.Resistor = (s.Clamp - s.Supply) / I

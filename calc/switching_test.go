@@ -7,7 +7,7 @@ import (
 
 func TestSwitching(t *testing.T) {
 	// L = 20 mH, R = 8 Ω, 1.5 A from 12 V, opened in 10 µs, a 40 V driver.
-	s := Switching(20e-3, 8, 1.5, 12, 10e-6, 40)
+	s := Switching(20e-3, 8, 1.5, 12, 10e-6, 40, true)
 	checkRel(t, "τ", s.TimeConstant, 2.5e-3, 1e-15)
 	// i(t₉₀)/I = 1 − e^(−ln 10) = 0.9 exactly.
 	checkRel(t, "90 % at t₉₀", 1-math.Exp(-s.RiseTime/s.TimeConstant), 0.9, 1e-15)
@@ -27,14 +27,18 @@ func TestSwitching(t *testing.T) {
 	// Energy shares: resistor + coil = ½ L I².
 	checkRel(t, "energy in R_s", s.ResistorEnergy+s.Energy*8/(8+s.Resistor), s.Energy, 1e-15)
 	// No rating: twice the supply; no switch-off time: no spike.
-	s = Switching(20e-3, 8, 1.5, 12, 0, 0)
+	s = Switching(20e-3, 8, 1.5, 12, 0, 0, true)
 	checkRel(t, "default clamp", s.Clamp, 24, 0)
 	if !math.IsNaN(s.Spike) || s.ClampFromRating {
 		t.Errorf("spike %g without a switch-off time", s.Spike)
 	}
 	// A rating below the supply leaves no room for a resistor.
-	if s = Switching(20e-3, 8, 1.5, 12, 0, 10); !math.IsNaN(s.Resistor) {
+	if s = Switching(20e-3, 8, 1.5, 12, 0, 10, true); !math.IsNaN(s.Resistor) {
 		t.Errorf("rating under the supply: R_s = %g", s.Resistor)
+	}
+	// A current source of unstated compliance and no rating: no clamp.
+	if s = Switching(20e-3, 8, 1.5, 12, 0, 0, false); !math.IsNaN(s.Clamp) || !math.IsNaN(s.Resistor) {
+		t.Errorf("current drive, no rating: clamp %g, R_s %g", s.Clamp, s.Resistor)
 	}
 }
 

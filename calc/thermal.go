@@ -50,6 +50,10 @@ type ThermalProblem struct {
 	// RiseMean and RiseMax are the rises, K/W, of the winding's mean and
 	// hottest temperature above its surface per watt generated in it.
 	RiseMean, RiseMax float64
+	// InternalTau is the time constant, s, with which the hottest point's
+	// rise above the mean follows the power in the warm-up and the duty
+	// cycle (0: at once).
+	InternalTau float64
 }
 
 // StillAir returns the cooling assumed for a coil in still room air: a
@@ -298,12 +302,28 @@ func AnnulusRise(ri, ro, l, k float64) (mean, max float64) {
 // WindingRise returns the internal rises, K/W of the block's power, of the
 // mean and the hottest winding temperature above the winding surface for
 // coil c with winding w and effective conductivity k (W/(m·K)) across the
-// turns (AnnulusRise): a thin coil is a solid round bundle of the
-// hexagonal-packing diameter along its mean turn; a single-layer coil an
-// annulus one overall wire diameter deep over its length; a multilayer
-// coil the annulus of its radial build over its length. A pair's two coils
-// share the block's power. Zero rises when the data are missing.
+// turns: AnnulusRise over RiseGeometry. A pair's two coils share the
+// block's power. Zero rises when the data are missing.
 func WindingRise(c Coil, w Winding, k float64) (mean, max float64) {
+	ri, ro, l := RiseGeometry(c, w)
+	if !(ro > 0) {
+		return 0, 0
+	}
+	mean, max = AnnulusRise(ri, ro, l, k)
+	if math.IsNaN(mean) || math.IsNaN(max) {
+		return 0, 0
+	}
+	s := float64(SeriesCoils(c))
+	return mean / s, max / s
+}
+
+// RiseGeometry returns the annulus (inner and outer radius, length, m)
+// through which the heat of one coil of c is taken to leave its winding: a
+// thin coil is a solid round bundle of the hexagonal-packing diameter along
+// its mean turn (ri = 0); a single-layer coil an annulus one overall wire
+// diameter deep over its length; a multilayer coil the annulus of its
+// radial build over its length. Zeros when the data are missing.
+func RiseGeometry(c Coil, w Winding) (ri, ro, length float64) {
 	outer := c.Wire.Outer
 	if !(outer > 0) {
 		outer = c.Wire.Bare
@@ -311,23 +331,17 @@ func WindingRise(c Coil, w Winding, k float64) (mean, max float64) {
 	n := w.TurnCount()
 	switch {
 	case n == 0 || !(outer > 0):
-		return 0, 0
+		return 0, 0, 0
 	case w.Thin:
-		mean, max = AnnulusRise(0, BundleDiameter(outer, n)/2, w.MeanTurn, k)
+		return 0, BundleDiameter(outer, n) / 2, w.MeanTurn
 	case w.LayerCount <= 1 && c.RadialBuild <= 0:
 		rm := c.MeanDiameter / 2
-		mean, max = AnnulusRise(math.Max(rm-outer/2, 0), rm+outer/2, c.Length, k)
-	default:
-		rin := w.Layers[0].Radius - outer/2
-		length := c.Length
-		if !(length > 0) {
-			length = outer
-		}
-		mean, max = AnnulusRise(math.Max(rin, 0), math.Max(rin, 0)+math.Max(c.RadialBuild, float64(w.LayerCount)*outer), length, k)
+		return math.Max(rm-outer/2, 0), rm + outer/2, c.Length
 	}
-	if math.IsNaN(mean) || math.IsNaN(max) {
-		return 0, 0
+	rin := math.Max(w.Layers[0].Radius-outer/2, 0)
+	length = c.Length
+	if !(length > 0) {
+		length = outer
 	}
-	s := float64(SeriesCoils(c))
-	return mean / s, max / s
+	return rin, rin + math.Max(c.RadialBuild, float64(w.LayerCount)*outer), length
 }

@@ -53,7 +53,7 @@ func TestAdiabaticHeatingRate(t *testing.T) {
 	C := HeatCapacity(c, w)
 	checkRel(t, "heat capacity", C, w.Mass*385, 1e-15)
 	P := 0.25 * tp.R20
-	checkRel(t, "initial rate", tp.rate(C, true)(T20), P/(w.Mass*385), 1e-14)
+	checkRel(t, "initial rate", tp.rate(C, true)(state{T20, 0})[0], P/(w.Mass*385), 1e-14)
 	// Integrated: the time to a limit 100 K up is C·100/P.
 	checkRel(t, "adiabatic time to +100 K", tp.TimeToReach(C, T20+100, 1e6), C*100/P, 1e-9)
 	// A former adds its heat capacity: 10 g of aluminium at 903 J/(kg·K).
@@ -247,5 +247,33 @@ func TestAnnulusRiseAgainstFiniteDifferences(t *testing.T) {
 	}
 	if m, h := AnnulusRise(0, 0.002, 0.1, 0.5); math.Abs(h-2*m) > 1e-15*h {
 		t.Errorf("solid cylinder: max %g should be twice the mean %g", h, m)
+	}
+}
+
+func TestInternalRiseLags(t *testing.T) {
+	// The hot spot's rise above the mean is a first-order lag of the power:
+	// in the periodic state of a square wave its peak is X (1 − a)/(1 − a b)
+	// — X for a fast winding, X × duty for a slow one.
+	tp := baseThermal()
+	tp.RiseMean, tp.RiseMax = 0.5, 1.5 // K/W
+	X := 1.0 * tp.PowerOn(T20)
+	tp.InternalTau = 0
+	checkRel(t, "no lag", tp.cycleRise(T20, 2, 6), X, 1e-15)
+	tp.InternalTau = 1e-6
+	checkRel(t, "fast winding", tp.cycleRise(T20, 2, 6), X, 1e-12)
+	tp.InternalTau = 1e7
+	checkRel(t, "slow winding", tp.cycleRise(T20, 2, 6), X*0.25, 1e-6)
+	// From cold, the lagged rise approaches its steady value as
+	// 1 − e^(−t/τ_i) while the mean barely moves (large C).
+	tp.InternalTau = 10
+	ts, mean, hot := tp.WarmUpCurve(1e9, 30, 0)
+	for i, s := range ts {
+		if i == 0 || s < 1 {
+			continue
+		}
+		want := X * (1 - math.Exp(-s/10))
+		if math.Abs((hot[i]-mean[i])-want) > 1e-6*X {
+			t.Fatalf("t = %g s: rise %g K, want %g K", s, hot[i]-mean[i], want)
+		}
 	}
 }

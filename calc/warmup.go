@@ -7,11 +7,13 @@ import (
 
 // Warm-up, time to the insulation limit and the periodic state of an
 // on/off duty cycle. The winding (and its former, when given) is one
-// lumped thermal mass of heat capacity C at its mean temperature T, with
-// the internal rise of WindingRise following the power at once
-// (quasi-steady conduction inside the winding):
+// lumped thermal mass of heat capacity C at its mean temperature T, its
+// surface below the mean by the quasi-steady internal rise of WindingRise,
+// and its hottest point above the mean by x, which follows the power with
+// the winding's internal time constant τ_i (ThermalProblem.InternalTau):
 //
 //	C dT/dt = s(t) · P(T) − HeatOut(T − RiseMean · s(t) P(T)),  s = 1 on, 0 off
+//	τ_i dx/dt = (RiseMax − RiseMean) · s(t) P(T) − x
 //
 // Integrated with the classical fourth-order Runge–Kutta method under
 // step-doubling error control (each step is taken once whole and once as two
@@ -101,21 +103,29 @@ func HeatCapacity(c Coil, w Winding) float64 {
 	return float64(SeriesCoils(c)) * (w.Mass*c.Wire.Material.SpecificHeat + c.Former.Capacity())
 }
 
+// state is the lumped thermal state: the winding's mean temperature (K)
+// and the rise of its hottest point above the mean (K), which lags the
+// power with the winding's internal time constant (see InternalTau).
+type state [2]float64
+
+func (y state) add(k state, h float64) state { return state{y[0] + h*k[0], y[1] + h*k[1]} }
+
 // rk4Step advances dy/dt = f(y) by one classical Runge–Kutta step of h.
-func rk4Step(f func(float64) float64, y, h float64) float64 {
+func rk4Step(f func(state) state, y state, h float64) state {
 	k1 := f(y)
-	k2 := f(y + h/2*k1)
-	k3 := f(y + h/2*k2)
-	k4 := f(y + h*k3)
-	return y + h/6*(k1+2*k2+2*k3+k4)
+	k2 := f(y.add(k1, h/2))
+	k3 := f(y.add(k2, h/2))
+	k4 := f(y.add(k3, h))
+	return state{y[0] + h/6*(k1[0]+2*k2[0]+2*k3[0]+k4[0]), y[1] + h/6*(k1[1]+2*k2[1]+2*k3[1]+k4[1])}
 }
 
 // integrate advances dy/dt = f(y) from y0 over the time span with step
-// control (see the file comment), calling visit(t, y) after each accepted
-// step (t from 0). It stops early, returning the time and value, when
-// stop(y) turns true, the crossing located by bisection on the last
-// step's length; else it returns (span, y(span)). hmax bounds the step.
-func integrate(f func(float64) float64, y0, span, hmax float64, stop func(float64) bool, visit func(t, y float64)) (float64, float64) {
+// control (see the file comment; the error is the larger of the two
+// components'), calling visit(t, y) after each accepted step (t from 0).
+// It stops early, returning the time and value, when stop(y) turns true,
+// the crossing located by bisection on the last step's length; else it
+// returns (span, y(span)). hmax bounds the step.
+func integrate(f func(state) state, y0 state, span, hmax float64, stop func(state) bool, visit func(t float64, y state)) (float64, state) {
 	t, y := 0.0, y0
 	h := math.Min(hmax, span/64)
 	if !(h > 0) {
@@ -126,15 +136,15 @@ func integrate(f func(float64) float64, y0, span, hmax float64, stop func(float6
 		one := rk4Step(f, y, h)
 		half := rk4Step(f, y, h/2)
 		two := rk4Step(f, half, h/2)
-		err := math.Abs(two - one)
-		if math.IsNaN(err) || math.IsInf(two, 0) {
-			return t, math.NaN()
+		err := math.Max(math.Abs(two[0]-one[0]), math.Abs(two[1]-one[1]))
+		if math.IsNaN(err) || math.IsInf(two[0], 0) {
+			return t, state{math.NaN(), math.NaN()}
 		}
 		if err > integrationTol && h > span*1e-12 {
 			h *= math.Max(0.2, 0.9*math.Pow(integrationTol/err, 0.2))
 			continue
 		}
-		next := two + (two-one)/15
+		next := state{two[0] + (two[0]-one[0])/15, two[1] + (two[1]-one[1])/15}
 		if stop != nil && stop(next) {
 			lo, hi := 0.0, h
 			for range 60 {
@@ -164,22 +174,50 @@ func integrate(f func(float64) float64, y0, span, hmax float64, stop func(float6
 	return t, y
 }
 
-// rate returns dT/dt of the lumped balance, K/s, with the power on (on) or
-// off, for heat capacity C.
-func (tp ThermalProblem) rate(C float64, on bool) func(float64) float64 {
-	return func(T float64) float64 {
+// extraRise is the steady rise of the hottest point above the mean per
+// watt, K/W.
+func (tp ThermalProblem) extraRise() float64 { return tp.RiseMax - tp.RiseMean }
+
+// rate returns the derivative of the lumped state with the power on (on)
+// or off, for heat capacity C: C dT/dt = s P(T) − HeatOut(T − RiseMean s
+// P(T)) and, when InternalTau > 0, dx/dt = ((RiseMax − RiseMean) s P(T) −
+// x)/InternalTau.
+func (tp ThermalProblem) rate(C float64, on bool) func(state) state {
+	return func(y state) state {
+		T := y[0]
+		var dx float64
 		if !on {
-			return -tp.HeatOut(T) / C
+			if tp.InternalTau > 0 {
+				dx = -y[1] / tp.InternalTau
+			}
+			return state{-tp.HeatOut(T) / C, dx}
 		}
 		p := tp.PowerOn(T)
-		return (p - tp.HeatOut(tp.Surface(T, p))) / C
+		if tp.InternalTau > 0 {
+			dx = (tp.extraRise()*p - y[1]) / tp.InternalTau
+		}
+		return state{(p - tp.HeatOut(tp.Surface(T, p))) / C, dx}
 	}
 }
 
+// hotSpot returns the hottest winding temperature, K, of state y with the
+// power on or off: T + x when the internal rise lags (InternalTau > 0),
+// else T + (RiseMax − RiseMean) P(T) with the power on and T with it off.
+func (tp ThermalProblem) hotSpot(y state, on bool) float64 {
+	switch {
+	case tp.InternalTau > 0:
+		return y[0] + y[1]
+	case on:
+		return tp.HotSpotOn(y[0])
+	}
+	return y[0]
+}
+
 // HotSpotOn returns the hottest winding temperature, K, at mean
-// temperature T with the power on: T + (RiseMax − RiseMean) · P(T).
+// temperature T with the power on, the internal rise settled:
+// T + (RiseMax − RiseMean) · P(T).
 func (tp ThermalProblem) HotSpotOn(T float64) float64 {
-	return T + (tp.RiseMax-tp.RiseMean)*tp.PowerOn(T)
+	return T + tp.extraRise()*tp.PowerOn(T)
 }
 
 // runawayCeiling is the temperature, K, at which an integration gives up:
@@ -199,9 +237,9 @@ func (tp ThermalProblem) TimeToReach(C, limit, tMax float64) float64 {
 	if s := on.Steady(); s.Settled && s.HotSpot < limit {
 		return math.NaN()
 	}
-	stop := func(T float64) bool { return on.HotSpotOn(T) >= limit }
-	t, T := integrate(on.rate(C, true), tp.Ambient, tMax, tMax/50, stop, nil)
-	if math.IsNaN(T) || !stop(T) {
+	stop := func(y state) bool { return on.hotSpot(y, true) >= limit }
+	t, y := integrate(on.rate(C, true), state{tp.Ambient, 0}, tMax, tMax/50, stop, nil)
+	if math.IsNaN(y[0]) || !stop(y) {
 		return math.NaN()
 	}
 	return t
@@ -210,9 +248,8 @@ func (tp ThermalProblem) TimeToReach(C, limit, tMax float64) float64 {
 // WarmUpCurve returns the warm-up from ambient over tEnd (s) for heat
 // capacity C: sample times, mean and hot-spot temperatures. With onTime > 0
 // and 0 < duty < 1 the power is switched on for onTime and off for
-// onTime·(1/duty − 1), repeatedly; otherwise it stays on. The hot spot
-// with the power off is the mean (the internal gradient gone). Samples are
-// the accepted integration steps, at most tEnd/200 apart.
+// onTime·(1/duty − 1), repeatedly; otherwise it stays on. Samples are the
+// accepted integration steps, at most tEnd/200 apart.
 func (tp ThermalProblem) WarmUpCurve(C, tEnd, onTime float64) (t, mean, hot []float64) {
 	t, mean, hot = []float64{0}, []float64{tp.Ambient}, []float64{tp.Ambient}
 	if !(C > 0) || !(tEnd > 0) {
@@ -224,42 +261,31 @@ func (tp ThermalProblem) WarmUpCurve(C, tEnd, onTime float64) (t, mean, hot []fl
 		offTime = onTime * (1/tp.Duty - 1)
 	}
 	hmax := tEnd / 200
-	T := tp.Ambient
+	y := state{tp.Ambient, 0}
 	t0 := 0.0
-	ceiling := func(T float64) bool { return T >= runawayCeiling }
-	for t0 < tEnd && !ceiling(T) {
-		phases := []struct {
+	ceiling := func(y state) bool { return y[0] >= runawayCeiling }
+	for t0 < tEnd && !ceiling(y) {
+		type phase struct {
 			on   bool
 			span float64
-		}{{true, tEnd - t0}}
+		}
+		phases := []phase{{true, tEnd - t0}}
 		if cycling {
-			phases = []struct {
-				on   bool
-				span float64
-			}{{true, math.Min(onTime, tEnd-t0)}, {false, math.Min(offTime, tEnd-t0-onTime)}}
+			phases = []phase{{true, math.Min(onTime, tEnd-t0)}, {false, math.Min(offTime, tEnd-t0-onTime)}}
 		}
 		for _, ph := range phases {
 			if !(ph.span > 0) {
 				continue
 			}
 			on := ph.on
-			if on {
-				// The hot spot jumps up when the power comes on.
-				t, mean, hot = append(t, t0), append(mean, T), append(hot, tp.HotSpotOn(T))
-			} else {
-				t, mean, hot = append(t, t0), append(mean, T), append(hot, T)
-			}
+			// Without a lag the hot spot jumps when the power switches.
+			t, mean, hot = append(t, t0), append(mean, y[0]), append(hot, tp.hotSpot(y, on))
 			start := t0
-			_, T = integrate(tp.rate(C, on), T, ph.span, math.Min(hmax, ph.span/8), ceiling, func(s, y float64) {
-				t, mean = append(t, start+s), append(mean, y)
-				if on {
-					hot = append(hot, tp.HotSpotOn(y))
-				} else {
-					hot = append(hot, y)
-				}
+			_, y = integrate(tp.rate(C, on), y, ph.span, math.Min(hmax, ph.span/8), ceiling, func(s float64, v state) {
+				t, mean, hot = append(t, start+s), append(mean, v[0]), append(hot, tp.hotSpot(v, on))
 			})
 			t0 += ph.span
-			if math.IsNaN(T) || ceiling(T) {
+			if math.IsNaN(y[0]) || ceiling(y) {
 				return
 			}
 		}
@@ -293,9 +319,13 @@ func (tp ThermalProblem) PeriodicCycle(C, onTime float64) Cycle {
 	}
 	cy.Off = onTime * (1/tp.Duty - 1)
 	ceiling := func(T float64) bool { return T >= runawayCeiling }
+	// The mean temperature's cycle does not depend on the internal rise,
+	// so the fixed point is sought in T alone (the rise integrated as a
+	// by-product and then replaced by its own periodic solution below).
+	ceil := func(y state) bool { return ceiling(y[0]) }
 	phase := func(T0 float64, on bool, span float64) float64 {
-		_, T := integrate(tp.rate(C, on), T0, span, span/4, ceiling, nil)
-		return T
+		_, y := integrate(tp.rate(C, on), state{T0, 0}, span, span/4, ceil, nil)
+		return y[0]
 	}
 	period := func(T0 float64) (peak, end float64) {
 		peak = phase(T0, true, onTime)
@@ -353,7 +383,7 @@ func (tp ThermalProblem) PeriodicCycle(C, onTime float64) Cycle {
 	T0 := lo + (hi-lo)/2
 	peak, end := period(T0)
 	cy.PeakMean, cy.Trough = peak, end
-	cy.PeakHot = tp.HotSpotOn(peak)
+	cy.PeakHot = peak + tp.cycleRise(peak, onTime, cy.Off)
 	cy.Settled = !math.IsNaN(peak) && !ceiling(peak)
 	// Average power over the period, from the energy balance of the
 	// periodic state: the heat put in equals the heat shed.
@@ -361,13 +391,29 @@ func (tp ThermalProblem) PeriodicCycle(C, onTime float64) Cycle {
 	// trapezoidal rule over the integration's steps (at most onTime/64).
 	var e float64
 	prevT, prevY := 0.0, T0
-	integrate(tp.rate(C, true), T0, onTime, onTime/64, nil, func(s, y float64) {
-		e += (s - prevT) * (tp.PowerOn(prevY) + tp.PowerOn(y)) / 2
-		prevT, prevY = s, y
+	integrate(tp.rate(C, true), state{T0, 0}, onTime, onTime/64, nil, func(s float64, y state) {
+		e += (s - prevT) * (tp.PowerOn(prevY) + tp.PowerOn(y[0])) / 2
+		prevT, prevY = s, y[0]
 	})
 	cy.AveragePow = e / (onTime + cy.Off)
 	if tau := tp.ThermalTimeConstant(C, T0); tau > 0 {
 		cy.Periods = 5 * tau / (onTime + cy.Off)
 	}
 	return cy
+}
+
+// cycleRise returns the rise of the hottest point above the mean at the end
+// of an on period in the periodic state of the on/off cycle, with the
+// power of the peak mean temperature T: the internal rise as a first-order
+// lag with time constant InternalTau driven by a square wave of height
+// X = (RiseMax − RiseMean) P(T), whose periodic peak is
+// X (1 − a)/(1 − a b), a = e^(−t_on/τ), b = e^(−t_off/τ) — X itself for a
+// fast winding (τ → 0), X × duty for a slow one.
+func (tp ThermalProblem) cycleRise(T, on, off float64) float64 {
+	X := tp.extraRise() * tp.PowerOn(T)
+	if !(tp.InternalTau > 0) {
+		return X
+	}
+	a, b := math.Exp(-on/tp.InternalTau), math.Exp(-off/tp.InternalTau)
+	return X * (1 - a) / (1 - a*b)
 }

@@ -109,6 +109,8 @@ func Verify(d calc.Design, r calc.Results) []Check {
 				"Σ exact loop fields", "point dipole μ0·m/(2π z³)", ex, dip, "T", 0.01))
 		}
 		out = append(out, inductanceChecks(c, cr)...)
+		out = append(out, roundWireCheck(c, cr)...)
+		out = append(out, heatBalanceCheck(c, cr)...)
 		out = append(out, helmholtzCheck(c, cr)...)
 		out = append(out, wireCheck(c)...)
 	}

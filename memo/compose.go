@@ -49,6 +49,8 @@ func Compose(j *Job) *doc.Document {
 	c.method()
 	c.field()
 	c.torque()
+	c.electrical()
+	c.heating()
 	c.sweep()
 	c.verification()
 	c.safety()
@@ -145,7 +147,7 @@ func (c *composer) summaryTable() doc.Table {
 		row("Resistance at 20 °C / hot", func(_ int, cr calc.CoilResult) string {
 			return Eng(cr.R20, "Ω", 3) + " / " + Eng(cr.RHot, "Ω", 3)
 		}),
-		row("Winding temperature", func(i int, cr calc.CoilResult) string {
+		row("Winding temperature, hottest point", func(i int, cr calc.CoilResult) string {
 			if cr.Runaway {
 				return "runaway"
 			}

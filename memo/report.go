@@ -41,6 +41,7 @@ type Report struct {
 	Sweep        *SweepReport  `json:"sweep,omitempty"`
 	LimitsFailed int           `json:"limits_failed"`
 	ChecksFailed int           `json:"checks_failed"`
+	Interactions
 }
 
 // SweepReport is the design re-evaluated over one parameter's range.
@@ -93,6 +94,7 @@ type CoilReport struct {
 	DipolePlane1  Num         `json:"dipole_distance_plane_1pct_m"`
 	DipolePlane01 Num         `json:"dipole_distance_plane_0p1pct_m"`
 	Pair          *PairReport `json:"pair,omitempty"`
+	CoilHeatSwitch
 }
 
 // PairReport is the region of a pair of coils: for an aiding pair the
@@ -167,6 +169,7 @@ func (j *Job) Report() Report {
 			FieldCenter: vec(cr.FieldCentre), TurnsPerLayer: cr.Winding.TurnsPerLayer, Layers: cr.Winding.LayerCount,
 			DipoleAxis1: Num(cr.Dipole.Axis1), DipoleAxis01: Num(cr.Dipole.Axis01),
 			DipolePlane1: Num(cr.Dipole.Plane1), DipolePlane01: Num(cr.Dipole.Plane01),
+			CoilHeatSwitch: coilHeatSwitch(co, cr),
 		})
 		if co.Form == calc.Pair {
 			p := cr.Pair
@@ -176,6 +179,7 @@ func (j *Job) Report() Report {
 				Gradient: Num(p.Gradient), LinearAxial: Num(p.LinearAxial), LinearRadial: Num(p.LinearRadial)}
 		}
 	}
+	rep.Interactions = interactions(d, r)
 	for _, p := range r.Probes {
 		rep.Probes = append(rep.Probes, ProbeReport{Name: p.Name, At: vec(p.At), B: vec(p.B), BMag: Num(p.B.Norm())})
 	}

@@ -65,26 +65,33 @@ func Cautions(j *Job) []doc.Callout {
 		name := fmt.Sprintf("coil %q", co.Name)
 		if cr.Runaway {
 			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Thermal runaway, " + name,
-				Spans: []doc.Span{{Text: templates.Text("caution-runaway", map[string]string{"Bound": Eng(Celsius(calc.TempSearchMax), "°C", 3)})}}})
+				Spans: []doc.Span{{Text: runawayText(co, cr)}}})
+			out = append(out, electricalCautions(co, cr, name)...)
 			continue
 		}
 		if cr.Temperature > co.InsulationClass {
 			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Insulation class exceeded, " + name,
 				Spans: []doc.Span{{Text: templates.Text("caution-class", map[string]string{
-					"Temperature": Eng(Celsius(cr.Temperature), "°C", 3), "Class": Eng(Celsius(co.InsulationClass), "°C", 3)})}}})
+					"Temperature": Eng(Celsius(cr.Temperature), "°C", 3), "Class": Eng(Celsius(co.InsulationClass), "°C", 3),
+					"Time": classTimeText(cr)})}}})
 		}
-		if cr.Temperature > HotSurface {
+		if n := leftOnText(co, cr); n != "" {
+			out = append(out, doc.Callout{Severity: doc.Caution, Title: "Insulation class if left energised, " + name,
+				Spans: []doc.Span{{Text: n}}})
+		}
+		if ts := surfaceTemperature(cr); ts > HotSurface {
 			out = append(out, doc.Callout{Severity: doc.Caution, Title: "Hot surface, " + name,
-				Spans: []doc.Span{{Text: templates.Text("caution-hot", map[string]string{"Temperature": Eng(Celsius(cr.Temperature), "°C", 3)})}}})
+				Spans: []doc.Span{{Text: templates.Text("caution-hot", map[string]string{"Temperature": Eng(Celsius(ts), "°C", 3)})}}})
+		}
+		if n := densityNote(co, cr, j.Spec.Design.Conditions); n != "" {
+			out = append(out, doc.Callout{Severity: doc.Note, Title: "Current density above common practice, " + name,
+				Spans: []doc.Span{{Text: n}}})
 		}
 		if math.Abs(cr.Voltage) > ELV {
 			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Hazardous voltage, " + name,
 				Spans: []doc.Span{{Text: templates.Text("caution-voltage", map[string]string{"Voltage": Eng(cr.Voltage, "V", 3)})}}})
 		}
-		if e := 0.5 * cr.Inductance * cr.Current * cr.Current; !math.IsNaN(e) && e > 0 {
-			out = append(out, doc.Callout{Severity: doc.Caution, Title: "Switch-off voltage, " + name,
-				Spans: []doc.Span{{Text: templates.Text("caution-inductive", map[string]string{"Energy": Eng(e, "J", 3)})}}})
-		}
+		out = append(out, electricalCautions(co, cr, name)...)
 	}
 	// Implant field: along the z axis and in the xy plane from the origin.
 	ext := designExtent(d)

@@ -1,0 +1,531 @@
+package memo
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"coilmemo/calc"
+	"coilmemo/memo/doc"
+	"coilmemo/templates"
+)
+
+// electrical is the section "Inductance and switching": coil by coil, how
+// the self-inductance was found and the independent formula beside it; the
+// time constant, rise time and stored energy; the voltage across an
+// unsuppressed switch and a suggested suppression; the figures at a drive
+// frequency; then the mutual inductances and forces between the coils and
+// the force in a stated field gradient.
+func (c *composer) electrical() {
+	d := c.j.Spec.Design
+	r := c.j.Results
+	if len(r.Coils) == 0 {
+		return
+	}
+	c.heading(1, "Inductance and switching")
+	c.para(templates.Text("electrical", nil))
+	for i, co := range d.Coils {
+		if i >= len(r.Coils) {
+			break
+		}
+		cr := r.Coils[i]
+		if math.IsNaN(cr.Inductance) || cr.Winding.TurnCount() == 0 {
+			continue
+		}
+		c.heading(2, fmt.Sprintf("Coil %q", co.Name))
+		c.derive(selfInductanceSteps(co, cr)...)
+		if co.Form == calc.Pair && !math.IsNaN(cr.PairForce) && cr.PairForce != 0 {
+			how := "they attract"
+			if cr.PairForce > 0 {
+				how = "they repel"
+			}
+			c.derive(Step{What: fmt.Sprintf("Axial force between the two coils of the pair (%s): the derivative of their mutual inductance with the spacing s", how),
+				Symbolic: `F = I^2 \frac{\partial M}{\partial s}`, Result: Q(math.Abs(cr.PairForce), "N", 3)})
+		}
+		c.derive(switchingSteps(co, cr)...)
+		c.para(suppressionText(co, cr))
+		if cr.AC.Frequency > 0 {
+			c.derive(acSteps(co, cr)...)
+			c.para(acText(co, cr))
+		}
+	}
+	c.couplings()
+	c.gradientForce()
+}
+
+// coilInductanceParts returns, for a pair, the self-inductance of one of
+// its coils and the mutual inductance of the two (L = 2 L₁ ± 2 M); for
+// other forms L₁ is the block's inductance and M is 0.
+func coilInductanceParts(co calc.Coil, cr calc.CoilResult) (L1, M float64) {
+	if co.Form != calc.Pair {
+		return cr.Inductance, 0
+	}
+	one := co
+	one.Form = calc.Solenoid
+	if cr.Winding.Thin {
+		one.Form = calc.Loop
+	}
+	L1 = calc.CoilInductance(one, cr.Winding)
+	M = (cr.Inductance - 2*L1) / 2
+	if co.Opposing {
+		M = -M
+	}
+	return L1, M
+}
+
+// selfInductanceSteps derive the self-inductance by the method used for
+// the winding, with the independent formula beside it where one applies.
+func selfInductanceSteps(co calc.Coil, cr calc.CoilResult) []Step {
+	w := cr.Winding
+	var steps []Step
+	add := func(s ...Step) { steps = append(steps, s...) }
+	L1, M := coilInductanceParts(co, cr)
+	n := co.Turns
+	a := co.MeanDiameter / 2
+	one := ""
+	if co.Form == calc.Pair {
+		one = ", one coil of the pair"
+	}
+	outer := co.Wire.Outer
+	if !(outer > 0) {
+		outer = co.Wire.Bare
+	}
+	switch {
+	case co.Form == calc.Rectangle:
+		add(Step{What: "Self-inductance of N rectangular turns of round wire bundled to a round section: N² times the single turn's, from the partial inductances of its four sides (Grover, Inductance Calculations, 1946)",
+			Symbolic: `L = N^2 L_{\mathrm{rect}}(W, H, r_b)`, Result: Q(cr.Inductance, "H", 4)})
+		return steps
+	case w.Thin:
+		rb := calc.BundleDiameter(outer, n) / 2
+		add(Step{What: "Radius of the round bundle of N wires, hexagonally packed",
+			Symbolic: `r_b = \frac{d_o}{2} \sqrt{\frac{N}{0.9069}}`,
+			Numbers:  fmt.Sprintf(`\frac{%s}{2} \sqrt{\frac{%d}{0.9069}}`, Q(outer, "m", 4), n), Result: Q(rb, "m", 4)})
+		add(Step{What: "Self-inductance of a thin circular coil of round section, uniform current (Rosa 1908; Grover 1946, ch. 13)" + one,
+			Symbolic: `L_1 = \mu_0 N^2 a \left[ \ln\frac{8a}{r_b} - \frac{7}{4} \right]`,
+			Numbers:  fmt.Sprintf(`\mu_0 \cdot %d^2 \cdot %s \left[ \ln\frac{8 \cdot %s}{%s} - \frac{7}{4} \right]`, n, Q(a, "m", 4), Q(a, "m", 4), Q(rb, "m", 4)),
+			Result:   Q(L1, "H", 4)})
+	case w.LayerCount <= 1 && co.RadialBuild <= 0:
+		l := co.Length
+		D := 2 * a
+		p := l / float64(n)
+		m := 4 * a * a / (4*a*a + l*l)
+		kN := calc.NagaokaCoefficient(a, l)
+		Ls := calc.SolenoidInductance(a, l, n)
+		A := calc.RosaA(p, co.Wire.Bare)
+		B := calc.RosaB(n)
+		add(Step{What: "Modulus of the complete elliptic integrals of the current sheet (radius a to the wire centres, length ℓ)",
+			Symbolic: `k^2 = \frac{4a^2}{4a^2 + \ell^2}`,
+			Numbers:  fmt.Sprintf(`\frac{4 \cdot %s^2}{4 \cdot %s^2 + %s^2}`, Paren(Q(a, "m", 4)), Paren(Q(a, "m", 4)), Paren(Q(l, "m", 4))), Result: N(m, 5)})
+		add(Step{What: fmt.Sprintf("Nagaoka's coefficient for ℓ/D = %s (Nagaoka 1909; tabulated by Grover 1946, Table 36)", Sig(l/D, 3)),
+			Symbolic: `k_N = \frac{4}{3\pi k'} \left[ \frac{{k'}^2}{k^2} (K - E) + E - k \right]`, Result: N(kN, 5)})
+		add(Step{What: "Self-inductance of the current sheet (Lorenz's formula in Nagaoka's form; Grover 1946, eq. 114)",
+			Symbolic: `L_s = \frac{\mu_0 \pi a^2 N^2 k_N}{\ell}`,
+			Numbers:  fmt.Sprintf(`\frac{\mu_0 \pi \cdot %s^2 \cdot %d^2 \cdot %s}{%s}`, Paren(Q(a, "m", 4)), n, N(kN, 5), Q(l, "m", 4)),
+			Result:   Q(Ls, "H", 4)})
+		add(Step{What: "Rosa's correction A: a round wire of bare diameter d against a strip of the sheet one pitch p wide (Rosa 1906; Grover 1946, ch. 16)",
+			Symbolic: `A = \frac{5}{4} - \ln\frac{2p}{d}`,
+			Numbers:  fmt.Sprintf(`\frac{5}{4} - \ln\frac{2 \cdot %s}{%s}`, Q(p, "m", 4), Q(co.Wire.Bare, "m", 4)), Result: N(A, 4)})
+		add(Step{What: fmt.Sprintf("Rosa's correction B for the mutual inductances of %d round turns against the sheet's strips (Rosa 1906; tabulated by Grover 1946)", n),
+			Symbolic: `B = \frac{2}{N} \sum_{k=1}^{N-1} (N - k)\, f(k)`, Result: N(B, 4)})
+		add(Step{What: "Self-inductance of the single-layer winding" + one,
+			Symbolic: `L_1 = L_s - \mu_0 a N (A + B)`,
+			Numbers:  fmt.Sprintf(`%s - \mu_0 \cdot %s \cdot %d \cdot \left(%s + %s\right)`, Q(Ls, "H", 4), Q(a, "m", 4), n, N(A, 4), N(B, 4)),
+			Result:   Q(L1, "H", 4)})
+		wh := calc.WheelerInductance(a, l, n)
+		rng := fmt.Sprintf("inside its range, so it should agree within about 1 %%; it differs by %s %%", Sig(100*(wh/Ls-1), 2))
+		if l/D < calc.WheelerValidRatio {
+			rng = fmt.Sprintf("outside its range, so it is no check here (it differs by %s %%)", Sig(100*(wh/Ls-1), 2))
+		}
+		add(Step{What: fmt.Sprintf("Cross-check of the current sheet by Wheeler's formula (Wheeler, Proc. IRE 16, 1928), stated within about 1 %% for ℓ > 0.4 D: here ℓ/D = %s, %s", Sig(l/D, 3), rng),
+			Symbolic: `L_W = \frac{\mu_0 \pi a^2 N^2}{\ell + 0.9 a}`,
+			Numbers:  fmt.Sprintf(`\frac{\mu_0 \pi \cdot %s^2 \cdot %d^2}{%s + 0.9 \cdot %s}`, Paren(Q(a, "m", 4)), n, Q(l, "m", 4), Q(a, "m", 4)),
+			Result:   Q(wh, "H", 4)})
+	default:
+		method := "every pair of turns summed"
+		if calc.MultilayerByCells(w) {
+			method = "so many turns that they are grouped into cells of g × g turns, each cell a filament at its centroid with the self-inductance of a square section of its size (accurate to about 10⁻³)"
+		}
+		add(Step{What: fmt.Sprintf("Self-inductance of the multilayer winding (%d layers of up to %d turns): Maxwell's mutual inductance of every pair of turn filaments i ≠ j, and each turn's own round-wire inductance μ0 r (ln(8r/ρ) − 7/4) for i = j (Maxwell 1873; Grover 1946, ch. 1); %s%s",
+			w.LayerCount, w.TurnsPerLayer, method, one),
+			Symbolic: `L_1 = \sum_{i=1}^{N} \sum_{j=1}^{N} M_{ij}`, Result: Q(L1, "H", 4)})
+		b := co.Length
+		cb := co.RadialBuild
+		if lw := calc.WheelerMultilayerInductance(a, b, cb, n); !math.IsNaN(lw) {
+			terms := []float64{6 * a, 9 * b, 10 * cb}
+			lo, hi := math.Min(terms[0], math.Min(terms[1], terms[2])), math.Max(terms[0], math.Max(terms[1], terms[2]))
+			rng := "its three terms 6a, 9b and 10c are comparable, so about 1 % is expected"
+			if hi > 3*lo {
+				rng = "its three terms 6a, 9b and 10c differ by more than a factor of 3, so its 1 % need not hold"
+			}
+			add(Step{What: fmt.Sprintf("Cross-check by Wheeler's multilayer formula (Wheeler, Proc. IRE 16, 1928; 0.8 a²N²/(6a + 9b + 10c) µH in inches; recalled from memory) with mean radius a, length b, radial build c: %s; it differs by %s %%",
+				rng, Sig(100*(lw/L1-1), 2)),
+				Symbolic: `L_W = \frac{31.50\,\unit{µH/m} \cdot a^2 N^2}{6a + 9b + 10c}`,
+				Numbers:  fmt.Sprintf(`\frac{31.50\,\unit{µH/m} \cdot %s^2 \cdot %d^2}{6 \cdot %s + 9 \cdot %s + 10 \cdot %s}`, Paren(Q(a, "m", 4)), n, Q(a, "m", 4), Q(b, "m", 4), Q(cb, "m", 4)),
+				Result:   Q(lw, "H", 4)})
+		}
+	}
+	if co.Form == calc.Pair {
+		sign, word := "+", "aiding"
+		if co.Opposing {
+			sign, word = "-", "opposing"
+		}
+		add(Step{What: fmt.Sprintf("Mutual inductance of the two coils %s apart, every pair of turns by Maxwell's formula", Eng(co.Spacing, "m", 3)),
+			Symbolic: `M = \sum_{i} \sum_{j} M(r_i, r_j, s + z_j - z_i)`, Result: Q(M, "H", 4)})
+		add(Step{What: fmt.Sprintf("Self-inductance of the pair, its two coils in series, %s", word),
+			Symbolic: `L = 2 L_1 ` + sign + ` 2 M`,
+			Numbers:  fmt.Sprintf(`2 \cdot %s %s 2 \cdot %s`, Q(L1, "H", 4), sign, Q(M, "H", 4)), Result: Q(cr.Inductance, "H", 4)})
+	}
+	return steps
+}
+
+// switchingSteps derive the time constant, rise time, energy, the
+// unsuppressed switch-off voltage and the suppression figures.
+func switchingSteps(co calc.Coil, cr calc.CoilResult) []Step {
+	s := cr.Switch
+	L, R, I := Q(cr.Inductance, "H", 4), Q(cr.RHot, "Ω", 4), Q(math.Abs(cr.Current), "A", 4)
+	var steps []Step
+	if math.IsNaN(s.TimeConstant) {
+		return nil
+	}
+	supply := "the stated supply voltage"
+	if co.Drive == calc.CurrentDrive {
+		supply = "I·R, the least compliance voltage of the current source"
+	}
+	steps = append(steps,
+		Step{What: "Electrical time constant at the hot resistance", Symbolic: `\tau = \frac{L}{R}`,
+			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, L, R), Result: Q(s.TimeConstant, "s", 3)},
+		Step{What: "Rise time to 90 % of the final current after a voltage step, i(t) = I (1 − e^(−t/τ))", Symbolic: `t_{90} = \tau \ln 10`,
+			Numbers: fmt.Sprintf(`%s \cdot \ln 10`, Q(s.TimeConstant, "s", 3)), Result: Q(s.RiseTime, "s", 3)},
+		Step{What: "Magnetic energy stored at full current", Symbolic: `W = \frac{1}{2} L I^2`,
+			Numbers: fmt.Sprintf(`\frac{1}{2} \cdot %s \cdot %s^2`, L, Paren(I)), Result: Q(s.Energy, "J", 3)})
+	if s.SwitchOff > 0 {
+		steps = append(steps, Step{What: fmt.Sprintf("Voltage across a switch that opens in %s with no suppression: the coil's L·di/dt on top of the supply Vₛ (%s)", Eng(s.SwitchOff, "s", 3), supply),
+			Symbolic: `V_{sw} = \frac{L I}{t_{\mathrm{off}}} + V_s`,
+			Numbers:  fmt.Sprintf(`\frac{%s \cdot %s}{%s} + %s`, L, I, Q(s.SwitchOff, "s", 3), Q(s.Supply, "V", 3)),
+			Result:   Q(s.Spike, "V", 3)})
+	}
+	steps = append(steps, Step{What: "Freewheeling diode across the coil: the switch sees about the supply; the current decays through the coil's own resistance to 10 %",
+		Symbolic: `t_{10} = \frac{L}{R} \ln 10`, Numbers: fmt.Sprintf(`%s \cdot \ln 10`, Q(s.DiodeDecay, "s", 3)), Result: Q(s.DiodeTime10, "s", 3)})
+	if !math.IsNaN(s.Resistor) {
+		vmax := "twice the supply, as no driver rating is stated"
+		if s.ClampFromRating {
+			vmax = "the stated driver rating"
+		}
+		steps = append(steps,
+			Step{What: fmt.Sprintf("Diode with a series resistor Rₛ: the resistor that holds the switch at %s (%s)", Eng(s.Clamp, "V", 3), vmax),
+				Symbolic: `R_s = \frac{V_{\mathrm{max}} - V_s}{I}`,
+				Numbers:  fmt.Sprintf(`\frac{%s - %s}{%s}`, Q(s.Clamp, "V", 3), Q(s.Supply, "V", 3), I), Result: Q(s.Resistor, "Ω", 3)},
+			Step{What: "Decay to 10 % through the resistor and diode", Symbolic: `t_{10} = \frac{L}{R + R_s} \ln 10`,
+				Numbers: fmt.Sprintf(`\frac{%s}{%s + %s} \ln 10`, L, R, Q(s.Resistor, "Ω", 3)), Result: Q(s.ResistorTime10, "s", 3)},
+			Step{What: "Energy the resistor absorbs at each switch-off (the rest is spent in the coil's own resistance)", Symbolic: `W_{R_s} = W \frac{R_s}{R + R_s}`,
+				Numbers: fmt.Sprintf(`%s \cdot \frac{%s}{%s + %s}`, Q(s.Energy, "J", 3), Q(s.Resistor, "Ω", 3), R, Q(s.Resistor, "Ω", 3)), Result: Q(s.ResistorEnergy, "J", 3)})
+	}
+	return steps
+}
+
+// suppressionText is the suggested suppression in words.
+func suppressionText(co calc.Coil, cr calc.CoilResult) string {
+	s := cr.Switch
+	var b strings.Builder
+	if s.SwitchOff > 0 {
+		fmt.Fprintf(&b, "Unsuppressed, a switch opening in %s would see about %s. ", Eng(s.SwitchOff, "s", 3), Eng(s.Spike, "V", 3))
+	} else {
+		b.WriteString("No switch-off time is stated (switch-off), so the unsuppressed spike is not estimated; it is L·I/t for a switch opening in t. ")
+	}
+	fmt.Fprintf(&b, "Suggested suppression: a freewheeling diode across the coil rated for at least %s continuous, which keeps the switch near the %s supply and lets the current decay to 10 %% in %s",
+		Eng(math.Abs(cr.Current), "A", 3), Eng(s.Supply, "V", 3), Eng(s.DiodeTime10, "s", 3))
+	switch {
+	case !math.IsNaN(s.Resistor):
+		fmt.Fprintf(&b, "; where a faster release matters, a resistor of at most %s in series with the diode shortens the decay to %s while keeping the switch within %s (the diode drop of about 0.7 V is neglected).",
+			Eng(s.Resistor, "Ω", 3), Eng(s.ResistorTime10, "s", 3), Eng(s.Clamp, "V", 3))
+	case math.IsNaN(s.Clamp):
+		b.WriteString(". A resistor in series with the diode would speed the decay; state the driver's voltage rating (driver-rating) to size it.")
+	default:
+		b.WriteString(".")
+	}
+	return b.String()
+}
+
+// acSteps derive the figures at the drive frequency.
+func acSteps(co calc.Coil, cr calc.CoilResult) []Step {
+	a := cr.AC
+	f := Q(a.Frequency, "Hz", 4)
+	steps := []Step{
+		{What: "Reactance at the drive frequency", Symbolic: `X = 2 \pi f L`,
+			Numbers: fmt.Sprintf(`2\pi \cdot %s \cdot %s`, f, Q(cr.Inductance, "H", 4)), Result: Q(a.Reactance, "Ω", 4)},
+		{What: "Impedance of the series R–L model (d.c. resistance at the winding temperature)", Symbolic: `|Z| = \sqrt{R^2 + X^2}`,
+			Numbers: fmt.Sprintf(`\sqrt{%s^2 + %s^2}`, Paren(Q(cr.RHot, "Ω", 4)), Paren(Q(a.Reactance, "Ω", 4))), Result: Q(a.Impedance, "Ω", 4)},
+	}
+	if co.Drive == calc.VoltageDrive {
+		steps = append(steps, Step{What: "Current at the stated (rms) voltage", Symbolic: `I_{ac} = \frac{V}{|Z|}`,
+			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(a.Voltage, "V", 4), Q(a.Impedance, "Ω", 4)), Result: Q(a.Current, "A", 4)})
+	} else {
+		steps = append(steps, Step{What: "Voltage needed for the stated (rms) current", Symbolic: `V_{ac} = I |Z|`,
+			Numbers: fmt.Sprintf(`%s \cdot %s`, Q(a.Current, "A", 4), Q(a.Impedance, "Ω", 4)), Result: Q(a.Voltage, "V", 4)})
+	}
+	rho := co.Wire.Material.Rho20 * cr.RHot / cr.R20
+	steps = append(steps, Step{What: fmt.Sprintf("Skin depth in %s at the winding temperature (Jackson, Classical Electrodynamics, §8.1), against the wire radius %s", co.Wire.Material.Name, Eng(a.WireRadius, "m", 3)),
+		Symbolic: `\delta = \sqrt{\frac{\rho}{\pi f \mu_0}}`,
+		Numbers:  fmt.Sprintf(`\sqrt{\frac{%s}{\pi \cdot %s \cdot \mu_0}}`, Q(rho, "Ω·m", 4), f), Result: Q(a.SkinDepth, "m", 3)})
+	return steps
+}
+
+// acText says where the d.c. model stops holding at the drive frequency.
+func acText(co calc.Coil, cr calc.CoilResult) string {
+	a := cr.AC
+	var b strings.Builder
+	ratio := a.Reactance / cr.RHot
+	if a.Reactive {
+		fmt.Fprintf(&b, "At %s the reactance is %s times the resistance: it is not negligible, and the current follows the impedance, not the resistance alone; the d.c. figures of this memo (current, moment, field, heating) do not hold at this frequency. ",
+			Eng(a.Frequency, "Hz", 3), Sig(ratio, 2))
+	} else {
+		fmt.Fprintf(&b, "At %s the reactance is only %s of the resistance, so the d.c. figures hold to within about half a per cent. ", Eng(a.Frequency, "Hz", 3), Sig(ratio, 2))
+	}
+	if a.SkinLimited {
+		fmt.Fprintf(&b, "The skin depth %s is less than the wire radius %s: the current crowds to the wire's surface and the a.c. resistance exceeds the d.c. value (in a multilayer winding the proximity effect of neighbouring turns raises it further), so the losses are higher than computed here. ",
+			Eng(a.SkinDepth, "m", 3), Eng(a.WireRadius, "m", 3))
+	} else {
+		fmt.Fprintf(&b, "The skin depth %s exceeds the wire radius %s, so the skin effect in a single wire is small; the proximity effect of neighbouring turns is not assessed. ",
+			Eng(a.SkinDepth, "m", 3), Eng(a.WireRadius, "m", 3))
+	}
+	b.WriteString("The series R–L model leaves out the winding's capacitance and holds only well below its self-resonant frequency, which is not computed here.")
+	return b.String()
+}
+
+// couplings reports the mutual inductance and force of every pair of coil
+// blocks.
+func (c *composer) couplings() {
+	d := c.j.Spec.Design
+	r := c.j.Results
+	if len(r.Couplings) == 0 {
+		return
+	}
+	c.heading(2, "Between the coils")
+	c.para(templates.Text("couplings", nil))
+	var rows [][]doc.Cell
+	anyCoaxial := false
+	for _, cp := range r.Couplings {
+		a, b := d.Coils[cp.A], d.Coils[cp.B]
+		arr := "not coaxial"
+		M, k := "n/a (not coaxial)", "—"
+		F := "n/a"
+		method := "dipole approximation"
+		switch {
+		case cp.Overlap:
+			arr, M, method = "coaxial, turns coincide", "n/a (windings overlap)", "—"
+		case cp.Coaxial:
+			anyCoaxial = true
+			arr = "coaxial"
+			M = Eng(cp.Mutual, "H", 4)
+			k = Sig(cp.K, 3)
+			method = "exact, I₁I₂ ∂M/∂z"
+		}
+		if !cp.Force.IsNaN() && !cp.Overlap {
+			F = forceText(cp, a, b)
+		}
+		rows = append(rows, []doc.Cell{{Text: a.Name + " → " + b.Name}, {Text: arr}, {Text: Eng(cp.Distance, "m", 3)},
+			{Text: M}, {Text: k}, {Text: F}, {Text: method}})
+	}
+	c.add(doc.Table{Caption: "Mutual inductance and force between the coils (force on the second coil, from the first, at the operating currents)",
+		Header: []string{"Coils", "Arrangement", "Centres apart", "Mutual inductance", "Coupling k", "Force", "Method"},
+		Rows:   rows, Widths: []float64{1.6, 1.1, 0.9, 1.2, 0.8, 1.6, 1.3},
+		Align: []doc.Align{doc.Left, doc.Left, doc.Right, doc.Right, doc.Right, doc.Left, doc.Left}})
+	if anyCoaxial {
+		c.derive(
+			Step{What: "Mutual inductance of two coaxial windings: Maxwell's formula for every pair of turns (radii rᵢ, rⱼ, planes zⱼ − zᵢ apart), with the senses of the currents",
+				Symbolic: `M = \sum_{i} \sum_{j} \mu_0 \sqrt{r_i r_j} \left[ \left( \frac{2}{k} - k \right) K(k^2) - \frac{2}{k} E(k^2) \right]`},
+			Step{What: "Axial force on the second winding at constant currents: the derivative of the co-energy ½L₁I₁² + ½L₂I₂² + M I₁I₂ with its position",
+				Symbolic: `F_z = I_1 I_2 \frac{\partial M}{\partial z}`})
+	}
+}
+
+// forceText writes the force on coil b from coil a: its size and whether
+// it pulls b towards a or pushes it away.
+func forceText(cp calc.Coupling, a, b calc.Coil) string {
+	mag := cp.Force.Norm()
+	if mag == 0 {
+		return "0 N"
+	}
+	sep := b.Centre.Sub(a.Centre)
+	if sep.Norm() == 0 {
+		return Eng(mag, "N", 3)
+	}
+	along := cp.Force.Dot(sep.Unit())
+	word := "towards"
+	if along > 0 {
+		word = "away from"
+	}
+	if math.Abs(along) < 0.01*mag {
+		return Eng(mag, "N", 3) + ", across the line of centres"
+	}
+	return fmt.Sprintf("%s, %s the first", Eng(mag, "N", 3), word)
+}
+
+// gradientForce reports the force on each moment in the stated gradient.
+func (c *composer) gradientForce() {
+	d := c.j.Spec.Design
+	r := c.j.Results
+	G := d.Conditions.FieldGradient
+	if !(G > 0) {
+		return
+	}
+	c.heading(2, "Force in the stated field gradient")
+	c.para(fmt.Sprintf("The background field is stated to have a gradient of %s. A moment m feels the force F = ∇(m·B) (Jackson, Classical Electrodynamics, eq. 5.69); with the field component along the moment changing at G along the moment, F = m·G. It is the largest such force when G is the largest rate of change of that component in any direction.",
+		Eng(G, "T/m", 3)))
+	for i, co := range d.Coils {
+		if i >= len(r.Coils) {
+			break
+		}
+		cr := r.Coils[i]
+		c.derive(Step{What: fmt.Sprintf("Force on the moment of coil %q", co.Name), Symbolic: `F = m G`,
+			Numbers: fmt.Sprintf(`%s \cdot %s`, Q(cr.Moment.Norm(), "A·m²", 4), Q(G, "T/m", 3)), Result: Q(cr.GradientForce, "N", 3)})
+	}
+	if len(r.Coils) > 1 {
+		c.derive(Step{What: "Force on the total moment of all coils", Symbolic: `F = |\vec{m}| G`,
+			Numbers: fmt.Sprintf(`%s \cdot %s`, Q(r.Moment.Norm(), "A·m²", 4), Q(G, "T/m", 3)), Result: Q(r.GradientForce, "N", 3)})
+	}
+}
+
+// roundWireCheck verifies a single-layer coil's inductance — Lorenz's
+// current sheet less Rosa's round-wire correction — against the
+// independent sum over every pair of turn filaments (Maxwell's formula,
+// each turn's own round-wire inductance). Rosa's correction neglects the
+// curvature of the turns; on test coils with pitches up to a tenth of the
+// radius the two agree to a few parts in 10⁴, so 0.5 % is allowed.
+func roundWireCheck(c calc.Coil, cr calc.CoilResult) []Check {
+	w := cr.Winding
+	if c.Form != calc.Solenoid || c.RadialBuild > 0 || w.Thin || w.LayerCount != 1 || math.IsNaN(cr.Inductance) || !(c.Wire.Bare > 0) {
+		return nil
+	}
+	L1 := calc.RoundWireSolenoidInductance(c.MeanDiameter/2, c.Length, c.Turns, c.Wire.Bare)
+	return []Check{newCheck(c.Name, "single-layer inductance", "Lorenz–Nagaoka current sheet less Rosa's round-wire correction",
+		"sum over every pair of turns (Maxwell's formula; turn self-inductance of round wire)", L1, calc.TurnSumInductance(w, c.Wire.Bare/2), "H", 0.005)}
+}
+
+// electricalCautions are the switch-off caution with its numbers and, at a
+// drive frequency, the caution where the d.c. model stops holding.
+func electricalCautions(co calc.Coil, cr calc.CoilResult, name string) []doc.Callout {
+	var out []doc.Callout
+	s := cr.Switch
+	// The spike at the stated switch-off time, or at 1 µs (a fast
+	// semiconductor switch) when none is stated; a caution when it passes
+	// the extra-low-voltage bound or the driver's rating.
+	tOff, assumed := s.SwitchOff, false
+	if !(tOff > 0) {
+		tOff, assumed = 1e-6, true
+	}
+	spikeV := s.Energy*2/math.Abs(cr.Current)/tOff + s.Supply
+	bound := ELV
+	if s.ClampFromRating {
+		bound = math.Min(bound, s.Clamp)
+	}
+	if e := s.Energy; !math.IsNaN(e) && e > 0 && spikeV > bound {
+		spike := fmt.Sprintf("No switch-off time is stated; a semiconductor switch opening in about 1 µs with no suppression would see about %s.", Eng(spikeV, "V", 3))
+		if !assumed {
+			spike = fmt.Sprintf("A switch that opens in %s with no suppression would see about %s.", Eng(s.SwitchOff, "s", 3), Eng(s.Spike, "V", 3))
+		}
+		diode := fmt.Sprintf("A freewheeling diode across the coil, rated for at least %s, keeps the switch near the %s supply; the current then decays to 10 %% in %s.",
+			Eng(math.Abs(cr.Current), "A", 3), Eng(s.Supply, "V", 3), Eng(s.DiodeTime10, "s", 3))
+		resistor := ""
+		if math.IsNaN(s.Clamp) {
+			resistor = "A resistor in series with the diode speeds the decay; state the driver's voltage rating to size it."
+		}
+		if !math.IsNaN(s.Resistor) {
+			resistor = fmt.Sprintf("For a faster release, a resistor of at most %s in series with the diode keeps the switch within %s and shortens the decay to %s.",
+				Eng(s.Resistor, "Ω", 3), Eng(s.Clamp, "V", 3), Eng(s.ResistorTime10, "s", 3))
+		}
+		out = append(out, doc.Callout{Severity: doc.Caution, Title: "Switch-off voltage, " + name,
+			Spans: []doc.Span{{Text: templates.Text("caution-inductive", map[string]string{
+				"Energy": Eng(e, "J", 3), "Spike": spike, "Diode": diode, "Resistor": resistor})}}})
+	}
+	if a := cr.AC; a.Frequency > 0 && (a.Reactive || a.SkinLimited) {
+		var why []string
+		if a.Reactive {
+			why = append(why, fmt.Sprintf("the reactance (%s) is %s times the resistance, so the current follows the impedance (%s at the stated drive)",
+				Eng(a.Reactance, "Ω", 3), Sig(a.Reactance/cr.RHot, 2), Eng(a.Current, "A", 3)))
+		}
+		if a.SkinLimited {
+			why = append(why, fmt.Sprintf("the skin depth (%s) is less than the wire radius (%s), so the a.c. resistance and the losses exceed the d.c. values", Eng(a.SkinDepth, "m", 3), Eng(a.WireRadius, "m", 3)))
+		}
+		out = append(out, doc.Callout{Severity: doc.Caution, Title: "A.c. drive, " + name,
+			Spans: []doc.Span{{Text: templates.Text("caution-ac", map[string]string{"Frequency": Eng(a.Frequency, "Hz", 3), "Why": strings.Join(why, "; and ")})}}})
+	}
+	return out
+}
+
+// CoilHeatSwitch holds a coil's heating, switching and a.c. keys of the
+// JSON report (embedded in CoilReport; keys only ever added). Null where a
+// figure does not apply: switch_off_voltage_V without switch-off,
+// skin_depth_m, impedance_ohm and current_ac_A without frequency, force_N
+// without field-gradient, pair_force_N for anything but a pair,
+// time_to_limit_s when the class is never reached, cycle figures without
+// on-time.
+type CoilHeatSwitch struct {
+	SurfaceTemperature Num `json:"surface_temperature_C"`
+	MeanTemperature    Num `json:"mean_temperature_C"`
+	TimeToLimit        Num `json:"time_to_limit_s"`
+	CyclePeak          Num `json:"cycle_peak_C"`
+	CycleTrough        Num `json:"cycle_trough_C"`
+	MomentCold         Num `json:"moment_cold_A_m2"`
+	HeatCapacity       Num `json:"heat_capacity_J_K"`
+	TimeConstant       Num `json:"time_constant_s"`
+	RiseTime           Num `json:"rise_time_s"`
+	Energy             Num `json:"energy_J"`
+	SwitchOffVoltage   Num `json:"switch_off_voltage_V"`
+	SuppressionR       Num `json:"suppression_resistor_ohm"`
+	SkinDepth          Num `json:"skin_depth_m"`
+	Impedance          Num `json:"impedance_ohm"`
+	CurrentAC          Num `json:"current_ac_A"`
+	Force              Num `json:"force_N"`
+	PairForce          Num `json:"pair_force_N"`
+}
+
+func coilHeatSwitch(co calc.Coil, cr calc.CoilResult) CoilHeatSwitch {
+	h, s, a := cr.Heat, cr.Switch, cr.AC
+	pair := math.NaN()
+	if co.Form == calc.Pair {
+		pair = cr.PairForce
+	}
+	return CoilHeatSwitch{
+		SurfaceTemperature: Num(Celsius(h.Steady.Surface)), MeanTemperature: Num(Celsius(h.Steady.Mean)),
+		TimeToLimit: Num(h.TimeToLimit), CyclePeak: Num(Celsius(h.Cycle.PeakHot)), CycleTrough: Num(Celsius(h.Cycle.Trough)),
+		MomentCold: Num(h.ColdMoment), HeatCapacity: Num(h.HeatCapacity),
+		TimeConstant: Num(s.TimeConstant), RiseTime: Num(s.RiseTime), Energy: Num(s.Energy),
+		SwitchOffVoltage: Num(s.Spike), SuppressionR: Num(s.Resistor),
+		SkinDepth: Num(a.SkinDepth), Impedance: Num(a.Impedance), CurrentAC: Num(a.Current),
+		Force: Num(cr.GradientForce), PairForce: Num(pair),
+	}
+}
+
+// Interactions holds the design's coupling keys of the JSON report
+// (embedded in Report).
+type Interactions struct {
+	Couplings     []CouplingReport `json:"couplings"`
+	GradientForce Num              `json:"gradient_force_N"`
+}
+
+// CouplingReport is the mutual inductance of two coil blocks and the force
+// on the second from the first; the mutual inductance is null unless they
+// are coaxial, force_method says "coaxial" (exact) or "dipole" (far-field
+// approximation).
+type CouplingReport struct {
+	Coils       [2]string `json:"coils"`
+	Coaxial     bool      `json:"coaxial"`
+	Mutual      Num       `json:"mutual_inductance_H"`
+	K           Num       `json:"coupling_coefficient"`
+	Force       [3]Num    `json:"force_N"`
+	ForceMethod string    `json:"force_method"`
+}
+
+func interactions(d calc.Design, r calc.Results) Interactions {
+	out := Interactions{Couplings: []CouplingReport{}, GradientForce: Num(r.GradientForce)}
+	for _, cp := range r.Couplings {
+		m := "dipole"
+		if cp.Exact {
+			m = "coaxial"
+		}
+		out.Couplings = append(out.Couplings, CouplingReport{Coils: [2]string{d.Coils[cp.A].Name, d.Coils[cp.B].Name},
+			Coaxial: cp.Coaxial, Mutual: Num(cp.Mutual), K: Num(cp.K), Force: vec(cp.Force), ForceMethod: m})
+	}
+	return out
+}

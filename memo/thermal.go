@@ -1,0 +1,614 @@
+package memo
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"coilmemo/calc"
+	"coilmemo/figures"
+	"coilmemo/memo/doc"
+	"coilmemo/templates"
+)
+
+// heating is the section "Heating": the thermal model, then coil by coil
+// the heat balance at the winding surface (convection by its correlation,
+// radiation, the mount), the rise inside the winding to its hottest point,
+// the margin to the insulation class, the warm-up from cold with the time
+// to reach the class, the periodic state of an on/off cycle, and a table
+// of the thermal results.
+func (c *composer) heating() {
+	d := c.j.Spec.Design
+	r := c.j.Results
+	if len(r.Coils) == 0 {
+		return
+	}
+	c.heading(1, "Heating")
+	cool := calc.EffectiveCooling(d.Conditions.Cooling)
+	var env string
+	switch {
+	case cool.Vacuum:
+		mount := "No mount resistance is stated, so no heat is taken to be conducted to the structure, which errs on the hot side."
+		if d.Conditions.MountResistance > 0 {
+			mount = "It also conducts heat to its mount, as stated below."
+		}
+		env = templates.Text("heating-vacuum", map[string]string{"Emissivity": Sig(cool.Emissivity, 2), "Mount": mount})
+	case cool.HGiven:
+		env = templates.Text("heating-given-h", map[string]string{"H": Eng(cool.H, "W/(m²·K)", 3), "Emissivity": Sig(cool.Emissivity, 2)})
+	default:
+		orient := "horizontal"
+		if d.Conditions.AxisVertical {
+			orient = "vertical"
+		}
+		env = templates.Text("heating-still-air", map[string]string{"Emissivity": Sig(cool.Emissivity, 2), "Orientation": orient,
+			"RaMax": "10¹²", "Table": calc.AirTableSource})
+	}
+	c.para(env)
+	if R := d.Conditions.MountResistance; R > 0 {
+		c.para(fmt.Sprintf("Each coil is also taken to conduct heat to a mount held at the ambient temperature through a thermal resistance of %s, as stated.", Eng(R, "K/W", 3)))
+	}
+	c.para(templates.Text("heating-model", nil))
+	for i, co := range d.Coils {
+		if i >= len(r.Coils) {
+			break
+		}
+		cr := r.Coils[i]
+		if !(cr.R20 > 0) || math.IsInf(cr.R20, 0) {
+			continue
+		}
+		c.heading(2, fmt.Sprintf("Coil %q", co.Name))
+		c.derive(heatSteps(co, cr, d.Conditions)...)
+		if p := warmUpText(co, cr); p != "" {
+			c.para(p)
+		}
+		c.warmUpFigure(co, cr)
+	}
+	c.add(c.thermalTable())
+}
+
+// heatSteps derive one coil block's steady thermal state.
+func heatSteps(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) []Step {
+	h := cr.Heat
+	tp := h.Problem
+	st := h.Steady
+	w := cr.Winding
+	var steps []Step
+	add := func(s ...Step) { steps = append(steps, s...) }
+	series := calc.SeriesCoils(co)
+	two := ""
+	if series == 2 {
+		two = `2 \cdot `
+	}
+	outer := co.Wire.Outer
+	if !(outer > 0) {
+		outer = co.Wire.Bare
+	}
+	ri, ro, length := calc.RiseGeometry(co, w)
+	switch {
+	case w.Thin:
+		db := calc.BundleDiameter(outer, w.TurnCount())
+		add(Step{What: "Heat-shedding surface: the tube of the round winding bundle along the mean turn",
+			Symbolic: `A_s = ` + two + `\pi d_b \ell_t`,
+			Numbers:  fmt.Sprintf(`%s\pi \cdot %s \cdot %s`, two, Q(db, "m", 4), Q(w.MeanTurn, "m", 4)), Result: Q(tp.Area, "m²", 4)})
+	case w.LayerCount <= 1 && co.RadialBuild <= 0:
+		add(Step{What: "Heat-shedding surface: the outer cylinder of the winding (the bore sits on the former)",
+			Symbolic: `A_s = ` + two + `\pi D_o \ell`,
+			Numbers:  fmt.Sprintf(`%s\pi \cdot %s \cdot %s`, two, Q(2*ro, "m", 4), Q(co.Length, "m", 4)), Result: Q(tp.Area, "m²", 4)})
+	default:
+		add(Step{What: "Heat-shedding surface: the outer cylinder and both end faces of the winding (the bore sits on the former)",
+			Symbolic: `A_s = ` + two + `\left[ \pi D_o \ell + 2\pi \left( r_o^2 - r_i^2 \right) \right]`,
+			Numbers: fmt.Sprintf(`%s\left[ \pi \cdot %s \cdot %s + 2\pi \left( %s^2 - %s^2 \right) \right]`, two, Q(2*ro, "m", 4), Q(length, "m", 4),
+				Paren(Q(ro, "m", 4)), Paren(Q(ri, "m", 4))),
+			Result: Q(tp.Area, "m²", 4)})
+	}
+	if !st.Settled {
+		add(Step{What: "Steady heat balance: no solution — the heat generated outgrows the heat shed at every temperature up to " + Eng(Celsius(calc.TempSearchMax), "°C", 3),
+			Symbolic: `\delta P(T) = Q_{\mathrm{out}}(T_s)`, Result: Words("no steady state")})
+		return steps
+	}
+	Ts, Ta := st.Surface, tp.Ambient
+	if nc := tp.Convection; nc != nil {
+		cs := st.Convection
+		nu, k, pr, _ := calc.AirProperties(cs.Film)
+		shape := "horizontal cylinder of diameter"
+		if nc.Shape == calc.VerticalSurface {
+			shape = "vertical surface of height"
+		}
+		add(Step{What: "Film temperature, at which the air's properties are taken", Symbolic: `T_f = \frac{T_s + T_a}{2}`,
+			Numbers: fmt.Sprintf(`\frac{%s + %s}{2}`, Q(Ts, "K", 5), Q(Ta, "K", 5)), Result: Q(cs.Film, "K", 5)})
+		add(Step{What: "Air at the film temperature (" + calc.AirTableSource + ", interpolated); for an ideal gas β is the reciprocal of the film temperature; α = ν/Pr",
+			Symbolic: fmt.Sprintf(`\nu = %s,\quad k_a = %s,\quad \mathrm{Pr} = %s`, sciQ(nu, "m²/s", 4), Q(k, "W/(m·K)", 3), N(pr, 3))})
+		add(Step{What: fmt.Sprintf("Rayleigh number on the %s L = %s (g = 9.80665 m/s²)", shape, Eng(nc.Length, "m", 3)),
+			Symbolic: `\mathrm{Ra} = \frac{g \beta (T_s - T_a) L^3}{\nu \alpha}`,
+			Numbers: fmt.Sprintf(`\frac{9.807 \cdot %s^{-1} \cdot %s \cdot %s^3}{%s \cdot %s}`, Paren(Q(cs.Film, "K", 5)), Q(Ts-Ta, "K", 4), Paren(Q(nc.Length, "m", 4)),
+				sciQ(nu, "m²/s", 4), sciQ(nu/pr, "m²/s", 4)),
+			Result: N(cs.Ra, 4)})
+		if nc.Shape == calc.VerticalSurface {
+			add(Step{What: "Nusselt number of a vertical surface in free convection (Churchill & Chu, Int. J. Heat Mass Transfer 18, 1975, 1323; laminar and turbulent range)",
+				Symbolic: `\mathrm{Nu} = \left\{ 0.825 + \frac{0.387\, \mathrm{Ra}^{1/6}}{\left[ 1 + (0.492/\mathrm{Pr})^{9/16} \right]^{8/27}} \right\}^2`,
+				Numbers:  fmt.Sprintf(`\left\{ 0.825 + \frac{0.387 \cdot %s^{1/6}}{\left[ 1 + (0.492/%s)^{9/16} \right]^{8/27}} \right\}^2`, Paren(N(cs.Ra, 4)), N(pr, 3)),
+				Result:   N(cs.Nu, 4)})
+		} else {
+			add(Step{What: "Nusselt number of a horizontal cylinder in free convection (Churchill & Chu, Int. J. Heat Mass Transfer 18, 1975, 1049; for Ra ≤ 10¹²)",
+				Symbolic: `\mathrm{Nu} = \left\{ 0.60 + \frac{0.387\, \mathrm{Ra}^{1/6}}{\left[ 1 + (0.559/\mathrm{Pr})^{9/16} \right]^{8/27}} \right\}^2`,
+				Numbers:  fmt.Sprintf(`\left\{ 0.60 + \frac{0.387 \cdot %s^{1/6}}{\left[ 1 + (0.559/%s)^{9/16} \right]^{8/27}} \right\}^2`, Paren(N(cs.Ra, 4)), N(pr, 3)),
+				Result:   N(cs.Nu, 4)})
+		}
+		add(Step{What: "Convective heat-transfer coefficient", Symbolic: `h = \frac{\mathrm{Nu}\, k_a}{L}`,
+			Numbers: fmt.Sprintf(`\frac{%s \cdot %s}{%s}`, N(cs.Nu, 4), Q(k, "W/(m·K)", 3), Q(nc.Length, "m", 4)), Result: Q(cs.H, "W/(m²·K)", 3)})
+	}
+	hval := tp.ConvectionCoefficient(Ts)
+	var parts []string
+	var nums []string
+	if !calc.EffectiveCooling(cond.Cooling).Vacuum {
+		add(Step{What: "Heat carried away by convection", Symbolic: `Q_c = h A_s (T_s - T_a)`,
+			Numbers: fmt.Sprintf(`%s \cdot %s \cdot %s`, Q(hval, "W/(m²·K)", 3), Q(tp.Area, "m²", 4), Q(Ts-Ta, "K", 4)), Result: Q(st.Convected, "W", 4)})
+		parts, nums = append(parts, "Q_c"), append(nums, Q(st.Convected, "W", 4))
+	}
+	add(Step{What: fmt.Sprintf("Heat radiated to surroundings at the ambient temperature, emissivity %s (Stefan–Boltzmann law)", Sig(tp.Emissivity, 2)),
+		Symbolic: `Q_r = \varepsilon \sigma A_s \left( T_s^4 - T_a^4 \right)`,
+		Numbers: fmt.Sprintf(`%s \cdot \sigma \cdot %s \left( %s^4 - %s^4 \right)`, N(tp.Emissivity, 2), Q(tp.Area, "m²", 4),
+			Paren(Q(Ts, "K", 5)), Paren(Q(Ta, "K", 5))),
+		Result: Q(st.Radiated, "W", 4)})
+	parts, nums = append(parts, "Q_r"), append(nums, Q(st.Radiated, "W", 4))
+	if tp.Mount > 0 {
+		add(Step{What: "Heat conducted to the mount", Symbolic: `Q_m = \frac{T_s - T_a}{R_m}`,
+			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(Ts-Ta, "K", 4), Q(float64(series)/tp.Mount, "K/W", 3)), Result: Q(st.Mounted, "W", 4)})
+		parts, nums = append(parts, "Q_m"), append(nums, Q(st.Mounted, "W", 4))
+	}
+	what := "Steady state: the surface temperature T_s at which the heat shed equals the duty-averaged heat generated (solved numerically, with the resistance at the winding's mean temperature)"
+	add(Step{What: what, Symbolic: `\bar{P} = ` + strings.Join(parts, " + "),
+		Numbers: strings.Join(nums, " + "), Result: Q(st.Power, "W", 4)})
+	add(Step{What: "Surface temperature at the steady state", Symbolic: `T_s`, Result: Q(Celsius(Ts), "°C", 4)})
+	// Inside the winding.
+	kw := h.Conductivity
+	src := "as stated"
+	if co.WindingConductivity <= 0 {
+		src = "common practice for round enamelled wire without impregnation, no published source"
+	}
+	pc := st.Power / float64(series)
+	q := pc / (math.Pi * (ro*ro - ri*ri) * length)
+	each := ""
+	if series == 2 {
+		each = " (each coil of the pair carries half the power)"
+	}
+	if ri > 0 {
+		add(Step{What: "Heat generated per unit volume of the winding" + each, Symbolic: `q = \frac{\bar{P}}{\pi \left( r_o^2 - r_i^2 \right) \ell}`,
+			Numbers: fmt.Sprintf(`\frac{%s}{\pi \left( %s^2 - %s^2 \right) \cdot %s}`, Q(pc, "W", 4), Paren(Q(ro, "m", 4)), Paren(Q(ri, "m", 4)), Q(length, "m", 4)),
+			Result:  Q(q, "W/m³", 3)})
+	} else {
+		add(Step{What: "Heat generated per unit volume of the round bundle along the mean turn" + each, Symbolic: `q = \frac{\bar{P}}{\pi r_b^2 \ell_t}`,
+			Numbers: fmt.Sprintf(`\frac{%s}{\pi \cdot %s^2 \cdot %s}`, Q(pc, "W", 4), Paren(Q(ro, "m", 4)), Q(length, "m", 4)),
+			Result:  Q(q, "W/m³", 3)})
+	}
+	rise := st.HotSpot - st.Surface
+	if ri > 0 {
+		add(Step{What: fmt.Sprintf("Rise of the hottest point (at the bore) above the surface: radial conduction out through the outer cylinder, bore and ends taken as adiabatic, effective conductivity across the turns %s (%s)", Eng(kw, "W/(m·K)", 2), src),
+			Symbolic: `\Delta T_{\mathrm{max}} = \frac{q}{4 k_w} \left[ r_o^2 - r_i^2 - 2 r_i^2 \ln\frac{r_o}{r_i} \right]`,
+			Numbers: fmt.Sprintf(`\frac{%s}{4 \cdot %s} \left[ %s^2 - %s^2 - 2 \cdot %s^2 \ln\frac{%s}{%s} \right]`, Q(q, "W/m³", 4), Q(kw, "W/(m·K)", 2),
+				Paren(Q(ro, "m", 4)), Paren(Q(ri, "m", 4)), Paren(Q(ri, "m", 4)), Q(ro, "m", 4), Q(ri, "m", 4)),
+			Result: Q(rise, "K", 3)})
+	} else {
+		add(Step{What: fmt.Sprintf("Rise of the hottest point (the bundle's centre) above its surface: radial conduction in a round bundle, effective conductivity across the turns %s (%s)", Eng(kw, "W/(m·K)", 2), src),
+			Symbolic: `\Delta T_{\mathrm{max}} = \frac{q r_b^2}{4 k_w}`,
+			Numbers:  fmt.Sprintf(`\frac{%s \cdot %s^2}{4 \cdot %s}`, Q(q, "W/m³", 4), Paren(Q(ro, "m", 4)), Q(kw, "W/(m·K)", 2)),
+			Result:   Q(rise, "K", 3)})
+	}
+	add(Step{What: "Hottest winding temperature at the steady state", Symbolic: `T_{\mathrm{max}} = T_s + \Delta T_{\mathrm{max}}`,
+		Numbers: fmt.Sprintf(`%s + %s`, Q(Celsius(Ts), "°C", 4), Q(rise, "K", 3)), Result: Q(Celsius(st.HotSpot), "°C", 4)})
+	if co.InsulationClass > 0 {
+		margin := co.InsulationClass - st.HotSpot
+		add(Step{What: "Margin to the insulation thermal class (IEC 60085)", Symbolic: `T_{\mathrm{class}} - T_{\mathrm{max}}`,
+			Numbers: fmt.Sprintf(`%s - %s`, Q(Celsius(co.InsulationClass), "°C", 4), Q(Celsius(st.HotSpot), "°C", 4)), Result: Q(margin, "K", 3)})
+	}
+	if co.Drive == calc.VoltageDrive && h.ColdMoment > 0 {
+		add(Step{What: "Voltage drive limits itself: the current, and with it the moment, falls as the winding warms. Moment when cold (at the 20 °C current)",
+			Symbolic: `m_{20} = m \frac{I_{20}}{I}`,
+			Numbers:  fmt.Sprintf(`%s \cdot \frac{%s}{%s}`, Q(cr.Moment.Norm(), "A·m²", 4), Q(cr.ColdCurrent, "A", 4), Q(cr.Current, "A", 4)),
+			Result:   Q(h.ColdMoment, "A·m²", 4)})
+		add(Step{What: "Moment lost to heating", Symbolic: `1 - \frac{m}{m_{20}}`,
+			Numbers: fmt.Sprintf(`1 - \frac{%s}{%s}`, Q(cr.Moment.Norm(), "A·m²", 4), Q(h.ColdMoment, "A·m²", 4)), Result: Q(100*(1-cr.Moment.Norm()/h.ColdMoment), "%", 3)})
+	}
+	// Warm-up.
+	mat := co.Wire.Material
+	former := ""
+	fnum := ""
+	if fc := co.Former.Capacity(); fc > 0 {
+		former = ` + ` + two + `C_f`
+		fnum = ` + ` + two + Q(fc, "J/K", 3)
+	}
+	conductor := Q(w.Mass, "kg", 3)
+	if series == 2 {
+		conductor = `2 \cdot ` + conductor
+	}
+	add(Step{What: fmt.Sprintf("Heat capacity of the winding (specific heat of %s %s, %s)%s", mat.Name, Eng(mat.SpecificHeat, "J/(kg·K)", 3), specificHeatSource(mat), formerWords(co)),
+		Symbolic: `C = m_c c_p` + former,
+		Numbers:  fmt.Sprintf(`%s \cdot %s%s`, conductor, Q(mat.SpecificHeat, "J/(kg·K)", 3), fnum), Result: Q(h.HeatCapacity, "J/K", 3)})
+	if !math.IsNaN(cr.ThermalTau) {
+		add(Step{What: "Thermal time constant of the approach to the steady state (the heat balance linearised there)",
+			Symbolic: `\tau_{th} = \frac{C}{d(Q_{\mathrm{out}} - \bar{P})/dT}`, Result: durationQ(cr.ThermalTau)})
+	}
+	return steps
+}
+
+func specificHeatSource(m calc.Material) string {
+	return "CRC Handbook of Chemistry and Physics, recalled"
+}
+
+func formerWords(co calc.Coil) string {
+	f := co.Former
+	switch {
+	case f.HeatCapacity > 0:
+		return fmt.Sprintf(", with the former's stated heat capacity of %s", Eng(f.HeatCapacity, "J/K", 3))
+	case f.Mass > 0:
+		src := ""
+		if m, ok := calc.FormerMaterialByName(f.Material); ok {
+			src = "; " + m.Source
+		}
+		return fmt.Sprintf(", with the former: %s of %s at %s%s", Eng(f.Mass, "kg", 3), formerName(f.Material), Eng(f.SpecificHeat, "J/(kg·K)", 3), src)
+	}
+	return ""
+}
+
+// sciQ writes a quantity whose unit takes no prefix (m²/s: a prefix would
+// apply to the metre, squared) as a mantissa times a power of ten.
+func sciQ(v float64, unit string, sig int) string {
+	if math.IsNaN(v) || v == 0 {
+		return Q(v, unit, sig)
+	}
+	e := int(math.Floor(math.Log10(math.Abs(v))))
+	return fmt.Sprintf(`%s \times 10^{%d}\,\unit{%s}`, N(v/math.Pow(10, float64(e)), sig), e, unitNotation(unit))
+}
+
+// formerName writes a former material as the trade does: PEEK, PTFE,
+// FR-4, stainless steel.
+func formerName(m string) string {
+	switch m {
+	case "peek", "ptfe":
+		return strings.ToUpper(m)
+	case "fr4":
+		return "FR-4"
+	case "stainless-steel":
+		return "stainless steel"
+	}
+	return m
+}
+
+// duration writes a time in s, min or h as suits it.
+func duration(t float64) string {
+	switch {
+	case math.IsNaN(t):
+		return "n/a"
+	case t >= 2*3600:
+		return Sig(t/3600, 3) + " h"
+	case t >= 120:
+		return Sig(t/60, 3) + " min"
+	}
+	return Eng(t, "s", 3)
+}
+
+// durationQ is duration in the notation.
+func durationQ(t float64) string {
+	switch {
+	case math.IsNaN(t):
+		return `\text{n/a}`
+	case t >= 2*3600:
+		return N(t/3600, 3) + `\,\unit{h}`
+	case t >= 120:
+		return N(t/60, 3) + `\,\unit{min}`
+	}
+	return Q(t, "s", 3)
+}
+
+// warmUpText says how the coil warms from cold: the time to reach its
+// insulation class when energised continuously, and the periodic state
+// of its on/off cycle.
+func warmUpText(co calc.Coil, cr calc.CoilResult) string {
+	h := cr.Heat
+	var b strings.Builder
+	if co.InsulationClass > 0 {
+		class := Eng(Celsius(co.InsulationClass), "°C", 3)
+		if !math.IsNaN(h.TimeToLimit) {
+			fmt.Fprintf(&b, "Energised continuously from the ambient temperature, the hottest point of the winding reaches the insulation class of %s after %s (the lumped heat balance integrated in time). ",
+				class, duration(h.TimeToLimit))
+		} else {
+			fmt.Fprintf(&b, "Energised continuously, the winding never reaches its insulation class of %s: its steady hottest point stays below it. ", class)
+		}
+	}
+	if co.Former.Capacity() <= 0 {
+		b.WriteString("No former is stated, so the warm-up counts the conductor alone and runs somewhat faster than the coil as built will. ")
+	}
+	if cy := h.Cycle; cy.On > 0 {
+		if cy.Settled {
+			fmt.Fprintf(&b, "On the stated duty cycle — on for %s, off for %s, repeated — the winding settles into a periodic state whose hottest point peaks at %s at the end of each on period and cools to %s at the end of each off period",
+				duration(cy.On), duration(cy.Off), Eng(Celsius(cy.PeakHot), "°C", 3), Eng(Celsius(cy.Trough), "°C", 3))
+			if !math.IsNaN(cy.Periods) {
+				fmt.Fprintf(&b, "; from cold it takes some %s periods to get there", Sig(math.Max(cy.Periods, 1), 2))
+			}
+			b.WriteString(". The peak, not the duty-averaged steady state, is the temperature compared with the insulation class and the requirements.")
+		} else {
+			fmt.Fprintf(&b, "On the stated duty cycle (on for %s, off for %s) no periodic state exists below %s: the winding heats up cycle after cycle.",
+				duration(cy.On), duration(cy.Off), Eng(Celsius(calc.TempSearchMax), "°C", 3))
+		}
+	} else if co.Duty > 0 && co.Duty < 1 {
+		fmt.Fprintf(&b, "The duty cycle of %s %% enters as the average power, which holds when each on period is short against the thermal time constant of %s; give on-time for the peak of a slower cycle.",
+			Sig(100*co.Duty, 3), duration(cr.ThermalTau))
+	}
+	return strings.TrimSpace(b.String())
+}
+
+// warmUpFigure plots the warm-up from cold: energised continuously, and on
+// the duty cycle when an on-time is given.
+func (c *composer) warmUpFigure(co calc.Coil, cr calc.CoilResult) {
+	h := cr.Heat
+	tp := h.Problem
+	C := h.HeatCapacity
+	if !(C > 0) {
+		return
+	}
+	on := tp
+	on.Duty = 1
+	steady := on.Steady()
+	tau := math.NaN()
+	if steady.Settled {
+		tau = on.ThermalTimeConstant(C, steady.Mean)
+	}
+	tEnd := 5 * tau
+	if !math.IsNaN(h.TimeToLimit) {
+		if math.IsNaN(tEnd) || tEnd < 1.3*h.TimeToLimit {
+			tEnd = 1.3 * h.TimeToLimit
+		}
+		if steady.Settled {
+			tEnd = math.Max(tEnd, math.Min(5*tau, 3*h.TimeToLimit))
+		}
+	}
+	if !(tEnd > 0) || math.IsInf(tEnd, 0) {
+		return
+	}
+	t, _, hot := on.WarmUpCurve(C, tEnd, 0)
+	curves := []figures.Curve{{Name: "energised continuously", T: t, Y: celsiusAll(hot)}}
+	var levels []figures.Level
+	top := hot[len(hot)-1]
+	for _, v := range hot {
+		top = math.Max(top, v)
+	}
+	farBelow := false
+	if co.InsulationClass > 0 {
+		// The class is drawn unless it lies so far above the curve that the
+		// curve would be squashed flat; the caption then says where it is.
+		if co.InsulationClass-tp.Ambient <= 3*(top-tp.Ambient) {
+			levels = append(levels, figures.Level{Y: Celsius(co.InsulationClass), Label: "insulation class " + Eng(Celsius(co.InsulationClass), "°C", 3)})
+		} else {
+			farBelow = true
+		}
+	}
+	if steady.Settled && (co.InsulationClass <= 0 || steady.HotSpot < co.InsulationClass*1.5) {
+		levels = append(levels, figures.Level{Y: Celsius(steady.HotSpot), Label: "steady, continuous: " + Eng(Celsius(steady.HotSpot), "°C", 3)})
+	}
+	cy := h.Cycle
+	caption := fmt.Sprintf("Warm-up of coil %q from %s: hottest winding temperature against time when energised continuously", co.Name, Eng(Celsius(tp.Ambient), "°C", 3))
+	summary := fmt.Sprintf("Continuous: %s after %s.", Eng(Celsius(hot[len(hot)-1]), "°C", 3), duration(t[len(t)-1]))
+	if cy.On > 0 && cy.Settled {
+		period := cy.On + cy.Off
+		if tEnd/period <= 150 {
+			ct, _, chot := tp.WarmUpCurve(C, tEnd, cy.On)
+			curves = append(curves, figures.Curve{Name: "on/off cycle", T: ct, Y: celsiusAll(chot)})
+			caption += fmt.Sprintf(", and on the duty cycle (on %s, off %s)", duration(cy.On), duration(cy.Off))
+		} else {
+			levels = append(levels, figures.Level{Y: Celsius(cy.PeakHot), Label: "steady, cycle peak: " + Eng(Celsius(cy.PeakHot), "°C", 3)})
+			caption += "; the periodic peak of the duty cycle, whose periods are too short to draw, as a level"
+		}
+		summary += fmt.Sprintf(" Cycle peak %s.", Eng(Celsius(cy.PeakHot), "°C", 3))
+	}
+	switch {
+	case farBelow:
+		caption += fmt.Sprintf("; dotted: steady states (the insulation class, %s, lies far above)", Eng(Celsius(co.InsulationClass), "°C", 3))
+	case len(levels) > 0:
+		caption += "; dashed: insulation class, dotted: steady states"
+	}
+	n := c.figure + 1
+	c.para(fmt.Sprintf("Figure %d shows the warm-up of coil %q.", n, co.Name))
+	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight * 0.85,
+		Draw: figures.WarmUp(curves, levels...), Summary: summary})
+}
+
+func celsiusAll(k []float64) []float64 {
+	out := make([]float64, len(k))
+	for i, v := range k {
+		out[i] = Celsius(v)
+	}
+	return out
+}
+
+// thermalTable lists the thermal results of every coil.
+func (c *composer) thermalTable() doc.Table {
+	d := c.j.Spec.Design
+	r := c.j.Results
+	head := []string{"Result"}
+	for _, cr := range r.Coils {
+		head = append(head, cr.Name)
+	}
+	row := func(name string, f func(co calc.Coil, cr calc.CoilResult) string) []doc.Cell {
+		cells := []doc.Cell{{Text: name}}
+		for i, cr := range r.Coils {
+			cells = append(cells, doc.Cell{Text: f(d.Coils[i], cr)})
+		}
+		return cells
+	}
+	temp := func(v float64) string { return Eng(Celsius(v), "°C", 3) }
+	cool := calc.EffectiveCooling(d.Conditions.Cooling)
+	rows := [][]doc.Cell{
+		row("Cooling", func(co calc.Coil, cr calc.CoilResult) string {
+			tp := cr.Heat.Problem
+			s := "radiation"
+			switch {
+			case cool.Vacuum:
+			case tp.Convection != nil:
+				s = fmt.Sprintf("natural convection, h = %s; radiation", Eng(cr.Heat.Steady.Convection.H, "W/(m²·K)", 3))
+			default:
+				s = fmt.Sprintf("h = %s (stated); radiation", Eng(tp.H, "W/(m²·K)", 3))
+			}
+			if tp.Mount > 0 {
+				s += "; mount"
+			}
+			return s
+		}),
+		row("Heat shed: convection / radiation / mount", func(co calc.Coil, cr calc.CoilResult) string {
+			s := cr.Heat.Steady
+			return Eng(s.Convected, "W", 3) + " / " + Eng(s.Radiated, "W", 3) + " / " + Eng(s.Mounted, "W", 3)
+		}),
+		row("Surface temperature", func(co calc.Coil, cr calc.CoilResult) string { return temp(cr.Heat.Steady.Surface) }),
+		row("Mean winding temperature", func(co calc.Coil, cr calc.CoilResult) string { return temp(cr.Heat.Steady.Mean) }),
+		row("Hottest point, duty-averaged steady state", func(co calc.Coil, cr calc.CoilResult) string { return temp(cr.Heat.Steady.HotSpot) }),
+	}
+	anyCycle := false
+	for _, cr := range r.Coils {
+		anyCycle = anyCycle || cr.Heat.Cycle.On > 0
+	}
+	if anyCycle {
+		rows = append(rows, row("Duty cycle: peak / trough", func(co calc.Coil, cr calc.CoilResult) string {
+			cy := cr.Heat.Cycle
+			if !(cy.On > 0) {
+				return "—"
+			}
+			if !cy.Settled {
+				return "no periodic state"
+			}
+			return temp(cy.PeakHot) + " / " + temp(cy.Trough)
+		}))
+	}
+	rows = append(rows,
+		row("Insulation class / margin", func(co calc.Coil, cr calc.CoilResult) string {
+			if co.InsulationClass <= 0 {
+				return "—"
+			}
+			m := "runaway"
+			if !math.IsNaN(cr.InsulationMargin) {
+				m = Eng(cr.InsulationMargin, "K", 3)
+			}
+			return temp(co.InsulationClass) + " / " + m
+		}),
+		row("Time to the class, energised continuously", func(co calc.Coil, cr calc.CoilResult) string {
+			if math.IsNaN(cr.Heat.TimeToLimit) {
+				return "not reached"
+			}
+			return duration(cr.Heat.TimeToLimit)
+		}),
+		row("Thermal time constant / heat capacity", func(co calc.Coil, cr calc.CoilResult) string {
+			return duration(cr.ThermalTau) + " / " + Eng(cr.Heat.HeatCapacity, "J/K", 3)
+		}),
+		row("Current density (common practice, still air, continuous: 2–4 A/mm²)", func(co calc.Coil, cr calc.CoilResult) string {
+			return Eng(math.Abs(cr.Density), "A/m²", 3)
+		}),
+	)
+	anyVoltage := false
+	for _, co := range d.Coils {
+		anyVoltage = anyVoltage || co.Drive == calc.VoltageDrive
+	}
+	if anyVoltage {
+		rows = append(rows, row("Moment hot / cold (voltage drive)", func(co calc.Coil, cr calc.CoilResult) string {
+			if co.Drive != calc.VoltageDrive {
+				return "—"
+			}
+			return Eng(cr.Moment.Norm(), "A·m²", 3) + " / " + Eng(cr.Heat.ColdMoment, "A·m²", 3)
+		}))
+	}
+	align := []doc.Align{doc.Left}
+	widths := []float64{2.4}
+	for range r.Coils {
+		align = append(align, doc.Right)
+		widths = append(widths, 1.6)
+	}
+	return doc.Table{Caption: "Thermal results at the steady operating point", Header: head, Rows: rows, Align: align, Widths: widths}
+}
+
+// heatBalanceCheck verifies the steady thermal state: the heat generated
+// (duty-averaged, at the resistance of the mean temperature) against the
+// heat shed by convection, radiation and the mount at the surface
+// temperature, each recomputed from its own law.
+func heatBalanceCheck(c calc.Coil, cr calc.CoilResult) []Check {
+	st := cr.Heat.Steady
+	tp := cr.Heat.Problem
+	if !st.Settled || !(st.Power > 0) {
+		return nil
+	}
+	ta, ts := tp.Ambient, st.Surface
+	out := tp.ConvectionCoefficient(ts)*tp.Area*(ts-ta) + tp.Emissivity*calc.StefanBoltzmann*tp.Area*(ts*ts*ts*ts-ta*ta*ta*ta) + tp.Mount*(ts-ta)
+	in := calc.Duty(c) * cr.Current * cr.Current * cr.RHot
+	return []Check{newCheck(c.Name, "steady heat balance", "heat generated, duty × I²·R(T)",
+		"heat shed: h·A·ΔT + ε·σ·A·(Tₛ⁴ − Tₐ⁴) + ΔT/Rₘ at the surface temperature", in, out, "W", 1e-9)}
+}
+
+// runawayText is the runaway caution with this coil's numbers.
+func runawayText(co calc.Coil, cr calc.CoilResult) string {
+	st := cr.Heat.Steady
+	cy := cr.Heat.Cycle
+	class := "its insulation class"
+	if co.InsulationClass > 0 {
+		class = "its insulation class of " + Eng(Celsius(co.InsulationClass), "°C", 3)
+	}
+	var where string
+	switch {
+	case cy.On > 0 && !cy.Settled:
+		where = "On the stated duty cycle no periodic state exists: the winding heats up cycle after cycle."
+	case cy.On > 0 && cy.PeakHot > co.InsulationClass && st.Settled && st.HotSpot <= co.InsulationClass:
+		where = fmt.Sprintf("On the stated duty cycle the periodic peak of the hottest point reaches %s.", Eng(Celsius(cy.PeakHot), "°C", 3))
+	case st.Settled:
+		where = fmt.Sprintf("The heat balance closes only at %s at the hottest point, far beyond what the insulation survives.", Eng(Celsius(st.HotSpot), "°C", 3))
+	default:
+		where = fmt.Sprintf("The heat balance does not close at any temperature below %s.", Eng(Celsius(calc.TempSearchMax), "°C", 3))
+	}
+	return templates.Text("caution-runaway", map[string]string{"Class": class, "Where": where, "Time": classTimeText(cr)})
+}
+
+// classTimeText says how soon a continuously energised coil reaches its
+// insulation class, as a sentence, or "" when it never does.
+func classTimeText(cr calc.CoilResult) string {
+	t := cr.Heat.TimeToLimit
+	if math.IsNaN(t) {
+		return ""
+	}
+	return fmt.Sprintf("Energised continuously from cold, the hottest point of the winding reaches the class after %s.", duration(t))
+}
+
+// surfaceTemperature is the hottest surface temperature: the steady one,
+// or at the end of an on period of the duty cycle, whichever is hotter.
+func surfaceTemperature(cr calc.CoilResult) float64 {
+	st := cr.Heat.Steady
+	ts := st.Surface
+	if cy := cr.Heat.Cycle; cy.On > 0 && cy.Settled {
+		tp := cr.Heat.Problem
+		ts = math.Max(ts, tp.Surface(cy.PeakMean, tp.PowerOn(cy.PeakMean)))
+	}
+	return ts
+}
+
+// densityNote notes a current density above the common-practice figure for
+// continuous duty in still air, or returns "".
+func densityNote(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) string {
+	J := math.Abs(cr.Density)
+	// Only where the coil also runs warm: a small coil sheds its heat
+	// easily and the rule of thumb is conservative for it.
+	if !(J > calc.PracticeDensity) || calc.Duty(co) < 1 || !(co.InsulationClass-cr.Temperature < 50) {
+		return ""
+	}
+	return templates.Text("caution-density", map[string]string{"Density": Eng(J, "A/m²", 3),
+		"Temperature": Eng(Celsius(cr.Temperature), "°C", 3)})
+}
+
+// leftOnText is the caution for a coil that is within its class on its
+// duty cycle but would pass it if left energised, or "".
+func leftOnText(co calc.Coil, cr calc.CoilResult) string {
+	h := cr.Heat
+	if cr.Runaway || calc.Duty(co) >= 1 || math.IsNaN(h.TimeToLimit) || !(cr.Temperature <= co.InsulationClass) {
+		return ""
+	}
+	on := h.Problem
+	on.Duty = 1
+	settle := "would not settle below it"
+	if s := on.Steady(); s.Settled {
+		settle = "would settle at " + Eng(Celsius(s.HotSpot), "°C", 3)
+	}
+	return templates.Text("caution-left-on", map[string]string{"Duty": Sig(100*calc.Duty(co), 3) + " %",
+		"Class": Eng(Celsius(co.InsulationClass), "°C", 3), "Time": duration(h.TimeToLimit), "Settle": settle})
+}
