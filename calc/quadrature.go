@@ -2,7 +2,6 @@ package calc
 
 import (
 	"math"
-	"math/cmplx"
 	"sort"
 	"sync"
 
@@ -185,18 +184,20 @@ func newPanel(l *lattice, i0, nr, j0, nz int) *panel {
 
 // order returns the least number of nodes n with ϱ^(−2n) ≤ eps for a
 // singularity at x + i·d seen from the interval [lo, hi], or math.MaxInt
-// when the point lies on the interval.
+// when the point lies on the interval. ϱ = a + √(a² − 1), with a the
+// semi-major axis of the ellipse with foci at the interval's ends through
+// the singularity (in half-widths): the mean of its distances from the two
+// ends.
 func order(lo, hi, x, d, eps float64) int {
 	h := (hi - lo) / 2
 	if h == 0 {
 		return 1
 	}
-	zeta := complex((x-(lo+hi)/2)/h, d/h)
-	s := cmplx.Sqrt(zeta*zeta - 1)
-	rho := math.Max(cmplx.Abs(zeta+s), cmplx.Abs(zeta-s))
-	if !(rho > 1+1e-12) {
+	a := (math.Hypot(x-lo, d) + math.Hypot(x-hi, d)) / (2 * h)
+	if !(a > 1+1e-12) {
 		return math.MaxInt
 	}
+	rho := a + math.Sqrt(a*a-1)
 	n := math.Ceil(math.Log(1/eps) / (2 * math.Log(rho)))
 	if n > 1e6 {
 		return math.MaxInt
