@@ -124,6 +124,9 @@ func ChurchillChuPlate(ra, pr float64) float64 {
 type NaturalConvection struct {
 	Shape  ConvectionShape
 	Length float64
+	// Ring is set when the cylinder is the section of a ring-shaped
+	// winding (a tube bent round the coil's axis), not the coil's outside.
+	Ring bool
 }
 
 // ConvectionState is the convection at one surface temperature.

@@ -106,11 +106,14 @@ func WindingConductivity(c Coil) float64 {
 // ConvectionFor returns the natural-convection model of the outer shape of
 // coil c with winding w: a thin coil (and a rectangle) is the tube of its
 // round bundle, a horizontal cylinder of the bundle diameter whatever the
-// axis; a single- or multilayer coil is a horizontal cylinder of its outer
+// axis; a ring — a winding whose section (length and radial build) is small
+// against its mean diameter, under a quarter of it — likewise a tube, of
+// the diameter 2(ℓ + b)/π whose perimeter equals the section's; any other
+// single- or multilayer coil is a horizontal cylinder of its outer
 // diameter when its axis is horizontal, and a vertical surface as high as
 // its winding length when the axis is vertical (Conditions.AxisVertical).
-// The one correlation is applied to the coil's whole heat-shedding surface.
-// Nil when the data are missing.
+// The one correlation is applied to the coil's whole heat-shedding
+// surface. Nil when the data are missing.
 func ConvectionFor(c Coil, w Winding, cond Conditions) *NaturalConvection {
 	outer := c.Wire.Outer
 	if !(outer > 0) {
@@ -123,21 +126,17 @@ func ConvectionFor(c Coil, w Winding, cond Conditions) *NaturalConvection {
 	if w.Thin {
 		return &NaturalConvection{Shape: HorizontalCylinder, Length: BundleDiameter(outer, n)}
 	}
+	ri, ro, l := RiseGeometry(c, w)
+	if b := ro - ri; math.Max(l, b) < c.MeanDiameter/4 {
+		return &NaturalConvection{Shape: HorizontalCylinder, Length: 2 * (l + b) / math.Pi, Ring: true}
+	}
 	if cond.AxisVertical {
-		l := c.Length
-		if !(l > 0) {
-			l = outer
-		}
 		return &NaturalConvection{Shape: VerticalSurface, Length: l}
 	}
-	d := c.MeanDiameter + outer
-	if w.LayerCount > 1 || c.RadialBuild > 0 {
-		d = 2 * (w.Layers[0].Radius - outer/2 + math.Max(c.RadialBuild, float64(w.LayerCount)*outer))
-	}
-	if !(d > 0) {
+	if !(ro > 0) {
 		return nil
 	}
-	return &NaturalConvection{Shape: HorizontalCylinder, Length: d}
+	return &NaturalConvection{Shape: HorizontalCylinder, Length: 2 * ro}
 }
 
 // OperatingPoint returns the steady state of coil block c: the thermal

@@ -277,3 +277,29 @@ func TestInternalRiseLags(t *testing.T) {
 		}
 	}
 }
+
+func TestConvectionShapes(t *testing.T) {
+	w30 := Wire{Bare: 0.45e-3, Outer: 0.5e-3, Material: Copper()}
+	// Thin coil: the round bundle.
+	thin := Coil{Form: Loop, MeanDiameter: 0.08, Turns: 100, Wire: w30}
+	if nc := ConvectionFor(thin, LayOut(thin), Conditions{}); nc.Shape != HorizontalCylinder || nc.Length != BundleDiameter(0.5e-3, 100) {
+		t.Errorf("thin: %+v", nc)
+	}
+	// A ring: 10 × 5 mm section on 300 mm, a tube of the same perimeter.
+	ring := Coil{Form: Solenoid, MeanDiameter: 0.3, Length: 0.01, RadialBuild: 0.005, Turns: 200, Wire: w30}
+	nc := ConvectionFor(ring, LayOut(ring), Conditions{})
+	if !nc.Ring || math.Abs(nc.Length-2*(0.01+0.005)/math.Pi) > 1e-12 {
+		t.Errorf("ring: %+v", nc)
+	}
+	// A compact solenoid: its outer diameter, or its length with the axis
+	// vertical.
+	sol := Coil{Form: Solenoid, MeanDiameter: 0.03, Length: 0.04, RadialBuild: 0.005, Turns: 400, Wire: w30}
+	ws := LayOut(sol)
+	_, ro, _ := RiseGeometry(sol, ws)
+	if nc := ConvectionFor(sol, ws, Conditions{}); nc.Ring || nc.Shape != HorizontalCylinder || nc.Length != 2*ro {
+		t.Errorf("solenoid: %+v", nc)
+	}
+	if nc := ConvectionFor(sol, ws, Conditions{AxisVertical: true}); nc.Shape != VerticalSurface || nc.Length != 0.04 {
+		t.Errorf("vertical solenoid: %+v", nc)
+	}
+}

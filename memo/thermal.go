@@ -111,13 +111,19 @@ func heatSteps(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) []Step {
 		cs := st.Convection
 		nu, k, pr, _ := calc.AirProperties(cs.Film)
 		shape := "horizontal cylinder of diameter"
-		if nc.Shape == calc.VerticalSurface {
+		switch {
+		case nc.Shape == calc.VerticalSurface:
 			shape = "vertical surface of height"
+		case nc.Ring:
+			shape = "ring-shaped winding, a tube whose perimeter equals the winding section's, diameter"
+		case w.Thin:
+			shape = "round winding bundle, a tube of diameter"
 		}
 		add(Step{What: "Film temperature, at which the air's properties are taken", Symbolic: `T_f = \frac{T_s + T_a}{2}`,
 			Numbers: fmt.Sprintf(`\frac{%s + %s}{2}`, Q(Ts, "K", 5), Q(Ta, "K", 5)), Result: Q(cs.Film, "K", 5)})
-		add(Step{What: "Air at the film temperature (" + calc.AirTableSource + ", interpolated); for an ideal gas β is the reciprocal of the film temperature; α = ν/Pr",
-			Symbolic: fmt.Sprintf(`\nu = %s,\quad k_a = %s,\quad \mathrm{Pr} = %s`, sciQ(nu, "m²/s", 4), Q(k, "W/(m·K)", 3), N(pr, 3))})
+		add(Step{What: fmt.Sprintf("Air at the film temperature (%s, interpolated): kinematic viscosity ν = %s×10⁻⁵ m²/s, thermal conductivity kₐ = %s, Prandtl number Pr = %s; the expansion coefficient of an ideal gas and the thermal diffusivity",
+			calc.AirTableSource, Sig(nu*1e5, 4), Eng(k, "W/(m·K)", 3), Sig(pr, 3)),
+			Symbolic: `\beta = \frac{1}{T_f},\qquad \alpha = \frac{\nu}{\mathrm{Pr}}`})
 		add(Step{What: fmt.Sprintf("Rayleigh number on the %s L = %s (g = 9.80665 m/s²)", shape, Eng(nc.Length, "m", 3)),
 			Symbolic: `\mathrm{Ra} = \frac{g \beta (T_s - T_a) L^3}{\nu \alpha}`,
 			Numbers: fmt.Sprintf(`\frac{9.807 \cdot %s^{-1} \cdot %s \cdot %s^3}{%s \cdot %s}`, Paren(Q(cs.Film, "K", 5)), Q(Ts-Ta, "K", 4), Paren(Q(nc.Length, "m", 4)),
