@@ -295,7 +295,8 @@ func (c *composer) method() {
 }
 
 // coilSteps derives one coil block's results: wire and winding, resistance,
-// temperature and operating point, moment, field and inductance.
+// temperature and operating point, moment and field (the inductance and the
+// heat balance follow in sections of their own).
 func coilSteps(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) []Step {
 	w := cr.Winding
 	mat := co.Wire.Material
@@ -367,7 +368,7 @@ func coilSteps(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) []Step {
 		Symbolic: `R_{20} = \frac{\rho_{20}\, \ell_w}{A}`,
 		Numbers:  fmt.Sprintf(`\frac{%s \cdot %s}{%s}`, Q(mat.Rho20, "Ω·m", 5), Q(cr.Length, "m", 4), Q(A, "m²", 4)),
 		Result:   Q(cr.R20, "Ω", 4)})
-	add(thermalSteps(co, cr, cond)...)
+	add(thermalSteps(co, cr)...)
 	if !cr.Runaway && !math.IsNaN(cr.RHot) {
 		// the temperature the resistance was taken at (the winding's mean)
 		T := 20 + (cr.RHot/cr.R20-1)/mat.Alpha20
@@ -395,47 +396,22 @@ func coilSteps(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) []Step {
 	add(Step{What: "Current density in the conductor", Symbolic: `J = \frac{I}{A}`,
 		Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(cr.Current, "A", 4), Q(A, "m²", 4)), Result: Q(cr.Density, "A/m²", 3)})
 	add(momentSteps(co, cr)...)
-	if !math.IsNaN(cr.Inductance) {
-		add(Step{What: inductanceWhat(co, w), Symbolic: inductanceRelation(co, w), Result: Q(cr.Inductance, "H", 3)})
-	}
+	// The inductance is derived in the Inductance and switching section.
 	return steps
 }
 
-// thermalSteps solve the steady-state heat balance for the winding's mean
-// temperature T (the one its resistance follows), at surface temperature
-// T_s, and give the hottest point where the winding is thick enough for
-// it to differ.
-func thermalSteps(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) []Step {
-	tp := calc.ThermalFor(co, cr.Winding, cond)
-	cool := calc.EffectiveCooling(cond.Cooling)
-	s := Step{What: "Steady winding temperature: the heat generated leaves the winding surface Aₛ by convection and radiation (solved numerically)",
-		Symbolic: `\delta\, P(T) = h A_s (T_s - T_a) + \varepsilon \sigma A_s \left( T_s^4 - T_a^4 \right)`, Solve: "T"}
-	Ta := Q(tp.Ambient, "K", 5)
-	conv := ""
-	switch {
-	case cool.Vacuum:
-		s.What = "Steady winding temperature in vacuum: the heat generated is radiated from the winding surface Aₛ (solved numerically)"
-		s.Symbolic = `\delta\, P(T) = \varepsilon \sigma A_s \left( T_s^4 - T_a^4 \right)`
-	case cond.Cooling.HGiven:
-		conv = fmt.Sprintf(`%s \cdot %s \left(T_s - %s\right) + `, Q(tp.H, "W/(m²·K)", 3), Q(tp.Area, "m²", 4), Ta)
-	default:
-		conv = fmt.Sprintf(`h(T_s) \cdot %s \left(T_s - %s\right) + `, Q(tp.Area, "m²", 4), Ta)
-	}
-	s.Numbers = fmt.Sprintf(`\delta\, P(T) = %s%s \cdot \sigma \cdot %s \left(T_s^4 - %s^4\right)`,
-		conv, N(tp.Emissivity, 2), Q(tp.Area, "m²", 4), Paren(Ta))
+// thermalSteps give the steady mean winding temperature that the
+// resistance follows. The heat balance that yields it is derived step by
+// step in the Heating section; here it enters the chain of derivation.
+func thermalSteps(co calc.Coil, cr calc.CoilResult) []Step {
 	if cr.Runaway || math.IsNaN(cr.RHot) {
-		s.Result = Words("no steady state: thermal runaway")
-		return []Step{s}
+		return []Step{{What: "Steady winding temperature: none exists, the winding runs away thermally (see the Heating and Safety sections)",
+			Symbolic: `T = ` + Words("no steady state")}}
 	}
 	// The mean temperature is the one the hot resistance was taken at.
 	mean := 20 + (cr.RHot/cr.R20-1)/co.Wire.Material.Alpha20
-	s.Result = Q(mean, "°C", 3)
-	steps := []Step{s}
-	if hot := Celsius(cr.Temperature); math.Abs(hot-mean) >= 0.05 {
-		steps = append(steps, Step{What: "Hottest point of the winding: heat conducted out across the turns",
-			Symbolic: `T_{\mathrm{max}} = ` + Q(hot, "°C", 3)})
-	}
-	return steps
+	return []Step{{What: "Steady mean winding temperature, from the heat balance of the winding's surface derived in the Heating section",
+		Symbolic: `T = ` + Q(mean, "°C", 3)}}
 }
 
 // momentSteps derive the magnetic moment and the field at the centre.
@@ -483,26 +459,3 @@ func momentSteps(co calc.Coil, cr calc.CoilResult) []Step {
 	return steps
 }
 
-func inductanceWhat(co calc.Coil, w calc.Winding) string {
-	switch {
-	case co.Form == calc.Rectangle:
-		return "Self-inductance of N rectangular turns bundled together: N² times one turn's, from the partial inductances of its four sides"
-	case co.Form == calc.Solenoid && co.RadialBuild == 0:
-		return "Self-inductance of a single-layer coil: Lorenz's current sheet with Nagaoka's coefficient, less Rosa's round-wire correction (A, B)"
-	case w.Thin:
-		return "Self-inductance of a thin circular coil whose winding is a round bundle"
-	}
-	return "Self-inductance: self and mutual inductances of every pair of turn filaments (Maxwell), summed"
-}
-
-func inductanceRelation(co calc.Coil, w calc.Winding) string {
-	switch {
-	case co.Form == calc.Rectangle:
-		return `L = N^2 L_1`
-	case co.Form == calc.Solenoid && co.RadialBuild == 0:
-		return `L = \frac{\mu_0 \pi a^2 N^2 k_N}{\ell} - \mu_0 a N (A + B)`
-	case w.Thin:
-		return `L = \mu_0 N^2 a \left[ \ln\frac{8a}{r_b} - \frac{7}{4} \right]`
-	}
-	return `L = \sum_i \sum_j M_{ij}`
-}
