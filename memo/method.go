@@ -458,4 +458,3 @@ func momentSteps(co calc.Coil, cr calc.CoilResult) []Step {
 	}
 	return steps
 }
-
