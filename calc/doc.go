@@ -24,7 +24,13 @@
 //	rectinductance.go rectangle of round wire
 //	turnsum.go        turn-by-turn inductance sums; CoilInductance
 //	cells.go          coarse-grained sums for very large windings
-//	thermal.go        steady temperature, runaway, warm-up
+//	thermal.go        steady temperature, runaway, hot spot inside the winding
+//	convection.go     natural convection (Churchill–Chu), air properties
+//	warmup.go         warm-up, time to a limit, periodic on/off state, former
+//	heating.go        a coil's thermal detail for Evaluate
+//	switching.go      L/R, rise time, switch-off spike, suppression
+//	skin.go           skin depth, a.c. figures
+//	coupling.go       mutual inductance and forces between coil blocks
 //	operating.go      a coil block's electrical operating point
 //	evaluate.go       Evaluate
 //	limits.go         requirement checks

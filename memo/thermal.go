@@ -3,6 +3,7 @@ package memo
 import (
 	"fmt"
 	"math"
+	"strconv"
 	"strings"
 
 	"coilmemo/calc"
@@ -331,14 +332,14 @@ func warmUpText(co calc.Coil, cr calc.CoilResult) string {
 			if !math.IsNaN(cy.Periods) {
 				fmt.Fprintf(&b, "; from cold it takes some %s periods to get there", Sig(math.Max(cy.Periods, 1), 2))
 			}
-			b.WriteString(". The peak, not the duty-averaged steady state, is the temperature compared with the insulation class and the requirements.")
+			b.WriteString(". The hotter of this peak and the duty-averaged steady state is the temperature compared with the insulation class and the requirements.")
 		} else {
 			fmt.Fprintf(&b, "On the stated duty cycle (on for %s, off for %s) no periodic state exists below %s: the winding heats up cycle after cycle.",
 				duration(cy.On), duration(cy.Off), Eng(Celsius(calc.TempSearchMax), "°C", 3))
 		}
 	} else if co.Duty > 0 && co.Duty < 1 {
 		fmt.Fprintf(&b, "The duty cycle of %s %% enters as the average power, which holds when each on period is short against the thermal time constant of %s; give on-time for the peak of a slower cycle.",
-			Sig(100*co.Duty, 3), duration(cr.ThermalTau))
+			strconv.FormatFloat(100*co.Duty, 'g', 3, 64), duration(cr.ThermalTau))
 	}
 	return strings.TrimSpace(b.String())
 }
@@ -615,6 +616,6 @@ func leftOnText(co calc.Coil, cr calc.CoilResult) string {
 	if s := on.Steady(); s.Settled {
 		settle = "would settle at " + Eng(Celsius(s.HotSpot), "°C", 3)
 	}
-	return templates.Text("caution-left-on", map[string]string{"Duty": Sig(100*calc.Duty(co), 3) + " %",
+	return templates.Text("caution-left-on", map[string]string{"Duty": strconv.FormatFloat(100*calc.Duty(co), 'g', 3, 64) + " %",
 		"Class": Eng(Celsius(co.InsulationClass), "°C", 3), "Time": duration(h.TimeToLimit), "Settle": settle})
 }
