@@ -177,6 +177,9 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult) {
 		return
 	}
 	e := windingEnvelope(co, w)
+	if !(e.r1 > 0) || math.IsInf(e.r1, 0) {
+		return // nothing to draw
+	}
 	var sd figures.SketchData
 	for _, z := range placements(co) {
 		sd.Sections = append(sd.Sections, figures.Section{X0: z + e.z0, X1: z + e.z1, Y0: e.r0, Y1: e.r1, Round: e.round})
@@ -293,6 +296,9 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult) {
 		}
 		xHalf = 1.6 * e.r1
 		zHalf = math.Max(half+0.9*e.r1, 0.75*xHalf)
+	}
+	if !(xHalf > 0) || !(zHalf > 0) || math.IsInf(xHalf, 0) || math.IsInf(zHalf, 0) {
+		return // no extent to map
 	}
 	nz, nx := mapGrid, mapGrid
 	if zHalf > xHalf {
@@ -418,6 +424,9 @@ func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult) {
 	src := calc.NewCoilSource(co, cr.Winding, cr.Current)
 	fr := calc.CoilFrame(co.Axis)
 	B0 := src.At(co.Centre).Dot(fr.U)
+	if !(R > 0) || math.IsNaN(B0) || (!co.Opposing && B0 == 0) {
+		return
+	}
 	rel := fmt.Sprintf("The coil centres are %s apart, %s times the mean radius R = %s", Eng(s, "m", 3), Sig(pr.SpacingRatio, 4), Eng(R, "m", 3))
 	pct := Sig(100*calc.HelmholtzTolerance, 2)
 	if !co.Opposing {
