@@ -436,6 +436,7 @@ func momentSteps(co calc.Coil, cr calc.CoilResult) []Step {
 	if w.Thin || w.LayerCount <= 1 {
 		mom.Numbers = fmt.Sprintf(`%s%d \cdot %s \cdot \pi \cdot %s^2`, pair, co.Turns, I, Paren(Q(R, "m", 4)))
 	} else {
+		mom.What = fmt.Sprintf("Magnetic moment: current times the area of every turn, Σπrᵢ² = %s over the %d turns", Eng(w.AreaSum, "m²", 5), co.Turns)
 		mom.Numbers = fmt.Sprintf(`%s%s \cdot %s`, pair, I, Q(w.AreaSum, "m²", 5))
 	}
 	steps = append(steps, mom)
