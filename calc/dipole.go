@@ -55,14 +55,22 @@ func DipoleRangePlane(c Coil, w Winding, I, tol float64) float64 {
 
 // DipoleReach holds the distances, m, from a coil block's centre beyond
 // which its point-dipole field is within 1 % and 0.1 % of the exact field,
-// on its axis and in its plane (NaN where there is no dipole moment).
+// on its axis, in its plane, and in any direction (NaN where there is no
+// dipole moment).
 type DipoleReach struct {
 	Axis1, Axis01   float64 // on the axis, 1 % and 0.1 %
 	Plane1, Plane01 float64 // in the coil's (mid-)plane, 1 % and 0.1 %
+	// Any1, Any01 are the largest over directions from the axis to the
+	// plane in 10° steps (for a Rectangle also round the axis in 15°
+	// steps): beyond them the dipole field is within tolerance in every
+	// direction sampled. The directions between the axis and the plane of
+	// one side stand for all of them by the winding's axial symmetry and
+	// its symmetry about its mid-plane (a Rectangle's two mirror planes).
+	Any1, Any01 float64
 }
 
 // DipoleDistances returns the DipoleReach of coil block c (DipoleRange and
-// DipoleRangePlane at 1 % and 0.1 %).
+// DipoleRangePlane at 1 % and 0.1 %, and the largest over directions).
 func DipoleDistances(c Coil, w Winding, I float64) DipoleReach {
 	s := NewCoilSource(c, w, I)
 	fr := CoilFrame(c.Axis)
@@ -75,10 +83,21 @@ func DipoleDistances(c Coil, w Winding, I float64) DipoleReach {
 		}
 	}
 	axis := []Vec{fr.U}
-	return DipoleReach{
+	// Directions strictly between the axis and the plane.
+	var between []Vec
+	for _, e := range plane {
+		for k := 1; k < 9; k++ {
+			sn, co := math.Sincos(float64(k) * math.Pi / 18)
+			between = append(between, fr.U.Scale(co).Add(e.Scale(sn)))
+		}
+	}
+	r := DipoleReach{
 		Axis1: dipoleRange(s, w, axis, 0.01), Axis01: dipoleRange(s, w, axis, 0.001),
 		Plane1: dipoleRange(s, w, plane, 0.01), Plane01: dipoleRange(s, w, plane, 0.001),
 	}
+	r.Any1 = math.Max(math.Max(r.Axis1, r.Plane1), dipoleRange(s, w, between, 0.01))
+	r.Any01 = math.Max(math.Max(r.Axis01, r.Plane01), dipoleRange(s, w, between, 0.001))
+	return r
 }
 
 // dipoleRange returns the largest over dirs of the distance beyond which

@@ -65,6 +65,42 @@ func TestDipoleDistancesThinLoop(t *testing.T) {
 	if r.Plane1 >= r.Axis1 {
 		t.Errorf("a loop's in-plane distance (%g) should be below the axial one (%g)", r.Plane1, r.Axis1)
 	}
+	// For a loop the axis is the worst direction: its next multipole's
+	// relative size is largest there (3/2 against 9/8 in the plane).
+	if r.Any1 != r.Axis1 || r.Any01 != r.Axis01 {
+		t.Errorf("any direction %g, %g; axis %g, %g", r.Any1, r.Any01, r.Axis1, r.Axis01)
+	}
+}
+
+func TestDipoleDistancesAnyDirection(t *testing.T) {
+	// The largest over directions is at least the axis and plane figures,
+	// and beyond it the dipole is within tolerance along oblique rays
+	// that were not among the sampled directions.
+	wire := Wire{Bare: 0.5e-3, Outer: 0.56e-3, Material: Copper()}
+	for _, c := range []Coil{
+		{Form: Pair, MeanDiameter: 0.1, Spacing: 0.05, Turns: 10, Wire: wire},
+		{Form: Solenoid, MeanDiameter: 0.03, Length: 0.12, Turns: 200, Wire: wire},
+		{Form: Solenoid, MeanDiameter: 0.1, Length: 0.01, RadialBuild: 0.02, Turns: 500, Wire: wire},
+		{Form: Rectangle, Width: 0.2, Height: 0.05, Turns: 5, Wire: wire},
+	} {
+		w := LayOut(c)
+		r := DipoleDistances(c, w, 1)
+		if !(r.Any1 >= r.Axis1 && r.Any1 >= r.Plane1 && r.Any01 >= r.Axis01 && r.Any01 >= r.Plane01) {
+			t.Errorf("form %d: %+v", c.Form, r)
+		}
+		m := MagneticMoment(c, w, 1)
+		for _, deg := range []float64{5, 37, 63, 88} {
+			s, co := math.Sincos(deg * math.Pi / 180)
+			u := Vec{s * math.Cos(0.3), s * math.Sin(0.3), co}
+			for _, f := range []float64{1.001, 1.5, 4} {
+				p := u.Scale(r.Any1 * f)
+				ex := CoilField(c, w, 1, p)
+				if e := DipoleField(m, p).Sub(ex).Norm() / ex.Norm(); e > 0.0101 {
+					t.Errorf("form %d, %g° at %g × the 1 %% distance: error %.4g", c.Form, deg, f, e)
+				}
+			}
+		}
+	}
 }
 
 func TestDipoleDistancesHelmholtzPair(t *testing.T) {

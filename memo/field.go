@@ -336,7 +336,7 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult) {
 	c.para(fmt.Sprintf("Figure %d maps the magnitude of the flux density of coil %q alone over %s, on a logarithmic colour scale with contour lines at 1–2–5 steps per decade; the winding cross-sections are drawn in.",
 		n, co.Name, plane))
 	c.fig(doc.Figure{
-		Caption: fmt.Sprintf("|B| of coil %q over %s (coil frame; colour scale: viridis, logarithmic; contours at the values marked on the colour bar)", co.Name, plane),
+		Caption: fmt.Sprintf("|B| of coil %q over %s (coil frame; colour scale: viridis, van der Walt & Smith 2015, logarithmic; contours at the values marked on the colour bar)", co.Name, plane),
 		Width:   figWidth, Height: h, Draw: drawMap,
 		Summary: fmt.Sprintf("Map of |B|: z from %s to %s, %s from %s to %s, %d × %d points.",
 			Eng(-zHalf, "m", 3), Eng(zHalf, "m", 3), map[bool]string{true: "x", false: "ρ"}[co.Form == calc.Rectangle],
@@ -394,8 +394,7 @@ func (c *composer) dipoleDistances(co calc.Coil, cr calc.CoilResult) {
 	if co.Form == calc.Rectangle {
 		plane += " (worst direction)"
 	}
-	good1 := math.Max(dr.Axis1, dr.Plane1)
-	good01 := math.Max(dr.Axis01, dr.Plane01)
+	good1, good01 := dr.Any1, dr.Any01
 	refText := fmt.Sprintf("%s = %s is the mean radius", refName, Eng(R, "m", 3))
 	if co.Form == calc.Rectangle {
 		refText = fmt.Sprintf("%s = √(W·H/π) = %s is the radius of the circle of the same area", refName, Eng(ref, "m", 3))
@@ -403,13 +402,14 @@ func (c *composer) dipoleDistances(co calc.Coil, cr calc.CoilResult) {
 	c.para(fmt.Sprintf("Far from the winding the field of coil %q is that of a point dipole of moment |m| = %s at its centre:", co.Name, Eng(cr.Moment.Norm(), "A·m²", 3)))
 	c.derive(Step{What: "Field of a point dipole m at distance r in the direction of the unit vector r̂",
 		Symbolic: `\vec{B} = \frac{\mu_0}{4\pi}\, \frac{3 (\vec{m} \cdot \hat{r})\, \hat{r} - \vec{m}}{r^3}`})
-	c.para(fmt.Sprintf("The table gives the distance from the centre beyond which that approximation stays within 1 %% and 0.1 %% of the exact field (vector difference; %s). The point-dipole description is good to 1 %% everywhere beyond %s from the centre of the coil, and to 0.1 %% beyond %s; nearer than that, use the exact field.",
+	c.para(fmt.Sprintf("The table gives the distance from the centre beyond which that approximation stays within 1 %% and 0.1 %% of the exact field (vector difference; %s), along the axis, in the plane and — the largest over directions between them, in 10° steps — in any direction. The point-dipole description is good to 1 %% everywhere beyond %s from the centre of the coil, and to 0.1 %% beyond %s; nearer than that, use the exact field.",
 		refText, Eng(good1, "m", 3), Eng(good01, "m", 3)))
 	c.add(doc.Table{Caption: fmt.Sprintf("Distance beyond which the point-dipole field of coil %q is within tolerance", co.Name),
 		Header: []string{"Direction from the centre", "Within 1 %", "Within 0.1 %"},
 		Rows: [][]doc.Cell{
 			{{Text: "Along the axis"}, cell(dr.Axis1), cell(dr.Axis01)},
 			{{Text: plane}, cell(dr.Plane1), cell(dr.Plane01)},
+			{{Text: "Any direction (largest)", Strong: true}, cell(dr.Any1), cell(dr.Any01)},
 		},
 		Widths: []float64{2.2, 1.6, 1.6},
 		Align:  []doc.Align{doc.Left, doc.Right, doc.Right}})

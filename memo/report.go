@@ -93,6 +93,8 @@ type CoilReport struct {
 	DipoleAxis01  Num         `json:"dipole_distance_axis_0p1pct_m"`
 	DipolePlane1  Num         `json:"dipole_distance_plane_1pct_m"`
 	DipolePlane01 Num         `json:"dipole_distance_plane_0p1pct_m"`
+	DipoleAny1    Num         `json:"dipole_distance_any_1pct_m"`
+	DipoleAny01   Num         `json:"dipole_distance_any_0p1pct_m"`
 	Pair          *PairReport `json:"pair,omitempty"`
 	CoilHeatSwitch
 }
@@ -169,6 +171,7 @@ func (j *Job) Report() Report {
 			FieldCenter: vec(cr.FieldCentre), TurnsPerLayer: cr.Winding.TurnsPerLayer, Layers: cr.Winding.LayerCount,
 			DipoleAxis1: Num(cr.Dipole.Axis1), DipoleAxis01: Num(cr.Dipole.Axis01),
 			DipolePlane1: Num(cr.Dipole.Plane1), DipolePlane01: Num(cr.Dipole.Plane01),
+			DipoleAny1: Num(cr.Dipole.Any1), DipoleAny01: Num(cr.Dipole.Any01),
 			CoilHeatSwitch: coilHeatSwitch(co, cr),
 		})
 		if co.Form == calc.Pair {
