@@ -3,6 +3,7 @@ package memo
 import (
 	"fmt"
 	"math"
+	"strings"
 
 	"coilmemo/calc"
 	"coilmemo/memo/doc"
@@ -93,23 +94,34 @@ func Cautions(j *Job) []doc.Callout {
 		}
 		out = append(out, electricalCautions(co, cr, name)...)
 	}
-	// Implant field: along the z axis and in the xy plane from the origin.
+	// Implant field: at the origin, along the z axis and in the xy plane.
 	ext := designExtent(d)
 	if ext > 0 {
-		axial := reach(fm, calc.Vec{}, calc.Vec{0, 0, 1}, ImplantField, ext*0.5, ext*1e3)
-		axial = math.Max(axial, reach(fm, calc.Vec{}, calc.Vec{0, 0, -1}, ImplantField, ext*0.5, ext*1e3))
+		b0 := r.FieldCentre.Norm()
+		// Along the axis the search may come close to the origin (a bore
+		// holds no conductor); in the plane it stops outside the windings.
+		axial := reach(fm, calc.Vec{}, calc.Vec{0, 0, 1}, ImplantField, ext*0.01, ext*1e3)
+		axial = math.Max(axial, reach(fm, calc.Vec{}, calc.Vec{0, 0, -1}, ImplantField, ext*0.01, ext*1e3))
 		radial := reach(fm, calc.Vec{}, calc.Vec{1, 0, 0}, ImplantField, ext, ext*1e3)
 		radial = math.Max(radial, reach(fm, calc.Vec{}, calc.Vec{0, 1, 0}, ImplantField, ext, ext*1e3))
-		if axial > 0 || radial > 0 {
-			where := func(v float64, dir string) string {
-				if v == 0 {
-					return "nowhere " + dir + " outside the winding"
-				}
-				return "up to " + Eng(v, "m", 2) + " from the origin " + dir
+		var where []string
+		if b0 >= ImplantField {
+			where = append(where, "at the origin, where |B| = "+Eng(b0, "T", 3))
+		}
+		if axial > 0 {
+			where = append(where, "up to "+Eng(axial, "m", 2)+" from the origin along the z axis")
+		}
+		if radial > 0 {
+			where = append(where, "up to "+Eng(radial, "m", 2)+" from the origin in the xy plane")
+		}
+		for _, p := range r.Probes {
+			if p.B.Norm() >= ImplantField {
+				where = append(where, fmt.Sprintf("at probe %q (%s)", p.Name, Eng(p.B.Norm(), "T", 3)))
 			}
+		}
+		if len(where) > 0 {
 			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Field above 0.5 mT: implanted medical devices",
-				Spans: []doc.Span{{Text: templates.Text("caution-implant", map[string]string{
-					"Axial": where(axial, "along the z axis"), "Radial": where(radial, "in the xy plane")})}}})
+				Spans: []doc.Span{{Text: templates.Text("caution-implant", map[string]string{"Where": strings.Join(where, ", ")})}}})
 		} else {
 			out = append(out, doc.Callout{Severity: doc.Note, Title: "Field near the winding",
 				Spans: []doc.Span{{Text: templates.Text("caution-implant-none", nil)}}})
