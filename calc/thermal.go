@@ -138,7 +138,7 @@ func (tp ThermalProblem) residual(T float64) float64 {
 // the winding's mean temperature T, K: it steps up from Ta in steps of 1 K
 // (then 2 %) to the first sign change of HeatOut − HeatIn — the stable
 // steady state, where losses overtake the input — and bisects that step to
-// 10⁻¹² relative. It returns Ta when no heat is input, and runaway = true
+// 10⁻¹³ of the rise above ambient. It returns Ta when no heat is input, and runaway = true
 // with T = NaN when the losses are still below the input at
 // max(TempSearchMax, Ta + 1) (or the data are not numbers).
 func SteadyTemperature(tp ThermalProblem) (T float64, runaway bool) {
@@ -167,14 +167,21 @@ func SteadyTemperature(tp ThermalProblem) (T float64, runaway bool) {
 		}
 		lo = hi
 	}
+	// Bisect to 10⁻¹³ of the temperature rise (not of the absolute
+	// temperature), so that a coil that warms by millikelvin still closes
+	// its heat balance to better than 10⁻⁹; stop early at the resolution
+	// of float64.
 	for range 200 {
 		mid := lo + (hi-lo)/2
+		if mid <= lo || mid >= hi {
+			break
+		}
 		if tp.residual(mid) > 0 {
 			hi = mid
 		} else {
 			lo = mid
 		}
-		if hi-lo <= 1e-12*hi {
+		if hi-lo <= 1e-13*(hi-tp.Ambient) {
 			break
 		}
 	}

@@ -123,3 +123,23 @@ func TestCoolingDefaults(t *testing.T) {
 		t.Errorf("stated h = 0 must be kept: %+v", c)
 	}
 }
+
+// A coil that warms by millikelvin still closes its heat balance to 1e-9:
+// the solver bisects relative to the rise, not the absolute temperature.
+// (Below about 0.1 mK the resolution of a float64 kelvin temperature,
+// 5.7e-14 K at 300 K, is itself more than 1e-9 of the rise.)
+func TestSteadyBalanceSmallRise(t *testing.T) {
+	for _, I := range []float64{1e-2, 0.1, 1} {
+		tp := ThermalProblem{Drive: CurrentDrive, Current: I, R20: 5, Alpha20: Copper().Alpha20, Duty: 1,
+			Area: 0.01, H: 10, Emissivity: 0.85, Ambient: T20, RiseMean: 0.5}
+		T, runaway := SteadyTemperature(tp)
+		if runaway {
+			t.Fatalf("I = %g A: runaway", I)
+		}
+		in := tp.HeatIn(T)
+		out := tp.HeatOut(tp.Surface(T, in))
+		if rel := math.Abs(in-out) / in; rel > 1e-9 {
+			t.Errorf("I = %g A (rise %.3g K): heat balance closes to %.2g, want ≤ 1e-9", I, T-T20, rel)
+		}
+	}
+}

@@ -53,14 +53,25 @@ func Verify(d calc.Design, r calc.Results) []Check {
 			continue
 		}
 		series := float64(calc.SeriesCoils(c))
-		// Moment: Σ over turns against N·I·π·R̄². They differ for a thick
-		// winding by the spread of turn areas, (b/D)²/3 at most for radial
-		// build b on mean diameter D, so that is the tolerance.
+		// Moment: Σ π rᵢ² over the turns against N·π·r̄² at the turns'
+		// mean radius r̄. Their ratio is 1 + var(r)/r̄², and a variance is
+		// at most a quarter of the range squared (Popoviciu's inequality),
+		// so they agree within ((r_max − r_min)/(2 r̄))²: a second-order
+		// bound that a miscounted turn or layer breaks.
 		if c.Form != calc.Pair || !c.Opposing {
-			b := c.RadialBuild / c.MeanDiameter
-			out = append(out, newCheck(c.Name, "magnetic moment",
-				"m = I·ΣA over every turn", "N·I·π·R̄² at the mean diameter",
-				cr.Moment.Norm(), series*cr.MomentMeanArea, "A·m²", 1e-9+b*b/3))
+			n := float64(w.TurnCount())
+			rmin, rmax := math.Inf(1), math.Inf(-1)
+			for _, l := range w.Layers {
+				rmin, rmax = math.Min(rmin, l.Radius), math.Max(rmax, l.Radius)
+			}
+			if n > 0 {
+				rbar := meanTurnRadius(w)
+				q := (rmax - rmin) / (2 * rbar)
+				ref := series * n * math.Abs(I) * math.Pi * rbar * rbar
+				out = append(out, newCheck(c.Name, "magnetic moment",
+					"m = I·Σ π rᵢ² over every turn", "N·I·π·r̄² at the turns' mean radius",
+					cr.Moment.Norm(), ref, "A·m²", 1e-9+q*q))
+			}
 		}
 		// Centre field against the current-sheet closed form per layer.
 		if c.Form != calc.Pair {
@@ -170,6 +181,20 @@ func sheetNagaoka(a, l float64) float64 {
 	return sum / (calc.Mu0 * math.Pi * a * a * l)
 }
 
+// meanTurnRadius is the turn-weighted mean radius of a laid-out winding,
+// 0 when it has no turns.
+func meanTurnRadius(w calc.Winding) float64 {
+	var n, sum float64
+	for _, l := range w.Layers {
+		n += float64(len(l.Z))
+		sum += float64(len(l.Z)) * l.Radius
+	}
+	if n == 0 {
+		return 0
+	}
+	return sum / n
+}
+
 // helmholtzCheck compares the centre field of an aiding pair at Helmholtz
 // spacing (spacing = radius, within 1 %) with the Helmholtz closed form
 // B = (4/5)^(3/2) μ0 N I / R. The tolerance allows for a spacing off R by
@@ -180,6 +205,12 @@ func helmholtzCheck(c calc.Coil, cr calc.CoilResult) []Check {
 	R := c.MeanDiameter / 2
 	if c.Form != calc.Pair || c.Opposing || !(R > 0) || math.Abs(c.Spacing/R-1) > 0.01 {
 		return nil
+	}
+	// R is the turns' mean radius as laid out: a winding that does not
+	// fill its stated radial build sits nearer the axis than its stated
+	// mean diameter says.
+	if r := meanTurnRadius(cr.Winding); r > 0 {
+		R = r
 	}
 	fr := calc.CoilFrame(c.Axis)
 	B := calc.CoilField(c, cr.Winding, cr.Current, c.Centre).Dot(fr.U)

@@ -110,6 +110,16 @@ func validityFlags(co calc.Coil, cr calc.CoilResult, d calc.Design) []validity {
 		}
 		out = append(out, v)
 	}
+	// A multilayer winding whose turns do not fill the stated radial build
+	// sits nearer the bore than its stated mean diameter says.
+	if co.RadialBuild > 0 && !w.Thin && w.LayerCount > 0 && co.Wire.Outer > 0 {
+		used := float64(w.LayerCount) * co.Wire.Outer
+		if used < 0.95*co.RadialBuild {
+			out = append(out, validity{what: "Radial build", flagged: true, text: fmt.Sprintf(
+				"the %d turns lie in %d layers %s deep, less than the stated radial build of %s; the turns' mean radius is %s against the stated %s. All results use the turns as laid out; state the radial build the coil will really have, or the turns that fill it.",
+				co.Turns, w.LayerCount, Eng(used, "m", 3), Eng(co.RadialBuild, "m", 3), Eng(meanTurnRadius(w), "m", 4), Eng(R, "m", 4))})
+		}
+	}
 	if co.Wire.OuterEstimated {
 		out = append(out, validity{what: "Wire build", flagged: true, text: fmt.Sprintf(
 			"the wire's overall diameter (%s over %s bare) is an estimate for heavy-build enamelled wire. The winding's length, layers, surface and so its temperature follow from it; state wire-outer-diameter from the wire maker's data sheet.",

@@ -542,8 +542,11 @@ func heatBalanceCheck(c calc.Coil, cr calc.CoilResult) []Check {
 	ta, ts := tp.Ambient, st.Surface
 	out := tp.ConvectionCoefficient(ts)*tp.Area*(ts-ta) + tp.Emissivity*calc.StefanBoltzmann*tp.Area*(ts*ts*ts*ts-ta*ta*ta*ta) + tp.Mount*(ts-ta)
 	in := calc.Duty(c) * cr.Current * cr.Current * cr.RHot
+	// 1e-9, or the resolution of a float64 temperature relative to the
+	// rise where a coil barely warms (8 ulps of Tₛ over Tₛ − Tₐ).
+	tol := math.Max(1e-9, 8*0x1p-52*ts/math.Abs(ts-ta))
 	return []Check{newCheck(c.Name, "steady heat balance", "heat generated, duty × I²·R(T)",
-		"heat shed: h·A·ΔT + ε·σ·A·(Tₛ⁴ − Tₐ⁴) + ΔT/Rₘ at the surface temperature", in, out, "W", 1e-9)}
+		"heat shed: h·A·ΔT + ε·σ·A·(Tₛ⁴ − Tₐ⁴) + ΔT/Rₘ at the surface temperature", in, out, "W", tol)}
 }
 
 // runawayText is the runaway caution with this coil's numbers.
