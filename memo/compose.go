@@ -12,9 +12,10 @@ import (
 
 // composer accumulates blocks and numbers figures.
 type composer struct {
-	j      *Job
-	blocks []doc.Block
-	figure int
+	j        *Job
+	blocks   []doc.Block
+	figure   int
+	cautions []doc.Callout // computed once: page 1 lists them, the Safety section gives them
 }
 
 func (c *composer) add(b ...doc.Block) { c.blocks = append(c.blocks, b...) }
@@ -41,7 +42,7 @@ func Compose(j *Job) *doc.Document {
 	if title == "" {
 		title = "Coil calculation memo"
 	}
-	c := &composer{j: j}
+	c := &composer{j: j, cautions: Cautions(j)}
 	c.titlePage(title)
 	c.purpose()
 	c.inputs()
@@ -94,7 +95,26 @@ func (c *composer) titlePage(title string) {
 	if len(c.j.Results.Limits) > 0 {
 		c.add(c.limitsTable())
 	}
+	if list := c.cautionList(); len(list.Items) > 0 {
+		c.add(doc.Paragraph{Spans: []doc.Span{{Text: "Cautions raised by this design", Strong: true},
+			{Text: " (details, numbers and remedies in the Safety section):"}}}, list)
+	}
 	c.add(doc.PageBreak{})
+}
+
+// cautionList names the warnings and cautions (not the general notes) on
+// page 1, most severe first.
+func (c *composer) cautionList() doc.List {
+	var l doc.List
+	for _, sev := range []doc.Severity{doc.Warning, doc.Caution} {
+		for _, co := range c.cautions {
+			if co.Severity == sev {
+				l.Items = append(l.Items, []doc.Block{doc.Paragraph{Spans: []doc.Span{
+					{Text: sev.String() + " ", Strong: true}, {Text: co.Title}}}})
+			}
+		}
+	}
+	return l
 }
 
 // verdict is the one-paragraph answer at the top of page 1.
@@ -120,7 +140,9 @@ func (c *composer) verdict() doc.Paragraph {
 			s = append(s, doc.Span{Text: fmt.Sprintf("Coil %q has no steady temperature: thermal runaway.", cr.Name), Strong: true}, doc.Span{Text: " "})
 		}
 	}
-	s = append(s, doc.Span{Text: "Safety cautions for this design are listed in the Safety section."})
+	if len(c.cautionList().Items) == 0 {
+		s = append(s, doc.Span{Text: "The design raises no safety warning; the general cautions are in the Safety section."})
+	}
 	return doc.Paragraph{Spans: s}
 }
 

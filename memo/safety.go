@@ -167,7 +167,7 @@ func designExtent(d calc.Design) float64 {
 func (c *composer) safety() {
 	c.heading(1, "Safety")
 	c.para(templates.Text("safety", nil))
-	for _, co := range Cautions(c.j) {
+	for _, co := range c.cautions {
 		c.add(co)
 	}
 }
