@@ -1,12 +1,7 @@
 package mathlayout
 
 import (
-	"math"
 	"sync"
-
-	"golang.org/x/image/font"
-	"golang.org/x/image/font/sfnt"
-	"golang.org/x/image/math/fixed"
 
 	"coilmemo/memo/fonts"
 )
@@ -22,61 +17,15 @@ type glyphMetrics struct {
 	ok                     bool    // the face has the glyph
 }
 
-type faceData struct {
-	mu   sync.Mutex
-	f    *sfnt.Font
-	upem float64
-	buf  sfnt.Buffer
-	m    map[rune]glyphMetrics
-}
-
-var (
-	facesOnce sync.Once
-	faces     map[Face]*faceData
-)
-
-func loadFaces() {
-	faces = map[Face]*faceData{}
-	for _, s := range fonts.All() {
-		if s.Family != "serif" && s.Family != "sans" {
-			continue
-		}
-		f, err := sfnt.Parse(s.TTF)
-		if err != nil {
-			continue
-		}
-		faces[Face{s.Family, s.Style}] = &faceData{f: f, upem: float64(f.UnitsPerEm()), m: map[rune]glyphMetrics{}}
-	}
-}
-
-// glyph returns the metrics of r in face fc.
+// glyph returns the metrics of r in face fc, from the embedded fonts'
+// shared metrics (memo/fonts), in ems.
 func glyph(fc Face, r rune) glyphMetrics {
-	facesOnce.Do(loadFaces)
-	fd := faces[fc]
-	if fd == nil {
+	g, ok := fonts.Glyph(fc.Family, fc.Style, r)
+	if !ok {
 		return glyphMetrics{adv: 0.6, yMax: 0.7}
 	}
-	fd.mu.Lock()
-	defer fd.mu.Unlock()
-	if g, ok := fd.m[r]; ok {
-		return g
-	}
-	g := glyphMetrics{adv: 0.6}
-	idx, err := fd.f.GlyphIndex(&fd.buf, r)
-	if err == nil && idx != 0 {
-		ppem := fixed.Int26_6(fd.f.UnitsPerEm())
-		b, adv, err := fd.f.GlyphBounds(&fd.buf, idx, ppem, font.HintingNone)
-		if err == nil {
-			g = glyphMetrics{
-				adv:  math.Round(1000*float64(adv)/fd.upem) / 1000,
-				xMin: float64(b.Min.X) / fd.upem, xMax: float64(b.Max.X) / fd.upem,
-				yMin: -float64(b.Max.Y) / fd.upem, yMax: -float64(b.Min.Y) / fd.upem,
-				ok: true,
-			}
-		}
-	}
-	fd.m[r] = g
-	return g
+	return glyphMetrics{adv: float64(g.Advance) / 1000,
+		xMin: g.XMin, xMax: g.XMax, yMin: g.YMin, yMax: g.YMax, ok: g.OK}
 }
 
 // resolve picks the face that draws r: the serif face asked for, else the
