@@ -302,7 +302,10 @@ func sweepKeys() []string {
 	return k
 }
 
-const maxSweepSteps = 1000
+// maxSweepSteps bounds a sweep: each step is a whole evaluation and a row
+// of the memo's table, and a hundred rows is already more than a reader
+// takes in.
+const maxSweepSteps = 100
 
 func (p *parser) sweepBlock(b *rawBlock, coils []*coilIn) {
 	var sw *Sweep
