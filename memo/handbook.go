@@ -37,8 +37,8 @@ const ohmsPer1000ftToSI = 1 / 304.8
 // the second part of Table 36 of F. W. Grover, Inductance Calculations:
 // Working Formulas and Tables (1946; Dover reprint 1962/1973), whose
 // argument is b/2a (length over diameter), six decimals as printed. The
-// values are a transcription of the printed table, not recalled from
-// memory and not computed here; the first part of the table (argument
+// values are copied from the printed table, not recalled from memory and
+// not computed here; the first part of the table (argument
 // 2a/b, for coils longer than their diameter) is not embedded.
 // TestGroverTableAgreesWithNagaoka checks every entry against
 // calc.NagaokaCoefficient: they agree within two units of the sixth
