@@ -1,6 +1,10 @@
 package calc
 
-import "math"
+import (
+	"math"
+
+	"gonum.org/v1/gonum/mathext"
+)
 
 // NagaokaCoefficient returns Nagaoka's coefficient k_N of a current sheet
 // (single-layer solenoid) of radius a and length ℓ, the factor by which its
@@ -93,11 +97,20 @@ func MutualInductance(a, b, d float64) float64 {
 		return 0
 	}
 	m := 4 * a * b / D
-	if (a-b)*(a-b)+d*d == 0 {
+	near := (a-b)*(a-b) + d*d
+	if near == 0 {
 		return math.Inf(1)
 	}
-	if m >= 1 {
-		m = math.Nextafter(1, 0)
+	if m > 0.9 {
+		// Nearly coincident circles: 1 − m loses its digits when formed
+		// from m, so K and E come from the complementary parameter
+		// m₁ = ((a − b)² + d²)/D, exact as written, through Carlson's
+		// symmetric integrals (DLMF 19.25.1): K = R_F(0, m₁, 1),
+		// E = R_F(0, m₁, 1) − (m/3) R_D(0, m₁, 1).
+		m1 := near / D
+		rf := mathext.EllipticRF(0, m1, 1)
+		K, E := rf, rf-m/3*mathext.EllipticRD(0, m1, 1)
+		return Mu0 * math.Sqrt(a*b) * ((2-m)*K - 2*E) / math.Sqrt(m)
 	}
 	return Mu0 * math.Sqrt(a*b) * maxwellBracket(m) / math.Sqrt(m)
 }

@@ -235,3 +235,20 @@ func TestCellMethodApproximatesTurnSum(t *testing.T) {
 	exactM := WindingMutual(w, w, 0.1)
 	checkRel(t, "cell mutual", CellMutual(w, 1e-3, 3, 0.1), exactM, 1e-3)
 }
+
+// Two circles a hair apart: Maxwell's formula keeps its digits and tends to
+// the logarithmic limit of nearly coincident circles,
+// M ≈ μ0 a [ln(8a/c) − 2] for a separation c ≪ a (Maxwell 1873, §705;
+// Grover 1946, eq. 80, with the radii equal and c the distance between
+// the circles), whose error is of order (c/a)² ln(a/c).
+func TestMutualInductanceNearlyCoincident(t *testing.T) {
+	a := 0.05
+	for _, u := range []float64{1e-3, 1e-5, 1e-7, 1e-9} {
+		c := u * a
+		got := MutualInductance(a, a, c)
+		want := Mu0 * a * (math.Log(8*a/c) - 2)
+		if rel := math.Abs(got-want) / want; rel > 10*u*u*math.Log(1/u)+1e-12 {
+			t.Errorf("c/a = %g: M = %.12g H, log limit %.12g H (rel %.2g)", u, got, want, rel)
+		}
+	}
+}
