@@ -231,7 +231,7 @@ func sketchHeight(co calc.Coil, e envelope) vg.Length {
 	h := vg.Length(110*e.r1/zs)*vg.Millimeter + 22*vg.Millimeter
 	top := 95 * vg.Millimeter
 	if e.round {
-		top = 70 * vg.Millimeter // a bundle on a diameter: little to see
+		top = 50 * vg.Millimeter // a bundle on a diameter: little to see
 	}
 	return max(min(h, top), 50*vg.Millimeter)
 }
