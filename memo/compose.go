@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"strings"
+	"time"
 
 	"coilmemo/calc"
 	"coilmemo/memo/doc"
@@ -60,6 +61,12 @@ func Compose(j *Job) *doc.Document {
 	for _, co := range s.Design.Coils {
 		names = append(names, co.Name)
 	}
+	// An undated spec leaves the date out of the pages (the PDF backend
+	// then writes a fixed date into the metadata, for reproducibility).
+	var created time.Time
+	if j.Dated {
+		created = j.Created
+	}
 	return &doc.Document{
 		Meta: doc.Meta{
 			Title:    title,
@@ -68,7 +75,7 @@ func Compose(j *Job) *doc.Document {
 			Keywords: strings.Join(append([]string{"coil", "calculation memo", m.Project, m.Client}, names...), ", "),
 			DocID:    m.DocumentID,
 			Revision: m.Revision,
-			Created:  j.Created,
+			Created:  created,
 		},
 		Blocks: c.blocks,
 	}

@@ -10,8 +10,8 @@ import (
 	"coilmemo/memo/spec"
 )
 
-// FuzzEvaluate runs the whole pipeline short of the PDF bytes — reader,
-// calculations, checks, sweep, composition and the text backend — on
+// FuzzEvaluate runs the whole pipeline — reader, calculations, checks,
+// sweep, composition, the text backend, the JSON and the PDF — on
 // mutated specs: whatever the reader accepts must compose without a panic.
 // Seeds: the shipped examples.
 func FuzzEvaluate(f *testing.F) {
@@ -45,6 +45,9 @@ func FuzzEvaluate(f *testing.F) {
 			t.Fatal(err)
 		}
 		if _, err := j.JSON(); err != nil {
+			t.Fatal(err)
+		}
+		if _, err := j.PDF(); err != nil {
 			t.Fatal(err)
 		}
 	})

@@ -357,7 +357,7 @@ func (c *Canvas) FillString(f font.Face, pt vg.Point, s string) {
 	m := c.st.m.then(affine{a: 1, d: 1, e: pt.X.Points(), f: pt.Y.Points()})
 	c.pdf.TransformBegin()
 	c.pdf.Transform(fpdf.TransformMatrix{A: m.a, B: m.b, C: m.c, D: m.d, E: m.e, F: m.f})
-	c.pdf.Text(0, c.pageH, s)
+	c.pdf.Text(0, c.pageH, bmp(s))
 	c.pdf.TransformEnd()
 }
 

@@ -110,10 +110,10 @@ func newRenderer(d *doc.Document, o options, total int, dry bool) *renderer {
 	pdf.SetCatalogSort(true)
 	pdf.SetCreationDate(created)
 	pdf.SetModificationDate(created)
-	pdf.SetTitle(d.Meta.Title, true)
-	pdf.SetSubject(d.Meta.Subject, true)
-	pdf.SetAuthor(d.Meta.Author, true)
-	pdf.SetKeywords(d.Meta.Keywords, true)
+	pdf.SetTitle(bmp(d.Meta.Title), true)
+	pdf.SetSubject(bmp(d.Meta.Subject), true)
+	pdf.SetAuthor(bmp(d.Meta.Author), true)
+	pdf.SetKeywords(bmp(d.Meta.Keywords), true)
 	pdf.SetCreator("coilmemo", true)
 	pdf.SetProducer("coilmemo", true)
 	pdf.SetDisplayMode("fullwidth", "OneColumn")
@@ -339,5 +339,5 @@ func (r *renderer) bookmark(text string, level int) {
 		return
 	}
 	r.fonts.use("sans", "", sizeBody) // the outline text is UTF-16 only with a UTF-8 font current
-	r.pdf.Bookmark(text, level, r.y)
+	r.pdf.Bookmark(bmp(text), level, r.y)
 }

@@ -339,3 +339,15 @@ func TestTextColourAfterFigure(t *testing.T) {
 		t.Errorf("checked %d captions, want ≥ 2", checked)
 	}
 }
+
+// Characters outside the Basic Multilingual Plane (emoji) are set as
+// U+FFFD instead of breaking the writer's 16-bit font tables.
+func TestAstralCharacters(t *testing.T) {
+	d := &doc.Document{Meta: doc.Meta{Title: "coil 🚀"}, Blocks: []doc.Block{
+		doc.Heading{Level: 1, Text: "field 🧲"}, doc.Text("a 🧲 b"),
+		doc.Table{Header: []string{"x 🚀"}, Rows: [][]doc.Cell{{{Text: "𝑥"}}}},
+	}}
+	if _, err := Render(d); err != nil {
+		t.Fatalf("a document with emoji: %v", err)
+	}
+}

@@ -381,7 +381,7 @@ func (r *renderer) text(f frag, x, y float64) {
 	}
 	r.fonts.use(f.fam, f.sty, f.size)
 	r.pdf.SetTextColor(f.color.r, f.color.g, f.color.b)
-	r.pdf.Text(x, y, f.text)
+	r.pdf.Text(x, y, bmp(f.text))
 	if r.onText != nil {
 		r.onText(r.pdf.PageNo(), f.text)
 	}
