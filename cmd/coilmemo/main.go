@@ -212,6 +212,11 @@ func build(args []string, stdout, stderr io.Writer) error {
 			return err
 		}
 		target := outputPath(path, *out, len(specs) > 1)
+		if sameFile(path, target) {
+			fmt.Fprintf(stderr, "%s: the output %s is the spec itself; nothing written\n", path, target)
+			bad++
+			continue
+		}
 		b, err := job.PDF()
 		if err != nil {
 			return fmt.Errorf("%s: rendering the memo: %w", path, err)
@@ -246,6 +251,13 @@ func outputPath(spec, out string, several bool) string {
 		return filepath.Join(out, base)
 	}
 	return out
+}
+
+// sameFile reports whether two paths name the same existing file.
+func sameFile(a, b string) bool {
+	fa, errA := os.Stat(a)
+	fb, errB := os.Stat(b)
+	return errA == nil && errB == nil && os.SameFile(fa, fb)
 }
 
 // writeAtomic writes b to a temporary file beside path and renames it into

@@ -205,3 +205,17 @@ func TestWatchBuildsOnce(t *testing.T) {
 		t.Fatalf("no memo built: %v\n%s", err, o.String())
 	}
 }
+
+// -o naming the spec itself is refused rather than overwriting the spec.
+func TestBuildRefusesToOverwriteSpec(t *testing.T) {
+	spec := filepath.Join(t.TempDir(), "s.md")
+	src, _ := os.ReadFile("../../examples/torque-coil.md")
+	os.WriteFile(spec, src, 0o644)
+	var o, e bytes.Buffer
+	if c := code(run([]string{"build", spec, "-o", spec}, &o, &e)); c != 2 {
+		t.Errorf("exit %d, want 2", c)
+	}
+	if b, _ := os.ReadFile(spec); !bytes.Equal(b, src) {
+		t.Error("the spec was overwritten")
+	}
+}
