@@ -95,6 +95,7 @@ func (c *composer) field() {
 			c.pairRegion(co, cr)
 		}
 	}
+	c.allCoilsMap()
 }
 
 // mmText prints a length in millimetres to 0.01 mm without trailing zeros.
