@@ -64,9 +64,9 @@ func TestAdiabaticHeatingRate(t *testing.T) {
 func TestTransientTendsToSteady(t *testing.T) {
 	// Natural convection, radiation, R(T) and an internal rise: after ten
 	// time constants the warm-up has reached the steady state.
-	c, w := copperCoil(0.3)
+	c, _ := copperCoil(0.3)
 	c.Form, c.Length, c.RadialBuild, c.Turns = Solenoid, 0.01, 0.004, 150
-	w = LayOut(c)
+	w := LayOut(c)
 	tp := ThermalFor(c, w, Conditions{Ambient: T20, Cooling: Cooling{Emissivity: 0.85}})
 	if tp.Convection == nil || tp.RiseMax <= tp.RiseMean || tp.RiseMean <= 0 {
 		t.Fatalf("model: %+v", tp)

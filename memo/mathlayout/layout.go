@@ -211,10 +211,6 @@ func hlist(l *mlist, st style, align *float64) box {
 	}
 	var o box
 	size := st.size()
-	type placed struct {
-		a *atom
-		b box
-	}
 	// Classes, with binary signs in a place where they cannot be binary
 	// (at the start, after another sign or an opening bracket) made
 	// ordinary.

@@ -216,14 +216,13 @@ func TestRootCoversRadicand(t *testing.T) {
 		}
 		// The overbar lies above the radicand's ink and spans all of it.
 		lo, hi := math.Inf(1), math.Inf(-1)
-		top := math.Inf(-1)
 		for _, it := range b.Items {
 			if it.Kind == Glyphs && it.Size == size {
 				lo = math.Min(lo, it.X)
 				hi = math.Max(hi, it.X+TextWidth(it.Face, it.Size, it.Text))
 			}
 		}
-		top = inner.Ascent
+		top := inner.Ascent
 		if !(bar.Y > top) {
 			t.Errorf("%s: overbar at %.3f, radicand reaches %.3f", src, bar.Y, top)
 		}

@@ -22,8 +22,6 @@ import (
 //	y' = b·x + d·y + f
 type affine struct{ a, b, c, d, e, f float64 }
 
-var identity = affine{a: 1, d: 1}
-
 // then returns the map that applies n first and m after it (m∘n). Canvas
 // transforms are post-multiplied: a Translate followed by a Rotate rotates
 // about the translated origin, as in every vg backend.
