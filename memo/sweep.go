@@ -70,6 +70,12 @@ func setParam(c *calc.Coil, key string, v float64) {
 		c.Voltage = v
 	case "duty":
 		c.Duty = v
+	case "on-time":
+		c.OnTime = v
+	case "switch-off":
+		c.SwitchOff = v
+	case "frequency":
+		c.Frequency = v
 	}
 }
 
@@ -113,6 +119,10 @@ func sweepUnit(sw *spec.Sweep) (unit string, scale float64) {
 		return "A", 1
 	case sw.Dim == units.Voltage:
 		return "V", 1
+	case sw.Dim == units.Time:
+		return "s", 1
+	case sw.Dim == units.Frequency:
+		return "Hz", 1
 	}
 	return "", 1
 }

@@ -47,3 +47,30 @@ func TestSetParamRadialBuild(t *testing.T) {
 		t.Errorf("after inner 30 mm: mean %g outer %g; want 0.05, 0.07", c.MeanDiameter, c.OuterDiameter)
 	}
 }
+
+// An on-time sweep of a duty-cycled coil: the cycle's peak temperature
+// rises with the on-time at a fixed duty, and lies above the steady state
+// of the duty-averaged power, which short on-times approach.
+func TestSweepOnTime(t *testing.T) {
+	src := "# S\n\n```coil\nmean-diameter = 80 mm\nturns = 200\nwire = AWG 32\nvoltage = 5 V\nduty = 50 %\non-time = 5 min\n```\n\n```conditions\ncooling = vacuum\n```\n\n```sweep\non-time = 1 min .. 9 min step 4 min\n```\n"
+	j, diags := Evaluate("s.md", []byte(src))
+	if len(diags) > 0 {
+		t.Fatal(diags)
+	}
+	if len(j.Sweep) != 3 || j.Sweep[0].Value != 60 || j.Sweep[2].Value != 540 {
+		t.Fatalf("steps %+v, want 60, 300, 540 s", j.Sweep)
+	}
+	prev := 0.0
+	for _, st := range j.Sweep {
+		T := st.Results.Coils[0].Temperature
+		if !(T > prev) {
+			t.Errorf("on-time %g s: peak %g K, not above the shorter on-time's %g K", st.Value, T, prev)
+		}
+		prev = T
+	}
+	avg := j.Results.Coils[0].Heat.Steady.HotSpot
+	first := j.Sweep[0].Results.Coils[0].Temperature
+	if !(first > avg && prev > avg) || !(first-avg < (prev-avg)/4) {
+		t.Errorf("peaks %g K (1 min on) and %g K (9 min on) against the duty-averaged steady state %g K", first, prev, avg)
+	}
+}

@@ -289,7 +289,8 @@ var sweepDims = map[string]units.Dim{
 	"length": units.Length, "radial-build": units.Length, "width": units.Length, "height": units.Length,
 	"spacing": units.Length, "wire-outer-diameter": units.Length,
 	"turns": units.Dimensionless, "current": units.Current, "voltage": units.Voltage,
-	"duty": units.Dimensionless,
+	"duty":    units.Dimensionless,
+	"on-time": units.Time, "switch-off": units.Time, "frequency": units.Frequency,
 }
 
 func sweepKeys() []string {
