@@ -61,7 +61,7 @@ func (c *composer) record() {
 	c.add(doc.Table{Header: []string{"Item", "Value"}, Rows: rows, Widths: []float64{1, 3}})
 	c.para(templates.Text("record", nil))
 	if len(s.Memo.History) == 0 {
-		c.para("The spec gives no revision history; add one history line per revision to the memo block (see the spec reference).")
+		c.para("No revision history is recorded for this document.")
 		return
 	}
 	var hist [][]doc.Cell
