@@ -120,9 +120,23 @@ func sweepUnit(sw *spec.Sweep) (unit string, scale float64) {
 	case sw.Dim == units.Voltage:
 		return "V", 1
 	case sw.Dim == units.Time:
-		return "s", 1
+		switch top := math.Max(math.Abs(sw.From), math.Abs(sw.To)); {
+		case top < 1e-3:
+			return "µs", 1e6
+		case top < 1:
+			return "ms", 1e3
+		case top < 600:
+			return "s", 1
+		}
+		return "min", 1.0 / 60
 	case sw.Dim == units.Frequency:
-		return "Hz", 1
+		switch top := math.Max(math.Abs(sw.From), math.Abs(sw.To)); {
+		case top < 1e3:
+			return "Hz", 1
+		case top < 1e6:
+			return "kHz", 1e-3
+		}
+		return "MHz", 1e-6
 	}
 	return "", 1
 }
@@ -154,12 +168,44 @@ func (c *composer) sweep() {
 	}
 	c.para(fmt.Sprintf("The design is re-evaluated with %s of %s from %s to %s in steps of %s, every other input as specified. Each row is a complete evaluation: winding, steady temperature, operating point and field.",
 		sw.Param, target, withUnit(sw.From*scale), withUnit(sw.To*scale), withUnit(sw.Step*scale)))
+	// Parameters whose effect the standard columns do not show get a
+	// column of their own, from the swept coil (the first, when the sweep
+	// covers every coil).
+	extraHead, extra := "", func(calc.Results) string { return "" }
+	// The first figure shows the moment, or for these parameters the
+	// quantity they change.
+	plotName, plotUnit, plotLimit := "Magnetic moment |m|", "A·m²", "moment"
+	plotValue := func(r calc.Results) float64 { return r.Moment.Norm() }
+	swept := 0
+	for i, co := range c.j.Spec.Design.Coils {
+		if sw.Coil == co.Name {
+			swept = i
+		}
+	}
+	switch sw.Param {
+	case "switch-off":
+		extraHead = "Unsuppressed spike"
+		extra = func(r calc.Results) string { return Eng(r.Coils[swept].Switch.Spike, "V", 3) }
+		plotName, plotUnit, plotLimit = "Switch-off spike", "V", ""
+		plotValue = func(r calc.Results) float64 { return r.Coils[swept].Switch.Spike }
+	case "frequency":
+		extraHead = "|Z| / a.c. current"
+		extra = func(r calc.Results) string {
+			ac := r.Coils[swept].AC
+			return Eng(ac.Impedance, "Ω", 3) + " / " + Eng(ac.Current, "A", 3)
+		}
+		plotName, plotUnit, plotLimit = "Impedance |Z|", "Ω", ""
+		plotValue = func(r calc.Results) float64 { return r.Coils[swept].AC.Impedance }
+	}
 	var rows [][]doc.Cell
-	var x, moment, temp []float64
+	var x, first, temp []float64
 	for _, st := range c.j.Sweep {
 		cells := []doc.Cell{{Text: num(st.Value * scale)}}
 		if !st.Feasible {
 			cells = append(cells, doc.Cell{Text: "winding does not fit"}, doc.Cell{}, doc.Cell{}, doc.Cell{}, doc.Cell{}, doc.Cell{Text: "—"})
+			if extraHead != "" {
+				cells = append(cells[:len(cells)-1], doc.Cell{}, cells[len(cells)-1])
+			}
 			rows = append(rows, cells)
 			continue
 		}
@@ -192,17 +238,27 @@ func (c *composer) sweep() {
 			doc.Cell{Text: Eng(r.FieldCentre.Norm(), "T", 3)},
 			doc.Cell{Text: Eng(cur, "A", 3)},
 			doc.Cell{Text: Eng(pw, "W", 3)},
-			doc.Cell{Text: tText},
-			status)
+			doc.Cell{Text: tText})
+		if extraHead != "" {
+			cells = append(cells, doc.Cell{Text: extra(r)})
+		}
+		cells = append(cells, status)
 		rows = append(rows, cells)
 		x = append(x, st.Value*scale)
-		moment = append(moment, r.Moment.Norm())
+		first = append(first, plotValue(r))
 		temp = append(temp, Celsius(hot))
 	}
+	header := []string{label, "|m|", "|B| at origin", "Current", "Power", "Hottest winding"}
+	align := []doc.Align{doc.Right, doc.Right, doc.Right, doc.Right, doc.Right, doc.Right}
+	widths := []float64{1, 1.2, 1.1, 1, 1, 1.1}
+	if extraHead != "" {
+		header, align, widths = append(header, extraHead), append(align, doc.Right), append(widths, 1.4)
+	}
+	header, align, widths = append(header, "Limits met"), append(align, doc.Center), append(widths, 1)
 	c.add(doc.Table{Caption: "Results at each step of the sweep",
-		Header: []string{label, "|m|", "|B| at origin", "Current", "Power", "Hottest winding", "Limits met"},
+		Header: header,
 		Rows:   rows,
-		Align:  []doc.Align{doc.Right, doc.Right, doc.Right, doc.Right, doc.Right, doc.Right, doc.Center}})
+		Align:  align, Widths: widths})
 	if len(x) < 2 {
 		return
 	}
@@ -220,10 +276,18 @@ func (c *composer) sweep() {
 		return out
 	}
 	n := c.figure + 1
-	c.para(fmt.Sprintf("Figures %d and %d show the total moment and the hottest winding temperature across the sweep, with the stated requirements as dashed lines.", n, n+1))
-	c.fig(doc.Figure{Caption: "Magnetic moment across the sweep", Width: figWidth, Height: figHeight * 0.7,
-		Draw:    figures.Sweep(label, x, "Magnetic moment |m|", "A·m²", moment, limit("moment")),
-		Summary: fmt.Sprintf("|m| from %s to %s.", Eng(moment[0], "A·m²", 3), Eng(moment[len(moment)-1], "A·m²", 3))})
+	what := "the " + strings.ToLower(plotName[:1]) + plotName[1:]
+	if plotLimit == "moment" {
+		what = "the total moment"
+	}
+	c.para(fmt.Sprintf("Figures %d and %d show %s and the hottest winding temperature across the sweep, with the stated requirements as dashed lines.", n, n+1, what))
+	var req []float64
+	if plotLimit != "" {
+		req = limit(plotLimit)
+	}
+	c.fig(doc.Figure{Caption: plotName + " across the sweep", Width: figWidth, Height: figHeight * 0.7,
+		Draw:    figures.Sweep(label, x, plotName, plotUnit, first, req),
+		Summary: fmt.Sprintf("%s from %s to %s.", plotName, Eng(first[0], plotUnit, 3), Eng(first[len(first)-1], plotUnit, 3))})
 	c.fig(doc.Figure{Caption: "Hottest winding temperature across the sweep", Width: figWidth, Height: figHeight * 0.7,
 		Draw:    figures.Sweep(label, x, "Winding temperature", "°C", temp, limit("temperature")),
 		Summary: fmt.Sprintf("Temperature from %s to %s.", Eng(temp[0], "°C", 3), Eng(temp[len(temp)-1], "°C", 3))})

@@ -2,9 +2,11 @@ package memo
 
 import (
 	"math"
+	"strings"
 	"testing"
 
 	"coilmemo/calc"
+	"coilmemo/memo/doc"
 )
 
 const sweepSpec = "# S\n\n```coil\nform = solenoid\nmean-diameter = 30 mm\nlength = 50 mm\nturns = 50\nwire = 0.5 mm\nwire-outer-diameter = 0.55 mm\ncurrent = 1 A\n```\n\n```sweep\nturns = 50 .. 110 step 20\n```\n"
@@ -72,5 +74,33 @@ func TestSweepOnTime(t *testing.T) {
 	first := j.Sweep[0].Results.Coils[0].Temperature
 	if !(first > avg && prev > avg) || !(first-avg < (prev-avg)/4) {
 		t.Errorf("peaks %g K (1 min on) and %g K (9 min on) against the duty-averaged steady state %g K", first, prev, avg)
+	}
+}
+
+// A switch-off sweep shows the unsuppressed spike, which falls as the
+// switch opens more slowly (V ≈ L·I/t_off + supply), and plots it.
+func TestSweepSwitchOff(t *testing.T) {
+	src := "# S\n\n```coil\nform = solenoid\ninner-diameter = 10 mm\nradial-build = 8 mm\nlength = 20 mm\nturns = 1500\nwire = AWG 34\nvoltage = 24 V\nswitch-off = 10 us\n```\n\n```sweep\nswitch-off = 5 us .. 25 us step 10 us\n```\n"
+	j, diags := Evaluate("s.md", []byte(src))
+	if len(diags) > 0 {
+		t.Fatal(diags)
+	}
+	var text strings.Builder
+	if err := doc.WriteText(&text, j.Document()); err != nil {
+		t.Fatal(err)
+	}
+	for _, want := range []string{"| switch-off (µs) |", "Unsuppressed spike", "Switch-off spike across the sweep"} {
+		if !strings.Contains(text.String(), want) {
+			t.Errorf("memo lacks %q", want)
+		}
+	}
+	prev := math.Inf(1)
+	for _, st := range j.Sweep {
+		cr := st.Results.Coils[0]
+		want := cr.Inductance*cr.Current/st.Value + cr.Switch.Supply
+		if v := cr.Switch.Spike; !(v < prev) || math.Abs(v-want) > 1e-9*want {
+			t.Errorf("t_off %g s: spike %g V, want L·I/t_off + supply = %g V, falling", st.Value, v, want)
+		}
+		prev = cr.Switch.Spike
 	}
 }
