@@ -26,16 +26,12 @@ type SweepStep struct {
 // were given and re-deriving the mean diameter where it follows from them.
 func setParam(c *calc.Coil, key string, v float64) {
 	switch key {
-	case "mean-diameter":
-		c.MeanDiameter = v
 	case "inner-diameter":
-		c.InnerDiameter = v
 		c.MeanDiameter = v + c.RadialBuild
 		if c.OuterDiameter > 0 {
 			c.OuterDiameter = v + 2*c.RadialBuild
 		}
 	case "outer-diameter":
-		c.OuterDiameter = v
 		c.MeanDiameter = v - c.RadialBuild
 		if c.InnerDiameter > 0 {
 			c.InnerDiameter = v - 2*c.RadialBuild
@@ -43,7 +39,6 @@ func setParam(c *calc.Coil, key string, v float64) {
 	case "radial-build":
 		// The bore stays where it was; the winding grows outward.
 		inner := c.MeanDiameter - c.RadialBuild
-		c.RadialBuild = v
 		c.MeanDiameter = inner + v
 		if c.InnerDiameter > 0 {
 			c.InnerDiameter = inner
@@ -51,32 +46,10 @@ func setParam(c *calc.Coil, key string, v float64) {
 		if c.OuterDiameter > 0 {
 			c.OuterDiameter = inner + 2*v
 		}
-	case "length":
-		c.Length = v
-	case "width":
-		c.Width = v
-	case "height":
-		c.Height = v
-	case "spacing":
-		c.Spacing = v
 	case "wire-outer-diameter":
-		c.Wire.Outer = v
 		c.Wire.OuterEstimated = false
-	case "turns":
-		c.Turns = int(math.Round(v))
-	case "current":
-		c.Current = v
-	case "voltage":
-		c.Voltage = v
-	case "duty":
-		c.Duty = v
-	case "on-time":
-		c.OnTime = v
-	case "switch-off":
-		c.SwitchOff = v
-	case "frequency":
-		c.Frequency = v
 	}
+	spec.SetCoilValue(c, key, v)
 }
 
 // RunSweep evaluates the design at every value of the spec's sweep.

@@ -357,33 +357,14 @@ func (p *parser) coilValue(ci *coilIn, e kv) (string, bool) {
 		if !ok {
 			return "", false
 		}
-		switch e.key {
-		case "mean-diameter":
-			c.MeanDiameter = v
-		case "inner-diameter":
-			c.InnerDiameter = v
-		case "outer-diameter":
-			c.OuterDiameter = v
-		case "length":
-			c.Length = v
-		case "radial-build":
-			c.RadialBuild = v
-		case "width":
-			c.Width = v
-		case "height":
-			c.Height = v
-		case "spacing":
-			c.Spacing = v
-		case "wire-outer-diameter":
-			c.Wire.Outer = v
-		}
+		SetCoilValue(c, e.key, v)
 		return units.Format(v, units.Length), true
 	case "turns":
 		n, ok := p.turns(e)
 		if !ok {
 			return "", false
 		}
-		c.Turns = n
+		SetCoilValue(c, e.key, float64(n))
 		return strconv.Itoa(n), true
 	case "wire":
 		gauge, bare, err := parseWire(e.value)
@@ -421,11 +402,7 @@ func (p *parser) coilValue(ci *coilIn, e kv) (string, bool) {
 		if !ok {
 			return "", false
 		}
-		if e.key == "current" {
-			c.Current = v
-		} else {
-			c.Voltage = v
-		}
+		SetCoilValue(c, e.key, v)
 		return units.Format(v, want), true
 	case "duty":
 		v, err := parsePercent(e.value)
@@ -433,7 +410,7 @@ func (p *parser) coilValue(ci *coilIn, e kv) (string, bool) {
 			p.errf(e.line, "duty: %v", err)
 			return "", false
 		}
-		c.Duty = v
+		SetCoilValue(c, e.key, v)
 		return units.FormatNumber(v), true
 	case "switch-off", "on-time", "driver-rating", "frequency", "former-mass", "former-heat-capacity", "winding-conductivity":
 		want := map[string]units.Dim{"switch-off": units.Time, "on-time": units.Time, "driver-rating": units.Voltage,
@@ -443,22 +420,7 @@ func (p *parser) coilValue(ci *coilIn, e kv) (string, bool) {
 		if !ok {
 			return "", false
 		}
-		switch e.key {
-		case "switch-off":
-			c.SwitchOff = v
-		case "on-time":
-			c.OnTime = v
-		case "driver-rating":
-			c.DriverRating = v
-		case "frequency":
-			c.Frequency = v
-		case "former-mass":
-			c.Former.Mass = v
-		case "former-heat-capacity":
-			c.Former.HeatCapacity = v
-		case "winding-conductivity":
-			c.WindingConductivity = v
-		}
+		SetCoilValue(c, e.key, v)
 		return units.Format(v, want), true
 	case "former-material":
 		m, ok := calc.FormerMaterialByName(e.value)
@@ -923,4 +885,57 @@ func (p *parser) checkHeating(ci *coilIn) {
 		p.errf(ci.lines["driver-rating"], "%s: driver-rating %s is not above the supply voltage %s", where,
 			ci.given["driver-rating"].value, ci.given["voltage"].value)
 	}
+}
+
+// SetCoilValue sets the coil field that a numeric coil key names to v, in
+// SI (a count for turns, a fraction for duty), and reports whether the key
+// is one of them. It assigns only that field: dimensions that follow from
+// others (the mean diameter from inner + outer) are derived by the caller.
+// The spec reader and the parameter sweep both set coil values through it.
+func SetCoilValue(c *calc.Coil, key string, v float64) bool {
+	switch key {
+	case "mean-diameter":
+		c.MeanDiameter = v
+	case "inner-diameter":
+		c.InnerDiameter = v
+	case "outer-diameter":
+		c.OuterDiameter = v
+	case "length":
+		c.Length = v
+	case "radial-build":
+		c.RadialBuild = v
+	case "width":
+		c.Width = v
+	case "height":
+		c.Height = v
+	case "spacing":
+		c.Spacing = v
+	case "wire-outer-diameter":
+		c.Wire.Outer = v
+	case "turns":
+		c.Turns = int(math.Round(v))
+	case "current":
+		c.Current = v
+	case "voltage":
+		c.Voltage = v
+	case "duty":
+		c.Duty = v
+	case "switch-off":
+		c.SwitchOff = v
+	case "on-time":
+		c.OnTime = v
+	case "driver-rating":
+		c.DriverRating = v
+	case "frequency":
+		c.Frequency = v
+	case "former-mass":
+		c.Former.Mass = v
+	case "former-heat-capacity":
+		c.Former.HeatCapacity = v
+	case "winding-conductivity":
+		c.WindingConductivity = v
+	default:
+		return false
+	}
+	return true
 }
