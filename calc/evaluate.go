@@ -6,10 +6,6 @@ import "math"
 // that bounds a pair's homogeneous region in CoilResult.
 const HomogeneityTolerance = 0.01
 
-// DipoleTolerance is the relative agreement of dipole and exact field that
-// defines CoilResult.DipoleRange.
-const DipoleTolerance = 0.01
-
 // Evaluate computes every result of design d. For each coil block: the
 // winding (LayOut), the steady operating point (OperatingPoint: resistance,
 // current, voltage, power, temperature, runaway), current density, mass and
@@ -110,7 +106,6 @@ func evaluateCoil(c Coil, cond Conditions) CoilResult {
 		cr.InsulationMargin = c.InsulationClass - cr.Temperature
 	}
 	cr.Dipole = DipoleDistances(c, w, op.Current)
-	cr.DipoleRange = cr.Dipole.Axis1
 	cr.Pair = AnalysePair(c, w, op.Current)
 	cr.PairForce = PairForce(c, w, op.Current)
 	cr.HomogeneityAxial, cr.HomogeneityRadial = math.NaN(), math.NaN()

@@ -55,7 +55,6 @@ type CoilResult struct {
 	TimeConstant     float64 // s, electrical L/R at the hot resistance
 	Energy           float64 // J, stored magnetic energy L I²/2
 	ThermalTau       float64 // s, time constant of the warm-up (linearised)
-	DipoleRange      float64 // m, on-axis distance beyond which the dipole field is within 1 % of the exact field
 	PairForce        float64 // N, axial force between the coils of a pair (+ apart, − together; 0 for other forms)
 	// HomogeneityAxial and HomogeneityRadial are the distances from a
 	// pair's centre, along its axis and in its mid-plane, within which the

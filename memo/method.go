@@ -127,11 +127,7 @@ func validityFlags(co calc.Coil, cr calc.CoilResult, d calc.Design) []validity {
 	}
 	// Dipole distance.
 	if co.Form != calc.Rectangle && !(co.Form == calc.Pair && co.Opposing) && R > 0 {
-		dr := cr.Dipole.Axis1
-		if math.IsNaN(dr) || dr == 0 {
-			dr = calc.DipoleRange(co, w, cr.Current, 0.01)
-		}
-		if !math.IsNaN(dr) && dr > 0 {
+		if dr := cr.Dipole.Axis1; !math.IsNaN(dr) && dr > 0 {
 			text := fmt.Sprintf("on the axis the point-dipole field $B = \\mu_0 m/(2\\pi z^3)$ is within 1 %% of the exact field beyond %s from the centre (%s mean radii)",
 				Eng(dr, "m", 3), Sig(dr/R, 3))
 			if p := cr.Dipole.Plane1; p > 0 && !math.IsNaN(p) {
