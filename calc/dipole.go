@@ -41,16 +41,23 @@ func DipoleRange(c Coil, w Winding, I, tol float64) float64 {
 // potential, Jackson, Classical Electrodynamics, 3rd ed., §5.5, taken at
 // θ = π/2), so its 1 % distance is about 10.6 a.
 func DipoleRangePlane(c Coil, w Winding, I, tol float64) float64 {
-	fr := CoilFrame(c.Axis)
-	dirs := []Vec{fr.E1}
-	if c.Form == Rectangle {
-		dirs = nil
-		for k := 0; k <= 6; k++ {
-			s, co := math.Sincos(float64(k) * math.Pi / 12)
-			dirs = append(dirs, fr.E1.Scale(co).Add(fr.E2.Scale(s)))
-		}
+	return dipoleRange(NewCoilSource(c, w, I), w, planeDirections(c, CoilFrame(c.Axis)), tol)
+}
+
+// planeDirections are the directions in a coil's mid-plane along which the
+// dipole distance is sought: one radius for a circular coil (axial
+// symmetry), and for a Rectangle every 15° from the width direction to the
+// height direction (its two mirror planes stand for the rest).
+func planeDirections(c Coil, fr Frame) []Vec {
+	if c.Form != Rectangle {
+		return []Vec{fr.E1}
 	}
-	return dipoleRange(NewCoilSource(c, w, I), w, dirs, tol)
+	var dirs []Vec
+	for k := 0; k <= 6; k++ {
+		s, co := math.Sincos(float64(k) * math.Pi / 12)
+		dirs = append(dirs, fr.E1.Scale(co).Add(fr.E2.Scale(s)))
+	}
+	return dirs
 }
 
 // DipoleReach holds the distances, m, from a coil block's centre beyond
@@ -74,14 +81,7 @@ type DipoleReach struct {
 func DipoleDistances(c Coil, w Winding, I float64) DipoleReach {
 	s := NewCoilSource(c, w, I)
 	fr := CoilFrame(c.Axis)
-	plane := []Vec{fr.E1}
-	if c.Form == Rectangle {
-		plane = nil
-		for k := 0; k <= 6; k++ {
-			sn, co := math.Sincos(float64(k) * math.Pi / 12)
-			plane = append(plane, fr.E1.Scale(co).Add(fr.E2.Scale(sn)))
-		}
-	}
+	plane := planeDirections(c, fr)
 	axis := []Vec{fr.U}
 	// Directions strictly between the axis and the plane.
 	var between []Vec

@@ -209,13 +209,20 @@ func (c *composer) summaryTable() doc.Table {
 		}
 		rows = append(rows, cells)
 	}
-	align := []doc.Align{doc.Left}
-	widths := []float64{2.2}
-	for range r.Coils {
-		align = append(align, doc.Right)
-		widths = append(widths, 1.5)
-	}
+	align, widths := perCoilColumns(len(r.Coils), 2.2, 1.5)
 	return doc.Table{Caption: "Headline results at the steady operating point", Header: head, Rows: rows, Align: align, Widths: widths}
+}
+
+// perCoilColumns lays out a table of a quantity column (relative width
+// first, left-aligned) and one right-aligned column of width each per coil.
+func perCoilColumns(coils int, first, each float64) ([]doc.Align, []float64) {
+	align := []doc.Align{doc.Left}
+	widths := []float64{first}
+	for range coils {
+		align = append(align, doc.Right)
+		widths = append(widths, each)
+	}
+	return align, widths
 }
 
 func (c *composer) limitsTable() doc.Table {

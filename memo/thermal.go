@@ -520,12 +520,7 @@ func (c *composer) thermalTable() doc.Table {
 			return Eng(cr.Moment.Norm(), "A·m²", 3) + " / " + Eng(cr.Heat.ColdMoment, "A·m²", 3)
 		}))
 	}
-	align := []doc.Align{doc.Left}
-	widths := []float64{2.4}
-	for range r.Coils {
-		align = append(align, doc.Right)
-		widths = append(widths, 1.6)
-	}
+	align, widths := perCoilColumns(len(r.Coils), 2.4, 1.6)
 	return doc.Table{Caption: "Thermal results at the steady operating point", Header: head, Rows: rows, Align: align, Widths: widths}
 }
 
