@@ -20,7 +20,7 @@ import (
 	"gonum.org/v1/plot/vg"
 	"gonum.org/v1/plot/vg/draw"
 
-	"coilmemo/memo/fonts"
+	"coilmemo/fonts"
 )
 
 // DrawFunc paints a figure of size w×h into c (origin bottom left).

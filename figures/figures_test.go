@@ -8,7 +8,7 @@ import (
 	"gonum.org/v1/plot"
 	"gonum.org/v1/plot/vg/recorder"
 
-	"coilmemo/memo/fonts"
+	"coilmemo/fonts"
 )
 
 func TestEngPrefix(t *testing.T) {

@@ -12,9 +12,9 @@ import (
 	"time"
 
 	"coilmemo/calc"
-	"coilmemo/memo/doc"
+	"coilmemo/doc"
 	"coilmemo/memo/pdf"
-	"coilmemo/memo/spec"
+	"coilmemo/spec"
 )
 
 // Version is the tool version printed in every memo's record section.

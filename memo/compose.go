@@ -7,7 +7,7 @@ import (
 	"time"
 
 	"coilmemo/calc"
-	"coilmemo/memo/doc"
+	"coilmemo/doc"
 	"coilmemo/templates"
 )
 

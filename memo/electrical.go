@@ -6,7 +6,7 @@ import (
 	"strings"
 
 	"coilmemo/calc"
-	"coilmemo/memo/doc"
+	"coilmemo/doc"
 	"coilmemo/templates"
 )
 

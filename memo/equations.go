@@ -5,7 +5,7 @@ import (
 	"math"
 	"strings"
 
-	"coilmemo/memo/doc"
+	"coilmemo/doc"
 )
 
 // Derivations. Every section that derives results (method, electrical,

@@ -8,7 +8,7 @@ import (
 
 	"golang.org/x/tools/txtar"
 
-	"coilmemo/memo/doc"
+	"coilmemo/doc"
 	"coilmemo/memo/mathlayout"
 )
 

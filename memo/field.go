@@ -6,8 +6,8 @@ import (
 	"strconv"
 
 	"coilmemo/calc"
+	"coilmemo/doc"
 	"coilmemo/figures"
-	"coilmemo/memo/doc"
 	"coilmemo/templates"
 
 	"gonum.org/v1/plot/vg"

@@ -6,7 +6,7 @@ import (
 	"strings"
 	"testing"
 
-	"coilmemo/memo/doc"
+	"coilmemo/doc"
 )
 
 // Every form and sense builds a complete PDF, the field section refers to

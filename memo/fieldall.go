@@ -7,8 +7,8 @@ import (
 	"gonum.org/v1/plot/vg"
 
 	"coilmemo/calc"
+	"coilmemo/doc"
 	"coilmemo/figures"
-	"coilmemo/memo/doc"
 )
 
 // allMapGrid is the node count along each side of the map of all coils.

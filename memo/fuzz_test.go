@@ -6,8 +6,8 @@ import (
 	"path/filepath"
 	"testing"
 
-	"coilmemo/memo/doc"
-	"coilmemo/memo/spec"
+	"coilmemo/doc"
+	"coilmemo/spec"
 )
 
 // FuzzEvaluate runs the whole pipeline — reader, calculations, checks,

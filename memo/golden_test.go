@@ -13,7 +13,7 @@ import (
 
 	"golang.org/x/tools/txtar"
 
-	"coilmemo/memo/doc"
+	"coilmemo/doc"
 )
 
 var update = flag.Bool("update", false, "rewrite the golden files in testdata/golden")

@@ -8,7 +8,7 @@ import (
 	"unicode/utf8"
 
 	"coilmemo/calc"
-	"coilmemo/memo/doc"
+	"coilmemo/doc"
 	"coilmemo/templates"
 )
 

@@ -4,7 +4,7 @@ import (
 	"fmt"
 	"path/filepath"
 
-	"coilmemo/memo/doc"
+	"coilmemo/doc"
 	"coilmemo/templates"
 )
 

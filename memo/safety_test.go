@@ -4,7 +4,7 @@ import (
 	"strings"
 	"testing"
 
-	"coilmemo/memo/doc"
+	"coilmemo/doc"
 )
 
 func cautionsFor(t *testing.T, coil, conditions string) []doc.Callout {

@@ -3,7 +3,7 @@ package memo
 import (
 	"io"
 
-	"coilmemo/memo/doc"
+	"coilmemo/doc"
 )
 
 // WriteSummary writes the memo's page 1 — identification, verdict,

@@ -8,9 +8,9 @@ import (
 
 	"coilmemo/calc"
 	"coilmemo/calc/units"
+	"coilmemo/doc"
 	"coilmemo/figures"
-	"coilmemo/memo/doc"
-	"coilmemo/memo/spec"
+	"coilmemo/spec"
 )
 
 // SweepStep is the whole design evaluated with the swept parameter at one

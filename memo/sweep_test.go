@@ -6,7 +6,7 @@ import (
 	"testing"
 
 	"coilmemo/calc"
-	"coilmemo/memo/doc"
+	"coilmemo/doc"
 )
 
 const sweepSpec = "# S\n\n```coil\nform = solenoid\nmean-diameter = 30 mm\nlength = 50 mm\nturns = 50\nwire = 0.5 mm\nwire-outer-diameter = 0.55 mm\ncurrent = 1 A\n```\n\n```sweep\nturns = 50 .. 110 step 20\n```\n"

@@ -7,8 +7,8 @@ import (
 	"strings"
 
 	"coilmemo/calc"
+	"coilmemo/doc"
 	"coilmemo/figures"
-	"coilmemo/memo/doc"
 	"coilmemo/templates"
 )
 

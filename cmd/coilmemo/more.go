@@ -13,7 +13,7 @@ import (
 	"time"
 
 	"coilmemo/memo"
-	"coilmemo/memo/spec"
+	"coilmemo/spec"
 )
 
 //go:embed starter.md

@@ -3,10 +3,10 @@ package mathlayout
 import (
 	"sync"
 
-	"coilmemo/memo/fonts"
+	"coilmemo/fonts"
 )
 
-// Face names an embedded font as memo/fonts registers it with the PDF
+// Face names an embedded font as fonts registers it with the PDF
 // writer: family "serif" or "sans", style "", "I", "B" or "BI".
 type Face struct{ Family, Style string }
 
@@ -18,7 +18,7 @@ type glyphMetrics struct {
 }
 
 // glyph returns the metrics of r in face fc, from the embedded fonts'
-// shared metrics (memo/fonts), in ems.
+// shared metrics (package fonts), in ems.
 func glyph(fc Face, r rune) glyphMetrics {
 	g, ok := fonts.Glyph(fc.Family, fc.Style, r)
 	if !ok {

@@ -4,7 +4,7 @@ import (
 	"fmt"
 	"strings"
 
-	"coilmemo/memo/doc"
+	"coilmemo/doc"
 )
 
 var (

@@ -13,7 +13,7 @@ import (
 	"gonum.org/v1/plot/font"
 	"gonum.org/v1/plot/vg"
 
-	"coilmemo/memo/fonts"
+	"coilmemo/fonts"
 )
 
 // affine is a 2-D affine map in the PDF convention:
@@ -338,7 +338,7 @@ func arcToCubics(center vg.Point, r vg.Length, start, sweep float64) [][3]vg.Poi
 }
 
 // FillString implements vg.Canvas: pt is the left end of the baseline.
-// A face parsed by memo/fonts is set in exactly that font; any other
+// A face parsed by package fonts is set in exactly that font; any other
 // typeface is set in the embedded family with the weight, slant and
 // mono/serif variant of its descriptor, so plots built with
 // fonts.Collection measure exactly what is drawn.

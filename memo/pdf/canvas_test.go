@@ -12,7 +12,7 @@ import (
 	"github.com/go-pdf/fpdf"
 	"gonum.org/v1/plot/vg"
 
-	"coilmemo/memo/fonts"
+	"coilmemo/fonts"
 )
 
 func newTestPDF() *fpdf.Fpdf {

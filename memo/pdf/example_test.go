@@ -7,8 +7,8 @@ import (
 	"testing"
 	"time"
 
+	"coilmemo/doc"
 	"coilmemo/figures"
-	"coilmemo/memo/doc"
 )
 
 // sampleField returns z, exact and dipole on-axis flux density for a

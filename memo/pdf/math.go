@@ -3,7 +3,7 @@ package pdf
 import (
 	"fmt"
 
-	"coilmemo/memo/doc"
+	"coilmemo/doc"
 	"coilmemo/memo/mathlayout"
 )
 

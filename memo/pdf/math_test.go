@@ -6,7 +6,7 @@ import (
 	"strings"
 	"testing"
 
-	"coilmemo/memo/doc"
+	"coilmemo/doc"
 	"coilmemo/memo/mathlayout"
 )
 

@@ -3,7 +3,7 @@ package pdf
 import (
 	"strings"
 
-	"coilmemo/memo/fonts"
+	"coilmemo/fonts"
 )
 
 // Text is measured here rather than through fpdf, whose measuring needs the

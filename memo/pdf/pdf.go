@@ -1,4 +1,4 @@
-// Package pdf typesets a memo document (memo/doc) as an A4 PDF.
+// Package pdf typesets a memo document (package doc) as an A4 PDF.
 //
 // The house style: DejaVu type embedded as subsets, one accent colour (a
 // deep teal) on neutral greys, numbered level-1 headings, a bordered title
@@ -20,7 +20,7 @@ import (
 
 	"github.com/go-pdf/fpdf"
 
-	"coilmemo/memo/doc"
+	"coilmemo/doc"
 )
 
 // Render typesets d and returns the PDF file.

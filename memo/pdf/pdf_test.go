@@ -8,7 +8,7 @@ import (
 	"strings"
 	"testing"
 
-	"coilmemo/memo/doc"
+	"coilmemo/doc"
 )
 
 func TestDeterministic(t *testing.T) {

@@ -5,7 +5,7 @@ import (
 
 	"github.com/go-pdf/fpdf"
 
-	"coilmemo/memo/fonts"
+	"coilmemo/fonts"
 )
 
 // rgb is a colour of the house style.

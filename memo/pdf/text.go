@@ -5,7 +5,7 @@ import (
 	"unicode"
 	"unicode/utf8"
 
-	"coilmemo/memo/doc"
+	"coilmemo/doc"
 	"coilmemo/memo/mathlayout"
 )
 

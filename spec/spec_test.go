@@ -8,7 +8,7 @@ import (
 	"testing"
 
 	"coilmemo/calc"
-	"coilmemo/memo/doc"
+	"coilmemo/doc"
 )
 
 // coil is a valid coil block body; tests splice broken lines into it.

@@ -15,7 +15,7 @@ import (
 
 	"coilmemo/calc"
 	"coilmemo/calc/units"
-	"coilmemo/memo/doc"
+	"coilmemo/doc"
 
 	"github.com/yuin/goldmark"
 	"github.com/yuin/goldmark/ast"
