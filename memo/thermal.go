@@ -9,6 +9,7 @@ import (
 	"coilmemo/calc"
 	"coilmemo/doc"
 	"coilmemo/figures"
+	"coilmemo/format"
 	"coilmemo/templates"
 )
 
@@ -282,17 +283,7 @@ func formerName(m string) string {
 }
 
 // duration writes a time in s, min or h as suits it.
-func duration(t float64) string {
-	switch {
-	case math.IsNaN(t):
-		return "n/a"
-	case t >= 2*3600:
-		return Sig(t/3600, 3) + " h"
-	case t >= 120:
-		return Sig(t/60, 3) + " min"
-	}
-	return Eng(t, "s", 3)
-}
+func duration(t float64) string { return format.Duration(t, 3) }
 
 // durationQ is duration in the notation.
 func durationQ(t float64) string {
