@@ -1,6 +1,7 @@
 package memo
 
 import (
+	"coilmemo/analysis"
 	"fmt"
 	"math"
 	"strings"
@@ -13,7 +14,7 @@ import (
 
 // composer accumulates blocks and numbers figures.
 type composer struct {
-	j        *Job
+	j        *analysis.Study
 	blocks   []doc.Block
 	figure   int
 	cautions []doc.Callout // computed once: page 1 lists them, the Safety section gives them
@@ -36,7 +37,7 @@ func (c *composer) fig(f doc.Figure) int {
 // order is the memo's: identification and answers on page 1, then purpose,
 // inputs, assumptions, method and results, field, verification, safety,
 // record.
-func Compose(j *Job) *doc.Document {
+func Compose(j *analysis.Study) *doc.Document {
 	s := j.Spec
 	m := s.Memo
 	title := m.Title

@@ -1,6 +1,7 @@
 package memo
 
 import (
+	"coilmemo/analysis"
 	"fmt"
 	"math"
 	"strings"
@@ -33,7 +34,7 @@ func (c *composer) electrical() {
 			continue
 		}
 		c.heading(2, fmt.Sprintf("Coil %q", co.Name))
-		c.derive(selfInductanceSteps(co, cr)...)
+		c.derive(selfInductanceSteps(co, cr, &c.j.Coils[i])...)
 		if co.Form == calc.Pair && !math.IsNaN(cr.PairForce) && cr.PairForce != 0 {
 			how := "they attract"
 			if cr.PairForce > 0 {
@@ -53,50 +54,28 @@ func (c *composer) electrical() {
 	c.gradientForce()
 }
 
-// coilInductanceParts returns, for a pair, the self-inductance of one of
-// its coils and the mutual inductance of the two (L = 2 L₁ ± 2 M); for
-// other forms L₁ is the block's inductance and M is 0.
-func coilInductanceParts(co calc.Coil, cr calc.CoilResult) (L1, M float64) {
-	if co.Form != calc.Pair {
-		return cr.Inductance, 0
-	}
-	one := co
-	one.Form = calc.Solenoid
-	if cr.Winding.Thin {
-		one.Form = calc.Loop
-	}
-	L1 = calc.CoilInductance(one, cr.Winding)
-	M = (cr.Inductance - 2*L1) / 2
-	if co.Opposing {
-		M = -M
-	}
-	return L1, M
-}
-
 // selfInductanceSteps derive the self-inductance by the method used for
 // the winding, with the independent formula beside it where one applies.
-func selfInductanceSteps(co calc.Coil, cr calc.CoilResult) []Step {
+func selfInductanceSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []Step {
 	w := cr.Winding
+	ip := cs.Inductance
 	var steps []Step
 	add := func(s ...Step) { steps = append(steps, s...) }
-	L1, M := coilInductanceParts(co, cr)
+	L1, M := ip.L1, ip.M
 	n := co.Turns
 	a := co.MeanDiameter / 2
 	one := ""
 	if co.Form == calc.Pair {
 		one = ", one coil of the pair"
 	}
-	outer := co.Wire.Outer
-	if !(outer > 0) {
-		outer = co.Wire.Bare
-	}
+	outer := cs.Outer
 	switch {
 	case co.Form == calc.Rectangle:
 		add(Step{What: "Self-inductance of N rectangular turns of round wire bundled to a round section: N² times the single turn's, from the partial inductances of its four sides (Grover, Inductance Calculations, 1946)",
 			Symbolic: `L = N^2 L_{\mathrm{rect}}(W, H, r_b)`, Result: Q(cr.Inductance, "H", 4)})
 		return steps
 	case w.Thin:
-		rb := calc.BundleDiameter(outer, n) / 2
+		rb := ip.BundleRadius
 		add(Step{What: "Radius of the round bundle of N wires, hexagonally packed",
 			Symbolic: `r_b = \frac{d_o}{2} \sqrt{\frac{N}{0.9069}}`,
 			Numbers:  fmt.Sprintf(`\frac{%s}{2} \sqrt{\frac{%d}{0.9069}}`, Q(outer, "m", 4), n), Result: Q(rb, "m", 4)})
@@ -108,11 +87,7 @@ func selfInductanceSteps(co calc.Coil, cr calc.CoilResult) []Step {
 		l := co.Length
 		D := 2 * a
 		p := l / float64(n)
-		m := 4 * a * a / (4*a*a + l*l)
-		kN := calc.NagaokaCoefficient(a, l)
-		Ls := calc.SolenoidInductance(a, l, n)
-		A := calc.RosaA(p, co.Wire.Bare)
-		B := calc.RosaB(n)
+		m, kN, Ls, A, B := ip.K2, ip.Nagaoka, ip.Sheet, ip.RosaA, ip.RosaB
 		add(Step{What: "Modulus of the complete elliptic integrals of the current sheet (radius a to the wire centres, length ℓ)",
 			Symbolic: `k^2 = \frac{4a^2}{4a^2 + \ell^2}`,
 			Numbers:  fmt.Sprintf(`\frac{4 \cdot %s^2}{4 \cdot %s^2 + %s^2}`, Paren(Q(a, "m", 4)), Paren(Q(a, "m", 4)), Paren(Q(l, "m", 4))), Result: N(m, 5)})
@@ -131,7 +106,7 @@ func selfInductanceSteps(co calc.Coil, cr calc.CoilResult) []Step {
 			Symbolic: `L_1 = L_s - \mu_0 a N (A + B)`,
 			Numbers:  fmt.Sprintf(`%s - \mu_0 \cdot %s \cdot %d \cdot \left(%s + %s\right)`, Q(Ls, "H", 4), Q(a, "m", 4), n, N(A, 4), N(B, 4)),
 			Result:   Q(L1, "H", 4)})
-		wh := calc.WheelerInductance(a, l, n)
+		wh := ip.Wheeler
 		rng := fmt.Sprintf("inside its range, so it should agree within about 1 %%; it differs by %s %%", Sig(100*(wh/Ls-1), 2))
 		if l/D < calc.WheelerValidRatio {
 			rng = fmt.Sprintf("outside its range, so it is no check here (it differs by %s %%)", Sig(100*(wh/Ls-1), 2))
@@ -142,7 +117,7 @@ func selfInductanceSteps(co calc.Coil, cr calc.CoilResult) []Step {
 			Result:   Q(wh, "H", 4)})
 	default:
 		method := "every pair of turns summed"
-		if calc.MultilayerByCells(w) {
+		if ip.ByCells {
 			method = "so many turns that they are grouped into cells of g × g turns, each cell a filament at its centroid with the self-inductance of a square section of its size (accurate to about 10⁻³)"
 		}
 		add(Step{What: fmt.Sprintf("Self-inductance of the multilayer winding (%d layers of up to %d turns): Maxwell's mutual inductance of every pair of turn filaments i ≠ j, and each turn's own round-wire inductance μ0 r (ln(8r/ρ) − 7/4) for i = j (Maxwell 1873; Grover 1946, ch. 1); %s%s",
@@ -150,7 +125,7 @@ func selfInductanceSteps(co calc.Coil, cr calc.CoilResult) []Step {
 			Symbolic: `L_1 = \sum_{i=1}^{N} \sum_{j=1}^{N} M_{ij}`, Result: Q(L1, "H", 4)})
 		b := co.Length
 		cb := co.RadialBuild
-		if lw := calc.WheelerMultilayerInductance(a, b, cb, n); !math.IsNaN(lw) {
+		if lw := ip.WheelerMultilayer; !math.IsNaN(lw) {
 			terms := []float64{6 * a, 9 * b, 10 * cb}
 			lo, hi := math.Min(terms[0], math.Min(terms[1], terms[2])), math.Max(terms[0], math.Max(terms[1], terms[2]))
 			rng := "its three terms 6a, 9b and 10c are comparable, so about 1 % is expected"
@@ -386,146 +361,41 @@ func (c *composer) gradientForce() {
 	}
 }
 
-// roundWireCheck verifies a single-layer coil's inductance — Lorenz's
-// current sheet less Rosa's round-wire correction — against the
-// independent sum over every pair of turn filaments (Maxwell's formula,
-// each turn's own round-wire inductance). Rosa's correction neglects the
-// curvature of the turns; on test coils with pitches up to a tenth of the
-// radius the two agree to a few parts in 10⁴, so 0.5 % is allowed.
-func roundWireCheck(c calc.Coil, cr calc.CoilResult) []Check {
-	w := cr.Winding
-	if c.Form != calc.Solenoid || c.RadialBuild > 0 || w.Thin || w.LayerCount != 1 || math.IsNaN(cr.Inductance) || !(c.Wire.Bare > 0) {
-		return nil
-	}
-	L1 := calc.RoundWireSolenoidInductance(c.MeanDiameter/2, c.Length, c.Turns, c.Wire.Bare)
-	return []Check{newCheck(c.Name, "single-layer inductance", "Lorenz–Nagaoka current sheet less Rosa's round-wire correction",
-		"sum over every pair of turns (Maxwell's formula; turn self-inductance of round wire)", L1, calc.TurnSumInductance(w, c.Wire.Bare/2), "H", 0.005)}
-}
-
-// electricalCautions are the switch-off caution with its numbers and, at a
-// drive frequency, the caution where the d.c. model stops holding.
-func electricalCautions(co calc.Coil, cr calc.CoilResult, name string) []doc.Callout {
-	var out []doc.Callout
+// switchOffCaution words the finding of an unsuppressed switch-off spike
+// with the remedies the analysis sized.
+func switchOffCaution(f analysis.Finding, cr calc.CoilResult, name string) doc.Callout {
 	s := cr.Switch
-	// The spike at the stated switch-off time, or at 1 µs (a fast
-	// semiconductor switch) when none is stated; a caution when it passes
-	// the extra-low-voltage bound or the driver's rating.
-	tOff, assumed := s.SwitchOff, false
-	if !(tOff > 0) {
-		tOff, assumed = 1e-6, true
+	spike := fmt.Sprintf("No switch-off time is stated; a semiconductor switch opening in about %s with no suppression would see about %s.", Eng(f.SwitchOff, "s", 1), Eng(f.Value, "V", 3))
+	if !f.Assumed {
+		spike = fmt.Sprintf("A switch that opens in %s with no suppression would see about %s.", Eng(f.SwitchOff, "s", 3), Eng(f.Value, "V", 3))
 	}
-	spikeV := s.Energy*2/math.Abs(cr.Current)/tOff + s.Supply
-	bound := ELV
-	if s.ClampFromRating {
-		bound = math.Min(bound, s.Clamp)
+	diode := fmt.Sprintf("A freewheeling diode across the coil, rated for at least %s, keeps the switch near the %s supply; the current then decays to 10 %% in %s.",
+		Eng(math.Abs(cr.Current), "A", 3), Eng(s.Supply, "V", 3), Eng(s.DiodeTime10, "s", 3))
+	resistor := ""
+	if math.IsNaN(s.Clamp) {
+		resistor = "A resistor in series with the diode speeds the decay; state the driver's voltage rating to size it."
 	}
-	if e := s.Energy; !math.IsNaN(e) && e > 0 && spikeV > bound {
-		spike := fmt.Sprintf("No switch-off time is stated; a semiconductor switch opening in about 1 µs with no suppression would see about %s.", Eng(spikeV, "V", 3))
-		if !assumed {
-			spike = fmt.Sprintf("A switch that opens in %s with no suppression would see about %s.", Eng(s.SwitchOff, "s", 3), Eng(s.Spike, "V", 3))
-		}
-		diode := fmt.Sprintf("A freewheeling diode across the coil, rated for at least %s, keeps the switch near the %s supply; the current then decays to 10 %% in %s.",
-			Eng(math.Abs(cr.Current), "A", 3), Eng(s.Supply, "V", 3), Eng(s.DiodeTime10, "s", 3))
-		resistor := ""
-		if math.IsNaN(s.Clamp) {
-			resistor = "A resistor in series with the diode speeds the decay; state the driver's voltage rating to size it."
-		}
-		if !math.IsNaN(s.Resistor) {
-			resistor = fmt.Sprintf("For a faster release, a resistor of at most %s in series with the diode keeps the switch within %s and shortens the decay to %s.",
-				Eng(s.Resistor, "Ω", 3), Eng(s.Clamp, "V", 3), Eng(s.ResistorTime10, "s", 3))
-		}
-		out = append(out, doc.Callout{Severity: doc.Caution, Title: "Switch-off voltage, " + name,
-			Spans: []doc.Span{{Text: templates.Text("caution-inductive", map[string]string{
-				"Energy": Eng(e, "J", 3), "Spike": spike, "Diode": diode, "Resistor": resistor})}}})
+	if !math.IsNaN(s.Resistor) {
+		resistor = fmt.Sprintf("For a faster release, a resistor of at most %s in series with the diode keeps the switch within %s and shortens the decay to %s.",
+			Eng(s.Resistor, "Ω", 3), Eng(s.Clamp, "V", 3), Eng(s.ResistorTime10, "s", 3))
 	}
-	if a := cr.AC; a.Frequency > 0 && (a.Reactive || a.SkinLimited) {
-		var why []string
-		if a.Reactive {
-			why = append(why, fmt.Sprintf("the reactance (%s) is %s times the resistance, so the current follows the impedance (%s at the stated drive)",
-				Eng(a.Reactance, "Ω", 3), Sig(a.Reactance/cr.RHot, 2), Eng(a.Current, "A", 3)))
-		}
-		if a.SkinLimited {
-			why = append(why, fmt.Sprintf("the skin depth (%s) is less than the wire radius (%s), so the a.c. resistance and the losses exceed the d.c. values", Eng(a.SkinDepth, "m", 3), Eng(a.WireRadius, "m", 3)))
-		}
-		out = append(out, doc.Callout{Severity: doc.Caution, Title: "A.c. drive, " + name,
-			Spans: []doc.Span{{Text: templates.Text("caution-ac", map[string]string{"Frequency": Eng(a.Frequency, "Hz", 3), "Why": strings.Join(why, "; and ")})}}})
-	}
-	return out
+	return doc.Callout{Severity: doc.Caution, Title: "Switch-off voltage, " + name,
+		Spans: []doc.Span{{Text: templates.Text("caution-inductive", map[string]string{
+			"Energy": Eng(s.Energy, "J", 3), "Spike": spike, "Diode": diode, "Resistor": resistor})}}}
 }
 
-// CoilHeatSwitch holds a coil's heating, switching and a.c. keys of the
-// JSON report (embedded in CoilReport; keys only ever added). Null where a
-// figure does not apply: switch_off_voltage_V without switch-off,
-// skin_depth_m, impedance_ohm and current_ac_A without frequency, force_N
-// without field-gradient, pair_force_N for anything but a pair,
-// time_to_limit_s when the class is never reached, cycle figures without
-// on-time.
-type CoilHeatSwitch struct {
-	SurfaceTemperature Num `json:"surface_temperature_C"`
-	MeanTemperature    Num `json:"mean_temperature_C"`
-	TimeToLimit        Num `json:"time_to_limit_s"`
-	CyclePeak          Num `json:"cycle_peak_C"`
-	CycleTrough        Num `json:"cycle_trough_C"`
-	MomentCold         Num `json:"moment_cold_A_m2"`
-	HeatCapacity       Num `json:"heat_capacity_J_K"`
-	TimeConstant       Num `json:"time_constant_s"`
-	RiseTime           Num `json:"rise_time_s"`
-	Energy             Num `json:"energy_J"`
-	SwitchOffVoltage   Num `json:"switch_off_voltage_V"`
-	SuppressionR       Num `json:"suppression_resistor_ohm"`
-	SkinDepth          Num `json:"skin_depth_m"`
-	Impedance          Num `json:"impedance_ohm"`
-	CurrentAC          Num `json:"current_ac_A"`
-	Force              Num `json:"force_N"`
-	PairForce          Num `json:"pair_force_N"`
-}
-
-func coilHeatSwitch(co calc.Coil, cr calc.CoilResult) CoilHeatSwitch {
-	h, s, a := cr.Heat, cr.Switch, cr.AC
-	pair := math.NaN()
-	if co.Form == calc.Pair {
-		pair = cr.PairForce
+// acCaution words the finding that the d.c. model does not hold at the
+// drive frequency.
+func acCaution(cr calc.CoilResult, name string) doc.Callout {
+	a := cr.AC
+	var why []string
+	if a.Reactive {
+		why = append(why, fmt.Sprintf("the reactance (%s) is %s times the resistance, so the current follows the impedance (%s at the stated drive)",
+			Eng(a.Reactance, "Ω", 3), Sig(a.Reactance/cr.RHot, 2), Eng(a.Current, "A", 3)))
 	}
-	return CoilHeatSwitch{
-		SurfaceTemperature: Num(Celsius(h.Steady.Surface)), MeanTemperature: Num(Celsius(h.Steady.Mean)),
-		TimeToLimit: Num(h.TimeToLimit), CyclePeak: Num(Celsius(h.Cycle.PeakHot)), CycleTrough: Num(Celsius(h.Cycle.Trough)),
-		MomentCold: Num(h.ColdMoment), HeatCapacity: Num(h.HeatCapacity),
-		TimeConstant: Num(s.TimeConstant), RiseTime: Num(s.RiseTime), Energy: Num(s.Energy),
-		SwitchOffVoltage: Num(s.Spike), SuppressionR: Num(s.Resistor),
-		SkinDepth: Num(a.SkinDepth), Impedance: Num(a.Impedance), CurrentAC: Num(a.Current),
-		Force: Num(cr.GradientForce), PairForce: Num(pair),
+	if a.SkinLimited {
+		why = append(why, fmt.Sprintf("the skin depth (%s) is less than the wire radius (%s), so the a.c. resistance and the losses exceed the d.c. values", Eng(a.SkinDepth, "m", 3), Eng(a.WireRadius, "m", 3)))
 	}
-}
-
-// Interactions holds the design's coupling keys of the JSON report
-// (embedded in Report).
-type Interactions struct {
-	Couplings     []CouplingReport `json:"couplings"`
-	GradientForce Num              `json:"gradient_force_N"`
-}
-
-// CouplingReport is the mutual inductance of two coil blocks and the force
-// on the second from the first; the mutual inductance is null unless they
-// are coaxial, force_method says "coaxial" (exact) or "dipole" (far-field
-// approximation).
-type CouplingReport struct {
-	Coils       [2]string `json:"coils"`
-	Coaxial     bool      `json:"coaxial"`
-	Mutual      Num       `json:"mutual_inductance_H"`
-	K           Num       `json:"coupling_coefficient"`
-	Force       [3]Num    `json:"force_N"`
-	ForceMethod string    `json:"force_method"`
-}
-
-func interactions(d calc.Design, r calc.Results) Interactions {
-	out := Interactions{Couplings: []CouplingReport{}, GradientForce: Num(r.GradientForce)}
-	for _, cp := range r.Couplings {
-		m := "dipole"
-		if cp.Exact {
-			m = "coaxial"
-		}
-		out.Couplings = append(out.Couplings, CouplingReport{Coils: [2]string{d.Coils[cp.A].Name, d.Coils[cp.B].Name},
-			Coaxial: cp.Coaxial, Mutual: Num(cp.Mutual), K: Num(cp.K), Force: vec(cp.Force), ForceMethod: m})
-	}
-	return out
+	return doc.Callout{Severity: doc.Caution, Title: "A.c. drive, " + name,
+		Spans: []doc.Span{{Text: templates.Text("caution-ac", map[string]string{"Frequency": Eng(a.Frequency, "Hz", 3), "Why": strings.Join(why, "; and ")})}}}
 }

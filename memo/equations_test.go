@@ -1,6 +1,7 @@
 package memo
 
 import (
+	"coilmemo/analysis"
 	"os"
 	"path/filepath"
 	"strings"
@@ -58,11 +59,11 @@ func walkBlocks(bs []doc.Block, f func(doc.Block)) {
 // typesetter reads: a mistake would show in the PDF as raw source.
 func TestEquationsAreValidNotation(t *testing.T) {
 	for name, src := range specsForTests(t) {
-		j, diags := Evaluate(filepath.Base(name), src)
+		j, diags := evaluate(filepath.Base(name), src)
 		if len(diags) > 0 {
 			t.Fatalf("%s: %v", name, diags)
 		}
-		d := j.Document()
+		d := Document(j)
 		n := 0
 		check := func(s string) {
 			n++
@@ -126,7 +127,7 @@ func TestQuantityNotation(t *testing.T) {
 // Equations are numbered within their section, and each step reads
 // symbol → numbers → result.
 func TestDeriveNumbersWithinSections(t *testing.T) {
-	c := &composer{j: &Job{}}
+	c := &composer{j: &analysis.Study{}}
 	c.heading(1, "First")
 	c.derive(Step{What: "a", Symbolic: "a = b", Numbers: "1 + 2", Result: `3\,\unit{m}`})
 	c.heading(1, "Second")

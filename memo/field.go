@@ -1,6 +1,7 @@
 package memo
 
 import (
+	"coilmemo/analysis"
 	"fmt"
 	"math"
 	"strconv"
@@ -12,53 +13,6 @@ import (
 
 	"gonum.org/v1/plot/vg"
 )
-
-// axisProfile samples the exact field of a coil block along its own axis
-// and the dipole field of its moment at the same points.
-type axisProfile struct {
-	Z, Exact, Dipole []float64
-	Dipole1pc        float64 // m, NaN when not found
-}
-
-func profileOnAxis(co calc.Coil, cr calc.CoilResult, n int) axisProfile {
-	w := cr.Winding
-	fr := calc.CoilFrame(co.Axis)
-	src := calc.NewCoilSource(co, w, cr.Current)
-	size := axialSize(co)
-	p := axisProfile{Dipole1pc: cr.Dipole.Axis1}
-	zmax := 6 * size
-	if !math.IsNaN(p.Dipole1pc) {
-		zmax = math.Max(zmax, 1.5*p.Dipole1pc)
-	}
-	for i := 0; i < n; i++ {
-		z := -zmax + 2*zmax*float64(i)/float64(n-1)
-		pt := co.Centre.Add(fr.U.Scale(z))
-		p.Z = append(p.Z, z)
-		p.Exact = append(p.Exact, src.At(pt).Norm())
-		dip := math.NaN()
-		// The dipole curve is drawn only outside the winding, where the
-		// comparison means something.
-		if math.Abs(z) > size && cr.Moment.Norm() > 0 {
-			dip = calc.DipoleField(cr.Moment, fr.U.Scale(z)).Norm()
-		}
-		p.Dipole = append(p.Dipole, dip)
-	}
-	return p
-}
-
-// axialSize is the larger of a coil block's outer radius and its axial
-// half-extent.
-func axialSize(co calc.Coil) float64 {
-	R := co.MeanDiameter/2 + co.RadialBuild/2
-	if co.Form == calc.Rectangle {
-		R = math.Max(co.Width, co.Height) / 2
-	}
-	size := math.Max(R, co.Length/2)
-	if co.Form == calc.Pair {
-		size = math.Max(size, math.Abs(co.Spacing)/2+co.Length/2)
-	}
-	return size
-}
 
 // field reports the field: probes, then coil by coil the winding sketch,
 // the on-axis profile, the field map, the dipole distances and, for
@@ -87,12 +41,13 @@ func (c *composer) field() {
 	for i, co := range d.Coils {
 		cr := r.Coils[i]
 		c.heading(2, fmt.Sprintf("Field of coil %q", co.Name))
-		c.crossSection(co, cr)
-		c.axisFigure(co, cr)
-		c.fieldMap(co, cr)
+		cs := &c.j.Coils[i]
+		c.crossSection(co, cr, cs)
+		c.axisFigure(co, cr, cs)
+		c.fieldMap(co, cr, cs)
 		c.dipoleDistances(co, cr)
 		if co.Form == calc.Pair {
-			c.pairRegion(co, cr)
+			c.pairRegion(co, cr, cs)
 		}
 	}
 	c.allCoilsMap()
@@ -115,58 +70,12 @@ func trimDot(s string) string {
 	return s
 }
 
-// envelope is a winding's cross-section in its own frame: radii r0…r1 and
-// axial extent z0…z1 about its centre, m; round for a thin coil's bundle.
-type envelope struct {
-	r0, r1, z0, z1 float64
-	round          bool
-}
-
-// windingEnvelope is the cross-section of one coil (one of a pair) as
-// given: a thin coil's round bundle (hexagonal packing) on the mean
-// radius; one layer of wire over the length; or the length × radial build.
-func windingEnvelope(co calc.Coil, w calc.Winding) envelope {
-	outer := co.Wire.Outer
-	if !(outer > 0) {
-		outer = co.Wire.Bare
-	}
-	rm := co.MeanDiameter / 2
-	switch {
-	case w.Thin:
-		b := calc.BundleDiameter(outer, co.Turns)
-		return envelope{r0: rm - b/2, r1: rm + b/2, z0: -b / 2, z1: b / 2, round: true}
-	case co.RadialBuild <= 0:
-		return envelope{r0: rm - outer/2, r1: rm + outer/2, z0: -co.Length / 2, z1: co.Length / 2}
-	}
-	rin := rm - co.RadialBuild/2
-	if co.InnerDiameter > 0 {
-		rin = co.InnerDiameter / 2
-	}
-	L := co.Length
-	if !(L > 0) {
-		L = outer
-	}
-	return envelope{r0: rin, r1: rin + co.RadialBuild, z0: -L / 2, z1: L / 2}
-}
-
-// placements are the axial positions of a block's coils in its frame.
-func placements(co calc.Coil) []float64 {
-	if co.Form == calc.Pair {
-		return []float64{-math.Abs(co.Spacing) / 2, math.Abs(co.Spacing) / 2}
-	}
-	return []float64{0}
-}
-
 // crossSection adds the dimensioned sketch of the winding.
-func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult) {
+func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) {
 	w := cr.Winding
 	n := c.figure + 1
 	if co.Form == calc.Rectangle {
-		outer := co.Wire.Outer
-		if !(outer > 0) {
-			outer = co.Wire.Bare
-		}
-		b := calc.BundleDiameter(outer, co.Turns)
+		b := cs.Bundle
 		c.para(fmt.Sprintf("Figure %d shows the coil in plan, to scale: %d turns in a bundle of about %s on a mean turn of %s × %s.",
 			n, co.Turns, mmText(b), mmText(co.Width), mmText(co.Height)))
 		c.fig(doc.Figure{Caption: fmt.Sprintf("Coil %q in plan, looking along its axis (to scale; dimensions to the mean turn)", co.Name),
@@ -177,36 +86,36 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult) {
 			Summary: fmt.Sprintf("Plan: %s × %s mean turn, bundle ≈ %s.", mmText(co.Width), mmText(co.Height), mmText(b))})
 		return
 	}
-	e := windingEnvelope(co, w)
-	if !(e.r1 > 0) || math.IsInf(e.r1, 0) {
+	e := cs.Envelope
+	if !(e.R1 > 0) || math.IsInf(e.R1, 0) {
 		return // nothing to draw
 	}
 	var sd figures.SketchData
-	for _, z := range placements(co) {
-		sd.Sections = append(sd.Sections, figures.Section{X0: z + e.z0, X1: z + e.z1, Y0: e.r0, Y1: e.r1, Round: e.round})
+	for _, z := range cs.Placements {
+		sd.Sections = append(sd.Sections, figures.Section{X0: z + e.Z0, X1: z + e.Z1, Y0: e.R0, Y1: e.R1, Round: e.Round})
 	}
 	rm := co.MeanDiameter / 2
 	var desc string
 	switch {
 	case w.Thin:
 		sd.Dimensions = append(sd.Dimensions, figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + mmText(co.MeanDiameter) + " mean"})
-		note := fmt.Sprintf("%d turns, bundle ≈ Ø %s", co.Turns, mmText(e.r1-e.r0))
-		sd.Notes = append(sd.Notes, figures.Note{X: sd.Sections[len(sd.Sections)-1].X1, Y: e.r1, Text: note})
-		desc = fmt.Sprintf("all %d turns in one round bundle of about %s on the mean diameter", co.Turns, mmText(e.r1-e.r0))
+		note := fmt.Sprintf("%d turns, bundle ≈ Ø %s", co.Turns, mmText(e.R1-e.R0))
+		sd.Notes = append(sd.Notes, figures.Note{X: sd.Sections[len(sd.Sections)-1].X1, Y: e.R1, Text: note})
+		desc = fmt.Sprintf("all %d turns in one round bundle of about %s on the mean diameter", co.Turns, mmText(e.R1-e.R0))
 	case co.RadialBuild <= 0:
 		sd.Dimensions = append(sd.Dimensions,
 			figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + mmText(co.MeanDiameter) + " mean"},
-			figures.Dimension{Kind: figures.Axial, A: e.z0 + placements(co)[0], B: e.z1 + placements(co)[0], Label: mmText(co.Length)})
+			figures.Dimension{Kind: figures.Axial, A: e.Z0 + cs.Placements[0], B: e.Z1 + cs.Placements[0], Label: mmText(co.Length)})
 		desc = fmt.Sprintf("%d turns in one layer over %s", co.Turns, mmText(co.Length))
 	default:
 		sd.Dimensions = append(sd.Dimensions,
-			figures.Dimension{Kind: figures.Diameter, A: e.r0, Label: "Ø " + mmText(2*e.r0) + " inner"},
+			figures.Dimension{Kind: figures.Diameter, A: e.R0, Label: "Ø " + mmText(2*e.R0) + " inner"},
 			figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + mmText(co.MeanDiameter) + " mean"},
-			figures.Dimension{Kind: figures.Diameter, A: e.r1, Label: "Ø " + mmText(2*e.r1) + " outer"},
-			figures.Dimension{Kind: figures.Axial, A: e.z0 + placements(co)[0], B: e.z1 + placements(co)[0], Label: mmText(e.z1 - e.z0)},
-			figures.Dimension{Kind: figures.Radial, A: e.r0, B: e.r1, Label: mmText(co.RadialBuild)})
+			figures.Dimension{Kind: figures.Diameter, A: e.R1, Label: "Ø " + mmText(2*e.R1) + " outer"},
+			figures.Dimension{Kind: figures.Axial, A: e.Z0 + cs.Placements[0], B: e.Z1 + cs.Placements[0], Label: mmText(e.Z1 - e.Z0)},
+			figures.Dimension{Kind: figures.Radial, A: e.R0, B: e.R1, Label: mmText(co.RadialBuild)})
 		desc = fmt.Sprintf("%d turns in %d layers of up to %d turns, %s long with a radial build of %s",
-			co.Turns, w.LayerCount, w.TurnsPerLayer, mmText(e.z1-e.z0), mmText(co.RadialBuild))
+			co.Turns, w.LayerCount, w.TurnsPerLayer, mmText(e.Z1-e.Z0), mmText(co.RadialBuild))
 	}
 	if co.Form == calc.Pair {
 		s := math.Abs(co.Spacing)
@@ -222,29 +131,29 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult) {
 }
 
 // sketchHeight fits the sketch's height to its proportions.
-func sketchHeight(co calc.Coil, e envelope) vg.Length {
-	zs := e.z1 - e.z0
+func sketchHeight(co calc.Coil, e analysis.Envelope) vg.Length {
+	zs := e.Z1 - e.Z0
 	if co.Form == calc.Pair {
 		zs += math.Abs(co.Spacing)
 	}
-	zs = math.Max(zs, 0.6*e.r1)
+	zs = math.Max(zs, 0.6*e.R1)
 	// Data width about 110 mm on the page.
-	h := vg.Length(110*e.r1/zs)*vg.Millimeter + 22*vg.Millimeter
+	h := vg.Length(110*e.R1/zs)*vg.Millimeter + 22*vg.Millimeter
 	top := 95 * vg.Millimeter
-	if e.round {
+	if e.Round {
 		top = 50 * vg.Millimeter // a bundle on a diameter: little to see
 	}
 	return max(min(h, top), 50*vg.Millimeter)
 }
 
 // axisFigure adds the on-axis profile with the dipole overlay.
-func (c *composer) axisFigure(co calc.Coil, cr calc.CoilResult) {
-	p := profileOnAxis(co, cr, 241)
+func (c *composer) axisFigure(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) {
+	p := cs.Axis
 	caption := fmt.Sprintf("Flux density on the axis of coil %q: exact field (solid) and point-dipole approximation (dashed)", co.Name)
 	if cr.Moment.Norm() == 0 {
 		caption = fmt.Sprintf("Flux density on the axis of coil %q (exact field; the coil has no dipole moment)", co.Name)
 	}
-	summary := fmt.Sprintf("|B| on axis from %s to %s; peak %s.", Eng(p.Z[0], "m", 3), Eng(p.Z[len(p.Z)-1], "m", 3), Eng(maxOf(p.Exact), "T", 3))
+	summary := fmt.Sprintf("|B| on axis from %s to %s; peak %s.", Eng(p.Z[0], "m", 3), Eng(p.Z[len(p.Z)-1], "m", 3), Eng(p.Peak, "T", 3))
 	var marks []figures.Mark
 	if !math.IsNaN(p.Dipole1pc) {
 		marks = []figures.Mark{{X: -p.Dipole1pc, Label: "1 %"}, {X: p.Dipole1pc, Label: "1 %"}}
@@ -263,72 +172,37 @@ func (c *composer) axisFigure(co calc.Coil, cr calc.CoilResult) {
 		Draw: figures.OnAxis(p.Z, p.Exact, p.Dipole, marks...), Summary: summary})
 }
 
-// mapGrid is the number of nodes along the longer side of a field map.
-const mapGrid = 200
-
 // fieldMap adds the map of |B| over the meridian plane.
-func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult) {
-	w := cr.Winding
+func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) {
+	m := cs.Map
+	if m == nil {
+		return // no extent to map
+	}
 	var sections []figures.Section
-	var zHalf, xHalf float64
 	xLabel, yLabel := "Axial position z", "Radial position ρ"
 	if co.Form == calc.Rectangle {
-		outer := co.Wire.Outer
-		if !(outer > 0) {
-			outer = co.Wire.Bare
-		}
-		b := calc.BundleDiameter(outer, co.Turns)
+		b := cs.Bundle
 		for _, x := range []float64{-co.Width / 2, co.Width / 2} {
 			sections = append(sections, figures.Section{X0: -b / 2, X1: b / 2, Y0: x - b/2, Y1: x + b/2, Round: true})
 		}
-		xHalf = 0.8 * co.Width
-		zHalf = math.Max(0.8*co.Width, 0.5*co.Height)
 		yLabel = "Position across the width x"
 	} else {
-		e := windingEnvelope(co, w)
-		for _, z := range placements(co) {
+		e := cs.Envelope
+		for _, z := range cs.Placements {
 			for _, s := range []float64{1, -1} {
-				sections = append(sections, figures.Section{X0: z + e.z0, X1: z + e.z1, Y0: s * e.r0, Y1: s * e.r1, Round: e.round})
+				sections = append(sections, figures.Section{X0: z + e.Z0, X1: z + e.Z1, Y0: s * e.R0, Y1: s * e.R1, Round: e.Round})
 			}
 		}
-		half := e.z1
-		if co.Form == calc.Pair {
-			half += math.Abs(co.Spacing) / 2
-		}
-		xHalf = 1.6 * e.r1
-		zHalf = math.Max(half+0.9*e.r1, 0.75*xHalf)
 	}
-	if !(xHalf > 0) || !(zHalf > 0) || math.IsInf(xHalf, 0) || math.IsInf(zHalf, 0) {
-		return // no extent to map
-	}
-	nz, nx := mapGrid, mapGrid
-	if zHalf > xHalf {
-		nx = max(61, int(math.Round(mapGrid*xHalf/zHalf)))
-	} else {
-		nz = max(61, int(math.Round(mapGrid*zHalf/xHalf)))
-	}
-	// Odd counts put nodes on the axis and the mid-plane.
-	nx |= 1
-	nz |= 1
-	zs, xs := symmetricSpace(zHalf, nz), symmetricSpace(xHalf, nx)
+	xHalf, zHalf := m.XHalf, m.ZHalf
 	// The figure's height follows the map's proportions (data width about
 	// 118 mm between the axis labels and the colour bar).
 	h := vg.Length(118*xHalf/zHalf)*vg.Millimeter + 24*vg.Millimeter
 	h = max(min(h, 125*vg.Millimeter), 60*vg.Millimeter)
-	I := cr.Current
-	drawMap := func(cv vg.Canvas, wd, ht vg.Length) {
-		g := calc.FieldMap(co, w, I, xs, zs)
-		// The figure's horizontal axis is z, its vertical the radial
-		// coordinate.
-		vals := make([]float64, len(zs)*len(xs))
-		for ix := range xs {
-			for iz := range zs {
-				vals[ix*len(zs)+iz] = g.Magnitude(ix, iz)
-			}
-		}
-		figures.FieldMap(figures.MapData{X: zs, Y: xs, B: vals, Sections: sections,
-			XLabel: xLabel, YLabel: yLabel})(cv, wd, ht)
-	}
+	// The figure's horizontal axis is z, its vertical the radial
+	// coordinate.
+	drawMap := figures.FieldMap(figures.MapData{X: m.Z, Y: m.X, B: m.B, Sections: sections,
+		XLabel: xLabel, YLabel: yLabel})
 	n := c.figure + 1
 	plane := "the meridian plane (through the axis)"
 	if co.Form == calc.Rectangle {
@@ -341,30 +215,8 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult) {
 		Width:   figWidth, Height: h, Draw: drawMap,
 		Summary: fmt.Sprintf("Map of |B|: z from %s to %s, %s from %s to %s, %d × %d points.",
 			Eng(-zHalf, "m", 3), Eng(zHalf, "m", 3), map[bool]string{true: "x", false: "ρ"}[co.Form == calc.Rectangle],
-			Eng(-xHalf, "m", 3), Eng(xHalf, "m", 3), nz, nx),
+			Eng(-xHalf, "m", 3), Eng(xHalf, "m", 3), len(m.Z), len(m.X)),
 	})
-}
-
-// linspace returns n evenly spaced values from lo to hi.
-func linspace(lo, hi float64, n int) []float64 {
-	v := make([]float64, n)
-	for i := range v {
-		v[i] = lo + (hi-lo)*float64(i)/float64(n-1)
-	}
-	return v
-}
-
-// symmetricSpace returns n evenly spaced values from −half to half that
-// are exact mirror images of each other (so the map's symmetries apply).
-func symmetricSpace(half float64, n int) []float64 {
-	v := linspace(-half, half, n)
-	for i := range n / 2 {
-		v[n-1-i] = -v[i]
-	}
-	if n%2 == 1 {
-		v[n/2] = 0
-	}
-	return v
 }
 
 // dipoleDistances adds the table of distances beyond which the coil may be
@@ -418,16 +270,15 @@ func (c *composer) dipoleDistances(co calc.Coil, cr calc.CoilResult) {
 
 // pairRegion reports a pair's centre field and homogeneous region, or its
 // gradient and linear region.
-func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult) {
+func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) {
 	pr := cr.Pair
 	R := co.MeanDiameter / 2
 	s := math.Abs(co.Spacing)
-	src := calc.NewCoilSource(co, cr.Winding, cr.Current)
-	fr := calc.CoilFrame(co.Axis)
-	B0 := src.At(co.Centre).Dot(fr.U)
-	if !(R > 0) || math.IsNaN(B0) || (!co.Opposing && B0 == 0) {
+	pc := cs.Pair
+	if pc == nil {
 		return
 	}
+	B0 := pc.B0
 	rel := fmt.Sprintf("The coil centres are %s apart, %s times the mean radius R = %s", Eng(s, "m", 3), Sig(pr.SpacingRatio, 4), Eng(R, "m", 3))
 	pct := Sig(100*calc.HelmholtzTolerance, 2)
 	if !co.Opposing {
@@ -448,17 +299,7 @@ func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult) {
 			},
 			Widths: []float64{1.2, 2, 2},
 			Align:  []doc.Align{doc.Left, doc.Right, doc.Right}})
-		ext := 1.6 * math.Max(pr.Axial1, pr.Radial1)
-		if !(ext > 0) {
-			ext = 0.6 * R
-		}
-		ext = math.Min(ext, 1.2*R)
-		pos := linspace(0, ext, 61)
-		var ax, ra []float64
-		for _, x := range pos {
-			ax = append(ax, src.At(co.Centre.Add(fr.U.Scale(x))).Dot(fr.U)/B0-1)
-			ra = append(ra, src.At(co.Centre.Add(fr.E1.Scale(x))).Dot(fr.U)/B0-1)
-		}
+		pos, ax, ra := pc.Pos, pc.Axial, pc.Radial
 		n := c.figure + 1
 		c.para(fmt.Sprintf("Figure %d plots the departure of the field from its centre value along both directions, with the ±1 %% and ±0.1 %% bands.", n))
 		c.fig(doc.Figure{Caption: fmt.Sprintf("Homogeneity of pair %q: B(z)/B(0) − 1 along the axis and B(ρ)/B(0) − 1 radially in the mid-plane, axial components, with the ±1 %% and ±0.1 %% (shaded) bands", co.Name),
@@ -485,20 +326,7 @@ func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult) {
 		},
 		Widths: []float64{3, 1.6},
 		Align:  []doc.Align{doc.Left, doc.Right}})
-	ext := math.Min(1.6*math.Max(pr.LinearAxial, pr.LinearRadial), 1.2*R)
-	if !(ext > 0) {
-		ext = 0.6 * R
-	}
-	pos := linspace(0, ext, 61)
-	h := 1e-4 * R
-	var ax, ra []float64
-	for _, x := range pos {
-		gz := (src.At(co.Centre.Add(fr.U.Scale(x+h))).Dot(fr.U) - src.At(co.Centre.Add(fr.U.Scale(x-h))).Dot(fr.U)) / (2 * h)
-		pr0 := co.Centre.Add(fr.E1.Scale(x))
-		gr := (src.At(pr0.Add(fr.U.Scale(h))).Dot(fr.U) - src.At(pr0.Sub(fr.U.Scale(h))).Dot(fr.U)) / (2 * h)
-		ax = append(ax, gz/G-1)
-		ra = append(ra, gr/G-1)
-	}
+	pos, ax, ra := pc.Pos, pc.Axial, pc.Radial
 	n := c.figure + 1
 	c.para(fmt.Sprintf("Figure %d plots the departure of the local gradient from its centre value, with the ±1 %% band.", n))
 	c.fig(doc.Figure{Caption: fmt.Sprintf("Linearity of gradient pair %q: local ∂Bz/∂z relative to the centre value, along the axis and radially in the mid-plane, with the ±1 %% band", co.Name),
@@ -512,16 +340,6 @@ const (
 	figWidth  = 165 * vg.Millimeter
 	figHeight = 85 * vg.Millimeter
 )
-
-func maxOf(v []float64) float64 {
-	m := math.Inf(-1)
-	for _, x := range v {
-		if x > m {
-			m = x
-		}
-	}
-	return m
-}
 
 // torque reports τ = m × B in the background field.
 func (c *composer) torque() {
@@ -540,12 +358,7 @@ func (c *composer) torque() {
 		"Design": Eng(r.TorqueDesign, "N·m", 4),
 		"Tx":     Eng(r.Torque[0], "N·m", 3), "Ty": Eng(r.Torque[1], "N·m", 3), "Tz": Eng(r.Torque[2], "N·m", 3),
 	}))
-	var ang, tq []float64
-	for i := 0; i <= 180; i += 2 {
-		a := float64(i)
-		ang = append(ang, a)
-		tq = append(tq, calc.TorqueAtAngle(r.Moment.Norm(), Bb.Norm(), a*math.Pi/180))
-	}
+	ang, tq := c.j.Design.TorqueAngle, c.j.Design.Torque
 	n := c.figure + 1
 	c.para(fmt.Sprintf("Figure %d shows the torque magnitude against the angle between moment and field.", n))
 	c.fig(doc.Figure{Caption: "Torque magnitude |τ| = m B sin θ against the angle θ between moment and background field",

@@ -24,11 +24,11 @@ func TestFieldSectionForms(t *testing.T) {
 		t.Run(name, func(t *testing.T) {
 			t.Parallel()
 			src := "# T\n\n```memo\ndate = 2026-01-02\n```\n\n```coil\nname = c\n" + body + "\n```\n"
-			j, diags := Evaluate("spec.md", []byte(src))
+			j, diags := evaluate("spec.md", []byte(src))
 			if len(diags) > 0 {
 				t.Fatalf("spec problems: %v", diags)
 			}
-			d := j.Document()
+			d := Document(j)
 			// Each figure of the field section is announced in a paragraph
 			// before it, and figures are numbered 1, 2, … in order.
 			seen := map[int]bool{}
@@ -53,7 +53,7 @@ func TestFieldSectionForms(t *testing.T) {
 					}
 				}
 			}
-			pdf, err := j.PDF()
+			pdf, err := PDF(j)
 			if err != nil || !bytes.HasPrefix(pdf, []byte("%PDF-")) {
 				t.Fatalf("PDF: %v", err)
 			}

@@ -1,6 +1,7 @@
 package memo
 
 import (
+	"coilmemo/analysis"
 	"fmt"
 	"math"
 
@@ -11,31 +12,27 @@ import (
 	"coilmemo/figures"
 )
 
-// allMapGrid is the node count along each side of the map of all coils.
-const allMapGrid = 121
-
 // planeSections returns the cross-sections, in the xz-plane through the
 // origin (horizontal z, vertical x), of a coil whose axis lies along x or
 // z (axis-aligned rectangles) or along y (the winding itself, where the
 // plane cuts it, as a ring of round sections). A rectangle or an oblique
 // axis is not drawn, and ok is false.
-func planeSections(co calc.Coil, w calc.Winding) (s []figures.Section, ok bool) {
+func planeSections(co calc.Coil, cs *analysis.CoilStudy) (s []figures.Section, ok bool) {
 	u := co.Axis.Unit()
 	alongZ := math.Abs(u[2]) > 1-1e-12
-	alongX := math.Abs(u[0]) > 1-1e-12
 	alongY := math.Abs(u[1]) > 1-1e-12
-	if co.Form == calc.Rectangle {
+	if !analysis.DrawnInXZ(co) {
 		return nil, false
 	}
-	e := windingEnvelope(co, w)
+	e := cs.Envelope
 	if alongY {
 		// The winding lies in the plane when the plane cuts it across
 		// its length: draw it as a ring of overlapping round sections.
-		for _, p := range placements(co) {
-			if y := co.Centre[1] + p*u[1]; y+e.z1 < 0 || y+e.z0 > 0 {
+		for _, p := range cs.Placements {
+			if y := co.Centre[1] + p*u[1]; y+e.Z1 < 0 || y+e.Z0 > 0 {
 				continue
 			}
-			rm, t := (e.r0+e.r1)/2, e.r1-e.r0
+			rm, t := (e.R0+e.R1)/2, e.R1-e.R0
 			n := min(720, max(90, int(math.Ceil(4*math.Pi*rm/t))))
 			for k := range n {
 				phi := 2 * math.Pi * float64(k) / float64(n)
@@ -45,23 +42,20 @@ func planeSections(co calc.Coil, w calc.Winding) (s []figures.Section, ok bool) 
 		}
 		return s, true
 	}
-	if (!alongZ && !alongX) || math.Abs(co.Centre[1]) > 0 {
-		return nil, false
-	}
-	for _, p := range placements(co) {
+	for _, p := range cs.Placements {
 		for _, side := range []float64{1, -1} {
 			// In the coil's frame: axial [p+z0, p+z1], radial ±[r0, r1].
-			a0, a1 := p+e.z0, p+e.z1
-			r0, r1 := side*e.r0, side*e.r1
+			a0, a1 := p+e.Z0, p+e.Z1
+			r0, r1 := side*e.R0, side*e.R1
 			if u[0]+u[2] < 0 { // the axis points along −x or −z
 				a0, a1 = -a1, -a0
 			}
 			if alongZ {
 				s = append(s, figures.Section{X0: co.Centre[2] + a0, X1: co.Centre[2] + a1,
-					Y0: co.Centre[0] + math.Min(r0, r1), Y1: co.Centre[0] + math.Max(r0, r1), Round: e.round})
+					Y0: co.Centre[0] + math.Min(r0, r1), Y1: co.Centre[0] + math.Max(r0, r1), Round: e.Round})
 			} else {
 				s = append(s, figures.Section{X0: co.Centre[2] + math.Min(r0, r1), X1: co.Centre[2] + math.Max(r0, r1),
-					Y0: co.Centre[0] + a0, Y1: co.Centre[0] + a1, Round: e.round})
+					Y0: co.Centre[0] + a0, Y1: co.Centre[0] + a1, Round: e.Round})
 			}
 		}
 	}
@@ -75,43 +69,22 @@ func (c *composer) allCoilsMap() {
 	if len(d.Coils) < 2 {
 		return
 	}
-	half := 1.3 * designExtent(d)
-	if !(half > 0) || math.IsInf(half, 0) {
+	m := c.j.Design.All
+	if m == nil {
 		return
 	}
+	half := m.XHalf
 	var sections []figures.Section
 	var undrawn []string
-	var hidden []calc.Coil // windings not drawn: their nodes are blanked
-	var hiddenW []calc.Winding
 	for i, co := range d.Coils {
-		w := c.j.Results.Coils[i].Winding
-		s, ok := planeSections(co, w)
+		s, ok := planeSections(co, &c.j.Coils[i])
 		if !ok {
 			undrawn = append(undrawn, fmt.Sprintf("%q", co.Name))
-			hidden, hiddenW = append(hidden, co), append(hiddenW, w)
 		}
 		sections = append(sections, s...)
 	}
-	xs := symmetricSpace(half, allMapGrid)
-	step := 2 * half / float64(allMapGrid-1)
-	fm := calc.NewFieldModel(d)
-	draw := func(cv vg.Canvas, wd, ht vg.Length) {
-		vals := make([]float64, len(xs)*len(xs))
-		for ix, x := range xs {
-			for iz, z := range xs {
-				p := calc.Vec{x, 0, z}
-				v := fm.At(p).Norm()
-				for k, co := range hidden {
-					if nearWinding(co, hiddenW[k], p, step) {
-						v = math.NaN()
-					}
-				}
-				vals[ix*len(xs)+iz] = v
-			}
-		}
-		figures.FieldMap(figures.MapData{X: xs, Y: xs, B: vals, Sections: sections,
-			XLabel: "Position z", YLabel: "Position x"})(cv, wd, ht)
-	}
+	draw := figures.FieldMap(figures.MapData{X: m.Z, Y: m.X, B: m.B, Sections: sections,
+		XLabel: "Position z", YLabel: "Position x"})
 	c.heading(2, "Field of all coils together")
 	n := c.figure + 1
 	text := fmt.Sprintf("Figure %d maps |B| of all %d coil blocks energised together over the xz-plane through the origin, on a logarithmic colour scale with contour lines as in the maps above.", n, len(d.Coils))
@@ -123,25 +96,6 @@ func (c *composer) allCoilsMap() {
 	c.para(text)
 	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: 125 * vg.Millimeter, Draw: draw,
 		Summary: fmt.Sprintf("|B| of all coils over ±%s in x and z; |B| at the origin %s.", Eng(half, "m", 3), Eng(c.j.Results.FieldCentre.Norm(), "T", 3))})
-}
-
-// nearWinding reports whether p lies within margin of the winding
-// envelope of coil block co (in its own frame, every placement of a pair),
-// where the map would show the field of the conductors themselves.
-func nearWinding(co calc.Coil, w calc.Winding, p calc.Vec, margin float64) bool {
-	if co.Form == calc.Rectangle {
-		return false
-	}
-	fr := calc.CoilFrame(co.Axis)
-	e := windingEnvelope(co, w)
-	l := fr.ToLocal(p.Sub(co.Centre))
-	rho := math.Hypot(l[0], l[1])
-	for _, z := range placements(co) {
-		if rho > e.r0-margin && rho < e.r1+margin && l[2] > z+e.z0-margin && l[2] < z+e.z1+margin {
-			return true
-		}
-	}
-	return false
 }
 
 // joinAnd joins names as "a", "a and b", "a, b and c".

@@ -1,6 +1,7 @@
 package memo
 
 import (
+	"coilmemo/analysis"
 	"math"
 	"testing"
 
@@ -15,7 +16,7 @@ func TestPlaneSections(t *testing.T) {
 
 	z := base
 	z.Axis = calc.Vec{0, 0, 1}
-	s, ok := planeSections(z, calc.LayOut(z))
+	s, ok := planeSections(z, studyOf(z))
 	if !ok || len(s) != 2 {
 		t.Fatalf("z-axis coil: %d sections, ok %v; want 2", len(s), ok)
 	}
@@ -28,7 +29,7 @@ func TestPlaneSections(t *testing.T) {
 
 	x := base
 	x.Axis = calc.Vec{1, 0, 0}
-	s, _ = planeSections(x, calc.LayOut(x))
+	s, _ = planeSections(x, studyOf(x))
 	for _, sec := range s {
 		if math.Abs(sec.Y1-sec.Y0-0.02) > 1e-9 || math.Abs(math.Abs(sec.X0+sec.X1)/2-0.02) > 1e-9 {
 			t.Errorf("x-axis section %+v: want 20 mm long in x at |z| = 20 mm", sec)
@@ -37,7 +38,7 @@ func TestPlaneSections(t *testing.T) {
 
 	y := base
 	y.Axis = calc.Vec{0, 1, 0}
-	s, ok = planeSections(y, calc.LayOut(y))
+	s, ok = planeSections(y, studyOf(y))
 	if !ok || len(s) < 90 {
 		t.Fatalf("y-axis coil: %d ring sections, ok %v", len(s), ok)
 	}
@@ -48,20 +49,22 @@ func TestPlaneSections(t *testing.T) {
 		}
 	}
 	y.Centre = calc.Vec{0, 0.05, 0} // 50 mm off the plane: not cut
-	if s, _ := planeSections(y, calc.LayOut(y)); len(s) != 0 {
+	if s, _ := planeSections(y, studyOf(y)); len(s) != 0 {
 		t.Errorf("a y-axis coil 50 mm off the plane gave %d sections", len(s))
 	}
 
 	o := base
 	o.Axis = calc.Vec{1, 0, 1}
-	if _, ok := planeSections(o, calc.LayOut(o)); ok {
+	if _, ok := planeSections(o, studyOf(o)); ok {
 		t.Error("an oblique coil reported drawable")
 	}
-	p := calc.Vec{0, 0, 0}.Add(calc.CoilFrame(o.Axis).E1.Scale(0.02))
-	if !nearWinding(o, calc.LayOut(o), p, 1e-3) {
-		t.Error("a point in the oblique winding is not blanked")
-	}
-	if nearWinding(o, calc.LayOut(o), calc.Vec{}, 1e-3) {
-		t.Error("the centre of the oblique coil is blanked")
-	}
+}
+
+// studyOf analyses one coil alone at 1 A.
+func studyOf(co calc.Coil) *analysis.CoilStudy {
+	co.Drive, co.Current = calc.CurrentDrive, 1
+	d := calc.Design{Coils: []calc.Coil{co}}
+	r := calc.Evaluate(d)
+	cs := analysis.StudyCoil(co, r.Coils[0], d.Conditions)
+	return &cs
 }

@@ -1,6 +1,7 @@
 package memo
 
 import (
+	"coilmemo/analysis/report"
 	"io"
 	"os"
 	"path/filepath"
@@ -37,17 +38,17 @@ func FuzzEvaluate(f *testing.F) {
 		if turns > 5000 || s.Sweep != nil && len(s.Sweep.Values()) > 10 {
 			return
 		}
-		j, diags := Evaluate("fuzz.md", src)
+		j, diags := evaluate("fuzz.md", src)
 		if len(diags) > 0 {
 			t.Fatalf("the reader accepted the spec once and refused it the second time: %v", diags)
 		}
-		if err := doc.WriteText(io.Discard, j.Document()); err != nil {
+		if err := doc.WriteText(io.Discard, Document(j)); err != nil {
 			t.Fatal(err)
 		}
-		if _, err := j.JSON(); err != nil {
+		if _, err := report.JSON(j); err != nil {
 			t.Fatal(err)
 		}
-		if _, err := j.PDF(); err != nil {
+		if _, err := PDF(j); err != nil {
 			t.Fatal(err)
 		}
 	})

@@ -2,6 +2,7 @@ package memo
 
 import (
 	"bytes"
+	"coilmemo/analysis/report"
 	"encoding/json"
 	"flag"
 	"fmt"
@@ -42,15 +43,15 @@ func TestGolden(t *testing.T) {
 			if specSrc == nil {
 				t.Fatal("archive has no spec.md")
 			}
-			j, diags := Evaluate("spec.md", specSrc)
+			j, diags := evaluate("spec.md", specSrc)
 			if len(diags) > 0 {
 				t.Fatalf("spec problems:\n%v", diags)
 			}
 			var text bytes.Buffer
-			if err := doc.WriteText(&text, j.Document()); err != nil {
+			if err := doc.WriteText(&text, Document(j)); err != nil {
 				t.Fatal(err)
 			}
-			js, err := j.JSON()
+			js, err := report.JSON(j)
 			if err != nil {
 				t.Fatal(err)
 			}

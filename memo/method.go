@@ -1,6 +1,7 @@
 package memo
 
 import (
+	"coilmemo/analysis"
 	"fmt"
 	"math"
 	"strings"
@@ -11,21 +12,6 @@ import (
 	"coilmemo/doc"
 	"coilmemo/templates"
 )
-
-func formName(c calc.Coil) string {
-	switch c.Form {
-	case calc.Solenoid:
-		return "solenoid"
-	case calc.Rectangle:
-		return "rectangle"
-	case calc.Pair:
-		if c.Opposing {
-			return "pair, opposing"
-		}
-		return "pair, aiding"
-	}
-	return "loop"
-}
 
 func wireName(w calc.Wire) string {
 	if w.Gauge != calc.NoGauge {
@@ -60,7 +46,7 @@ func (c *composer) assumptions() {
 		item(lead, false, text)
 	}
 	general("Filament model", templates.Text("assume-filament", nil))
-	general("Cooling", coolingAssumption(d, r))
+	general("Cooling", coolingAssumption(d, c.j.Cooling))
 	general("Thermal model", templates.Text("assume-thermal", nil))
 	c.add(doc.List{Items: items})
 	items = nil
@@ -69,7 +55,7 @@ func (c *composer) assumptions() {
 			break
 		}
 		cr := r.Coils[i]
-		for _, f := range validityFlags(co, cr, d) {
+		for _, f := range validityFlags(co, cr, &c.j.Coils[i], d) {
 			item(fmt.Sprintf("%s, %s", f.what, co.Name), f.flagged, f.text)
 		}
 	}
@@ -86,7 +72,7 @@ type validity struct {
 }
 
 // validityFlags are one coil block's validity flags.
-func validityFlags(co calc.Coil, cr calc.CoilResult, d calc.Design) []validity {
+func validityFlags(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.Design) []validity {
 	var out []validity
 	w := cr.Winding
 	R := co.MeanDiameter / 2
@@ -96,7 +82,7 @@ func validityFlags(co calc.Coil, cr calc.CoilResult, d calc.Design) []validity {
 		what := "wire diameter"
 		switch {
 		case w.Thin:
-			depth, what = calc.BundleDiameter(co.Wire.Outer, co.Turns), "bundle diameter"
+			depth, what = cs.Bundle, "bundle diameter"
 		case co.RadialBuild > 0:
 			depth, what = math.Max(co.RadialBuild, co.Length), "winding depth"
 		}
@@ -117,7 +103,7 @@ func validityFlags(co calc.Coil, cr calc.CoilResult, d calc.Design) []validity {
 		if used < 0.95*co.RadialBuild {
 			out = append(out, validity{what: "Radial build", flagged: true, text: fmt.Sprintf(
 				"the %d turns lie in %d layers %s deep, less than the stated radial build of %s; the turns' mean radius is %s against the stated %s. All results use the turns as laid out; state the radial build the coil will really have, or the turns that fill it.",
-				co.Turns, w.LayerCount, Eng(used, "m", 3), Eng(co.RadialBuild, "m", 3), Eng(meanTurnRadius(w), "m", 4), Eng(R, "m", 4))})
+				co.Turns, w.LayerCount, Eng(used, "m", 3), Eng(co.RadialBuild, "m", 3), Eng(cs.MeanRadius, "m", 4), Eng(R, "m", 4))})
 		}
 	}
 	if co.Wire.OuterEstimated {
@@ -266,8 +252,7 @@ func pmEng(v float64) string {
 }
 
 // coolingAssumption states how the winding sheds heat.
-func coolingAssumption(d calc.Design, r calc.Results) string {
-	cool := calc.EffectiveCooling(d.Conditions.Cooling)
+func coolingAssumption(d calc.Design, cool calc.Cooling) string {
 	mount := ""
 	if m := d.Conditions.MountResistance; m > 0 && !math.IsInf(m, 1) {
 		mount = fmt.Sprintf(", and by conduction through the stated thermal resistance of %s to a mount at the ambient temperature", Eng(m, "K/W", 3))
@@ -295,15 +280,15 @@ func (c *composer) method() {
 		if i >= len(r.Coils) {
 			break
 		}
-		c.heading(2, fmt.Sprintf("Coil %q (%s, %d turns, %s)", co.Name, formName(co), co.Turns, wireName(co.Wire)))
-		c.derive(coilSteps(co, r.Coils[i], d.Conditions)...)
+		c.heading(2, fmt.Sprintf("Coil %q (%s, %d turns, %s)", co.Name, analysis.FormName(co), co.Turns, wireName(co.Wire)))
+		c.derive(coilSteps(co, r.Coils[i], &c.j.Coils[i])...)
 	}
 }
 
 // coilSteps derives one coil block's results: wire and winding, resistance,
 // temperature and operating point, moment and field (the inductance and the
 // heat balance follow in sections of their own).
-func coilSteps(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) []Step {
+func coilSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []Step {
 	w := cr.Winding
 	mat := co.Wire.Material
 	var steps []Step
@@ -315,7 +300,7 @@ func coilSteps(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) []Step {
 			Numbers:  fmt.Sprintf(`0.127\,\unit{mm} \cdot 92^{(36 - %s)/39}`, N(float64(n), 2)),
 			Result:   Q(co.Wire.Bare, "m", 4)})
 	}
-	A := calc.ConductorArea(co.Wire.Bare)
+	A := cs.ConductorArea
 	add(Step{What: "Conductor cross-section", Symbolic: `A = \frac{\pi d^2}{4}`,
 		Numbers: fmt.Sprintf(`\frac{\pi \cdot %s^2}{4}`, Paren(Q(co.Wire.Bare, "m", 4))), Result: Q(A, "m²", 4)})
 	outer := "Overall wire diameter over the insulation, as specified"
@@ -323,7 +308,7 @@ func coilSteps(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) []Step {
 		outer = "Overall wire diameter over the insulation (heavy-build estimate, see Assumptions)"
 	}
 	add(Step{What: outer, Symbolic: `d_o = ` + Q(co.Wire.Outer, "m", 3)})
-	series := calc.SeriesCoils(co)
+	series := cs.Series
 	total := co.Turns * series
 	pair := ""
 	if series == 2 {
@@ -377,7 +362,7 @@ func coilSteps(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) []Step {
 	add(thermalSteps(co, cr)...)
 	if !cr.Runaway && !math.IsNaN(cr.RHot) {
 		// the temperature the resistance was taken at (the winding's mean)
-		T := 20 + (cr.RHot/cr.R20-1)/mat.Alpha20
+		T := Celsius(cr.Heat.Steady.Mean)
 		add(Step{What: fmt.Sprintf("Resistance at the mean winding temperature, temperature coefficient %s /K", Sig(mat.Alpha20, 3)),
 			Symbolic: `R(T) = R_{20} \left[ 1 + \alpha_{20} (T - 20\,\unit{°C}) \right]`,
 			Numbers:  fmt.Sprintf(`%s \left[ 1 + %s\,\unit{K^{-1}} \cdot (%s - 20\,\unit{°C}) \right]`, Q(cr.R20, "Ω", 4), N(mat.Alpha20, 3), Q(T, "°C", 3)),
@@ -392,10 +377,10 @@ func coilSteps(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) []Step {
 		add(Step{What: "Voltage under current drive, at the hot resistance", Symbolic: `V = I\, R(T)`,
 			Numbers: fmt.Sprintf(`%s \cdot %s`, Q(cr.Current, "A", 4), Q(cr.RHot, "Ω", 4)), Result: Q(cr.Voltage, "V", 4)})
 	}
-	pOn := cr.Current * cr.Current * cr.RHot
+	pOn := cr.PowerOn
 	add(Step{What: "Power while energised", Symbolic: `P = I^2 R(T)`,
 		Numbers: fmt.Sprintf(`%s^2 \cdot %s`, Paren(Q(cr.Current, "A", 4)), Q(cr.RHot, "Ω", 4)), Result: Q(pOn, "W", 4)})
-	if duty := calc.Duty(co); duty < 1 {
+	if duty := cr.Duty; duty < 1 {
 		add(Step{What: "Power averaged over the duty cycle δ", Symbolic: `\bar{P} = \delta P`,
 			Numbers: fmt.Sprintf(`%s \cdot %s`, N(duty, 3), Q(pOn, "W", 4)), Result: Q(cr.Power, "W", 4)})
 	}
@@ -415,7 +400,7 @@ func thermalSteps(co calc.Coil, cr calc.CoilResult) []Step {
 			Symbolic: `T = ` + Words("no steady state")}}
 	}
 	// The mean temperature is the one the hot resistance was taken at.
-	mean := 20 + (cr.RHot/cr.R20-1)/co.Wire.Material.Alpha20
+	mean := Celsius(cr.Heat.Steady.Mean)
 	return []Step{{What: "Steady mean winding temperature, from the heat balance of the winding's surface derived in the Heating section",
 		Symbolic: `T = ` + Q(mean, "°C", 3)}}
 }

@@ -13,7 +13,7 @@ func cautionsFor(t *testing.T, coil, conditions string) []doc.Callout {
 	if conditions != "" {
 		src += "\n```conditions\n" + conditions + "```\n"
 	}
-	j, diags := Evaluate("t.md", []byte(src))
+	j, diags := evaluate("t.md", []byte(src))
 	if len(diags) > 0 {
 		t.Fatalf("spec problems: %v", diags)
 	}

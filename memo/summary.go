@@ -1,6 +1,7 @@
 package memo
 
 import (
+	"coilmemo/analysis"
 	"io"
 
 	"coilmemo/doc"
@@ -8,7 +9,7 @@ import (
 
 // WriteSummary writes the memo's page 1 — identification, verdict,
 // headline results and requirements — as plain text, for the terminal.
-func WriteSummary(w io.Writer, j *Job) error {
+func WriteSummary(w io.Writer, j *analysis.Study) error {
 	full := Compose(j)
 	first := &doc.Document{Meta: full.Meta}
 	for _, b := range full.Blocks {

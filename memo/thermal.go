@@ -1,6 +1,7 @@
 package memo
 
 import (
+	"coilmemo/analysis"
 	"fmt"
 	"math"
 	"strconv"
@@ -26,7 +27,7 @@ func (c *composer) heating() {
 		return
 	}
 	c.heading(1, "Heating")
-	cool := calc.EffectiveCooling(d.Conditions.Cooling)
+	cool := c.j.Cooling
 	var env string
 	switch {
 	case cool.Vacuum:
@@ -59,36 +60,34 @@ func (c *composer) heating() {
 			continue
 		}
 		c.heading(2, fmt.Sprintf("Coil %q", co.Name))
-		c.derive(heatSteps(co, cr, d.Conditions)...)
+		cs := &c.j.Coils[i]
+		c.derive(heatSteps(co, cr, cs, c.j.Cooling)...)
 		if p := warmUpText(co, cr); p != "" {
 			c.para(p)
 		}
-		c.warmUpFigure(co, cr)
+		c.warmUpFigure(co, cr, cs)
 	}
 	c.add(c.thermalTable())
 }
 
 // heatSteps derive one coil block's steady thermal state.
-func heatSteps(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) []Step {
+func heatSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, cool calc.Cooling) []Step {
 	h := cr.Heat
 	tp := h.Problem
 	st := h.Steady
 	w := cr.Winding
 	var steps []Step
 	add := func(s ...Step) { steps = append(steps, s...) }
-	series := calc.SeriesCoils(co)
+	hp := cs.Heat
+	series := cs.Series
 	two := ""
 	if series == 2 {
 		two = `2 \cdot `
 	}
-	outer := co.Wire.Outer
-	if !(outer > 0) {
-		outer = co.Wire.Bare
-	}
-	ri, ro, length := calc.RiseGeometry(co, w)
+	ri, ro, length := hp.RiseInner, hp.RiseOuter, hp.RiseLength
 	switch {
 	case w.Thin:
-		db := calc.BundleDiameter(outer, w.TurnCount())
+		db := hp.BundleDiameter
 		add(Step{What: "Heat-shedding surface: the tube of the round winding bundle along the mean turn",
 			Symbolic: `A_s = ` + two + `\pi d_b \ell_t`,
 			Numbers:  fmt.Sprintf(`%s\pi \cdot %s \cdot %s`, two, Q(db, "m", 4), Q(w.MeanTurn, "m", 4)), Result: Q(tp.Area, "m²", 4)})
@@ -111,7 +110,7 @@ func heatSteps(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) []Step {
 	Ts, Ta := st.Surface, tp.Ambient
 	if nc := tp.Convection; nc != nil {
 		cs := st.Convection
-		nu, k, pr, _ := calc.AirProperties(cs.Film)
+		nu, k, pr := hp.AirViscosity, hp.AirConductivity, hp.AirPrandtl
 		shape := "horizontal cylinder of diameter"
 		switch {
 		case nc.Shape == calc.VerticalSurface:
@@ -145,10 +144,10 @@ func heatSteps(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) []Step {
 		add(Step{What: "Convective heat-transfer coefficient", Symbolic: `h = \frac{\mathrm{Nu}\, k_a}{L}`,
 			Numbers: fmt.Sprintf(`\frac{%s \cdot %s}{%s}`, N(cs.Nu, 4), Q(k, "W/(m·K)", 3), Q(nc.Length, "m", 4)), Result: Q(cs.H, "W/(m²·K)", 3)})
 	}
-	hval := tp.ConvectionCoefficient(Ts)
+	hval := hp.H
 	var parts []string
 	var nums []string
-	if !calc.EffectiveCooling(cond.Cooling).Vacuum {
+	if !cool.Vacuum {
 		add(Step{What: "Heat carried away by convection", Symbolic: `Q_c = h A_s (T_s - T_a)`,
 			Numbers: fmt.Sprintf(`%s \cdot %s \cdot %s`, Q(hval, "W/(m²·K)", 3), Q(tp.Area, "m²", 4), Q(Ts-Ta, "K", 4)), Result: Q(st.Convected, "W", 4)})
 		parts, nums = append(parts, "Q_c"), append(nums, Q(st.Convected, "W", 4))
@@ -229,7 +228,7 @@ func heatSteps(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) []Step {
 	if series == 2 {
 		conductor = `2 \cdot ` + conductor
 	}
-	add(Step{What: fmt.Sprintf("Heat capacity of the winding (specific heat of %s %s, %s)%s", mat.Name, Eng(mat.SpecificHeat, "J/(kg·K)", 3), specificHeatSource(mat), formerWords(co)),
+	add(Step{What: fmt.Sprintf("Heat capacity of the winding (specific heat of %s %s, %s)%s", mat.Name, Eng(mat.SpecificHeat, "J/(kg·K)", 3), specificHeatSource(mat), formerWords(co, cs.Heat.FormerSource)),
 		Symbolic: `C = m_c c_p` + former,
 		Numbers:  fmt.Sprintf(`%s \cdot %s%s`, conductor, Q(mat.SpecificHeat, "J/(kg·K)", 3), fnum), Result: Q(h.HeatCapacity, "J/K", 3)})
 	if !math.IsNaN(cr.ThermalTau) {
@@ -243,15 +242,15 @@ func specificHeatSource(m calc.Material) string {
 	return "CRC Handbook of Chemistry and Physics, recalled"
 }
 
-func formerWords(co calc.Coil) string {
+func formerWords(co calc.Coil, source string) string {
 	f := co.Former
 	switch {
 	case f.HeatCapacity > 0:
 		return fmt.Sprintf(", with the former's stated heat capacity of %s", Eng(f.HeatCapacity, "J/K", 3))
 	case f.Mass > 0:
 		src := ""
-		if m, ok := calc.FormerMaterialByName(f.Material); ok {
-			src = "; " + m.Source
+		if source != "" {
+			src = "; " + source
 		}
 		return fmt.Sprintf(", with the former: %s of %s at %s%s", Eng(f.Mass, "kg", 3), formerName(f.Material), Eng(f.SpecificHeat, "J/(kg·K)", 3), src)
 	}
@@ -337,33 +336,15 @@ func warmUpText(co calc.Coil, cr calc.CoilResult) string {
 
 // warmUpFigure plots the warm-up from cold: energised continuously, and on
 // the duty cycle when an on-time is given.
-func (c *composer) warmUpFigure(co calc.Coil, cr calc.CoilResult) {
+func (c *composer) warmUpFigure(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) {
 	h := cr.Heat
 	tp := h.Problem
-	C := h.HeatCapacity
-	if !(C > 0) {
+	wu := cs.Heat.WarmUp
+	if wu == nil {
 		return
 	}
-	on := tp
-	on.Duty = 1
-	steady := on.Steady()
-	tau := math.NaN()
-	if steady.Settled {
-		tau = on.ThermalTimeConstant(C, steady.Mean)
-	}
-	tEnd := 5 * tau
-	if !math.IsNaN(h.TimeToLimit) {
-		if math.IsNaN(tEnd) || tEnd < 1.3*h.TimeToLimit {
-			tEnd = 1.3 * h.TimeToLimit
-		}
-		if steady.Settled {
-			tEnd = math.Max(tEnd, math.Min(5*tau, 3*h.TimeToLimit))
-		}
-	}
-	if !(tEnd > 0) || math.IsInf(tEnd, 0) {
-		return
-	}
-	t, _, hot := on.WarmUpCurve(C, tEnd, 0)
+	steady := cs.Heat.Continuous
+	t, hot := wu.T, wu.Hot
 	curves := []figures.Curve{{Name: "energised continuously", T: t, Y: celsiusAll(hot)}}
 	var levels []figures.Level
 	top := hot[len(hot)-1]
@@ -387,9 +368,8 @@ func (c *composer) warmUpFigure(co calc.Coil, cr calc.CoilResult) {
 	caption := fmt.Sprintf("Warm-up of coil %q from %s: hottest winding temperature against time when energised continuously", co.Name, Eng(Celsius(tp.Ambient), "°C", 3))
 	summary := fmt.Sprintf("Continuous: %s after %s.", Eng(Celsius(hot[len(hot)-1]), "°C", 3), duration(t[len(t)-1]))
 	if cy.On > 0 && cy.Settled {
-		period := cy.On + cy.Off
-		if tEnd/period <= 150 {
-			ct, _, chot := tp.WarmUpCurve(C, tEnd, cy.On)
+		if wu.CycleT != nil {
+			ct, chot := wu.CycleT, wu.CycleHot
 			curves = append(curves, figures.Curve{Name: "on/off cycle", T: ct, Y: celsiusAll(chot)})
 			caption += fmt.Sprintf(", and on the duty cycle (on %s, off %s)", duration(cy.On), duration(cy.Off))
 		} else {
@@ -434,7 +414,7 @@ func (c *composer) thermalTable() doc.Table {
 		return cells
 	}
 	temp := func(v float64) string { return Eng(Celsius(v), "°C", 3) }
-	cool := calc.EffectiveCooling(d.Conditions.Cooling)
+	cool := c.j.Cooling
 	rows := [][]doc.Cell{
 		row("Cooling", func(co calc.Coil, cr calc.CoilResult) string {
 			tp := cr.Heat.Problem
@@ -515,26 +495,6 @@ func (c *composer) thermalTable() doc.Table {
 	return doc.Table{Caption: "Thermal results at the steady operating point", Header: head, Rows: rows, Align: align, Widths: widths}
 }
 
-// heatBalanceCheck verifies the steady thermal state: the heat generated
-// (duty-averaged, at the resistance of the mean temperature) against the
-// heat shed by convection, radiation and the mount at the surface
-// temperature, each recomputed from its own law.
-func heatBalanceCheck(c calc.Coil, cr calc.CoilResult) []Check {
-	st := cr.Heat.Steady
-	tp := cr.Heat.Problem
-	if !st.Settled || !(st.Power > 0) {
-		return nil
-	}
-	ta, ts := tp.Ambient, st.Surface
-	out := tp.ConvectionCoefficient(ts)*tp.Area*(ts-ta) + tp.Emissivity*calc.StefanBoltzmann*tp.Area*(ts*ts*ts*ts-ta*ta*ta*ta) + tp.Mount*(ts-ta)
-	in := calc.Duty(c) * cr.Current * cr.Current * cr.RHot
-	// 1e-9, or the resolution of a float64 temperature relative to the
-	// rise where a coil barely warms (8 ulps of Tₛ over Tₛ − Tₐ).
-	tol := math.Max(1e-9, 8*0x1p-52*ts/math.Abs(ts-ta))
-	return []Check{newCheck(c.Name, "steady heat balance", "heat generated, duty × I²·R(T)",
-		"heat shed: h·A·ΔT + ε·σ·A·(Tₛ⁴ − Tₐ⁴) + ΔT/Rₘ at the surface temperature", in, out, "W", tol)}
-}
-
 // runawayText is the runaway caution with this coil's numbers.
 func runawayText(co calc.Coil, cr calc.CoilResult) string {
 	st := cr.Heat.Steady
@@ -567,44 +527,14 @@ func classTimeText(cr calc.CoilResult) string {
 	return fmt.Sprintf("Energised continuously from cold, the hottest point of the winding reaches the class after %s.", duration(t))
 }
 
-// surfaceTemperature is the hottest surface temperature: the steady one,
-// or at the end of an on period of the duty cycle, whichever is hotter.
-func surfaceTemperature(cr calc.CoilResult) float64 {
-	st := cr.Heat.Steady
-	ts := st.Surface
-	if cy := cr.Heat.Cycle; cy.On > 0 && cy.Settled {
-		tp := cr.Heat.Problem
-		ts = math.Max(ts, tp.Surface(cy.PeakMean, tp.PowerOn(cy.PeakMean)))
-	}
-	return ts
-}
-
-// densityNote notes a current density above the common-practice figure for
-// continuous duty in still air, or returns "".
-func densityNote(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) string {
-	J := math.Abs(cr.Density)
-	// Only where the coil also runs warm: a small coil sheds its heat
-	// easily and the rule of thumb is conservative for it.
-	if !(J > calc.PracticeDensity) || calc.Duty(co) < 1 || !(co.InsulationClass-cr.Temperature < 50) {
-		return ""
-	}
-	return templates.Text("caution-density", map[string]string{"Density": Eng(J, "A/m²", 3),
-		"Temperature": Eng(Celsius(cr.Temperature), "°C", 3)})
-}
-
 // leftOnText is the caution for a coil that is within its class on its
 // duty cycle but would pass it if left energised, or "".
-func leftOnText(co calc.Coil, cr calc.CoilResult) string {
+func leftOnText(co calc.Coil, cr calc.CoilResult, on calc.ThermalState) string {
 	h := cr.Heat
-	if cr.Runaway || calc.Duty(co) >= 1 || math.IsNaN(h.TimeToLimit) || !(cr.Temperature <= co.InsulationClass) {
-		return ""
-	}
-	on := h.Problem
-	on.Duty = 1
 	settle := "would not settle below it"
-	if s := on.Steady(); s.Settled {
-		settle = "would settle at " + Eng(Celsius(s.HotSpot), "°C", 3)
+	if on.Settled {
+		settle = "would settle at " + Eng(Celsius(on.HotSpot), "°C", 3)
 	}
-	return templates.Text("caution-left-on", map[string]string{"Duty": strconv.FormatFloat(100*calc.Duty(co), 'g', 3, 64) + " %",
+	return templates.Text("caution-left-on", map[string]string{"Duty": strconv.FormatFloat(100*cr.Duty, 'g', 3, 64) + " %",
 		"Class": Eng(Celsius(co.InsulationClass), "°C", 3), "Time": duration(h.TimeToLimit), "Settle": settle})
 }

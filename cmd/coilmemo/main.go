@@ -11,13 +11,17 @@
 package main
 
 import (
+	"coilmemo/analysis"
+	"coilmemo/analysis/report"
 	"errors"
 	"flag"
 	"fmt"
 	"io"
 	"os"
 	"path/filepath"
+	"strconv"
 	"strings"
+	"time"
 
 	"coilmemo/memo"
 )
@@ -168,12 +172,12 @@ func flagErr(err error, help string, stdout io.Writer) error {
 }
 
 // load reads and evaluates one spec, turning diagnostics into exit status 2.
-func load(path string, stderr io.Writer) (*memo.Job, error) {
+func load(path string, stderr io.Writer) (*analysis.Study, error) {
 	src, err := os.ReadFile(path)
 	if err != nil {
 		return nil, &exitError{2, "coilmemo: " + err.Error()}
 	}
-	job, diags := memo.Evaluate(path, src)
+	job, diags := analysis.Run(path, src, analysis.Options{Date: sourceDateEpoch()})
 	if len(diags) > 0 {
 		for _, d := range diags {
 			fmt.Fprintln(stderr, d.Error())
@@ -217,7 +221,7 @@ func build(args []string, stdout, stderr io.Writer) error {
 			bad++
 			continue
 		}
-		b, err := job.PDF()
+		b, err := memo.PDF(job)
 		if err != nil {
 			return fmt.Errorf("%s: rendering the memo: %w", path, err)
 		}
@@ -304,7 +308,7 @@ func calcCmd(args []string, stdout, stderr io.Writer) error {
 		return err
 	}
 	if *asJSON {
-		b, err := job.JSON()
+		b, err := report.JSON(job)
 		if err != nil {
 			return err
 		}
@@ -316,4 +320,19 @@ func calcCmd(args []string, stdout, stderr io.Writer) error {
 		return &exitError{1, "coilmemo: --strict: a requirement or check failed"}
 	}
 	return nil
+}
+
+// sourceDateEpoch is the build date the reproducible-builds convention
+// passes in SOURCE_DATE_EPOCH (seconds since 1970), or zero when it is not
+// set or not a number.
+func sourceDateEpoch() time.Time {
+	v := os.Getenv("SOURCE_DATE_EPOCH")
+	if v == "" {
+		return time.Time{}
+	}
+	sec, err := strconv.ParseInt(v, 10, 64)
+	if err != nil {
+		return time.Time{}
+	}
+	return time.Unix(sec, 0).UTC()
 }

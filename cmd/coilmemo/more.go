@@ -1,6 +1,8 @@
 package main
 
 import (
+	"coilmemo/analysis"
+	"coilmemo/analysis/report"
 	_ "embed"
 	"encoding/json"
 	"errors"
@@ -12,7 +14,6 @@ import (
 	"strings"
 	"time"
 
-	"coilmemo/memo"
 	"coilmemo/spec"
 )
 
@@ -104,7 +105,7 @@ func entryKey(e spec.Entry) string {
 	return k + ": " + e.Key
 }
 
-func writeDiff(w io.Writer, oldName, newName string, a, b *memo.Job) {
+func writeDiff(w io.Writer, oldName, newName string, a, b *analysis.Study) {
 	fmt.Fprintf(w, "--- %s\n+++ %s\n", oldName, newName)
 	show := func(e spec.Entry) string {
 		if e.Default {
@@ -151,7 +152,7 @@ func writeDiff(w io.Writer, oldName, newName string, a, b *memo.Job) {
 	if n == 0 {
 		fmt.Fprintln(w, "  no change")
 	}
-	fa, fb := flatten(a.Report()), flatten(b.Report())
+	fa, fb := flatten(report.Build(a)), flatten(report.Build(b))
 	keys := map[string]bool{}
 	for k := range fa {
 		keys[k] = true
@@ -219,7 +220,7 @@ func valueText(v any, ok bool) string {
 // flatten turns the JSON report into path → scalar, naming array elements
 // by their "name" (or "quantity") field where they have one, so that the
 // same coil or limit is compared across revisions.
-func flatten(r memo.Report) map[string]any {
+func flatten(r report.Report) map[string]any {
 	b, _ := json.Marshal(r)
 	var v any
 	json.Unmarshal(b, &v)

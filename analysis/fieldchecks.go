@@ -1,4 +1,4 @@
-package memo
+package analysis
 
 import (
 	"fmt"
@@ -7,6 +7,7 @@ import (
 	"gonum.org/v1/gonum/integrate/quad"
 
 	"coilmemo/calc"
+	"coilmemo/format"
 )
 
 // rectangleChecks verifies a rectangular coil's field by independent
@@ -39,7 +40,7 @@ func rectangleChecks(c calc.Coil, cr calc.CoilResult) []Check {
 	z := 20 * math.Hypot(W, H) / 2
 	ex := src.At(c.Centre.Add(fr.U.Scale(z))).Norm()
 	dip := calc.DipoleField(cr.Moment, fr.U.Scale(z)).Norm()
-	out = append(out, newCheck(c.Name, fmt.Sprintf("on-axis field at %s", Eng(z, "m", 3)),
+	out = append(out, newCheck(c.Name, fmt.Sprintf("on-axis field at %s", format.Eng(z, "m", 3)),
 		"Σ straight-segment closed forms", "point dipole μ0·m/(2π z³)", ex, dip, "T", 0.01))
 	return out
 }

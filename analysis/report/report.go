@@ -1,11 +1,16 @@
-package memo
+// Package report is the stable `calc --json` interface: a Study written
+// as JSON in SI units, snake_case keys with the unit in the name. Keys are
+// only ever added, never renamed or dropped.
+package report
 
 import (
 	"encoding/json"
 	"math"
 	"strconv"
 
+	"coilmemo/analysis"
 	"coilmemo/calc"
+	"coilmemo/format"
 )
 
 // Num is a float that encodes NaN and ±Inf (an unknown value) as JSON null.
@@ -149,11 +154,11 @@ type CheckReport struct {
 }
 
 // Report builds the JSON report of an evaluated spec.
-func (j *Job) Report() Report {
+func Build(j *analysis.Study) Report {
 	r := j.Results
 	d := j.Spec.Design
 	rep := Report{
-		Tool: "coilmemo " + Version, Spec: j.Spec.File, SpecSHA256: j.SHA256,
+		Tool: "coilmemo " + analysis.Version, Spec: j.Name, SpecSHA256: j.SHA256,
 		FieldCenter: vec(r.FieldCentre), Moment: Num(r.Moment.Norm()), MomentVector: vec(r.Moment),
 		TorqueMax: Num(r.TorqueMax), TorqueDesign: Num(r.TorqueDesign), TorqueVector: vec(r.Torque),
 		Coils: []CoilReport{}, Probes: []ProbeReport{}, Limits: []LimitReport{}, Checks: []CheckReport{},
@@ -162,12 +167,12 @@ func (j *Job) Report() Report {
 	for i, cr := range r.Coils {
 		co := d.Coils[i]
 		rep.Coils = append(rep.Coils, CoilReport{
-			Name: cr.Name, Form: formName(co), Turns: co.Turns,
+			Name: cr.Name, Form: analysis.FormName(co), Turns: co.Turns,
 			Moment: Num(cr.Moment.Norm()), MomentVector: vec(cr.Moment),
 			Resistance20C: Num(cr.R20), ResistanceHot: Num(cr.RHot),
 			Current: Num(cr.Current), CurrentCold: Num(cr.ColdCurrent), Voltage: Num(cr.Voltage), Power: Num(cr.Power),
 			WireLength: Num(cr.Length), ConductorMass: Num(cr.Mass), CurrentDensity: Num(cr.Density),
-			Inductance: Num(cr.Inductance), WindingTemperature: Num(Celsius(cr.Temperature)), Runaway: cr.Runaway,
+			Inductance: Num(cr.Inductance), WindingTemperature: Num(format.Celsius(cr.Temperature)), Runaway: cr.Runaway,
 			FieldCenter: vec(cr.FieldCentre), TurnsPerLayer: cr.Winding.TurnsPerLayer, Layers: cr.Winding.LayerCount,
 			DipoleAxis1: Num(cr.Dipole.Axis1), DipoleAxis01: Num(cr.Dipole.Axis01),
 			DipolePlane1: Num(cr.Dipole.Plane1), DipolePlane01: Num(cr.Dipole.Plane01),
@@ -190,7 +195,7 @@ func (j *Job) Report() Report {
 		unit := calc.LimitQuantities[l.Limit.Quantity].Unit
 		req, got := l.Limit.Required, l.Computed
 		if unit == "degC" {
-			req, got = Celsius(req), Celsius(got)
+			req, got = format.Celsius(req), format.Celsius(got)
 		}
 		rel := ">="
 		if l.Limit.Relation == calc.AtMost {
@@ -216,7 +221,7 @@ func (j *Job) Report() Report {
 					}
 				}
 				sr.Moment, sr.FieldCenter = n(st.Results.Moment.Norm()), n(st.Results.FieldCentre.Norm())
-				sr.Power, sr.WindingTemperature, sr.LimitsFailed = n(pw), n(Celsius(hot)), &failed
+				sr.Power, sr.WindingTemperature, sr.LimitsFailed = n(pw), n(format.Celsius(hot)), &failed
 			}
 			rep.Sweep.Steps = append(rep.Sweep.Steps, sr)
 		}
@@ -229,8 +234,85 @@ func (j *Job) Report() Report {
 	return rep
 }
 
-// JSON is the indented JSON report.
-func (j *Job) JSON() ([]byte, error) {
-	b, err := json.MarshalIndent(j.Report(), "", "  ")
+// JSON is the indented JSON report of a study.
+func JSON(j *analysis.Study) ([]byte, error) {
+	b, err := json.MarshalIndent(Build(j), "", "  ")
 	return append(b, '\n'), err
+}
+
+// CoilHeatSwitch holds a coil's heating, switching and a.c. keys of the
+// JSON report (embedded in CoilReport; keys only ever added). Null where a
+// figure does not apply: switch_off_voltage_V without switch-off,
+// skin_depth_m, impedance_ohm and current_ac_A without frequency, force_N
+// without field-gradient, pair_force_N for anything but a pair,
+// time_to_limit_s when the class is never reached, cycle figures without
+// on-time.
+type CoilHeatSwitch struct {
+	SurfaceTemperature Num `json:"surface_temperature_C"`
+	MeanTemperature    Num `json:"mean_temperature_C"`
+	TimeToLimit        Num `json:"time_to_limit_s"`
+	CyclePeak          Num `json:"cycle_peak_C"`
+	CycleTrough        Num `json:"cycle_trough_C"`
+	MomentCold         Num `json:"moment_cold_A_m2"`
+	HeatCapacity       Num `json:"heat_capacity_J_K"`
+	TimeConstant       Num `json:"time_constant_s"`
+	RiseTime           Num `json:"rise_time_s"`
+	Energy             Num `json:"energy_J"`
+	SwitchOffVoltage   Num `json:"switch_off_voltage_V"`
+	SuppressionR       Num `json:"suppression_resistor_ohm"`
+	SkinDepth          Num `json:"skin_depth_m"`
+	Impedance          Num `json:"impedance_ohm"`
+	CurrentAC          Num `json:"current_ac_A"`
+	Force              Num `json:"force_N"`
+	PairForce          Num `json:"pair_force_N"`
+}
+
+func coilHeatSwitch(co calc.Coil, cr calc.CoilResult) CoilHeatSwitch {
+	h, s, a := cr.Heat, cr.Switch, cr.AC
+	pair := math.NaN()
+	if co.Form == calc.Pair {
+		pair = cr.PairForce
+	}
+	return CoilHeatSwitch{
+		SurfaceTemperature: Num(format.Celsius(h.Steady.Surface)), MeanTemperature: Num(format.Celsius(h.Steady.Mean)),
+		TimeToLimit: Num(h.TimeToLimit), CyclePeak: Num(format.Celsius(h.Cycle.PeakHot)), CycleTrough: Num(format.Celsius(h.Cycle.Trough)),
+		MomentCold: Num(h.ColdMoment), HeatCapacity: Num(h.HeatCapacity),
+		TimeConstant: Num(s.TimeConstant), RiseTime: Num(s.RiseTime), Energy: Num(s.Energy),
+		SwitchOffVoltage: Num(s.Spike), SuppressionR: Num(s.Resistor),
+		SkinDepth: Num(a.SkinDepth), Impedance: Num(a.Impedance), CurrentAC: Num(a.Current),
+		Force: Num(cr.GradientForce), PairForce: Num(pair),
+	}
+}
+
+// Interactions holds the design's coupling keys of the JSON report
+// (embedded in Report).
+type Interactions struct {
+	Couplings     []CouplingReport `json:"couplings"`
+	GradientForce Num              `json:"gradient_force_N"`
+}
+
+// CouplingReport is the mutual inductance of two coil blocks and the force
+// on the second from the first; the mutual inductance is null unless they
+// are coaxial, force_method says "coaxial" (exact) or "dipole" (far-field
+// approximation).
+type CouplingReport struct {
+	Coils       [2]string `json:"coils"`
+	Coaxial     bool      `json:"coaxial"`
+	Mutual      Num       `json:"mutual_inductance_H"`
+	K           Num       `json:"coupling_coefficient"`
+	Force       [3]Num    `json:"force_N"`
+	ForceMethod string    `json:"force_method"`
+}
+
+func interactions(d calc.Design, r calc.Results) Interactions {
+	out := Interactions{Couplings: []CouplingReport{}, GradientForce: Num(r.GradientForce)}
+	for _, cp := range r.Couplings {
+		m := "dipole"
+		if cp.Exact {
+			m = "coaxial"
+		}
+		out.Couplings = append(out.Couplings, CouplingReport{Coils: [2]string{d.Coils[cp.A].Name, d.Coils[cp.B].Name},
+			Coaxial: cp.Coaxial, Mutual: Num(cp.Mutual), K: Num(cp.K), Force: vec(cp.Force), ForceMethod: m})
+	}
+	return out
 }

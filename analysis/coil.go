@@ -1,0 +1,269 @@
+package analysis
+
+import (
+	"math"
+
+	"coilmemo/calc"
+)
+
+// CoilStudy is what the memo shows of one coil block beyond its
+// calc.CoilResult: the geometry as laid out, the field as data, and the
+// intermediate values of its derivations.
+type CoilStudy struct {
+	// Outer is the wire's outer diameter as used (the bare diameter when
+	// no outer diameter is known), m.
+	Outer float64
+	// Bundle is the diameter of the round bundle of all turns,
+	// hexagonally packed, m: the section of a thin coil or a rectangle.
+	Bundle float64
+	// Envelope is the winding's cross-section in its own frame, and
+	// Placements the axial positions of the block's coils (two for a pair).
+	Envelope   Envelope
+	Placements []float64
+	// Depth is the winding's radial depth as laid out: the radial build,
+	// the bundle of a thin coil, or one wire of a single layer, m.
+	Depth float64
+	// ConductorArea is the bare wire's cross-section, m².
+	ConductorArea float64
+	// Series is the number of coils in series in the block (2 for a pair).
+	Series int
+	// MeanRadius is the turn-weighted mean radius of the winding as laid
+	// out, m (0 without turns).
+	MeanRadius float64
+
+	Axis       AxisProfile
+	Map        *MapData    // nil when the coil has no extent to map
+	Pair       *PairCurves // nil unless a pair with a centre field or gradient
+	Inductance InductanceParts
+	Heat       HeatParts
+}
+
+// Envelope is a winding's cross-section in its own frame: radii R0…R1 and
+// axial extent Z0…Z1 about its centre, m; Round for a thin coil's bundle.
+type Envelope struct {
+	R0, R1, Z0, Z1 float64
+	Round          bool
+}
+
+// StudyCoil is the CoilStudy of coil block co with results cr in the
+// given conditions.
+func StudyCoil(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) CoilStudy {
+	w := cr.Winding
+	cs := CoilStudy{Outer: co.Wire.Outer, Series: calc.SeriesCoils(co), ConductorArea: calc.ConductorArea(co.Wire.Bare)}
+	if !(cs.Outer > 0) {
+		cs.Outer = co.Wire.Bare
+	}
+	cs.Bundle = calc.BundleDiameter(cs.Outer, co.Turns)
+	cs.MeanRadius = meanTurnRadius(w)
+	cs.Envelope = windingEnvelope(co, w, cs.Outer, cs.Bundle)
+	cs.Placements = placements(co)
+	cs.Depth = co.RadialBuild
+	if cs.Depth == 0 {
+		cs.Depth = co.Wire.Outer
+		if co.Length == 0 {
+			cs.Depth = cs.Bundle
+		}
+	}
+	cs.Axis = profileOnAxis(co, cr, axisPoints)
+	cs.Map = coilMap(co, cr, cs)
+	cs.Pair = pairCurves(co, cr)
+	cs.Inductance = inductanceParts(co, cr, cs.Outer)
+	cs.Heat = heatParts(co, cr, cond, cs.Outer)
+	return cs
+}
+
+// windingEnvelope is the cross-section of one coil (one of a pair) as
+// given: a thin coil's round bundle (hexagonal packing) on the mean
+// radius; one layer of wire over the length; or the length × radial build.
+func windingEnvelope(co calc.Coil, w calc.Winding, outer, bundle float64) Envelope {
+	rm := co.MeanDiameter / 2
+	switch {
+	case w.Thin:
+		return Envelope{R0: rm - bundle/2, R1: rm + bundle/2, Z0: -bundle / 2, Z1: bundle / 2, Round: true}
+	case co.RadialBuild <= 0:
+		return Envelope{R0: rm - outer/2, R1: rm + outer/2, Z0: -co.Length / 2, Z1: co.Length / 2}
+	}
+	rin := rm - co.RadialBuild/2
+	if co.InnerDiameter > 0 {
+		rin = co.InnerDiameter / 2
+	}
+	L := co.Length
+	if !(L > 0) {
+		L = outer
+	}
+	return Envelope{R0: rin, R1: rin + co.RadialBuild, Z0: -L / 2, Z1: L / 2}
+}
+
+// placements are the axial positions of a block's coils in its frame.
+func placements(co calc.Coil) []float64 {
+	if co.Form == calc.Pair {
+		return []float64{-math.Abs(co.Spacing) / 2, math.Abs(co.Spacing) / 2}
+	}
+	return []float64{0}
+}
+
+// InductanceParts are the intermediate values of a coil block's
+// self-inductance derivation. L1 is the self-inductance of one coil (the
+// block's for all forms but a pair) and M the mutual inductance of a
+// pair's two coils (L = 2 L1 ± 2 M). The single-layer terms are set for a
+// single-layer solenoid and NaN otherwise; BundleRadius for a thin coil.
+type InductanceParts struct {
+	L1, M float64
+	// Thin coil: the bundle's radius, m.
+	BundleRadius float64
+	// Single layer: the elliptic parameter m = k² of the current sheet,
+	// Nagaoka's coefficient, the sheet's inductance, Rosa's corrections A
+	// and B, and Wheeler's formula as the cross-check.
+	K2, Nagaoka, Sheet, RosaA, RosaB, Wheeler float64
+	// Multilayer: whether the turns were grouped into cells, and
+	// Wheeler's multilayer formula (NaN outside its range).
+	ByCells           bool
+	WheelerMultilayer float64
+}
+
+func inductanceParts(co calc.Coil, cr calc.CoilResult, outer float64) InductanceParts {
+	n := math.NaN()
+	ip := InductanceParts{L1: cr.Inductance, K2: n, Nagaoka: n, Sheet: n, RosaA: n, RosaB: n, Wheeler: n,
+		BundleRadius: n, WheelerMultilayer: n}
+	w := cr.Winding
+	if math.IsNaN(cr.Inductance) || w.TurnCount() == 0 {
+		return ip
+	}
+	if co.Form == calc.Pair {
+		one := co
+		one.Form = calc.Solenoid
+		if w.Thin {
+			one.Form = calc.Loop
+		}
+		ip.L1 = calc.CoilInductance(one, w)
+		ip.M = (cr.Inductance - 2*ip.L1) / 2
+		if co.Opposing {
+			ip.M = -ip.M
+		}
+	}
+	a, l, N := co.MeanDiameter/2, co.Length, co.Turns
+	switch {
+	case co.Form == calc.Rectangle:
+	case w.Thin:
+		ip.BundleRadius = calc.BundleDiameter(outer, N) / 2
+	case w.LayerCount <= 1 && co.RadialBuild <= 0:
+		ip.K2 = 4 * a * a / (4*a*a + l*l)
+		ip.Nagaoka = calc.NagaokaCoefficient(a, l)
+		ip.Sheet = calc.SolenoidInductance(a, l, N)
+		ip.RosaA = calc.RosaA(l/float64(N), co.Wire.Bare)
+		ip.RosaB = calc.RosaB(N)
+		ip.Wheeler = calc.WheelerInductance(a, l, N)
+	default:
+		ip.ByCells = calc.MultilayerByCells(w)
+		ip.WheelerMultilayer = calc.WheelerMultilayerInductance(a, l, co.RadialBuild, N)
+	}
+	return ip
+}
+
+// HeatParts are the intermediate values of a coil block's heat balance
+// that the derivation shows, and the states the cautions need.
+type HeatParts struct {
+	// RiseInner, RiseOuter and RiseLength are the geometry of the
+	// conduction rise inside the winding (calc.RiseGeometry), m.
+	RiseInner, RiseOuter, RiseLength float64
+	// BundleDiameter is a thin coil's heat-shedding tube diameter, m.
+	BundleDiameter float64
+	// AirViscosity (m²/s), AirConductivity (W/(m·K)) and AirPrandtl are
+	// the air's properties at the film temperature (NaN without
+	// convection).
+	AirViscosity, AirConductivity, AirPrandtl float64
+	// H is the convective coefficient at the steady surface temperature,
+	// W/(m²·K).
+	H float64
+	// Continuous is the steady state energised continuously (duty 1);
+	// equal to the steady state when the coil has no duty cycle.
+	Continuous calc.ThermalState
+	// ContinuousTau is the thermal time constant at that state, s (NaN
+	// when it does not settle).
+	ContinuousTau float64
+	// SurfaceMax is the hottest surface temperature: the steady one or at
+	// the end of an on period of the duty cycle, K.
+	SurfaceMax float64
+	// WarmUp is the warm-up from cold, energised continuously and on the
+	// duty cycle (nil when there is no heat capacity to warm).
+	WarmUp *WarmUp
+	// FormerSource names where the former material's data come from ("" when
+	// none is used).
+	FormerSource string
+}
+
+// WarmUp is the hottest winding temperature against time from cold, K.
+type WarmUp struct {
+	T, Hot           []float64 // energised continuously
+	CycleT, CycleHot []float64 // on the duty cycle; nil when none or too many periods to draw
+	End              float64   // s, the time plotted
+}
+
+// warmUpPeriodsMax is the most on/off periods a warm-up curve is drawn over.
+const warmUpPeriodsMax = 150
+
+func heatParts(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, outer float64) HeatParts {
+	n := math.NaN()
+	h := cr.Heat
+	tp := h.Problem
+	st := h.Steady
+	hp := HeatParts{AirViscosity: n, AirConductivity: n, AirPrandtl: n, H: n, ContinuousTau: n}
+	w := cr.Winding
+	hp.RiseInner, hp.RiseOuter, hp.RiseLength = calc.RiseGeometry(co, w)
+	if w.Thin {
+		hp.BundleDiameter = calc.BundleDiameter(outer, w.TurnCount())
+	}
+	if st.Settled && tp.Convection != nil {
+		hp.AirViscosity, hp.AirConductivity, hp.AirPrandtl, _ = calc.AirProperties(st.Convection.Film)
+	}
+	if st.Settled {
+		hp.H = tp.ConvectionCoefficient(st.Surface)
+	}
+	on := tp
+	on.Duty = 1
+	hp.Continuous = st
+	if tp.Duty != 1 {
+		hp.Continuous = on.Steady()
+	}
+	C := h.HeatCapacity
+	if hp.Continuous.Settled && C > 0 {
+		hp.ContinuousTau = on.ThermalTimeConstant(C, hp.Continuous.Mean)
+	}
+	hp.SurfaceMax = st.Surface
+	if cy := h.Cycle; cy.On > 0 && cy.Settled {
+		hp.SurfaceMax = math.Max(hp.SurfaceMax, tp.Surface(cy.PeakMean, tp.PowerOn(cy.PeakMean)))
+	}
+	if m, ok := calc.FormerMaterialByName(co.Former.Material); ok && co.Former.HeatCapacity <= 0 && co.Former.Mass > 0 {
+		hp.FormerSource = m.Source
+	}
+	hp.WarmUp = warmUp(co, h, on, hp.Continuous, hp.ContinuousTau)
+	return hp
+}
+
+// warmUp integrates the warm-up from cold over a span that shows what
+// matters: five thermal time constants, and past the time the insulation
+// class is reached.
+func warmUp(co calc.Coil, h calc.HeatResult, on calc.ThermalProblem, steady calc.ThermalState, tau float64) *WarmUp {
+	C := h.HeatCapacity
+	if !(C > 0) {
+		return nil
+	}
+	tEnd := 5 * tau
+	if !math.IsNaN(h.TimeToLimit) {
+		if math.IsNaN(tEnd) || tEnd < 1.3*h.TimeToLimit {
+			tEnd = 1.3 * h.TimeToLimit
+		}
+		if steady.Settled {
+			tEnd = math.Max(tEnd, math.Min(5*tau, 3*h.TimeToLimit))
+		}
+	}
+	if !(tEnd > 0) || math.IsInf(tEnd, 0) {
+		return nil
+	}
+	wu := &WarmUp{End: tEnd}
+	wu.T, _, wu.Hot = on.WarmUpCurve(C, tEnd, 0)
+	if cy := h.Cycle; cy.On > 0 && cy.Settled && tEnd/(cy.On+cy.Off) <= warmUpPeriodsMax {
+		wu.CycleT, _, wu.CycleHot = h.Problem.WarmUpCurve(C, tEnd, cy.On)
+	}
+	return wu
+}

@@ -1,0 +1,315 @@
+package analysis
+
+import (
+	"math"
+
+	"coilmemo/calc"
+)
+
+// axisPoints is the number of points of the on-axis profile.
+const axisPoints = 241
+
+// MapGrid is the number of nodes along the longer side of a coil's map.
+const MapGrid = 200
+
+// AllMapGrid is the node count along each side of the map of all coils.
+const AllMapGrid = 121
+
+// AxisProfile samples the exact field of a coil block along its own axis
+// and the dipole field of its moment at the same points (NaN inside the
+// winding's extent, where the comparison means nothing).
+type AxisProfile struct {
+	Z, Exact, Dipole []float64
+	Dipole1pc        float64 // m, NaN when not found
+	Peak             float64 // T, largest |B| of the profile
+}
+
+func profileOnAxis(co calc.Coil, cr calc.CoilResult, n int) AxisProfile {
+	w := cr.Winding
+	fr := calc.CoilFrame(co.Axis)
+	src := calc.NewCoilSource(co, w, cr.Current)
+	size := AxialSize(co)
+	p := AxisProfile{Dipole1pc: cr.Dipole.Axis1, Peak: math.Inf(-1)}
+	zmax := 6 * size
+	if !math.IsNaN(p.Dipole1pc) {
+		zmax = math.Max(zmax, 1.5*p.Dipole1pc)
+	}
+	for i := 0; i < n; i++ {
+		z := -zmax + 2*zmax*float64(i)/float64(n-1)
+		pt := co.Centre.Add(fr.U.Scale(z))
+		p.Z = append(p.Z, z)
+		b := src.At(pt).Norm()
+		p.Exact = append(p.Exact, b)
+		p.Peak = math.Max(p.Peak, b)
+		dip := math.NaN()
+		if math.Abs(z) > size && cr.Moment.Norm() > 0 {
+			dip = calc.DipoleField(cr.Moment, fr.U.Scale(z)).Norm()
+		}
+		p.Dipole = append(p.Dipole, dip)
+	}
+	return p
+}
+
+// AxialSize is the larger of a coil block's outer radius and its axial
+// half-extent.
+func AxialSize(co calc.Coil) float64 {
+	R := co.MeanDiameter/2 + co.RadialBuild/2
+	if co.Form == calc.Rectangle {
+		R = math.Max(co.Width, co.Height) / 2
+	}
+	size := math.Max(R, co.Length/2)
+	if co.Form == calc.Pair {
+		size = math.Max(size, math.Abs(co.Spacing)/2+co.Length/2)
+	}
+	return size
+}
+
+// MapData is |B| of one coil block over a plane through its axis, in its
+// own frame: B[ix*len(Z)+iz] at radial (or across-the-width) position
+// X[ix] and axial position Z[iz], T.
+type MapData struct {
+	X, Z         []float64
+	B            []float64
+	XHalf, ZHalf float64
+}
+
+func coilMap(co calc.Coil, cr calc.CoilResult, cs CoilStudy) *MapData {
+	var zHalf, xHalf float64
+	if co.Form == calc.Rectangle {
+		xHalf = 0.8 * co.Width
+		zHalf = math.Max(0.8*co.Width, 0.5*co.Height)
+	} else {
+		e := cs.Envelope
+		half := e.Z1
+		if co.Form == calc.Pair {
+			half += math.Abs(co.Spacing) / 2
+		}
+		xHalf = 1.6 * e.R1
+		zHalf = math.Max(half+0.9*e.R1, 0.75*xHalf)
+	}
+	if !(xHalf > 0) || !(zHalf > 0) || math.IsInf(xHalf, 0) || math.IsInf(zHalf, 0) {
+		return nil
+	}
+	nz, nx := MapGrid, MapGrid
+	if zHalf > xHalf {
+		nx = max(61, int(math.Round(MapGrid*xHalf/zHalf)))
+	} else {
+		nz = max(61, int(math.Round(MapGrid*zHalf/xHalf)))
+	}
+	// Odd counts put nodes on the axis and the mid-plane.
+	nx |= 1
+	nz |= 1
+	m := &MapData{Z: SymmetricSpace(zHalf, nz), X: SymmetricSpace(xHalf, nx), XHalf: xHalf, ZHalf: zHalf}
+	g := calc.FieldMap(co, cr.Winding, cr.Current, m.X, m.Z)
+	m.B = make([]float64, len(m.Z)*len(m.X))
+	for ix := range m.X {
+		for iz := range m.Z {
+			m.B[ix*len(m.Z)+iz] = g.Magnitude(ix, iz)
+		}
+	}
+	return m
+}
+
+// Linspace returns n evenly spaced values from lo to hi.
+func Linspace(lo, hi float64, n int) []float64 {
+	v := make([]float64, n)
+	for i := range v {
+		v[i] = lo + (hi-lo)*float64(i)/float64(n-1)
+	}
+	return v
+}
+
+// SymmetricSpace returns n evenly spaced values from −half to half that
+// are exact mirror images of each other (so the map's symmetries apply).
+func SymmetricSpace(half float64, n int) []float64 {
+	v := Linspace(-half, half, n)
+	for i := range n / 2 {
+		v[n-1-i] = -v[i]
+	}
+	if n%2 == 1 {
+		v[n/2] = 0
+	}
+	return v
+}
+
+// PairCurves is a pair's profile from its centre: for an aiding pair the
+// field's departure from the centre value, B/B0 − 1, along the axis and
+// radially in the mid-plane; for an opposing pair the local gradient's
+// departure from the centre gradient, G/G0 − 1.
+type PairCurves struct {
+	B0            float64 // T, axial field at the centre
+	Pos           []float64
+	Axial, Radial []float64
+}
+
+// pairPoints is the number of points of a pair's profile.
+const pairPoints = 61
+
+func pairCurves(co calc.Coil, cr calc.CoilResult) *PairCurves {
+	if co.Form != calc.Pair {
+		return nil
+	}
+	pr := cr.Pair
+	R := co.MeanDiameter / 2
+	src := calc.NewCoilSource(co, cr.Winding, cr.Current)
+	fr := calc.CoilFrame(co.Axis)
+	B0 := src.At(co.Centre).Dot(fr.U)
+	if !(R > 0) || math.IsNaN(B0) || (!co.Opposing && B0 == 0) {
+		return nil
+	}
+	pc := &PairCurves{B0: B0}
+	axial := func(p calc.Vec) float64 { return src.At(p).Dot(fr.U) }
+	if !co.Opposing {
+		ext := 1.6 * math.Max(pr.Axial1, pr.Radial1)
+		if !(ext > 0) {
+			ext = 0.6 * R
+		}
+		ext = math.Min(ext, 1.2*R)
+		pc.Pos = Linspace(0, ext, pairPoints)
+		for _, x := range pc.Pos {
+			pc.Axial = append(pc.Axial, axial(co.Centre.Add(fr.U.Scale(x)))/B0-1)
+			pc.Radial = append(pc.Radial, axial(co.Centre.Add(fr.E1.Scale(x)))/B0-1)
+		}
+		return pc
+	}
+	G := pr.Gradient
+	ext := math.Min(1.6*math.Max(pr.LinearAxial, pr.LinearRadial), 1.2*R)
+	if !(ext > 0) {
+		ext = 0.6 * R
+	}
+	pc.Pos = Linspace(0, ext, pairPoints)
+	h := 1e-4 * R
+	for _, x := range pc.Pos {
+		gz := (axial(co.Centre.Add(fr.U.Scale(x+h))) - axial(co.Centre.Add(fr.U.Scale(x-h)))) / (2 * h)
+		p0 := co.Centre.Add(fr.E1.Scale(x))
+		gr := (axial(p0.Add(fr.U.Scale(h))) - axial(p0.Sub(fr.U.Scale(h)))) / (2 * h)
+		pc.Axial = append(pc.Axial, gz/G-1)
+		pc.Radial = append(pc.Radial, gr/G-1)
+	}
+	return pc
+}
+
+// DesignStudy is what the memo shows of the design as a whole.
+type DesignStudy struct {
+	// TorqueAngle (degrees, 0…180) and Torque (N·m) are |τ| = m B sin θ of
+	// the total moment in the background field (nil without one).
+	TorqueAngle, Torque []float64
+	// Extent is the largest distance of any conductor from the origin, m.
+	Extent float64
+	// All is |B| of all coils together over the xz-plane through the
+	// origin, X and Z the same symmetric grid, B[ix*len(Z)+iz]; NaN
+	// near windings that cross the plane obliquely (they are not drawn).
+	// Nil for a design of one coil block.
+	All *MapData
+}
+
+func analyseDesign(d calc.Design, r calc.Results) DesignStudy {
+	ds := DesignStudy{Extent: DesignExtent(d)}
+	if Bb := d.Conditions.BackgroundField; Bb.Norm() > 0 {
+		for i := 0; i <= 180; i += 2 {
+			a := float64(i)
+			ds.TorqueAngle = append(ds.TorqueAngle, a)
+			ds.Torque = append(ds.Torque, calc.TorqueAtAngle(r.Moment.Norm(), Bb.Norm(), a*math.Pi/180))
+		}
+	}
+	ds.All = allCoilsMap(d, r)
+	return ds
+}
+
+func allCoilsMap(d calc.Design, r calc.Results) *MapData {
+	if len(d.Coils) < 2 {
+		return nil
+	}
+	half := 1.3 * DesignExtent(d)
+	if !(half > 0) || math.IsInf(half, 0) {
+		return nil
+	}
+	var hidden []int
+	for i, co := range d.Coils {
+		if !DrawnInXZ(co) {
+			hidden = append(hidden, i)
+		}
+	}
+	xs := SymmetricSpace(half, AllMapGrid)
+	step := 2 * half / float64(AllMapGrid-1)
+	fm := calc.NewFieldModel(d)
+	m := &MapData{X: xs, Z: xs, XHalf: half, ZHalf: half, B: make([]float64, len(xs)*len(xs))}
+	for ix, x := range xs {
+		for iz, z := range xs {
+			p := calc.Vec{x, 0, z}
+			v := fm.At(p).Norm()
+			for _, k := range hidden {
+				co := d.Coils[k]
+				w := r.Coils[k].Winding
+				outer := co.Wire.Outer
+				if !(outer > 0) {
+					outer = co.Wire.Bare
+				}
+				if nearWinding(co, windingEnvelope(co, w, outer, calc.BundleDiameter(outer, co.Turns)), p, step) {
+					v = math.NaN()
+				}
+			}
+			m.B[ix*len(xs)+iz] = v
+		}
+	}
+	return m
+}
+
+// DrawnInXZ reports whether the winding of co can be drawn in the
+// xz-plane through the origin: a circular coil whose axis lies along x or
+// z with its centre in the plane, or along y (the plane then cuts the
+// winding across its length, or misses it).
+func DrawnInXZ(co calc.Coil) bool {
+	if co.Form == calc.Rectangle {
+		return false
+	}
+	u := co.Axis.Unit()
+	alongZ := math.Abs(u[2]) > 1-1e-12
+	alongX := math.Abs(u[0]) > 1-1e-12
+	alongY := math.Abs(u[1]) > 1-1e-12
+	return alongY || ((alongZ || alongX) && co.Centre[1] == 0)
+}
+
+// nearWinding reports whether p lies within margin of the winding
+// envelope e of coil block co (in its own frame, every placement of a
+// pair), where a map would show the field of the conductors themselves.
+func nearWinding(co calc.Coil, e Envelope, p calc.Vec, margin float64) bool {
+	if co.Form == calc.Rectangle {
+		return false
+	}
+	fr := calc.CoilFrame(co.Axis)
+	l := fr.ToLocal(p.Sub(co.Centre))
+	rho := math.Hypot(l[0], l[1])
+	for _, z := range placements(co) {
+		if rho > e.R0-margin && rho < e.R1+margin && l[2] > z+e.Z0-margin && l[2] < z+e.Z1+margin {
+			return true
+		}
+	}
+	return false
+}
+
+// DesignExtent is the largest distance of any conductor from the origin:
+// the winding's outer radius (a thin coil's round bundle included) and
+// half its axial extent.
+func DesignExtent(d calc.Design) float64 {
+	e := 0.0
+	for _, co := range d.Coils {
+		depth := co.RadialBuild
+		if depth == 0 {
+			depth = co.Wire.Outer
+			if co.Length == 0 {
+				depth = calc.BundleDiameter(co.Wire.Outer, co.Turns)
+			}
+		}
+		r := co.MeanDiameter/2 + depth/2
+		if co.Form == calc.Rectangle {
+			r = math.Hypot(co.Width, co.Height)/2 + depth/2
+		}
+		half := math.Max(co.Length, depth) / 2
+		if co.Form == calc.Pair {
+			half += co.Spacing / 2
+		}
+		e = math.Max(e, co.Centre.Norm()+math.Hypot(r, half))
+	}
+	return e
+}

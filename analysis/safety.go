@@ -1,0 +1,204 @@
+package analysis
+
+import (
+	"math"
+
+	"coilmemo/calc"
+)
+
+// ImplantField is the flux density above which active implanted medical
+// devices may be affected: 0.5 mT, ICNIRP Guidelines on limits of exposure
+// to static magnetic fields, Health Physics 96(4):504–514 (2009).
+const ImplantField = 0.5e-3
+
+// HotSurface is the surface temperature above which brief contact can burn,
+// 60 °C: common practice for touchable surfaces of equipment.
+var HotSurface = calc.CelsiusToKelvin(60)
+
+// ELV is the usual bound of extra-low d.c. voltage, 60 V (IEC 61140 /
+// IEC 60364-4-41, ripple-free d.c.).
+const ELV = 60.0
+
+// AssumedSwitchOff is the switch-off time taken when none is stated: a
+// fast semiconductor switch, 1 µs.
+const AssumedSwitchOff = 1e-6
+
+// Severity ranks a finding.
+type Severity int
+
+// Severities, least severe first.
+const (
+	Note Severity = iota
+	Caution
+	Warning
+)
+
+// FindingKind names the hazard a finding is about.
+type FindingKind int
+
+// The hazards the analysis looks for.
+const (
+	Runaway          FindingKind = iota // no steady state within the insulation's reach
+	ClassExceeded                       // the hottest point settles above the insulation class
+	ClassIfLeftOn                       // within the class on the duty cycle, not if left energised
+	HotSurfaceFound                     // surface hotter than HotSurface
+	HighDensity                         // current density above common practice while running warm
+	HazardousVoltage                    // supply voltage above ELV
+	SwitchOffVoltage                    // unsuppressed switch-off spike above ELV or the driver rating
+	ACDrive                             // the d.c. model does not hold at the drive frequency
+)
+
+// Finding is one hazard of one coil block, with the numbers the memo
+// words it with.
+type Finding struct {
+	Kind     FindingKind
+	Severity Severity
+	Coil     int // index into the design's coils
+	// Value is the finding's figure in SI: the temperature (K) for the
+	// thermal kinds, the current density (A/m²), the voltage (V) for
+	// HazardousVoltage and SwitchOffVoltage.
+	Value float64
+	// SwitchOff is the switch-off time the spike is computed at, s, and
+	// Assumed says it was not stated (AssumedSwitchOff).
+	SwitchOff float64
+	Assumed   bool
+}
+
+// Safety holds the findings, most severe first within each coil, and the
+// reach of the implant-field level.
+type Safety struct {
+	Findings []Finding
+	Implant  ImplantReach
+}
+
+// ImplantReach is where the field of all coils together reaches
+// ImplantField: at the origin, along the z axis and in the xy plane
+// (largest distance from the origin, 0 when not reached), and at probes.
+type ImplantReach struct {
+	Searched      bool    // false for a design without extent
+	Origin        float64 // T, |B| at the origin
+	Axial, Radial float64 // m
+	Probes        []int   // indices of probes at or above the level
+}
+
+// Any reports whether the level is reached anywhere searched.
+func (ir ImplantReach) Any() bool {
+	return ir.Origin >= ImplantField || ir.Axial > 0 || ir.Radial > 0 || len(ir.Probes) > 0
+}
+
+func assessSafety(d calc.Design, r calc.Results, coils []CoilStudy) Safety {
+	var s Safety
+	for i, co := range d.Coils {
+		cr := r.Coils[i]
+		add := func(k FindingKind, sev Severity, v float64) {
+			s.Findings = append(s.Findings, Finding{Kind: k, Severity: sev, Coil: i, Value: v})
+		}
+		if cr.Runaway {
+			add(Runaway, Warning, cr.Temperature)
+			s.Findings = append(s.Findings, electricalFindings(i, co, cr)...)
+			continue
+		}
+		if cr.Temperature > co.InsulationClass {
+			add(ClassExceeded, Warning, cr.Temperature)
+		}
+		h := cr.Heat
+		if !(cr.Runaway || calc.Duty(co) >= 1 || math.IsNaN(h.TimeToLimit) || !(cr.Temperature <= co.InsulationClass)) {
+			add(ClassIfLeftOn, Caution, coils[i].Heat.Continuous.HotSpot)
+		}
+		if ts := coils[i].Heat.SurfaceMax; ts > HotSurface {
+			add(HotSurfaceFound, Caution, ts)
+		}
+		// The density rule of thumb only where the coil also runs warm: a
+		// small coil sheds its heat easily and the rule is conservative
+		// for it.
+		if J := math.Abs(cr.Density); J > calc.PracticeDensity && calc.Duty(co) >= 1 && co.InsulationClass-cr.Temperature < 50 {
+			add(HighDensity, Note, J)
+		}
+		if math.Abs(cr.Voltage) > ELV {
+			add(HazardousVoltage, Warning, cr.Voltage)
+		}
+		s.Findings = append(s.Findings, electricalFindings(i, co, cr)...)
+	}
+	s.Implant = implantReach(d, r)
+	return s
+}
+
+// electricalFindings are the switch-off spike, at the stated switch-off
+// time or AssumedSwitchOff, when it passes ELV or the driver's rating, and
+// at a drive frequency the finding that the d.c. model stops holding.
+func electricalFindings(i int, co calc.Coil, cr calc.CoilResult) []Finding {
+	var out []Finding
+	s := cr.Switch
+	tOff, assumed := s.SwitchOff, false
+	if !(tOff > 0) {
+		tOff, assumed = AssumedSwitchOff, true
+	}
+	spike := s.Spike
+	if assumed {
+		spike = calc.SwitchOffSpike(cr.Inductance, cr.Current, tOff, s.Supply)
+	}
+	bound := ELV
+	if s.ClampFromRating {
+		bound = math.Min(bound, s.Clamp)
+	}
+	if e := s.Energy; !math.IsNaN(e) && e > 0 && spike > bound {
+		out = append(out, Finding{Kind: SwitchOffVoltage, Severity: Caution, Coil: i, Value: spike, SwitchOff: tOff, Assumed: assumed})
+	}
+	if a := cr.AC; a.Frequency > 0 && (a.Reactive || a.SkinLimited) {
+		out = append(out, Finding{Kind: ACDrive, Severity: Caution, Coil: i, Value: a.Frequency})
+	}
+	return out
+}
+
+// reach returns the largest distance from origin along the unit direction
+// u at which |B| ≥ level, searching inward from rmax in steps of 25 % and
+// refining by bisection; 0 when the level is not reached at or beyond rmin,
+// which must lie outside every winding. Valid because the field outside
+// the windings falls monotonically with distance.
+func reach(fm *calc.FieldModel, origin, u calc.Vec, level, rmin, rmax float64) float64 {
+	at := func(r float64) float64 { return fm.At(origin.Add(u.Scale(r))).Norm() }
+	if at(rmax) >= level {
+		return rmax
+	}
+	hi := rmax
+	for {
+		lo := math.Max(hi/1.25, rmin)
+		if at(lo) >= level {
+			for range 50 {
+				mid := 0.5 * (lo + hi)
+				if at(mid) >= level {
+					lo = mid
+				} else {
+					hi = mid
+				}
+			}
+			return lo
+		}
+		if lo == rmin {
+			return 0
+		}
+		hi = lo
+	}
+}
+
+func implantReach(d calc.Design, r calc.Results) ImplantReach {
+	ext := DesignExtent(d)
+	ir := ImplantReach{Origin: r.FieldCentre.Norm()}
+	if !(ext > 0) {
+		return ir
+	}
+	ir.Searched = true
+	fm := calc.NewFieldModel(d)
+	// Along the axis the search may come close to the origin (a bore holds
+	// no conductor); in the plane it stops outside the windings.
+	ir.Axial = math.Max(reach(fm, calc.Vec{}, calc.Vec{0, 0, 1}, ImplantField, ext*0.01, ext*1e3),
+		reach(fm, calc.Vec{}, calc.Vec{0, 0, -1}, ImplantField, ext*0.01, ext*1e3))
+	ir.Radial = math.Max(reach(fm, calc.Vec{}, calc.Vec{1, 0, 0}, ImplantField, ext, ext*1e3),
+		reach(fm, calc.Vec{}, calc.Vec{0, 1, 0}, ImplantField, ext, ext*1e3))
+	for i, p := range r.Probes {
+		if p.B.Norm() >= ImplantField {
+			ir.Probes = append(ir.Probes, i)
+		}
+	}
+	return ir
+}

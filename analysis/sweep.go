@@ -1,0 +1,72 @@
+package analysis
+
+import (
+	"coilmemo/calc"
+	"coilmemo/spec"
+)
+
+// SweepStep is the whole design evaluated with the swept parameter at one
+// value. A step whose winding does not fit is kept, marked infeasible.
+type SweepStep struct {
+	Value    float64 // SI
+	Feasible bool
+	Problem  string
+	Results  calc.Results
+}
+
+// setParam sets a sweepable coil key on c, keeping the dimensions that
+// were given and re-deriving the mean diameter where it follows from them.
+func setParam(c *calc.Coil, key string, v float64) {
+	switch key {
+	case "inner-diameter":
+		c.MeanDiameter = v + c.RadialBuild
+		if c.OuterDiameter > 0 {
+			c.OuterDiameter = v + 2*c.RadialBuild
+		}
+	case "outer-diameter":
+		c.MeanDiameter = v - c.RadialBuild
+		if c.InnerDiameter > 0 {
+			c.InnerDiameter = v - 2*c.RadialBuild
+		}
+	case "radial-build":
+		// The bore stays where it was; the winding grows outward.
+		inner := c.MeanDiameter - c.RadialBuild
+		c.MeanDiameter = inner + v
+		if c.InnerDiameter > 0 {
+			c.InnerDiameter = inner
+		}
+		if c.OuterDiameter > 0 {
+			c.OuterDiameter = inner + 2*v
+		}
+	case "wire-outer-diameter":
+		c.Wire.OuterEstimated = false
+	}
+	spec.SetCoilValue(c, key, v)
+}
+
+// RunSweep evaluates the design at every value of the spec's sweep.
+func RunSweep(s *spec.Spec) []SweepStep {
+	if s.Sweep == nil {
+		return nil
+	}
+	var steps []SweepStep
+	for _, v := range s.Sweep.Values() {
+		d := s.Design
+		d.Coils = append([]calc.Coil(nil), s.Design.Coils...)
+		st := SweepStep{Value: v, Feasible: true}
+		for i := range d.Coils {
+			if s.Sweep.Coil != "" && d.Coils[i].Name != s.Sweep.Coil {
+				continue
+			}
+			setParam(&d.Coils[i], s.Sweep.Param, v)
+			if err := calc.CheckWinding(d.Coils[i]); err != nil {
+				st.Feasible, st.Problem = false, err.Error()
+			}
+		}
+		if st.Feasible {
+			st.Results = calc.Evaluate(d)
+		}
+		steps = append(steps, st)
+	}
+	return steps
+}
