@@ -229,10 +229,7 @@ func heatParts(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, outer flo
 	if hp.Continuous.Settled && C > 0 {
 		hp.ContinuousTau = on.ThermalTimeConstant(C, hp.Continuous.Mean)
 	}
-	hp.SurfaceMax = st.Surface
-	if cy := h.Cycle; cy.On > 0 && cy.Settled {
-		hp.SurfaceMax = math.Max(hp.SurfaceMax, tp.Surface(cy.PeakMean, tp.PowerOn(cy.PeakMean)))
-	}
+	hp.SurfaceMax = surfaceMax(h)
 	if m, ok := calc.FormerMaterialByName(co.Former.Material); ok && co.Former.HeatCapacity <= 0 && co.Former.Mass > 0 {
 		hp.FormerSource = m.Source
 	}

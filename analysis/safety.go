@@ -133,10 +133,7 @@ func electricalFindings(i int, co calc.Coil, cr calc.CoilResult) []Finding {
 	if !(tOff > 0) {
 		tOff, assumed = AssumedSwitchOff, true
 	}
-	spike := s.Spike
-	if assumed {
-		spike = calc.SwitchOffSpike(cr.Inductance, cr.Current, tOff, s.Supply)
-	}
+	spike := switchVoltage(cr)
 	bound := ELV
 	if s.ClampFromRating {
 		bound = math.Min(bound, s.Clamp)

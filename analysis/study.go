@@ -45,7 +45,8 @@ type Study struct {
 	// Cooling is the cooling as used: the spec's, with the defaults filled
 	// in (calc.EffectiveCooling).
 	Cooling calc.Cooling
-	Coils   []CoilStudy // one per coil block, in spec order
+	Coils   []CoilStudy   // one per coil block, in spec order
+	Limits  []LimitResult // every requirement judged, in spec order
 	Checks  []Check
 	Sweep   []SweepStep // one per swept value, when the spec has a sweep
 	Safety  Safety
@@ -80,6 +81,7 @@ func Analyse(s *spec.Spec, o Options) *Study {
 	}
 	st.Results = calc.Evaluate(s.Design)
 	st.Cooling = calc.EffectiveCooling(s.Design.Conditions.Cooling)
+	st.Limits = JudgeLimits(s.Design, st.Results)
 	for i, c := range s.Design.Coils {
 		st.Coils = append(st.Coils, StudyCoil(c, st.Results.Coils[i], s.Design.Conditions))
 	}
@@ -100,7 +102,7 @@ func Analyse(s *spec.Spec, o Options) *Study {
 
 // Failed counts the limits and verification checks that failed.
 func (st *Study) Failed() (limits, checks int) {
-	for _, l := range st.Results.Limits {
+	for _, l := range st.Limits {
 		if !l.Pass {
 			limits++
 		}

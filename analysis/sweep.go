@@ -12,6 +12,7 @@ type SweepStep struct {
 	Feasible bool
 	Problem  string
 	Results  calc.Results
+	Limits   []LimitResult // the requirements judged at this step
 }
 
 // setParam sets a sweepable coil key on c, keeping the dimensions that
@@ -65,6 +66,7 @@ func RunSweep(s *spec.Spec) []SweepStep {
 		}
 		if st.Feasible {
 			st.Results = calc.Evaluate(d)
+			st.Limits = JudgeLimits(d, st.Results)
 		}
 		steps = append(steps, st)
 	}

@@ -126,10 +126,15 @@ const (
 
 // Limit is one requirement line: Quantity Relation Required (SI).
 type Limit struct {
-	Quantity string // a key of LimitQuantities
+	Quantity string // a key of spec.LimitQuantities
 	Relation Relation
-	Required float64 // SI, in the unit LimitQuantities gives
+	Required float64 // SI, in the unit the quantity is given in
 	Line     int     // source line, for messages
+	// Subject is the coil block or probe the limit is about ("" for the
+	// design as a whole), and Tolerance the relative tolerance of a
+	// uniform-radius limit (0 for other quantities).
+	Subject   string
+	Tolerance float64
 }
 
 // Design is everything calc needs.
@@ -138,28 +143,4 @@ type Design struct {
 	Conditions Conditions
 	Probes     []Probe
 	Limits     []Limit
-}
-
-// LimitQuantity describes a quantity a requirement line may constrain.
-type LimitQuantity struct {
-	Unit        string // SI unit as the units parser reads it, e.g. "A m2"
-	Description string
-}
-
-// LimitQuantities lists the names a `limits` block accepts. Totals are over
-// all coils (moment is the magnitude of the vector sum; power is the sum;
-// temperature is the hottest winding).
-var LimitQuantities = map[string]LimitQuantity{
-	"moment":          {"A m2", "magnitude of the total magnetic moment"},
-	"field-center":    {"T", "|B| at the origin"},
-	"power":           {"W", "total electrical power"},
-	"temperature":     {"degC", "hottest winding temperature"},
-	"current":         {"A", "largest coil current"},
-	"voltage":         {"V", "largest coil voltage"},
-	"resistance":      {"ohm", "largest hot coil resistance"},
-	"mass":            {"kg", "total conductor mass"},
-	"wire-length":     {"m", "longest coil wire length"},
-	"current-density": {"A/m2", "largest current density in a conductor"},
-	"inductance":      {"H", "largest coil self-inductance"},
-	"torque":          {"N m", "largest torque in the background field"},
 }

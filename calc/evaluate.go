@@ -10,7 +10,7 @@ const HomogeneityTolerance = 0.01
 // winding (LayOut), the steady operating point (OperatingPoint: resistance,
 // current, voltage, power, temperature, runaway), current density, mass and
 // wire length of the block, inductance (CoilInductance), moment
-// (MagneticMoment) and its mean-area cross-check, field at the origin, L/R,
+// (MagneticMoment) and its mean-area cross-check, field at its own centre, L/R,
 // stored energy, thermal time constant, insulation margin, dipole range and
 // the force between a pair's coils and its 1 % homogeneous region.
 // Then the totals: field at the origin, total moment, torque in the
@@ -29,9 +29,9 @@ func Evaluate(d Design) Results {
 		fm.Coils = append(fm.Coils, c)
 		fm.Windings = append(fm.Windings, cr.Winding)
 		fm.Currents = append(fm.Currents, cr.Current)
-		res.FieldCentre = res.FieldCentre.Add(cr.FieldCentre)
 		res.Moment = res.Moment.Add(cr.Moment)
 	}
+	res.FieldCentre = fm.At(Vec{})
 	bg := d.Conditions.BackgroundField
 	res.Torque = Torque(res.Moment, bg)
 	res.TorqueMax = TorqueMax(res.Moment, bg)
@@ -45,7 +45,6 @@ func Evaluate(d Design) Results {
 	}
 	res.Couplings = Couplings(fm.Coils, fm.Windings, fm.Currents, selfL)
 	res.GradientForce = GradientForce(res.Moment.Norm(), d.Conditions.FieldGradient)
-	res.Limits = CheckLimits(d.Limits, res)
 	return res
 }
 
@@ -78,7 +77,7 @@ func evaluateCoil(c Coil, cond Conditions) CoilResult {
 	cr.Inductance = CoilInductance(c, w)
 	cr.Moment = MagneticMoment(c, w, op.Current)
 	cr.MomentMeanArea = MomentMeanArea(c, op.Current)
-	cr.FieldCentre = CoilField(c, w, op.Current, Vec{})
+	cr.FieldCentre = CoilField(c, w, op.Current, c.Centre)
 	cr.TimeConstant = cr.Inductance / op.RHot
 	if op.RHot == 0 {
 		cr.TimeConstant = math.NaN()

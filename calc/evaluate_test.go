@@ -144,33 +144,6 @@ func TestEvaluateSample(t *testing.T) {
 	if len(r.Probes) != 1 || vecRelErr(r.Probes[0].B, FieldAt(d, Vec{0, 0, 0.12})) > 1e-15 {
 		t.Errorf("probe %v", r.Probes)
 	}
-	// Limits.
-	wantPass := []bool{true, true, false, true, false, true, false}
-	for i, l := range r.Limits {
-		if l.Pass != wantPass[i] {
-			t.Errorf("limit %s: computed %g, pass %v, want %v", l.Limit.Quantity, l.Computed, l.Pass, wantPass[i])
-		}
-	}
-	// Every quantity name is computable.
-	for q := range LimitQuantities {
-		if v := LimitValue(q, r); math.IsNaN(v) {
-			t.Errorf("limit quantity %s is NaN", q)
-		}
-	}
-}
-
-func TestEvaluateRunawayFailsTemperatureLimit(t *testing.T) {
-	c := Coil{Name: "hot", Form: Loop, MeanDiameter: 0.05, Turns: 50, Wire: WireFromGauge(36, Copper()),
-		Drive: CurrentDrive, Current: 3, Duty: 1}
-	d := Design{Coils: []Coil{c}, Conditions: Conditions{Ambient: T20, Cooling: Cooling{H: 5, HGiven: true}},
-		Limits: []Limit{{Quantity: "temperature", Relation: AtMost, Required: 1e9}}}
-	r := Evaluate(d)
-	if !r.Coils[0].Runaway || !math.IsNaN(r.Coils[0].Temperature) || r.Limits[0].Pass {
-		t.Errorf("runaway %v T %g pass %v", r.Coils[0].Runaway, r.Coils[0].Temperature, r.Limits[0].Pass)
-	}
-	if r.Coils[0].Current != 3 || r.Coils[0].Moment[2] == 0 {
-		t.Error("an imposed current stays known on runaway")
-	}
 }
 
 func TestEvaluateNeverPanics(t *testing.T) {
@@ -221,7 +194,7 @@ func TestEvaluateZeroCases(t *testing.T) {
 	}
 	// No coils.
 	r = Evaluate(Design{Limits: []Limit{{Quantity: "moment", Relation: AtMost, Required: 1}}})
-	if len(r.Coils) != 0 || !r.Limits[0].Pass {
+	if len(r.Coils) != 0 || r.Moment != (Vec{}) {
 		t.Errorf("empty design: %+v", r)
 	}
 }

@@ -47,7 +47,7 @@ type CoilResult struct {
 	Runaway     bool    // no steady temperature exists (under current drive: none at or below the insulation class)
 	ColdCurrent float64 // A, current at 20 °C resistance (voltage drive: the moment lost to heating shows here)
 
-	FieldCentre Vec // T, field of this coil block at the origin
+	FieldCentre Vec // T, field of this coil block alone at its own centre
 
 	PowerOn          float64 // W while energised (Power = duty × PowerOn)
 	Duty             float64 // 0..1 as used (1 when not given)
@@ -104,7 +104,6 @@ type Results struct {
 	// TorqueDesign is |τ| at Conditions.DesignAngle between m and B.
 	TorqueDesign float64
 	Probes       []ProbeResult
-	Limits       []LimitResult
 	// Couplings holds the mutual inductance and force of every pair of coil
 	// blocks; GradientForce is |m| × Conditions.FieldGradient for the total
 	// moment, N (NaN when no gradient is stated).

@@ -2,6 +2,7 @@ package memo
 
 import (
 	"coilmemo/analysis"
+	"coilmemo/spec"
 	"fmt"
 	"math"
 	"strings"
@@ -100,7 +101,7 @@ func (c *composer) titlePage(title string) {
 	c.heading(1, "Results summary")
 	c.add(c.verdict())
 	c.add(c.summaryTable())
-	if len(c.j.Results.Limits) > 0 {
+	if len(c.j.Limits) > 0 {
 		c.add(c.limitsTable())
 	}
 	if list := c.cautionList(); len(list.Items) > 0 {
@@ -128,15 +129,16 @@ func (c *composer) cautionList() doc.List {
 // verdict is the one-paragraph answer at the top of page 1.
 func (c *composer) verdict() doc.Paragraph {
 	r := c.j.Results
+	limits := c.j.Limits
 	failedLimits, failedChecks := c.j.Failed()
 	var s []doc.Span
 	switch {
-	case len(r.Limits) == 0:
+	case len(limits) == 0:
 		s = append(s, doc.Span{Text: "No requirements were stated in the spec. "})
 	case failedLimits == 0:
-		s = append(s, doc.Span{Text: fmt.Sprintf("All %d stated requirements are met.", len(r.Limits)), Strong: true}, doc.Span{Text: " "})
+		s = append(s, doc.Span{Text: fmt.Sprintf("All %d stated requirements are met.", len(limits)), Strong: true}, doc.Span{Text: " "})
 	default:
-		s = append(s, doc.Span{Text: fmt.Sprintf("%d of %d stated requirements are NOT met.", failedLimits, len(r.Limits)), Strong: true}, doc.Span{Text: " "})
+		s = append(s, doc.Span{Text: fmt.Sprintf("%d of %d stated requirements are NOT met.", failedLimits, len(limits)), Strong: true}, doc.Span{Text: " "})
 	}
 	if failedChecks > 0 {
 		s = append(s, doc.Span{Text: fmt.Sprintf("%d verification check(s) failed: see the Verification section before relying on these results.", failedChecks), Strong: true}, doc.Span{Text: " "})
@@ -228,8 +230,8 @@ func perCoilColumns(coils int, first, each float64) ([]doc.Align, []float64) {
 
 func (c *composer) limitsTable() doc.Table {
 	var rows [][]doc.Cell
-	for _, l := range c.j.Results.Limits {
-		q := calc.LimitQuantities[l.Limit.Quantity]
+	for _, l := range c.j.Limits {
+		q := spec.LimitQuantities[l.Limit.Quantity]
 		unit := displayUnit(q.Unit)
 		rel := "≥"
 		if l.Limit.Relation == calc.AtMost {
@@ -261,7 +263,7 @@ func (c *composer) limitsTable() doc.Table {
 			st = doc.Fail
 		}
 		rows = append(rows, []doc.Cell{
-			{Text: l.Limit.Quantity + " (" + q.Description + ")"},
+			{Text: limitName(l) + ": " + testedOn(c.j, l, q)},
 			{Text: rel + " " + Eng(req, unit, 3)},
 			{Text: Eng(got, unit, 4)},
 			{Text: margin},
@@ -272,6 +274,46 @@ func (c *composer) limitsTable() doc.Table {
 		Header: []string{"Requirement", "Required", "Computed", "Margin", "Status"},
 		Rows:   rows, Widths: []float64{3.2, 1.4, 1.4, 1, 0.9},
 		Align: []doc.Align{doc.Left, doc.Right, doc.Right, doc.Right, doc.Center}}
+}
+
+// limitName writes a limit's quantity as the spec wrote it.
+func limitName(l analysis.LimitResult) string {
+	var args []string
+	if l.Limit.Subject != "" {
+		args = append(args, l.Limit.Subject)
+	}
+	if l.Limit.Quantity == "uniform-radius" {
+		args = append(args, Sig(100*l.Limit.Tolerance, 2)+" %")
+	}
+	if len(args) == 0 {
+		return l.Limit.Quantity
+	}
+	return l.Limit.Quantity + "(" + strings.Join(args, ", ") + ")"
+}
+
+// testedOn says what a limit was judged on: the design as a whole, one
+// coil block alone, or the field of all coils at a probe.
+func testedOn(st *analysis.Study, l analysis.LimitResult, q spec.LimitQuantity) string {
+	switch l.On {
+	case analysis.OnCoil:
+		co := st.Spec.Design.Coils[l.Coil]
+		what := map[string]string{
+			"moment": "magnetic moment", "field-center": "|B| at its own centre", "field": "|B| at its own centre",
+			"gradient": "axial gradient at its centre", "uniform-radius": fmt.Sprintf("radius within ±%s %% of its centre field", Sig(100*l.Limit.Tolerance, 2)),
+			"power": "power, averaged over the duty cycle", "power-on": "power while energised", "temperature": "hottest winding temperature",
+			"surface-temperature": "hottest surface temperature", "current": "current", "voltage": "voltage", "resistance": "hot resistance",
+			"mass": "conductor mass", "wire-length": "wire length", "current-density": "current density", "inductance": "self-inductance",
+			"time-constant": "time constant L/R", "switch-off-voltage": "voltage across the switch at switch-off, unsuppressed",
+			"torque": "largest torque of its moment in the background field",
+		}[l.Limit.Quantity]
+		return fmt.Sprintf("%s of coil %q alone", what, co.Name)
+	case analysis.OnProbe:
+		return fmt.Sprintf("|B| of all coils at probe %q", st.Spec.Design.Probes[l.Probe].Name)
+	}
+	if l.Limit.Quantity == "moment" && len(st.Spec.Design.Coils) > 1 {
+		return "magnitude of the vector sum of all coils' moments, all energised"
+	}
+	return q.Description
 }
 
 // displayUnit maps a LimitQuantities unit to the unit Eng prints.
@@ -287,6 +329,8 @@ func displayUnit(u string) string {
 		return "A/m²"
 	case "N m":
 		return "N·m"
+	case "T/m":
+		return "T/m"
 	}
 	return u
 }

@@ -124,15 +124,15 @@ func (c *composer) sweep() {
 			cur = math.Max(cur, math.Abs(cr.Current))
 		}
 		met := 0
-		for _, l := range r.Limits {
+		for _, l := range st.Limits {
 			if l.Pass {
 				met++
 			}
 		}
-		status := doc.Cell{Text: fmt.Sprintf("%d/%d", met, len(r.Limits))}
-		if len(r.Limits) > 0 {
+		status := doc.Cell{Text: fmt.Sprintf("%d/%d", met, len(st.Limits))}
+		if len(st.Limits) > 0 {
 			status.Status = doc.Pass
-			if met < len(r.Limits) {
+			if met < len(st.Limits) {
 				status.Status = doc.Fail
 			}
 		}

@@ -3,7 +3,6 @@ package spec
 import (
 	"fmt"
 	"math"
-	"sort"
 	"strconv"
 	"strings"
 
@@ -175,94 +174,6 @@ func parseField(s string) (calc.Vec, error) {
 		return calc.Vec{}, fmt.Errorf("magnitude %s is negative; give a vector such as (-50, 0, 0) uT for a direction", strings.TrimSpace(s))
 	}
 	return calc.Vec{q.Value, 0, 0}, nil
-}
-
-// ---- limits ----
-
-func limitNames() []string {
-	names := make([]string, 0, len(calc.LimitQuantities))
-	for k := range calc.LimitQuantities {
-		names = append(names, k)
-	}
-	sort.Strings(names)
-	return names
-}
-
-var relations = []struct {
-	text string
-	rel  calc.Relation
-}{{"<=", calc.AtMost}, {">=", calc.AtLeast}, {"≤", calc.AtMost}, {"≥", calc.AtLeast}}
-
-func (p *parser) limitsBlock(b *rawBlock) {
-	seen := map[string]int{}
-	for _, l := range b.lines {
-		i, rel, relText := -1, calc.AtLeast, ""
-		for _, r := range relations {
-			if j := strings.Index(l.text, r.text); j >= 0 && (i < 0 || j < i) {
-				i, rel, relText = j, r.rel, r.text
-			}
-		}
-		if i < 0 {
-			if j := strings.IndexAny(l.text, "<>="); j >= 0 {
-				op := l.text[j : j+1]
-				if j+1 < len(l.text) && strings.ContainsRune("<>=", rune(l.text[j+1])) {
-					op = l.text[j : j+2]
-				}
-				p.errf(l.line, "bad relation %q in %q: want <= (at most) or >= (at least)", op, l.text)
-			} else {
-				p.errf(l.line, "malformed limit %q: want <quantity> <= or >= <value with unit>, e.g. moment >= 0.2 A m2", l.text)
-			}
-			continue
-		}
-		name := strings.ToLower(strings.TrimSpace(l.text[:i]))
-		value := strings.TrimSpace(l.text[i+len(relText):])
-		e := kv{key: name, value: value, raw: relText + " " + value, line: l.line}
-		if name == "" {
-			p.errf(l.line, "limit %q names no quantity", l.text)
-			continue
-		}
-		lq, ok := calc.LimitQuantities[name]
-		if !ok {
-			names := limitNames()
-			if s := nearest(name, names); s != "" {
-				p.errf(l.line, "unknown limit quantity %q; did you mean %q?", name, s)
-			} else {
-				p.errf(l.line, "unknown limit quantity %q (known: %s)", name, strings.Join(names, ", "))
-			}
-			continue
-		}
-		key := name + relString(rel)
-		if prev, ok := seen[key]; ok {
-			p.errf(l.line, "duplicate limit %s %s (first given on line %d)", name, relString(rel), prev)
-			continue
-		}
-		seen[key] = l.line
-		si := ""
-		want, err := units.DimOf(lq.Unit)
-		if err != nil {
-			// a unit calc's table gives that this package cannot read
-			p.errf(l.line, "limit %s: internal: unit %q of the quantity is unreadable: %v", name, lq.Unit, err)
-			continue
-		}
-		if value == "" {
-			p.errf(l.line, "limit %s: no value after %s", name, relText)
-		} else if q, err := units.ParseAs(value, want); err != nil {
-			p.errf(l.line, "limit %s: %v", name, err)
-		} else if q.Value < 0 {
-			p.errf(l.line, "limit %s: %s is negative; limits bound magnitudes", name, value)
-		} else {
-			p.spec.Design.Limits = append(p.spec.Design.Limits, calc.Limit{Quantity: name, Relation: rel, Required: q.Value, Line: l.line})
-			si = relString(rel) + " " + q.String()
-		}
-		p.entry(blockLimits, e, si)
-	}
-}
-
-func relString(r calc.Relation) string {
-	if r == calc.AtMost {
-		return "<="
-	}
-	return ">="
 }
 
 // ---- probes ----

@@ -108,6 +108,7 @@ func (p *parser) design() {
 	if sweepBlock != nil {
 		p.sweepBlock(sweepBlock, coils)
 	}
+	p.checkLimitSubjects()
 }
 
 // keyValues splits a block's lines at the first "=", lower-cases keys

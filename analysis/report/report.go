@@ -11,6 +11,7 @@ import (
 	"coilmemo/analysis"
 	"coilmemo/calc"
 	"coilmemo/format"
+	"coilmemo/spec"
 )
 
 // Num is a float that encodes NaN and ±Inf (an unknown value) as JSON null.
@@ -191,8 +192,8 @@ func Build(j *analysis.Study) Report {
 	for _, p := range r.Probes {
 		rep.Probes = append(rep.Probes, ProbeReport{Name: p.Name, At: vec(p.At), B: vec(p.B), BMag: Num(p.B.Norm())})
 	}
-	for _, l := range r.Limits {
-		unit := calc.LimitQuantities[l.Limit.Quantity].Unit
+	for _, l := range j.Limits {
+		unit := spec.LimitQuantities[l.Limit.Quantity].Unit
 		req, got := l.Limit.Required, l.Computed
 		if unit == "degC" {
 			req, got = format.Celsius(req), format.Celsius(got)
@@ -215,7 +216,7 @@ func Build(j *analysis.Study) Report {
 					hot = math.Max(hot, cr.Temperature)
 					pw += cr.Power
 				}
-				for _, l := range st.Results.Limits {
+				for _, l := range st.Limits {
 					if !l.Pass {
 						failed++
 					}
