@@ -2,6 +2,7 @@ package analysis
 
 import (
 	"math"
+	"os"
 	"strings"
 	"testing"
 
@@ -121,4 +122,35 @@ func TestLimitQuantities(t *testing.T) {
 	if !(cr.PowerOn > 1.9*cr.Power) {
 		t.Errorf("power while energised %g W against the 50 %% duty average %g W", cr.PowerOn, cr.Power)
 	}
+}
+
+// The 0.5 mT finding comes from the field next to every winding, not
+// from where the spec's author put probes: the rectangular panel coil,
+// its probes removed, still reaches more than 0.5 mT at its wire and
+// beyond 10 mm from it (its field there is of the order of
+// μ0·N·I/(2π d) of the side's bundle, 1.6 mT at d = 10 mm).
+func TestImplantFindingWithoutProbes(t *testing.T) {
+	src, err := os.ReadFile("../examples/panel-coil.md")
+	if err != nil {
+		t.Fatal(err)
+	}
+	text := string(src)
+	if i := strings.Index(text, "```probes"); i >= 0 {
+		j := strings.Index(text[i+3:], "```")
+		text = text[:i] + text[i+3+j+3:]
+	}
+	st, diags := Run("panel.md", []byte(text), Options{})
+	if len(diags) > 0 {
+		t.Fatal(diags)
+	}
+	if len(st.Spec.Design.Probes) != 0 {
+		t.Fatal("probes not removed")
+	}
+	ir := st.Safety.Implant
+	if !ir.Any() || len(ir.Windings) != 1 || !(ir.Windings[0].Surface > ImplantField) || !(ir.Windings[0].Distance > 0.010) {
+		t.Errorf("implant reach %+v: want the winding's surface above 0.5 mT and the contour beyond 10 mm", ir)
+	}
+	// The contour lies where the field has fallen to the level.
+	w := ir.Windings[0]
+	t.Logf("panel coil: %.3g T at the surface, 0.5 mT at %.3g m from it", w.Surface, w.Distance)
 }

@@ -73,17 +73,37 @@ type Safety struct {
 
 // ImplantReach is where the field of all coils together reaches
 // ImplantField: at the origin, along the z axis and in the xy plane
-// (largest distance from the origin, 0 when not reached), and at probes.
+// (largest distance from the origin, 0 when not reached), at probes, and
+// from every winding's surface outward (Windings, one per coil block).
 type ImplantReach struct {
 	Searched      bool    // false for a design without extent
 	Origin        float64 // T, |B| at the origin
 	Axial, Radial float64 // m
 	Probes        []int   // indices of probes at or above the level
+	Windings      []WindingReach
+}
+
+// WindingReach is the field of all coils next to one coil block's winding:
+// Surface the largest |B| found at its outer surface (where a hand can
+// reach it), and Distance the largest distance from that surface, along
+// the coil's axis beyond its end faces and outward in its plane, at which
+// |B| still reaches ImplantField (0 when it does not).
+type WindingReach struct {
+	Surface  float64 // T
+	Distance float64 // m
 }
 
 // Any reports whether the level is reached anywhere searched.
 func (ir ImplantReach) Any() bool {
-	return ir.Origin >= ImplantField || ir.Axial > 0 || ir.Radial > 0 || len(ir.Probes) > 0
+	if ir.Origin >= ImplantField || ir.Axial > 0 || ir.Radial > 0 || len(ir.Probes) > 0 {
+		return true
+	}
+	for _, w := range ir.Windings {
+		if w.Surface >= ImplantField || w.Distance > 0 {
+			return true
+		}
+	}
+	return false
 }
 
 func assessSafety(d calc.Design, r calc.Results, coils []CoilStudy) Safety {
@@ -119,7 +139,7 @@ func assessSafety(d calc.Design, r calc.Results, coils []CoilStudy) Safety {
 		}
 		s.Findings = append(s.Findings, electricalFindings(i, co, cr)...)
 	}
-	s.Implant = implantReach(d, r)
+	s.Implant = implantReach(d, r, coils)
 	return s
 }
 
@@ -178,7 +198,7 @@ func reach(fm *calc.FieldModel, origin, u calc.Vec, level, rmin, rmax float64) f
 	}
 }
 
-func implantReach(d calc.Design, r calc.Results) ImplantReach {
+func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach {
 	ext := DesignExtent(d)
 	ir := ImplantReach{Origin: r.FieldCentre.Norm()}
 	if !(ext > 0) {
@@ -197,5 +217,56 @@ func implantReach(d calc.Design, r calc.Results) ImplantReach {
 			ir.Probes = append(ir.Probes, i)
 		}
 	}
+	for i, co := range d.Coils {
+		ir.Windings = append(ir.Windings, windingReach(fm, co, coils[i], ext))
+	}
 	return ir
+}
+
+// windingReach searches the field of all coils outward from the surface
+// of one coil block's winding: from the middle of each end face along the
+// axis, and from the outer surface in the coil's plane (for a rectangle,
+// from the middle of each side across it), in both senses.
+func windingReach(fm *calc.FieldModel, co calc.Coil, cs CoilStudy, ext float64) WindingReach {
+	fr := calc.CoilFrame(co.Axis)
+	e := cs.Envelope
+	type start struct {
+		at, dir calc.Vec
+	}
+	var starts []start
+	// A hair outside the surface, so the search starts clear of the
+	// conductors whatever the rounding.
+	gap := 1e-6 * math.Max(ext, 1e-3)
+	if co.Form == calc.Rectangle {
+		b := cs.Bundle
+		for _, s := range []float64{1, -1} {
+			starts = append(starts,
+				start{co.Centre.Add(fr.E1.Scale(s * (co.Width/2 + b/2 + gap))), fr.E1.Scale(s)},
+				start{co.Centre.Add(fr.E2.Scale(s * (co.Height/2 + b/2 + gap))), fr.E2.Scale(s)},
+				start{co.Centre.Add(fr.E1.Scale(co.Width / 2)).Add(fr.U.Scale(s * (b/2 + gap))), fr.U.Scale(s)})
+		}
+	} else {
+		rm := (e.R0 + e.R1) / 2
+		for _, z := range cs.Placements {
+			for _, s := range []float64{1, -1} {
+				c := co.Centre.Add(fr.U.Scale(z))
+				starts = append(starts,
+					start{c.Add(fr.E1.Scale(s * (e.R1 + gap))), fr.E1.Scale(s)},
+					start{c.Add(fr.E2.Scale(s * (e.R1 + gap))), fr.E2.Scale(s)},
+					start{c.Add(fr.E1.Scale(rm)).Add(fr.U.Scale(s * (e.Z1 + gap))), fr.U.Scale(s)})
+			}
+		}
+	}
+	var wr WindingReach
+	for _, st := range starts {
+		b := fm.At(st.at).Norm()
+		if math.IsNaN(b) {
+			continue
+		}
+		wr.Surface = math.Max(wr.Surface, b)
+		if b >= ImplantField {
+			wr.Distance = math.Max(wr.Distance, reach(fm, st.at, st.dir, ImplantField, gap, math.Max(ext, 1e-3)*1e3))
+		}
+	}
+	return wr
 }

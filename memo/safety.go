@@ -58,6 +58,12 @@ func Cautions(j *analysis.Study) []doc.Callout {
 		if ir.Radial > 0 {
 			where = append(where, "up to "+Eng(ir.Radial, "m", 2)+" from the origin in the xy plane")
 		}
+		for i, w := range ir.Windings {
+			if w.Surface >= analysis.ImplantField {
+				where = append(where, fmt.Sprintf("next to the winding of coil %q, where |B| reaches %s at its surface and stays above 0.5 mT up to %s from it",
+					d.Coils[i].Name, Eng(w.Surface, "T", 3), Eng(w.Distance, "m", 2)))
+			}
+		}
 		for _, k := range ir.Probes {
 			p := r.Probes[k]
 			where = append(where, fmt.Sprintf("at probe %q (%s)", p.Name, Eng(p.B.Norm(), "T", 3)))
