@@ -7,6 +7,7 @@ import (
 	"gonum.org/v1/gonum/integrate/quad"
 
 	"coilmemo/calc"
+	"coilmemo/calc/biotsavart"
 	"coilmemo/format"
 )
 
@@ -270,20 +271,10 @@ func numericCoilField(c calc.Coil, w calc.Winding, I float64, p calc.Vec) calc.V
 	return B
 }
 
+// loopIntegral is the field at p of one turn of radius a centred on ctr
+// in frame fr: 96-point Gauss–Legendre round the circle.
 func loopIntegral(fr calc.Frame, ctr calc.Vec, a, I float64, p calc.Vec) calc.Vec {
-	var B calc.Vec
-	for comp := 0; comp < 3; comp++ {
-		f := func(phi float64) float64 {
-			s, co := math.Sincos(phi)
-			pos := ctr.Add(fr.E1.Scale(a * co)).Add(fr.E2.Scale(a * s))
-			dl := fr.E1.Scale(-a * s).Add(fr.E2.Scale(a * co))
-			r := p.Sub(pos)
-			n := r.Norm()
-			return dl.Cross(r)[comp] / (n * n * n)
-		}
-		B[comp] = calc.Mu0 * I / (4 * math.Pi) * quad.Fixed(f, 0, 2*math.Pi, 96, quad.Legendre{}, 0)
-	}
-	return B
+	return biotsavart.Circle(ctr, fr.E1, fr.E2, a, I, p, 1, 96)
 }
 
 // ringMutual is Maxwell's mutual inductance of two coaxial circles of

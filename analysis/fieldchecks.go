@@ -4,9 +4,8 @@ import (
 	"fmt"
 	"math"
 
-	"gonum.org/v1/gonum/integrate/quad"
-
 	"coilmemo/calc"
+	"coilmemo/calc/biotsavart"
 	"coilmemo/format"
 )
 
@@ -49,22 +48,7 @@ func rectangleChecks(c calc.Coil, cr calc.CoilResult) []Check {
 // four sides of the rectangle W × H centred on ctr in frame fr (current
 // counter-clockwise about U), 4 panels of 48-point Gauss–Legendre a side.
 func numericRectangleField(fr calc.Frame, ctr calc.Vec, W, H, I float64, p calc.Vec) calc.Vec {
-	pt := func(x, y float64) calc.Vec { return ctr.Add(fr.E1.Scale(x)).Add(fr.E2.Scale(y)) }
-	k := []calc.Vec{pt(W/2, -H/2), pt(W/2, H/2), pt(-W/2, H/2), pt(-W/2, -H/2)}
-	var B calc.Vec
-	for i := range k {
-		a, b := k[i], k[(i+1)%4]
-		l := b.Sub(a)
-		for comp := range 3 {
-			f := func(s float64) float64 {
-				r := p.Sub(a.Add(l.Scale(s)))
-				d := r.Norm()
-				return l.Cross(r)[comp] / (d * d * d)
-			}
-			for j := range 4 {
-				B[comp] += quad.Fixed(f, float64(j)/4, float64(j+1)/4, 48, quad.Legendre{}, 0)
-			}
-		}
-	}
-	return B.Scale(calc.Mu0 * I / (4 * math.Pi))
+	pt := func(x, y float64) biotsavart.Vec { return ctr.Add(fr.E1.Scale(x)).Add(fr.E2.Scale(y)) }
+	k := []biotsavart.Vec{pt(W/2, -H/2), pt(W/2, H/2), pt(-W/2, H/2), pt(-W/2, -H/2)}
+	return biotsavart.Polygon(k, I, p, 4, 48)
 }
