@@ -13,12 +13,52 @@ import (
 	"coilmemo/templates"
 )
 
-// composer accumulates blocks and numbers figures.
+// composer is the memo's writer: sections add blocks to it, and it
+// numbers the figures (equations are numbered by derive).
 type composer struct {
 	j        *analysis.Study
+	title    string
 	blocks   []doc.Block
 	figure   int
-	cautions []doc.Callout // computed once: page 1 lists them, the Safety section gives them
+	cautions []doc.Callout // worded once: page 1 lists them, the Safety section gives them
+	// starts is the index into blocks where each section began.
+	starts []int
+}
+
+// Section writes one part of the memo from the study its writer holds.
+type Section interface {
+	// Name identifies the section; its golden text files carry the name.
+	Name() string
+	write(c *composer)
+}
+
+type section struct {
+	name string
+	fn   func(*composer)
+}
+
+func (s section) Name() string      { return s.name }
+func (s section) write(c *composer) { s.fn(c) }
+
+// Sections are the memo's sections in their order: identification and
+// answers on page 1, then purpose, inputs, assumptions, method and
+// results, field, torque, inductance and switching, heating, sweep,
+// verification, safety, record. A section with nothing to say for a
+// design writes nothing.
+var Sections = []Section{
+	section{"summary", (*composer).titlePage},
+	section{"purpose", (*composer).purpose},
+	section{"inputs", (*composer).inputs},
+	section{"assumptions", (*composer).assumptions},
+	section{"method", (*composer).method},
+	section{"field", (*composer).field},
+	section{"torque", (*composer).torque},
+	section{"electrical", (*composer).electrical},
+	section{"heating", (*composer).heating},
+	section{"sweep", (*composer).sweep},
+	section{"verification", (*composer).verification},
+	section{"safety", (*composer).safety},
+	section{"record", (*composer).record},
 }
 
 func (c *composer) add(b ...doc.Block) { c.blocks = append(c.blocks, b...) }
@@ -34,31 +74,40 @@ func (c *composer) fig(f doc.Figure) int {
 	return c.figure
 }
 
-// Compose builds the memo's document model from an evaluated spec. The
-// order is the memo's: identification and answers on page 1, then purpose,
-// inputs, assumptions, method and results, field, verification, safety,
-// record.
+// Compose builds the memo's document model of a study, section by section
+// in the order of Sections.
 func Compose(j *analysis.Study) *doc.Document {
+	d, _ := compose(j)
+	return d
+}
+
+// ComposeSections is the memo's document model and, for each of Sections,
+// the blocks it wrote.
+func ComposeSections(j *analysis.Study) (*doc.Document, [][]doc.Block) {
+	d, c := compose(j)
+	parts := make([][]doc.Block, len(c.starts))
+	for i, s := range c.starts {
+		end := len(c.blocks)
+		if i+1 < len(c.starts) {
+			end = c.starts[i+1]
+		}
+		parts[i] = c.blocks[s:end]
+	}
+	return d, parts
+}
+
+func compose(j *analysis.Study) (*doc.Document, *composer) {
 	s := j.Spec
 	m := s.Memo
 	title := m.Title
 	if title == "" {
 		title = "Coil calculation memo"
 	}
-	c := &composer{j: j, cautions: Cautions(j)}
-	c.titlePage(title)
-	c.purpose()
-	c.inputs()
-	c.assumptions()
-	c.method()
-	c.field()
-	c.torque()
-	c.electrical()
-	c.heating()
-	c.sweep()
-	c.verification()
-	c.safety()
-	c.record()
+	c := &composer{j: j, title: title, cautions: Cautions(j)}
+	for _, sec := range Sections {
+		c.starts = append(c.starts, len(c.blocks))
+		sec.write(c)
+	}
 	var names []string
 	for _, co := range s.Design.Coils {
 		names = append(names, co.Name)
@@ -80,11 +129,12 @@ func Compose(j *analysis.Study) *doc.Document {
 			Created:  created,
 		},
 		Blocks: c.blocks,
-	}
+	}, c
 }
 
 // titlePage: identification, headline results, limits compliance.
-func (c *composer) titlePage(title string) {
+func (c *composer) titlePage() {
+	title := c.title
 	m := c.j.Spec.Memo
 	field := func(label, v string) [2]string {
 		if v == "" {

@@ -2,7 +2,6 @@ package memo
 
 import (
 	"bytes"
-	"coilmemo/analysis/report"
 	"encoding/json"
 	"flag"
 	"fmt"
@@ -14,30 +13,39 @@ import (
 
 	"golang.org/x/tools/txtar"
 
+	"coilmemo/analysis"
+	"coilmemo/analysis/report"
 	"coilmemo/doc"
 )
 
 var update = flag.Bool("update", false, "rewrite the golden files in testdata/golden")
 
 // TestGolden builds each testdata/golden/*.txtar archive's spec.md into the
-// memo's text rendering and its JSON report, and compares them with the
-// archive's memo.txt and calc.json. Run with -update to accept changes
-// after reviewing the diff.
+// memo's text rendering and its JSON report. The JSON is compared with the
+// archive's calc.json (as data, numbers to 1e-12); the text section by
+// section (Sections) with testdata/golden/sections/<section>/<case>.txt,
+// byte for byte, so a change of wording in one section rewrites that
+// section's files only. Run with -update to accept changes after reviewing
+// the diff.
 func TestGolden(t *testing.T) {
 	files, err := filepath.Glob("../testdata/golden/*.txtar")
 	if err != nil || len(files) == 0 {
 		t.Fatalf("no golden files: %v", err)
 	}
 	for _, file := range files {
-		t.Run(filepath.Base(file), func(t *testing.T) {
+		name := strings.TrimSuffix(filepath.Base(file), ".txtar")
+		t.Run(name, func(t *testing.T) {
 			ar, err := txtar.ParseFile(file)
 			if err != nil {
 				t.Fatal(err)
 			}
-			var specSrc []byte
+			var specSrc, wantJSON []byte
 			for _, f := range ar.Files {
-				if f.Name == "spec.md" {
+				switch f.Name {
+				case "spec.md":
 					specSrc = f.Data
+				case "calc.json":
+					wantJSON = f.Data
 				}
 			}
 			if specSrc == nil {
@@ -47,73 +55,140 @@ func TestGolden(t *testing.T) {
 			if len(diags) > 0 {
 				t.Fatalf("spec problems:\n%v", diags)
 			}
-			var text bytes.Buffer
-			if err := doc.WriteText(&text, Document(j)); err != nil {
+			texts, err := sectionTexts(j)
+			if err != nil {
 				t.Fatal(err)
 			}
 			js, err := report.JSON(j)
 			if err != nil {
 				t.Fatal(err)
 			}
-			got := map[string][]byte{"memo.txt": text.Bytes(), "calc.json": js}
 			if *update {
-				out := &txtar.Archive{Comment: ar.Comment}
-				out.Files = append(out.Files, txtar.File{Name: "spec.md", Data: specSrc})
-				for _, name := range []string{"memo.txt", "calc.json"} {
-					out.Files = append(out.Files, txtar.File{Name: name, Data: got[name]})
-				}
+				out := &txtar.Archive{Comment: ar.Comment, Files: []txtar.File{{Name: "spec.md", Data: specSrc}, {Name: "calc.json", Data: js}}}
 				if err := os.WriteFile(file, txtar.Format(out), 0o644); err != nil {
 					t.Fatal(err)
 				}
-				return
+			} else if msg := jsonDiff(wantJSON, js); wantJSON == nil || msg != "" {
+				// Numbers may move in their last bits when a formula is
+				// rearranged: the JSON is compared as data.
+				t.Errorf("calc.json differs from the golden file; run go test ./memo -run TestGolden -update and review the diff\n%s", msg)
 			}
-			for _, name := range []string{"memo.txt", "calc.json"} {
-				var want []byte
-				found := false
-				for _, f := range ar.Files {
-					if f.Name == name {
-						want, found = f.Data, true
+			for i, sec := range Sections {
+				path := filepath.Join("../testdata/golden/sections", sec.Name(), name+".txt")
+				if *update {
+					if texts[i] == "" {
+						os.Remove(path)
+						continue
 					}
-				}
-				if !found {
-					t.Errorf("archive has no %s (run go test ./memo -update)", name)
-					continue
-				}
-				if name == "calc.json" && !bytes.Equal(got[name], want) {
-					// Numbers may move in their last bits when a formula is
-					// rearranged; the JSON is compared as data, numbers to
-					// 1e-12 relative. memo.txt is compared byte for byte.
-					if msg := jsonDiff(want, got[name]); msg != "" {
-						t.Errorf("calc.json differs from the golden file; run go test ./memo -run TestGolden -update and review the diff\n%s", msg)
+					if err := os.MkdirAll(filepath.Dir(path), 0o755); err != nil {
+						t.Fatal(err)
+					}
+					if err := os.WriteFile(path, []byte(texts[i]), 0o644); err != nil {
+						t.Fatal(err)
 					}
 					continue
 				}
-				if !bytes.Equal(got[name], want) {
-					t.Errorf("%s differs from the golden file; run go test ./memo -run TestGolden -update and review the diff\n%s",
-						name, firstDiff(string(want), string(got[name])))
+				want, err := os.ReadFile(path)
+				if err != nil && texts[i] == "" {
+					continue
+				}
+				if string(want) != texts[i] {
+					t.Errorf("section %s differs from %s; run go test ./memo -run TestGolden -update and review the diff\n%s",
+						sec.Name(), path, unifiedDiff(string(want), texts[i]))
 				}
 			}
 		})
 	}
 }
 
-// firstDiff shows the first differing line of two texts.
-func firstDiff(want, got string) string {
-	wl := bytes.Split([]byte(want), []byte("\n"))
-	gl := bytes.Split([]byte(got), []byte("\n"))
-	for i := 0; i < len(wl) || i < len(gl); i++ {
-		var w, g []byte
-		if i < len(wl) {
-			w = wl[i]
+// sectionTexts renders the memo as text and cuts it at the start of each
+// of Sections: the text of the blocks before a section is a prefix of the
+// whole, since blocks are written in order.
+func sectionTexts(j *analysis.Study) ([]string, error) {
+	d, parts := ComposeSections(j)
+	var whole bytes.Buffer
+	if err := doc.WriteText(&whole, d); err != nil {
+		return nil, err
+	}
+	cuts := make([]int, len(parts)+1)
+	n := 0
+	for i, p := range parts {
+		var b bytes.Buffer
+		if err := doc.WriteText(&b, &doc.Document{Meta: d.Meta, Blocks: d.Blocks[:n]}); err != nil {
+			return nil, err
 		}
-		if i < len(gl) {
-			g = gl[i]
+		cuts[i] = b.Len()
+		if i == 0 {
+			cuts[i] = 0 // the title lines belong to page 1
 		}
-		if !bytes.Equal(w, g) {
-			return fmt.Sprintf("line %d:\n  want: %s\n  got:  %s", i+1, w, g)
+		n += len(p)
+	}
+	cuts[len(parts)] = whole.Len()
+	out := make([]string, len(parts))
+	for i := range parts {
+		out[i] = whole.String()[cuts[i]:cuts[i+1]]
+	}
+	return out, nil
+}
+
+// unifiedDiff shows the lines that differ between two texts with two
+// lines of context, as "-" (golden) and "+" (got) lines, by the longest
+// common subsequence of lines.
+func unifiedDiff(want, got string) string {
+	a, b := strings.Split(want, "\n"), strings.Split(got, "\n")
+	// lcs[i][j] is the LCS length of a[i:] and b[j:].
+	lcs := make([][]int, len(a)+1)
+	for i := range lcs {
+		lcs[i] = make([]int, len(b)+1)
+	}
+	for i := len(a) - 1; i >= 0; i-- {
+		for j := len(b) - 1; j >= 0; j-- {
+			if a[i] == b[j] {
+				lcs[i][j] = lcs[i+1][j+1] + 1
+			} else {
+				lcs[i][j] = max(lcs[i+1][j], lcs[i][j+1])
+			}
 		}
 	}
-	return ""
+	type line struct {
+		op   byte
+		text string
+		at   int // line number in the golden text
+	}
+	var ops []line
+	i, j := 0, 0
+	for i < len(a) || j < len(b) {
+		switch {
+		case i < len(a) && j < len(b) && a[i] == b[j]:
+			ops = append(ops, line{' ', a[i], i + 1})
+			i, j = i+1, j+1
+		case j < len(b) && (i == len(a) || lcs[i][j+1] >= lcs[i+1][j]):
+			ops = append(ops, line{'+', b[j], i + 1})
+			j++
+		default:
+			ops = append(ops, line{'-', a[i], i + 1})
+			i++
+		}
+	}
+	var out strings.Builder
+	last := -10
+	for k, o := range ops {
+		near := false
+		for d := -2; d <= 2; d++ {
+			if k+d >= 0 && k+d < len(ops) && ops[k+d].op != ' ' {
+				near = true
+			}
+		}
+		if !near {
+			continue
+		}
+		if k != last+1 {
+			fmt.Fprintf(&out, "@@ line %d @@\n", o.at)
+		}
+		fmt.Fprintf(&out, "%c %s\n", o.op, o.text)
+		last = k
+	}
+	return out.String()
 }
 
 // jsonDiff compares two JSON documents as data, numbers within 1e-12

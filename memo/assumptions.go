@@ -1,0 +1,262 @@
+package memo
+
+import (
+	"fmt"
+	"math"
+	"strings"
+	"unicode"
+	"unicode/utf8"
+
+	"coilmemo/analysis"
+	"coilmemo/calc"
+	"coilmemo/doc"
+	"coilmemo/templates"
+)
+
+// assumptions lists the modelling assumptions, then the validity flags
+// this design raises — thin-wire ratio, dipole distance, d.c. against the
+// drive frequency, thermal-model range, Helmholtz condition — each with its
+// figure for this design and what it means for the results. A flag whose
+// model is stretched opens with "Check:".
+func (c *composer) assumptions() {
+	c.heading(1, "Assumptions and validity")
+	d := c.j.Spec.Design
+	r := c.j.Results
+	var items [][]doc.Block
+	item := func(lead string, flagged bool, text string) {
+		sp := []doc.Span{{Text: lead + ". ", Strong: true}}
+		if flagged {
+			sp = append(sp, doc.Span{Text: "Check: ", Strong: true})
+		}
+		sp = append(sp, mathSpans(capitalise(text))...)
+		items = append(items, []doc.Block{doc.Paragraph{Spans: sp}})
+	}
+	general := func(lead, text string) {
+		// a template that opens with its own "Lead: " keeps it as the lead
+		if l, rest, ok := strings.Cut(text, ": "); ok && !strings.ContainsAny(l, ".;,") && len(l) < 40 {
+			lead, text = l, rest
+		}
+		item(lead, false, text)
+	}
+	general("Filament model", templates.Text("assume-filament", nil))
+	general("Cooling", coolingAssumption(d, c.j.Cooling))
+	general("Thermal model", templates.Text("assume-thermal", nil))
+	c.add(doc.List{Items: items})
+	items = nil
+	for i, co := range d.Coils {
+		if i >= len(r.Coils) {
+			break
+		}
+		cr := r.Coils[i]
+		for _, f := range validityFlags(co, cr, &c.j.Coils[i], d) {
+			item(fmt.Sprintf("%s, %s", f.what, co.Name), f.flagged, f.text)
+		}
+	}
+	if len(items) > 0 {
+		c.para("Validity of the models for this design, coil by coil:")
+		c.add(doc.List{Items: items})
+	}
+}
+
+type validity struct {
+	what    string
+	flagged bool
+	text    string
+}
+
+// validityFlags are one coil block's validity flags.
+func validityFlags(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.Design) []validity {
+	var out []validity
+	w := cr.Winding
+	R := co.MeanDiameter / 2
+	// Thin-wire ratio: the winding's cross-section against its diameter.
+	if co.Form != calc.Rectangle && R > 0 && co.Wire.Outer > 0 {
+		depth := co.Wire.Outer
+		what := "wire diameter"
+		switch {
+		case w.Thin:
+			depth, what = cs.Bundle, "bundle diameter"
+		case co.RadialBuild > 0:
+			depth, what = math.Max(co.RadialBuild, co.Length), "winding depth"
+		}
+		ratio := depth / (2 * R)
+		v := validity{what: "Thin-wire ratio"}
+		if ratio > 0.1 {
+			v.flagged = true
+			v.text = fmt.Sprintf("%s / coil diameter = %s, more than 0.1. The turns are laid out one by one, so the field everywhere outside the winding is exact; within about one winding depth of the conductors the field of round wires differs from that of filaments.", what, Sig(ratio, 2))
+		} else {
+			v.text = fmt.Sprintf("%s / coil diameter = %s (below 0.1): each turn is well represented by a filament; the field differs from the filament field only within a wire's width of the conductors.", what, Sig(ratio, 2))
+		}
+		out = append(out, v)
+	}
+	// A multilayer winding whose turns do not fill the stated radial build
+	// sits nearer the bore than its stated mean diameter says.
+	if co.RadialBuild > 0 && !w.Thin && w.LayerCount > 0 && co.Wire.Outer > 0 {
+		used := float64(w.LayerCount) * co.Wire.Outer
+		if used < 0.95*co.RadialBuild {
+			out = append(out, validity{what: "Radial build", flagged: true, text: fmt.Sprintf(
+				"the %d turns lie in %d layers %s deep, less than the stated radial build of %s; the turns' mean radius is %s against the stated %s. All results use the turns as laid out; state the radial build the coil will really have, or the turns that fill it.",
+				co.Turns, w.LayerCount, Eng(used, "m", 3), Eng(co.RadialBuild, "m", 3), Eng(cs.MeanRadius, "m", 4), Eng(R, "m", 4))})
+		}
+	}
+	if co.Wire.OuterEstimated {
+		out = append(out, validity{what: "Wire build", flagged: true, text: fmt.Sprintf(
+			"the wire's overall diameter (%s over %s bare) is an estimate for heavy-build enamelled wire. The winding's length, layers, surface and so its temperature follow from it; state wire-outer-diameter from the wire maker's data sheet.",
+			Eng(co.Wire.Outer, "m", 3), Eng(co.Wire.Bare, "m", 3))})
+	}
+	// Dipole distance.
+	if co.Form != calc.Rectangle && !(co.Form == calc.Pair && co.Opposing) && R > 0 {
+		if dr := cr.Dipole.Axis1; !math.IsNaN(dr) && dr > 0 {
+			text := fmt.Sprintf("on the axis the point-dipole field $B = \\mu_0 m/(2\\pi z^3)$ is within 1 %% of the exact field beyond %s from the centre (%s mean radii)",
+				Eng(dr, "m", 3), Sig(dr/R, 3))
+			if p := cr.Dipole.Plane1; p > 0 && !math.IsNaN(p) {
+				text += fmt.Sprintf(", and in the coil's plane beyond %s", Eng(p, "m", 3))
+			}
+			text += ". This memo uses the exact field everywhere; the dipole figure is for estimates and for the far field, such as a magnetometer's reading of the coil."
+			var inside []string
+			for _, pr := range d.Probes {
+				switch dist := pr.At.Sub(co.Centre).Norm(); {
+				case dist == 0:
+					inside = append(inside, fmt.Sprintf("%q (at the centre)", pr.Name))
+				case dist < dr:
+					inside = append(inside, fmt.Sprintf("%q (%s away)", pr.Name, Eng(dist, "m", 3)))
+				}
+			}
+			switch len(inside) {
+			case 0:
+			case 1:
+				text += " Probe " + inside[0] + " lies inside that distance: there only the exact field is valid."
+			default:
+				text += " Probes " + strings.Join(inside[:len(inside)-1], ", ") + " and " + inside[len(inside)-1] + " lie inside that distance: there only the exact field is valid."
+			}
+			out = append(out, validity{what: "Dipole distance", text: text})
+		}
+	}
+	// D.c. against the drive frequency.
+	switch ac := cr.AC; {
+	case ac.Frequency > 0:
+		v := validity{what: "Frequency"}
+		parts := []string{fmt.Sprintf("driven at %s: reactance $X = 2\\pi f L$ = %s against $R$ = %s ($X/R$ = %s)",
+			Eng(ac.Frequency, "Hz", 3), Eng(ac.Reactance, "Ω", 3), Eng(cr.RHot, "Ω", 3), Sig(ac.Reactance/cr.RHot, 2))}
+		if ac.Reactive {
+			v.flagged = true
+			parts = append(parts, fmt.Sprintf("the current is set by the impedance |Z| = %s, not by R alone: the d.c. current, moment and field of this memo are upper bounds, the a.c. values are lower", Eng(ac.Impedance, "Ω", 3)))
+		} else {
+			parts = append(parts, "the reactance is negligible and the d.c. figures hold")
+		}
+		if ac.SkinLimited {
+			v.flagged = true
+			parts = append(parts, fmt.Sprintf("the skin depth $\\delta$ = %s is less than the wire radius %s, so the a.c. resistance and heating exceed the d.c. figures", Eng(ac.SkinDepth, "m", 3), Eng(ac.WireRadius, "m", 3)))
+		} else if !math.IsNaN(ac.SkinDepth) {
+			parts = append(parts, fmt.Sprintf("the skin depth $\\delta$ = %s exceeds the wire radius %s: no skin effect", Eng(ac.SkinDepth, "m", 3), Eng(ac.WireRadius, "m", 3)))
+		}
+		v.text = strings.Join(parts, "; ") + "."
+		out = append(out, v)
+	case cr.TimeConstant > 0 && !math.IsInf(cr.TimeConstant, 0):
+		out = append(out, validity{what: "Direct current", text: fmt.Sprintf(
+			"the results are steady d.c. values. After switch-on the current rises with the time constant $\\tau = L/R$ = %s and is within 1 %% of its final value after $4.6\\,\\tau$ = %s; faster switching or an a.c. drive (give frequency) changes current, field and heating.",
+			Eng(cr.TimeConstant, "s", 3), Eng(4.6*cr.TimeConstant, "s", 3))})
+	default:
+		out = append(out, validity{what: "Direct current", text: templates.Text("assume-dc", nil)})
+	}
+	// Thermal-model range.
+	if st := cr.Heat.Steady; st.Settled && !cr.Runaway {
+		v := validity{what: "Thermal model"}
+		text := fmt.Sprintf("the resistance follows the winding's mean temperature %s linearly ($\\alpha_{20}$ of %s); heat crosses the turns with an effective conductivity of %s, so the hottest point is %s above the surface (%s); the insulation is judged at the hottest point",
+			Eng(Celsius(st.Mean), "°C", 3), co.Wire.Material.Name, Eng(cr.Heat.Conductivity, "W/(m·K)", 2), Eng(st.HotSpot-st.Surface, "K", 2), Eng(Celsius(st.Surface), "°C", 3))
+		if cv := st.Convection; cv.Ra > 0 {
+			if cv.InRange {
+				text += fmt.Sprintf("; the natural-convection correlation is used within its range (Rayleigh number %s)", Sci(cv.Ra, 2))
+			} else {
+				v.flagged = true
+				text += fmt.Sprintf("; the natural-convection correlation is outside its range (Rayleigh number %s, film temperature %s), so the convective loss, and with it the temperature, is uncertain", Sci(cv.Ra, 2), Eng(Celsius(cv.Film), "°C", 3))
+			}
+		}
+		if cr.ThermalTau > 0 && !math.IsInf(cr.ThermalTau, 0) {
+			text += fmt.Sprintf(". The steady temperature is reached after about three thermal time constants, $3\\tau_{\\mathrm{th}}$ = %s; a shorter on-time leaves the winding cooler", Duration(3*cr.ThermalTau, 2))
+		}
+		v.text = text + "."
+		out = append(out, v)
+	} else if cr.Runaway {
+		out = append(out, validity{what: "Thermal model", flagged: true, text: "no steady temperature exists (thermal runaway): the electrical figures at the steady state are not defined; see the Safety section."})
+	}
+	// Helmholtz condition and the pair's useful region.
+	if co.Form == calc.Pair && R > 0 {
+		ratio := co.Spacing / R
+		v := validity{what: "Helmholtz condition"}
+		pr := cr.Pair
+		switch {
+		case co.Opposing:
+			v.what = "Gradient pair"
+			v.text = fmt.Sprintf("opposing pair at spacing %s R", Sig(ratio, 3))
+			if !math.IsNaN(pr.Gradient) {
+				v.text += fmt.Sprintf(": centre gradient %s, linear within 1 %% for %s along the axis and %s radially", Eng(pr.Gradient, "T/m", 3), pmEng(pr.LinearAxial), pmEng(pr.LinearRadial))
+			}
+			v.text += "."
+		case math.Abs(ratio-1) <= calc.HelmholtzTolerance:
+			v.text = fmt.Sprintf("spacing / mean radius $s/R$ = %s: a Helmholtz pair, whose centre field is flat to the fourth order", Sig(ratio, 4))
+			if !math.IsNaN(pr.Axial1) {
+				v.text += fmt.Sprintf("; the field stays within 1 %% of its centre value for %s along the axis and %s radially", pmEng(pr.Axial1), pmEng(pr.Radial1))
+			}
+			v.text += "."
+		default:
+			v.flagged = true
+			shape := "a dip at the centre (spacing wider than the radius)"
+			if ratio < 1 {
+				shape = "a peak at the centre (spacing narrower than the radius)"
+			}
+			v.text = fmt.Sprintf("spacing / mean radius $s/R$ = %s, not 1: the field on the axis has %s", Sig(ratio, 3), shape)
+			if !math.IsNaN(pr.Axial1) {
+				v.text += fmt.Sprintf("; it stays within 1 %% of its centre value for %s along the axis and %s radially", pmEng(pr.Axial1), pmEng(pr.Radial1))
+			}
+			v.text += fmt.Sprintf(". Spacing the coils at %s would make it a Helmholtz pair.", Eng(R, "m", 3))
+		}
+		out = append(out, v)
+	}
+	return out
+}
+
+// mathSpans splits text at "$" signs into plain spans and inline
+// mathematics: "the field $B_0$ at" is three spans, the middle one
+// notation.
+func mathSpans(text string) []doc.Span {
+	var out []doc.Span
+	for i, part := range strings.Split(text, "$") {
+		if part == "" {
+			continue
+		}
+		out = append(out, doc.Span{Text: part, Math: i%2 == 1})
+	}
+	return out
+}
+
+// capitalise upper-cases the first letter of a sentence.
+func capitalise(s string) string {
+	r, n := utf8.DecodeRuneInString(s)
+	return string(unicode.ToUpper(r)) + s[n:]
+}
+
+// pmEng writes a ± distance, "n/a" when unknown.
+func pmEng(v float64) string {
+	if math.IsNaN(v) {
+		return "n/a"
+	}
+	return "±" + Eng(v, "m", 2)
+}
+
+// coolingAssumption states how the winding sheds heat.
+func coolingAssumption(d calc.Design, cool calc.Cooling) string {
+	mount := ""
+	if m := d.Conditions.MountResistance; m > 0 && !math.IsInf(m, 1) {
+		mount = fmt.Sprintf(", and by conduction through the stated thermal resistance of %s to a mount at the ambient temperature", Eng(m, "K/W", 3))
+	}
+	switch {
+	case cool.Vacuum:
+		return templates.Text("assume-vacuum", map[string]string{"Emissivity": Sig(cool.Emissivity, 2)})
+	case d.Conditions.Cooling.HGiven:
+		return fmt.Sprintf("convection with the heat-transfer coefficient stated in the spec, h = %s, plus radiation with surface emissivity %s to surroundings at the ambient temperature%s.",
+			Eng(cool.H, "W/(m²·K)", 3), Sig(cool.Emissivity, 2), mount)
+	}
+	return fmt.Sprintf("natural convection in still air, the heat-transfer coefficient h from a published correlation for the coil's outer shape at its surface temperature (so it rises as the coil warms), plus radiation with surface emissivity %s to surroundings at the ambient temperature%s.",
+		Sig(cool.Emissivity, 2), mount)
+}
