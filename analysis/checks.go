@@ -35,11 +35,13 @@ func newCheck(coil, name, method, ref string, v, e float64, unit string, tol flo
 		Unit: unit, RelDiff: rd, Tolerance: tol, Pass: rd <= tol}
 }
 
-// Verify recomputes headline results of every circular coil by independent
-// means: the moment from the mean turn area, the centre field by a current
-// sheet closed form, the field at an off-axis point by numerical
-// integration of the Biot–Savart law, the far field by the dipole formula,
-// and the wire's resistance per length against the published copper table.
+// Verify recomputes headline results of every coil by independent means
+// (coilChecks, in order): the moment against the mean turn area, the
+// centre field by a current sheet closed form, the field at an off-axis
+// point by numerical integration of the Biot–Savart law, the far field by
+// the dipole formula, the inductance, the heat balance, a Helmholtz pair's
+// closed form, and the wire's resistance per length against the published
+// copper table. Rectangles have checks of their own (rectangleChecks).
 func Verify(d calc.Design, r calc.Results) []Check {
 	var out []Check
 	for i, c := range d.Coils {
@@ -47,87 +49,114 @@ func Verify(d calc.Design, r calc.Results) []Check {
 			break
 		}
 		cr := r.Coils[i]
-		w := cr.Winding
 		I := cr.Current
 		if c.Form == calc.Rectangle || !(I != 0) || math.IsNaN(I) {
 			out = append(out, rectangleChecks(c, cr)...)
 			out = append(out, wireCheck(c)...)
 			continue
 		}
-		series := float64(calc.SeriesCoils(c))
-		// Moment: Σ π rᵢ² over the turns against N·π·r̄² at the turns'
-		// mean radius r̄. Their ratio is 1 + var(r)/r̄², and a variance is
-		// at most a quarter of the range squared (Popoviciu's inequality),
-		// so they agree within ((r_max − r_min)/(2 r̄))²: a second-order
-		// bound that a miscounted turn or layer breaks.
-		if c.Form != calc.Pair || !c.Opposing {
-			n := float64(w.TurnCount())
-			rmin, rmax := math.Inf(1), math.Inf(-1)
-			for _, l := range w.Layers {
-				rmin, rmax = math.Min(rmin, l.Radius), math.Max(rmax, l.Radius)
-			}
-			if n > 0 {
-				rbar := meanTurnRadius(w)
-				q := (rmax - rmin) / (2 * rbar)
-				ref := series * n * math.Abs(I) * math.Pi * rbar * rbar
-				out = append(out, newCheck(c.Name, "magnetic moment",
-					"m = I·Σ π rᵢ² over every turn", "N·I·π·r̄² at the turns' mean radius",
-					cr.Moment.Norm(), ref, "A·m²", 1e-9+q*q))
-			}
+		for _, check := range coilChecks {
+			out = append(out, check(c, cr)...)
 		}
-		// Centre field against the current-sheet closed form per layer.
-		if c.Form != calc.Pair {
-			fr := calc.CoilFrame(c.Axis)
-			exact := calc.CoilField(c, w, I, c.Centre).Dot(fr.U)
-			var sheet float64
-			method := "current sheet on axis, per layer"
-			for _, l := range w.Layers {
-				n := len(l.Z)
-				if w.Thin || c.Length == 0 {
-					sheet += float64(n) * calc.LoopFieldOnAxis(l.Radius, I, 0)
-					method = "N·μ0·I/(2R) closed form"
-				} else {
-					sheet += calc.SolenoidAxisField(l.Radius, c.Length*float64(n)/float64(w.TurnsPerLayer), n, I, 0)
-				}
-			}
-			// A sheet smears N discrete turns: the difference at the centre
-			// is of order (pitch/length)², well under 1 % for real windings.
-			out = append(out, newCheck(c.Name, "field at coil centre",
-				"Σ exact loop fields (elliptic integrals)", method, exact, sheet, "T", 0.01))
-		}
-		// Off-axis point by direct numerical Biot–Savart integration
-		// (gonum Gauss–Legendre quadrature round every turn).
-		fr := calc.CoilFrame(c.Axis)
-		R := c.MeanDiameter / 2
-		p := c.Centre.Add(fr.E1.Scale(0.37 * R)).Add(fr.U.Scale(0.29*R + c.Length/2 + c.RadialBuild))
-		if c.Form == calc.Pair {
-			p = p.Add(fr.U.Scale(c.Spacing/2 + R))
-		}
-		exact := calc.CoilField(c, w, I, p)
-		num := numericCoilField(c, w, I, p)
-		out = append(out, newCheck(c.Name, "|B| at an off-axis test point",
-			"Σ exact loop fields (elliptic integrals)", "numerical Biot–Savart line integral (gonum quad)",
-			exact.Norm(), num.Norm(), "T", 1e-8))
-		// Far field: the dipole formula at 20 times the coil's size.
-		if c.Form != calc.Pair || !c.Opposing {
-			size := math.Max(R+c.RadialBuild/2, c.Length/2)
-			if c.Form == calc.Pair {
-				size = math.Max(size, c.Spacing/2+c.Length/2)
-			}
-			z := 20 * size
-			pf := c.Centre.Add(fr.U.Scale(z))
-			ex := calc.CoilField(c, w, I, pf).Norm()
-			dip := calc.DipoleField(cr.Moment, fr.U.Scale(z)).Norm()
-			out = append(out, newCheck(c.Name, fmt.Sprintf("on-axis field at %s", format.Eng(z, "m", 3)),
-				"Σ exact loop fields", "point dipole μ0·m/(2π z³)", ex, dip, "T", 0.01))
-		}
-		out = append(out, inductanceChecks(c, cr)...)
-		out = append(out, roundWireCheck(c, cr)...)
-		out = append(out, heatBalanceCheck(c, cr)...)
-		out = append(out, helmholtzCheck(c, cr)...)
-		out = append(out, wireCheck(c)...)
 	}
 	return out
+}
+
+// coilChecks are the checks of a circular coil block, in the order the
+// verification table lists them.
+var coilChecks = []func(calc.Coil, calc.CoilResult) []Check{
+	momentCheck, centreFieldCheck, offAxisCheck, farFieldCheck,
+	inductanceChecks, roundWireCheck, heatBalanceCheck, helmholtzCheck,
+	func(c calc.Coil, _ calc.CoilResult) []Check { return wireCheck(c) },
+}
+
+// momentCheck compares m = I Σ π rᵢ² over the turns with N·I·π·r̄² at the
+// turns' mean radius r̄. Their ratio is 1 + var(r)/r̄², and a variance is
+// at most a quarter of the range squared (Popoviciu's inequality), so they
+// agree within ((r_max − r_min)/(2 r̄))²: a second-order bound that a
+// miscounted turn or layer breaks.
+func momentCheck(c calc.Coil, cr calc.CoilResult) []Check {
+	w := cr.Winding
+	if c.Form == calc.Pair && c.Opposing {
+		return nil
+	}
+	n := float64(w.TurnCount())
+	if n == 0 {
+		return nil
+	}
+	rmin, rmax := math.Inf(1), math.Inf(-1)
+	for _, l := range w.Layers {
+		rmin, rmax = math.Min(rmin, l.Radius), math.Max(rmax, l.Radius)
+	}
+	rbar := meanTurnRadius(w)
+	q := (rmax - rmin) / (2 * rbar)
+	ref := float64(calc.SeriesCoils(c)) * n * math.Abs(cr.Current) * math.Pi * rbar * rbar
+	return []Check{newCheck(c.Name, "magnetic moment",
+		"m = I·Σ π rᵢ² over every turn", "N·I·π·r̄² at the turns' mean radius",
+		cr.Moment.Norm(), ref, "A·m²", 1e-9+q*q)}
+}
+
+// centreFieldCheck compares the centre field with the current-sheet
+// closed form per layer. A sheet smears N discrete turns: the difference
+// at the centre is of order (pitch/length)², well under 1 % for real
+// windings.
+func centreFieldCheck(c calc.Coil, cr calc.CoilResult) []Check {
+	if c.Form == calc.Pair {
+		return nil
+	}
+	w, I := cr.Winding, cr.Current
+	fr := calc.CoilFrame(c.Axis)
+	exact := calc.CoilField(c, w, I, c.Centre).Dot(fr.U)
+	var sheet float64
+	method := "current sheet on axis, per layer"
+	for _, l := range w.Layers {
+		n := len(l.Z)
+		if w.Thin || c.Length == 0 {
+			sheet += float64(n) * calc.LoopFieldOnAxis(l.Radius, I, 0)
+			method = "N·μ0·I/(2R) closed form"
+		} else {
+			sheet += calc.SolenoidAxisField(l.Radius, c.Length*float64(n)/float64(w.TurnsPerLayer), n, I, 0)
+		}
+	}
+	return []Check{newCheck(c.Name, "field at coil centre",
+		"Σ exact loop fields (elliptic integrals)", method, exact, sheet, "T", 0.01)}
+}
+
+// offAxisCheck compares the field at an off-axis point outside the
+// winding with a direct numerical Biot–Savart integration round every
+// turn (package biotsavart).
+func offAxisCheck(c calc.Coil, cr calc.CoilResult) []Check {
+	fr := calc.CoilFrame(c.Axis)
+	R := c.MeanDiameter / 2
+	p := c.Centre.Add(fr.E1.Scale(0.37 * R)).Add(fr.U.Scale(0.29*R + c.Length/2 + c.RadialBuild))
+	if c.Form == calc.Pair {
+		p = p.Add(fr.U.Scale(c.Spacing/2 + R))
+	}
+	exact := calc.CoilField(c, cr.Winding, cr.Current, p)
+	num := numericCoilField(c, cr.Winding, cr.Current, p)
+	return []Check{newCheck(c.Name, "|B| at an off-axis test point",
+		"Σ exact loop fields (elliptic integrals)", "numerical Biot–Savart line integral (gonum quad)",
+		exact.Norm(), num.Norm(), "T", 1e-8)}
+}
+
+// farFieldCheck compares the on-axis field at 20 times the coil's size
+// with the point-dipole formula.
+func farFieldCheck(c calc.Coil, cr calc.CoilResult) []Check {
+	if c.Form == calc.Pair && c.Opposing {
+		return nil
+	}
+	fr := calc.CoilFrame(c.Axis)
+	R := c.MeanDiameter / 2
+	size := math.Max(R+c.RadialBuild/2, c.Length/2)
+	if c.Form == calc.Pair {
+		size = math.Max(size, c.Spacing/2+c.Length/2)
+	}
+	z := 20 * size
+	pf := c.Centre.Add(fr.U.Scale(z))
+	ex := calc.CoilField(c, cr.Winding, cr.Current, pf).Norm()
+	dip := calc.DipoleField(cr.Moment, fr.U.Scale(z)).Norm()
+	return []Check{newCheck(c.Name, fmt.Sprintf("on-axis field at %s", format.Eng(z, "m", 3)),
+		"Σ exact loop fields", "point dipole μ0·m/(2π z³)", ex, dip, "T", 0.01)}
 }
 
 // inductanceChecks verify a single-layer coil's inductance: Nagaoka's

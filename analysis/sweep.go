@@ -1,6 +1,8 @@
 package analysis
 
 import (
+	"math"
+
 	"coilmemo/calc"
 	"coilmemo/spec"
 )
@@ -13,6 +15,11 @@ type SweepStep struct {
 	Problem  string
 	Results  calc.Results
 	Limits   []LimitResult // the requirements judged at this step
+	// Hottest is the hottest winding temperature over the coils, K (NaN
+	// when one runs away), Power the total power, W, Current the largest
+	// coil current, A, and Met the number of limits met.
+	Hottest, Power, Current float64
+	Met                     int
 }
 
 // setParam sets a sweepable coil key on c, keeping the dimensions that
@@ -67,6 +74,17 @@ func RunSweep(s *spec.Spec) []SweepStep {
 		if st.Feasible {
 			st.Results = calc.Evaluate(d)
 			st.Limits = JudgeLimits(d, st.Results)
+			st.Hottest = math.Inf(-1)
+			for _, cr := range st.Results.Coils {
+				st.Hottest = math.Max(st.Hottest, cr.Temperature)
+				st.Power += cr.Power
+				st.Current = math.Max(st.Current, math.Abs(cr.Current))
+			}
+			for _, l := range st.Limits {
+				if l.Pass {
+					st.Met++
+				}
+			}
 		}
 		steps = append(steps, st)
 	}

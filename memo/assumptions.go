@@ -64,8 +64,23 @@ type validity struct {
 	text    string
 }
 
-// validityFlags are one coil block's validity flags.
+// validityFlags are one coil block's validity flags, in the order of
+// validityChecks.
 func validityFlags(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.Design) []validity {
+	var out []validity
+	for _, f := range validityChecks {
+		out = append(out, f(co, cr, cs, d)...)
+	}
+	return out
+}
+
+// validityChecks are the validity flags a coil block may raise.
+var validityChecks = []func(calc.Coil, calc.CoilResult, *analysis.CoilStudy, calc.Design) []validity{
+	thinWireFlag, radialBuildFlag, wireBuildFlag, dipoleFlag, driveFlag, thermalFlag, pairFlag,
+}
+
+// thinWireFlag flags the thin-wire ratio: the winding's cross-section against its diameter.
+func thinWireFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.Design) []validity {
 	var out []validity
 	w := cr.Winding
 	R := co.MeanDiameter / 2
@@ -89,6 +104,14 @@ func validityFlags(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d c
 		}
 		out = append(out, v)
 	}
+	return out
+}
+
+// radialBuildFlag flags a multilayer winding whose turns do not fill the stated radial build.
+func radialBuildFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.Design) []validity {
+	var out []validity
+	w := cr.Winding
+	R := co.MeanDiameter / 2
 	// A multilayer winding whose turns do not fill the stated radial build
 	// sits nearer the bore than its stated mean diameter says.
 	if co.RadialBuild > 0 && !w.Thin && w.LayerCount > 0 && co.Wire.Outer > 0 {
@@ -99,11 +122,25 @@ func validityFlags(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d c
 				co.Turns, w.LayerCount, Eng(used, "m", 3), Eng(co.RadialBuild, "m", 3), Eng(cs.MeanRadius, "m", 4), Eng(R, "m", 4))})
 		}
 	}
+	return out
+}
+
+// wireBuildFlag flags an estimated wire build.
+func wireBuildFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.Design) []validity {
+	var out []validity
+
 	if co.Wire.OuterEstimated {
 		out = append(out, validity{what: "Wire build", flagged: true, text: fmt.Sprintf(
 			"the wire's overall diameter (%s over %s bare) is an estimate for heavy-build enamelled wire. The winding's length, layers, surface and so its temperature follow from it; state wire-outer-diameter from the wire maker's data sheet.",
 			Eng(co.Wire.Outer, "m", 3), Eng(co.Wire.Bare, "m", 3))})
 	}
+	return out
+}
+
+// dipoleFlag flags the distance beyond which the point dipole holds.
+func dipoleFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.Design) []validity {
+	var out []validity
+	R := co.MeanDiameter / 2
 	// Dipole distance.
 	if co.Form != calc.Rectangle && !(co.Form == calc.Pair && co.Opposing) && R > 0 {
 		if dr := cr.Dipole.Axis1; !math.IsNaN(dr) && dr > 0 {
@@ -132,6 +169,12 @@ func validityFlags(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d c
 			out = append(out, validity{what: "Dipole distance", text: text})
 		}
 	}
+	return out
+}
+
+// driveFlag flags the d.c. model against the drive frequency.
+func driveFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.Design) []validity {
+	var out []validity
 	// D.c. against the drive frequency.
 	switch ac := cr.AC; {
 	case ac.Frequency > 0:
@@ -159,6 +202,13 @@ func validityFlags(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d c
 	default:
 		out = append(out, validity{what: "Direct current", text: templates.Text("assume-dc", nil)})
 	}
+	return out
+}
+
+// thermalFlag flags the range of the thermal model.
+func thermalFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.Design) []validity {
+	var out []validity
+
 	// Thermal-model range.
 	if st := cr.Heat.Steady; st.Settled && !cr.Runaway {
 		v := validity{what: "Thermal model"}
@@ -180,6 +230,13 @@ func validityFlags(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d c
 	} else if cr.Runaway {
 		out = append(out, validity{what: "Thermal model", flagged: true, text: "no steady temperature exists (thermal runaway): the electrical figures at the steady state are not defined; see the Safety section."})
 	}
+	return out
+}
+
+// pairFlag flags the Helmholtz condition and the pair's useful region.
+func pairFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.Design) []validity {
+	var out []validity
+	R := co.MeanDiameter / 2
 	// Helmholtz condition and the pair's useful region.
 	if co.Form == calc.Pair && R > 0 {
 		ratio := co.Spacing / R

@@ -48,6 +48,79 @@ func sweepUnit(sw *spec.Sweep) (unit string, scale float64) {
 	return "", 1
 }
 
+// sweepView is what a sweep shows besides the standard columns: a column
+// for a parameter whose effect they do not show (the swept coil's, or the
+// first coil's when the sweep covers every coil), and the quantity its
+// first figure plots with the limit drawn on it.
+type sweepView struct {
+	extraHead                     string
+	extra                         func(calc.Results) string
+	plotName, plotUnit, plotLimit string
+	plotValue                     func(calc.Results) float64
+}
+
+func sweepViewOf(sw *spec.Sweep, d calc.Design) sweepView {
+	v := sweepView{extra: func(calc.Results) string { return "" },
+		plotName: "Magnetic moment |m|", plotUnit: "A·m²", plotLimit: "moment",
+		plotValue: func(r calc.Results) float64 { return r.Moment.Norm() }}
+	swept := 0
+	for i, co := range d.Coils {
+		if sw.Coil == co.Name {
+			swept = i
+		}
+	}
+	switch sw.Param {
+	case "switch-off":
+		v.extraHead = "Unsuppressed spike"
+		v.extra = func(r calc.Results) string { return Eng(r.Coils[swept].Switch.Spike, "V", 3) }
+		v.plotName, v.plotUnit, v.plotLimit = "Switch-off spike", "V", ""
+		v.plotValue = func(r calc.Results) float64 { return r.Coils[swept].Switch.Spike }
+	case "frequency":
+		v.extraHead = "|Z| / a.c. current"
+		v.extra = func(r calc.Results) string {
+			ac := r.Coils[swept].AC
+			return Eng(ac.Impedance, "Ω", 3) + " / " + Eng(ac.Current, "A", 3)
+		}
+		v.plotName, v.plotUnit, v.plotLimit = "Impedance |Z|", "Ω", ""
+		v.plotValue = func(r calc.Results) float64 { return r.Coils[swept].AC.Impedance }
+	}
+	return v
+}
+
+// sweepFigures plots the first quantity of the sweep and the hottest
+// winding temperature against the swept value, with the stated limits.
+func (c *composer) sweepFigures(label string, x, first, temp []float64, v sweepView) {
+	limit := func(q string) []float64 {
+		var out []float64
+		for _, l := range c.j.Spec.Design.Limits {
+			if l.Quantity == q {
+				v := l.Required
+				if q == "temperature" {
+					v = Celsius(v)
+				}
+				out = append(out, v)
+			}
+		}
+		return out
+	}
+	n := c.figure + 1
+	what := "the " + strings.ToLower(v.plotName[:1]) + v.plotName[1:]
+	if v.plotLimit == "moment" {
+		what = "the total moment"
+	}
+	c.para(fmt.Sprintf("Figures %d and %d show %s and the hottest winding temperature across the sweep, with the stated requirements as dashed lines.", n, n+1, what))
+	var req []float64
+	if v.plotLimit != "" {
+		req = limit(v.plotLimit)
+	}
+	c.fig(doc.Figure{Caption: v.plotName + " across the sweep", Width: figWidth, Height: figHeight * 0.7,
+		Draw:    figures.Sweep(label, x, v.plotName, v.plotUnit, first, req),
+		Summary: fmt.Sprintf("%s from %s to %s.", v.plotName, Eng(first[0], v.plotUnit, 3), Eng(first[len(first)-1], v.plotUnit, 3))})
+	c.fig(doc.Figure{Caption: "Hottest winding temperature across the sweep", Width: figWidth, Height: figHeight * 0.7,
+		Draw:    figures.Sweep(label, x, "Winding temperature", "°C", temp, limit("temperature")),
+		Summary: fmt.Sprintf("Temperature from %s to %s.", Eng(temp[0], "°C", 3), Eng(temp[len(temp)-1], "°C", 3))})
+}
+
 func (c *composer) sweep() {
 	sw := c.j.Spec.Sweep
 	if sw == nil || len(c.j.Sweep) == 0 {
@@ -75,35 +148,8 @@ func (c *composer) sweep() {
 	}
 	c.para(fmt.Sprintf("The design is re-evaluated with %s of %s from %s to %s in steps of %s, every other input as specified. Each row is a complete evaluation: winding, steady temperature, operating point and field.",
 		sw.Param, target, withUnit(sw.From*scale), withUnit(sw.To*scale), withUnit(sw.Step*scale)))
-	// Parameters whose effect the standard columns do not show get a
-	// column of their own, from the swept coil (the first, when the sweep
-	// covers every coil).
-	extraHead, extra := "", func(calc.Results) string { return "" }
-	// The first figure shows the moment, or for these parameters the
-	// quantity they change.
-	plotName, plotUnit, plotLimit := "Magnetic moment |m|", "A·m²", "moment"
-	plotValue := func(r calc.Results) float64 { return r.Moment.Norm() }
-	swept := 0
-	for i, co := range c.j.Spec.Design.Coils {
-		if sw.Coil == co.Name {
-			swept = i
-		}
-	}
-	switch sw.Param {
-	case "switch-off":
-		extraHead = "Unsuppressed spike"
-		extra = func(r calc.Results) string { return Eng(r.Coils[swept].Switch.Spike, "V", 3) }
-		plotName, plotUnit, plotLimit = "Switch-off spike", "V", ""
-		plotValue = func(r calc.Results) float64 { return r.Coils[swept].Switch.Spike }
-	case "frequency":
-		extraHead = "|Z| / a.c. current"
-		extra = func(r calc.Results) string {
-			ac := r.Coils[swept].AC
-			return Eng(ac.Impedance, "Ω", 3) + " / " + Eng(ac.Current, "A", 3)
-		}
-		plotName, plotUnit, plotLimit = "Impedance |Z|", "Ω", ""
-		plotValue = func(r calc.Results) float64 { return r.Coils[swept].AC.Impedance }
-	}
+	v := sweepViewOf(sw, c.j.Spec.Design)
+	extraHead, extra, plotValue := v.extraHead, v.extra, v.plotValue
 	var rows [][]doc.Cell
 	var x, first, temp []float64
 	for _, st := range c.j.Sweep {
@@ -117,18 +163,7 @@ func (c *composer) sweep() {
 			continue
 		}
 		r := st.Results
-		hot, pw, cur := math.Inf(-1), 0.0, 0.0
-		for _, cr := range r.Coils {
-			hot = math.Max(hot, cr.Temperature)
-			pw += cr.Power
-			cur = math.Max(cur, math.Abs(cr.Current))
-		}
-		met := 0
-		for _, l := range st.Limits {
-			if l.Pass {
-				met++
-			}
-		}
+		hot, pw, cur, met := st.Hottest, st.Power, st.Current, st.Met
 		status := doc.Cell{Text: fmt.Sprintf("%d/%d", met, len(st.Limits))}
 		if len(st.Limits) > 0 {
 			status.Status = doc.Pass
@@ -166,36 +201,7 @@ func (c *composer) sweep() {
 		Header: header,
 		Rows:   rows,
 		Align:  align, Widths: widths})
-	if len(x) < 2 {
-		return
+	if len(x) >= 2 {
+		c.sweepFigures(label, x, first, temp, v)
 	}
-	limit := func(q string) []float64 {
-		var out []float64
-		for _, l := range c.j.Spec.Design.Limits {
-			if l.Quantity == q {
-				v := l.Required
-				if q == "temperature" {
-					v = Celsius(v)
-				}
-				out = append(out, v)
-			}
-		}
-		return out
-	}
-	n := c.figure + 1
-	what := "the " + strings.ToLower(plotName[:1]) + plotName[1:]
-	if plotLimit == "moment" {
-		what = "the total moment"
-	}
-	c.para(fmt.Sprintf("Figures %d and %d show %s and the hottest winding temperature across the sweep, with the stated requirements as dashed lines.", n, n+1, what))
-	var req []float64
-	if plotLimit != "" {
-		req = limit(plotLimit)
-	}
-	c.fig(doc.Figure{Caption: plotName + " across the sweep", Width: figWidth, Height: figHeight * 0.7,
-		Draw:    figures.Sweep(label, x, plotName, plotUnit, first, req),
-		Summary: fmt.Sprintf("%s from %s to %s.", plotName, Eng(first[0], plotUnit, 3), Eng(first[len(first)-1], plotUnit, 3))})
-	c.fig(doc.Figure{Caption: "Hottest winding temperature across the sweep", Width: figWidth, Height: figHeight * 0.7,
-		Draw:    figures.Sweep(label, x, "Winding temperature", "°C", temp, limit("temperature")),
-		Summary: fmt.Sprintf("Temperature from %s to %s.", Eng(temp[0], "°C", 3), Eng(temp[len(temp)-1], "°C", 3))})
 }

@@ -70,21 +70,39 @@ func (c *composer) heating() {
 	c.add(c.thermalTable())
 }
 
-// heatSteps derive one coil block's steady thermal state.
+// heatSteps derive one coil block's steady thermal state: the surface
+// that sheds the heat, the convection coefficient, the heat balance, the
+// rise inside the winding and the margin to the class, the moment lost to
+// heating under voltage drive, and the heat capacity.
 func heatSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, cool calc.Cooling) []Step {
-	h := cr.Heat
-	tp := h.Problem
-	st := h.Steady
-	w := cr.Winding
+	steps := heatSurfaceSteps(co, cr, cs, cool)
+	if !cr.Heat.Steady.Settled {
+		return append(steps, Step{What: "Steady heat balance: no solution — the heat generated outgrows the heat shed at every temperature up to " + Eng(Celsius(calc.TempSearchMax), "°C", 3),
+			Symbolic: `\delta P(T) = Q_{\mathrm{out}}(T_s)`, Result: Words("no steady state")})
+	}
+	for _, part := range []func(calc.Coil, calc.CoilResult, *analysis.CoilStudy, calc.Cooling) []Step{
+		convectionSteps, heatShedSteps, conductionSteps, coldMomentSteps, heatCapacitySteps} {
+		steps = append(steps, part(co, cr, cs, cool)...)
+	}
+	return steps
+}
+
+// heatSurfaceSteps derive the heat-shedding surface of the winding.
+func heatSurfaceSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, cool calc.Cooling) []Step {
 	var steps []Step
 	add := func(s ...Step) { steps = append(steps, s...) }
+	h := cr.Heat
+	tp := h.Problem
+	w := cr.Winding
 	hp := cs.Heat
 	series := cs.Series
 	two := ""
 	if series == 2 {
 		two = `2 \cdot `
 	}
-	ri, ro, length := hp.RiseInner, hp.RiseOuter, hp.RiseLength
+	ri := hp.RiseInner
+	ro := hp.RiseOuter
+	length := hp.RiseLength
 	switch {
 	case w.Thin:
 		db := hp.BundleDiameter
@@ -102,12 +120,20 @@ func heatSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, cool ca
 				Paren(Q(ro, "m", 4)), Paren(Q(ri, "m", 4))),
 			Result: Q(tp.Area, "m²", 4)})
 	}
-	if !st.Settled {
-		add(Step{What: "Steady heat balance: no solution — the heat generated outgrows the heat shed at every temperature up to " + Eng(Celsius(calc.TempSearchMax), "°C", 3),
-			Symbolic: `\delta P(T) = Q_{\mathrm{out}}(T_s)`, Result: Words("no steady state")})
-		return steps
-	}
-	Ts, Ta := st.Surface, tp.Ambient
+	return steps
+}
+
+// convectionSteps derive the convective heat-transfer coefficient by its correlation.
+func convectionSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, cool calc.Cooling) []Step {
+	var steps []Step
+	add := func(s ...Step) { steps = append(steps, s...) }
+	h := cr.Heat
+	tp := h.Problem
+	st := h.Steady
+	w := cr.Winding
+	hp := cs.Heat
+	Ts := st.Surface
+	Ta := tp.Ambient
 	if nc := tp.Convection; nc != nil {
 		cs := st.Convection
 		nu, k, pr := hp.AirViscosity, hp.AirConductivity, hp.AirPrandtl
@@ -144,6 +170,20 @@ func heatSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, cool ca
 		add(Step{What: "Convective heat-transfer coefficient", Symbolic: `h = \frac{\mathrm{Nu}\, k_a}{L}`,
 			Numbers: fmt.Sprintf(`\frac{%s \cdot %s}{%s}`, N(cs.Nu, 4), Q(k, "W/(m·K)", 3), Q(nc.Length, "m", 4)), Result: Q(cs.H, "W/(m²·K)", 3)})
 	}
+	return steps
+}
+
+// heatShedSteps derive the heat shed by convection, radiation and the mount, and the steady balance.
+func heatShedSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, cool calc.Cooling) []Step {
+	var steps []Step
+	add := func(s ...Step) { steps = append(steps, s...) }
+	h := cr.Heat
+	tp := h.Problem
+	st := h.Steady
+	hp := cs.Heat
+	series := cs.Series
+	Ts := st.Surface
+	Ta := tp.Ambient
 	hval := hp.H
 	var parts []string
 	var nums []string
@@ -167,7 +207,21 @@ func heatSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, cool ca
 	add(Step{What: what, Symbolic: `\bar{P} = ` + strings.Join(parts, " + "),
 		Numbers: strings.Join(nums, " + "), Result: Q(st.Power, "W", 4)})
 	add(Step{What: "Surface temperature at the steady state", Symbolic: `T_s`, Result: Q(Celsius(Ts), "°C", 4)})
-	// Inside the winding.
+	return steps
+}
+
+// conductionSteps derive the rise inside the winding to its hottest point and the margin to the insulation class.
+func conductionSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, cool calc.Cooling) []Step {
+	var steps []Step
+	add := func(s ...Step) { steps = append(steps, s...) }
+	h := cr.Heat
+	st := h.Steady
+	hp := cs.Heat
+	series := cs.Series
+	ri := hp.RiseInner
+	ro := hp.RiseOuter
+	length := hp.RiseLength
+	Ts := st.Surface
 	kw := h.Conductivity
 	src := "as stated"
 	if co.WindingConductivity <= 0 {
@@ -208,6 +262,14 @@ func heatSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, cool ca
 		add(Step{What: "Margin to the insulation thermal class (IEC 60085)", Symbolic: `T_{\mathrm{class}} - T_{\mathrm{max}}`,
 			Numbers: fmt.Sprintf(`%s - %s`, Q(Celsius(co.InsulationClass), "°C", 4), Q(Celsius(st.HotSpot), "°C", 4)), Result: Q(margin, "K", 3)})
 	}
+	return steps
+}
+
+// coldMomentSteps derive the moment lost to heating under voltage drive.
+func coldMomentSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, cool calc.Cooling) []Step {
+	var steps []Step
+	add := func(s ...Step) { steps = append(steps, s...) }
+	h := cr.Heat
 	if co.Drive == calc.VoltageDrive && h.ColdMoment > 0 {
 		add(Step{What: "Voltage drive limits itself: the current, and with it the moment, falls as the winding warms. Moment when cold (at the 20 °C current)",
 			Symbolic: `m_{20} = m \frac{I_{20}}{I}`,
@@ -216,7 +278,20 @@ func heatSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, cool ca
 		add(Step{What: "Moment lost to heating", Symbolic: `1 - \frac{m}{m_{20}}`,
 			Numbers: fmt.Sprintf(`1 - \frac{%s}{%s}`, Q(cr.Moment.Norm(), "A·m²", 4), Q(h.ColdMoment, "A·m²", 4)), Result: Q(100*(1-cr.Moment.Norm()/h.ColdMoment), "%", 3)})
 	}
-	// Warm-up.
+	return steps
+}
+
+// heatCapacitySteps derive the heat capacity and the thermal time constant.
+func heatCapacitySteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, cool calc.Cooling) []Step {
+	var steps []Step
+	add := func(s ...Step) { steps = append(steps, s...) }
+	h := cr.Heat
+	w := cr.Winding
+	series := cs.Series
+	two := ""
+	if series == 2 {
+		two = `2 \cdot `
+	}
 	mat := co.Wire.Material
 	former := ""
 	fnum := ""

@@ -211,18 +211,9 @@ func Build(j *analysis.Study) Report {
 			sr := SweepStepReport{Value: Num(st.Value), Feasible: st.Feasible, Problem: st.Problem}
 			if st.Feasible {
 				n := func(v float64) *Num { x := Num(v); return &x }
-				hot, pw, failed := math.Inf(-1), 0.0, 0
-				for _, cr := range st.Results.Coils {
-					hot = math.Max(hot, cr.Temperature)
-					pw += cr.Power
-				}
-				for _, l := range st.Limits {
-					if !l.Pass {
-						failed++
-					}
-				}
+				failed := len(st.Limits) - st.Met
 				sr.Moment, sr.FieldCenter = n(st.Results.Moment.Norm()), n(st.Results.FieldCentre.Norm())
-				sr.Power, sr.WindingTemperature, sr.LimitsFailed = n(pw), n(format.Celsius(hot)), &failed
+				sr.Power, sr.WindingTemperature, sr.LimitsFailed = n(st.Power), n(format.Celsius(st.Hottest)), &failed
 			}
 			rep.Sweep.Steps = append(rep.Sweep.Steps, sr)
 		}
