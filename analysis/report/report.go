@@ -133,11 +133,17 @@ type ProbeReport struct {
 // everything else in the SI unit named.
 type LimitReport struct {
 	Quantity string `json:"quantity"`
-	Relation string `json:"relation"`
-	Required Num    `json:"required"`
-	Computed Num    `json:"computed"`
-	Unit     string `json:"unit"`
-	Pass     bool   `json:"pass"`
+	// Subject is the coil block or probe the limit is about ("" for the
+	// whole design); TestedOn says which: "design", "coil" or "probe".
+	Subject  string `json:"subject"`
+	TestedOn string `json:"tested_on"`
+	// Tolerance is a uniform-radius limit's relative tolerance.
+	Tolerance *Num   `json:"tolerance,omitempty"`
+	Relation  string `json:"relation"`
+	Required  Num    `json:"required"`
+	Computed  Num    `json:"computed"`
+	Unit      string `json:"unit"`
+	Pass      bool   `json:"pass"`
 }
 
 // CheckReport is one verification check.
@@ -202,7 +208,13 @@ func Build(j *analysis.Study) Report {
 		if l.Limit.Relation == calc.AtMost {
 			rel = "<="
 		}
-		rep.Limits = append(rep.Limits, LimitReport{Quantity: l.Limit.Quantity, Relation: rel,
+		on := map[analysis.Tested]string{analysis.OnDesign: "design", analysis.OnCoil: "coil", analysis.OnProbe: "probe"}[l.On]
+		var tol *Num
+		if l.Limit.Quantity == "uniform-radius" {
+			t := Num(l.Limit.Tolerance)
+			tol = &t
+		}
+		rep.Limits = append(rep.Limits, LimitReport{Quantity: l.Limit.Quantity, Subject: l.Limit.Subject, TestedOn: on, Tolerance: tol, Relation: rel,
 			Required: Num(req), Computed: Num(got), Unit: unit, Pass: l.Pass})
 	}
 	if sw := j.Spec.Sweep; sw != nil {
