@@ -183,7 +183,11 @@ func driveFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.
 			Eng(ac.Frequency, "Hz", 3), Eng(ac.Reactance, "Ω", 3), Eng(cr.RHot, "Ω", 3), Sig(ac.Reactance/cr.RHot, 2))}
 		if ac.Reactive {
 			v.flagged = true
-			parts = append(parts, fmt.Sprintf("the current is set by the impedance |Z| = %s, not by R alone: the d.c. current, moment and field of this memo are upper bounds, the a.c. values are lower", Eng(ac.Impedance, "Ω", 3)))
+			if co.Drive == calc.VoltageDrive {
+				parts = append(parts, fmt.Sprintf("the current is set by the impedance |Z| = %s, not by R alone: the d.c. current, moment and field of this memo are upper bounds, the a.c. values are lower", Eng(ac.Impedance, "Ω", 3)))
+			} else {
+				parts = append(parts, fmt.Sprintf("the imposed current needs the voltage |Z|·I across the impedance |Z| = %s, not R·I: the d.c. voltage of this memo is a lower bound for the driver; the current, moment and field are as stated", Eng(ac.Impedance, "Ω", 3)))
+			}
 		} else {
 			parts = append(parts, "the reactance is negligible and the d.c. figures hold")
 		}

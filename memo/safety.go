@@ -44,7 +44,7 @@ func Cautions(j *analysis.Study) []doc.Callout {
 		case analysis.SwitchOffVoltage:
 			out = append(out, switchOffCaution(f, cr, name))
 		case analysis.ACDrive:
-			out = append(out, acCaution(cr, name))
+			out = append(out, acCaution(co, cr, name))
 		}
 	}
 	if ir := j.Safety.Implant; ir.Searched {
