@@ -74,3 +74,21 @@ func TestSweepOnTime(t *testing.T) {
 		t.Errorf("peaks %g K (1 min on) and %g K (9 min on) against the duty-averaged steady state %g K", first, prev, avg)
 	}
 }
+
+// The moment check compares the area sum with the far field's dipole
+// moment: it passes for the design as computed and fails when the moment
+// is off by 0.01 %, as a miscounted turn of a 10 000-turn coil would make it.
+func TestMomentCheckIsIndependent(t *testing.T) {
+	c := calc.Coil{Name: "m", Form: calc.Solenoid, MeanDiameter: 0.06, Length: 0.02, RadialBuild: 0.01, Turns: 300,
+		Wire: calc.WireFromGauge(28, calc.Copper()), Drive: calc.CurrentDrive, Current: 0.5, Axis: calc.Vec{1, 1, 0}, Centre: calc.Vec{0.1, 0, 0}}
+	r := calc.Evaluate(calc.Design{Coils: []calc.Coil{c}, Conditions: calc.Conditions{Ambient: calc.T20, Cooling: calc.StillAir()}})
+	cr := r.Coils[0]
+	ok := momentCheck(c, cr)
+	if len(ok) != 1 || !ok[0].Pass {
+		t.Fatalf("moment check of the computed moment: %+v", ok)
+	}
+	cr.Moment = cr.Moment.Scale(1 + 1e-4)
+	if bad := momentCheck(c, cr); bad[0].Pass {
+		t.Errorf("a moment 0.01 %% off passes: %+v", bad[0])
+	}
+}
