@@ -18,7 +18,7 @@ type CoilStudy struct {
 	Bundle float64
 	// Envelope is the winding's cross-section in its own frame, and
 	// Placements the axial positions of the block's coils (two for a pair).
-	Envelope   Envelope
+	Envelope   calc.Envelope
 	Placements []float64
 	// Depth is the winding's radial depth as laid out: the radial build,
 	// the bundle of a thin coil, or one wire of a single layer, m.
@@ -38,25 +38,15 @@ type CoilStudy struct {
 	Heat       HeatParts
 }
 
-// Envelope is a winding's cross-section in its own frame: radii R0…R1 and
-// axial extent Z0…Z1 about its centre, m; Round for a thin coil's bundle.
-type Envelope struct {
-	R0, R1, Z0, Z1 float64
-	Round          bool
-}
-
 // StudyCoil is the CoilStudy of coil block co with results cr in the
 // given conditions.
 func StudyCoil(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) CoilStudy {
 	w := cr.Winding
-	cs := CoilStudy{Outer: co.Wire.Outer, Series: calc.SeriesCoils(co), ConductorArea: calc.ConductorArea(co.Wire.Bare)}
-	if !(cs.Outer > 0) {
-		cs.Outer = co.Wire.Bare
-	}
+	cs := CoilStudy{Outer: calc.WireOuter(co), Series: calc.SeriesCoils(co), ConductorArea: calc.ConductorArea(co.Wire.Bare)}
 	cs.Bundle = calc.BundleDiameter(cs.Outer, co.Turns)
 	cs.MeanRadius = meanTurnRadius(w)
-	cs.Envelope = windingEnvelope(co, w, cs.Outer, cs.Bundle)
-	cs.Placements = placements(co)
+	cs.Envelope = calc.WindingEnvelope(co, w)
+	cs.Placements = calc.Placements(co)
 	cs.Depth = co.RadialBuild
 	if cs.Depth == 0 {
 		cs.Depth = co.Wire.Outer
@@ -70,36 +60,6 @@ func StudyCoil(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) CoilStudy
 	cs.Inductance = inductanceParts(co, cr, cs.Outer)
 	cs.Heat = heatParts(co, cr, cond, cs.Outer)
 	return cs
-}
-
-// windingEnvelope is the cross-section of one coil (one of a pair) as
-// given: a thin coil's round bundle (hexagonal packing) on the mean
-// radius; one layer of wire over the length; or the length × radial build.
-func windingEnvelope(co calc.Coil, w calc.Winding, outer, bundle float64) Envelope {
-	rm := co.MeanDiameter / 2
-	switch {
-	case w.Thin:
-		return Envelope{R0: rm - bundle/2, R1: rm + bundle/2, Z0: -bundle / 2, Z1: bundle / 2, Round: true}
-	case co.RadialBuild <= 0:
-		return Envelope{R0: rm - outer/2, R1: rm + outer/2, Z0: -co.Length / 2, Z1: co.Length / 2}
-	}
-	rin := rm - co.RadialBuild/2
-	if co.InnerDiameter > 0 {
-		rin = co.InnerDiameter / 2
-	}
-	L := co.Length
-	if !(L > 0) {
-		L = outer
-	}
-	return Envelope{R0: rin, R1: rin + co.RadialBuild, Z0: -L / 2, Z1: L / 2}
-}
-
-// placements are the axial positions of a block's coils in its frame.
-func placements(co calc.Coil) []float64 {
-	if co.Form == calc.Pair {
-		return []float64{-math.Abs(co.Spacing) / 2, math.Abs(co.Spacing) / 2}
-	}
-	return []float64{0}
 }
 
 // InductanceParts are the intermediate values of a coil block's

@@ -240,12 +240,7 @@ func allCoilsMap(d calc.Design, r calc.Results) *MapData {
 			v := fm.At(p).Norm()
 			for _, k := range hidden {
 				co := d.Coils[k]
-				w := r.Coils[k].Winding
-				outer := co.Wire.Outer
-				if !(outer > 0) {
-					outer = co.Wire.Bare
-				}
-				if nearWinding(co, windingEnvelope(co, w, outer, calc.BundleDiameter(outer, co.Turns)), p, step) {
+				if nearWinding(co, calc.WindingEnvelope(co, r.Coils[k].Winding), p, step) {
 					v = math.NaN()
 				}
 			}
@@ -273,14 +268,14 @@ func DrawnInXZ(co calc.Coil) bool {
 // nearWinding reports whether p lies within margin of the winding
 // envelope e of coil block co (in its own frame, every placement of a
 // pair), where a map would show the field of the conductors themselves.
-func nearWinding(co calc.Coil, e Envelope, p calc.Vec, margin float64) bool {
+func nearWinding(co calc.Coil, e calc.Envelope, p calc.Vec, margin float64) bool {
 	if co.Form == calc.Rectangle {
 		return false
 	}
 	fr := calc.CoilFrame(co.Axis)
 	l := fr.ToLocal(p.Sub(co.Centre))
 	rho := math.Hypot(l[0], l[1])
-	for _, z := range placements(co) {
+	for _, z := range calc.Placements(co) {
 		if rho > e.R0-margin && rho < e.R1+margin && l[2] > z+e.Z0-margin && l[2] < z+e.Z1+margin {
 			return true
 		}

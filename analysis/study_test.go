@@ -33,7 +33,7 @@ func TestBuildDate(t *testing.T) {
 func TestNearWinding(t *testing.T) {
 	wire := calc.Wire{Bare: 0.5e-3, Outer: 0.55e-3, Material: calc.Copper()}
 	o := calc.Coil{Form: calc.Solenoid, MeanDiameter: 0.04, Length: 0.02, RadialBuild: 4e-3, Turns: 100, Wire: wire, Axis: calc.Vec{1, 0, 1}}
-	e := windingEnvelope(o, calc.LayOut(o), wire.Outer, calc.BundleDiameter(wire.Outer, o.Turns))
+	e := calc.WindingEnvelope(o, calc.LayOut(o))
 	p := calc.Vec{0, 0, 0}.Add(calc.CoilFrame(o.Axis).E1.Scale(0.02))
 	if !nearWinding(o, e, p, 1e-3) {
 		t.Error("a point in the oblique winding is not blanked")

@@ -131,7 +131,7 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 }
 
 // sketchHeight fits the sketch's height to its proportions.
-func sketchHeight(co calc.Coil, e analysis.Envelope) vg.Length {
+func sketchHeight(co calc.Coil, e calc.Envelope) vg.Length {
 	zs := e.Z1 - e.Z0
 	if co.Form == calc.Pair {
 		zs += math.Abs(co.Spacing)
