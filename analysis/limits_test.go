@@ -9,15 +9,15 @@ import (
 	"coilmemo/calc"
 )
 
-// A three-axis torquer set: X and Y 150 turns, Z 160 turns, thin loops of
-// 80 mm mean diameter at 0.1 A, X off the origin. Each coil alone:
-// m = N I π R² (thin loop), 75.4 / 75.4 / 80.4 mA·m²; their vector sum
-// 133 mA·m². The field of a thin loop at its own centre is μ0 N I / (2R)
+// A three-axis torquer set of thin loops at 0.1 A, nested without
+// touching: X 150 turns on 80 mm (off the origin), Y 96 turns on 100 mm,
+// Z 71 turns on 120 mm. Each coil alone: m = N I π R² (thin loop), 75.4 /
+// 75.4 / 80.3 mA·m²; their vector sum 133 mA·m². The field of a thin loop at its own centre is μ0 N I / (2R)
 // (Biot–Savart closed form for a circular loop, e.g. Griffiths,
 // Introduction to Electrodynamics, 4th ed., Example 5.6).
 const threeAxis = "```coil\nname = torquer X\nmean-diameter = 80 mm\nturns = 150\nwire = AWG 32\ncurrent = 0.1 A\naxis = x\ncentre = (50, 0, 0) mm\n```\n" +
-	"```coil\nname = torquer Y\nmean-diameter = 80 mm\nturns = 150\nwire = AWG 32\ncurrent = 0.1 A\naxis = y\n```\n" +
-	"```coil\nname = torquer Z\nmean-diameter = 80 mm\nturns = 160\nwire = AWG 32\ncurrent = 0.1 A\naxis = z\n```\n" +
+	"```coil\nname = torquer Y\nmean-diameter = 100 mm\nturns = 96\nwire = AWG 32\ncurrent = 0.1 A\naxis = y\n```\n" +
+	"```coil\nname = torquer Z\nmean-diameter = 120 mm\nturns = 71\nwire = AWG 32\ncurrent = 0.1 A\naxis = z\n```\n" +
 	"```probes\nmagnetometer = (0, 0, 120) mm\n```\n" +
 	"```limits\nmoment >= 100 mA m2\nmoment(torquer X) >= 100 mA m2\nmoment(torquer Z) >= 80 mA m2\nfield(magnetometer) <= 50 uT\nfield-center(torquer X) <= 1 mT\n```\n"
 
@@ -26,8 +26,7 @@ func TestLimitsPerSubject(t *testing.T) {
 	if len(diags) > 0 {
 		t.Fatal(diags)
 	}
-	A := math.Pi * 0.04 * 0.04
-	mX, mZ := 150*0.1*A, 160*0.1*A
+	mX, mY, mZ := 150*0.1*math.Pi*0.04*0.04, 96*0.1*math.Pi*0.05*0.05, 71*0.1*math.Pi*0.06*0.06
 	want := []struct {
 		on      Tested
 		value   float64
@@ -35,7 +34,7 @@ func TestLimitsPerSubject(t *testing.T) {
 		relTol  float64
 		subject string
 	}{
-		{OnDesign, math.Sqrt(2*mX*mX + mZ*mZ), true, 1e-12, ""},
+		{OnDesign, math.Sqrt(mX*mX + mY*mY + mZ*mZ), true, 1e-12, ""},
 		{OnCoil, mX, false, 1e-12, "torquer X"},
 		{OnCoil, mZ, true, 1e-12, "torquer Z"},
 		{OnProbe, st.Results.Probes[0].B.Norm(), true, 0, "magnetometer"},

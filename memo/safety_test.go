@@ -44,7 +44,7 @@ func TestCautionsFromResults(t *testing.T) {
 		t.Errorf("100 V supply raises no voltage warning: %v", titles(hv))
 	}
 	// A strong small coil: the 0.5 mT region extends beyond the winding.
-	strong := cautionsFor(t, "mean-diameter = 50 mm\nturns = 500\nwire = AWG 22\ncurrent = 1 A\n", "")
+	strong := cautionsFor(t, "mean-diameter = 50 mm\nlength = 20 mm\nradial-build = 15 mm\nturns = 500\nwire = AWG 22\ncurrent = 1 A\n", "")
 	if !hasCaution(strong, doc.Warning, "0.5 mt") {
 		t.Errorf("a 12 mT coil raises no implant warning: %v", titles(strong))
 	}

@@ -312,7 +312,7 @@ func TestGoodSpec(t *testing.T) {
 }
 
 func TestDefaults(t *testing.T) {
-	s, ds := Parse("d.md", []byte(fenced("coil", coilBody)+fenced("coil", coilBody)))
+	s, ds := Parse("d.md", []byte(fenced("coil", coilBody)+fenced("coil", coilBody+"centre = (0, 0, 100) mm\n")))
 	if len(ds) > 0 {
 		t.Fatal(ds.Error())
 	}
@@ -347,7 +347,7 @@ func TestDefaults(t *testing.T) {
 func TestForms(t *testing.T) {
 	src := "# Bench\n\n" +
 		fenced("coil", "name = Helmholtz\nform = pair\nmean-diameter = 300 mm\nspacing = 150 mm\nsense = opposing\nturns = 50\nwire = 1.2 mm\nwire-outer-diameter = 1.3 mm\nconductor = aluminium\ncurrent = 2 A\naxis = (1, 1, 0)\n") +
-		fenced("coil", "name = frame\nform = rectangle\nwidth = 1 ft\nheight = 8 in\nturns = 10\nwire = AWG 4/0\nvoltage = 12 V\ninsulation-class = 180 degC\n") +
+		fenced("coil", "name = frame\nform = rectangle\nwidth = 1 ft\nheight = 8 in\nturns = 10\nwire = AWG 4/0\nvoltage = 12 V\ninsulation-class = 180 degC\ncentre = (0, 0, 1) m\n") +
 		fenced("coil", "name = sol\nform = solenoid\nouter-diameter = 30 mm\nradial-build = 5 mm\nlength = 60 mm\nturns = 400\nwire = 20 mil\ncurrent = 300 mA\n") +
 		fenced("conditions", "background-field = 50 uT\ncooling = h = 12 W/(m2 K)\nambient = 300 K\n") +
 		fenced("sweep", "current = 1 .. 3 A step 500 mA\ncoil = Helmholtz\n")
