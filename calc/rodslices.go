@@ -174,3 +174,17 @@ func CylinderDemag(gamma, chi float64) (nm, nf float64) {
 	}
 	return nm, nf
 }
+
+// solveDense solves the k×k system a x = b (a row-major).
+func solveDense(k int, a, b []float64) ([]float64, error) {
+	A := mat.NewDense(k, k, a)
+	var x mat.VecDense
+	if err := x.SolveVec(A, mat.NewVecDense(k, append([]float64(nil), b...))); err != nil {
+		return nil, errRodSingular
+	}
+	out := make([]float64, k)
+	for j := range out {
+		out[j] = x.AtVec(j)
+	}
+	return out, nil
+}
