@@ -21,7 +21,7 @@ import (
 // B = Bs + μ0 (H − Hs) beyond; or the piecewise-linear B–H curve given
 // (slope μ0 past its last point). The non-linear equations are solved by
 // Newton's method with a halving line search, the current ramped up from
-// the onset of saturation in steps of 10 %. From the magnetisation:
+// the onset of saturation in steps of 20 %. From the magnetisation:
 //
 //	m = I ΣA + Σ_j M_j V_j                          (moment, winding plus core)
 //	ΔL = μ0 Σ_j M_j V_j (h0_j / I) / I              (the core's share of L: its flux linkage, by reciprocity, over I)
@@ -143,10 +143,6 @@ func EvaluateCore(c Coil, w Winding, I float64) CoreResult {
 
 	// At the current: the material's curve.
 	curve := coreCurve(k)
-	hI := make([]float64, K)
-	for j := range hI {
-		hI[j] = h0[j] * I
-	}
 	var M, H []float64
 	if curve == nil || I == 0 {
 		M = make([]float64, K)
@@ -355,8 +351,8 @@ func coreCurve(k Core) func(h float64) (m, dm float64) {
 
 // solveCurveRamp solves the saturating core at current I by continuation:
 // from the linear solution at the current where the core begins to saturate
-// (exact there), the current rises by at most 10 % a step, each step solved
-// by solveCurve from the last.
+// (exact there), the current rises by at most rampRatio a step, each step
+// solved by solveCurve from the last.
 func (r *rodModel) solveCurveRamp(curve func(float64) (float64, float64), h0, mPerA []float64, I, chi0, isat float64) (M, H []float64, ok bool) {
 	K := len(r.w)
 	start := math.Abs(I)
@@ -365,7 +361,7 @@ func (r *rodModel) solveCurveRamp(curve func(float64) (float64, float64), h0, mP
 	}
 	steps := 1
 	if start < math.Abs(I) {
-		steps = int(math.Ceil(math.Log(math.Abs(I)/start) / math.Log(1.1)))
+		steps = int(math.Ceil(math.Log(math.Abs(I)/start) / math.Log(rampRatio)))
 	}
 	sign := math.Copysign(1, I)
 	H = make([]float64, K)
@@ -385,7 +381,8 @@ func (r *rodModel) solveCurveRamp(curve func(float64) (float64, float64), h0, mP
 
 // solveCurve solves h0_j = H_j + Σ_i D_ji M(H_i) for the slice fields H by
 // Newton's method, J ΔH = −G with J = I + D diag(dM/dH), halving the step
-// while the residual grows. It starts from the slice fields start.
+// while the residual's Euclidean norm grows (the descent direction of
+// ½|G|² wherever the curve is smooth). It starts from the slice fields start.
 func (r *rodModel) solveCurve(curve func(float64) (float64, float64), h0, start []float64) (M, H []float64, ok bool) {
 	K := len(r.w)
 	H = append([]float64(nil), start...)
@@ -396,15 +393,17 @@ func (r *rodModel) solveCurve(curve func(float64) (float64, float64), h0, start 
 		}
 		g := make([]float64, K)
 		var norm float64
+		raw := r.d.RawMatrix()
 		for j := 0; j < K; j++ {
 			s := h[j] - h0[j]
-			for i := 0; i < K; i++ {
-				s += r.d.At(j, i) * m[i]
+			row := raw.Data[j*raw.Stride : j*raw.Stride+K]
+			for i, dji := range row {
+				s += dji * m[i]
 			}
 			g[j] = s
-			norm = math.Max(norm, math.Abs(s))
+			norm += s * s
 		}
-		return g, m, norm
+		return g, m, math.Sqrt(norm)
 	}
 	scale := 0.0
 	for _, v := range h0 {
@@ -412,7 +411,7 @@ func (r *rodModel) solveCurve(curve func(float64) (float64, float64), h0, start 
 	}
 	g, m, norm := resid(H)
 	for it := 0; it < 50; it++ {
-		if norm <= 1e-10*scale {
+		if norm <= 1e-10*scale*math.Sqrt(float64(K)) {
 			return m, H, true
 		}
 
@@ -422,9 +421,11 @@ func (r *rodModel) solveCurve(curve func(float64) (float64, float64), h0, start 
 		for i := range dm {
 			_, dm[i] = curve(H[i])
 		}
+		raw := r.d.RawMatrix()
 		for j := 0; j < K; j++ {
-			for i := 0; i < K; i++ {
-				jac[j*K+i] = r.d.At(j, i) * dm[i]
+			row := raw.Data[j*raw.Stride : j*raw.Stride+K]
+			for i, dji := range row {
+				jac[j*K+i] = dji * dm[i]
 			}
 			jac[j*K+j]++
 		}
@@ -446,5 +447,9 @@ func (r *rodModel) solveCurve(curve func(float64) (float64, float64), h0, start 
 			t /= 2
 		}
 	}
-	return m, H, norm <= 1e-8*scale
+	return m, H, norm <= 1e-8*scale*math.Sqrt(float64(K))
 }
+
+// rampRatio is the largest factor by which solveCurveRamp raises the
+// current from one step to the next.
+const rampRatio = 1.2
