@@ -20,7 +20,7 @@ const EnamelPermittivity = 3.5
 // self-capacitance of single-layer solenoids", Wireless Engineer 24 (1947)
 // 35–43 and 80–92, Table of H against ℓ/D for 0.1 ≤ ℓ/D ≤ 50), as given by
 // Knight ("The self-resonance and self-capacitance of solenoid coils",
-// 2016, §1). It does not depend on the number of turns. NaN for D or ℓ ≤ 0.
+// 2016; attribution recalled). It does not depend on the number of turns. NaN for D or ℓ ≤ 0.
 func MedhurstCapacitance(D, l float64) float64 {
 	if !(D > 0) || !(l > 0) {
 		return math.NaN()
@@ -57,7 +57,7 @@ func TurnToTurnCapacitance(r, ro, lt, er float64) float64 {
 // (2/3) C_l V_l², and the winding's p V_l across its terminals stores the
 // sum, so (Dalessandro, Cavalcante & Kolar, "Self-capacitance of
 // high-voltage transformers", IEEE Trans. Power Electron. 22 (2007) 2081,
-// the standard winding)
+// the standard winding; citation recalled)
 //
 //	C = (4/3) C_l (p − 1)/p²
 //

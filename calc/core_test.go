@@ -50,8 +50,10 @@ func TestCoreFarFieldIsDipole(t *testing.T) {
 		}
 	}
 	checkRel(t, "pole strength × separation", r.PoleStrength*r.PoleSeparation, r.CoreMoment, 1e-9)
-	// Poles of a high-permeability rod sit inside its ends (Bozorth 1951
-	// ch. 19: about 0.7 of the half-length from the middle).
+	// Poles of a high-permeability rod sit inside its ends, "about 0.7 of
+	// the distance from the middle to the ends" (Bozorth & Chapin,
+	// "Demagnetizing factors of rods", J. Appl. Phys. 13 (1942) 320,
+	// abstract, measured).
 	if s := r.PoleSeparation / c.Core.Length; !(s > 0.5 && s < 0.95) {
 		t.Errorf("pole separation %.3g of the rod's length", s)
 	}

@@ -107,18 +107,20 @@ func TestCylinderDemagSliceModel(t *testing.T) {
 		checkRel(t, "Nm(χ→0)", nm, nm0, 1e-5)
 		checkRel(t, "Nf(χ→0)", nf, nf0, 5e-3) // the mid-plane from the two central slices
 	}
-	// High permeability: Bozorth, Ferromagnetism (1951), Table 19-? of the
-	// ballistic (fluxmetric) factor of cylinders of infinite permeability
-	// (values recalled from memory, not checked against the printed table):
+	// High permeability: the ballistic (fluxmetric) factor of cylinders of
+	// very high permeability tabulated in Bozorth, Ferromagnetism (1951),
+	// ch. 19, after Bozorth & Chapin, J. Appl. Phys. 13 (1942) 320 (values
+	// recalled from memory, not checked against the printed table):
 	// γ = 10: 0.0172; γ = 50: 0.00129.
 	for _, c := range []struct{ gamma, nf, tol float64 }{{10, 0.0172, 0.01}, {50, 0.00129, 0.03}} {
 		_, nf := CylinderDemag(c.gamma, math.Inf(1))
 		checkRel(t, "Nf(χ = ∞)", nf, c.nf, c.tol)
 	}
-	// A long rod's fluxmetric factor lies below the ellipsoid's of the same
-	// ratio and its magnetometric factor above it (Chen, Brug & Goldfarb
-	// 1991, Fig. 3: cylinders vs ellipsoids at large χ); both rise or fall
-	// monotonically with χ.
+	// A long rod at high χ concentrates its poles inside its ends, so its
+	// mid-plane (fluxmetric) factor lies below the ellipsoid's of the same
+	// ratio and its whole-volume factor above it; and as χ rises from the
+	// uniform magnetisation of χ → 0, Nm falls and Nf rises. Properties the
+	// model must show, not published values.
 	for _, g := range []float64{10, 20, 50} {
 		ell := SpheroidDemagFactor(g)
 		nm, nf := CylinderDemag(g, 1e4)
