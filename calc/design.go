@@ -80,6 +80,36 @@ type Coil struct {
 	OnTime              float64 // s, one energised period of the duty cycle
 	Former              Former  // former lumped with the winding's heat capacity
 	WindingConductivity float64 // W/(m·K), effective across the layers (DefaultWindingConductivity when 0)
+
+	// Core is a soft-magnetic rod in the winding's bore (zero: air core).
+	Core Core
+	// Receiver: the band over which a pick-up coil's noise is stated, Hz
+	// (zero: not given), and the capacitance of the cable and amplifier
+	// across its terminals, F.
+	BandLow, BandHigh float64
+	LoadCapacitance   float64
+}
+
+// Core is a soft-magnetic rod coaxial with a circular winding and centred
+// on it; zero values mean not given.
+type Core struct {
+	Permeability float64   // relative initial permeability μr (0: no core)
+	Saturation   float64   // T, saturation flux density (0: the core stays linear)
+	Curve        []BHPoint // optional B–H curve, H ascending, all H > 0
+	Remanence    float64   // T, Br
+	Coercivity   float64   // A/m, Hc
+	Density      float64   // kg/m³
+	Length       float64   // m
+	Diameter     float64   // m
+}
+
+// BHPoint is one point of a B–H curve: field strength H, A/m, and flux
+// density B, T.
+type BHPoint struct{ H, B float64 }
+
+// Present says whether the core is described well enough to compute with.
+func (k Core) Present() bool {
+	return k.Permeability >= 1 && k.Length > 0 && k.Diameter > 0
 }
 
 // Cooling describes how the winding sheds heat.
