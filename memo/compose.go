@@ -225,7 +225,7 @@ func (c *composer) summaryTable() doc.Table {
 		row("Field at own centre |B|", func(_ int, cr calc.CoilResult) string { return Eng(cr.FieldCentre.Norm(), "T", 3) }),
 		row("Current", func(_ int, cr calc.CoilResult) string { return Eng(cr.Current, "A", 3) }),
 		row("Voltage", func(_ int, cr calc.CoilResult) string { return Eng(cr.Voltage, "V", 3) }),
-		row("Power (duty-averaged)", func(_ int, cr calc.CoilResult) string { return Eng(cr.Power, "W", 3) }),
+		row(powerLabel(r), func(_ int, cr calc.CoilResult) string { return Eng(cr.Power, "W", 3) }),
 		row("Resistance at 20 °C / hot", func(_ int, cr calc.CoilResult) string {
 			return Eng(cr.R20, "Ω", 3) + " / " + Eng(cr.RHot, "Ω", 3)
 		}),
@@ -242,6 +242,19 @@ func (c *composer) summaryTable() doc.Table {
 		row("Wire length / conductor mass", func(_ int, cr calc.CoilResult) string {
 			return Eng(cr.Length, "m", 3) + " / " + Eng(cr.Mass, "kg", 3)
 		}),
+	}
+	for _, co := range d.Coils {
+		if co.Form == calc.Pair && co.Opposing {
+			// A gradient pair's purpose is its gradient: its moment and
+			// centre field are zero by design.
+			rows = append(rows[:1], append([][]doc.Cell{row("Axial gradient at centre ∂Bz/∂z", func(k int, cr calc.CoilResult) string {
+				if c := d.Coils[k]; c.Form != calc.Pair || !c.Opposing {
+					return "—"
+				}
+				return Eng(cr.Pair.Gradient, "T/m", 3)
+			})}, rows[1:]...)...)
+			break
+		}
 	}
 	if len(r.Coils) > 1 {
 		total := func(name, v string) []doc.Cell {
@@ -264,6 +277,17 @@ func (c *composer) summaryTable() doc.Table {
 	}
 	align, widths := perCoilColumns(len(r.Coils), 2.2, 1.5)
 	return doc.Table{Caption: "Headline results at the steady operating point", Header: head, Rows: rows, Align: align, Widths: widths}
+}
+
+// powerLabel names the power row: averaged over the duty cycle only where
+// some coil has one.
+func powerLabel(r calc.Results) string {
+	for _, cr := range r.Coils {
+		if cr.Duty < 1 {
+			return "Power (averaged over the duty cycle)"
+		}
+	}
+	return "Power"
 }
 
 // perCoilColumns lays out a table of a quantity column (relative width

@@ -90,6 +90,12 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 	if !(e.R1 > 0) || math.IsInf(e.R1, 0) {
 		return // nothing to draw
 	}
+	if w.Thin && co.Form != calc.Pair {
+		// At the coil's scale a thin coil's section is a dot: say it.
+		c.para(fmt.Sprintf("The winding of coil %q is thin: all %d turns lie in one round bundle about %s across on the mean diameter of %s, a section too small against the coil to be worth a sketch.",
+			co.Name, co.Turns, mmText(e.R1-e.R0), mmText(co.MeanDiameter)))
+		return
+	}
 	var sd figures.SketchData
 	for _, z := range cs.Placements {
 		sd.Sections = append(sd.Sections, figures.Section{X0: z + e.Z0, X1: z + e.Z1, Y0: e.R0, Y1: e.R1, Round: e.Round})

@@ -426,6 +426,11 @@ func (c *composer) warmUpFigure(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 	for _, v := range hot {
 		top = math.Max(top, v)
 	}
+	if top-tp.Ambient < 1 {
+		// A rise of a fraction of a kelvin is no curve worth a figure.
+		c.para(fmt.Sprintf("Energised continuously from cold, coil %q warms by only %s at its hottest point, so no warm-up curve is drawn.", co.Name, Eng(top-tp.Ambient, "K", 2)))
+		return
+	}
 	farBelow := false
 	if co.InsulationClass > 0 {
 		// The class is drawn unless it lies so far above the curve that the
