@@ -45,7 +45,6 @@ const (
 	HighDensity                         // current density above common practice while running warm
 	HazardousVoltage                    // supply voltage above ELV
 	SwitchOffVoltage                    // unsuppressed switch-off spike above ELV or the driver rating
-	ACDrive                             // the d.c. model does not hold at the drive frequency
 )
 
 // Finding is one hazard of one coil block, with the numbers the memo
@@ -144,8 +143,8 @@ func assessSafety(d calc.Design, r calc.Results, coils []CoilStudy) Safety {
 }
 
 // electricalFindings are the switch-off spike, at the stated switch-off
-// time or AssumedSwitchOff, when it passes ELV or the driver's rating, and
-// at a drive frequency the finding that the d.c. model stops holding.
+// time or AssumedSwitchOff, when it passes ELV or the driver's rating (an
+// a.c. drive beyond the d.c. model is a validity flag, not a hazard).
 func electricalFindings(i int, co calc.Coil, cr calc.CoilResult) []Finding {
 	var out []Finding
 	s := cr.Switch
@@ -160,9 +159,6 @@ func electricalFindings(i int, co calc.Coil, cr calc.CoilResult) []Finding {
 	}
 	if e := s.Energy; !math.IsNaN(e) && e > 0 && spike > bound {
 		out = append(out, Finding{Kind: SwitchOffVoltage, Severity: Caution, Coil: i, Value: spike, SwitchOff: tOff, Assumed: assumed})
-	}
-	if a := cr.AC; a.Frequency > 0 && (a.Reactive || a.SkinLimited) {
-		out = append(out, Finding{Kind: ACDrive, Severity: Caution, Coil: i, Value: a.Frequency})
 	}
 	return out
 }

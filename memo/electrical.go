@@ -383,24 +383,3 @@ func switchOffCaution(f analysis.Finding, cr calc.CoilResult, name string) doc.C
 		Spans: []doc.Span{{Text: templates.Text("caution-inductive", map[string]string{
 			"Energy": Eng(s.Energy, "J", 3), "Spike": spike, "Diode": diode, "Resistor": resistor})}}}
 }
-
-// acCaution words the finding that the d.c. model does not hold at the
-// drive frequency.
-func acCaution(co calc.Coil, cr calc.CoilResult, name string) doc.Callout {
-	a := cr.AC
-	var why []string
-	if a.Reactive {
-		if co.Drive == calc.VoltageDrive {
-			why = append(why, fmt.Sprintf("the reactance (%s) is %s times the resistance, so the current follows the impedance (%s at the stated drive)",
-				Eng(a.Reactance, "Ω", 3), Sig(a.Reactance/cr.RHot, 2), Eng(a.Current, "A", 3)))
-		} else {
-			why = append(why, fmt.Sprintf("the reactance (%s) is %s times the resistance, so the driver must supply |Z|·I = %s to impose the current, not R·I",
-				Eng(a.Reactance, "Ω", 3), Sig(a.Reactance/cr.RHot, 2), Eng(a.Impedance*math.Abs(cr.Current), "V", 3)))
-		}
-	}
-	if a.SkinLimited {
-		why = append(why, fmt.Sprintf("the skin depth (%s) is less than the wire radius (%s), so the a.c. resistance and the losses exceed the d.c. values", Eng(a.SkinDepth, "m", 3), Eng(a.WireRadius, "m", 3)))
-	}
-	return doc.Callout{Severity: doc.Caution, Title: "A.c. drive, " + name,
-		Spans: []doc.Span{{Text: templates.Text("caution-ac", map[string]string{"Frequency": Eng(a.Frequency, "Hz", 3), "Why": strings.Join(why, "; and ")})}}}
-}

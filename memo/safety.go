@@ -43,10 +43,9 @@ func Cautions(j *analysis.Study) []doc.Callout {
 				Spans: []doc.Span{{Text: templates.Text("caution-voltage", map[string]string{"Voltage": Eng(f.Value, "V", 3)})}}})
 		case analysis.SwitchOffVoltage:
 			out = append(out, switchOffCaution(f, cr, name))
-		case analysis.ACDrive:
-			out = append(out, acCaution(co, cr, name))
 		}
 	}
+	out = mergeCautions(out)
 	if ir := j.Safety.Implant; ir.Searched {
 		var where []string
 		if ir.Origin >= analysis.ImplantField {
@@ -85,6 +84,53 @@ func Cautions(j *analysis.Study) []doc.Callout {
 		out = append(out, doc.Callout{Severity: doc.Note, Title: t, Spans: []doc.Span{{Text: p}}})
 	}
 	return out
+}
+
+// mergeCautions gives one caution per hazard: cautions of several coils
+// whose words are the same (titles "…, coil "X"" with equal severity and
+// text) become one whose title lists the coils.
+func mergeCautions(in []doc.Callout) []doc.Callout {
+	type group struct {
+		c     doc.Callout
+		base  string
+		names []string
+	}
+	var groups []*group
+	for _, c := range in {
+		base, name, ok := strings.Cut(c.Title, ", coil ")
+		if !ok {
+			groups = append(groups, &group{c: c})
+			continue
+		}
+		text := spanText(c.Spans)
+		merged := false
+		for _, g := range groups {
+			if g.base == base && g.c.Severity == c.Severity && spanText(g.c.Spans) == text {
+				g.names = append(g.names, name)
+				merged = true
+				break
+			}
+		}
+		if !merged {
+			groups = append(groups, &group{c: c, base: base, names: []string{name}})
+		}
+	}
+	out := make([]doc.Callout, 0, len(groups))
+	for _, g := range groups {
+		if len(g.names) > 1 {
+			g.c.Title = g.base + ", coils " + joinAnd(g.names)
+		}
+		out = append(out, g.c)
+	}
+	return out
+}
+
+func spanText(ss []doc.Span) string {
+	var b strings.Builder
+	for _, s := range ss {
+		b.WriteString(s.Text)
+	}
+	return b.String()
 }
 
 func (c *composer) safety() {
