@@ -186,6 +186,10 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 	}
 	var sections []figures.Section
 	xLabel, yLabel := "Axial position z", "Radial position ρ"
+	if u := co.Axis.Unit(); !(u[2] > 1-1e-12) {
+		// The map is in the coil's own frame: name its axis, not z.
+		xLabel = "Position along the coil's axis"
+	}
 	if co.Form == calc.Rectangle {
 		b := cs.Bundle
 		for _, x := range []float64{-co.Width / 2, co.Width / 2} {
