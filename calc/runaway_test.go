@@ -222,3 +222,33 @@ func TestCyclePeakNotBelowSteady(t *testing.T) {
 		}
 	}
 }
+
+func TestACVoltageDriveHeatsAtImpedance(t *testing.T) {
+	// An a.c. voltage drive: the current is V/|Z(T)|, |Z| = √(R(T)² + ω²L²),
+	// and the heat balance closes at I²R(T) — cooler than at V/R(T).
+	c, cond := valveCoil()
+	c.OnTime, c.Duty, c.Voltage = 0, 1, 24
+	w := LayOut(c)
+	dc := OperatingPoint(c, w, cond)
+	c.Frequency = 200 // X ≈ 2π·200·54 mH ≈ 68 Ω, of the order of R
+	ac := OperatingPoint(c, w, cond)
+	X := 2 * math.Pi * 200 * CoilInductance(c, w)
+	checkRel(t, "reactance", ac.Reactance, X, 1e-12)
+	checkRel(t, "a.c. current V/|Z(T)|", ac.Current, 24/math.Hypot(ac.RHot, X), 1e-12)
+	tp := ac.Thermal
+	st := ac.State
+	checkRel(t, "heat balance at I²R", tp.HeatOut(st.Surface), ac.Current*ac.Current*ac.RHot, 1e-9)
+	if !(ac.Temperature < dc.Temperature) || !(ac.Current < dc.Current) {
+		t.Errorf("a.c. %.1f °C %.4f A, d.c. %.1f °C %.4f A", KelvinToCelsius(ac.Temperature), ac.Current, KelvinToCelsius(dc.Temperature), dc.Current)
+	}
+	b := ACBoundsFor(VoltageDrive, 200, ac.RHot, X)
+	if !b.HeatAtImpedance || b.DCCurrent != BoundUpper || b.DCHeat != BoundUpper {
+		t.Errorf("voltage drive bounds %+v", b)
+	}
+	if b := ACBoundsFor(CurrentDrive, 200, ac.RHot, X); b.DCVoltage != BoundLower || b.DCHeat != BoundLower || b.DCCurrent != BoundEqual {
+		t.Errorf("current drive bounds %+v", b)
+	}
+	if b := ACBoundsFor(VoltageDrive, 0, 1, 0); b.AC {
+		t.Error("d.c.: no a.c. bounds")
+	}
+}
