@@ -119,3 +119,71 @@ func FilamentForce(f1 Filament, I1 float64, f2 Filament, I2 float64) Vec {
 	}
 	return F
 }
+
+// neumannCells bounds the cells per coil of a block in NeumannMutual and
+// LorentzForceBetween.
+const neumannCells = 16
+
+// blockFilaments returns the filaments of coil block c with winding w, each
+// carrying weight turns (negative for a pair's opposing coil): the turns
+// grouped into cells of g × g (cellsOf) with g chosen for at most about
+// neumannCells cells per coil, each cell a filament at its centroid. The
+// error of the grouping is of the order of (cell size / distance)².
+func blockFilaments(c Coil, w Winding) (fs []Filament, weight []float64) {
+	n := w.TurnCount()
+	if n == 0 {
+		return nil, nil
+	}
+	g := max(1, int(math.Ceil(math.Sqrt(float64(n)/neumannCells))))
+	u := CoilFrame(c.Axis).U
+	for _, sc := range subCoils(c) {
+		for _, cl := range cellsOf(w, outerOf(c), g) {
+			fs = append(fs, Filament{Centre: sc.centre.Add(u.Scale(cl.z)), Axis: u, Radius: cl.r})
+			weight = append(weight, sc.sign*cl.n)
+		}
+	}
+	return fs, weight
+}
+
+// NeumannMutual returns the mutual inductance, H, of circular coil blocks a
+// and b in any position: Σ nᵢ nⱼ FilamentMutual over their filaments
+// (blockFilaments). NaN for a rectangle, or when turns touch.
+func NeumannMutual(a Coil, wa Winding, b Coil, wb Winding) float64 {
+	if a.Form == Rectangle || b.Form == Rectangle {
+		return math.NaN()
+	}
+	fa, na := blockFilaments(a, wa)
+	fb, nb := blockFilaments(b, wb)
+	if len(fa) == 0 || len(fb) == 0 {
+		return math.NaN()
+	}
+	M := 0.0
+	for i, f := range fa {
+		for j, g := range fb {
+			M += na[i] * nb[j] * FilamentMutual(f, g)
+		}
+	}
+	return M
+}
+
+// LorentzForceBetween returns the force, N, on circular block b (current
+// Ib) from circular block a (current Ia): Σ nᵢ nⱼ FilamentForce over their
+// filaments, the exact Lorentz integral F = I_b ∮ dl × B_a per filament.
+// NaN vector for a rectangle or touching turns.
+func LorentzForceBetween(a Coil, wa Winding, Ia float64, b Coil, wb Winding, Ib float64) Vec {
+	if a.Form == Rectangle || b.Form == Rectangle {
+		return nanVec()
+	}
+	fa, na := blockFilaments(a, wa)
+	fb, nb := blockFilaments(b, wb)
+	if len(fa) == 0 || len(fb) == 0 {
+		return nanVec()
+	}
+	var F Vec
+	for i, f := range fa {
+		for j, g := range fb {
+			F = F.Add(FilamentForce(f, Ia*na[i], g, Ib*nb[j]))
+		}
+	}
+	return F
+}
