@@ -22,13 +22,16 @@ type Coupling struct {
 	A, B     int     // indexes of the coil blocks
 	Coaxial  bool    // circular, axes parallel or opposite, centres on a common axis
 	Distance float64 // m, between the centres
-	Mutual   float64 // H, NaN when not coaxial or the windings overlap
+	Mutual   float64 // H, NaN when a rectangle is involved or the windings overlap
 	K        float64 // coupling coefficient M/√(L_A L_B), NaN when M is
 	Force    Vec     // N, on B from A
-	// Exact is set when Force is the exact coaxial sum; otherwise it is the
-	// dipole approximation (and NaN when that has no meaning, e.g. zero
-	// distance).
+	// Exact is set when Force is the exact coaxial sum or the Lorentz
+	// integral over filaments; otherwise it is the dipole approximation
+	// (and NaN when that has no meaning, e.g. zero distance).
 	Exact bool
+	// Dipole is the point-dipole force on B, N, the cross-check of an exact
+	// non-coaxial force (NaN vector for coaxial blocks).
+	Dipole Vec
 	// Overlap is set when turns of the two blocks coincide, which has no
 	// finite mutual inductance.
 	Overlap bool
@@ -157,7 +160,7 @@ func Couplings(coils []Coil, ws []Winding, currents, selfL []float64) []Coupling
 	for i := range coils {
 		for j := i + 1; j < len(coils); j++ {
 			a, b := coils[i], coils[j]
-			cp := Coupling{A: i, B: j, Distance: b.Centre.Sub(a.Centre).Norm(), Mutual: math.NaN(), K: math.NaN()}
+			cp := Coupling{A: i, B: j, Distance: b.Centre.Sub(a.Centre).Norm(), Mutual: math.NaN(), K: math.NaN(), Dipole: nanVec()}
 			if ok, _ := coaxial(a, b); ok {
 				cp.Coaxial = true
 				cp.Mutual, cp.Overlap = CoaxialMutual(a, ws[i], b, ws[j])
@@ -171,7 +174,19 @@ func Couplings(coils []Coil, ws []Winding, currents, selfL []float64) []Coupling
 					cp.Force = nanVec()
 				}
 			} else {
-				cp.Force = DipoleForceBetween(a, ws[i], currents[i], b, ws[j], currents[j])
+				cp.Dipole = DipoleForceBetween(a, ws[i], currents[i], b, ws[j], currents[j])
+				cp.Force = cp.Dipole
+				if M := NeumannMutual(a, ws[i], b, ws[j]); !math.IsNaN(M) {
+					cp.Mutual = M
+					cp.Force = LorentzForceBetween(a, ws[i], currents[i], b, ws[j], currents[j])
+					cp.Exact = true
+					if selfL[i] > 0 && selfL[j] > 0 {
+						cp.K = cp.Mutual / math.Sqrt(selfL[i]*selfL[j])
+					}
+				} else if a.Form != Rectangle && b.Form != Rectangle {
+					cp.Overlap = true
+					cp.Force = nanVec()
+				}
 			}
 			out = append(out, cp)
 		}

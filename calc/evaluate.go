@@ -85,19 +85,30 @@ func evaluateCoil(c Coil, cond Conditions) CoilResult {
 	cr.Energy = cr.Inductance * op.Current * op.Current / 2
 	cr.Heat = Heating(c, w, op)
 	cr.ThermalTau = op.Thermal.ThermalTimeConstant(cr.Heat.HeatCapacity, op.State.Mean)
-	if c.OnTime > 0 && cr.Heat.Cycle.On > 0 && op.State.Settled {
-		// An on/off cycle of stated on-time: its peak is the hottest state
-		// (at least the duty-averaged steady state's hot spot).
-		cy := cr.Heat.Cycle
-		// Both are approximations of the same state; the hotter is kept.
-		cr.Temperature = math.Max(cy.PeakHot, op.Temperature)
-		if !cy.Settled {
-			cr.Temperature, cr.Runaway = math.NaN(), true
-		} else if c.Drive == CurrentDrive && c.InsulationClass > 0 && cy.PeakHot > c.InsulationClass {
-			cr.Runaway = true
+	cr.Verdict = op.Verdict
+	cr.SteadyHotSpot = op.State.HotSpot
+	if cy := cr.Heat.Cycle; c.OnTime > 0 && cy.On > 0 && (cy.Settled || cy.NoSolution) {
+		// An on/off cycle of stated on-time: its peak is the hottest state.
+		// The cycle swings about the duty-averaged steady state, which it
+		// approaches for periods short against every time constant, so its
+		// peak lies at or above that state's hot spot; where the lumped
+		// model puts it a little below (the convexity of the losses), the
+		// steady hot spot is kept.
+		cr.Temperature = cy.PeakHot
+		if cy.Settled && op.State.Settled {
+			cr.Temperature = math.Max(cy.PeakHot, op.State.HotSpot)
 		}
+		cr.Verdict = Judge(ThermalLimit(c), cr.Temperature, cy.Settled, cy.NoSolution)
+		cr.Runaway = cr.Verdict.Runaway
 	}
-	cr.Switch = Switching(cr.Inductance, op.RHot, op.Current, op.Voltage, c.SwitchOff, c.DriverRating, c.Drive == VoltageDrive)
+	cr.SwitchOnCurrent = op.SwitchOnCurrent
+	Rcold := ResistanceAt(op.R20, op.Thermal.Alpha20, ColdTemperature(cond))
+	if c.Drive == CurrentDrive {
+		Rcold = op.RHot
+	}
+	cr.Switch = SwitchingWorst(cr.Inductance, op.RHot, Rcold, op.Current, op.SwitchOnCurrent, op.Voltage, c.SwitchOff, c.DriverRating, c.Drive == VoltageDrive)
+	cr.Reactance = op.Reactance
+	cr.ACBounds = ACBoundsFor(c.Drive, c.Frequency, op.RHot, 2*math.Pi*c.Frequency*cr.Inductance)
 	cr.AC = AC(c, cr.Inductance, op.RHot, op.State.Mean, c.Frequency)
 	cr.GradientForce = GradientForce(cr.Moment.Norm(), cond.FieldGradient)
 	cr.InsulationMargin = math.NaN()

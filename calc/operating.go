@@ -12,13 +12,21 @@ type Operating struct {
 	PowerOn     float64 // W while energised, I² R(T)
 	Power       float64 // W averaged over the duty cycle
 	Temperature float64 // K, steady hot-spot winding temperature (State.HotSpot)
-	// Runaway is set when no steady state exists below TempSearchMax, and
-	// under current drive also when the steady hot spot lies above the
-	// insulation class: no steady temperature exists that the insulation
-	// survives, the winding heats past its class.
+	// Runaway is set when no steady state exists at or below the block's
+	// thermal limit (the insulation class, else the conductor's limit), or
+	// the heat balance has no solution — under either drive (see
+	// runaway.go). Verdict tells the two apart.
 	Runaway bool
-	Thermal ThermalProblem
-	State   ThermalState
+	Verdict ThermalVerdict
+	// SwitchOnCurrent is the largest current, A, the block carries: the
+	// imposed one under current drive, V/|Z| of the winding at its coldest
+	// (ColdTemperature) under voltage drive, just after switch-on.
+	SwitchOnCurrent float64
+	// Reactance is ωL, Ω, of an a.c. voltage drive (0 otherwise); the
+	// current is then V/|Z(T)|.
+	Reactance float64
+	Thermal   ThermalProblem
+	State     ThermalState
 }
 
 // SeriesCoils returns the number of coils in series in a block: 2 for a
@@ -139,31 +147,49 @@ func ConvectionFor(c Coil, w Winding, cond Conditions) *NaturalConvection {
 	return &NaturalConvection{Shape: HorizontalCylinder, Length: 2 * ro}
 }
 
+// ColdTemperature returns the winding temperature, K, at switch-on: the
+// ambient, but not above 20 °C — the resistance is taken at no more than
+// its reference temperature, so that the switch-on current is not
+// understated by a warm enclosure the coil may not have reached yet.
+func ColdTemperature(cond Conditions) float64 { return math.Min(T20, Ambient(cond)) }
+
 // OperatingPoint returns the steady state of coil block c: the thermal
 // state from ThermalProblem.Steady (mean, surface and hot-spot
 // temperatures), then R at the mean temperature, the current (imposed, or
-// V/R(T) under voltage drive — the Voltage is across the whole block), the
-// voltage I·R(T) and the power I² R(T), on and averaged. Unknown values are
-// NaN: all the temperature-dependent ones when there is no steady state,
-// except an imposed current.
+// V/|Z(T)| under voltage drive, |Z| = R(T) for d.c. and √(R(T)² + (ωL)²)
+// for an a.c. drive of frequency f = ω/2π, L = CoilInductance; the Voltage
+// is across the whole block), the voltage I·R(T) (d.c.) and the power
+// I² R(T), on and averaged, and the runaway verdict (Judge). Unknown values
+// are NaN: all the temperature-dependent ones when there is no steady
+// state, except an imposed current.
 func OperatingPoint(c Coil, w Winding, cond Conditions) Operating {
 	tp := ThermalFor(c, w, cond)
-	op := Operating{R20: tp.R20, Thermal: tp}
+	if c.Drive == VoltageDrive && c.Frequency > 0 && !math.IsInf(c.Frequency, 0) {
+		if L := CoilInductance(c, w); L > 0 && !math.IsInf(L, 0) {
+			tp.Reactance = 2 * math.Pi * c.Frequency * L
+		}
+	}
+	op := Operating{R20: tp.R20, Thermal: tp, Reactance: tp.Reactance}
+	impedance := func(R float64) float64 { return math.Hypot(R, tp.Reactance) }
 	if c.Drive == VoltageDrive {
-		op.ColdCurrent = c.Voltage / tp.R20
+		op.ColdCurrent = c.Voltage / impedance(tp.R20)
+		op.SwitchOnCurrent = c.Voltage / impedance(ResistanceAt(tp.R20, tp.Alpha20, ColdTemperature(cond)))
 	} else {
 		op.ColdCurrent = c.Current
+		op.SwitchOnCurrent = c.Current
 	}
+	op.Verdict = ThermalVerdict{Limit: ThermalLimit(c)}
 	if !(tp.R20 > 0) || math.IsInf(tp.R20, 0) {
 		// No wire, or no conductor: nothing can be said beyond an imposed current.
 		op.RHot, op.Voltage, op.PowerOn, op.Power, op.Temperature = math.NaN(), math.NaN(), math.NaN(), math.NaN(), math.NaN()
 		op.ColdCurrent = math.NaN()
 		op.Current = math.NaN()
+		op.SwitchOnCurrent = math.NaN()
 		n := math.NaN()
 		op.State = ThermalState{Mean: n, Surface: n, HotSpot: n, PowerOn: n, Power: n, Convected: n, Radiated: n, Mounted: n,
 			Convection: ConvectionState{H: n, Ra: n, Nu: n, Film: n}}
 		if c.Drive == CurrentDrive {
-			op.Current, op.ColdCurrent = c.Current, c.Current
+			op.Current, op.ColdCurrent, op.SwitchOnCurrent = c.Current, c.Current, c.Current
 		}
 		if w.WireLength == 0 && c.Drive == CurrentDrive {
 			op.R20, op.RHot, op.Voltage, op.PowerOn, op.Power = 0, 0, 0, 0, 0
@@ -176,13 +202,11 @@ func OperatingPoint(c Coil, w Winding, cond Conditions) Operating {
 	st := tp.Steady()
 	op.State = st
 	op.Temperature = st.HotSpot
-	op.Runaway = !st.Settled && !math.IsNaN(tp.residual(tp.Ambient))
-	if c.Drive == CurrentDrive && c.InsulationClass > 0 && st.HotSpot > c.InsulationClass {
-		op.Runaway = true
-	}
+	op.Verdict = Judge(ThermalLimit(c), st.HotSpot, st.Settled, st.NoSolution)
+	op.Runaway = op.Verdict.Runaway
 	op.RHot = ResistanceAt(tp.R20, tp.Alpha20, st.Mean)
 	if c.Drive == VoltageDrive {
-		op.Current = c.Voltage / op.RHot
+		op.Current = c.Voltage / impedance(op.RHot)
 		op.Voltage = c.Voltage
 	} else {
 		op.Current = c.Current

@@ -78,6 +78,25 @@ type CoilResult struct {
 	// Pair is a pair's homogeneous region (aiding) or centre gradient and
 	// its linear region (opposing); NaN for other forms (AnalysePair).
 	Pair PairRegion
+
+	// Thermal verdict, switching at the worst current and a.c. bounds.
+	//
+	// Verdict is the runaway judgement for either drive (runaway.go):
+	// Runaway above equals Verdict.Runaway; Verdict.NoSolution and
+	// Verdict.SettledAboveLimit tell "no steady state" from "settled above
+	// the class". It judges the on/off cycle's peak when one is computed.
+	Verdict ThermalVerdict
+	// SteadyHotSpot is the hot spot of the duty-averaged steady state, K
+	// (NaN when it has none); a cycle's peak is never reported below it.
+	SteadyHotSpot float64
+	// SwitchOnCurrent is the largest current the block carries, A: the
+	// cold switch-on current under voltage drive (Operating).
+	SwitchOnCurrent float64
+	// Reactance is ωL, Ω, at which an a.c. voltage drive's heat balance was
+	// solved (0: d.c., or current drive); ACBounds says how d.c. and
+	// computed a.c. figures bound the true ones.
+	Reactance float64
+	ACBounds  ACBounds
 }
 
 // ProbeResult is the field at one probe, all coils summed.

@@ -21,6 +21,14 @@ import "math"
 //
 // Diode forward drops (about 0.7 V) are neglected: they shorten the decay
 // slightly and add to the switch voltage of the resistor–diode path.
+//
+// The suppression is sized at the largest current the switch can have to
+// open: the switch-on current of the cold winding (V/R at the coldest
+// winding temperature, OperatingPoint's SwitchOnCurrent) under voltage
+// drive — a coil switched off before it has warmed carries more than its
+// hot current —, the imposed current under current drive. The switch
+// voltage with the suggested suppression at that current is given as a
+// number, SwitchVoltage, and compared with the driver rating.
 
 // SwitchResult is the switching behaviour of one coil block.
 type SwitchResult struct {
@@ -44,9 +52,28 @@ type SwitchResult struct {
 	// Freewheel diode: decay time constant L/R and time to 10 %.
 	DiodeDecay, DiodeTime10 float64
 	// Resistor–diode: series resistor R_s (NaN when the clamp is not above
-	// the supply), its decay time constant and time to 10 %, the energy it
-	// absorbs.
+	// the supply), sized at WorstCurrent; its decay time constant and time
+	// to 10 % and the energy it absorbs when opened at the operating point
+	// (R, I); and, opened cold at the worst current, the (slower) decay
+	// L/(R_w + R_s) and the energy ½ L I_w² R_s/(R_w + R_s).
 	Resistor, ResistorDecay, ResistorTime10, ResistorEnergy float64
+	ResistorDecayCold, ResistorEnergyWorst                  float64
+
+	// WorstCurrent is the largest current the switch opens, A (see the file
+	// comment), and SpikeWorst the unsuppressed switch voltage at it,
+	// L·I_w/t_off + Supply (NaN without a switch-off time).
+	WorstCurrent, SpikeWorst float64
+	// SwitchVoltage is the voltage, V, across the opening switch at
+	// WorstCurrent with the suggested suppression: Supply + I·R_s with the
+	// resistor–diode path (the clamp, by construction), the supply alone
+	// with a bare freewheeling diode when no clamp above the supply is
+	// known; NaN when nothing is known.
+	SwitchVoltage float64
+	// WithinRating says SwitchVoltage ≤ the driver rating (false when no
+	// rating is given or SwitchVoltage is unknown); RatingMargin is
+	// rating − SwitchVoltage, V (NaN without a rating).
+	WithinRating bool
+	RatingMargin float64
 }
 
 // Switching returns the switching figures of a coil block of inductance L
@@ -54,12 +81,36 @@ type SwitchResult struct {
 // switch-off time tOff (s, 0: not given) and driver rating rating (V, 0:
 // not given); stated says the supply voltage is a stated one (voltage
 // drive) rather than I·R (current drive), and only a stated one sets the
-// default clamp of twice the supply. Unknown values are NaN.
+// default clamp of twice the supply. The switch is taken to open the
+// current I itself; SwitchingWorst sizes the suppression at a larger one.
+// Unknown values are NaN.
 func Switching(L, R, I, V, tOff, rating float64, stated bool) SwitchResult {
+	return SwitchingWorst(L, R, R, I, I, V, tOff, rating, stated)
+}
+
+// SwitchingWorst is Switching with the suppression sized at the worst
+// current Iw (A) the switch may open, the winding then at resistance Rw
+// (Ω, the cold one): the unsuppressed spike L·Iw/t_off + V (SpikeWorst;
+// Spike stays at the operating current I), the resistor
+// R_s = (V_max − V)/Iw, its cold decay L/(Rw + R_s) and energy ½ L Iw² ·
+// R_s/(Rw + R_s), and the switch voltage V + Iw·R_s compared with the
+// rating. The time constant, rise time, freewheeling decay and the
+// resistor's decay and energy at the operating point are those of (R, I). A worst current below I, or not a number, is
+// replaced by I.
+func SwitchingWorst(L, R, Rw, I, Iw, V, tOff, rating float64, stated bool) SwitchResult {
 	n := math.NaN()
 	s := SwitchResult{TimeConstant: n, RiseTime: n, Energy: n, Supply: math.Abs(V), Spike: n, Clamp: n,
-		DiodeDecay: n, DiodeTime10: n, Resistor: n, ResistorDecay: n, ResistorTime10: n, ResistorEnergy: n}
+		DiodeDecay: n, DiodeTime10: n, Resistor: n, ResistorDecay: n, ResistorTime10: n, ResistorEnergy: n,
+		SwitchVoltage: n, RatingMargin: n, SpikeWorst: n, ResistorDecayCold: n, ResistorEnergyWorst: n}
 	I = math.Abs(I)
+	Iw = math.Abs(Iw)
+	if !(Iw >= I) {
+		Iw, Rw = I, R
+	}
+	if !(Rw >= 0) || math.IsInf(Rw, 0) {
+		Rw = R
+	}
+	s.WorstCurrent = Iw
 	s.Energy = L * I * I / 2
 	if R > 0 && !math.IsInf(R, 0) {
 		s.TimeConstant = L / R
@@ -69,6 +120,7 @@ func Switching(L, R, I, V, tOff, rating float64, stated bool) SwitchResult {
 	if tOff > 0 {
 		s.SwitchOff = tOff
 		s.Spike = L*I/tOff + s.Supply
+		s.SpikeWorst = L*Iw/tOff + s.Supply
 	}
 	switch {
 	case rating > 0:
@@ -76,11 +128,23 @@ func Switching(L, R, I, V, tOff, rating float64, stated bool) SwitchResult {
 	case stated:
 		s.Clamp = 2 * s.Supply
 	}
-	if s.Clamp > s.Supply && I > 0 && R >= 0 {
-		s.Resistor = (s.Clamp - s.Supply) / I
+	if s.Clamp > s.Supply && Iw > 0 && Rw >= 0 {
+		s.Resistor = (s.Clamp - s.Supply) / Iw
 		s.ResistorDecay = L / (R + s.Resistor)
 		s.ResistorTime10 = math.Ln10 * s.ResistorDecay
 		s.ResistorEnergy = s.Energy * s.Resistor / (R + s.Resistor)
+		s.ResistorEnergyWorst = L * Iw * Iw / 2 * s.Resistor / (Rw + s.Resistor)
+		s.ResistorDecayCold = L / (Rw + s.Resistor)
+		// Supply + Iw·(Clamp − Supply)/Iw is the clamp; kept so against the
+		// last bit of rounding.
+		s.SwitchVoltage = math.Min(s.Supply+Iw*s.Resistor, s.Clamp)
+	} else if !math.IsNaN(s.Supply) && !math.IsInf(s.Supply, 0) && (Iw > 0 || I == 0) {
+		// A freewheeling diode alone: the switch sees the supply.
+		s.SwitchVoltage = s.Supply
+	}
+	if rating > 0 {
+		s.RatingMargin = rating - s.SwitchVoltage
+		s.WithinRating = s.SwitchVoltage <= rating
 	}
 	return s
 }

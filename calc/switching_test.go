@@ -65,3 +65,39 @@ func TestSkinDepth(t *testing.T) {
 		t.Errorf("100 kHz on AWG 20: δ = %g m, r = %g m", a.SkinDepth, a.WireRadius)
 	}
 }
+
+func TestValveSwitchingAtColdCurrent(t *testing.T) {
+	// Issue regression (examples/valve-actuator.md): the suppression
+	// resistor was sized at the hot current (348 mA), so switching off the
+	// cold switch-on current, 24 V / R20 = 446 mA, put 24 V + 0.446 A ×
+	// 103 Ω = 70.1 V on the 60 V MOSFET. Sized at the cold current, the
+	// switch sees its rating and no more.
+	c, cond := valveCoil()
+	cr := Evaluate(Design{Coils: []Coil{c}, Conditions: cond}).Coils[0]
+	s := cr.Switch
+	// R20 = ρ20 ℓ / A with IEC 60028's ρ20 = 1/58 Ω·mm²/m.
+	r20 := (1.0 / 58 * 1e-6) * cr.Length / (math.Pi * c.Wire.Bare * c.Wire.Bare / 4)
+	checkRel(t, "switch-on current = V/R20 (ambient 40 °C above 20 °C)", s.WorstCurrent, 24/r20, 1e-12)
+	checkRel(t, "switch-on current, issue figure 446 mA", s.WorstCurrent, 0.446, 2e-3)
+	if !(s.SwitchVoltage <= 60) || !s.WithinRating || !(s.RatingMargin >= 0) {
+		t.Errorf("switch voltage %g V at %g A, rating 60 V (within %v)", s.SwitchVoltage, s.WorstCurrent, s.WithinRating)
+	}
+	checkRel(t, "R_s = (60 − 24) V / I_cold", s.Resistor, 36/s.WorstCurrent, 1e-12)
+	// The old sizing, at the hot current, would have exceeded the rating.
+	hotSized := 24 + s.WorstCurrent*36/cr.Current
+	if !(hotSized > 60) {
+		t.Errorf("hot-sized resistor at cold current: %g V, want above 60 V", hotSized)
+	}
+	checkRel(t, "old sizing's switch voltage, issue figure 70.1 V", hotSized, 70.1, 2e-3)
+	// Unsuppressed at the cold current: L I_cold / t_off + V.
+	checkRel(t, "spike at the worst current", s.SpikeWorst, cr.Inductance*s.WorstCurrent/10e-6+24, 1e-12)
+	// A lower rating than the clamp can give: the rating is reported broken.
+	w := SwitchingWorst(0.05, 69, 53.8, 0.348, 0.446, 24, 10e-6, 20, true)
+	if w.WithinRating || !math.IsNaN(w.Resistor) || w.SwitchVoltage != 24 || w.RatingMargin != -4 {
+		t.Errorf("rating below the supply: %+v", w)
+	}
+	// Current drive: the imposed current is the worst.
+	i := SwitchingWorst(0.01, 10, 10, 0.5, 0.5, 5, 1e-5, 30, false)
+	checkRel(t, "current drive R_s", i.Resistor, 25/0.5, 1e-15)
+	checkRel(t, "current drive switch voltage", i.SwitchVoltage, 30, 1e-15)
+}

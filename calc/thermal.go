@@ -50,10 +50,13 @@ type ThermalProblem struct {
 	// RiseMean and RiseMax are the rises, K/W, of the winding's mean and
 	// hottest temperature above its surface per watt generated in it.
 	RiseMean, RiseMax float64
-	// InternalTau is the time constant, s, with which the hottest point's
-	// rise above the mean follows the power in the warm-up and the duty
-	// cycle (0: at once).
+	// InternalTau is the time constant, s, with which the internal rises
+	// (mean above surface, hottest point above mean) follow the power in
+	// the warm-up and the duty cycle (0: at once).
 	InternalTau float64
+	// Reactance is ωL, Ω, of an a.c. voltage drive (0: d.c.): the current is
+	// then V/|Z(T)|, |Z| = √(R(T)² + X²), and the heat I² R(T).
+	Reactance float64
 }
 
 // StillAir returns the cooling assumed for a coil in still room air: a
@@ -85,10 +88,20 @@ func EffectiveCooling(c Cooling) Cooling {
 func ResistanceAt(r20, alpha20, T float64) float64 { return r20 * ResistanceFactor(alpha20, T) }
 
 // PowerOn returns the power while energised, W, at mean winding
-// temperature T: I² R(T) or V²/R(T).
+// temperature T: I² R(T) under current drive (d.c., or the rms current of
+// an a.c. drive), V²/R(T) under d.c. voltage drive, and
+//
+//	P = V² R(T) / (R(T)² + X²)
+//
+// under an a.c. voltage drive of rms V with reactance X = ωL: the current
+// V/|Z| of the series R–L circuit heats only the resistance (any circuit
+// text on a.c. power, P = I_rms² R).
 func (tp ThermalProblem) PowerOn(T float64) float64 {
 	R := ResistanceAt(tp.R20, tp.Alpha20, T)
 	if tp.Drive == VoltageDrive {
+		if X := tp.Reactance; X != 0 {
+			return tp.Voltage * tp.Voltage * R / (R*R + X*X)
+		}
 		return tp.Voltage * tp.Voltage / R
 	}
 	return tp.Current * tp.Current * R
@@ -135,17 +148,53 @@ func (tp ThermalProblem) residual(T float64) float64 {
 }
 
 // SteadyTemperature solves the heat balance HeatIn(T) = HeatOut(T_s) for
-// the winding's mean temperature T, K: it steps up from Ta in steps of 1 K
-// (then 2 %) to the first sign change of HeatOut − HeatIn — the stable
-// steady state, where losses overtake the input — and bisects that step to
-// 10⁻¹³ of the rise above ambient. It returns Ta when no heat is input, and runaway = true
-// with T = NaN when the losses are still below the input at
-// max(TempSearchMax, Ta + 1) (or the data are not numbers).
+// the winding's mean temperature T, K. It is solved for the surface
+// temperature T_s, which cannot lie below the ambient while heat is
+// generated inside (maximum principle of the conduction equation): for each
+// T_s the mean temperature is the smallest T ≥ T_s with
+// T − T_s = RiseMean · duty · P(T) (MeanAtSurface); the search steps T_s up
+// from Ta in steps of 1 K (then 2 % of the rise) to the first sign change of
+// HeatOut(T_s) − HeatIn(T) — the stable steady state, where the losses
+// overtake the input — and bisects that step to 10⁻¹³ of the rise above
+// ambient. It returns Ta when no heat is input, and runaway = true with
+// T = NaN when the heat balance has no solution: the losses are still below
+// the input at max(TempSearchMax, Ta + 1), or the winding's interior has no
+// steady state at any surface temperature (its internal conduction cannot
+// carry the heat, which rises faster with T than the interior's gradient;
+// current drive with RiseMean·duty·I²·R20·α20 ≥ 1). NaN without runaway when
+// the data are not numbers.
 func SteadyTemperature(tp ThermalProblem) (T float64, runaway bool) {
+	Ts, runaway := tp.steadySurface()
+	if runaway || math.IsNaN(Ts) {
+		return math.NaN(), runaway
+	}
+	T, ok := tp.MeanAtSurface(Ts)
+	if !ok {
+		return math.NaN(), true
+	}
+	return T, false
+}
+
+// balance returns HeatOut(Ts) − HeatIn(T) with T = MeanAtSurface(Ts), and
+// false when the interior has no steady state at that surface temperature.
+func (tp ThermalProblem) balance(Ts float64) (float64, bool) {
+	T, ok := tp.MeanAtSurface(Ts)
+	if !ok {
+		return math.Inf(-1), false
+	}
+	return tp.HeatOut(Ts) - tp.HeatIn(T), true
+}
+
+// steadySurface returns the steady surface temperature, K (see
+// SteadyTemperature).
+func (tp ThermalProblem) steadySurface() (Ts float64, runaway bool) {
 	lo := tp.Ambient
-	g0 := tp.residual(lo)
-	if math.IsNaN(g0) {
+	g0, ok := tp.balance(lo)
+	if math.IsNaN(g0) || !(lo > 0) || math.IsInf(lo, 0) {
 		return math.NaN(), false
+	}
+	if !ok && tp.internalRunaway() {
+		return math.NaN(), true
 	}
 	if g0 >= 0 {
 		return lo, false
@@ -155,7 +204,7 @@ func SteadyTemperature(tp ThermalProblem) (T float64, runaway bool) {
 	for {
 		step := math.Max(1, 0.02*(hi-tp.Ambient))
 		hi = math.Min(lo+step, top)
-		g := tp.residual(hi)
+		g, _ := tp.balance(hi)
 		if math.IsNaN(g) {
 			return math.NaN(), false
 		}
@@ -176,7 +225,7 @@ func SteadyTemperature(tp ThermalProblem) (T float64, runaway bool) {
 		if mid <= lo || mid >= hi {
 			break
 		}
-		if tp.residual(mid) > 0 {
+		if g, _ := tp.balance(mid); g > 0 {
 			hi = mid
 		} else {
 			lo = mid
@@ -188,6 +237,80 @@ func SteadyTemperature(tp ThermalProblem) (T float64, runaway bool) {
 	return lo + (hi-lo)/2, false
 }
 
+// internalRunaway reports the current-drive case in which the winding's
+// interior has no steady state at any surface temperature:
+// RiseMean · duty · I² R20 α20 ≥ 1 (the generation's rise with the mean
+// temperature outruns the conduction that carries it to the surface).
+func (tp ThermalProblem) internalRunaway() bool {
+	return tp.Drive == CurrentDrive && tp.RiseMean*tp.Duty*tp.Current*tp.Current*tp.R20*tp.Alpha20 >= 1
+}
+
+// MeanAtSurface returns the winding's mean temperature, K, at surface
+// temperature Ts: the smallest T ≥ Ts with T − Ts = RiseMean · duty · P(T),
+// the internal rise of WindingRise at the duty-averaged power of mean
+// temperature T. With u = T − Ts and f_s = 1 + α20 (Ts − 20 °C), in closed
+// form:
+//
+//	current drive: u = c f_s / (1 − c α20),            c = RiseMean·duty·I²R20
+//	d.c. voltage:  u = 2c / (f_s + √(f_s² + 4 α20 c)),  c = RiseMean·duty·V²/R20
+//
+// (the first from u = c (f_s + α20 u); the second the positive root of
+// α20 u² + f_s u − c = 0, written so that it does not cancel),
+// and by bracketing and bisection otherwise (a.c. voltage drive, or where
+// the resistance factor reaches its floor). ok is false when no such T
+// exists below max(TempSearchMax, Ts + 1) — current drive with
+// c α20 ≥ 1.
+func (tp ThermalProblem) MeanAtSurface(Ts float64) (T float64, ok bool) {
+	r := tp.RiseMean * tp.Duty
+	if !(r > 0) || math.IsInf(r, 0) {
+		return Ts, !math.IsNaN(Ts)
+	}
+	a := tp.Alpha20
+	fs := 1 + a*(Ts-T20)
+	switch {
+	case tp.Drive == CurrentDrive && fs >= 0.01:
+		c := r * tp.Current * tp.Current * tp.R20
+		d := 1 - c*a
+		if !(d > 0) {
+			return math.NaN(), false
+		}
+		return Ts + c*fs/d, true
+	case tp.Drive == VoltageDrive && tp.Reactance == 0 && fs >= 0.01 && a >= 0:
+		c := r * tp.Voltage * tp.Voltage / tp.R20
+		return Ts + 2*c/(fs+math.Sqrt(fs*fs+4*a*c)), true
+	}
+	g := func(T float64) float64 { return T - Ts - r*tp.PowerOn(T) }
+	u0 := r * tp.PowerOn(Ts)
+	if math.IsNaN(u0) {
+		return math.NaN(), false
+	}
+	if !(u0 > 0) {
+		return Ts, true
+	}
+	top := math.Max(TempSearchMax, Ts+1)
+	lo, d := Ts, u0
+	hi := math.Min(Ts+d, top)
+	for n := 0; g(hi) < 0; n++ {
+		if hi >= top || n > 2200 {
+			return math.NaN(), false
+		}
+		lo, d = hi, 2*d
+		hi = math.Min(Ts+d, top)
+	}
+	for range 200 {
+		mid := lo + (hi-lo)/2
+		if mid <= lo || mid >= hi {
+			break
+		}
+		if g(mid) >= 0 {
+			hi = mid
+		} else {
+			lo = mid
+		}
+	}
+	return lo + (hi-lo)/2, true
+}
+
 // ThermalState is the steady thermal state of a coil block.
 type ThermalState struct {
 	Mean, Surface, HotSpot float64 // K
@@ -196,22 +319,33 @@ type ThermalState struct {
 	Convected, Radiated, Mounted float64
 	Convection                   ConvectionState // at the surface (H: the constant h when given)
 	Settled                      bool            // a steady state exists below TempSearchMax
+	// NoSolution is set when the heat balance has no solution (thermal
+	// runaway), as against data that do not allow one to be sought.
+	NoSolution bool
 }
 
 // Steady returns the steady state of the heat balance (SteadyTemperature)
 // with the surface and hot-spot temperatures and the heat flows. When
 // there is no steady state every temperature and power is NaN and Settled
-// is false.
+// is false; NoSolution then says the balance has none (runaway) rather
+// than the data being unusable.
 func (tp ThermalProblem) Steady() ThermalState {
-	T, runaway := SteadyTemperature(tp)
+	Ts, runaway := tp.steadySurface()
+	T := math.NaN()
+	if !runaway && !math.IsNaN(Ts) {
+		var ok bool
+		if T, ok = tp.MeanAtSurface(Ts); !ok {
+			runaway, T = true, math.NaN()
+		}
+	}
 	if runaway || math.IsNaN(T) {
 		n := math.NaN()
 		return ThermalState{Mean: n, Surface: n, HotSpot: n, PowerOn: n, Power: n, Convected: n, Radiated: n, Mounted: n,
-			Convection: ConvectionState{H: n, Ra: n, Nu: n, Film: n}}
+			Convection: ConvectionState{H: n, Ra: n, Nu: n, Film: n}, NoSolution: runaway}
 	}
 	s := ThermalState{Mean: T, PowerOn: tp.PowerOn(T), Settled: true}
 	s.Power = tp.Duty * s.PowerOn
-	s.Surface = tp.Surface(T, s.Power)
+	s.Surface = Ts
 	s.HotSpot = s.Surface + tp.RiseMax*s.Power
 	s.Convected, s.Radiated, s.Mounted = tp.HeatOutParts(s.Surface)
 	if tp.Convection != nil {

@@ -7,13 +7,27 @@ import (
 
 // Warm-up, time to the insulation limit and the periodic state of an
 // on/off duty cycle. The winding (and its former, when given) is one
-// lumped thermal mass of heat capacity C at its mean temperature T, its
-// surface below the mean by the quasi-steady internal rise of WindingRise,
-// and its hottest point above the mean by x, which follows the power with
-// the winding's internal time constant τ_i (ThermalProblem.InternalTau):
+// lumped thermal mass of heat capacity C at its mean temperature T. Its
+// surface lies below the mean by u and its hottest point above the mean by
+// x; both internal rises follow the power with the winding's internal time
+// constant τ_i (ThermalProblem.InternalTau), as the gradient of a conducting
+// body builds up and relaxes by diffusion, not at once:
 //
-//	C dT/dt = s(t) · P(T) − HeatOut(T − RiseMean · s(t) P(T)),  s = 1 on, 0 off
+//	C dT/dt = s(t) · P(T) − HeatOut(T − u),  s = 1 on, 0 off
+//	τ_i du/dt = RiseMean · s(t) P(T) − u
 //	τ_i dx/dt = (RiseMax − RiseMean) · s(t) P(T) − x
+//
+// (with τ_i = 0, u and x take their quasi-steady values at once). The
+// surface is never taken below the ambient while the winding is warmer than
+// it: heat generated inside cannot make the surface colder than its
+// surroundings (maximum principle), which matters only in a runaway, where
+// the lumped relation would otherwise put the surface below ambient.
+//
+// The lag of u matters for duty cycles: a winding cycled faster than τ_i
+// keeps the gradient of the average power, and its surface does not swing
+// by RiseMean × P with every switching (which, the losses being convex in the
+// surface temperature, would shed more heat than the average-power state
+// and put the cycle's temperatures below it).
 //
 // Integrated with the classical fourth-order Runge–Kutta method under
 // step-doubling error control (each step is taken once whole and once as two
@@ -103,12 +117,15 @@ func HeatCapacity(c Coil, w Winding) float64 {
 	return float64(SeriesCoils(c)) * (w.Mass*c.Wire.Material.SpecificHeat + c.Former.Capacity())
 }
 
-// state is the lumped thermal state: the winding's mean temperature (K)
-// and the rise of its hottest point above the mean (K), which lags the
-// power with the winding's internal time constant (see InternalTau).
-type state [2]float64
+// state is the lumped thermal state: the winding's mean temperature (K),
+// the rise of its hottest point above the mean (K) and the drop of its
+// surface below the mean (K), the two rises lagging the power with the
+// winding's internal time constant (see InternalTau).
+type state [3]float64
 
-func (y state) add(k state, h float64) state { return state{y[0] + h*k[0], y[1] + h*k[1]} }
+func (y state) add(k state, h float64) state {
+	return state{y[0] + h*k[0], y[1] + h*k[1], y[2] + h*k[2]}
+}
 
 // rk4Step advances dy/dt = f(y) by one classical Runge–Kutta step of h.
 func rk4Step(f func(state) state, y state, h float64) state {
@@ -116,11 +133,15 @@ func rk4Step(f func(state) state, y state, h float64) state {
 	k2 := f(y.add(k1, h/2))
 	k3 := f(y.add(k2, h/2))
 	k4 := f(y.add(k3, h))
-	return state{y[0] + h/6*(k1[0]+2*k2[0]+2*k3[0]+k4[0]), y[1] + h/6*(k1[1]+2*k2[1]+2*k3[1]+k4[1])}
+	var out state
+	for i := range out {
+		out[i] = y[i] + h/6*(k1[i]+2*k2[i]+2*k3[i]+k4[i])
+	}
+	return out
 }
 
 // integrate advances dy/dt = f(y) from y0 over the time span with step
-// control (see the file comment; the error is the larger of the two
+// control (see the file comment; the error is the largest of the
 // components'), calling visit(t, y) after each accepted step (t from 0).
 // It stops early, returning the time and value, when stop(y) turns true,
 // the crossing located by bisection on the last step's length; else it
@@ -131,20 +152,36 @@ func integrate(f func(state) state, y0 state, span, hmax float64, stop func(stat
 	if !(h > 0) {
 		return 0, y0
 	}
+	nan := state{math.NaN(), math.NaN(), math.NaN()}
 	for n := 0; t < span && n < 200000; n++ {
 		h = math.Min(h, span-t)
 		one := rk4Step(f, y, h)
 		half := rk4Step(f, y, h/2)
 		two := rk4Step(f, half, h/2)
-		err := math.Max(math.Abs(two[0]-one[0]), math.Abs(two[1]-one[1]))
+		err := 0.0
+		for i := range two {
+			err = math.Max(err, math.Abs(two[i]-one[i]))
+			if math.IsNaN(two[i]) {
+				err = math.NaN()
+			}
+		}
 		if math.IsNaN(err) || math.IsInf(two[0], 0) {
-			return t, state{math.NaN(), math.NaN()}
+			// A step too long for the stiff internal lags (or one that
+			// overshoots out of the data's range): retry shorter.
+			if h > span*1e-12 {
+				h *= 0.2
+				continue
+			}
+			return t, nan
 		}
 		if err > integrationTol && h > span*1e-12 {
 			h *= math.Max(0.2, 0.9*math.Pow(integrationTol/err, 0.2))
 			continue
 		}
-		next := state{two[0] + (two[0]-one[0])/15, two[1] + (two[1]-one[1])/15}
+		var next state
+		for i := range next {
+			next[i] = two[i] + (two[i]-one[i])/15
+		}
 		if stop != nil && stop(next) {
 			lo, hi := 0.0, h
 			for range 60 {
@@ -178,25 +215,32 @@ func integrate(f func(state) state, y0 state, span, hmax float64, stop func(stat
 // watt, K/W.
 func (tp ThermalProblem) extraRise() float64 { return tp.RiseMax - tp.RiseMean }
 
+// surfaceOf returns the surface temperature, K, of state y with the power
+// on (p W) or off: T − u when the internal rise lags, else T − RiseMean·p
+// (T when off); never below the ambient unless the mean itself is.
+func (tp ThermalProblem) surfaceOf(y state, p float64) float64 {
+	T := y[0]
+	drop := tp.RiseMean * p
+	if tp.InternalTau > 0 {
+		drop = y[2]
+	}
+	return math.Max(T-drop, math.Min(T, tp.Ambient))
+}
+
 // rate returns the derivative of the lumped state with the power on (on)
-// or off, for heat capacity C: C dT/dt = s P(T) − HeatOut(T − RiseMean s
-// P(T)) and, when InternalTau > 0, dx/dt = ((RiseMax − RiseMean) s P(T) −
-// x)/InternalTau.
+// or off, for heat capacity C (see the file comment).
 func (tp ThermalProblem) rate(C float64, on bool) func(state) state {
 	return func(y state) state {
-		T := y[0]
-		var dx float64
-		if !on {
-			if tp.InternalTau > 0 {
-				dx = -y[1] / tp.InternalTau
-			}
-			return state{-tp.HeatOut(T) / C, dx}
+		p := 0.0
+		if on {
+			p = tp.PowerOn(y[0])
 		}
-		p := tp.PowerOn(T)
+		var dx, du float64
 		if tp.InternalTau > 0 {
 			dx = (tp.extraRise()*p - y[1]) / tp.InternalTau
+			du = (tp.RiseMean*p - y[2]) / tp.InternalTau
 		}
-		return state{(p - tp.HeatOut(tp.Surface(T, p))) / C, dx}
+		return state{(p - tp.HeatOut(tp.surfaceOf(y, p))) / C, dx, du}
 	}
 }
 
@@ -238,7 +282,7 @@ func (tp ThermalProblem) TimeToReach(C, limit, tMax float64) float64 {
 		return math.NaN()
 	}
 	stop := func(y state) bool { return on.hotSpot(y, true) >= limit }
-	t, y := integrate(on.rate(C, true), state{tp.Ambient, 0}, tMax, tMax/50, stop, nil)
+	t, y := integrate(on.rate(C, true), state{tp.Ambient, 0, 0}, tMax, tMax/50, stop, nil)
 	if math.IsNaN(y[0]) || !stop(y) {
 		return math.NaN()
 	}
@@ -261,7 +305,7 @@ func (tp ThermalProblem) WarmUpCurve(C, tEnd, onTime float64) (t, mean, hot []fl
 		offTime = onTime * (1/tp.Duty - 1)
 	}
 	hmax := tEnd / 200
-	y := state{tp.Ambient, 0}
+	y := state{tp.Ambient, 0, 0}
 	t0 := 0.0
 	ceiling := func(y state) bool { return y[0] >= runawayCeiling }
 	for t0 < tEnd && !ceiling(y) {
@@ -295,67 +339,102 @@ func (tp ThermalProblem) WarmUpCurve(C, tEnd, onTime float64) (t, mean, hot []fl
 
 // Cycle is the periodic steady state of an on/off duty cycle.
 type Cycle struct {
-	On, Off    float64 // s
-	PeakMean   float64 // K, mean winding temperature at the end of the on period
-	PeakHot    float64 // K, hot spot at the end of the on period
-	Trough     float64 // K, winding temperature at the end of the off period
-	Periods    float64 // periods from cold until within 1 K of the periodic state (estimate: 5 τ / period)
-	Settled    bool    // a periodic state exists below TempSearchMax
+	On, Off  float64 // s
+	PeakMean float64 // K, mean winding temperature at the end of the on period
+	PeakHot  float64 // K, hot spot at the end of the on period
+	Trough   float64 // K, winding temperature at the end of the off period
+	Periods  float64 // periods from cold until within 1 K of the periodic state (estimate: 5 τ / period)
+	Settled  bool    // a periodic state exists below TempSearchMax
+	// NoSolution is set when the search found no periodic state (the coil
+	// heats from period to period without end), as against data that do
+	// not allow one to be sought.
+	NoSolution bool
 	AveragePow float64 // W, duty-averaged power in the periodic state
 }
 
 // PeriodicCycle returns the periodic steady state of the duty cycle: the
 // power on for onTime, off for onTime·(1/duty − 1), repeated, for heat
 // capacity C. The state at the start of an on period, T₀, is the fixed
-// point of the one-period map Φ (integrate), found with the Illinois
-// variant of regula falsi on Φ(T₀) − T₀ between Ta (where the coil warms
-// over a period) and the first of Ta + 2ⁿ K at which it cools. Settled is
-// false when no such state exists below TempSearchMax (runaway).
+// point of the one-period map Φ (integrate), the internal rises started at
+// their own periodic values for the power at T₀ (cycleLag). It is found
+// with the Illinois variant of regula falsi on g(T₀) = Φ(T₀) − T₀ over a
+// bracket whose lower end is the ambient: g(Ta) ≥ 0 (a coil that starts a
+// period at ambient cannot end it colder), and when g(Ta) is not positive —
+// the off period cools the winding back to the ambient, to the integration's
+// resolution — the periodic state starts at the ambient itself. The upper
+// end is the first of Ta + 2ⁿ K at which the coil cools over a period.
+// Settled is false when no such state exists below TempSearchMax
+// (runaway). PeakHot is the hottest point at the end of the on period,
+// where mean and internal rise peak together.
 func (tp ThermalProblem) PeriodicCycle(C, onTime float64) Cycle {
 	n := math.NaN()
 	cy := Cycle{On: onTime, PeakMean: n, PeakHot: n, Trough: n, Periods: n, AveragePow: n}
-	if !(C > 0) || !(onTime > 0) || !(tp.Duty > 0 && tp.Duty < 1) {
+	if !(C > 0) || !(onTime > 0) || !(tp.Duty > 0 && tp.Duty < 1) || math.IsInf(onTime, 0) || math.IsInf(C, 0) {
 		return cy
 	}
 	cy.Off = onTime * (1/tp.Duty - 1)
 	ceiling := func(T float64) bool { return T >= runawayCeiling }
-	// The mean temperature's cycle does not depend on the internal rise,
-	// so the fixed point is sought in T alone (the rise integrated as a
-	// by-product and then replaced by its own periodic solution below).
 	ceil := func(y state) bool { return ceiling(y[0]) }
-	phase := func(T0 float64, on bool, span float64) float64 {
-		_, y := integrate(tp.rate(C, on), state{T0, 0}, span, span/4, ceil, nil)
-		return y[0]
+	start := func(T0 float64) state {
+		lag := tp.cycleLag(onTime, cy.Off)
+		p := tp.PowerOn(T0)
+		return state{T0, lag * tp.extraRise() * p, lag * tp.RiseMean * p}
 	}
-	period := func(T0 float64) (peak, end float64) {
-		peak = phase(T0, true, onTime)
-		if ceiling(peak) || math.IsNaN(peak) {
-			return peak, math.Inf(1)
+	period := func(T0 float64) (peak, end state) {
+		_, peak = integrate(tp.rate(C, true), start(T0), onTime, onTime/4, ceil, nil)
+		if ceiling(peak[0]) || math.IsNaN(peak[0]) {
+			return peak, state{math.Inf(1), 0, 0}
 		}
-		return peak, phase(peak, false, cy.Off)
+		_, end = integrate(tp.rate(C, false), peak, cy.Off, cy.Off/4, ceil, nil)
+		return peak, end
 	}
-	g := func(T0 float64) float64 { _, e := period(T0); return e - T0 }
+	g := func(T0 float64) float64 { _, e := period(T0); return e[0] - T0 }
 	a := tp.Ambient
 	ga := g(a)
-	if !(ga > 0) {
-		// Nothing to warm (no power): the ambient is the periodic state.
-		if ga == 0 {
-			cy.PeakMean, cy.PeakHot, cy.Trough, cy.Settled, cy.AveragePow = a, a, a, true, 0
+	T0 := a
+	switch {
+	case math.IsNaN(ga):
+		return cy
+	case ga > 0:
+		b := math.NaN()
+		for d := 1.0; a+d <= math.Max(TempSearchMax, a+1); d *= 2 {
+			if g(a+d) < 0 {
+				b = a + d
+				break
+			}
 		}
+		if math.IsNaN(b) {
+			cy.NoSolution = true
+			return cy
+		}
+		T0 = tp.fixedPoint(g, a, ga, b, g(b))
+	}
+	peak, end := period(T0)
+	cy.PeakMean, cy.Trough = peak[0], end[0]
+	cy.PeakHot = tp.hotSpot(peak, true)
+	cy.Settled = !math.IsNaN(peak[0]) && !ceiling(peak[0])
+	if !cy.Settled {
+		cy.PeakMean, cy.PeakHot, cy.Trough, cy.NoSolution = n, n, n, true
 		return cy
 	}
-	b := math.NaN()
-	for d := 1.0; a+d <= TempSearchMax; d *= 2 {
-		if g(a+d) < 0 {
-			b = a + d
-			break
-		}
+	// Average power over the period: the energy of the on period by the
+	// trapezoidal rule over the integration's steps (at most onTime/64).
+	var e float64
+	prevT, prevY := 0.0, T0
+	integrate(tp.rate(C, true), start(T0), onTime, onTime/64, nil, func(s float64, y state) {
+		e += (s - prevT) * (tp.PowerOn(prevY) + tp.PowerOn(y[0])) / 2
+		prevT, prevY = s, y[0]
+	})
+	cy.AveragePow = e / (onTime + cy.Off)
+	if tau := tp.ThermalTimeConstant(C, T0); tau > 0 {
+		cy.Periods = 5 * tau / (onTime + cy.Off)
 	}
-	if math.IsNaN(b) {
-		return cy
-	}
-	lo, hi := a, b
-	glo, ghi := ga, g(b)
+	return cy
+}
+
+// fixedPoint returns the root of g in [lo, hi] (g(lo) > 0 > g(hi)) by the
+// Illinois variant of regula falsi, to 10⁻⁹ of hi.
+func (tp ThermalProblem) fixedPoint(g func(float64) float64, lo, glo, hi, ghi float64) float64 {
 	side := 0
 	for range 100 {
 		x := hi - ghi*(hi-lo)/(ghi-glo)
@@ -380,26 +459,22 @@ func (tp ThermalProblem) PeriodicCycle(C, onTime float64) Cycle {
 			break
 		}
 	}
-	T0 := lo + (hi-lo)/2
-	peak, end := period(T0)
-	cy.PeakMean, cy.Trough = peak, end
-	cy.PeakHot = peak + tp.cycleRise(peak, onTime, cy.Off)
-	cy.Settled = !math.IsNaN(peak) && !ceiling(peak)
-	// Average power over the period, from the energy balance of the
-	// periodic state: the heat put in equals the heat shed.
-	// Average power over the period: the energy of the on period by the
-	// trapezoidal rule over the integration's steps (at most onTime/64).
-	var e float64
-	prevT, prevY := 0.0, T0
-	integrate(tp.rate(C, true), state{T0, 0}, onTime, onTime/64, nil, func(s float64, y state) {
-		e += (s - prevT) * (tp.PowerOn(prevY) + tp.PowerOn(y[0])) / 2
-		prevT, prevY = s, y[0]
-	})
-	cy.AveragePow = e / (onTime + cy.Off)
-	if tau := tp.ThermalTimeConstant(C, T0); tau > 0 {
-		cy.Periods = 5 * tau / (onTime + cy.Off)
+	return lo + (hi-lo)/2
+}
+
+// cycleLag returns the fraction of its steady value that a first-order lag
+// of time constant InternalTau, driven by the on/off square wave, holds at
+// the start of an on period in the periodic state: (1 − a) b/(1 − a b),
+// a = e^(−t_on/τ), b = e^(−t_off/τ) (0 without a lag).
+func (tp ThermalProblem) cycleLag(on, off float64) float64 {
+	if !(tp.InternalTau > 0) {
+		return 0
 	}
-	return cy
+	a, b := math.Exp(-on/tp.InternalTau), math.Exp(-off/tp.InternalTau)
+	if d := 1 - a*b; d > 0 {
+		return (1 - a) * b / d
+	}
+	return 0
 }
 
 // cycleRise returns the rise of the hottest point above the mean at the end

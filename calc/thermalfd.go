@@ -1,0 +1,166 @@
+package calc
+
+import "math"
+
+// An independent check of the steady hot spot: a finite-volume solution of
+// radial conduction across the winding section with the same surface
+// boundary condition as the lumped heat balance. The section is the
+// annulus of RiseGeometry (inner radius ri, outer ro, length ℓ,
+// conductivity k), its bore and ends adiabatic, divided into n rings of
+// equal thickness. The current is the same in every turn, so each ring
+// generates the block's power in proportion to its own resistance,
+//
+//	q_j = P · V_j (1 + α20 (T_j − 20 °C)) / Σ_i V_i (1 + α20 (T_i − 20 °C)),
+//
+// where the block's resistance follows the volume-mean temperature (the
+// resistance law is linear) and P = duty · PowerOn(T̄) under either drive.
+// The heat generated inside radius r crosses it by conduction,
+// −k 2π r ℓ dT/dr = Q(r) (Fourier's law; Incropera & DeWitt, Fundamentals of
+// Heat and Mass Transfer, 6th ed., §3.5), integrated ring by ring inward
+// from the surface, whose temperature T_s solves HeatOut(T_s) = P. The
+// rings' temperatures are iterated to a fixed point. Unlike the lumped
+// balance, no mean or hot-spot formula is used: the profile itself is
+// computed, with the resistance of each ring at its own temperature.
+
+// ConductionResult is the finite-volume solution of the winding section.
+type ConductionResult struct {
+	Surface, Mean, HotSpot float64 // K: outer surface, volume mean, hottest ring
+	Power                  float64 // W, duty-averaged, of the block
+	Iterations             int
+	Converged              bool // false also when the balance has no solution (runaway)
+}
+
+// WindingConduction solves the winding section of coil c (winding w, heat
+// balance tp) on n rings (n < 2: 400). NaN figures when the data are
+// missing or no steady state is found.
+func WindingConduction(c Coil, w Winding, tp ThermalProblem, n int) ConductionResult {
+	ri, ro, l := RiseGeometry(c, w)
+	return AnnulusConduction(tp, ri, ro, l, WindingConductivity(c), float64(SeriesCoils(c)), n)
+}
+
+// AnnulusConduction is WindingConduction for an annulus ri..ro of length l
+// and conductivity k, counted coils times (a pair's two coils share the
+// power and the surface equally).
+func AnnulusConduction(tp ThermalProblem, ri, ro, l, k, coils float64, n int) ConductionResult {
+	nan := math.NaN()
+	res := ConductionResult{Surface: nan, Mean: nan, HotSpot: nan, Power: nan}
+	if !(ri >= 0) || !(ro > ri) || !(l > 0) || !(k > 0) || !(coils >= 1) || math.IsInf(ro, 0) {
+		return res
+	}
+	if n < 2 {
+		n = 400
+	}
+	dr := (ro - ri) / float64(n)
+	vol := make([]float64, n) // per coil, rings from the bore outward
+	for j := range vol {
+		a, b := ri+float64(j)*dr, ri+float64(j+1)*dr
+		vol[j] = math.Pi * (b*b - a*a) * l
+	}
+	T := make([]float64, n)
+	for j := range T {
+		T[j] = tp.Ambient
+	}
+	f := func(T float64) float64 { return ResistanceFactor(tp.Alpha20, T) }
+	for it := 1; it <= 500; it++ {
+		// Volume-mean temperature and the block's power at it.
+		vs, fs := 0.0, 0.0
+		for j, v := range vol {
+			vs += v * T[j]
+			fs += v * f(T[j])
+		}
+		mean := vs / sumOf(vol)
+		P := tp.HeatIn(mean)
+		Ts := tp.surfaceFor(P)
+		if math.IsNaN(Ts) || math.IsNaN(P) {
+			return res
+		}
+		// March inward: the heat generated inside the face at r_j+1/2
+		// (per coil) crosses it; the ring centres' temperatures follow.
+		next := make([]float64, n)
+		Q := 0.0
+		inside := make([]float64, n+1) // heat generated inside face j
+		for j, v := range vol {
+			Q += P / coils * v * f(T[j]) / fs
+			inside[j+1] = Q
+		}
+		// Outer half ring: from the surface (face n) to the centre of ring n−1.
+		rc := func(j int) float64 { return ri + (float64(j)+0.5)*dr }
+		face := func(j int) float64 { return ri + float64(j)*dr }
+		// Within ring j the heat crossing radius r is inside[j] plus the
+		// ring's share generated between its inner face and r, taken as
+		// the mean of the two faces' values over each half ring.
+		tc := Ts + (inside[n]+(inside[n-1]+inside[n])/2)/2*math.Log(face(n)/rc(n-1))/(2*math.Pi*k*l)
+		next[n-1] = tc
+		for j := n - 2; j >= 0; j-- {
+			// From the centre of ring j+1 to that of ring j, across face j+1.
+			q := inside[j+1]
+			tc += q * math.Log(rc(j+1)/rc(j)) / (2 * math.Pi * k * l)
+			next[j] = tc
+		}
+		diff := 0.0
+		for j := range T {
+			diff = math.Max(diff, math.Abs(next[j]-T[j]))
+			T[j] = next[j]
+		}
+		if math.IsNaN(diff) || T[0] > runawayCeiling {
+			return res
+		}
+		res.Iterations = it
+		if diff <= 1e-10*math.Max(1, T[0]-tp.Ambient) {
+			res.Converged = true
+			res.Surface, res.Power = Ts, P
+			break
+		}
+	}
+	if !res.Converged {
+		return ConductionResult{Surface: nan, Mean: nan, HotSpot: nan, Power: nan, Iterations: res.Iterations}
+	}
+	vs := 0.0
+	for j, v := range vol {
+		vs += v * T[j]
+	}
+	res.Mean = vs / sumOf(vol)
+	res.HotSpot = T[0]
+	for _, t := range T {
+		res.HotSpot = math.Max(res.HotSpot, t)
+	}
+	return res
+}
+
+func sumOf(xs []float64) float64 {
+	s := 0.0
+	for _, x := range xs {
+		s += x
+	}
+	return s
+}
+
+// surfaceFor returns the surface temperature, K, at which HeatOut equals
+// P ≥ 0 (bisection; HeatOut rises with the surface temperature); NaN when
+// none lies below max(TempSearchMax, Ta + 1) K.
+func (tp ThermalProblem) surfaceFor(P float64) float64 {
+	lo := tp.Ambient
+	if !(P > 0) {
+		return lo
+	}
+	top := math.Max(TempSearchMax, lo+1)
+	hi := lo + 1
+	for tp.HeatOut(hi) < P {
+		if hi >= top {
+			return math.NaN()
+		}
+		lo, hi = hi, math.Min(top, tp.Ambient+2*(hi-tp.Ambient))
+	}
+	for range 200 {
+		mid := lo + (hi-lo)/2
+		if mid <= lo || mid >= hi {
+			break
+		}
+		if tp.HeatOut(mid) < P {
+			lo = mid
+		} else {
+			hi = mid
+		}
+	}
+	return lo + (hi-lo)/2
+}
