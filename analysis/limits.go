@@ -152,7 +152,7 @@ func LimitValue(l calc.Limit, d calc.Design, r calc.Results) float64 {
 		return maxOf(func(c calc.CoilResult) float64 { return c.Temperature })
 	case "surface-temperature":
 		return maxOf(func(c calc.CoilResult) float64 {
-			if c.Runaway {
+			if c.Verdict.NoSolution {
 				return math.NaN()
 			}
 			return surfaceMax(c.Heat)

@@ -112,7 +112,7 @@ func assessSafety(d calc.Design, r calc.Results, coils []CoilStudy) Safety {
 		add := func(k FindingKind, sev Severity, v float64) {
 			s.Findings = append(s.Findings, Finding{Kind: k, Severity: sev, Coil: i, Value: v})
 		}
-		if cr.Runaway {
+		if cr.Verdict.NoSolution || (cr.Runaway && !cr.Verdict.SettledAboveLimit) {
 			add(Runaway, Warning, cr.Temperature)
 			s.Findings = append(s.Findings, electricalFindings(i, co, cr)...)
 			continue

@@ -214,7 +214,7 @@ func thermalFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d cal
 	var out []validity
 
 	// Thermal-model range.
-	if st := cr.Heat.Steady; st.Settled && !cr.Runaway {
+	if st := cr.Heat.Steady; st.Settled && !cr.Verdict.NoSolution {
 		v := validity{what: "Thermal model"}
 		text := fmt.Sprintf("the resistance follows the winding's mean temperature %s linearly ($\\alpha_{20}$ of %s); heat crosses the turns with an effective conductivity of %s, so the hottest point is %s above the surface (%s); the insulation is judged at the hottest point",
 			Eng(Celsius(st.Mean), "°C", 3), co.Wire.Material.Name, Eng(cr.Heat.Conductivity, "W/(m·K)", 2), Eng(st.HotSpot-st.Surface, "K", 2), Eng(Celsius(st.Surface), "°C", 3))
@@ -231,7 +231,7 @@ func thermalFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d cal
 		}
 		v.text = text + "."
 		out = append(out, v)
-	} else if cr.Runaway {
+	} else if cr.Verdict.NoSolution {
 		out = append(out, validity{what: "Thermal model", flagged: true, text: "no steady temperature exists (thermal runaway): the electrical figures at the steady state are not defined; see the Safety section."})
 	}
 	return out

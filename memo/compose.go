@@ -196,7 +196,10 @@ func (c *composer) verdict() doc.Paragraph {
 		s = append(s, doc.Span{Text: fmt.Sprintf("All %d verification checks agree within tolerance. ", len(c.j.Checks))})
 	}
 	for _, cr := range r.Coils {
-		if cr.Runaway {
+		switch {
+		case cr.Verdict.SettledAboveLimit:
+			s = append(s, doc.Span{Text: fmt.Sprintf("Coil %q settles at %s, above what its insulation survives.", cr.Name, Eng(Celsius(cr.Temperature), "°C", 3)), Strong: true}, doc.Span{Text: " "})
+		case cr.Runaway:
 			s = append(s, doc.Span{Text: fmt.Sprintf("Coil %q has no steady temperature: thermal runaway.", cr.Name), Strong: true}, doc.Span{Text: " "})
 		}
 	}
@@ -230,7 +233,7 @@ func (c *composer) summaryTable() doc.Table {
 			return Eng(cr.R20, "Ω", 3) + " / " + Eng(cr.RHot, "Ω", 3)
 		}),
 		row("Winding temperature, hottest point", func(i int, cr calc.CoilResult) string {
-			if cr.Runaway {
+			if cr.Runaway && !cr.Verdict.SettledAboveLimit {
 				return "runaway"
 			}
 			return Eng(Celsius(cr.Temperature), "°C", 3)

@@ -187,9 +187,11 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult) []Step {
 			vmax = "the stated driver rating"
 		}
 		steps = append(steps,
-			Step{What: fmt.Sprintf("Diode with a series resistor Rₛ: the resistor that holds the switch at %s (%s)", Eng(s.Clamp, "V", 3), vmax),
-				Symbolic: `R_s = \frac{V_{\mathrm{max}} - V_s}{I}`,
-				Numbers:  fmt.Sprintf(`\frac{%s - %s}{%s}`, Q(s.Clamp, "V", 3), Q(s.Supply, "V", 3), I), Result: Q(s.Resistor, "Ω", 3)},
+			Step{What: fmt.Sprintf("Diode with a series resistor Rₛ: the resistor that holds the switch at %s (%s) when it opens the largest current, the cold switch-on current I_c", Eng(s.Clamp, "V", 3), vmax),
+				Symbolic: `R_s = \frac{V_{\mathrm{max}} - V_s}{I_c}`,
+				Numbers:  fmt.Sprintf(`\frac{%s - %s}{%s}`, Q(s.Clamp, "V", 3), Q(s.Supply, "V", 3), Q(math.Abs(s.WorstCurrent), "A", 4)), Result: Q(s.Resistor, "Ω", 3)},
+			Step{What: switchRatingWords(s), Symbolic: `V_{sw} = V_s + I_c R_s`,
+				Numbers: fmt.Sprintf(`%s + %s \cdot %s`, Q(s.Supply, "V", 3), Q(math.Abs(s.WorstCurrent), "A", 4), Q(s.Resistor, "Ω", 3)), Result: Q(s.SwitchVoltage, "V", 3)},
 			Step{What: "Decay to 10 % through the resistor and diode", Symbolic: `t_{10} = \frac{L}{R + R_s} \ln 10`,
 				Numbers: fmt.Sprintf(`\frac{%s}{%s + %s} \ln 10`, L, R, Q(s.Resistor, "Ω", 3)), Result: Q(s.ResistorTime10, "s", 3)},
 			Step{What: "Energy the resistor absorbs at each switch-off (the rest is spent in the coil's own resistance)", Symbolic: `W_{R_s} = W \frac{R_s}{R + R_s}`,
@@ -294,6 +296,10 @@ func (c *composer) couplings() {
 			M = Eng(cp.Mutual, "H", 4)
 			k = Sig(cp.K, 3)
 			method = "exact, I₁I₂ ∂M/∂z"
+		case cp.Exact:
+			M = Eng(cp.Mutual, "H", 4)
+			k = Sig(cp.K, 3)
+			method = "Lorentz integral I₂∮dl × B₁ (Neumann's M)"
 		}
 		if !cp.Force.IsNaN() && !cp.Overlap {
 			F = forceText(cp, a, b)
@@ -359,6 +365,18 @@ func (c *composer) gradientForce() {
 		c.derive(Step{What: "Force on the total moment of all coils", Symbolic: `F = |\vec{m}| G`,
 			Numbers: fmt.Sprintf(`%s \cdot %s`, Q(r.Moment.Norm(), "A·m²", 4), Q(G, "T/m", 3)), Result: Q(r.GradientForce, "N", 3)})
 	}
+}
+
+// switchRatingWords says what the switch voltage with the suggested
+// resistor is compared with.
+func switchRatingWords(s calc.SwitchResult) string {
+	switch {
+	case !s.ClampFromRating:
+		return "Voltage across the switch with the diode and resistor, at the cold switch-on current"
+	case s.WithinRating:
+		return fmt.Sprintf("Voltage across the switch with the diode and resistor, at the cold switch-on current: within the driver rating of %s (margin %s)", Eng(s.Clamp, "V", 3), Eng(s.RatingMargin, "V", 2))
+	}
+	return fmt.Sprintf("Voltage across the switch with the diode and resistor, at the cold switch-on current: ABOVE the driver rating of %s", Eng(s.Clamp, "V", 3))
 }
 
 // switchOffCaution words the finding of an unsuppressed switch-off spike

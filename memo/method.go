@@ -108,7 +108,7 @@ func coilSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []Step 
 		Numbers:  fmt.Sprintf(`\frac{%s \cdot %s}{%s}`, Q(mat.Rho20, "Ω·m", 5), Q(cr.Length, "m", 4), Q(A, "m²", 4)),
 		Result:   Q(cr.R20, "Ω", 4)})
 	add(thermalSteps(co, cr)...)
-	if !cr.Runaway && !math.IsNaN(cr.RHot) {
+	if !cr.Verdict.NoSolution && !math.IsNaN(cr.RHot) {
 		// the temperature the resistance was taken at (the winding's mean)
 		T := Celsius(cr.Heat.Steady.Mean)
 		add(Step{What: fmt.Sprintf("Resistance at the mean winding temperature, temperature coefficient %s /K", Sig(mat.Alpha20, 3)),
@@ -143,7 +143,7 @@ func coilSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []Step 
 // resistance follows. The heat balance that yields it is derived step by
 // step in the Heating section; here it enters the chain of derivation.
 func thermalSteps(co calc.Coil, cr calc.CoilResult) []Step {
-	if cr.Runaway || math.IsNaN(cr.RHot) {
+	if cr.Verdict.NoSolution || math.IsNaN(cr.RHot) {
 		return []Step{{What: "Steady winding temperature: none exists, the winding runs away thermally (see the Heating and Safety sections)",
 			Symbolic: `T = ` + Words("no steady state")}}
 	}

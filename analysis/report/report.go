@@ -297,7 +297,9 @@ type Interactions struct {
 
 // CouplingReport is the mutual inductance of two coil blocks and the force
 // on the second from the first; the mutual inductance is null unless they
-// are coaxial, force_method says "coaxial" (exact) or "dipole" (far-field
+// can be computed, force_method says "coaxial" (Maxwell's formula),
+// "lorentz" (non-coaxial: Neumann's mutual inductance and the Lorentz
+// integral) or "dipole" (far-field
 // approximation).
 type CouplingReport struct {
 	Coils       [2]string `json:"coils"`
@@ -312,8 +314,11 @@ func interactions(d calc.Design, r calc.Results) Interactions {
 	out := Interactions{Couplings: []CouplingReport{}, GradientForce: Num(r.GradientForce)}
 	for _, cp := range r.Couplings {
 		m := "dipole"
-		if cp.Exact {
+		switch {
+		case cp.Coaxial:
 			m = "coaxial"
+		case cp.Exact:
+			m = "lorentz"
 		}
 		out.Couplings = append(out.Couplings, CouplingReport{Coils: [2]string{d.Coils[cp.A].Name, d.Coils[cp.B].Name},
 			Coaxial: cp.Coaxial, Mutual: Num(cp.Mutual), K: Num(cp.K), Force: vec(cp.Force), ForceMethod: m})
