@@ -185,10 +185,8 @@ func (c *composer) verdict() doc.Paragraph {
 	switch {
 	case len(limits) == 0:
 		s = append(s, doc.Span{Text: "No requirements were stated in the spec. "})
-	case failedLimits == 0:
-		s = append(s, doc.Span{Text: fmt.Sprintf("All %d stated requirements are met.", len(limits)), Strong: true}, doc.Span{Text: " "})
 	default:
-		s = append(s, doc.Span{Text: fmt.Sprintf("%d of %d stated requirements are NOT met.", failedLimits, len(limits)), Strong: true}, doc.Span{Text: " "})
+		s = append(s, doc.Span{Text: requirementsVerdict(len(limits), failedLimits), Strong: true}, doc.Span{Text: " "})
 	}
 	if failedChecks > 0 {
 		s = append(s, doc.Span{Text: fmt.Sprintf("%d verification check(s) failed: see the Verification section before relying on these results.", failedChecks), Strong: true}, doc.Span{Text: " "})
@@ -207,6 +205,28 @@ func (c *composer) verdict() doc.Paragraph {
 		s = append(s, doc.Span{Text: "The design raises no safety warning; the general cautions are in the Safety section."})
 	}
 	return doc.Paragraph{Spans: s}
+}
+
+// requirementsVerdict is page 1's sentence on n requirements of which
+// failed are not met, in plain grammar for any count.
+func requirementsVerdict(n, failed int) string {
+	switch {
+	case failed == 0 && n == 1:
+		return "The stated requirement is met."
+	case failed == 0 && n == 2:
+		return "Both stated requirements are met."
+	case failed == 0:
+		return fmt.Sprintf("All %d stated requirements are met.", n)
+	case n == 1:
+		return "The stated requirement is NOT met."
+	case failed == n && n == 2:
+		return "Neither stated requirement is met."
+	case failed == n:
+		return fmt.Sprintf("None of the %d stated requirements is met.", n)
+	case failed == 1:
+		return fmt.Sprintf("1 of the %d stated requirements is NOT met.", n)
+	}
+	return fmt.Sprintf("%d of the %d stated requirements are NOT met.", failed, n)
 }
 
 func (c *composer) summaryTable() doc.Table {

@@ -38,3 +38,19 @@ func TestFailedCheckOnPageOne(t *testing.T) {
 		t.Errorf("verdict does not report the failed check: %+v", p.Spans)
 	}
 }
+
+func TestRequirementsVerdict(t *testing.T) {
+	for _, c := range []struct {
+		n, failed int
+		want      string
+	}{
+		{1, 0, "The stated requirement is met."}, {2, 0, "Both stated requirements are met."},
+		{3, 0, "All 3 stated requirements are met."}, {1, 1, "The stated requirement is NOT met."},
+		{2, 2, "Neither stated requirement is met."}, {4, 1, "1 of the 4 stated requirements is NOT met."},
+		{4, 2, "2 of the 4 stated requirements are NOT met."}, {3, 3, "None of the 3 stated requirements is met."},
+	} {
+		if got := requirementsVerdict(c.n, c.failed); got != c.want {
+			t.Errorf("%d, %d failed: %q, want %q", c.n, c.failed, got, c.want)
+		}
+	}
+}
