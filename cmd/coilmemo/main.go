@@ -20,6 +20,7 @@ import (
 	"strings"
 
 	"coilmemo/memo"
+	"coilmemo/spec"
 )
 
 const usage = `coilmemo %s – coil calculation memos from Markdown specs
@@ -169,9 +170,9 @@ func flagErr(err error, help string, stdout io.Writer) error {
 
 // load reads and evaluates one spec, turning diagnostics into exit status 2.
 func load(path string, stderr io.Writer) (*memo.Job, error) {
-	src, err := os.ReadFile(path)
+	src, err := readSpec(path)
 	if err != nil {
-		return nil, &exitError{2, "coilmemo: " + err.Error()}
+		return nil, err
 	}
 	job, diags := memo.Evaluate(path, src)
 	if len(diags) > 0 {
@@ -186,6 +187,33 @@ func load(path string, stderr io.Writer) (*memo.Job, error) {
 		return nil, &exitError{2, fmt.Sprintf("%s: %d problem%s; nothing written", path, n, s)}
 	}
 	return job, nil
+}
+
+// readSpec reads a spec file: a regular file of at most spec.MaxSpecBytes
+// (a device such as /dev/zero, a FIFO or a folder is refused before it is
+// read, and an oversized file after reading one byte past the bound).
+// Every failure is exit status 2.
+func readSpec(path string) ([]byte, error) {
+	fi, err := os.Stat(path)
+	if err != nil {
+		return nil, &exitError{2, "coilmemo: " + err.Error()}
+	}
+	if !fi.Mode().IsRegular() {
+		return nil, &exitError{2, fmt.Sprintf("coilmemo: %s is not a regular file", path)}
+	}
+	f, err := os.Open(path)
+	if err != nil {
+		return nil, &exitError{2, "coilmemo: " + err.Error()}
+	}
+	defer f.Close()
+	src, err := io.ReadAll(io.LimitReader(f, spec.MaxSpecBytes+1))
+	if err != nil {
+		return nil, &exitError{2, "coilmemo: " + err.Error()}
+	}
+	if len(src) > spec.MaxSpecBytes {
+		return nil, &exitError{2, fmt.Sprintf("%s:1: the spec is more than %d bytes, the most a spec may have; nothing written", path, spec.MaxSpecBytes)}
+	}
+	return src, nil
 }
 
 func build(args []string, stdout, stderr io.Writer) error {
