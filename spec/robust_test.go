@@ -67,3 +67,31 @@ func TestSourceBounds(t *testing.T) {
 		t.Errorf("oversized spec: %v", diags)
 	}
 }
+
+// Values beyond physical bounds are refused with the bound stated, so that
+// no search over them runs away (a mean diameter of 1e306 m hung the build).
+func TestUpperBounds(t *testing.T) {
+	for _, c := range []struct{ line, msg string }{
+		{"mean-diameter = 1e306 m", "mean-diameter: 1e306 m is more than 100 m"},
+		{"centre = (0, 0, 1e306) m", "component 3 is more than 1000 m"},
+		{"switch-off = 1e300 s", "switch-off: 1e300 s is more than"},
+		{"frequency = 1e30 Hz", "frequency: 1e30 Hz is more than"},
+	} {
+		src := "```coil\n" + c.line + "\nmean-diameter = 40 mm\nturns = 100\nwire = AWG 28\ncurrent = 0.5 A\n```\n"
+		if strings.HasPrefix(c.line, "mean-diameter") {
+			src = "```coil\n" + c.line + "\nturns = 100\nwire = AWG 28\ncurrent = 0.5 A\n```\n"
+		}
+		_, diags := Parse("s.md", []byte(src))
+		found := false
+		for _, d := range diags {
+			found = found || d.Line == 2 && strings.Contains(d.Msg, c.msg)
+		}
+		if !found {
+			t.Errorf("%s: want line 2 %q, got %v", c.line, c.msg, diags)
+		}
+	}
+	_, diags := Parse("s.md", []byte("```coil\nmean-diameter = 40 mm\nturns = 100\nwire = AWG 28\ncurrent = 0.5 A\n```\n```probes\nfar = (1e306, 0, 0) m\n```\n"))
+	if len(diags) != 1 || diags[0].Line != 8 {
+		t.Errorf("far probe: %v", diags)
+	}
+}
