@@ -620,8 +620,26 @@ func (p *parser) positive(e kv, want units.Dim) (float64, bool) {
 		p.errf(e.line, "%s: %s must be greater than zero", e.key, e.value)
 		return 0, false
 	}
+	if top, ok := upperBounds[want]; ok && q.Value > top {
+		p.errf(e.line, "%s: %s is more than %s, the most a spec accepts", e.key, e.value, units.Format(top, want))
+		return 0, false
+	}
 	return q.Value, true
 }
+
+// upperBounds are the largest values a spec accepts, by dimension: far
+// beyond any coil this tool is for, and small enough that no search or
+// sum over them overflows.
+var upperBounds = map[units.Dim]float64{
+	units.Length:    100,  // m
+	units.Current:   1e5,  // A
+	units.Voltage:   1e6,  // V
+	units.Time:      1e7,  // s, about 116 days
+	units.Frequency: 1e10, // Hz
+}
+
+// maxPosition bounds each coordinate of a coil centre or a probe, m.
+const maxPosition = 1000
 
 const maxTurns = 10_000_000
 
@@ -838,6 +856,9 @@ func parseVector(s string, want units.Dim) (calc.Vec, error) {
 		}
 		if !q.Is(want) {
 			return v, fmt.Errorf("%s is %s; want %s", t, article(q.Dim.Name()), units.Describe(want))
+		}
+		if want == units.Length && !(math.Abs(q.Value) <= maxPosition) {
+			return v, fmt.Errorf("%s: component %d is more than %d m from the origin, the most a spec accepts", t, i+1, maxPosition)
 		}
 		v[i] = q.Value
 	}

@@ -8,10 +8,13 @@
 package spec
 
 import (
+	"bytes"
 	"fmt"
 	"sort"
 	"strings"
 	"time"
+	"unicode"
+	"unicode/utf8"
 
 	"coilmemo/calc"
 	"coilmemo/calc/units"
@@ -162,7 +165,13 @@ type parser struct {
 	blocks     []*rawBlock
 	spec       *Spec
 	firstH1    string
+	rereads    int // HTML blocks read again as Markdown
 }
+
+// maxRereads bounds the HTML blocks read again as Markdown for the
+// parameter blocks they swallowed (each costs a parse of the source up to
+// it); a spec has far fewer parameter blocks than this.
+const maxRereads = 64
 
 func (p *parser) errf(line int, format string, args ...any) {
 	if line < 1 {
@@ -183,14 +192,20 @@ var markdown = goldmark.New(goldmark.WithExtensions(extension.Table))
 // are problems) and the problems found; the spec is usable only when the
 // Diagnostics are empty.
 func Parse(file string, src []byte) (*Spec, Diagnostics) {
-	p := &parser{file: file, src: src, spec: &Spec{File: file}}
+	p := &parser{file: file, spec: &Spec{File: file}}
+	if len(src) > MaxSpecBytes {
+		p.errf(1, "the spec is %d bytes, more than the %d bytes (%d kB) a spec may have", len(src), MaxSpecBytes, MaxSpecBytes/1000)
+		return p.spec, p.diags
+	}
+	src = bytes.TrimPrefix(src, []byte(byteOrderMark))
 	p.lineStarts = []int{0}
 	for i, c := range src {
 		if c == '\n' {
 			p.lineStarts = append(p.lineStarts, i+1)
 		}
 	}
-	root := markdown.Parser().Parse(text.NewReader(src))
+	p.src = p.checkText(src)
+	root := markdown.Parser().Parse(text.NewReader(p.src))
 	p.spec.Narrative = p.blocksOf(root, false)
 	p.design()
 	if p.spec.Memo.Title == "" {
@@ -241,7 +256,11 @@ func (p *parser) blocksOf(n ast.Node, inQuote bool) []doc.Block {
 			out = append(out, doc.Code{Text: p.codeText(c)})
 		case *east.Table:
 			out = append(out, p.table(c))
-		case *ast.ThematicBreak, *ast.HTMLBlock:
+		case *ast.HTMLBlock:
+			// no counterpart in the memo, but a parameter block it
+			// swallowed is read (see htmlBlock)
+			out = append(out, p.htmlBlock(c, inQuote)...)
+		case *ast.ThematicBreak:
 			// no counterpart in the memo
 		default:
 			out = append(out, p.blocksOf(c, inQuote)...)
@@ -445,4 +464,129 @@ func spansText(spans []doc.Span) string {
 		b.WriteString(s.Text)
 	}
 	return b.String()
+}
+
+// MaxSpecBytes bounds the size of a spec: a long design memo's spec is a
+// few tens of kilobytes; a file this large is not one.
+const MaxSpecBytes = 256_000
+
+const byteOrderMark = "\uFEFF"
+
+// maxTextDiags bounds the diagnostics about invalid bytes and control
+// characters: a binary file would give one per byte.
+const maxTextDiags = 20
+
+// checkText reports every byte of src that is not UTF-8 and every control
+// character other than tab and the line breaks (all text of a spec is
+// printed: prose in the memo, values in its inputs table), and returns src
+// with each of them replaced by '?' so that the rest of the spec is read
+// with its positions unchanged.
+func (p *parser) checkText(src []byte) []byte {
+	out, copied := src, false
+	n := 0
+	report := func(off int, format string, args ...any) {
+		if !copied {
+			out, copied = append([]byte(nil), src...), true
+		}
+		n++
+		if n <= maxTextDiags {
+			ln := p.lineOf(off)
+			col := utf8.RuneCount(src[p.lineStarts[ln-1]:off]) + 1
+			p.errf(ln, "column %d: %s", col, fmt.Sprintf(format, args...))
+		}
+	}
+	for i := 0; i < len(src); {
+		c := src[i]
+		if c < utf8.RuneSelf {
+			if (c < 0x20 && c != '\t' && c != '\n' && c != '\r') || c == 0x7f {
+				report(i, "control character U+%04X; a spec may hold no control characters other than tab", c)
+				out[i] = '?'
+			}
+			i++
+			continue
+		}
+		r, size := utf8.DecodeRune(src[i:])
+		switch {
+		case r == utf8.RuneError && size == 1:
+			report(i, "byte 0x%02X is not UTF-8; save the spec as UTF-8", c)
+			out[i] = '?'
+		case unicode.IsControl(r):
+			report(i, "control character U+%04X; a spec may hold no control characters other than tab", r)
+			for k := 0; k < size; k++ {
+				out[i+k] = '?'
+			}
+		}
+		i += size
+	}
+	if n > maxTextDiags {
+		p.errf(p.lineOf(len(src)-1), "%d more invalid bytes or control characters not listed", n-maxTextDiags)
+	}
+	return out
+}
+
+// fenceInfo returns the block name a line opening a fenced code block
+// gives ("coil" for "```coil"), or "".
+func fenceInfo(line []byte) string {
+	t := bytes.TrimLeft(line, " ")
+	if len(line)-len(t) > 3 {
+		return ""
+	}
+	for _, f := range []string{"```", "~~~"} {
+		if bytes.HasPrefix(t, []byte(f)) {
+			info := strings.Fields(strings.TrimLeft(string(t), f[:1]))
+			if len(info) > 0 {
+				return strings.ToLower(info[0])
+			}
+		}
+	}
+	return ""
+}
+
+// htmlBlock looks into an HTML block for the opening fence of a parameter
+// block. An HTML block that ends at a blank line (a <div> line, say)
+// swallows a fence written right under it; that fence and everything after
+// it in the block is read again as Markdown, so the parameter block counts.
+// A fence inside an HTML block that ends only at its closing tag
+// (<pre>, <script>, an unclosed <!-- comment) is not read, and is reported.
+func (p *parser) htmlBlock(c *ast.HTMLBlock, inQuote bool) []doc.Block {
+	lines := c.Lines()
+	for i := 0; i < lines.Len(); i++ {
+		seg := lines.At(i)
+		name := fenceInfo(seg.Value(p.src))
+		if !isBlockName(name) {
+			continue
+		}
+		ln := p.lineOf(seg.Start)
+		switch c.HTMLBlockType {
+		case ast.HTMLBlockType6, ast.HTMLBlockType7:
+			if p.rereads++; p.rereads > maxRereads {
+				p.errf(ln, "the %s block here follows a line of HTML without a blank line between them; put a blank line before it", name)
+				return nil
+			}
+			end := lines.At(lines.Len() - 1).Stop
+			// the part of the source from the fence to the end of the
+			// block, everything else blanked: offsets and lines stay
+			sub := make([]byte, end)
+			for k, b := range p.src[:end] {
+				if b == '\n' || b == '\r' || (k >= seg.Start && k < end) {
+					sub[k] = b
+				} else {
+					sub[k] = ' '
+				}
+			}
+			return p.blocksOf(markdown.Parser().Parse(text.NewReader(sub)), inQuote)
+		case ast.HTMLBlockType2:
+			if c.HasClosure() {
+				continue // a parameter block commented out on purpose
+			}
+			p.errf(ln, "the %s block here is inside an HTML comment that opens on line %d and is never closed (no -->), so it is not read",
+				name, p.lineOf(lines.At(0).Start))
+			return nil
+		default:
+			p.errf(ln, "the %s block here is inside the HTML block that opens on line %d, so it is not read; close the HTML before it, with a blank line between",
+				name, p.lineOf(lines.At(0).Start))
+			return nil
+		}
+	}
+	return nil
 }

@@ -19,11 +19,10 @@ import (
 	"io"
 	"os"
 	"path/filepath"
-	"strconv"
 	"strings"
-	"time"
 
 	"coilmemo/memo"
+	"coilmemo/spec"
 )
 
 const usage = `coilmemo %s – coil calculation memos from Markdown specs
@@ -173,11 +172,15 @@ func flagErr(err error, help string, stdout io.Writer) error {
 
 // load reads and evaluates one spec, turning diagnostics into exit status 2.
 func load(path string, stderr io.Writer) (*analysis.Study, error) {
-	src, err := os.ReadFile(path)
+	src, err := readSpec(path)
+	if err != nil {
+		return nil, err
+	}
+	date, _, err := sourceDateEpoch(os.Getenv("SOURCE_DATE_EPOCH"))
 	if err != nil {
 		return nil, &exitError{2, "coilmemo: " + err.Error()}
 	}
-	job, diags := analysis.Run(path, src, analysis.Options{Date: sourceDateEpoch()})
+	job, diags := analysis.Run(path, src, analysis.Options{Name: filepath.Base(path), Date: date})
 	if len(diags) > 0 {
 		for _, d := range diags {
 			fmt.Fprintln(stderr, d.Error())
@@ -190,6 +193,33 @@ func load(path string, stderr io.Writer) (*analysis.Study, error) {
 		return nil, &exitError{2, fmt.Sprintf("%s: %d problem%s; nothing written", path, n, s)}
 	}
 	return job, nil
+}
+
+// readSpec reads a spec file: a regular file of at most spec.MaxSpecBytes
+// (a device such as /dev/zero, a FIFO or a folder is refused before it is
+// read, and an oversized file after reading one byte past the bound).
+// Every failure is exit status 2.
+func readSpec(path string) ([]byte, error) {
+	fi, err := os.Stat(path)
+	if err != nil {
+		return nil, &exitError{2, "coilmemo: " + err.Error()}
+	}
+	if !fi.Mode().IsRegular() {
+		return nil, &exitError{2, fmt.Sprintf("coilmemo: %s is not a regular file", path)}
+	}
+	f, err := os.Open(path)
+	if err != nil {
+		return nil, &exitError{2, "coilmemo: " + err.Error()}
+	}
+	defer f.Close()
+	src, err := io.ReadAll(io.LimitReader(f, spec.MaxSpecBytes+1))
+	if err != nil {
+		return nil, &exitError{2, "coilmemo: " + err.Error()}
+	}
+	if len(src) > spec.MaxSpecBytes {
+		return nil, &exitError{2, fmt.Sprintf("%s:1: the spec is more than %d bytes, the most a spec may have; nothing written", path, spec.MaxSpecBytes)}
+	}
+	return src, nil
 }
 
 func build(args []string, stdout, stderr io.Writer) error {
@@ -320,19 +350,4 @@ func calcCmd(args []string, stdout, stderr io.Writer) error {
 		return &exitError{1, "coilmemo: --strict: a requirement or check failed"}
 	}
 	return nil
-}
-
-// sourceDateEpoch is the build date the reproducible-builds convention
-// passes in SOURCE_DATE_EPOCH (seconds since 1970), or zero when it is not
-// set or not a number.
-func sourceDateEpoch() time.Time {
-	v := os.Getenv("SOURCE_DATE_EPOCH")
-	if v == "" {
-		return time.Time{}
-	}
-	sec, err := strconv.ParseInt(v, 10, 64)
-	if err != nil {
-		return time.Time{}
-	}
-	return time.Unix(sec, 0).UTC()
 }

@@ -69,17 +69,18 @@ func (r *renderer) heading(h doc.Heading, next doc.Block) {
 		number++
 	}
 	hl := r.layoutHeading(h, number)
+	if hl.h+hl.hs.after > (bodyBottom-bodyTop)/2 {
+		// Too long to keep on a page with what follows: its lines flow
+		// over the pages like a paragraph's.
+		r.longHeading(h, hl, number)
+		return
+	}
 	// Keep the heading with the start of what follows it.
 	if !r.fresh && hl.h+hl.hs.after+r.minHeight(next) > r.room(hl.hs.before) {
 		r.newPage()
 	}
 	r.need(hl.hs.before, hl.h)
-	if h.Level <= 1 {
-		r.h1 = number
-		r.bookmark(hl.number+" "+h.Text, 0)
-	} else {
-		r.bookmark(h.Text, h.Level-1)
-	}
+	r.headingBookmark(h, hl, number)
 	y := r.y
 	x := r.x
 	if hl.number != "" {
@@ -96,6 +97,34 @@ func (r *renderer) heading(h doc.Heading, next doc.Block) {
 	}
 	r.y = y
 	r.after(hl.hs.after)
+}
+
+func (r *renderer) headingBookmark(h doc.Heading, hl headingLayout, number int) {
+	if h.Level <= 1 {
+		r.h1 = number
+		r.bookmark(hl.number+" "+h.Text, 0)
+	} else {
+		r.bookmark(h.Text, h.Level-1)
+	}
+}
+
+// longHeading sets a heading taller than half a page, its number (if any)
+// beside its first line, breaking pages between its lines.
+func (r *renderer) longHeading(h doc.Heading, hl headingLayout, number int) {
+	if !r.fresh && r.room(hl.hs.before) < 3*hl.hs.st.lead {
+		r.newPage()
+	}
+	r.need(hl.hs.before, 0)
+	r.headingBookmark(h, hl, number)
+	ox, ow := r.x, r.w
+	if hl.number != "" {
+		st := hl.hs.st
+		r.marker = &marker{text: hl.number, right: r.x + textWidthOf("sans", "B", st.size, hl.number), st: &st}
+		r.x += hl.hs.numberWidth
+		r.w -= hl.hs.numberWidth
+	}
+	r.flowLines(hl.lines, hl.hs.st, 0, hl.hs.after)
+	r.x, r.w = ox, ow
 }
 
 // minHeight is the least of a block that must follow a heading on the
@@ -205,7 +234,11 @@ func (r *renderer) flowLines(lines []line, st textStyle, before, after float64) 
 func (r *renderer) drawMarker(baseline float64) {
 	m := r.marker
 	r.marker = nil
-	f := makeFrag(styMarker, m.text)
+	st := styMarker
+	if m.st != nil {
+		st = *m.st
+	}
+	f := makeFrag(st, m.text)
 	r.text(f, m.right-f.w, baseline)
 }
 
@@ -246,6 +279,10 @@ func roman(n int) string {
 	return b.String()
 }
 
+// maxListIndentDepth is the nesting depth beyond which lists indent no
+// further.
+const maxListIndentDepth = 8
+
 func (r *renderer) list(l doc.List) {
 	indent := 15.0
 	if l.Ordered {
@@ -254,6 +291,12 @@ func (r *renderer) list(l doc.List) {
 			widest = max(widest, textWidthOf("sans", "", sizeBody, listMarker(true, r.depth, i)))
 		}
 		indent = max(indent, widest+6)
+	}
+	// Nested lists indent up to a depth, and never below half the text
+	// width; deeper ones set their markers in the same column.
+	indent = min(indent, textWidth/4)
+	if r.depth >= maxListIndentDepth || r.w-indent < textWidth/2 {
+		indent = 0
 	}
 	for i, item := range l.Items {
 		ox, ow := r.x, r.w
@@ -451,6 +494,14 @@ func (r *renderer) layoutTable(t doc.Table, number int) *tableLayout {
 	if len(tl.head) > 0 {
 		tl.headH = height(tl.head)
 	}
+	var headRow []cellBox
+	if tl.headH > (bodyBottom-bodyTop)/4 {
+		// a header this tall is not repeated on every page: it becomes
+		// the first row
+		headRow, tl.head, tl.headH = tl.head, nil, 0
+		tl.rows = append(tl.rows, headRow)
+		tl.rowH = append(tl.rowH, height(headRow))
+	}
 	for i, row := range rowRuns {
 		cells := make([]cellBox, ncol)
 		for j, runs := range row {
@@ -555,9 +606,16 @@ func (r *renderer) table(t doc.Table) {
 	if len(tl.widths) == 0 {
 		return
 	}
+	if tl.capH > (bodyBottom-bodyTop)/3 {
+		// a caption this long flows on its own above the table
+		r.flowLines(tl.cap, styCaption, 8, 3)
+		tl.cap, tl.capH = nil, 0
+	}
+	// the caption, the header and the first row (or the first lines of a
+	// row too tall for a page) stay together
 	first := tl.capH + tl.headH
 	if len(tl.rowH) > 0 {
-		first += tl.rowH[0]
+		first += min(tl.rowH[0], 3*leadTable+2*cellPadY)
 	}
 	r.need(8, first)
 	y := r.y
@@ -570,23 +628,16 @@ func (r *renderer) table(t doc.Table) {
 	}
 	y = r.tableHead(tl, y)
 	onPage := 0
+	// a row taller than this is split between its lines across pages
+	tall := bodyBottom - bodyTop - leadCaption - 3 - tl.headH
 	for i, cells := range tl.rows {
 		h := tl.rowH[i]
+		if h > tall {
+			y, onPage = r.splitRow(tl, cells, y, onPage)
+			continue
+		}
 		if onPage > 0 && y+h > bodyBottom {
-			r.rule(r.x, y, r.x+r.w, 0.9, colAccent)
-			r.newPage()
-			r.fresh = false
-			y = r.y
-			cont := "(continued)"
-			if tl.label != "" {
-				cont = tl.label + " (continued)"
-			}
-			st := styCaption
-			st.color = colMuted
-			st.italic = true
-			r.simpleText(cont, st, r.x, y+baselineOffset(sizeCaption, leadCaption))
-			y += leadCaption + 3
-			y = r.tableHead(tl, y)
+			y = r.tableContinued(tl, y)
 			onPage = 0
 		}
 		if onPage > 0 {
@@ -600,6 +651,65 @@ func (r *renderer) table(t doc.Table) {
 	r.y = y
 	r.fresh = false
 	r.after(11)
+}
+
+// tableContinued closes the table at y at the foot of the page and opens
+// it again on the next, under a "(continued)" line and the header; it
+// returns the cursor below the header.
+func (r *renderer) tableContinued(tl *tableLayout, y float64) float64 {
+	r.rule(r.x, y, r.x+r.w, 0.9, colAccent)
+	r.newPage()
+	r.fresh = false
+	y = r.y
+	cont := "(continued)"
+	if tl.label != "" {
+		cont = tl.label + " (continued)"
+	}
+	st := styCaption
+	st.color = colMuted
+	st.italic = true
+	r.simpleText(cont, st, r.x, y+baselineOffset(sizeCaption, leadCaption))
+	y += leadCaption + 3
+	return r.tableHead(tl, y)
+}
+
+// splitRow sets a row too tall for a page in slices of its lines, each
+// slice as much as fits on the page, the table continued on the next page
+// between them. It returns the cursor and the rows on the last page.
+func (r *renderer) splitRow(tl *tableLayout, cells []cellBox, y float64, onPage int) (float64, int) {
+	n := 0
+	for _, c := range cells {
+		n = max(n, len(c.lines))
+	}
+	for start := 0; start < n; {
+		k := int((bodyBottom - y - 2*cellPadY + 0.01) / leadTable)
+		if k < 2 && onPage > 0 {
+			y = r.tableContinued(tl, y)
+			onPage = 0
+			continue
+		}
+		k = max(1, min(k, n-start))
+		slice := make([]cellBox, len(cells))
+		for j, c := range cells {
+			slice[j].status = c.status
+			if start < len(c.lines) {
+				slice[j].lines = c.lines[start:min(start+k, len(c.lines))]
+			}
+		}
+		if onPage > 0 {
+			r.rule(r.x, y, r.x+r.w, 0.3, colRule)
+		}
+		h := float64(k)*leadTable + 2*cellPadY
+		r.tableRow(tl, slice, y, h)
+		y += h
+		onPage++
+		start += k
+		if start < n {
+			y = r.tableContinued(tl, y)
+			onPage = 0
+		}
+	}
+	return y, onPage
 }
 
 func (r *renderer) tableHead(tl *tableLayout, y float64) float64 {
@@ -706,6 +816,10 @@ func (r *renderer) layoutTitleBlock(tb doc.TitleBlock) titleLayout {
 
 func (r *renderer) titleBlock(tb doc.TitleBlock) {
 	tl := r.layoutTitleBlock(tb)
+	if tl.h > bodyBottom-bodyTop {
+		r.longTitleBlock(tb, tl)
+		return
+	}
 	r.need(0, tl.h)
 	x, y, w := r.x, r.y, r.w
 	// Title band.
@@ -744,6 +858,24 @@ func (r *renderer) titleBlock(tb doc.TitleBlock) {
 	}
 	r.strokeRect(x, y, w, tl.h, 1.0, colAccent)
 	r.y = y + tl.h
+	r.after(16)
+}
+
+// longTitleBlock sets a title block too tall for a page without its box:
+// the title, then each field's label and value, breaking pages between
+// lines.
+func (r *renderer) longTitleBlock(tb doc.TitleBlock, tl titleLayout) {
+	kicker := textStyle{size: tbLabelSize + 0.4, lead: tbLabelLead, color: colAccent, bold: true}
+	r.flowLines(layoutSpans(plainSpans("CALCULATION MEMO"), kicker, r.w, r.w), kicker, 0, 2)
+	tst := textStyle{size: sizeTitle, lead: tbTitleLead, color: colInk, bold: true}
+	r.flowLines(tl.title, tst, 0, 8)
+	lst := textStyle{size: tbLabelSize, lead: tbLabelLead, color: colMuted, bold: true}
+	vst := textStyle{size: sizeBody, lead: tbValueLead, color: colInk}
+	for _, f := range tb.Fields {
+		r.flowLines(layoutSpans(plainSpans(strings.ToUpper(f[0])), lst, r.w, r.w), lst, 4, 0)
+		r.flowLines(layoutSpans(plainSpans(f[1]), vst, r.w, r.w), vst, 0, 4)
+	}
+	r.rule(r.x, r.y+2, r.x+r.w, 0.8, colAccent)
 	r.after(16)
 }
 

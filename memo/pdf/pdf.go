@@ -32,6 +32,9 @@ type options struct {
 	compress bool
 	// onText, if set, sees every string set on a page (tests).
 	onText func(page int, s string)
+	// onPlace, if set, sees every string set on a page with the left end
+	// of its baseline, points from the top-left corner (tests).
+	onPlace func(page int, x, y float64, s string)
 }
 
 func render(d *doc.Document, o options) (out []byte, err error) {
@@ -65,13 +68,14 @@ func render(d *doc.Document, o options) (out []byte, err error) {
 var epoch = time.Date(2000, 1, 1, 0, 0, 0, 0, time.UTC)
 
 type renderer struct {
-	pdf    *fpdf.Fpdf
-	fonts  *fontSet
-	meta   doc.Meta
-	blocks []doc.Block
-	total  int  // page count, 0 while unknown
-	dry    bool // lay out only
-	onText func(page int, s string)
+	pdf     *fpdf.Fpdf
+	fonts   *fontSet
+	meta    doc.Meta
+	blocks  []doc.Block
+	total   int  // page count, 0 while unknown
+	dry     bool // lay out only
+	onText  func(page int, s string)
+	onPlace func(page int, x, y float64, s string)
 
 	x, w  float64 // current column
 	y     float64 // cursor, points from the top edge
@@ -86,7 +90,8 @@ type renderer struct {
 
 type marker struct {
 	text  string
-	right float64 // right edge of the marker
+	right float64    // right edge of the marker
+	st    *textStyle // nil: the list marker style
 }
 
 func newRenderer(d *doc.Document, o options, total int, dry bool) *renderer {
@@ -99,6 +104,7 @@ func newRenderer(d *doc.Document, o options, total int, dry bool) *renderer {
 		total:   total,
 		dry:     dry,
 		onText:  o.onText,
+		onPlace: o.onPlace,
 		outline: -1,
 	}
 	created := d.Meta.Created
@@ -238,7 +244,12 @@ func (r *renderer) header() {
 		return
 	}
 	base := mm(12.2)
-	id := r.meta.DocID
+	// The id takes at most half the line when there is a title beside it.
+	idRoom := textWidth
+	if r.meta.Title != "" {
+		idRoom = textWidth / 2
+	}
+	id := fit(r.meta.DocID, styHeaderBold, idRoom)
 	idW := 0.0
 	if id != "" {
 		idW = textWidthOf("sans", "B", styHeaderBold.size, id)
@@ -267,29 +278,29 @@ func (r *renderer) footer() {
 	if !r.meta.Created.IsZero() {
 		left = append(left, r.meta.Created.UTC().Format("2006-01-02"))
 	}
-	if len(left) > 0 {
-		r.simpleText(strings.Join(left, "  ·  "), styHeader, marginLeft, base)
-	}
 	page := fmt.Sprintf("Page %d of %d", r.pdf.PageNo(), r.total)
 	w := textWidthOf("sans", "", styHeader.size, page)
+	if len(left) > 0 {
+		if s := fit(strings.Join(left, "  ·  "), styHeader, textWidth-w-mm(8)); s != "" {
+			r.simpleText(s, styHeader, marginLeft, base)
+		}
+	}
 	r.simpleText(page, styHeader, pageW-marginRight-w, base)
 }
 
-// fit shortens s with an ellipsis until it is at most w wide.
+// fit shortens s with an ellipsis until it is at most w wide: one cut,
+// found in one pass over the characters' widths.
 func fit(s string, st textStyle, w float64) string {
 	fam, sty := st.face()
+	s = bmp(s)
 	if textWidthOf(fam, sty, st.size, s) <= w {
 		return s
 	}
-	rs := []rune(s)
-	for len(rs) > 0 {
-		rs = rs[:len(rs)-1]
-		t := strings.TrimRight(string(rs), " ") + "…"
-		if textWidthOf(fam, sty, st.size, t) <= w {
-			return t
-		}
+	ell := textWidthOf(fam, sty, st.size, "…")
+	if ell > w {
+		return ""
 	}
-	return ""
+	return strings.TrimRight(s[:prefixFitting(fam, sty, st.size, s, w-ell)], " ") + "…"
 }
 
 // ---- drawing helpers ----

@@ -385,6 +385,9 @@ func (r *renderer) text(f frag, x, y float64) {
 	if r.onText != nil {
 		r.onText(r.pdf.PageNo(), f.text)
 	}
+	if r.onPlace != nil {
+		r.onPlace(r.pdf.PageNo(), x, y, f.text)
+	}
 }
 
 // simpleText sets a plain string in one style.
