@@ -292,7 +292,49 @@ func (p *parser) sweepBlock(b *rawBlock, coils []*coilIn) {
 			return
 		}
 	}
+	if msg := sweepStepProblem(sw, targets); msg != "" {
+		p.errf(sw.Line, "sweep %s: %s", sw.Param, msg)
+		return
+	}
 	p.spec.Sweep = sw
+}
+
+// sweepStepProblem checks every value of a sweep as the coil block's own
+// key would be checked: positive where the key must be, a duty within
+// (0, 100 %], a spacing only on a pair, a wire's outer diameter above its
+// bare one, a diameter that leaves a bore. It names the first bad step.
+func sweepStepProblem(sw *Sweep, targets []*coilIn) string {
+	for _, v := range sw.Values() {
+		for _, ci := range targets {
+			c := ci.c
+			bad := ""
+			switch {
+			case math.IsNaN(v) || math.IsInf(v, 0):
+				bad = "is not a number"
+			case sw.Param == "duty" && !(v > 0 && v <= 1):
+				bad = "is outside 0 .. 100 %"
+			case sw.Param == "radial-build" && v < 0:
+				bad = "is negative"
+			case sw.Param != "duty" && sw.Param != "radial-build" && !(v > 0):
+				bad = "is not above zero"
+			case sw.Param == "spacing" && c.Form != calc.Pair:
+				bad = fmt.Sprintf("spacing applies only to form = pair, and coil %q is not a pair", c.Name)
+			case sw.Param == "wire-outer-diameter" && v <= c.Wire.Bare:
+				bad = fmt.Sprintf("is not more than the bare diameter %s of coil %q", units.Format(c.Wire.Bare, units.Length), c.Name)
+			case sw.Param == "outer-diameter" && v <= 2*c.RadialBuild:
+				bad = fmt.Sprintf("leaves no bore inside the radial build %s of coil %q", units.Format(c.RadialBuild, units.Length), c.Name)
+			case sw.Param == "radial-build" && c.MeanDiameter-c.RadialBuild+2*v <= 0:
+				bad = "leaves no bore"
+			}
+			if bad != "" {
+				if strings.Contains(bad, "coil") {
+					return fmt.Sprintf("the step %s: %s", units.Format(v, sweepDims[sw.Param]), bad)
+				}
+				return fmt.Sprintf("the step %s %s (coil %q)", units.Format(v, sweepDims[sw.Param]), bad, c.Name)
+			}
+		}
+	}
+	return ""
 }
 
 // parseRange reads "<from> .. <to> step <step>". A bound or step written

@@ -53,3 +53,28 @@ func TestBuildable(t *testing.T) {
 		}
 	}
 }
+
+// Sweep steps go through the checks of the key they step, and work bounds
+// are positioned errors.
+func TestSweepStepsAndWorkBounds(t *testing.T) {
+	coil := "name = t\nmean-diameter = 80 mm\nturns = 20\nwire = AWG 32\ncurrent = 0.1 A\nfrequency = 1 kHz\nswitch-off = 1 us\nduty = 50 %\n"
+	for _, c := range []struct{ sweep, msg string }{
+		{"frequency = -10 .. 10 Hz step 5 Hz", "is not above zero"},
+		{"switch-off = 0 .. 10 us step 5 us", "is not above zero"},
+		{"spacing = 10 .. 20 mm step 5 mm", "applies only to form = pair"},
+		{"wire-outer-diameter = 0.1 .. 0.3 mm step 0.1 mm", "not more than the bare diameter"},
+	} {
+		_, ds := Parse("s.md", []byte(fenced("coil", coil)+fenced("sweep", c.sweep+"\n")))
+		if len(ds) != 1 || ds[0].Line != 12 || !strings.Contains(ds[0].Msg, c.msg) {
+			t.Errorf("%s: %v; want line 12 %q", c.sweep, ds, c.msg)
+		}
+	}
+	_, ds := Parse("s.md", []byte(fenced("coil", "name = t\nform = solenoid\nmean-diameter = 80 mm\nlength = 10 m\nradial-build = 50 mm\nturns = 2000000\nwire = AWG 32\ncurrent = 0.1 A\n")))
+	found := false
+	for _, d := range ds {
+		found = found || (d.Line == 7 && strings.Contains(d.Msg, "the most this tool lays out"))
+	}
+	if !found {
+		t.Errorf("2 000 000 turns: %v", ds)
+	}
+}

@@ -105,6 +105,7 @@ func (p *parser) design() {
 		}
 		p.spec.Design.Coils = append(p.spec.Design.Coils, c.c)
 	}
+	p.checkWorkBounds(coils)
 	p.checkBuildable(coils)
 	if sweepBlock != nil {
 		p.sweepBlock(sweepBlock, coils)

@@ -178,7 +178,7 @@ func load(path string, stderr io.Writer) (*analysis.Study, error) {
 	}
 	date, _, err := sourceDateEpoch(os.Getenv("SOURCE_DATE_EPOCH"))
 	if err != nil {
-		return nil, &exitError{2, "coilmemo: " + err.Error()}
+		return nil, &exitError{2, err.Error()}
 	}
 	job, diags := analysis.Run(path, src, analysis.Options{Name: filepath.Base(path), Date: date})
 	if len(diags) > 0 {
