@@ -23,8 +23,9 @@ type CoilKinds struct {
 	// AboveResonance says the drive or design frequency is at or above the
 	// self-resonance (the impedance is not quoted); SelfResonance is the
 	// winding's (with its load for a receiver), Hz, NaN when unknown.
-	AboveResonance bool
-	SelfResonance  float64
+	AboveResonance  bool
+	SelfResonance   float64
+	SelfCapacitance float64 // F, the winding's (with a pick-up coil's load)
 	// ACPower is the heating at R_ac of a driven winding at its r.m.s.
 	// current, W (NaN without a frequency).
 	ACPower float64
@@ -46,7 +47,7 @@ func studyKinds(d calc.Design, r calc.Results) []CoilKinds {
 		}
 		cr := r.Coils[i]
 		w := cr.Winding
-		k := CoilKinds{AirMoment: cr.Moment, AirInductance: cr.Inductance, AirMass: cr.Mass, ACPower: math.NaN(), SelfResonance: math.NaN()}
+		k := CoilKinds{AirMoment: cr.Moment, AirInductance: cr.Inductance, AirMass: cr.Mass, ACPower: math.NaN(), SelfResonance: math.NaN(), SelfCapacitance: math.NaN()}
 		L := cr.Inductance
 		aEff := w.AreaSum
 		if c.Core.Present() {
@@ -69,10 +70,11 @@ func studyKinds(d calc.Design, r calc.Results) []CoilKinds {
 		if IsReceiver(c) {
 			rec := calc.EvaluateReceiver(c, w, aEff, cr.RHot, L, T)
 			k.Receiver = &rec
-			k.SelfResonance = rec.SelfResonance
+			k.SelfResonance, k.SelfCapacitance = rec.SelfResonance, rec.Capacitance
 			k.AboveResonance = rec.AboveResonance
 		} else {
-			k.SelfResonance = calc.SelfResonance(L, calc.SelfCapacitance(c, w))
+			k.SelfCapacitance = calc.SelfCapacitance(c, w)
+			k.SelfResonance = calc.SelfResonance(L, k.SelfCapacitance)
 		}
 		if c.Frequency > 0 && c.Form != calc.Rectangle && c.Form != calc.Pair {
 			ac := calc.ACResistance(c, w, cr.RHot, T, c.Frequency)
@@ -129,9 +131,10 @@ func coredResults(d calc.Design, r calc.Results, kinds []CoilKinds) calc.Results
 
 // KindLimitValue returns the value, SI, of the limit quantities of cored
 // and pick-up coils for limit l (ok false for another quantity): for a
-// coil block its own figure, for the design the largest (noise the
-// smallest is not asked: the largest, the worst). NaN where the quantity
-// does not apply to a coil it covers.
+// coil block its own figure; for the design the worst over the coils it
+// applies to: the smallest sensitivity and self-resonance, the largest
+// flux density, band noise and a.c. resistance. NaN where the quantity does
+// not apply to the coil named.
 func KindLimitValue(l calc.Limit, d calc.Design, kinds []CoilKinds) (float64, bool) {
 	get, ok := kindQuantities[l.Quantity]
 	if !ok {
@@ -152,7 +155,11 @@ func KindLimitValue(l calc.Limit, d calc.Design, kinds []CoilKinds) (float64, bo
 	if len(idx) == 0 {
 		return math.NaN(), true
 	}
+	smallest := l.Quantity == "sensitivity" || l.Quantity == "self-resonance"
 	v := math.Inf(-1)
+	if smallest {
+		v = math.Inf(1)
+	}
 	for _, i := range idx {
 		if i >= len(kinds) {
 			return math.NaN(), true
@@ -161,7 +168,11 @@ func KindLimitValue(l calc.Limit, d calc.Design, kinds []CoilKinds) (float64, bo
 		if math.IsNaN(x) {
 			return math.NaN(), true
 		}
-		v = math.Max(v, x)
+		if smallest {
+			v = math.Min(v, x)
+		} else {
+			v = math.Max(v, x)
+		}
 	}
 	return v, true
 }
@@ -173,23 +184,17 @@ var kindQuantities = map[string]func(CoilKinds) float64{
 		}
 		return k.Core.FluxDensityPeak
 	},
-	"apparent-permeability": func(k CoilKinds) float64 {
-		if k.Core == nil {
-			return math.NaN()
-		}
-		return k.Core.ApparentPermeability
-	},
 	"sensitivity": func(k CoilKinds) float64 {
 		if k.Receiver == nil {
 			return math.NaN()
 		}
 		return k.Receiver.Sensitivity
 	},
-	"noise-field": func(k CoilKinds) float64 {
+	"band-noise": func(k CoilKinds) float64 {
 		if k.Receiver == nil {
 			return math.NaN()
 		}
-		return k.Receiver.NoiseField
+		return k.Receiver.BandNoiseField
 	},
 	"self-resonance": func(k CoilKinds) float64 { return k.SelfResonance },
 	"resistance-ac": func(k CoilKinds) float64 {
