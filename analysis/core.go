@@ -11,6 +11,9 @@ import (
 type CoilKinds struct {
 	// Core is the core's figures at the operating current (nil: air core).
 	Core *calc.CoreResult
+	// EndField is |B| of core and winding on the axis RodEndPoint core
+	// diameters beyond the core's end, T (NaN without a core or current).
+	EndField float64
 	// Air is the block's result without its core (the winding alone): the
 	// moment, inductance and mass before the core's share is added.
 	AirMoment     calc.Vec
@@ -47,12 +50,15 @@ func studyKinds(d calc.Design, r calc.Results) []CoilKinds {
 		}
 		cr := r.Coils[i]
 		w := cr.Winding
-		k := CoilKinds{AirMoment: cr.Moment, AirInductance: cr.Inductance, AirMass: cr.Mass, ACPower: math.NaN(), SelfResonance: math.NaN(), SelfCapacitance: math.NaN()}
+		k := CoilKinds{AirMoment: cr.Moment, AirInductance: cr.Inductance, AirMass: cr.Mass, ACPower: math.NaN(), SelfResonance: math.NaN(), SelfCapacitance: math.NaN(), EndField: math.NaN()}
 		L := cr.Inductance
 		aEff := w.AreaSum
 		if c.Core.Present() {
 			core := calc.EvaluateCore(c, w, cr.Current)
 			k.Core = &core
+			if cr.Current != 0 {
+				k.EndField = RodEndField(c, cr, core)
+			}
 			if !math.IsNaN(core.InductanceAdded) {
 				L += core.InductanceAdded
 				if IsReceiver(c) {

@@ -52,7 +52,7 @@ func kindFindings(d calc.Design, r calc.Results, kinds []CoilKinds, in []Finding
 				add(CoreProblem, Caution, math.NaN())
 			}
 			if r.Coils[i].Current != 0 {
-				if b := RodEndField(c, r.Coils[i], *k.Core); b >= ImplantField {
+				if b := k.EndField; b >= ImplantField {
 					add(RodNearField, Warning, b)
 				}
 			}

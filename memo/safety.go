@@ -45,6 +45,8 @@ func Cautions(j *analysis.Study) []doc.Callout {
 			out = append(out, switchOffCaution(f, cr, name))
 		case analysis.ACDrive:
 			out = append(out, acCaution(co, cr, name))
+		default:
+			out = append(out, kindCautions(j, f)...) // memo/core.go
 		}
 	}
 	if ir := j.Safety.Implant; ir.Searched {
