@@ -36,6 +36,7 @@ type CoilStudy struct {
 	Pair       *PairCurves // nil unless a pair with a centre field or gradient
 	Inductance InductanceParts
 	Heat       HeatParts
+	Kinds      CoilKinds // core, pick-up and a.c. figures (analysis/core.go)
 }
 
 // StudyCoil is the CoilStudy of coil block co with results cr in the

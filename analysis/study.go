@@ -80,15 +80,20 @@ func Analyse(s *spec.Spec, o Options) *Study {
 		st.Name = s.File
 	}
 	st.Results = calc.Evaluate(s.Design)
+	air, kinds := st.Results, studyKinds(s.Design, st.Results) // cored and pick-up coils: analysis/core.go
+	st.Results = coredResults(s.Design, air, kinds)
 	st.Cooling = calc.EffectiveCooling(s.Design.Conditions.Cooling)
 	st.Limits = JudgeLimits(s.Design, st.Results)
+	judgeKindLimits(s.Design, kinds, st.Limits)
 	for i, c := range s.Design.Coils {
-		st.Coils = append(st.Coils, StudyCoil(c, st.Results.Coils[i], s.Design.Conditions))
+		st.Coils = append(st.Coils, StudyCoil(c, air.Coils[i], s.Design.Conditions)) // the winding alone; the core in Kinds
+		st.Coils[i].Kinds = kinds[i]
 	}
 	st.Design = analyseDesign(s.Design, st.Results)
-	st.Checks = Verify(s.Design, st.Results)
+	st.Checks = append(Verify(s.Design, air), kindChecks(s.Design, air, kinds)...)
 	st.Sweep = RunSweep(s)
 	st.Safety = assessSafety(s.Design, st.Results, st.Coils)
+	st.Safety.Findings = kindFindings(s.Design, st.Results, kinds, st.Safety.Findings)
 	switch {
 	case !o.Date.IsZero():
 		st.Created, st.Dated, st.DateSource = o.Date.UTC(), true, "SOURCE_DATE_EPOCH"

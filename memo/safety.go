@@ -43,6 +43,8 @@ func Cautions(j *analysis.Study) []doc.Callout {
 				Spans: []doc.Span{{Text: templates.Text("caution-voltage", map[string]string{"Voltage": Eng(f.Value, "V", 3)})}}})
 		case analysis.SwitchOffVoltage:
 			out = append(out, switchOffCaution(f, cr, name))
+		default:
+			out = append(out, kindCautions(j, f)...) // memo/core.go
 		}
 	}
 	out = mergeCautions(out)

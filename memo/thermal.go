@@ -56,7 +56,7 @@ func (c *composer) heating() {
 			break
 		}
 		cr := r.Coils[i]
-		if !(cr.R20 > 0) || math.IsInf(cr.R20, 0) {
+		if !(cr.R20 > 0) || math.IsInf(cr.R20, 0) || analysis.IsReceiver(co) {
 			continue
 		}
 		c.heading(2, fmt.Sprintf("Coil %q", co.Name))

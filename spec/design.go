@@ -465,6 +465,9 @@ func (p *parser) coilValue(ci *coilIn, e kv) (string, bool) {
 		c.Centre = v
 		return formatVec(v, units.Length), true
 	}
+	if si, ok, mine := p.coreValue(ci, e); mine {
+		return si, ok
+	}
 	return "", false
 }
 
@@ -486,9 +489,10 @@ func (p *parser) checkCoil(ci *coilIn) {
 	switch {
 	case has("current") && has("voltage"):
 		p.errf(later("current", "voltage"), "%s: both current and voltage given; the drive is one of them", where)
-	case !has("current") && !has("voltage"):
-		p.errf(ci.fence, "%s: no drive: give current or voltage", where)
+	case !has("current") && !has("voltage") && !isReceiver(ci):
+		p.errf(ci.fence, "%s: no drive: give current or voltage (or, for a pick-up coil, a frequency)", where)
 	}
+	p.checkCore(ci)
 	if has("voltage") && !has("current") {
 		c.Drive = calc.VoltageDrive
 	}

@@ -103,6 +103,7 @@ type CoilReport struct {
 	DipoleAny01   Num         `json:"dipole_distance_any_0p1pct_m"`
 	Pair          *PairReport `json:"pair,omitempty"`
 	CoilHeatSwitch
+	CoilKindsReport
 }
 
 // PairReport is the region of a pair of coils: for an aiding pair the
@@ -186,6 +187,7 @@ func Build(j *analysis.Study) Report {
 			DipoleAny1: Num(cr.Dipole.Any1), DipoleAny01: Num(cr.Dipole.Any01),
 			CoilHeatSwitch: coilHeatSwitch(co, cr),
 		})
+		coilKinds(j, i, &rep.Coils[len(rep.Coils)-1])
 		if co.Form == calc.Pair {
 			p := cr.Pair
 			rep.Coils[len(rep.Coils)-1].Pair = &PairReport{SpacingToRadius: Num(p.SpacingRatio), Helmholtz: p.Helmholtz,

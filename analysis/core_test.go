@@ -1,0 +1,82 @@
+package analysis
+
+import (
+	"math"
+	"testing"
+
+	"coilmemo/calc"
+)
+
+func studyOf(t *testing.T, src string) *Study {
+	t.Helper()
+	st, ds := Run("t.md", []byte(src), Options{})
+	if len(ds) > 0 {
+		t.Fatal(ds.Error())
+	}
+	return st
+}
+
+const rodSpec = "```coil\nname = rod\nform = solenoid\nmean-diameter = 12 mm\nlength = 120 mm\nturns = 400\nwire = AWG 30\ncurrent = 0.1 A\n" +
+	"core-length = 140 mm\ncore-diameter = 8 mm\ncore-density = 7800 kg/m3\n"
+
+// A core of μr = 1 leaves every headline figure the air coil's exactly.
+func TestCoreUnitPermeabilityIsAir(t *testing.T) {
+	air := studyOf(t, "```coil\nname = rod\nform = solenoid\nmean-diameter = 12 mm\nlength = 120 mm\nturns = 400\nwire = AWG 30\ncurrent = 0.1 A\n```\n")
+	one := studyOf(t, rodSpec+"core-permeability = 1\n```\n")
+	a, b := air.Results.Coils[0], one.Results.Coils[0]
+	if a.Moment != b.Moment || a.Inductance != b.Inductance || air.Results.TorqueMax != one.Results.TorqueMax {
+		t.Errorf("μr = 1: moment %v / %v, L %g / %g", a.Moment, b.Moment, a.Inductance, b.Inductance)
+	}
+	// The mass gains only the core's ρ V = 7800 × π (4 mm)² × 140 mm.
+	core := 7800 * math.Pi * 0.004 * 0.004 * 0.140
+	if d := b.Mass - a.Mass; math.Abs(d-core) > 1e-12 {
+		t.Errorf("core mass added %g, want %g", d, core)
+	}
+}
+
+// With a core the headline moment and inductance are the cored ones, and
+// the far field at a probe is the dipole field of that moment.
+func TestCoredHeadline(t *testing.T) {
+	src := rodSpec + "core-permeability = 1000\n```\n```probes\nfar = (0, 0, 3) m\n```\n"
+	st := studyOf(t, src)
+	k := st.Coils[0].Kinds.Core
+	cr := st.Results.Coils[0]
+	if k == nil || math.Abs(cr.Moment.Norm()-k.Moment) > 1e-12*k.Moment || !(k.Moment > 10*st.Coils[0].Kinds.AirMoment.Norm()) {
+		t.Fatalf("cored moment %g, core result %+v", cr.Moment.Norm(), k)
+	}
+	if want := st.Coils[0].Kinds.AirInductance + k.InductanceAdded; cr.Inductance != want {
+		t.Errorf("L %g, want air + core %g", cr.Inductance, want)
+	}
+	// Dipole field on the axis, B = μ0 m / (2π z³) (Jackson 3rd ed., eq. 5.56);
+	// at 3 m, 21 rod lengths away, the rod's quadrupole-free pole pair and the
+	// winding differ from it by less than 0.1 %.
+	want := calc.Mu0 * cr.Moment.Norm() / (2 * math.Pi * 27)
+	if got := st.Results.Probes[0].B.Norm(); math.Abs(got/want-1) > 1e-3 {
+		t.Errorf("far field %g, dipole %g", got, want)
+	}
+	for _, c := range st.Checks {
+		if !c.Pass {
+			t.Errorf("check %q failed: %g vs %g", c.Name, c.Value, c.Expected)
+		}
+	}
+}
+
+// A pick-up coil: no drive findings, the noise floor √(4kTR)/S, and limits
+// judged on its figures.
+func TestReceiverStudy(t *testing.T) {
+	src := "```coil\nname = pick\nform = solenoid\ninner-diameter = 20 mm\nouter-diameter = 40 mm\nlength = 50 mm\nturns = 2000\nwire = AWG 36\nfrequency = 100 Hz\nband = 10 Hz .. 1 kHz\n```\n" +
+		"```limits\nsensitivity >= 1 V/T\nself-resonance >= 1 MHz\n```\n"
+	st := studyOf(t, src)
+	r := st.Coils[0].Kinds.Receiver
+	if r == nil {
+		t.Fatal("no receiver figures")
+	}
+	T := calc.CelsiusToKelvin(20)
+	want := math.Sqrt(4*calc.Boltzmann*T*r.Resistance) / r.Sensitivity
+	if math.Abs(r.NoiseField/want-1) > 1e-12 {
+		t.Errorf("noise %g, want √(4kTR)/S = %g", r.NoiseField, want)
+	}
+	if l := st.Limits; len(l) != 2 || !l[0].Pass || l[0].Computed != r.Sensitivity || l[1].Pass != (r.SelfResonance >= 1e6) {
+		t.Errorf("limits %+v (S %g, fsr %g)", l, r.Sensitivity, r.SelfResonance)
+	}
+}

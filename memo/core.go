@@ -1,0 +1,119 @@
+package memo
+
+import (
+	"fmt"
+	"math"
+
+	"coilmemo/analysis"
+	"coilmemo/doc"
+)
+
+// core writes up the soft-magnetic cores: demagnetising factor, apparent
+// permeability, moment, flux density and saturation, inductance, mass and
+// residual moment, every number from the Study.
+func (c *composer) core() {
+	d := c.j.Spec.Design
+	first := true
+	for i, co := range d.Coils {
+		k := c.j.Coils[i].Kinds
+		if k.Core == nil {
+			continue
+		}
+		if first {
+			c.heading(1, "Core")
+			c.para("The rod is modelled as axial slices magnetised by the winding's field and by each other; the demagnetising factors of the whole rod follow from the same model in a uniform field. A core with a relative permeability of 1 gives the air coil's figures exactly.")
+			first = false
+		}
+		r := k.Core
+		cr := c.j.Results.Coils[i]
+		c.heading(2, fmt.Sprintf("Coil %q", co.Name))
+		if r.Problem != "" {
+			c.para("The core model reports: " + r.Problem + ".")
+		}
+		kc := co.Core
+		steps := []Step{
+			{What: "Aspect ratio of the core", Symbolic: `\gamma = \frac{\ell_c}{D_c}`,
+				Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(kc.Length, "m", 4), Q(kc.Diameter, "m", 4)), Result: N(r.AspectRatio, 4)},
+			{What: "Magnetometric demagnetising factor of the cylinder at its permeability (axial slice model; Chen, Brug & Goldfarb, IEEE Trans. Magn. 27 (1991) 3601)",
+				Symbolic: `N_m = N_m(\gamma, \mu_r)`, Numbers: fmt.Sprintf(`N_m(%s, %s)`, N(r.AspectRatio, 4), N(kc.Permeability, 4)), Result: N(r.DemagMagnetometric, 4)},
+			{What: "Cross-check: the prolate spheroid of the same ratio (Osborn, Phys. Rev. 67 (1945) 351)",
+				Symbolic: `N_e = \frac{1}{\gamma^2 - 1} \left( \frac{\gamma}{\sqrt{\gamma^2 - 1}} \ln\left(\gamma + \sqrt{\gamma^2 - 1}\right) - 1 \right)`,
+				Result:   N(r.DemagEllipsoid, 4)},
+			{What: "Apparent permeability of the core", Symbolic: `\mu_{app} = \frac{\mu_r}{1 + N_m (\mu_r - 1)}`,
+				Numbers: fmt.Sprintf(`\frac{%s}{1 + %s \cdot (%s - 1)}`, N(kc.Permeability, 4), N(r.DemagMagnetometric, 4), N(kc.Permeability, 4)),
+				Result:  N(r.ApparentPermeability, 4)},
+		}
+		if cr.Current != 0 {
+			steps = append(steps,
+				Step{What: "Moment of winding and core (the core's moment is the sum of its slices' magnetisation times volume)",
+					Symbolic: `m = I \sum A + \sum_j M_j V_j`,
+					Numbers:  fmt.Sprintf(`%s + %s`, Q(k.AirMoment.Norm(), "A·m²", 4), Q(r.CoreMoment, "A·m²", 4)), Result: Q(r.Moment, "A·m²", 4)},
+				Step{What: "Peak flux density in the core", Symbolic: `B_{pk} = \mu_0 \max_j (H_j + M_j)`, Result: Q(r.FluxDensityPeak, "T", 4)})
+			if kc.Saturation > 0 {
+				steps = append(steps, Step{What: "Margin to saturation (of the core taken as never saturating)",
+					Symbolic: `1 - \frac{B_{lin}}{B_s}`, Numbers: fmt.Sprintf(`1 - \frac{%s}{%s}`, Q(r.FluxDensityLinear, "T", 4), Q(kc.Saturation, "T", 3)),
+					Result: N(r.SaturationMargin, 3)},
+					Step{What: "Current at which the core reaches saturation", Symbolic: `I_s = I \frac{B_s}{B_{lin}}`, Result: Q(r.SaturationCurrent, "A", 3)})
+			}
+			steps = append(steps, Step{What: "Inductance with the core: the air-core value plus the core's flux linkage per ampere",
+				Symbolic: `L = L_{air} + \Delta L`, Numbers: fmt.Sprintf(`%s + %s`, Q(k.AirInductance, "H", 4), Q(r.InductanceAdded, "H", 4)),
+				Result: Q(cr.Inductance, "H", 4)})
+		}
+		if !math.IsNaN(r.Mass) {
+			steps = append(steps, Step{What: "Mass of the core", Symbolic: `m_c = \rho_c \frac{\pi D_c^2}{4} \ell_c`,
+				Numbers: fmt.Sprintf(`%s \cdot \frac{\pi \cdot %s^2}{4} \cdot %s`, Q(kc.Density, "kg/m³", 4), Paren(Q(kc.Diameter, "m", 4)), Q(kc.Length, "m", 4)),
+				Result:  Q(r.Mass, "kg", 4)})
+		}
+		if !math.IsNaN(r.ResidualMoment) {
+			if r.ResidualBound {
+				steps = append(steps, Step{What: "Residual moment after switch-off, upper bound from the remanence alone (no coercivity given)",
+					Symbolic: `m_r \le \frac{B_r V}{\mu_0}`, Result: Q(r.ResidualMoment, "A·m²", 3)})
+			} else {
+				steps = append(steps, Step{What: "Residual moment after switch-off: the remanence on the rod's own load line",
+					Symbolic: `m_r = \frac{B_r V}{\mu_0 (1 - N_m) + B_r N_m / H_c}`, Result: Q(r.ResidualMoment, "A·m²", 3)})
+			}
+		}
+		c.derive(steps...)
+		if cr.Current != 0 && !math.IsNaN(r.PoleSeparation) {
+			c.para(fmt.Sprintf("Near the rod its field is that of its poles: %s each, %s apart; beyond a few rod lengths it is the dipole field of the moment. On the axis %s beyond the core's end the flux density is %s.",
+				Eng(r.PoleStrength, "A·m", 3), Eng(r.PoleSeparation, "m", 3), Eng(analysis.RodEndPoint*kc.Diameter, "m", 2),
+				Eng(k.EndField, "T", 3)))
+		}
+	}
+}
+
+// kindCautions words the findings of cored, pick-up and a.c. coils.
+func kindCautions(j *analysis.Study, f analysis.Finding) []doc.Callout {
+	co := j.Spec.Design.Coils[f.Coil]
+	name := fmt.Sprintf("coil %q", co.Name)
+	k := j.Coils[f.Coil].Kinds
+	switch f.Kind {
+	case analysis.RodNearField:
+		return []doc.Callout{{Severity: doc.Warning, Title: "Strong field at the rod's ends, " + name, Spans: []doc.Span{{Text: fmt.Sprintf(
+			"The core concentrates the field at its ends: %s on the axis %s beyond the end face, far above the 0.5 mT at which implanted medical devices may be affected. Keep the rod's ends clear of people and of magnetic tools, and mark it.",
+			Eng(f.Value, "T", 3), Eng(analysis.RodEndPoint*co.Core.Diameter, "m", 2))}}}}
+	case analysis.CoreSaturated:
+		return []doc.Callout{{Severity: doc.Warning, Title: "Core saturated, " + name, Spans: []doc.Span{{Text: fmt.Sprintf(
+			"The core's peak flux density, %s, reaches its saturation flux density %s: more current adds little moment and much heat. Saturation begins at %s.",
+			Eng(f.Value, "T", 3), Eng(co.Core.Saturation, "T", 3), Eng(k.Core.SaturationCurrent, "A", 3))}}}}
+	case analysis.CoreNearSat:
+		return []doc.Callout{{Severity: doc.Caution, Title: "Core near saturation, " + name, Spans: []doc.Span{{Text: fmt.Sprintf(
+			"The core's peak flux density, %s, is within 10 %% of saturation (%s); the moment grows less than in proportion above %s.",
+			Eng(f.Value, "T", 3), Eng(co.Core.Saturation, "T", 3), Eng(k.Core.SaturationCurrent, "A", 3))}}}}
+	case analysis.CoreProblem:
+		return []doc.Callout{{Severity: doc.Caution, Title: "Core model, " + name, Spans: []doc.Span{{Text: "The core model reports: " + k.Core.Problem + "."}}}}
+	case analysis.AboveResonance:
+		return []doc.Callout{{Severity: doc.Warning, Title: "Above self-resonance, " + name, Spans: []doc.Span{{Text: fmt.Sprintf(
+			"The frequency %s is at or above the winding's self-resonance, %s: the coil no longer behaves as an inductance, and no impedance is quoted. Use fewer turns, a sectioned winding or a lower frequency.",
+			Eng(co.Frequency, "Hz", 3), Eng(f.Value, "Hz", 3))}}}}
+	case analysis.NearResonance:
+		return []doc.Callout{{Severity: doc.Caution, Title: "Near self-resonance, " + name, Spans: []doc.Span{{Text: fmt.Sprintf(
+			"The frequency %s is above a third of the self-resonance, %s: the winding's capacitance already raises its apparent inductance by more than 12 %%, and the figures of the lumped model lose accuracy.",
+			Eng(co.Frequency, "Hz", 3), Eng(f.Value, "Hz", 3))}}}}
+	case analysis.ProximityLosses:
+		return []doc.Callout{{Severity: doc.Caution, Title: "Proximity losses, " + name, Spans: []doc.Span{{Text: fmt.Sprintf(
+			"At %s the a.c. resistance is %s times the d.c. resistance (Dowell's method): the winding dissipates %s, not the d.c. figure. Use stranded (litz) wire or fewer layers.",
+			Eng(co.Frequency, "Hz", 3), fmt.Sprintf("%.3g", f.Value), Eng(k.ACPower, "W", 3))}}}}
+	}
+	return nil
+}
