@@ -92,6 +92,7 @@ func Analyse(s *spec.Spec, o Options) *Study {
 	st.Sweep = RunSweep(s)
 	st.Safety = assessSafety(s.Design, st.Results, st.Coils)
 	st.WorstCase = AnalyseWorstCase(s, st.Results, st.Limits)
+	st.WorstCase.judge(st.Limits) // with tolerances, a limit passes only if met at every corner
 	switch {
 	case !o.Date.IsZero():
 		st.Created, st.Dated, st.DateSource = o.Date.UTC(), true, "SOURCE_DATE_EPOCH"

@@ -30,6 +30,8 @@ type WorstCase struct {
 	// result r with it at its low extreme, the others nominal, SI.
 	Swing [][]float64
 	MC    *MonteCarlo // nil without samples
+	// Derived is the corner the memo derives in full (Derivation).
+	Derived *WorstCorner
 	// Exact is set when every evaluation ran calc.Evaluate in full
 	// (a limit needed a result the quick evaluation leaves out).
 	Exact bool
@@ -59,10 +61,11 @@ type WorstResult struct {
 // requirement is met at nominal and at every corner; Failing counts the
 // corners at which it is missed.
 type WorstLimit struct {
-	Worst   float64
-	Corner  int
-	Pass    bool
-	Failing int
+	NominalPass bool // met by the nominal design
+	Worst       float64
+	Corner      int
+	Pass        bool
+	Failing     int
 }
 
 // MonteCarlo is the sampled distribution: each tolerance drawn uniformly
@@ -534,4 +537,58 @@ func interpolateExcess(corners []evaluation, u []float64) []float64 {
 		}
 	}
 	return out
+}
+
+// judge sets each limit's verdict to the worst case's: met at nominal and
+// at every corner. Nothing happens without a worst case.
+func (wc *WorstCase) judge(limits []LimitResult) {
+	if wc == nil {
+		return
+	}
+	for i := range limits {
+		if i < len(wc.Limits) {
+			wc.Limits[i].NominalPass = limits[i].Pass
+			limits[i].Pass = wc.Limits[i].Pass
+		}
+	}
+	wc.Derived = wc.Derivation(limits)
+}
+
+// WorstCorner is one corner evaluated in full for the memo's derivation:
+// the corner at which the first limit fails, or else the one giving the
+// least moment (the first headline result's minimum).
+type WorstCorner struct {
+	Corner  int    // index into Corners
+	Reason  string // the limit quantity that fails there, or the result minimised
+	Failing bool   // a limit fails there
+	Design  calc.Design
+	Results calc.Results
+	Coils   []CoilStudy
+}
+
+// Derivation evaluates the corner the memo derives in full; nil when
+// there is none.
+func (wc *WorstCase) Derivation(limits []LimitResult) *WorstCorner {
+	if wc == nil || len(wc.Corners) == 0 {
+		return nil
+	}
+	wk := &WorstCorner{Corner: -1}
+	for i, l := range wc.Limits {
+		if !l.Pass && l.Corner >= 0 && i < len(limits) {
+			wk.Corner, wk.Reason, wk.Failing = l.Corner, limits[i].Limit.Quantity, true
+			break
+		}
+	}
+	if wk.Corner < 0 && len(wc.Results) > 0 {
+		wk.Corner, wk.Reason = wc.Results[0].CornerMin, wc.Results[0].Quantity
+	}
+	if wk.Corner < 0 {
+		return nil
+	}
+	wk.Design = wc.Corners[wk.Corner].Design
+	wk.Results = calc.Evaluate(wk.Design)
+	for i, c := range wk.Design.Coils {
+		wk.Coils = append(wk.Coils, StudyCoil(c, wk.Results.Coils[i], wk.Design.Conditions))
+	}
+	return wk
 }
