@@ -500,7 +500,7 @@ func (wc *WorstCase) CornerName(h int) string {
 		case spec.Range:
 			s = units.Format(v, tol.Dim)
 			if tol.Dim == units.Temperature {
-				s = units.FormatNumber(v-273.15) + " °C"
+				s = strings.Replace(units.FormatNumber(v-273.15), "-", "−", 1) + " °C"
 			}
 		case spec.Standard:
 			s = "min"

@@ -7,6 +7,7 @@ import (
 
 	"coilmemo/analysis"
 	"coilmemo/calc"
+	"coilmemo/calc/units"
 	"coilmemo/doc"
 	"coilmemo/figures"
 	"coilmemo/spec"
@@ -54,12 +55,12 @@ func tolEnds(t spec.Tolerance, d calc.Design) (lo, hi string) {
 		return fmt.Sprintf("−%s %%", Sig(-t.Lo*100, 3)), fmt.Sprintf("+%s %%", Sig(t.Hi*100, 3))
 	case spec.Offset:
 		if t.Key == "turns" {
-			return fmt.Sprintf("−%s turns", Sig(-t.Lo, 3)), fmt.Sprintf("+%s turns", Sig(t.Hi, 3))
+			return fmt.Sprintf("−%g turns", -t.Lo), fmt.Sprintf("+%g turns", t.Hi)
 		}
-		u, f := "m", 1.0
-		if t.Key != "duty" {
-			return "−" + Eng(-t.Lo*f, u, 3), "+" + Eng(t.Hi*f, u, 3)
+		if unit := map[units.Dim]string{units.Length: "m", units.Time: "s", units.Frequency: "Hz"}[t.Dim]; unit != "" {
+			return "−" + Eng(-t.Lo, unit, 3), "+" + Eng(t.Hi, unit, 3)
 		}
+		return fmt.Sprintf("−%g", -t.Lo), fmt.Sprintf("+%g", t.Hi)
 	case spec.Range:
 		if t.Key == "ambient" {
 			return Eng(Celsius(t.Lo), "°C", 3), Eng(Celsius(t.Hi), "°C", 3)
