@@ -106,3 +106,28 @@ func TestWireTolerances(t *testing.T) {
 		t.Error("AWG 40 is outside the table")
 	}
 }
+
+// Any tolerances block gives positioned diagnostics or a usable block,
+// never a panic.
+func FuzzTolerances(f *testing.F) {
+	for _, s := range []string{"supply = ±5 %\n", "ambient = -20 degC .. 60 degC\nsamples = 20\n", "wire-diameter = standard\n",
+		"turns = +-2\nmean-diameter = ±0.3 mm\n", "background-field = 20 .. 50 uT\n", "duty = ±5 %\n", "supply = ±\n", "ambient = ..\n"} {
+		f.Add(s)
+	}
+	f.Fuzz(func(t *testing.T, body string) {
+		src := fenced("coil", coilBody) + fenced("conditions", "background-field = 45 uT\n") + fenced("tolerances", body)
+		s, ds := Parse("f.md", []byte(src))
+		for _, d := range ds {
+			if d.Line < 1 || d.Msg == "" {
+				t.Errorf("bad diagnostic %+v", d)
+			}
+		}
+		if len(ds) == 0 && s.Tolerances != nil {
+			for _, it := range s.Tolerances.Items {
+				if it.Mode != Standard && !(it.Hi > it.Lo) {
+					t.Errorf("empty tolerance %+v", it)
+				}
+			}
+		}
+	})
+}
