@@ -14,7 +14,7 @@ import (
 func Sensitivity(results, tolerances []string, swing [][]float64) DrawFunc {
 	pl := NewPlot("Change from the tolerance's low to its high end (% of nominal)", "")
 	n := len(tolerances)
-	width := vg.Points(16 / float64(max(n, 1)))
+	width := vg.Points(math.Min(3, 11/float64(max(n, 1))))
 	var curves []plotter.XYs
 	for t := range n {
 		v := make(plotter.Values, len(results))
@@ -34,7 +34,7 @@ func Sensitivity(results, tolerances []string, swing [][]float64) DrawFunc {
 		c := Viridis(0.1 + 0.8*float64(t)/float64(max(n-1, 1)))
 		b.Color = c
 		b.LineStyle.Width = 0
-		b.Offset = width * vg.Length(float64(t)-float64(n-1)/2)
+		b.Offset = width * vg.Length(float64(n-1)/2-float64(t)) // the first tolerance on top, as in the legend
 		pl.Add(b)
 		pl.Legend.Add(tolerances[t], b)
 	}
