@@ -249,9 +249,7 @@ func (c *composer) worstDerivation(wc *analysis.WorstCase) {
 		co.Wire.Gauge = calc.NoGauge // the ASTM B258 rule gives the nominal diameter, not the corner's
 	}
 	c.derive(steps...)
-	c.derive(coilSteps(co, cr, &cs)...)
-	c.derive(thermalSteps(co, cr)...)
-	c.derive(momentSteps(co, cr)...)
+	c.derive(coilSteps(co, cr, &cs)...) // resistance, temperature, current, power, moment, field
 	if cr.Switch.SwitchOff > 0 {
 		c.derive(switchingSteps(co, cr)...)
 	}
