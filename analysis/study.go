@@ -52,9 +52,11 @@ type Study struct {
 	Safety  Safety
 	// Design holds the figures of the design as a whole that the memo
 	// plots or states: the torque curve and the all-coils map.
-	Design  DesignStudy
-	Created time.Time // build date written into the memo
-	Dated   bool      // Created came from the environment or the spec
+	Design DesignStudy
+	// WorstCase is the design over its tolerances block; nil without one.
+	WorstCase *WorstCase
+	Created   time.Time // build date written into the memo
+	Dated     bool      // Created came from the environment or the spec
 	// DateSource says where Created came from: "SOURCE_DATE_EPOCH", "memo
 	// date" or "" (not dated).
 	DateSource string
@@ -94,6 +96,8 @@ func Analyse(s *spec.Spec, o Options) *Study {
 	st.Sweep = RunSweep(s)
 	st.Safety = assessSafety(s.Design, st.Results, st.Coils)
 	st.Safety.Findings = kindFindings(s.Design, st.Results, kinds, st.Safety.Findings)
+	st.WorstCase = AnalyseWorstCase(s, st.Results, st.Limits)
+	st.WorstCase.judge(st.Limits) // with tolerances, a limit passes only if met at every corner
 	switch {
 	case !o.Date.IsZero():
 		st.Created, st.Dated, st.DateSource = o.Date.UTC(), true, "SOURCE_DATE_EPOCH"

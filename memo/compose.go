@@ -58,6 +58,7 @@ var Sections = []Section{
 	section{"receiver", (*composer).receiver},
 	section{"heating", (*composer).heating},
 	section{"sweep", (*composer).sweep},
+	section{"worst-case", (*composer).worstCase},
 	section{"verification", (*composer).verification},
 	section{"safety", (*composer).safety},
 	section{"record", (*composer).record},
@@ -189,6 +190,9 @@ func (c *composer) verdict() doc.Paragraph {
 		s = append(s, doc.Span{Text: "No requirements were stated in the spec. "})
 	default:
 		s = append(s, doc.Span{Text: requirementsVerdict(len(limits), failedLimits), Strong: true}, doc.Span{Text: " "})
+	}
+	if w := c.worstVerdict(); w != "" {
+		s = append(s, doc.Span{Text: w})
 	}
 	if failedChecks > 0 {
 		s = append(s, doc.Span{Text: fmt.Sprintf("%d verification check(s) failed: see the Verification section before relying on these results.", failedChecks), Strong: true}, doc.Span{Text: " "})
@@ -329,7 +333,8 @@ func perCoilColumns(coils int, first, each float64) ([]doc.Align, []float64) {
 
 func (c *composer) limitsTable() doc.Table {
 	var rows [][]doc.Cell
-	for _, l := range c.j.Limits {
+	wc := c.j.WorstCase
+	for i, l := range c.j.Limits {
 		q := spec.LimitQuantities[l.Limit.Quantity]
 		unit := displayUnit(q.Unit)
 		rel := "≥"
@@ -337,8 +342,12 @@ func (c *composer) limitsTable() doc.Table {
 			rel = "≤"
 		}
 		req, got := l.Limit.Required, l.Computed
+		nominal := got
+		if wc != nil { // the margin at the worst corner
+			got = wc.Limits[i].Worst
+		}
 		if unit == "°C" {
-			req, got = Celsius(req), Celsius(got)
+			req, got, nominal = Celsius(req), Celsius(got), Celsius(nominal)
 		}
 		margin := "n/a"
 		switch {
@@ -361,6 +370,13 @@ func (c *composer) limitsTable() doc.Table {
 		if !l.Pass {
 			st = doc.Fail
 		}
+		if wc != nil {
+			rows = append(rows, []doc.Cell{
+				{Text: limitName(l) + ": " + testedOn(c.j, l, q)}, {Text: rel + " " + Eng(req, unit, 3)},
+				{Text: Eng(nominal, unit, 4)}, {Text: Eng(got, unit, 4)}, {Text: cornerCode(wc, wc.Limits[i].Corner)},
+				{Text: margin}, {Text: st.String(), Status: st, Strong: true}})
+			continue
+		}
 		rows = append(rows, []doc.Cell{
 			{Text: limitName(l) + ": " + testedOn(c.j, l, q)},
 			{Text: rel + " " + Eng(req, unit, 3)},
@@ -368,6 +384,12 @@ func (c *composer) limitsTable() doc.Table {
 			{Text: margin},
 			{Text: st.String(), Status: st, Strong: true},
 		})
+	}
+	if wc != nil {
+		return doc.Table{Caption: "Requirements compliance over the tolerances (worst: the corner closest to failing, signs as in the Worst case section; margin at that corner)",
+			Header: []string{"Requirement", "Required", "Nominal", "Worst", "Corner", "Margin", "Status"},
+			Rows:   rows, Widths: []float64{2.6, 1.2, 1.1, 1.1, 0.9, 0.9, 0.8},
+			Align: []doc.Align{doc.Left, doc.Right, doc.Right, doc.Right, doc.Center, doc.Right, doc.Center}}
 	}
 	return doc.Table{Caption: "Requirements compliance (margin: positive means met with room to spare)",
 		Header: []string{"Requirement", "Required", "Computed", "Margin", "Status"},

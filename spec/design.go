@@ -88,6 +88,8 @@ func (p *parser) design() {
 			p.probesBlock(b)
 		case blockSweep:
 			sweepBlock = b
+		case blockTolerances:
+			defer func() { p.tolerancesBlock(b, coils) }() // once every coil and the conditions are read
 		}
 	}
 	if !seenConditions {

@@ -121,6 +121,8 @@ type Spec struct {
 	Design    calc.Design
 	Entries   []Entry
 	Sweep     *Sweep // nil without a sweep block
+	// Tolerances is the tolerances block; nil without one.
+	Tolerances *Tolerances
 }
 
 // Block names of parameter blocks.
@@ -131,9 +133,10 @@ const (
 	blockLimits     = "limits"
 	blockProbes     = "probes"
 	blockSweep      = "sweep"
+	blockTolerances = "tolerances"
 )
 
-var blockNames = []string{blockMemo, blockCoil, blockConditions, blockLimits, blockProbes, blockSweep}
+var blockNames = []string{blockMemo, blockCoil, blockConditions, blockLimits, blockProbes, blockSweep, blockTolerances}
 
 func isBlockName(s string) bool {
 	for _, b := range blockNames {

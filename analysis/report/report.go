@@ -48,6 +48,9 @@ type Report struct {
 	LimitsFailed int           `json:"limits_failed"`
 	ChecksFailed int           `json:"checks_failed"`
 	Interactions
+	// WorstCase is each headline result over the tolerances' corners
+	// (worstcase.go); absent without a tolerances block.
+	WorstCase map[string]WorstReport `json:"worst_case,omitempty"`
 }
 
 // SweepReport is the design re-evaluated over one parameter's range.
@@ -145,6 +148,11 @@ type LimitReport struct {
 	Computed  Num    `json:"computed"`
 	Unit      string `json:"unit"`
 	Pass      bool   `json:"pass"`
+	// Worst and Corner are the computed value at the corner of the
+	// tolerances closest to failing and that corner's name; absent
+	// without a tolerances block. Pass is then met at every corner.
+	Worst  *Num   `json:"worst,omitempty"`
+	Corner string `json:"corner,omitempty"`
 }
 
 // CheckReport is one verification check.
@@ -219,6 +227,7 @@ func Build(j *analysis.Study) Report {
 		rep.Limits = append(rep.Limits, LimitReport{Quantity: l.Limit.Quantity, Subject: l.Limit.Subject, TestedOn: on, Tolerance: tol, Relation: rel,
 			Required: Num(req), Computed: Num(got), Unit: unit, Pass: l.Pass})
 	}
+	addWorstCase(&rep, j)
 	if sw := j.Spec.Sweep; sw != nil {
 		rep.Sweep = &SweepReport{Parameter: sw.Param, Coil: sw.Coil, Steps: []SweepStepReport{}}
 		for _, st := range j.Sweep {

@@ -1,0 +1,273 @@
+package memo
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"coilmemo/analysis"
+	"coilmemo/calc"
+	"coilmemo/calc/units"
+	"coilmemo/doc"
+	"coilmemo/figures"
+	"coilmemo/spec"
+)
+
+// worstNames are the headline results of the worst case as the memo names
+// them.
+var worstNames = map[string]string{
+	"moment": "Magnetic moment |m|", "torque": "Maximum torque", "field-center": "|B| at the origin",
+	"current": "Current", "voltage": "Voltage", "power": "Power", "temperature": "Hottest winding temperature",
+	"resistance": "Hot resistance", "switch-off-voltage": "Switch-off voltage",
+}
+
+// worstValue formats an SI value of a limit quantity in its display unit.
+func worstValue(q string, v float64, sig int) string {
+	unit := displayUnit(spec.LimitQuantities[q].Unit)
+	if unit == "°C" {
+		v = Celsius(v)
+	}
+	return Eng(v, unit, sig)
+}
+
+// cornerCode writes corner h as one sign per tolerance line, in the order
+// of the tolerance table: − for the low end, + for the high end;
+// "nominal" for the nominal design.
+func cornerCode(wc *analysis.WorstCase, h int) string {
+	if h < 0 || h >= len(wc.Corners) {
+		return "nominal"
+	}
+	var b strings.Builder
+	for i := range wc.Tolerances.Items {
+		if wc.Corners[h].High&(1<<i) != 0 {
+			b.WriteString("+")
+		} else {
+			b.WriteString("−")
+		}
+	}
+	return b.String()
+}
+
+// tolEnds writes a tolerance line's two ends as the corners take them.
+func tolEnds(t spec.Tolerance, d calc.Design) (lo, hi string) {
+	switch t.Mode {
+	case spec.Relative:
+		return fmt.Sprintf("−%s %%", Sig(-t.Lo*100, 3)), fmt.Sprintf("+%s %%", Sig(t.Hi*100, 3))
+	case spec.Offset:
+		if t.Key == "turns" {
+			return fmt.Sprintf("−%g turns", -t.Lo), fmt.Sprintf("+%g turns", t.Hi)
+		}
+		if unit := map[units.Dim]string{units.Length: "m", units.Time: "s", units.Frequency: "Hz"}[t.Dim]; unit != "" {
+			return "−" + Eng(-t.Lo, unit, 3), "+" + Eng(t.Hi, unit, 3)
+		}
+		return fmt.Sprintf("−%g", -t.Lo), fmt.Sprintf("+%g", t.Hi)
+	case spec.Range:
+		if t.Key == "ambient" {
+			return Eng(Celsius(t.Lo), "°C", 3), Eng(Celsius(t.Hi), "°C", 3)
+		}
+		return Eng(t.Lo, "T", 3), Eng(t.Hi, "T", 3)
+	case spec.Standard:
+		var l, h []string
+		for _, co := range d.Coils {
+			if a, b, ok := spec.WireTolerance(co.Wire.Gauge); ok {
+				l, h = append(l, Eng(a, "m", 3)), append(h, Eng(b, "m", 3))
+			}
+		}
+		return strings.Join(l, ", "), strings.Join(h, ", ")
+	}
+	return "", ""
+}
+
+// worstCase writes the Worst case section: nothing without a tolerances
+// block.
+func (c *composer) worstCase() {
+	wc := c.j.WorstCase
+	if wc == nil {
+		return
+	}
+	d := c.j.Spec.Design
+	t := wc.Tolerances
+	c.heading(1, "Worst case")
+	c.para(fmt.Sprintf("The design is evaluated at every combination of the extremes of its %d tolerance lines: %d corners, each a complete evaluation — winding, steady temperature with the resistance following it, operating point, moment, field, switching and every requirement. Temperature stays coupled: a hot winding has more resistance, so under voltage drive less current and moment; a cold one draws more current and gives a larger switch-off spike. A corner is written as one sign per tolerance line in the order of the table below (− low end, + high end). The corners bound a result where it moves monotonically with each tolerance over its range.",
+		len(t.Items), len(wc.Corners)))
+	var rows [][]doc.Cell
+	for _, it := range t.Items {
+		lo, hi := tolEnds(it, d)
+		src := ""
+		if it.Mode == spec.Standard {
+			src = " (" + spec.WireToleranceSource + ")"
+		}
+		rows = append(rows, []doc.Cell{{Text: it.Key}, {Text: it.Raw + src}, {Text: lo}, {Text: hi}})
+	}
+	c.add(doc.Table{Caption: "Tolerances (the tolerances block, line by line)", Header: []string{"Parameter", "As written", "Low end (−)", "High end (+)"},
+		Rows: rows, Widths: []float64{1.3, 3.2, 1.3, 1.3}, Align: []doc.Align{doc.Left, doc.Left, doc.Right, doc.Right}})
+
+	rows = nil
+	for _, r := range wc.Results {
+		rows = append(rows, []doc.Cell{{Text: worstNames[r.Quantity]},
+			{Text: worstValue(r.Quantity, r.Min, 4)}, {Text: cornerCode(wc, r.CornerMin)},
+			{Text: worstValue(r.Quantity, r.Nominal, 4)},
+			{Text: worstValue(r.Quantity, r.Max, 4)}, {Text: cornerCode(wc, r.CornerMax)}})
+	}
+	c.add(doc.Table{Caption: "Headline results over the corners", Header: []string{"Result", "Minimum", "at corner", "Nominal", "Maximum", "at corner"},
+		Rows: rows, Widths: []float64{2.2, 1.2, 0.9, 1.2, 1.2, 0.9}, Align: []doc.Align{doc.Left, doc.Right, doc.Center, doc.Right, doc.Right, doc.Center}})
+
+	if len(c.j.Limits) > 0 {
+		rows = nil
+		for i, l := range c.j.Limits {
+			wl := wc.Limits[i]
+			q := l.Limit.Quantity
+			st := doc.Pass
+			if !l.Pass {
+				st = doc.Fail
+			}
+			rows = append(rows, []doc.Cell{{Text: limitName(l)}, {Text: worstValue(q, l.Computed, 4)},
+				{Text: worstValue(q, wl.Worst, 4)}, {Text: cornerCode(wc, wl.Corner)},
+				{Text: fmt.Sprintf("%d of %d", wl.Failing, len(wc.Corners))}, {Text: st.String(), Status: st, Strong: true}})
+		}
+		c.add(doc.Table{Caption: "Requirements at every corner (PASS only when met at nominal and at every corner)",
+			Header: []string{"Requirement", "Nominal", "Worst", "at corner", "Corners missed", "Status"},
+			Rows:   rows, Widths: []float64{1.8, 1.2, 1.2, 0.9, 1.1, 0.8}, Align: []doc.Align{doc.Left, doc.Right, doc.Right, doc.Center, doc.Right, doc.Center}})
+	}
+	c.sensitivity(wc)
+	c.monteCarlo(wc)
+	c.worstDerivation(wc)
+}
+
+// sensitivity tabulates and plots each tolerance's swing of each result,
+// the others at nominal, in per cent of the nominal value.
+func (c *composer) sensitivity(wc *analysis.WorstCase) {
+	t := wc.Tolerances
+	var names []string
+	for _, it := range t.Items {
+		names = append(names, it.Key)
+	}
+	header := append([]string{"Result"}, names...)
+	var rows [][]doc.Cell
+	var labels []string
+	var swing [][]float64
+	for r, res := range wc.Results {
+		row := []doc.Cell{{Text: worstNames[res.Quantity]}}
+		var pct []float64
+		for i := range t.Items {
+			s := wc.Swing[r][i]
+			nom := res.Nominal
+			if res.Quantity == "temperature" {
+				nom = Celsius(nom) // a swing in K against the nominal in °C would mislead: kelvin
+				row = append(row, doc.Cell{Text: signed(s, "K")})
+				pct = append(pct, math.NaN())
+				continue
+			}
+			p := 100 * s / math.Abs(nom)
+			pct = append(pct, p)
+			row = append(row, doc.Cell{Text: signed(p, "%")})
+		}
+		rows = append(rows, row)
+		if res.Quantity != "temperature" {
+			labels = append(labels, worstNames[res.Quantity])
+			swing = append(swing, pct)
+		}
+	}
+	widths := []float64{2.2}
+	align := []doc.Align{doc.Left}
+	for range t.Items {
+		widths, align = append(widths, 1), append(align, doc.Right)
+	}
+	c.para("Each tolerance moved alone from its low to its high end, the others at nominal, changes each result by the amount below (per cent of the nominal value; the temperature in kelvin). The largest entry in a row is the tolerance that moves that result most.")
+	c.add(doc.Table{Caption: "Sensitivity: change of each result over each tolerance's range", Header: header, Rows: rows, Widths: widths, Align: align})
+	if len(labels) > 0 {
+		c.fig(doc.Figure{Caption: "Sensitivity of each result to each tolerance (swing from low to high end, % of nominal)",
+			Width: figWidth, Height: figHeight * 0.8, Draw: figures.Sensitivity(labels, names, swing),
+			Summary: fmt.Sprintf("Bars for %d results and %d tolerances.", len(labels), len(names))})
+	}
+}
+
+func signed(v float64, unit string) string {
+	s := Sig(math.Abs(v), 3)
+	if v < 0 {
+		s = "−" + s
+	} else {
+		s = "+" + s
+	}
+	return s + " " + unit
+}
+
+// monteCarlo writes the sampled distribution and the yield.
+func (c *composer) monteCarlo(wc *analysis.WorstCase) {
+	mc := wc.MC
+	if mc == nil {
+		return
+	}
+	c.heading(2, "Monte Carlo")
+	c.para(fmt.Sprintf("%d designs are drawn with every tolerance independent and uniformly distributed over its range (turns uniformly over the whole numbers of theirs), from a PCG generator with a fixed seed, so the memo is the same at every build. Each sample is evaluated as a corner is, except that the rise of an on/off cycle's peak above the steady duty-averaged temperature is interpolated between its values at the corners instead of being integrated for every sample. %s of the samples meet every requirement.",
+		mc.Samples, Sig(100*mc.Yield, 4)+" %"))
+	var rows [][]doc.Cell
+	for r, res := range wc.Results {
+		v := mc.Values[r]
+		row := []doc.Cell{{Text: worstNames[res.Quantity]}}
+		for _, p := range []float64{5, 50, 95} {
+			row = append(row, doc.Cell{Text: worstValue(res.Quantity, analysis.Percentile(v, p), 4)})
+		}
+		rows = append(rows, row)
+	}
+	c.add(doc.Table{Caption: fmt.Sprintf("Percentiles of the headline results over %d samples (nearest rank)", mc.Samples),
+		Header: []string{"Result", "5th", "50th (median)", "95th"}, Rows: rows,
+		Widths: []float64{2.4, 1.3, 1.3, 1.3}, Align: []doc.Align{doc.Left, doc.Right, doc.Right, doc.Right}})
+	if len(wc.Results) > 0 && wc.Results[0].Quantity == "moment" && len(mc.Values[0]) > 0 {
+		var req []float64
+		for _, l := range c.j.Spec.Design.Limits {
+			if l.Quantity == "moment" && l.Subject == "" {
+				req = append(req, l.Required)
+			}
+		}
+		c.fig(doc.Figure{Caption: "Distribution of the magnetic moment over the Monte Carlo samples", Width: figWidth, Height: figHeight * 0.7,
+			Draw:    figures.Histogram("Magnetic moment |m| (A·m²)", mc.Values[0], req),
+			Summary: fmt.Sprintf("Moment from %s to %s.", Eng(mc.Values[0][0], "A·m²", 3), Eng(mc.Values[0][len(mc.Values[0])-1], "A·m²", 3))})
+	}
+}
+
+// worstDerivation derives the results at one corner as the Method
+// section derives them at nominal.
+func (c *composer) worstDerivation(wc *analysis.WorstCase) {
+	wk := wc.Derived
+	if wk == nil || len(wk.Design.Coils) == 0 {
+		return
+	}
+	why := fmt.Sprintf("the corner at which the %s requirement is missed", wk.Reason)
+	if !wk.Failing {
+		why = "the corner of the least " + strings.ToLower(worstNames[wk.Reason])
+	}
+	c.heading(2, "Derivation at corner "+cornerCode(wc, wk.Corner))
+	c.para(fmt.Sprintf("The results at %s (%s), derived as at nominal in the Method section, with the corner's inputs:", why, wc.CornerName(wk.Corner)))
+	co := wk.Design.Coils[0]
+	cr := wk.Results.Coils[0]
+	cs := wk.Coils[0]
+	var steps []Step
+	steps = append(steps, Step{What: "Ambient at this corner", Symbolic: `T_a = ` + Q(Celsius(wk.Design.Conditions.Ambient), "°C", 3)})
+	if co.Wire.Gauge != calc.NoGauge {
+		steps = append(steps, Step{What: "Bare wire diameter at this corner", Symbolic: `d = ` + Q(co.Wire.Bare, "m", 4)})
+		co.Wire.Gauge = calc.NoGauge // the ASTM B258 rule gives the nominal diameter, not the corner's
+	}
+	c.derive(steps...)
+	c.derive(coilSteps(co, cr, &cs)...) // resistance, temperature, current, power, moment, field
+	if cr.Switch.SwitchOff > 0 {
+		c.derive(switchingSteps(co, cr)...)
+	}
+}
+
+// worstVerdict is page 1's sentence on the worst case; "" without one.
+func (c *composer) worstVerdict() string {
+	wc := c.j.WorstCase
+	if wc == nil || len(c.j.Limits) == 0 {
+		return ""
+	}
+	for i, l := range c.j.Limits {
+		if wl := wc.Limits[i]; !l.Pass && wl.NominalPass {
+			return fmt.Sprintf("Over the tolerances, %s fails at corner %s (%s). ", limitName(l), cornerCode(wc, wl.Corner), wc.CornerName(wl.Corner))
+		}
+	}
+	if f, _ := c.j.Failed(); f == 0 {
+		return fmt.Sprintf("Every requirement is met at every corner of the tolerances (%d corners). ", len(wc.Corners))
+	}
+	return ""
+}

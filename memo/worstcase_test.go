@@ -1,0 +1,82 @@
+package memo
+
+import (
+	"bytes"
+	"os"
+	"strings"
+	"testing"
+
+	"coilmemo/analysis"
+	"coilmemo/doc"
+)
+
+const worstSpec = "```coil\nmean-diameter = 80 mm\nturns = 200\nwire = AWG 32\nvoltage = 5 V\nswitch-off = 2 us\n```\n" +
+	"```conditions\nambient = 20 degC\ncooling = still-air\n```\n" +
+	"```tolerances\nsupply = ±5 %\nambient = -20 degC .. 60 degC\n```\n"
+
+func verdictText(j *analysis.Study) string {
+	var b strings.Builder
+	for _, s := range (&composer{j: j}).verdict().Spans {
+		b.WriteString(s.Text)
+	}
+	return b.String()
+}
+
+// Page 1 says a requirement met at every corner is, and names the corner
+// at which one met at nominal fails.
+func TestWorstVerdictOnPageOne(t *testing.T) {
+	j := mustEvaluate(t, worstSpec+"```limits\nmoment >= 1 mA m2\n```\n")
+	if v := verdictText(j); !strings.Contains(v, "met at every corner of the tolerances (4 corners)") {
+		t.Errorf("verdict: %s", v)
+	}
+	nominal := j.Results.Moment.Norm()
+	// 1 % below nominal: met at nominal, missed where hot and low supply
+	j = mustEvaluate(t, worstSpec+"```limits\nmoment >= "+Sig(nominal*0.99*1e3, 6)+" mA m2\n```\n")
+	v := verdictText(j)
+	if !strings.Contains(v, "moment fails at corner −+ (supply −5 %, ambient 60 °C)") {
+		t.Errorf("verdict: %s", v)
+	}
+	tab := (&composer{j: j}).limitsTable()
+	if len(tab.Header) != 7 || tab.Header[3] != "Worst" || tab.Rows[0][6].Status != doc.Fail || tab.Rows[0][4].Text != "−+" {
+		t.Errorf("compliance table %v %+v", tab.Header, tab.Rows)
+	}
+}
+
+// Without a tolerances block the compliance table and the memo have no
+// worst-case columns or section.
+func TestNoWorstCaseWithoutTolerances(t *testing.T) {
+	src := strings.Replace(worstSpec, "```tolerances\nsupply = ±5 %\nambient = -20 degC .. 60 degC\n```\n", "", 1) + "```limits\nmoment >= 1 mA m2\n```\n"
+	j := mustEvaluate(t, src)
+	if j.WorstCase != nil {
+		t.Fatal("worst case without tolerances")
+	}
+	if h := (&composer{j: j}).limitsTable().Header; len(h) != 5 {
+		t.Errorf("header %v", h)
+	}
+	var b bytes.Buffer
+	if err := doc.WriteText(&b, Compose(j)); err != nil {
+		t.Fatal(err)
+	}
+	if strings.Contains(b.String(), "Worst case") {
+		t.Error("a Worst case section without tolerances")
+	}
+}
+
+// The torque-coil memo with 2⁵ corners and 2000 samples, spec to PDF.
+func BenchmarkTorqueCoilMemo(b *testing.B) {
+	src, err := readExampleB("torque-coil.md")
+	if err != nil {
+		b.Fatal(err)
+	}
+	for range b.N {
+		j, diags := evaluate("torque-coil.md", src)
+		if len(diags) > 0 {
+			b.Fatal(diags)
+		}
+		if _, err := PDF(j); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
+
+func readExampleB(name string) ([]byte, error) { return os.ReadFile("../examples/" + name) }
