@@ -2,6 +2,7 @@ package calc
 
 import (
 	"math"
+	"runtime"
 	"testing"
 )
 
@@ -99,5 +100,33 @@ func BenchmarkFieldMap200TurnByTurn(b *testing.B) {
 				CoilField(c, w, 1, Vec{xx, 0, zz})
 			}
 		}
+	}
+}
+
+// TestFieldMapDeterministic: the map computed on one core and on several is
+// the same to the bit.
+func TestFieldMapDeterministic(t *testing.T) {
+	c, w := benchCoil()
+	x, z := grid(0, 0.08, 41), grid(-0.08, 0.06, 37)
+	prev := runtime.GOMAXPROCS(1)
+	one := FieldMap(c, w, 1, x, z)
+	runtime.GOMAXPROCS(max(4, prev))
+	many := FieldMap(c, w, 1, x, z)
+	runtime.GOMAXPROCS(prev)
+	for k := range one.BX {
+		if math.Float64bits(one.BX[k]) != math.Float64bits(many.BX[k]) || math.Float64bits(one.BZ[k]) != math.Float64bits(many.BZ[k]) {
+			t.Fatalf("node %d: one core (%v, %v), several (%v, %v)", k, one.BX[k], one.BZ[k], many.BX[k], many.BZ[k])
+		}
+	}
+}
+
+// BenchmarkFieldMapRectangle200 times a 200 × 200 map about a 100 × 60 mm
+// rectangular coil, symmetric about its axis and its plane.
+func BenchmarkFieldMapRectangle200(b *testing.B) {
+	c := Coil{Form: Rectangle, Width: 0.1, Height: 0.06, Turns: 50, Wire: Wire{Bare: 0.5e-3, Outer: 0.56e-3, Material: Copper()}}
+	w := LayOut(c)
+	x, z := grid(-0.08, 0.08, 200), grid(-0.05, 0.05, 200)
+	for b.Loop() {
+		FieldMap(c, w, 1, x, z)
 	}
 }
