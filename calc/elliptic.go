@@ -91,3 +91,58 @@ func kMinusEOverM(m float64) float64 {
 	}
 	return (ellipticK(m) - ellipticE(m)) / m
 }
+
+// ellipticBD returns Fukushima's associate complete integrals
+//
+//	B(m) = ∫₀^{π/2} cos²θ dθ / √(1 − m sin²θ),  D(m) = ∫₀^{π/2} sin²θ dθ / √(1 − m sin²θ)
+//
+// (mathext.CompleteB and CompleteD, parameter m = k²; Fukushima, J. Comput.
+// Appl. Math. 282 (2015) 71), from which K = B + D, E = B + (1 − m) D and
+// (K − E)/m = D (DLMF 19.2.9 with the definitions above): one pair of
+// rational approximations gives K, E and their cancelling difference.
+func ellipticBD(m float64) (b, d float64) { return mathext.CompleteB(m), mathext.CompleteD(m) }
+
+// loopSeriesTerms is the number of Maclaurin coefficients tabulated for
+// loopSeries: at m = smallM the n-th term is below 10⁻¹⁸ of the sum from
+// n = 20 on.
+const loopSeriesTerms = 40
+
+// loopSeriesE and loopSeriesR are the Maclaurin coefficients of E(m) and of
+// (1 − m)·R(m) = (1 − m/2) E(m) − (1 − m) K(m), each with its factor π/2
+// (A&S 17.3.11–12: cₙ = π/2 eₙ and π/2 (eₙ − eₙ₋₁/2 − κₙ + κₙ₋₁); the
+// terms n = 0, 1 of the second vanish).
+var loopSeriesE, loopSeriesR = func() (e, r [loopSeriesTerms]float64) {
+	kp, ep := 1.0, 1.0 // κ₀, e₀
+	e[0] = math.Pi / 2
+	for n := 1; n < loopSeriesTerms; n++ {
+		q := float64(2*n-1) / float64(2*n)
+		kn := kp * q * q
+		en := kn / float64(1-2*n)
+		e[n] = math.Pi / 2 * en
+		if n >= 2 {
+			r[n] = math.Pi / 2 * (en - ep/2 - kn + kp)
+		}
+		kp, ep = kn, en
+	}
+	return e, r
+}()
+
+// loopSeries returns E(m) and R(m) = [(1 − m/2) E(m) − (1 − m) K(m)]/(1 − m)
+// summed from their Maclaurin series (see above) for 0 ≤ m < smallM; mc =
+// 1 − m is passed by the caller, formed without cancellation. R is O(m²)
+// (leading term 3π m²/32), so the series keeps every digit that the
+// difference of K and E would lose.
+func loopSeries(m, mc float64) (e, r float64) {
+	e = loopSeriesE[0] + loopSeriesE[1]*m
+	mn := m
+	for n := 2; n < loopSeriesTerms; n++ {
+		mn *= m
+		te, tr := loopSeriesE[n]*mn, loopSeriesR[n]*mn
+		e += te
+		r += tr
+		if tr <= 1e-18*r { // the R terms decrease no faster than the E terms
+			break
+		}
+	}
+	return e, r / mc
+}

@@ -11,13 +11,27 @@ import "math"
 //
 //	D = (a + ρ)² + z²,  m = k² = 4aρ/D,  1 − m = ((a − ρ)² + z²)/D
 //	Bz = μ0 I / (2π√D) · [K(m) + (a² − ρ² − z²)/((a − ρ)² + z²) · E(m)]
-//	Bρ = μ0 I z / (2π ρ √D) · [(1 − m/2) E(m) − (1 − m) K(m)] / (1 − m)
+//	Bρ = μ0 I z / (2π ρ √D) · R(m),  R = [(1 − m/2) E(m) − (1 − m) K(m)] / (1 − m)
 //
-// with K, E the complete elliptic integrals of parameter m. The Bρ bracket is
-// O(m²) near the axis; it is summed as a power series for m < 0.1 so that no
-// precision is lost there. ρ = 0 gives Bρ = 0 and the on-axis closed form.
-// A negative ρ is read as the point on the other side of the axis (Bρ changes
-// sign). On the filament itself the field is infinite; NaN is returned.
+// with K, E the complete elliptic integrals of parameter m, evaluated once
+// per call from one pair of rational approximations (ellipticBD: K = B + D,
+// E = B + (1 − m) D, R = (m/2)(B − (1 − m) D)/(1 − m)).
+//
+// Far from the filament (m < 0.1) the Bz bracket cancels: K ≈ E and the
+// coefficient of E tends to −1, so that at 10⁵ radii on the axis ten digits
+// would be lost. There the identity (from 2aρ = mD/2 and
+// (a − ρ)² + z² = D(1 − m), substituted into the bracket)
+//
+//	K + (a² − ρ² − z²)/((a − ρ)² + z²) · E = 2a² E/((a − ρ)² + z²) − R(m)
+//
+// is used, with E and R summed from their Maclaurin series (loopSeries; R is
+// O(m²), leading term 3π m²/32): no term cancels, and on the axis it is the
+// closed form μ0 I a²/(2 (a² + z²)^{3/2}) exactly. (Near the filament the
+// same identity would cancel instead, which is why the forms switch at
+// m = 0.1, where both keep all but the last digit.) ρ = 0 gives Bρ = 0 and
+// the on-axis closed form. A negative ρ is read as the point on the other
+// side of the axis (Bρ changes sign). On the filament itself the field is
+// infinite; NaN is returned.
 func LoopField(a, I, rho, z float64) (brho, bz float64) {
 	if !(a > 0) || I == 0 {
 		return 0, 0
@@ -44,9 +58,18 @@ func LoopField(a, I, rho, z float64) (brho, bz float64) {
 	}
 	sqD := math.Sqrt(D)
 	pre := Mu0 * I / (2 * math.Pi * sqD)
-	K, E := ellipticK(m), ellipticE(m)
-	bz = pre * (K + (a*a-rho*rho-z*z)/dm*E)
-	brho = sign * pre * z / rho * loopRadialBracket(m, mc)
+	var r float64
+	if m < smallM {
+		var e float64
+		e, r = loopSeries(m, mc)
+		bz = pre * (2*a*a*e/dm - r)
+	} else {
+		b, d := ellipticBD(m)
+		K, E := b+d, b+mc*d
+		r = m / 2 * (b - mc*d) / mc
+		bz = pre * (K + (a*a-rho*rho-z*z)/dm*E)
+	}
+	brho = sign * pre * z / rho * r
 	return brho, bz
 }
 
