@@ -59,17 +59,26 @@ type ThermalProblem struct {
 	Reactance float64
 }
 
-// StillAir returns the cooling assumed for a coil in still room air: a
-// natural-convection coefficient h = 10 W/(m²·K), inside the 2–25 W/(m²·K)
-// range given for free convection of gases by Incropera & DeWitt (Table 1.1,
-// recalled from memory), and the emissivity 0.9 typical of enamel and
-// varnish coatings (recalled from memory, not from a table). Evaluate
-// replaces the constant by the natural-convection correlation when h was
-// not stated (HGiven false).
-func StillAir() Cooling { return Cooling{H: 10, Emissivity: 0.9} }
+// The cooling defaults, one home for the spec reader and calc alike.
+const (
+	// StillAirH is the natural-convection coefficient taken for still
+	// room air before the correlation replaces it, W/(m²·K): inside the
+	// 2–25 W/(m²·K) range given for free convection of gases by Incropera
+	// & DeWitt (Table 1.1, recalled from memory).
+	StillAirH = 10.0
+	// DefaultEmissivity is the surface emissivity taken for enamelled
+	// wire when none is stated: 0.85, a common-practice figure for enamel
+	// and varnish coatings, not from a published table.
+	DefaultEmissivity = 0.85
+)
 
-// VacuumCooling returns radiation-only cooling with emissivity 0.9.
-func VacuumCooling() Cooling { return Cooling{Vacuum: true, Emissivity: 0.9} }
+// StillAir returns the cooling assumed for a coil in still room air:
+// StillAirH and DefaultEmissivity. Evaluate replaces the constant by the
+// natural-convection correlation when h was not stated (HGiven false).
+func StillAir() Cooling { return Cooling{H: StillAirH, Emissivity: DefaultEmissivity} }
+
+// VacuumCooling returns radiation-only cooling with DefaultEmissivity.
+func VacuumCooling() Cooling { return Cooling{Vacuum: true, Emissivity: DefaultEmissivity} }
 
 // EffectiveCooling returns the cooling actually used: the zero Cooling
 // (nothing stated) means StillAir; in vacuum h is 0.

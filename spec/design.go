@@ -35,14 +35,9 @@ var (
 const (
 	defaultAmbientC    = 20.0  // °C
 	defaultInsulationC = 130.0 // °C, IEC 60085 thermal class 130 (B)
-	// stillAirH is the convective coefficient taken for natural convection
-	// from a small body in still air, W/(m²·K): a common engineering figure
-	// (free convection in air is usually quoted between 2 and 25), not a
-	// computed one.
-	stillAirH = 10.0
-	// defaultEmissivity is a common-practice figure for enamelled
-	// copper windings.
-	defaultEmissivity = 0.85
+	// stillAirH and defaultEmissivity are calc's cooling defaults.
+	stillAirH         = calc.StillAirH
+	defaultEmissivity = calc.DefaultEmissivity
 	zeroCelsius       = 273.15
 )
 
