@@ -1,6 +1,7 @@
 package calc
 
 import (
+	"coilmemo/calc/biotsavart"
 	"math"
 	"math/rand/v2"
 	"testing"
@@ -178,23 +179,12 @@ func rectCorners(fr Frame, c Vec, w, h float64) []Vec {
 	return []Vec{pt(w/2, -h/2), pt(w/2, h/2), pt(-w/2, h/2), pt(-w/2, -h/2)}
 }
 
-// biotSavartPolygon integrates Biot–Savart numerically along a closed
-// polygon (Gauss–Legendre, 4 panels per side).
+// biotSavartPolygon is the independent numerical Biot–Savart integral
+// along a closed polygon (package biotsavart), 4 panels of 64 nodes a side.
 func biotSavartPolygon(k []Vec, I float64, p Vec) Vec {
-	var B Vec
-	for i := range k {
-		a, b := k[i], k[(i+1)%len(k)]
-		l := b.Sub(a)
-		for comp := range 3 {
-			f := func(s float64) float64 {
-				r := p.Sub(a.Add(l.Scale(s)))
-				d := r.Norm()
-				return l.Cross(r)[comp] / (d * d * d)
-			}
-			for j := range 4 {
-				B[comp] += legendre(f, float64(j)/4, float64(j+1)/4)
-			}
-		}
+	pts := make([]biotsavart.Vec, len(k))
+	for i, v := range k {
+		pts[i] = v
 	}
-	return B.Scale(Mu0 * I / (4 * math.Pi))
+	return biotsavart.Polygon(pts, I, p, 4, 64)
 }

@@ -1,6 +1,7 @@
 package calc
 
 import (
+	"coilmemo/calc/biotsavart"
 	"math"
 	"math/rand/v2"
 	"testing"
@@ -8,28 +9,11 @@ import (
 	"gonum.org/v1/gonum/integrate/quad"
 )
 
-// biotSavartCircle integrates the Biot–Savart law
-// B = μ0 I/(4π) ∮ dl × (p − l)/|p − l|³ numerically over a circle of radius
-// a centred on c in the plane spanned by e1, e2 (current from e1 towards
-// e2), by Gauss–Legendre quadrature on 8 panels of n nodes each. It shares
-// no code with LoopField.
+// biotSavartCircle is the independent numerical Biot–Savart integral
+// round a circle (package biotsavart), on 8 panels of n nodes: it shares no
+// code with LoopField.
 func biotSavartCircle(c, e1, e2 Vec, a, I float64, p Vec, n int) Vec {
-	var B Vec
-	for k := range 3 {
-		f := func(phi float64) float64 {
-			s, co := math.Sincos(phi)
-			l := c.Add(e1.Scale(a * co)).Add(e2.Scale(a * s))
-			dl := e1.Scale(-a * s).Add(e2.Scale(a * co))
-			r := p.Sub(l)
-			d := r.Norm()
-			return dl.Cross(r)[k] / (d * d * d)
-		}
-		for j := range 8 {
-			lo, hi := float64(j)*math.Pi/4, float64(j+1)*math.Pi/4
-			B[k] += quad.Fixed(f, lo, hi, n, quad.Legendre{}, 0)
-		}
-	}
-	return B.Scale(Mu0 * I / (4 * math.Pi))
+	return biotsavart.Circle(c, e1, e2, a, I, p, 8, n)
 }
 
 func TestLoopFieldOnAxisLimit(t *testing.T) {
