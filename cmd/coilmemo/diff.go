@@ -1,30 +1,18 @@
 package main
 
 import (
-	"coilmemo/analysis"
-	"coilmemo/analysis/report"
-	_ "embed"
 	"encoding/json"
 	"errors"
 	"fmt"
 	"io"
 	"math"
-	"os"
 	"sort"
 	"strings"
-	"time"
 
+	"coilmemo/analysis"
+	"coilmemo/analysis/report"
 	"coilmemo/spec"
 )
-
-//go:embed starter.md
-var starter []byte
-
-const newHelp = `Usage: coilmemo new [FILE]
-
-Write a starter spec with every block and the common keys, to FILE or, with
-no FILE, to standard output. An existing FILE is never overwritten.
-`
 
 const diffHelp = `Usage: coilmemo diff OLD NEW
 
@@ -33,44 +21,6 @@ the results that changed (from the same figures as calc --json, with the
 relative change). Exit status 0 whether or not they differ; 2 when either
 spec has problems.
 `
-
-const watchHelp = `Usage: coilmemo watch SPEC [-o OUT]
-
-Build the memo of SPEC, then rebuild it each time the file is saved, until
-interrupted (Ctrl-C). Problems in the spec are printed and the previous memo
-is left in place until the spec is sound again.
-`
-
-func newCmd(args []string, stdout io.Writer) error {
-	fs := newFlagSet("new", newHelp, stdout)
-	pos, err := parseInterleaved(fs, args)
-	if err != nil {
-		return flagErr(err, newHelp, stdout)
-	}
-	switch len(pos) {
-	case 0:
-		_, err := stdout.Write(starter)
-		return err
-	case 1:
-		f, err := os.OpenFile(pos[0], os.O_WRONLY|os.O_CREATE|os.O_EXCL, 0o644)
-		if errors.Is(err, os.ErrExist) {
-			return &exitError{2, fmt.Sprintf("coilmemo: %s exists; not overwritten", pos[0])}
-		}
-		if err != nil {
-			return &exitError{2, "coilmemo: " + err.Error()}
-		}
-		if _, err := f.Write(starter); err != nil {
-			f.Close()
-			return err
-		}
-		if err := f.Close(); err != nil {
-			return err
-		}
-		fmt.Fprintf(stdout, "wrote %s; edit it, then run: coilmemo build %s\n", pos[0], pos[0])
-		return nil
-	}
-	return usageErr("new takes at most one file name")
-}
 
 func diffCmd(args []string, stdout, stderr io.Writer) error {
 	fs := newFlagSet("diff", diffHelp, stdout)
@@ -261,50 +211,4 @@ func flatten(r report.Report) map[string]any {
 	}
 	walk("", v)
 	return out
-}
-
-func watchCmd(args []string, stdout, stderr io.Writer) error {
-	fs := newFlagSet("watch", watchHelp, stdout)
-	out := fs.String("o", "", "output file")
-	pos, err := parseInterleaved(fs, args)
-	if err != nil {
-		return flagErr(err, watchHelp, stdout)
-	}
-	if len(pos) != 1 {
-		return usageErr("watch takes one spec file")
-	}
-	return watch(pos[0], *out, stdout, stderr, 300*time.Millisecond, nil)
-}
-
-// watch rebuilds path whenever its modification time or size changes,
-// polling every interval, until stop is closed (never, from the command).
-func watch(path, out string, stdout, stderr io.Writer, interval time.Duration, stop <-chan struct{}) error {
-	var last os.FileInfo
-	fmt.Fprintf(stdout, "watching %s (Ctrl-C to stop)\n", path)
-	for {
-		fi, err := os.Stat(path)
-		if err != nil {
-			fmt.Fprintln(stderr, "coilmemo:", err)
-		} else if last == nil || !fi.ModTime().Equal(last.ModTime()) || fi.Size() != last.Size() {
-			last = fi
-			args := []string{path}
-			if out != "" {
-				args = append(args, "-o", out)
-			}
-			start := time.Now()
-			if err := build(args, stdout, stderr); err != nil {
-				var ee *exitError
-				if !errors.As(err, &ee) || ee.code != 2 {
-					return err
-				}
-			} else {
-				fmt.Fprintf(stdout, "  built in %d ms\n", time.Since(start).Milliseconds())
-			}
-		}
-		select {
-		case <-stop:
-			return nil
-		case <-time.After(interval):
-		}
-	}
 }
