@@ -8,8 +8,6 @@ import (
 	"os"
 )
 
-// new: the starter spec.
-
 //go:embed starter.md
 var starter []byte
 
