@@ -110,8 +110,12 @@ func coredResults(d calc.Design, r calc.Results, kinds []CoilKinds) calc.Results
 		if k := kinds[i]; k.Core != nil && !math.IsNaN(k.Core.CoreMoment) {
 			c := d.Coils[i]
 			cr.Moment = calc.CoredMoment(c, cr.Winding, cr.Current, *k.Core)
-			if !math.IsNaN(k.Core.InductanceAdded) {
-				cr.Inductance += k.Core.InductanceAdded
+			added := k.Core.InductanceAdded
+			if cr.Current == 0 { // a pick-up coil: the small-signal inductance
+				added = k.Core.InductanceAddedInitial
+			}
+			if !math.IsNaN(added) {
+				cr.Inductance += added
 				cr.Energy = cr.Inductance * cr.Current * cr.Current / 2
 				if cr.RHot > 0 {
 					cr.TimeConstant = cr.Inductance / cr.RHot
