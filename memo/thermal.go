@@ -87,6 +87,15 @@ func heatSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, cool ca
 	return steps
 }
 
+// seriesFactor is the factor "2 ·" the notation writes before a pair's
+// per-coil term, "" for one coil.
+func seriesFactor(series int) string {
+	if series == 2 {
+		return `2 \cdot `
+	}
+	return ""
+}
+
 // heatSurfaceSteps derive the heat-shedding surface of the winding.
 func heatSurfaceSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, cool calc.Cooling) []Step {
 	var steps []Step
@@ -96,10 +105,7 @@ func heatSurfaceSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, 
 	w := cr.Winding
 	hp := cs.Heat
 	series := cs.Series
-	two := ""
-	if series == 2 {
-		two = `2 \cdot `
-	}
+	two := seriesFactor(series)
 	ri := hp.RiseInner
 	ro := hp.RiseOuter
 	length := hp.RiseLength
@@ -288,10 +294,7 @@ func heatCapacitySteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy,
 	h := cr.Heat
 	w := cr.Winding
 	series := cs.Series
-	two := ""
-	if series == 2 {
-		two = `2 \cdot `
-	}
+	two := seriesFactor(series)
 	mat := co.Wire.Material
 	former := ""
 	fnum := ""
