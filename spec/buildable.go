@@ -32,6 +32,11 @@ func (p *parser) checkBuildable(coils []*coilIn) {
 			ok = false
 			continue
 		}
+		if ci.sized {
+			// the search keeps to buildable windings (BuildProblem); its
+			// choice is checked against the other coils (WindingsIntersect)
+			continue
+		}
 		if !p.checkOneBuildable(ci) {
 			ok = false
 		}
@@ -42,6 +47,9 @@ func (p *parser) checkBuildable(coils []*coilIn) {
 	for i := range coils {
 		for j := i + 1; j < len(coils); j++ {
 			a, b := coils[i], coils[j]
+			if a.sized || b.sized {
+				continue
+			}
 			if windingsIntersect(a.c, b.c) {
 				p.errf(max(a.fence, b.fence), "the windings of coil %q and coil %q intersect: move one (centre), turn it (axis) or change its size; coils nested inside each other must not touch",
 					a.c.Name, b.c.Name)
@@ -51,64 +59,91 @@ func (p *parser) checkBuildable(coils []*coilIn) {
 }
 
 func (p *parser) checkOneBuildable(ci *coilIn) bool {
-	c := ci.c
-	line := func(keys ...string) int {
-		for _, k := range keys {
+	stated := func(k string) bool { _, ok := ci.lines[k]; return ok }
+	probs := buildProblems(ci.c, stated)
+	for _, pr := range probs {
+		line := ci.fence
+		for _, k := range pr.keys {
 			if l, ok := ci.lines[k]; ok {
-				return l
+				line = l
+				break
 			}
 		}
-		return ci.fence
+		p.errf(line, "%s", pr.msg)
 	}
+	return len(probs) == 0
+}
+
+// buildProblem is one reason a coil cannot be wound or lies outside the
+// models: the message, and the keys at whose line it is reported (the
+// first the coil block states).
+type buildProblem struct {
+	keys []string
+	msg  string
+}
+
+// BuildProblem says why coil c cannot be wound or lies outside the models
+// (the first reason checkBuildable would give for it alone), or "". The
+// size search keeps to coils without one.
+func BuildProblem(c calc.Coil) string {
+	stated := func(k string) bool {
+		return (k == "length" && c.Length > 0) || (k == "radial-build" && c.RadialBuild > 0)
+	}
+	if ps := buildProblems(c, stated); len(ps) > 0 {
+		return ps[0].msg
+	}
+	return ""
+}
+
+// WindingsIntersect reports whether the windings of two coil blocks share
+// space (see windingsIntersect).
+func WindingsIntersect(a, b calc.Coil) bool { return windingsIntersect(a, b) }
+
+func buildProblems(c calc.Coil, stated func(string) bool) []buildProblem {
+	var out []buildProblem
+	add := func(msg string, keys ...string) { out = append(out, buildProblem{keys: keys, msg: msg}) }
 	length := func(v float64) string { return format.Eng(v, "m", 3) }
 	outer := calc.WireOuter(c)
 	if !(outer > 0) || c.Turns <= 0 {
-		return true
+		return nil
 	}
 	bundle := calc.BundleDiameter(outer, c.Turns)
 	where := fmt.Sprintf("coil %q", c.Name)
-	good := true
 	if c.Form == calc.Rectangle {
 		for _, k := range []string{"length", "radial-build"} {
-			if _, has := ci.lines[k]; has {
-				p.errf(ci.lines[k], "%s: %s does not apply to form = rectangle: its turns are laid out as one round bundle round the rectangle (give width, height, turns and wire)", where, k)
-				good = false
+			if stated(k) {
+				add(fmt.Sprintf("%s: %s does not apply to form = rectangle: its turns are laid out as one round bundle round the rectangle (give width, height, turns and wire)", where, k), k)
 			}
 		}
 		if side := math.Min(c.Width, c.Height); side > 0 && bundle >= side {
-			p.errf(line("wire", "turns"), "%s: the round bundle of %d turns is %s across, no less than the rectangle's shorter side %s: it cannot be wound",
-				where, c.Turns, length(bundle), length(side))
-			good = false
+			add(fmt.Sprintf("%s: the round bundle of %d turns is %s across, no less than the rectangle's shorter side %s: it cannot be wound",
+				where, c.Turns, length(bundle), length(side)), "wire", "turns")
 		}
-		return good
+		return out
 	}
 	D := c.MeanDiameter
 	if !(D > 0) {
-		return true
+		return nil
 	}
 	thin := c.Length == 0 && c.RadialBuild == 0
 	switch {
 	case thin && bundle >= D:
-		p.errf(line("wire", "turns"), "%s: the round bundle of %d turns is %s across, no less than the mean diameter %s: the coil cannot be wound; give length and radial-build for a thick winding",
-			where, c.Turns, length(bundle), length(D))
-		good = false
+		add(fmt.Sprintf("%s: the round bundle of %d turns is %s across, no less than the mean diameter %s: the coil cannot be wound; give length and radial-build for a thick winding",
+			where, c.Turns, length(bundle), length(D)), "wire", "turns")
 	case thin && bundle > ThinBundleFraction*D:
-		p.errf(line("wire", "turns"), "%s: the round bundle of %d turns is %s across, more than a fifth of the mean diameter %s, where the thin-coil model fails (its inductance is off by more than 1 %%); give length and radial-build to describe the winding",
-			where, c.Turns, length(bundle), length(D))
-		good = false
+		add(fmt.Sprintf("%s: the round bundle of %d turns is %s across, more than a fifth of the mean diameter %s, where the thin-coil model fails (its inductance is off by more than 1 %%); give length and radial-build to describe the winding",
+			where, c.Turns, length(bundle), length(D)), "wire", "turns")
 	case c.RadialBuild == 0 && outer >= D:
-		p.errf(line("wire", "mean-diameter"), "%s: a wire %s thick cannot be wound in one layer on a mean diameter of %s", where, length(outer), length(D))
-		good = false
+		add(fmt.Sprintf("%s: a wire %s thick cannot be wound in one layer on a mean diameter of %s", where, length(outer), length(D)), "wire", "mean-diameter")
 	}
-	if c.Form == calc.Pair && good {
+	if c.Form == calc.Pair && len(out) == 0 {
 		e := calc.WindingEnvelope(c, calc.LayOut(c))
 		if axial := e.Z1 - e.Z0; math.Abs(c.Spacing) < axial {
-			p.errf(line("spacing"), "%s: the two coils of the pair overlap: their centres are %s apart, less than the winding's axial length %s",
-				where, length(math.Abs(c.Spacing)), length(axial))
-			good = false
+			add(fmt.Sprintf("%s: the two coils of the pair overlap: their centres are %s apart, less than the winding's axial length %s",
+				where, length(math.Abs(c.Spacing)), length(axial)), "spacing")
 		}
 	}
-	return good
+	return out
 }
 
 // windingsIntersect reports whether the windings of two coil blocks share

@@ -56,6 +56,14 @@ var thermalClasses = []float64{90, 105, 120, 130, 155, 180, 200, 220, 250}
 func (p *parser) design() {
 	first := map[string]int{}
 	var coils []*coilIn
+	// The size block is read first: the coil blocks it sizes need not
+	// state the keys it leaves free.
+	for _, b := range p.blocks {
+		if b.kind == blockSize && p.size == nil {
+			p.size = p.sizeBlock(b)
+			p.spec.Size = p.size
+		}
+	}
 	var sweepBlock *rawBlock
 	seenConditions := false
 	for _, b := range p.blocks {
@@ -85,6 +93,8 @@ func (p *parser) design() {
 			sweepBlock = b
 		case blockTolerances:
 			defer func() { p.tolerancesBlock(b, coils) }() // once every coil and the conditions are read
+		case blockSize:
+			// read above
 		}
 	}
 	if !seenConditions {
@@ -108,6 +118,9 @@ func (p *parser) design() {
 		p.sweepBlock(sweepBlock, coils)
 	}
 	p.checkLimitSubjects()
+	if p.size != nil {
+		p.checkSize(coils)
+	}
 }
 
 // keyValues splits a block's lines at the first "=", lower-cases keys
@@ -247,6 +260,10 @@ type coilIn struct {
 	bad      map[string]bool // keys present whose value was rejected
 	formOK   bool
 	entries  []int // indexes into Spec.Entries
+	// sized is set when the size block sizes this coil; injected lists
+	// the free keys the block did not state (given provisional values).
+	sized    bool
+	injected map[string]bool
 }
 
 var formNames = map[string]calc.Form{
@@ -260,6 +277,7 @@ func (p *parser) coilBlock(b *rawBlock, index int) *coilIn {
 		given:    map[string]kv{},
 		lines:    map[string]int{},
 		bad:      map[string]bool{},
+		injected: map[string]bool{},
 		formOK:   true,
 		c: calc.Coil{
 			Name:            fmt.Sprintf("coil %d", index),
@@ -297,10 +315,14 @@ func (p *parser) coilBlock(b *rawBlock, index int) *coilIn {
 		p.entry(blockCoil, e, si)
 		ci.entries = append(ci.entries, len(p.spec.Entries)-1)
 	}
+	if p.size != nil {
+		p.fillFree(ci)
+	}
 	before := len(p.diags)
 	p.checkCoil(ci)
 	// Only a coil whose keys are all sound is laid out: do its turns fit?
-	if len(p.diags) == before && len(ci.bad) == 0 {
+	// (A sized coil's fit is the search's to find.)
+	if len(p.diags) == before && len(ci.bad) == 0 && !ci.sized {
 		if err := calc.CheckWinding(*c); err != nil {
 			line := ci.lines["turns"]
 			for _, k := range []string{"length", "radial-build"} {

@@ -64,6 +64,9 @@ type Entry struct {
 
 	Coil    string // for coil entries: the coil's name
 	Default bool   // the value is a default, not written in the spec
+	// Sized marks a coil entry of a key the size block leaves free: its
+	// value is the search's choice (analysis.Sizing), not the one written.
+	Sized bool
 }
 
 // Memo is the memo block: the title block of page 1.
@@ -123,6 +126,8 @@ type Spec struct {
 	Sweep     *Sweep // nil without a sweep block
 	// Tolerances is the tolerances block; nil without one.
 	Tolerances *Tolerances
+	// Size is the size block; nil without one.
+	Size *Size
 }
 
 // Block names of parameter blocks.
@@ -134,9 +139,10 @@ const (
 	blockProbes     = "probes"
 	blockSweep      = "sweep"
 	blockTolerances = "tolerances"
+	blockSize       = "size"
 )
 
-var blockNames = []string{blockMemo, blockCoil, blockConditions, blockLimits, blockProbes, blockSweep, blockTolerances}
+var blockNames = []string{blockMemo, blockCoil, blockConditions, blockLimits, blockProbes, blockSweep, blockTolerances, blockSize}
 
 func isBlockName(s string) bool {
 	for _, b := range blockNames {
@@ -168,7 +174,8 @@ type parser struct {
 	blocks     []*rawBlock
 	spec       *Spec
 	firstH1    string
-	rereads    int // HTML blocks read again as Markdown
+	rereads    int   // HTML blocks read again as Markdown
+	size       *Size // the size block, read before the coil blocks
 }
 
 // maxRereads bounds the HTML blocks read again as Markdown for the
