@@ -55,8 +55,11 @@ type Study struct {
 	Design DesignStudy
 	// WorstCase is the design over its tolerances block; nil without one.
 	WorstCase *WorstCase
-	Created   time.Time // build date written into the memo
-	Dated     bool      // Created came from the environment or the spec
+	// Sizing is the size block's search and choice; nil without one. The
+	// rest of the study is the chosen design's: Spec holds the choice.
+	Sizing  *Sizing
+	Created time.Time // build date written into the memo
+	Dated   bool      // Created came from the environment or the spec
 	// DateSource says where Created came from: "SOURCE_DATE_EPOCH", "memo
 	// date" or "" (not dated).
 	DateSource string
@@ -70,7 +73,15 @@ func Run(file string, src []byte, o Options) (*Study, spec.Diagnostics) {
 		return nil, diags
 	}
 	sum := sha256.Sum256(src)
+	var sz *Sizing
+	if s.Size != nil {
+		var diags spec.Diagnostics
+		if sz, s, diags = SizeDesign(s); len(diags) > 0 {
+			return nil, diags
+		}
+	}
 	st := Analyse(s, o)
+	st.Sizing = sz
 	st.SHA256 = hex.EncodeToString(sum[:])
 	return st, nil
 }

@@ -22,36 +22,6 @@ type SweepStep struct {
 	Met                     int
 }
 
-// setParam sets a sweepable coil key on c, keeping the dimensions that
-// were given and re-deriving the mean diameter where it follows from them.
-func setParam(c *calc.Coil, key string, v float64) {
-	switch key {
-	case "inner-diameter":
-		c.MeanDiameter = v + c.RadialBuild
-		if c.OuterDiameter > 0 {
-			c.OuterDiameter = v + 2*c.RadialBuild
-		}
-	case "outer-diameter":
-		c.MeanDiameter = v - c.RadialBuild
-		if c.InnerDiameter > 0 {
-			c.InnerDiameter = v - 2*c.RadialBuild
-		}
-	case "radial-build":
-		// The bore stays where it was; the winding grows outward.
-		inner := c.MeanDiameter - c.RadialBuild
-		c.MeanDiameter = inner + v
-		if c.InnerDiameter > 0 {
-			c.InnerDiameter = inner
-		}
-		if c.OuterDiameter > 0 {
-			c.OuterDiameter = inner + 2*v
-		}
-	case "wire-outer-diameter":
-		c.Wire.OuterEstimated = false
-	}
-	spec.SetCoilValue(c, key, v)
-}
-
 // RunSweep evaluates the design at every value of the spec's sweep.
 func RunSweep(s *spec.Spec) []SweepStep {
 	if s.Sweep == nil {
@@ -66,7 +36,7 @@ func RunSweep(s *spec.Spec) []SweepStep {
 			if s.Sweep.Coil != "" && d.Coils[i].Name != s.Sweep.Coil {
 				continue
 			}
-			setParam(&d.Coils[i], s.Sweep.Param, v)
+			spec.SetCoilKey(&d.Coils[i], s.Sweep.Param, v)
 			if err := calc.CheckWinding(d.Coils[i]); err != nil {
 				st.Feasible, st.Problem = false, err.Error()
 			}

@@ -5,6 +5,7 @@ import (
 	"testing"
 
 	"coilmemo/calc"
+	"coilmemo/spec"
 )
 
 const sweepSpec = "# S\n\n```coil\nform = solenoid\nmean-diameter = 30 mm\nlength = 50 mm\nturns = 50\nwire = 0.5 mm\nwire-outer-diameter = 0.55 mm\ncurrent = 1 A\n```\n\n```sweep\nturns = 50 .. 110 step 20\n```\n"
@@ -38,11 +39,11 @@ func TestSweepTurns(t *testing.T) {
 // when the radial build grows.
 func TestSetParamRadialBuild(t *testing.T) {
 	c := calc.Coil{MeanDiameter: 0.05, RadialBuild: 0.01, InnerDiameter: 0.04, OuterDiameter: 0.06}
-	setParam(&c, "radial-build", 0.02)
+	spec.SetCoilKey(&c, "radial-build", 0.02)
 	if math.Abs(c.InnerDiameter-0.04) > 1e-15 || math.Abs(c.MeanDiameter-0.06) > 1e-15 || math.Abs(c.OuterDiameter-0.08) > 1e-15 {
 		t.Errorf("after radial-build 20 mm: inner %g mean %g outer %g; want 0.04, 0.06, 0.08", c.InnerDiameter, c.MeanDiameter, c.OuterDiameter)
 	}
-	setParam(&c, "inner-diameter", 0.03)
+	spec.SetCoilKey(&c, "inner-diameter", 0.03)
 	if math.Abs(c.MeanDiameter-0.05) > 1e-15 || math.Abs(c.OuterDiameter-0.07) > 1e-15 {
 		t.Errorf("after inner 30 mm: mean %g outer %g; want 0.05, 0.07", c.MeanDiameter, c.OuterDiameter)
 	}

@@ -127,21 +127,14 @@ func LayOut(c Coil) Winding {
 			rin = 0
 		}
 		length := c.Length
-		tpl := 1
-		if outer > 0 && length > 0 {
-			tpl = int(math.Min(math.Floor(length/outer+1e-9), float64(max(n, 1))))
-		}
-		if tpl < 1 {
-			tpl = 1
-			if length > 0 {
-				w.Overfull = true
-				w.Problem = fmt.Sprintf("winding length %.4g mm is shorter than one wire (%.4g mm)", length*1e3, outer*1e3)
-			}
+		tpl, layers := LayersFor(n, length, outer)
+		if length > 0 && outer > 0 && length/outer+1e-9 < 1 {
+			w.Overfull = true
+			w.Problem = fmt.Sprintf("winding length %.4g mm is shorter than one wire (%.4g mm)", length*1e3, outer*1e3)
 		}
 		if length <= 0 {
 			length = outer // flat pancake: one wire wide
 		}
-		layers := (n + tpl - 1) / tpl
 		w.TurnsPerLayer, w.LayerCount = tpl, layers
 		w.Layers = make([]Layer, layers)
 		left := n
@@ -175,6 +168,22 @@ func LayOut(c Coil) Winding {
 	}
 	w.Mass = dens * cond * w.WireLength
 	return w
+}
+
+// LayersFor returns the turns per layer and the layers of a multilayer
+// winding of n turns of wire of overall diameter outer over an axial
+// length: turns touch along the axis, tpl = ⌊length/outer⌋, at least 1
+// and at most n (1 for a flat pancake, length ≤ 0), and layers = ⌈n/tpl⌉.
+// The radial build the turns need is layers × outer.
+func LayersFor(n int, length, outer float64) (tpl, layers int) {
+	tpl = 1
+	if outer > 0 && length > 0 {
+		tpl = int(math.Min(math.Floor(length/outer+1e-9), float64(max(n, 1))))
+	}
+	if tpl < 1 {
+		tpl = 1
+	}
+	return tpl, (max(n, 0) + tpl - 1) / tpl
 }
 
 // MaxTurns is the most turns LayOut places one by one; a coil with more

@@ -202,3 +202,21 @@ func superscript(s string) string {
 	}
 	return b.String()
 }
+
+// DisplayUnit maps a unit as the spec's limit quantities write it ("A m2",
+// "degC", "ohm") to the symbol Eng prints ("A·m²", "°C", "Ω").
+func DisplayUnit(u string) string {
+	switch u {
+	case "A m2":
+		return "A·m²"
+	case "degC":
+		return "°C"
+	case "ohm":
+		return "Ω"
+	case "A/m2":
+		return "A/m²"
+	case "N m":
+		return "N·m"
+	}
+	return u
+}

@@ -934,6 +934,45 @@ func (p *parser) checkHeating(ci *coilIn) {
 	}
 }
 
+// SetCoilKey sets a numeric coil key on c as a sweep step or a size
+// choice does, keeping the dimensions the coil block gave and re-deriving
+// the mean diameter where it follows from them: a new inner or outer
+// diameter moves the winding with its radial build unchanged; a new radial
+// build keeps the bore and grows the winding outward, unless the block
+// gives the outer diameter and not the inner one (an envelope), where the
+// outside stays and the winding grows inward. A new wire-outer-diameter is
+// no longer an estimate.
+func SetCoilKey(c *calc.Coil, key string, v float64) {
+	switch key {
+	case "inner-diameter":
+		c.MeanDiameter = v + c.RadialBuild
+		if c.OuterDiameter > 0 {
+			c.OuterDiameter = v + 2*c.RadialBuild
+		}
+	case "outer-diameter":
+		c.MeanDiameter = v - c.RadialBuild
+		if c.InnerDiameter > 0 {
+			c.InnerDiameter = v - 2*c.RadialBuild
+		}
+	case "radial-build":
+		if c.OuterDiameter > 0 && !(c.InnerDiameter > 0) {
+			c.MeanDiameter = c.OuterDiameter - v
+			break
+		}
+		inner := c.MeanDiameter - c.RadialBuild
+		c.MeanDiameter = inner + v
+		if c.InnerDiameter > 0 {
+			c.InnerDiameter = inner
+		}
+		if c.OuterDiameter > 0 {
+			c.OuterDiameter = inner + 2*v
+		}
+	case "wire-outer-diameter":
+		c.Wire.OuterEstimated = false
+	}
+	SetCoilValue(c, key, v)
+}
+
 // SetCoilValue sets the coil field that a numeric coil key names to v, in
 // SI (a count for turns, a fraction for duty), and reports whether the key
 // is one of them. It assigns only that field: dimensions that follow from

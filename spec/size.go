@@ -431,6 +431,9 @@ func (p *parser) checkSize(coils []*coilIn) {
 				p.errf(r.Line, "size %s: coil %q %s", r.Key, c.Name, msg)
 			}
 		}
+		if _, ok := ci.given["wire-outer-diameter"]; ok && s.WireLine > 0 {
+			p.errf(ci.lines["wire-outer-diameter"], "coil %q: wire-outer-diameter cannot be stated when the size block chooses the wire: the outer diameter follows the wire chosen (heavy-build estimate); remove it", c.Name)
+		}
 		if s.ObjectiveLine > 0 && s.Objective.Maximise() && c.Form == calc.Pair && c.Opposing {
 			p.errf(s.ObjectiveLine, "objective %s: coil %q is an opposing pair, whose moment is zero whatever its winding; size it for a field gradient with objective = minimum power and a gradient limit", s.Objective, c.Name)
 		}

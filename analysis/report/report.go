@@ -51,6 +51,8 @@ type Report struct {
 	// WorstCase is each headline result over the tolerances' corners
 	// (worstcase.go); absent without a tolerances block.
 	WorstCase map[string]WorstReport `json:"worst_case,omitempty"`
+	// Sizing is the size block's choice (sizing.go); absent without one.
+	Sizing *SizingReport `json:"sizing,omitempty"`
 }
 
 // SweepReport is the design re-evaluated over one parameter's range.
@@ -228,6 +230,7 @@ func Build(j *analysis.Study) Report {
 			Required: Num(req), Computed: Num(got), Unit: unit, Pass: l.Pass})
 	}
 	addWorstCase(&rep, j)
+	addSizing(&rep, j)
 	if sw := j.Spec.Sweep; sw != nil {
 		rep.Sweep = &SweepReport{Parameter: sw.Param, Coil: sw.Coil, Steps: []SweepStepReport{}}
 		for _, st := range j.Sweep {
