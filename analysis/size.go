@@ -5,6 +5,7 @@ import (
 	"math"
 	"runtime"
 	"sort"
+	"strconv"
 	"strings"
 	"sync"
 
@@ -49,6 +50,10 @@ type Sizing struct {
 	// choices better than the chosen one (−1: none is better); Next the
 	// one with the least margin at the choice besides it (−1: none).
 	Binding, Next int
+	// Better counts the choices whose objective beats the chosen one's
+	// (each fails some requirement); BindingCount those of them failing
+	// the binding constraint.
+	Better, BindingCount int
 	// Curves are the cheap figures over the turns, one per wire, for the
 	// feasible-region figure (at most maxCurvePoints a wire).
 	Curves []SizeCurve
@@ -57,8 +62,9 @@ type Sizing struct {
 	// it, among choices that meet every other cheap constraint.
 	Front []FrontPoint
 	// Merit is m²/(P·M) of the chosen winding (calc.MomentMerit), A²·m⁴/(W·kg),
-	// NaN unless one air-core coil block is sized.
-	Merit float64
+	// NaN unless one air-core coil block is sized; MeritResistivity the
+	// resistivity it takes, at the winding's mean temperature, Ω·m.
+	Merit, MeritResistivity float64
 	// Stated are the coil blocks' own values of the free keys that the
 	// choice replaces (for a warning when they differ).
 	Stated []StatedValue
@@ -258,10 +264,10 @@ func SizeDesign(s *spec.Spec) (*Sizing, *spec.Spec, spec.Diagnostics) {
 	if !found {
 		return nil, nil, spec.Diagnostics{{File: s.File, Line: sz.Line, Msg: z.noChoice(out)}}
 	}
-	out.Binding = z.binding(cands, chosen)
+	out.Binding, out.Better, out.BindingCount = z.binding(cands, chosen)
 	out.Next = z.nextToBind(&out.Chosen, out.Binding)
 	out.Front = z.front(cands, out.Binding)
-	out.Merit = z.merit(&out.Chosen)
+	out.Merit, out.MeritResistivity = z.merit(&out.Chosen)
 	sized := z.sizedSpec(&out.Chosen)
 	out.Stated = z.stated(&out.Chosen)
 	return out, sized, nil
@@ -395,9 +401,30 @@ func (z *sizer) search(d *calc.Design, c *Candidate) int {
 		return best
 	}
 	opt(0)
-	n++
-	z.cheap(d, c) // leave the figures at the best values
+	// A value as a spec would write it: the best values to four
+	// significant figures, kept when that choice is as feasible and as good.
+	exact := append([]float64(nil), c.Values...)
+	z.cheap(d, c)
+	best := z.score(c)
+	for _, k := range free {
+		c.Values[k] = roundSig(c.Values[k], 4)
+	}
+	n += 2
+	z.cheap(d, c)
+	if len(c.Fails) > 0 || z.score(c) > best+1e-4*math.Abs(best) {
+		copy(c.Values, exact)
+		z.cheap(d, c) // leave the figures at the best values
+	}
 	return n
+}
+
+// roundSig rounds v to sig significant figures.
+func roundSig(v float64, sig int) float64 {
+	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
+		return v
+	}
+	e := math.Pow(10, float64(sig-1)-math.Floor(math.Log10(math.Abs(v))))
+	return math.Round(v*e) / e
 }
 
 // score is the objective as a number to make small.
@@ -436,7 +463,9 @@ func (z *sizer) apply(d *calc.Design, c *Candidate) {
 			v := c.Values[k]
 			if r.Key == "radial-build" {
 				_, layers := calc.LayersFor(co.Turns, co.Length, calc.WireOuter(co))
-				v = math.Max(r.Lo, float64(layers)*calc.WireOuter(co))
+				// the depth the layers need, rounded up to a whole micrometre
+				need := math.Ceil(float64(layers)*calc.WireOuter(co)*1e6-1e-6) / 1e6
+				v = math.Max(r.Lo, need)
 				c.Values[k] = v
 			}
 			spec.SetCoilKey(&co, r.Key, v)
@@ -765,15 +794,18 @@ func limitText(l calc.Limit) string {
 }
 
 // binding is the constraint that excludes the most of the choices whose
-// objective beats the chosen one's.
-func (z *sizer) binding(cands []Candidate, chosen int) int {
+// objective beats the chosen one's; it returns it (−1 for none), the
+// number of better choices, and how many of them fail it.
+func (z *sizer) binding(cands []Candidate, chosen int) (int, int, int) {
 	counts := make([]int, len(z.cons))
 	ch := &cands[chosen]
+	better := 0
 	for i := range cands {
 		c := &cands[i]
 		if i == chosen || !(z.score(c) < z.score(ch)) {
 			continue
 		}
+		better++
 		for _, f := range c.Fails {
 			counts[f]++
 		}
@@ -784,7 +816,10 @@ func (z *sizer) binding(cands []Candidate, chosen int) int {
 			best = k
 		}
 	}
-	return best
+	if best < 0 {
+		return -1, better, 0
+	}
+	return best, better, counts[best]
 }
 
 // nextToBind is the limit (or the insulation class) with the least
@@ -880,22 +915,22 @@ func (z *sizer) curves(cands []Candidate) []SizeCurve {
 
 // merit is calc.MomentMerit of the chosen winding at its mean temperature,
 // for one sized air-core coil block.
-func (z *sizer) merit(c *Candidate) float64 {
+func (z *sizer) merit(c *Candidate) (merit, rho float64) {
 	if len(z.sz.Targets) != 1 || z.cored {
-		return math.NaN()
+		return math.NaN(), math.NaN()
 	}
 	d := z.base
 	d.Coils = append([]calc.Coil(nil), z.base.Coils...)
 	z.apply(&d, c)
 	co := d.Coils[z.sz.Targets[0]]
+	if co.Form == calc.Pair && co.Opposing {
+		return math.NaN(), math.NaN()
+	}
 	w := calc.LayOut(co)
 	op := calc.OperatingPoint(co, w, d.Conditions)
 	m := co.Wire.Material
-	rho := m.Rho20 * calc.ResistanceFactor(m.Alpha20, op.State.Mean)
-	if co.Form == calc.Pair && co.Opposing {
-		return math.NaN()
-	}
-	return calc.MomentMerit(w.AreaSum, w.WireLength, rho, m.Density)
+	rho = m.Rho20 * calc.ResistanceFactor(m.Alpha20, op.State.Mean)
+	return calc.MomentMerit(w.AreaSum, w.WireLength, rho, m.Density), rho
 }
 
 // sizedSpec is a copy of the spec with choice c written in: the sized
@@ -920,11 +955,18 @@ func (z *sizer) sizedSpec(c *Candidate) *spec.Spec {
 			continue
 		}
 		co := out.Design.Coils[ci]
-		if e.Sized {
+		switch {
+		case e.Sized:
 			e.SI = ChoiceText(co, e.Key)
-			e.Raw = "size: " + z.rangeText(e.Key)
-		} else if e.Key == "wire-outer-diameter" && e.Default && z.sz.WireLine > 0 {
+			e.Raw = "size: " + z.sizeRaw(e.Key)
+		case e.Key == "wire-outer-diameter" && e.Default && z.sz.WireLine > 0:
 			e.SI = units.Format(co.Wire.Outer, units.Length) + " (heavy-build estimate)"
+		case e.Default && strings.Contains(e.SI, " = "):
+			// a dimension derived from others: the same relation at the choice
+			if v, ok := spec.CoilValue(co, e.Key); ok {
+				_, rel, _ := strings.Cut(e.SI, " = ")
+				e.SI = units.Format(v, units.Length) + " = " + rel
+			}
 		}
 	}
 	return &out
@@ -943,6 +985,22 @@ func ChoiceText(co calc.Coil, key string) string {
 	return units.Format(v, sizeDim(key))
 }
 
+// SpecText is a sized coil key's value as the spec is written back:
+// lengths in millimetres, the others in their base unit, every digit
+// that the value holds.
+func SpecText(co calc.Coil, key string) string {
+	switch key {
+	case "turns", "wire":
+		return ChoiceText(co, key)
+	}
+	v, _ := spec.CoilValue(co, key)
+	unit, f := map[units.Dim]string{units.Length: "mm", units.Current: "A", units.Voltage: "V", units.Time: "s", units.Frequency: "Hz"}[sizeDim(key)], 1.0
+	if unit == "mm" {
+		f = 1e3
+	}
+	return strconv.FormatFloat(v*f, 'g', -1, 64) + " " + unit
+}
+
 func sizeDim(key string) units.Dim {
 	switch key {
 	case "current":
@@ -955,6 +1013,16 @@ func sizeDim(key string) units.Dim {
 		return units.Frequency
 	}
 	return units.Length
+}
+
+// sizeRaw is a free key's range as the size block writes it.
+func (z *sizer) sizeRaw(key string) string {
+	for _, e := range z.s.Entries {
+		if e.Block == "size" && e.Key == key {
+			return e.Raw
+		}
+	}
+	return z.rangeText(key)
 }
 
 func (z *sizer) rangeText(key string) string {

@@ -220,3 +220,25 @@ func DisplayUnit(u string) string {
 	}
 	return u
 }
+
+// Count writes a whole number as a count: digits, grouped in threes by a
+// thin space from 10 000 up ("9999", "50 167"), as SI style writes numbers.
+func Count(n int) string {
+	s := strconv.Itoa(n)
+	neg := strings.HasPrefix(s, "-")
+	s = strings.TrimPrefix(s, "-")
+	if len(s) > 4 {
+		var b strings.Builder
+		for i, r := range s {
+			if i > 0 && (len(s)-i)%3 == 0 {
+				b.WriteRune('\u2009')
+			}
+			b.WriteRune(r)
+		}
+		s = b.String()
+	}
+	if neg {
+		s = "−" + s
+	}
+	return s
+}

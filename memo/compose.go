@@ -51,6 +51,7 @@ var Sections = []Section{
 	section{"purpose", (*composer).purpose},
 	section{"inputs", (*composer).inputs},
 	section{"assumptions", (*composer).assumptions},
+	section{"selection", (*composer).selection},
 	section{"method", (*composer).method},
 	section{"field", (*composer).field},
 	section{"torque", (*composer).torque},

@@ -111,6 +111,7 @@ func (p *parser) design() {
 			names[c.c.Name] = c.fence
 		}
 		p.spec.Design.Coils = append(p.spec.Design.Coils, c.c)
+		p.spec.CoilFences = append(p.spec.CoilFences, c.fence)
 	}
 	p.checkWorkBounds(coils)
 	p.checkBuildable(coils)

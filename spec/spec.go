@@ -128,6 +128,9 @@ type Spec struct {
 	Tolerances *Tolerances
 	// Size is the size block; nil without one.
 	Size *Size
+	// CoilFences are the lines of the coil blocks' opening fences, in
+	// order (the size command writes keys into them).
+	CoilFences []int
 }
 
 // Block names of parameter blocks.

@@ -33,6 +33,7 @@ Usage:
   coilmemo diff OLD NEW
   coilmemo watch SPEC [-o OUT]
   coilmemo new [FILE]
+  coilmemo size SPEC [-o OUT.md]
   coilmemo help [COMMAND]
 
 Commands:
@@ -41,6 +42,7 @@ Commands:
   diff    show the inputs and results that changed between two revisions
   watch   rebuild the memo each time the spec is saved
   new     write a starter spec
+  size    choose the free keys of a spec's size block and write the spec back
 
 Exit status: 0 done, 1 internal failure (or a failed requirement with
 --strict), 2 bad input or usage. Run 'coilmemo help COMMAND' for details.
@@ -74,7 +76,7 @@ Options:
   --strict   exit with status 1 when a requirement or verification fails
 `
 
-var helps = map[string]string{"build": buildHelp, "calc": calcHelp, "diff": diffHelp, "watch": watchHelp, "new": newHelp}
+var helps = map[string]string{"build": buildHelp, "calc": calcHelp, "diff": diffHelp, "watch": watchHelp, "new": newHelp, "size": sizeHelp}
 
 // exitError carries an exit status.
 type exitError struct {
@@ -120,6 +122,8 @@ func run(args []string, stdout, stderr io.Writer) error {
 		return watchCmd(args[1:], stdout, stderr)
 	case "new":
 		return newCmd(args[1:], stdout)
+	case "size":
+		return sizeCmd(args[1:], stdout, stderr)
 	case "help", "-h", "-help", "--help":
 		if len(args) > 1 {
 			h, ok := helps[args[1]]

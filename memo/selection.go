@@ -1,0 +1,342 @@
+package memo
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"coilmemo/analysis"
+	"coilmemo/calc"
+	"coilmemo/doc"
+	"coilmemo/figures"
+	"coilmemo/format"
+	"coilmemo/spec"
+)
+
+// selection writes the Design selection section of a spec with a size
+// block: what was left free and required, the feasible region, the front
+// of the objective against the binding constraint, the best choices with
+// their margins, why the choice wins, and the figure of merit.
+func (c *composer) selection() {
+	sz := c.j.Sizing
+	if sz == nil {
+		return
+	}
+	d := c.j.Spec.Design
+	c.heading(1, "Design selection")
+	var names []string
+	for _, i := range sz.Size.Targets {
+		names = append(names, fmt.Sprintf("%q", d.Coils[i].Name))
+	}
+	coils := "coil " + names[0]
+	if len(names) > 1 {
+		coils = "coils " + strings.Join(names, ", ") + " (all alike)"
+	}
+	c.para(fmt.Sprintf("The spec leaves %s of %s to be chosen for %s. Every whole turn count with every wire was searched: %s, %s of them meeting every requirement that the winding's layout and heat balance decide; %s evaluated in full, best first, to confirm the choice. The rest of this memo is the chosen design's.",
+		freeList(sz), coils, sz.Objective, count(sz.Discrete, "choice"), format.Count(sz.Feasible), count(sz.Full, "was", "were")))
+	c.add(c.requirementTable(sz))
+	c.tradeFigure(sz)
+	c.frontFigure(sz)
+	c.add(c.choiceTable(sz))
+	c.para(c.whyText(sz))
+	c.meritText(sz)
+}
+
+// count writes n with a noun in its number: "1 choice", "3 choices"; with
+// two words, the singular and plural verb.
+func count(n int, words ...string) string {
+	if len(words) == 2 {
+		if n == 1 {
+			return fmt.Sprintf("1 %s", words[0])
+		}
+		return fmt.Sprintf("%s %s", format.Count(n), words[1])
+	}
+	if n == 1 {
+		return "1 " + words[0]
+	}
+	return format.Count(n) + " " + words[0] + "s"
+}
+
+// freeList names the free keys with their ranges.
+func freeList(sz *analysis.Sizing) string {
+	s := sz.Size
+	var parts []string
+	if s.TurnsLine > 0 {
+		parts = append(parts, fmt.Sprintf("the turns (%d to %d)", s.TurnsLo, s.TurnsHi))
+	}
+	if s.WireLine > 0 {
+		parts = append(parts, fmt.Sprintf("the wire (%d wires, %s to %s)", len(s.Wires), s.Wires[0].Name(), s.Wires[len(s.Wires)-1].Name()))
+	}
+	for _, r := range s.Ranges {
+		parts = append(parts, fmt.Sprintf("the %s (%s to %s)", r.Key, rangeValueOf(r, r.Lo), rangeValueOf(r, r.Hi)))
+	}
+	switch len(parts) {
+	case 1:
+		return parts[0]
+	case 2:
+		return parts[0] + " and " + parts[1]
+	}
+	return strings.Join(parts[:len(parts)-1], ", ") + " and " + parts[len(parts)-1]
+}
+
+// requirementTable lists what the choice had to meet, how many choices
+// each excluded, and the margin left at the choice.
+func (c *composer) requirementTable(sz *analysis.Sizing) doc.Table {
+	var rows [][]doc.Cell
+	for k, con := range sz.Constraints {
+		what, at := "", "met"
+		switch k {
+		case 0:
+			what = "the turns fit the coil's length and radial build"
+		case 1:
+			what = "the winding can be wound and lies within the models (thin bundle ≤ a fifth of the diameter, no overlaps)"
+		case 2:
+			what = "a steady temperature exists, within the insulation class"
+			at = fmt.Sprintf("hottest %s °C", Sig(Celsius(sz.Chosen.Temperature), 4))
+		default:
+			l := c.j.Spec.Design.Limits[con.Limit]
+			what = limitName(analysis.LimitResult{LimitResult: calc.LimitResult{Limit: l}}) + " " + relText(l) + " " + worstValue(l.Quantity, l.Required, 3)
+			if k-3 < len(sz.Chosen.Margins) {
+				at = marginText(l, sz.Chosen.Margins[k-3])
+			}
+		}
+		how := "layout, heat balance"
+		if !con.Cheap {
+			how = "full evaluation"
+		}
+		rows = append(rows, []doc.Cell{{Text: what}, {Text: how}, {Text: format.Count(con.Excluded)}, {Text: at}})
+	}
+	return doc.Table{Caption: "Requirements the choice must meet: the choices each excludes, and the margin left at the choice",
+		Header: []string{"Requirement", "Decided by", "Choices excluded", "At the choice"},
+		Rows:   rows, Widths: []float64{3.4, 1.3, 1.1, 1.3},
+		Align: []doc.Align{doc.Left, doc.Left, doc.Right, doc.Right}}
+}
+
+func relText(l calc.Limit) string {
+	if l.Relation == calc.AtMost {
+		return "≤"
+	}
+	return "≥"
+}
+
+// marginText writes a margin: a temperature's as the share of the allowed
+// rise left, the others as a percentage of the requirement.
+func marginText(l calc.Limit, m float64) string {
+	if math.IsNaN(m) {
+		return "—"
+	}
+	s := Sig(100*m, 3) + " %"
+	if math.Abs(m) < 0.0005 {
+		s = "< 0.05 %"
+	} else if m > 0 {
+		s = "+" + s
+	}
+	if l.Quantity == "temperature" || l.Quantity == "surface-temperature" {
+		return s + " of the rise"
+	}
+	return s
+}
+
+// tradeFigure plots every choice, moment against power (or conductor
+// mass, for a mass objective), one trace per wire, with the requirements
+// on them and the choice marked.
+func (c *composer) tradeFigure(sz *analysis.Sizing) {
+	yName, yUnit, yq := "Power", "W", "power"
+	y := func(s analysis.SizeCurve, i int) float64 { return s.Power[i] }
+	chosenY := sz.Chosen.Power
+	if sz.Objective == spec.MinimumMass {
+		yName, yUnit, yq = "Conductor mass", "kg", "mass"
+		y = func(s analysis.SizeCurve, i int) float64 { return s.Mass[i] }
+		chosenY = sz.Chosen.Mass
+	}
+	td := figures.TradeData{XName: "Magnetic moment |m|", XUnit: "A·m²", YName: yName, YUnit: yUnit,
+		ChosenX: sz.Chosen.Moment, ChosenY: chosenY,
+		FeasibleLabel: "meets the layout and heat requirements", OtherLabel: "excluded"}
+	moment := false
+	for _, s := range sz.Curves {
+		ts := figures.TradeSeries{Feasible: s.Feasible}
+		for i := range s.Turns {
+			ts.X = append(ts.X, s.Moment[i])
+			ts.Y = append(ts.Y, y(s, i))
+			moment = moment || s.Moment[i] > 0
+		}
+		td.Series = append(td.Series, ts)
+	}
+	if !moment {
+		return // no moment to trade (an opposing pair)
+	}
+	for _, l := range c.j.Spec.Design.Limits {
+		if l.Subject != "" {
+			continue
+		}
+		switch l.Quantity {
+		case "moment":
+			td.XLimits = append(td.XLimits, l.Required)
+		case yq:
+			td.YLimits = append(td.YLimits, l.Required)
+		}
+	}
+	c.para(fmt.Sprintf("Figure %d shows every choice searched, one trace per wire over its turn counts: its magnetic moment across and its %s up. With the drive fixed, the wire chiefly sets the moment and the turns the %s; the dots are the choices that meet every requirement the layout and heat balance decide, the dashed lines the requirements, and the ring the choice.",
+		c.figure+1, strings.ToLower(yName), strings.ToLower(yName)))
+	c.fig(doc.Figure{Caption: fmt.Sprintf("The choices searched: moment against %s, per wire", strings.ToLower(yName)),
+		Width: figWidth, Height: figHeight * 0.8, Draw: figures.Trade(td)})
+}
+
+// frontFigure plots the Pareto front of the objective against the
+// binding constraint's quantity.
+func (c *composer) frontFigure(sz *analysis.Sizing) {
+	if len(sz.Front) < 2 || sz.Binding < 3 {
+		return
+	}
+	con := sz.Constraints[sz.Binding]
+	l := c.j.Spec.Design.Limits[con.Limit]
+	q := spec.LimitQuantities[l.Quantity]
+	oName, oUnit := objectiveAxis(sz.Objective)
+	td := figures.TradeData{XName: limitName(analysis.LimitResult{LimitResult: calc.LimitResult{Limit: l}}), XUnit: displayUnit(q.Unit),
+		YName: oName, YUnit: oUnit, Line: true, XLimits: []float64{l.Required},
+		ChosenX: sz.Chosen.Quantity[sz.Binding], ChosenY: sz.Chosen.Objective, FeasibleLabel: "best " + strings.ToLower(oName) + " reachable"}
+	if q.Unit == "degC" {
+		return // a temperature front reads better in the table
+	}
+	var ts figures.TradeSeries
+	for _, p := range sz.Front {
+		ts.X = append(ts.X, p.Quantity)
+		ts.Y = append(ts.Y, p.Objective)
+		ts.Feasible = append(ts.Feasible, true)
+	}
+	td.Series = []figures.TradeSeries{ts}
+	c.para(fmt.Sprintf("Figure %d is the front of the trade: the best %s any choice reaches at each value of %s, among the choices that meet every other requirement the layout and heat balance decide. The requirement (dashed) cuts the front where the choice sits; relaxing it moves the choice along the front.",
+		c.figure+1, strings.ToLower(oName), l.Quantity))
+	c.fig(doc.Figure{Caption: fmt.Sprintf("Best %s against %s", strings.ToLower(oName), l.Quantity),
+		Width: figWidth, Height: figHeight * 0.7, Draw: figures.Trade(td)})
+}
+
+func objectiveAxis(o spec.Objective) (name, unit string) {
+	switch o {
+	case spec.MinimumPower:
+		return "Power", "W"
+	case spec.MinimumMass:
+		return "Conductor mass", "kg"
+	case spec.MaximumMoment:
+		return "Magnetic moment", "A·m²"
+	}
+	return "Moment per power", "A·m²/W"
+}
+
+// objectiveValue writes an objective's value.
+func objectiveValue(o spec.Objective, v float64) string {
+	_, unit := objectiveAxis(o)
+	return Eng(v, unit, 4)
+}
+
+// choiceTable lists the choice and the runners-up with their margins.
+func (c *composer) choiceTable(sz *analysis.Sizing) doc.Table {
+	ls := c.j.Spec.Design.Limits
+	head := []string{"Choice", "Wire", "Turns"}
+	for _, r := range sz.Size.Ranges {
+		head = append(head, r.Key)
+	}
+	oName, _ := objectiveAxis(sz.Objective)
+	head = append(head, oName)
+	for _, l := range ls {
+		head = append(head, l.Quantity)
+	}
+	var rows [][]doc.Cell
+	all := append([]analysis.Candidate{sz.Chosen}, sz.RunnersUp...)
+	for i, cd := range all {
+		label := "chosen"
+		if i > 0 {
+			label = fmt.Sprintf("runner-up %d", i)
+		}
+		row := []doc.Cell{{Text: label, Strong: i == 0}, {Text: cd.Wire.Name()}, {Text: fmt.Sprint(cd.Turns)}}
+		for k, r := range sz.Size.Ranges {
+			row = append(row, doc.Cell{Text: rangeValueOf(r, cd.Values[k])})
+		}
+		row = append(row, doc.Cell{Text: objectiveValue(sz.Objective, cd.Objective)})
+		for k, l := range ls {
+			m := math.NaN()
+			if k < len(cd.Margins) {
+				m = cd.Margins[k]
+			}
+			row = append(row, doc.Cell{Text: strings.TrimSuffix(marginText(l, m), " of the rise")})
+		}
+		rows = append(rows, row)
+	}
+	align := []doc.Align{doc.Left, doc.Left}
+	widths := []float64{1.2, 1, 0.8}
+	for range head[2:] {
+		align = append(align, doc.Right)
+	}
+	for range head[3:] {
+		widths = append(widths, 1)
+	}
+	return doc.Table{Caption: "The choice and the best choice of each other wire that meets every requirement, with the margin left on each requirement (a temperature's as the share of the allowed rise)",
+		Header: head, Rows: rows, Widths: widths, Align: align}
+}
+
+func rangeValueOf(r spec.FreeRange, v float64) string {
+	if u := map[string]string{"current": "A", "voltage": "V", "switch-off": "s", "on-time": "s", "frequency": "Hz"}[r.Key]; u != "" {
+		return Eng(v, u, 4)
+	}
+	return Eng(v, "m", 4)
+}
+
+// whyText says why the choice wins and what binds next.
+func (c *composer) whyText(sz *analysis.Sizing) string {
+	ch := sz.Chosen
+	var b strings.Builder
+	word, what := "least", strings.TrimPrefix(sz.Objective.String(), "minimum ")
+	if sz.Objective.Maximise() {
+		word, what = "most", strings.TrimPrefix(sz.Objective.String(), "maximum ")
+	}
+	fmt.Fprintf(&b, "The choice, %s with %d turns, has the %s %s of all the choices that meet every requirement: %s.",
+		ch.Wire.Name(), ch.Turns, word, what, objectiveValue(sz.Objective, ch.Objective))
+	if len(sz.RunnersUp) > 0 {
+		r := sz.RunnersUp[0]
+		fmt.Fprintf(&b, " The best of the other wires, %s with %d turns, reaches %s.", r.Wire.Name(), r.Turns, objectiveValue(sz.Objective, r.Objective))
+	}
+	if sz.Binding >= 0 {
+		con := sz.Constraints[sz.Binding]
+		fmt.Fprintf(&b, " Each of the %s with a better %s fails a requirement; the one that stops most of them (%s) is %s.",
+			count(sz.Better, "choice"), strings.ToLower(oName(sz.Objective)), format.Count(sz.BindingCount), c.constraintName(con, sz.Binding))
+	}
+	if sz.Next >= 0 {
+		con := sz.Constraints[sz.Next]
+		l := c.j.Spec.Design.Limits[con.Limit]
+		fmt.Fprintf(&b, " The next requirement to bind is %s, with %s left.", c.constraintName(con, sz.Next), marginText(l, sz.Chosen.Margins[sz.Next-3]))
+	}
+	return b.String()
+}
+
+func oName(o spec.Objective) string { n, _ := objectiveAxis(o); return n }
+
+func (c *composer) constraintName(con analysis.Constraint, k int) string {
+	switch k {
+	case 0:
+		return "the fit of the turns in the winding space"
+	case 1:
+		return "a buildable winding"
+	case 2:
+		return "the insulation class"
+	}
+	l := c.j.Spec.Design.Limits[con.Limit]
+	return limitName(analysis.LimitResult{LimitResult: calc.LimitResult{Limit: l}}) + " " + relText(l) + " " + worstValue(l.Quantity, l.Required, 3)
+}
+
+// meritText states the figure of merit of an air-core winding and its
+// derivation.
+func (c *composer) meritText(sz *analysis.Sizing) {
+	if math.IsNaN(sz.Merit) {
+		return
+	}
+	c.para("Which choices matter: with N turns of conductor section a carrying I, the moment is m = I ΣA, the power P = I² ρ Σℓ / a and the conductor mass M = ρm a Σℓ (ΣA the areas the turns enclose, Σℓ their length, ρ the resistivity at the winding's temperature, ρm the conductor's density). The current, the turn count and the section cancel from m²/(P·M):")
+	co := c.j.Spec.Design.Coils[sz.Size.Targets[0]]
+	w := c.j.Results.Coils[sz.Size.Targets[0]].Winding
+	c.derive(Step{What: "Figure of merit of an air-core winding (m = I·A of each turn, Jackson, Classical Electrodynamics, 3rd ed., §5.6; R = ρℓ/a), over the turns of one coil",
+		Symbolic: `\frac{m^2}{P\,M} = \frac{(\sum A / \sum \ell)^2}{\rho\,\rho_m}`,
+		Numbers: fmt.Sprintf(`\frac{(%s / %s)^2}{%s \cdot %s}`, Q(w.AreaSum, "m²", 4), Q(w.WireLength, "m", 4),
+			Q(sz.MeritResistivity, "Ω·m", 4), Q(co.Wire.Material.Density, "kg/m³", 4)),
+		Result: Q(sz.Merit, "A²·m⁴/(W·kg)", 4)})
+	c.para(fmt.Sprintf("It depends on the geometry of the turns alone. Turns and wire only trade current against voltage at the same merit, so once the winding space is fixed, the moment a given power and copper mass buy is fixed too: m = √(%s × P × M). More moment for the same power and mass needs larger turns (the merit grows as the square of their radius) or a conductor with a smaller ρ ρm.",
+		Eng(sz.Merit, "A²·m⁴/(W·kg)", 4)))
+}
