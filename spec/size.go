@@ -466,6 +466,7 @@ var deliveryQuantities = map[string]bool{
 var mustState = map[string]bool{
 	"mean-diameter": true, "inner-diameter": true, "outer-diameter": true,
 	"wire-outer-diameter": true, "switch-off": true, "on-time": true, "frequency": true,
+	"current": true, "voltage": true,
 }
 
 // freeKeyProblem says why a numeric key cannot be left free on a coil
