@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"math"
+	"sync"
 )
 
 // LayOut places every turn of one coil (one coil of a pair) and derives the
@@ -36,6 +37,10 @@ import (
 // not given. A radial build deeper than the mean radius is reported as a
 // Problem (the inner radius is then taken as 0). More than MaxTurns turns
 // are not laid out: the Winding is empty, its figures NaN, with a Problem.
+//
+// Layers share their Z slices where the positions are the same (every
+// full layer of a multilayer winding; a thin coil's zeros): they are read
+// only.
 //
 // Derived quantities, each over the turns as laid out: WireLength = Σ 2π r_i
 // (Rectangle: N × 2(W + H)), MeanTurn = WireLength/N, AreaSum = Σ π r_i²
@@ -91,7 +96,7 @@ func LayOut(c Coil) Winding {
 			turn = 2 * (c.Width + c.Height)
 			area = c.Width * c.Height
 		}
-		w.Layers = []Layer{{Radius: r, Z: make([]float64, n)}}
+		w.Layers = []Layer{{Radius: r, Z: zeros(n)}}
 		w.MeanTurn = turn
 		w.WireLength = float64(n) * turn
 		w.AreaSum = float64(n) * area
@@ -139,13 +144,22 @@ func LayOut(c Coil) Winding {
 		w.Layers = make([]Layer, layers)
 		left := n
 		var wl, as float64
+		var full []float64 // the positions of a full layer, shared by all of them
 		for k := range w.Layers {
 			nk := min(tpl, left)
 			left -= nk
 			r := rin + outer/2 + float64(k)*outer
-			z := make([]float64, nk)
-			for j := range z {
-				z[j] = (float64(j) - float64(nk-1)/2) * outer
+			var z []float64
+			if nk == tpl && full != nil {
+				z = full
+			} else {
+				z = make([]float64, nk)
+				for j := range z {
+					z[j] = (float64(j) - float64(nk-1)/2) * outer
+				}
+				if nk == tpl {
+					full = z
+				}
 			}
 			w.Layers[k] = Layer{Radius: r, Z: z}
 			wl += float64(nk) * 2 * math.Pi * r
@@ -168,6 +182,24 @@ func LayOut(c Coil) Winding {
 	}
 	w.Mass = dens * cond * w.WireLength
 	return w
+}
+
+// zeroTurns backs the positions of thin coils' turns (all at z = 0),
+// shared read-only; it grows under zeroMu.
+var (
+	zeroMu    sync.Mutex
+	zeroTurns []float64
+)
+
+// zeros returns n zeros from the shared backing (capacity n, so an append
+// copies).
+func zeros(n int) []float64 {
+	zeroMu.Lock()
+	defer zeroMu.Unlock()
+	if len(zeroTurns) < n {
+		zeroTurns = make([]float64, max(n, 2*len(zeroTurns)))
+	}
+	return zeroTurns[:n:n]
 }
 
 // LayersFor returns the turns per layer and the layers of a multilayer

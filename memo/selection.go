@@ -239,7 +239,7 @@ func (c *composer) choiceTable(sz *analysis.Sizing) doc.Table {
 	oName, _ := objectiveAxis(sz.Objective)
 	head = append(head, oName)
 	for _, l := range ls {
-		head = append(head, l.Quantity)
+		head = append(head, l.Quantity+" margin")
 	}
 	var rows [][]doc.Cell
 	all := append([]analysis.Candidate{sz.Chosen}, sz.RunnersUp...)
@@ -267,7 +267,11 @@ func (c *composer) choiceTable(sz *analysis.Sizing) doc.Table {
 	for range head[2:] {
 		align = append(align, doc.Right)
 	}
-	for range head[3:] {
+	for range sz.Size.Ranges {
+		widths = append(widths, 1)
+	}
+	widths = append(widths, 1.2) // the objective
+	for range ls {
 		widths = append(widths, 1)
 	}
 	return doc.Table{Caption: "The choice and the best choice of each other wire that meets every requirement, with the margin left on each requirement (a temperature's as the share of the allowed rise)",
@@ -275,6 +279,9 @@ func (c *composer) choiceTable(sz *analysis.Sizing) doc.Table {
 }
 
 func rangeValueOf(r spec.FreeRange, v float64) string {
+	if v == 0 {
+		return "0"
+	}
 	if u := map[string]string{"current": "A", "voltage": "V", "switch-off": "s", "on-time": "s", "frequency": "Hz"}[r.Key]; u != "" {
 		return Eng(v, u, 4)
 	}

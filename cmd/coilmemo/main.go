@@ -196,6 +196,7 @@ func load(path string, stderr io.Writer) (*analysis.Study, error) {
 		}
 		return nil, &exitError{2, fmt.Sprintf("%s: %d problem%s; nothing written", path, n, s)}
 	}
+	sizeWarnings(job, path, stderr)
 	return job, nil
 }
 

@@ -95,3 +95,22 @@ func objectiveText(sz *analysis.Sizing) string {
 	}
 	return format.Eng(sz.Chosen.Objective, unit, 4)
 }
+
+// sizeWarnings tells the author, on the terminal, which values the coil
+// blocks state for keys the size block chooses, where they differ from
+// the choice (run coilmemo size to write the choice in).
+func sizeWarnings(job *analysis.Study, path string, stderr io.Writer) {
+	if job.Sizing == nil {
+		return
+	}
+	for _, s := range job.Sizing.Stated {
+		var co string
+		for _, c := range job.Spec.Design.Coils {
+			if c.Name == s.Coil {
+				co = analysis.ChoiceText(c, s.Key)
+			}
+		}
+		fmt.Fprintf(stderr, "%s:%d: warning: coil %q: %s = %s is replaced by the size block's choice, %s (coilmemo size writes it in)\n",
+			path, s.Line, s.Coil, s.Key, s.Raw, co)
+	}
+}
