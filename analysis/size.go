@@ -79,6 +79,9 @@ type Constraint struct {
 	// Excluded counts the choices that fail it (cheap figures, or the full
 	// evaluation for the others).
 	Excluded int
+	// FullExcluded counts the choices the cheap figures passed and the
+	// full evaluation found failing it.
+	FullExcluded int
 	// Closest is, for a cheap limit, the value nearest to meeting it over
 	// the choices that fail it, SI (NaN when none fails).
 	Closest float64
@@ -145,8 +148,16 @@ const (
 const (
 	consFits = iota
 	consBuild
+	consApart
 	consThermal
-	consPhysical
+	// ConsPhysical is the index of the first limit among the constraints:
+	// those before it are the physical ones (fits, buildable, apart,
+	// thermal).
+	ConsPhysical
+)
+
+const (
+	consPhysical = ConsPhysical
 )
 
 // cheapQuantities are the limit quantities the cheap figures give exactly
@@ -155,7 +166,7 @@ const (
 var cheapQuantities = map[string]bool{
 	"power": true, "power-on": true, "current": true, "voltage": true, "resistance": true,
 	"mass": true, "wire-length": true, "current-density": true, "moment": true,
-	"field-center": true, "field": true,
+	"field-center": true, "field": true, "gradient": true,
 }
 
 // lowerBoundOnly are cheap quantities whose cheap figure is a lower bound.
@@ -168,6 +179,14 @@ type sizer struct {
 	cons  []Constraint
 	cored bool   // a sized coil has a core: its moment comes from the core model
 	axial []bool // per limit: its field point lies on every coil's axis
+	// apartFrom is, per wire, the fewest turns at which a sized winding
+	// meets another coil's (TurnsHi+1 when none does), found by
+	// bisection: with no free numeric key besides the radial build, a
+	// winding of more turns of one wire is no smaller anywhere (a thin
+	// coil's bundle, a multilayer coil's layers only grow), so once two
+	// windings meet they meet at every larger count. Nil when the test is
+	// made for each choice instead.
+	apartFrom []int
 }
 
 // SizeDesign runs the size block's search over spec s and returns the
@@ -180,6 +199,7 @@ func SizeDesign(s *spec.Spec) (*Sizing, *spec.Spec, spec.Diagnostics) {
 	z.cons = []Constraint{
 		{Name: "fits", Limit: -1, Cheap: true},
 		{Name: "buildable", Limit: -1, Cheap: true},
+		{Name: "apart", Limit: -1, Cheap: true},
 		{Name: "thermal", Limit: -1, Cheap: true},
 	}
 	for _, i := range sz.Targets {
@@ -212,6 +232,7 @@ func SizeDesign(s *spec.Spec) (*Sizing, *spec.Spec, spec.Diagnostics) {
 	}
 
 	cands := z.enumerate()
+	z.findApart()
 	z.searchAll(cands, &out.Evaluated)
 	for i := range cands {
 		if len(cands[i].Fails) == 0 {
@@ -246,6 +267,7 @@ func SizeDesign(s *spec.Spec) (*Sizing, *spec.Spec, spec.Diagnostics) {
 		if !z.full(c) {
 			for _, f := range c.Fails {
 				z.cons[f].Excluded++
+				z.cons[f].FullExcluded++
 			}
 			continue
 		}
@@ -555,6 +577,11 @@ func (z *sizer) cheap(d *calc.Design, c *Candidate) {
 		switch l.Quantity {
 		case "field", "field-center":
 			v = z.cheapField(l, d, res, fm)
+		case "gradient":
+			v = math.NaN()
+			if on, ci, _ := subjectOf(l, *d); on == OnCoil {
+				v = math.Abs(calc.PairGradient(d.Coils[ci], windings[ci], currents[ci]))
+			}
 		default:
 			v = LimitValue(l, *d, res)
 		}
@@ -568,6 +595,16 @@ func (z *sizer) cheap(d *calc.Design, c *Candidate) {
 		}
 		if !pass {
 			fail(k)
+		}
+	}
+	// Windings of several coils must not share space (see apartFrom).
+	if len(d.Coils) > 1 {
+		if z.apartFrom != nil {
+			if c.Turns >= z.apartFrom[c.WireIndex] {
+				fail(consApart)
+			}
+		} else if len(c.Fails) == 0 && z.intersect(d) {
+			fail(consApart)
 		}
 	}
 	c.Objective = z.objective(c)
@@ -647,18 +684,14 @@ func (z *sizer) full(c *Candidate) bool {
 		c.PowerOn += cr.PowerOn
 		c.Mass += cr.Mass
 		c.Temperature = math.Max(c.Temperature, cr.Temperature)
-		if cr.Runaway || math.IsNaN(cr.Temperature) {
+		if (cr.Runaway || math.IsNaN(cr.Temperature)) && !contains(c.Fails, consThermal) {
 			c.Fails = append(c.Fails, consThermal)
 		}
 	}
 	c.Moment = r.Moment.Norm()
 	c.Quantity[consThermal] = c.Temperature
-	for _, i := range z.sz.Targets {
-		for j := range d.Coils {
-			if j != i && (!contains(z.sz.Targets, j) || j > i) && spec.WindingsIntersect(d.Coils[i], d.Coils[j]) {
-				c.Fails = append(c.Fails, consBuild)
-			}
-		}
+	if z.intersect(&d) {
+		c.Fails = append(c.Fails, consApart)
 	}
 	for k, l := range ls {
 		c.Margins[k] = z.margin(l)
@@ -669,6 +702,54 @@ func (z *sizer) full(c *Candidate) bool {
 	}
 	c.Objective = z.objective(c)
 	return len(c.Fails) == 0
+}
+
+// findApart sets apartFrom (see sizer) for a design of several coils
+// whose only free numeric key is the radial build.
+func (z *sizer) findApart() {
+	if len(z.base.Coils) < 2 || z.sz.TurnsLine == 0 {
+		return
+	}
+	for _, r := range z.sz.Ranges {
+		if r.Key != "radial-build" {
+			return
+		}
+	}
+	d := z.base
+	d.Coils = append([]calc.Coil(nil), z.base.Coils...)
+	meets := func(wi int, w spec.WireChoice, n int) bool {
+		c := Candidate{WireIndex: wi, Wire: w, Turns: n, Values: make([]float64, len(z.sz.Ranges))}
+		z.apply(&d, &c)
+		return z.intersect(&d)
+	}
+	for wi, w := range z.wires() {
+		lo, hi := z.sz.TurnsLo, z.sz.TurnsHi+1 // meets(hi) is taken as true
+		if meets(wi, w, lo) {
+			hi = lo
+		}
+		for hi-lo > 1 {
+			mid := (lo + hi) / 2
+			if meets(wi, w, mid) {
+				hi = mid
+			} else {
+				lo = mid
+			}
+		}
+		z.apartFrom = append(z.apartFrom, hi)
+	}
+}
+
+// intersect reports whether the winding of a sized coil of d shares space
+// with another coil's.
+func (z *sizer) intersect(d *calc.Design) bool {
+	for _, i := range z.sz.Targets {
+		for j := range d.Coils {
+			if j != i && (!contains(z.sz.Targets, j) || j > i) && spec.WindingsIntersect(d.Coils[i], d.Coils[j]) {
+				return true
+			}
+		}
+	}
+	return false
 }
 
 func contains(xs []int, x int) bool {
@@ -744,6 +825,27 @@ func (z *sizer) closest(cands []Candidate) {
 // noChoice says why no choice meets every requirement: the constraint
 // that excludes the most and, for a limit, how near the best comes.
 func (z *sizer) noChoice(out *Sizing) string {
+	if out.Feasible > 0 {
+		worst := -1
+		for k, c := range z.cons {
+			if c.FullExcluded > 0 && (worst < 0 || c.FullExcluded > z.cons[worst].FullExcluded) {
+				worst = k
+			}
+		}
+		msg := fmt.Sprintf("size: no choice meets every requirement: %s meet those the layout and heat balance decide, but the %s evaluated in full, best first, fail",
+			countText(out.Feasible, "choice"), countText(out.Full, "choice"))
+		if worst >= 0 {
+			what := z.cons[worst].Name
+			if worst == consApart {
+				what = "apart (the windings of different coils must not meet)"
+			}
+			msg += fmt.Sprintf(": %s fails %d of them", what, z.cons[worst].FullExcluded)
+		}
+		if out.Full >= maxFullEvaluations {
+			msg += fmt.Sprintf(" (the search stops after %d full evaluations)", maxFullEvaluations)
+		}
+		return msg
+	}
 	worst := -1
 	for k, c := range z.cons {
 		if c.Excluded > 0 && (worst < 0 || c.Excluded > z.cons[worst].Excluded) {
@@ -767,10 +869,19 @@ func (z *sizer) noChoice(out *Sizing) string {
 		msg += " (their turns do not fit the coil's length and radial build)"
 	case worst == consBuild:
 		msg += " (their winding cannot be wound or lies outside the models: e.g. a thin coil's bundle over a fifth of its diameter)"
+	case worst == consApart:
+		msg += " (their windings meet another coil's: space the coils further apart or make them differ more in size)"
 	case worst == consThermal:
 		msg += " (they run above their insulation class, or have no steady temperature)"
 	}
 	return msg
+}
+
+func countText(n int, noun string) string {
+	if n == 1 {
+		return "1 " + noun
+	}
+	return format.Count(n) + " " + noun + "s"
 }
 
 func limitValueText(v float64, unit string) string {

@@ -101,8 +101,23 @@ func AirProperties(T float64) (nu, k, pr float64, inTable bool) {
 //
 //	Nu_D = {0.60 + 0.387 Ra_D^(1/6) / [1 + (0.559/Pr)^(9/16)]^(8/27)}²
 func ChurchillChuCylinder(ra, pr float64) float64 {
-	f := 0.60 + 0.387*math.Pow(math.Max(ra, 0), 1.0/6)/math.Pow(1+math.Pow(0.559/pr, 9.0/16), 8.0/27)
+	f := 0.60 + 0.387*sixthRoot(math.Max(ra, 0))/prandtlFactor(0.559/pr)
 	return f * f
+}
+
+// sixthRoot is x^(1/6) = √∛x (roots rather than math.Pow: the heat
+// balance evaluates the correlations many times per solve).
+func sixthRoot(x float64) float64 { return math.Sqrt(math.Cbrt(x)) }
+
+// prandtlFactor is [1 + x^(9/16)]^(8/27), by roots: x^(1/16) is four
+// square roots, and y^(8/27) = ∛∛∛(y⁸).
+func prandtlFactor(x float64) float64 {
+	r := math.Sqrt(math.Sqrt(math.Sqrt(math.Sqrt(x)))) // x^(1/16)
+	r3 := r * r * r
+	y := 1 + r3*r3*r3 // 1 + x^(9/16)
+	y2 := y * y
+	y4 := y2 * y2
+	return math.Cbrt(math.Cbrt(math.Cbrt(y4 * y4)))
 }
 
 // ChurchillChuPlate returns the mean Nusselt number of a vertical plate in
@@ -113,7 +128,7 @@ func ChurchillChuCylinder(ra, pr float64) float64 {
 //
 //	Nu_L = {0.825 + 0.387 Ra_L^(1/6) / [1 + (0.492/Pr)^(9/16)]^(8/27)}²
 func ChurchillChuPlate(ra, pr float64) float64 {
-	f := 0.825 + 0.387*math.Pow(math.Max(ra, 0), 1.0/6)/math.Pow(1+math.Pow(0.492/pr, 9.0/16), 8.0/27)
+	f := 0.825 + 0.387*sixthRoot(math.Max(ra, 0))/prandtlFactor(0.492/pr)
 	return f * f
 }
 

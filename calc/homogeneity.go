@@ -133,6 +133,16 @@ func AnalysePair(c Coil, w Winding, I float64) PairRegion {
 	return p
 }
 
+// PairGradient returns the axial gradient ∂Bz/∂z, T/m, at the centre of
+// an opposing pair c with winding w at current I, summed exactly over its
+// turns as AnalysePair sums it; NaN for another form.
+func PairGradient(c Coil, w Winding, I float64) float64 {
+	if c.Form != Pair || !c.Opposing {
+		return math.NaN()
+	}
+	return NewCoilSource(c, w, I).axialGradientOnAxis(0)
+}
+
 // axialGradientOnAxis returns ∂Bz/∂z, T/m, on the axis at z (coil-local),
 // summed over every turn of every placement of the source.
 func (s *CoilSource) axialGradientOnAxis(z float64) float64 {

@@ -85,19 +85,24 @@ func (c *composer) requirementTable(sz *analysis.Sizing) doc.Table {
 	var rows [][]doc.Cell
 	for k, con := range sz.Constraints {
 		what, at := "", "met"
-		switch k {
-		case 0:
+		switch con.Name {
+		case "fits":
 			what = "the turns fit the coil's length and radial build"
-		case 1:
-			what = "the winding can be wound and lies within the models (thin bundle ≤ a fifth of the diameter, no overlaps)"
-		case 2:
+		case "buildable":
+			what = "the winding can be wound and lies within the models (thin bundle ≤ a fifth of the diameter, a pair's coils apart)"
+		case "apart":
+			if len(c.j.Spec.Design.Coils) < 2 {
+				continue
+			}
+			what = "the windings of different coils do not meet"
+		case "thermal":
 			what = "a steady temperature exists, within the insulation class"
 			at = fmt.Sprintf("hottest %s °C", Sig(Celsius(sz.Chosen.Temperature), 4))
 		default:
 			l := c.j.Spec.Design.Limits[con.Limit]
 			what = limitName(analysis.LimitResult{LimitResult: calc.LimitResult{Limit: l}}) + " " + relText(l) + " " + worstValue(l.Quantity, l.Required, 3)
-			if k-3 < len(sz.Chosen.Margins) {
-				at = marginText(l, sz.Chosen.Margins[k-3])
+			if m := k - analysis.ConsPhysical; m < len(sz.Chosen.Margins) {
+				at = marginText(l, sz.Chosen.Margins[m])
 			}
 		}
 		how := "layout, heat balance"
@@ -185,7 +190,7 @@ func (c *composer) tradeFigure(sz *analysis.Sizing) {
 // frontFigure plots the Pareto front of the objective against the
 // binding constraint's quantity.
 func (c *composer) frontFigure(sz *analysis.Sizing) {
-	if len(sz.Front) < 2 || sz.Binding < 3 {
+	if len(sz.Front) < 2 || sz.Binding < analysis.ConsPhysical {
 		return
 	}
 	con := sz.Constraints[sz.Binding]
@@ -310,7 +315,7 @@ func (c *composer) whyText(sz *analysis.Sizing) string {
 	if sz.Next >= 0 {
 		con := sz.Constraints[sz.Next]
 		l := c.j.Spec.Design.Limits[con.Limit]
-		fmt.Fprintf(&b, " The next requirement to bind is %s, with %s left.", c.constraintName(con, sz.Next), marginText(l, sz.Chosen.Margins[sz.Next-3]))
+		fmt.Fprintf(&b, " The next requirement to bind is %s, with %s left.", c.constraintName(con, sz.Next), marginText(l, sz.Chosen.Margins[sz.Next-analysis.ConsPhysical]))
 	}
 	return b.String()
 }
@@ -318,12 +323,14 @@ func (c *composer) whyText(sz *analysis.Sizing) string {
 func oName(o spec.Objective) string { n, _ := objectiveAxis(o); return n }
 
 func (c *composer) constraintName(con analysis.Constraint, k int) string {
-	switch k {
-	case 0:
+	switch con.Name {
+	case "fits":
 		return "the fit of the turns in the winding space"
-	case 1:
+	case "buildable":
 		return "a buildable winding"
-	case 2:
+	case "apart":
+		return "the space between the coils"
+	case "thermal":
 		return "the insulation class"
 	}
 	l := c.j.Spec.Design.Limits[con.Limit]
