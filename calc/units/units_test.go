@@ -308,3 +308,31 @@ func FuzzParse(f *testing.F) {
 		_, _ = ParseAs(s, Length)
 	})
 }
+
+// A suggestion of the other letter case is made only when it gives the
+// wanted dimension: a time written "2 h" is not told about the henry.
+func TestSuggestionWithinDimension(t *testing.T) {
+	for _, c := range []struct {
+		s      string
+		want   Dim
+		has    string
+		hasNot string
+	}{
+		{"2 h", Time, "want a time (s)", `"H"`},
+		{"2 h", Inductance, `did you mean "H"?`, ""},
+		{"3 Hz", Time, "is a frequency", ""}, // known unit, wrong dimension
+		{"5 v", Voltage, `did you mean "V"?`, ""},
+		{"5 v", Length, "want a length (m), e.g. mm", `"V"`},
+		{"4 w/m2K", HeatTransfer, `did you mean "W"?`, ""},
+		{"4 w/s", HeatTransfer, "want a heat-transfer coefficient", `"W"`},
+	} {
+		_, err := ParseAs(c.s, c.want)
+		if err == nil {
+			t.Errorf("ParseAs(%q, %v): no error", c.s, c.want)
+			continue
+		}
+		if !strings.Contains(err.Error(), c.has) || c.hasNot != "" && strings.Contains(err.Error(), c.hasNot) {
+			t.Errorf("ParseAs(%q, %v) = %q; want it to say %q and not %q", c.s, c.want, err, c.has, c.hasNot)
+		}
+	}
+}
