@@ -54,6 +54,10 @@ const (
 	builtBug    // an internal failure: exit status 1
 )
 
+// renderPDF renders a memo; a variable so that tests can stand in a
+// failing renderer.
+var renderPDF = memo.PDF
+
 // buildJob is one spec of a batch: its target and, once built, its
 // messages and outcome.
 type buildJob struct {
@@ -143,7 +147,7 @@ func buildOne(j *buildJob) {
 		j.outcome = builtBug
 		return
 	}
-	b, err := memo.PDF(job)
+	b, err := renderPDF(job)
 	if err != nil {
 		fmt.Fprintf(&j.stderr, "coilmemo: %s: internal error rendering the memo: %v; nothing written\n", j.spec, err)
 		j.outcome = builtBug

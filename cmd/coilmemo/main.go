@@ -141,7 +141,11 @@ func helpCmd(args []string, stdout, stderr io.Writer) error {
 	case len(args) > 1:
 		return usageErr("help takes at most one command")
 	}
-	if h, ok := helps[args[0]]; ok {
+	topic := args[0]
+	if topic == "-h" || topic == "-help" || topic == "--help" {
+		topic = "help"
+	}
+	if h, ok := helps[topic]; ok {
 		fmt.Fprint(stdout, h)
 		return nil
 	}
