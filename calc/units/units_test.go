@@ -4,6 +4,7 @@ import (
 	"math"
 	"strings"
 	"testing"
+	"unicode/utf8"
 )
 
 func near(a, b float64) bool {
@@ -298,14 +299,50 @@ func FuzzParse(f *testing.F) {
 		"1e-3 A·m²", "2 A*m^2", "50 %", "W/m2K", "((((m))))", "1 m⁻¹²", "−5 in", "3 s^-2"} {
 		f.Add(s)
 	}
+	for _, s := range []string{"2 h", "5 v", "3 Ms", "1 mT/m", "4 w/m2K", "-273.15 degC", "1e308 km", "0x10 m",
+		"1_000 m", "5 µΩ·m", "2 kg·m·s⁻³", "1e-320 m", "7 K/W", "1 (m)/(s)"} {
+		f.Add(s)
+	}
 	f.Fuzz(func(t *testing.T, s string) {
 		q, err := Parse(s)
+		if err != nil {
+			if msg := err.Error(); !utf8.ValidString(msg) || msg == "" {
+				t.Errorf("Parse(%q): message %q", s, msg)
+			}
+		}
 		if err == nil && (math.IsNaN(q.Value) || math.IsInf(q.Value, 0)) {
 			t.Errorf("Parse(%q) = %v without error", s, q.Value)
 		}
+		if err == nil {
+			// What Format writes, Parse reads back: same dimension, the
+			// value to Format's six significant digits.
+			out := Format(q.Value, q.Dim)
+			back, err := Parse(out)
+			if err != nil || back.Dim != q.Dim || math.Abs(back.Value-q.Value) > 5e-6*math.Abs(q.Value) {
+				t.Errorf("Parse(%q) = %v; Format writes %q, read back as %v, %v", s, q.Value, out, back, err)
+			}
+			// The dimension of the unit alone is the quantity's, and a
+			// value converts back into the unit it was written in.
+			num, unit, _ := Split(s)
+			if unit != "" {
+				if d, err := DimOf(unit); err != nil || d != q.Dim {
+					t.Errorf("DimOf(%q) = %v, %v; Parse gave %v", unit, d, err, q.Dim)
+				}
+				v, _ := parseNumber(num)
+				if got, err := In(q.Value, unit); err != nil || math.Abs(got-v) > 1e-9*math.Max(math.Abs(v), 1e-300) && math.Abs(v) > 1e-290 && math.Abs(v) < 1e290 {
+					t.Errorf("In(Parse(%q)) = %v, %v; want %v", s, got, err, v)
+				}
+			}
+			// ParseAs agrees with Parse on the dimension it gave.
+			if q2, err := ParseAs(s, q.Dim); err != nil || q2 != q {
+				t.Errorf("ParseAs(%q, %v) = %v, %v; Parse gave %v", s, q.Dim, q2, err, q)
+			}
+		}
 		_, _ = DimOf(s)
 		_, _ = In(1, s)
-		_, _ = ParseAs(s, Length)
+		if _, err := ParseAs(s, Time); err != nil && !utf8.ValidString(err.Error()) {
+			t.Errorf("ParseAs(%q, Time): message %q", s, err)
+		}
 	})
 }
 

@@ -8,6 +8,7 @@ import (
 	"os/exec"
 	"path/filepath"
 	"strings"
+	"sync"
 	"syscall"
 	"testing"
 	"time"
@@ -18,23 +19,40 @@ import (
 // The regression tests of the command line run the built binary, as a
 // user does: exit status, messages and the files left behind.
 
-var binary string // built once by TestMain
+// binaryDir holds the binary, built once on first use (fuzzing workers,
+// which run no CLI test, never build it).
+var (
+	buildOnce sync.Once
+	binaryDir string
+	binary    string
+	buildErr  error
+)
 
 func TestMain(m *testing.M) {
-	dir, err := os.MkdirTemp("", "coilmemo-cli-")
-	if err != nil {
-		fmt.Fprintln(os.Stderr, err)
-		os.Exit(1)
-	}
-	binary = filepath.Join(dir, "coilmemo")
-	if out, err := exec.Command("go", "build", "-o", binary, ".").CombinedOutput(); err != nil {
-		fmt.Fprintf(os.Stderr, "go build: %v\n%s", err, out)
-		os.RemoveAll(dir)
-		os.Exit(1)
-	}
 	code := m.Run()
-	os.RemoveAll(dir)
+	if binaryDir != "" {
+		os.RemoveAll(binaryDir)
+	}
 	os.Exit(code)
+}
+
+// builtBinary builds the command once with go build.
+func builtBinary(t *testing.T) string {
+	t.Helper()
+	buildOnce.Do(func() {
+		binaryDir, buildErr = os.MkdirTemp("", "coilmemo-cli-")
+		if buildErr != nil {
+			return
+		}
+		binary = filepath.Join(binaryDir, "coilmemo")
+		if out, err := exec.Command("go", "build", "-o", binary, ".").CombinedOutput(); err != nil {
+			buildErr = fmt.Errorf("go build: %v\n%s", err, out)
+		}
+	})
+	if buildErr != nil {
+		t.Fatal(buildErr)
+	}
+	return binary
 }
 
 // small is a sound spec that builds quickly.
@@ -48,7 +66,7 @@ type result struct {
 // cli runs the binary in dir with args.
 func cli(t *testing.T, dir string, args ...string) result {
 	t.Helper()
-	cmd := exec.Command(binary, args...)
+	cmd := exec.Command(builtBinary(t), args...)
 	cmd.Dir = dir
 	cmd.Env = append(os.Environ(), "SOURCE_DATE_EPOCH=")
 	var o, e bytes.Buffer
@@ -325,7 +343,7 @@ func TestCLINewFullDevice(t *testing.T) {
 		t.Skip("no /dev/full:", err)
 	}
 	defer f.Close()
-	cmd := exec.Command(binary, "new")
+	cmd := exec.Command(builtBinary(t), "new")
 	cmd.Stdout = f
 	var e bytes.Buffer
 	cmd.Stderr = &e
@@ -368,7 +386,7 @@ func TestCLISignalLeavesNoTemp(t *testing.T) {
 		args = append(args, n)
 	}
 	for _, sig := range []syscall.Signal{syscall.SIGINT, syscall.SIGTERM} {
-		cmd := exec.Command(binary, append([]string{"build", "-o", "out"}, args...)...)
+		cmd := exec.Command(builtBinary(t), append([]string{"build", "-o", "out"}, args...)...)
 		cmd.Dir = dir
 		var e bytes.Buffer
 		cmd.Stderr = &e
@@ -430,7 +448,7 @@ func TestCLIParallelDeterministic(t *testing.T) {
 		write(t, filepath.Join(dir, n+".md"), string(src))
 		args = append(args, n+".md")
 	}
-	serial := exec.Command(binary, append([]string{"build", "-o", "serial"}, args...)...)
+	serial := exec.Command(builtBinary(t), append([]string{"build", "-o", "serial"}, args...)...)
 	serial.Dir = dir
 	serial.Env = append(os.Environ(), "GOMAXPROCS=1")
 	so, err := serial.Output()
