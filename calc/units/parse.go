@@ -252,10 +252,15 @@ const (
 
 type exps [nBase]int
 
+// maxExp bounds each base unit's exponent in a dimension: the bound on one
+// factor's exponent, so that every dimension Parse accepts is one whose
+// printed symbol (kg·m²·s⁻³…) Parse reads back.
+const maxExp = 12
+
 func (e exps) dim() (Dim, bool) {
 	var d [nBase]int8
 	for i, x := range e {
-		if x > 60 || x < -60 {
+		if x > maxExp || x < -maxExp {
 			return Dim{}, false
 		}
 		d[i] = int8(x)
@@ -687,8 +692,11 @@ func (p *unitParser) exponent() (int, error) {
 		if count == 0 {
 			return 0, p.errorf("exponent missing")
 		}
-		if n > 12 {
+		if n > maxExp {
 			return 0, p.errorf("exponent too large")
+		}
+		if n == 0 {
+			return 0, p.errorf("exponent 0 (the unit would cancel)")
 		}
 		if neg {
 			n = -n
