@@ -549,3 +549,41 @@ func TestCLINewStarter(t *testing.T) {
 		t.Errorf("a filled-in spec warns: exit %d\n%s", r.code, r.stderr)
 	}
 }
+
+// A folder without write permission: exit 2 naming the output and the
+// cause, nothing written. (As root, the binary is run as nobody.)
+func TestCLIPermissionDenied(t *testing.T) {
+	bin := builtBinary(t)
+	var prefix []string
+	if os.Geteuid() == 0 {
+		sp, err := exec.LookPath("setpriv")
+		if err != nil {
+			t.Skip("root, and no setpriv to drop privileges")
+		}
+		prefix = []string{sp, "--reuid=65534", "--regid=65534", "--clear-groups"}
+		os.Chmod(binaryDir, 0o755)
+	}
+	dir := t.TempDir()
+	os.Chmod(dir, 0o755)
+	write(t, filepath.Join(dir, "a.md"), small)
+	os.Chmod(filepath.Join(dir, "a.md"), 0o644)
+	ro := filepath.Join(dir, "ro")
+	os.Mkdir(ro, 0o755)
+	write(t, filepath.Join(ro, "a.pdf"), "previous")
+	os.Chmod(ro, 0o555)
+	defer os.Chmod(ro, 0o755)
+	args := append(prefix, bin, "build", "a.md", "-o", "ro/a.pdf")
+	cmd := exec.Command(args[0], args[1:]...)
+	cmd.Dir = dir
+	var e bytes.Buffer
+	cmd.Stderr = &e
+	err := cmd.Run()
+	var xe *exec.ExitError
+	if !errors.As(err, &xe) || xe.ExitCode() != 2 || !strings.Contains(e.String(), "coilmemo: cannot write ro/a.pdf: permission denied; nothing written") {
+		t.Errorf("%v\n%s", err, e.String())
+	}
+	if b, _ := os.ReadFile(filepath.Join(ro, "a.pdf")); string(b) != "previous" {
+		t.Error("the previous memo was replaced")
+	}
+	noTemps(t, dir)
+}
