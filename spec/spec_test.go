@@ -1,11 +1,15 @@
 package spec
 
 import (
+	"fmt"
 	"math"
 	"os"
+	"path/filepath"
 	"reflect"
 	"strings"
 	"testing"
+	"unicode"
+	"unicode/utf8"
 
 	"coilmemo/calc"
 	"coilmemo/doc"
@@ -505,11 +509,32 @@ func brokenSeeds() []string {
 	}
 }
 
+// FuzzParse: whatever the text, the reader returns a spec and positioned
+// messages (a line of the file, valid UTF-8, nothing unprintable), the
+// same ones each time; a spec it accepts holds only valid, printable text
+// (what reaches the PDF writer) and entries on lines of the file.
 func FuzzParse(f *testing.F) {
 	if good, err := os.ReadFile("testdata/good.md"); err == nil {
 		f.Add(string(good))
 	}
+	examples, _ := filepath.Glob("../examples/*.md")
+	for _, p := range examples {
+		if b, err := os.ReadFile(p); err == nil {
+			f.Add(string(b))
+		}
+	}
 	for _, s := range brokenSeeds() {
+		f.Add(s)
+	}
+	for _, s := range []string{
+		"\ufeff# Title\n\n" + fenced("coil", coilBody),
+		"# Bad \xff byte\n\nSome \xff prose\n\n" + fenced("coil", coilBody),
+		"<div>\n" + fenced("limits", "power <= 1 W\n") + fenced("coil", coilBody),
+		fenced("coil", coilBody+"duty = 50 %\non-time = 2 h\n"),
+		fenced("coil", coilBody) + fenced("sweep", "current = 1 .. -1 A step 0.5 A\n"),
+		fenced("coil", coilBody) + fenced("tolerances", "supply = ±5 %\nturns = ±2\n"),
+		fenced("memo", "title = a\x01b\nhistory = A | 2026-01-01 | me | x\n") + fenced("coil", coilBody),
+	} {
 		f.Add(s)
 	}
 	f.Fuzz(func(t *testing.T, src string) {
@@ -517,15 +542,84 @@ func FuzzParse(f *testing.F) {
 		if s == nil {
 			t.Fatal("nil spec")
 		}
+		lines := strings.Count(src, "\n") + 1
 		for i, d := range ds {
-			if d.Line < 1 || d.File != "f.md" || d.Msg == "" {
-				t.Errorf("bad diagnostic %+v", d)
+			if d.Line < 1 || d.Line > lines || d.File != "f.md" || d.Msg == "" {
+				t.Errorf("bad diagnostic %+v (the file has %d lines)", d, lines)
+			}
+			if !printable(d.Msg, false) {
+				t.Errorf("diagnostic message not printable: %q", d.Msg)
 			}
 			if i > 0 && ds[i-1].Line > d.Line {
 				t.Errorf("diagnostics out of order")
 			}
 		}
+		_, again := Parse("f.md", []byte(src))
+		if !reflect.DeepEqual(ds, again) {
+			t.Errorf("two readings differ:\n%v\n%v", ds, again)
+		}
+		if len(ds) > 0 {
+			return
+		}
+		walkStrings(reflect.ValueOf(s), "spec", 0, func(path, v string) {
+			if !printable(v, true) {
+				t.Errorf("%s = %q reaches the memo", path, v)
+			}
+		})
+		for _, e := range s.Entries {
+			if !e.Default && (e.Line < 1 || e.Line > lines) {
+				t.Errorf("entry %s at line %d of %d", e.Key, e.Line, lines)
+			}
+		}
 	})
+}
+
+// printable reports whether s is valid UTF-8 without control characters
+// other than tab (and, with multiline, line breaks).
+func printable(s string, multiline bool) bool {
+	if !utf8.ValidString(s) {
+		return false
+	}
+	for _, r := range s {
+		if r == '\t' || multiline && (r == '\n' || r == '\r') {
+			continue
+		}
+		if unicode.IsControl(r) {
+			return false
+		}
+	}
+	return true
+}
+
+// walkStrings calls fn with every string reachable from v.
+func walkStrings(v reflect.Value, path string, depth int, fn func(path, v string)) {
+	if depth > 40 || !v.IsValid() {
+		return
+	}
+	switch v.Kind() {
+	case reflect.String:
+		fn(path, v.String())
+	case reflect.Pointer, reflect.Interface:
+		if !v.IsNil() {
+			walkStrings(v.Elem(), path, depth+1, fn)
+		}
+	case reflect.Struct:
+		for i := 0; i < v.NumField(); i++ {
+			if v.Type().Field(i).IsExported() {
+				walkStrings(v.Field(i), path+"."+v.Type().Field(i).Name, depth+1, fn)
+			}
+		}
+	case reflect.Slice, reflect.Array:
+		for i := 0; i < v.Len(); i++ {
+			walkStrings(v.Index(i), fmt.Sprintf("%s[%d]", path, i), depth+1, fn)
+		}
+	case reflect.Map:
+		it := v.MapRange()
+		for it.Next() {
+			walkStrings(it.Key(), path+"{key}", depth+1, fn)
+			walkStrings(it.Value(), path+"{value}", depth+1, fn)
+		}
+	}
 }
 
 func TestInsulationAndCooling(t *testing.T) {

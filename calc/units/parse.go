@@ -101,6 +101,11 @@ func Parse(s string) (Quantity, error) {
 // given: 12 (expected a length such as mm)`.
 func ParseAs(s string, want Dim) (Quantity, error) {
 	q, err := Parse(s)
+	var uu *unknownUnitError
+	if errors.As(err, &uu) {
+		_, unit, _ := Split(s)
+		return q, uu.within(unit, want)
+	}
 	if err != nil {
 		return q, err
 	}
@@ -247,10 +252,15 @@ const (
 
 type exps [nBase]int
 
+// maxExp bounds each base unit's exponent in a dimension: the bound on one
+// factor's exponent, so that every dimension Parse accepts is one whose
+// printed symbol (kg·m²·s⁻³…) Parse reads back.
+const maxExp = 12
+
 func (e exps) dim() (Dim, bool) {
 	var d [nBase]int8
 	for i, x := range e {
-		if x > 60 || x < -60 {
+		if x > maxExp || x < -maxExp {
 			return Dim{}, false
 		}
 		d[i] = int8(x)
@@ -371,12 +381,50 @@ func unknownUnit(name string) error {
 	}
 	for _, alt := range []string{strings.ToLower(name), strings.ToUpper(name)} {
 		if alt != name {
-			if _, ok := lookupAtom(alt); ok {
-				return fmt.Errorf("unknown unit %q; did you mean %q?", name, alt)
+			if d, ok := lookupAtom(alt); ok {
+				return &unknownUnitError{name: name, alt: alt, altDim: d.dim}
 			}
 		}
 	}
-	return fmt.Errorf("unknown unit %q", name)
+	return &unknownUnitError{name: name}
+}
+
+// unknownUnitError is a unit symbol the table lacks, with the symbol of
+// another case that it has (and that symbol's dimension), if any.
+type unknownUnitError struct {
+	name, alt string
+	altDim    exps
+}
+
+func (e *unknownUnitError) Error() string {
+	if e.alt != "" {
+		return fmt.Sprintf("unknown unit %q; did you mean %q?", e.name, e.alt)
+	}
+	return fmt.Sprintf("unknown unit %q", e.name)
+}
+
+// within keeps a suggestion only when it could give a value of dimension
+// want: a lone unit whose dimension is want's (for on-time = 2 h, a time
+// is wanted and henry is no suggestion). Otherwise it names the wanted
+// dimension and an example unit instead.
+func (e *unknownUnitError) within(unit string, want Dim) error {
+	if e.alt == "" {
+		return e
+	}
+	if d, ok := e.altDim.dim(); ok && d == want && strings.TrimSpace(unit) == e.name {
+		return e
+	}
+	if strings.TrimSpace(unit) != e.name {
+		// inside a compound unit: is the whole, with the other case, of
+		// the wanted dimension?
+		if u, err := parseUnit(strings.Replace(unit, e.name, e.alt, 1)); err == nil && u.dim == want {
+			return e
+		}
+	}
+	if ex := want.Example(); ex != want.Symbol() {
+		return fmt.Errorf("unknown unit %q; want %s, e.g. %s", e.name, Describe(want), ex)
+	}
+	return fmt.Errorf("unknown unit %q; want %s", e.name, Describe(want))
 }
 
 // size is f × 10^p.
@@ -644,8 +692,11 @@ func (p *unitParser) exponent() (int, error) {
 		if count == 0 {
 			return 0, p.errorf("exponent missing")
 		}
-		if n > 12 {
+		if n > maxExp {
 			return 0, p.errorf("exponent too large")
+		}
+		if n == 0 {
+			return 0, p.errorf("exponent 0 (the unit would cancel)")
 		}
 		if neg {
 			n = -n

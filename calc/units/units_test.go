@@ -4,6 +4,7 @@ import (
 	"math"
 	"strings"
 	"testing"
+	"unicode/utf8"
 )
 
 func near(a, b float64) bool {
@@ -298,13 +299,96 @@ func FuzzParse(f *testing.F) {
 		"1e-3 A·m²", "2 A*m^2", "50 %", "W/m2K", "((((m))))", "1 m⁻¹²", "−5 in", "3 s^-2"} {
 		f.Add(s)
 	}
+	for _, s := range []string{"2 h", "5 v", "3 Ms", "1 mT/m", "4 w/m2K", "-273.15 degC", "1e308 km", "0x10 m",
+		"1_000 m", "5 µΩ·m", "2 kg·m·s⁻³", "1e-320 m", "7 K/W", "1 (m)/(s)"} {
+		f.Add(s)
+	}
 	f.Fuzz(func(t *testing.T, s string) {
 		q, err := Parse(s)
+		if err != nil {
+			if msg := err.Error(); !utf8.ValidString(msg) || msg == "" {
+				t.Errorf("Parse(%q): message %q", s, msg)
+			}
+		}
 		if err == nil && (math.IsNaN(q.Value) || math.IsInf(q.Value, 0)) {
 			t.Errorf("Parse(%q) = %v without error", s, q.Value)
 		}
+		if err == nil {
+			// What Format writes, Parse reads back: same dimension, the
+			// value to Format's six significant digits.
+			out := Format(q.Value, q.Dim)
+			back, err := Parse(out)
+			// (A temperature within a compound unit is an interval and may
+			// be negative; Format writes it as kelvin, which reads back as
+			// an absolute temperature.)
+			interval := q.Dim == Temperature && q.Value < 0
+			if !interval && (err != nil || back.Dim != q.Dim || math.Abs(back.Value-q.Value) > 5e-6*math.Abs(q.Value)) {
+				t.Errorf("Parse(%q) = %v; Format writes %q, read back as %v, %v", s, q.Value, out, back, err)
+			}
+			// The dimension of the unit alone is the quantity's, and a
+			// value converts back into the unit it was written in.
+			num, unit, _ := Split(s)
+			if unit != "" {
+				if d, err := DimOf(unit); err != nil || d != q.Dim {
+					t.Errorf("DimOf(%q) = %v, %v; Parse gave %v", unit, d, err, q.Dim)
+				}
+				v, _ := parseNumber(num)
+				if got, err := In(q.Value, unit); err != nil || math.Abs(got-v) > 1e-9*math.Max(math.Abs(v), 1e-300) && math.Abs(v) > 1e-290 && math.Abs(v) < 1e290 {
+					t.Errorf("In(Parse(%q)) = %v, %v; want %v", s, got, err, v)
+				}
+			}
+			// ParseAs agrees with Parse on the dimension it gave.
+			if q2, err := ParseAs(s, q.Dim); err != nil || q2 != q {
+				t.Errorf("ParseAs(%q, %v) = %v, %v; Parse gave %v", s, q.Dim, q2, err, q)
+			}
+		}
 		_, _ = DimOf(s)
 		_, _ = In(1, s)
-		_, _ = ParseAs(s, Length)
+		if _, err := ParseAs(s, Time); err != nil && !utf8.ValidString(err.Error()) {
+			t.Errorf("ParseAs(%q, Time): message %q", s, err)
+		}
 	})
+}
+
+// A suggestion of the other letter case is made only when it gives the
+// wanted dimension: a time written "2 h" is not told about the henry.
+func TestSuggestionWithinDimension(t *testing.T) {
+	for _, c := range []struct {
+		s      string
+		want   Dim
+		has    string
+		hasNot string
+	}{
+		{"2 h", Time, "want a time (s)", `"H"`},
+		{"2 h", Inductance, `did you mean "H"?`, ""},
+		{"3 Hz", Time, "is a frequency", ""}, // known unit, wrong dimension
+		{"5 v", Voltage, `did you mean "V"?`, ""},
+		{"5 v", Length, "want a length (m), e.g. mm", `"V"`},
+		{"4 w/m2K", HeatTransfer, `did you mean "W"?`, ""},
+		{"4 w/s", HeatTransfer, "want a heat-transfer coefficient", `"W"`},
+	} {
+		_, err := ParseAs(c.s, c.want)
+		if err == nil {
+			t.Errorf("ParseAs(%q, %v): no error", c.s, c.want)
+			continue
+		}
+		if !strings.Contains(err.Error(), c.has) || c.hasNot != "" && strings.Contains(err.Error(), c.hasNot) {
+			t.Errorf("ParseAs(%q, %v) = %q; want it to say %q and not %q", c.s, c.want, err, c.has, c.hasNot)
+		}
+	}
+}
+
+// Found by fuzzing: a unit with exponent 0 (which turned a lone degC into
+// a compound interval and let -1 A0 degC through as −1 K), and exponents
+// whose product goes past the bound of one factor (V10 printed as
+// kg¹⁰·m²⁰·s⁻³⁰·A⁻¹⁰, which Parse could not read back).
+func TestFuzzFoundExponents(t *testing.T) {
+	for _, s := range []string{"-1 A0 degC", "1 m0", "0 V10", "1 (m3)5"} {
+		if q, err := Parse(s); err == nil {
+			t.Errorf("Parse(%q) = %v, want an error", s, q)
+		}
+	}
+	if q, err := Parse("2 s^-2"); err != nil || q.Dim != (Dim{S: -2}) {
+		t.Errorf("Parse(2 s^-2) = %v, %v", q, err)
+	}
 }

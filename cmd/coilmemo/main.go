@@ -7,7 +7,8 @@
 //	coilmemo new [FILE]                        a starter spec
 //
 // Exit status: 0 done; 1 internal failure, or a failed requirement with
-// --strict; 2 bad input or usage.
+// --strict; 2 bad input, a bad path or usage; 128 + the signal when
+// interrupted.
 package main
 
 import (
@@ -45,22 +46,8 @@ Commands:
   size    choose the free keys of a spec's size block and write the spec back
 
 Exit status: 0 done, 1 internal failure (or a failed requirement with
---strict), 2 bad input or usage. Run 'coilmemo help COMMAND' for details.
-`
-
-const buildHelp = `Usage: coilmemo build SPEC... [-o OUT] [--strict]
-
-Write the PDF calculation memo of each spec. Without -o the memo goes next
-to the spec with the extension .pdf (coil.md -> coil.pdf). With one spec,
--o names the output file; with several, -o names a directory.
-
-A spec with problems is reported as file:line: message, every problem at
-once, and no file is written or overwritten for it (exit status 2).
-
-Options:
-  -o OUT     output file (one spec) or directory (several specs)
-  --strict   exit with status 1 when a requirement in the limits block fails
-             or a verification check fails (the memo is still written)
+--strict), 2 bad input, a bad path or usage; 130 or 143 when interrupted
+(no partial file is left). Run 'coilmemo help COMMAND' for details.
 `
 
 const calcHelp = `Usage: coilmemo calc SPEC [--json] [--strict]
@@ -76,7 +63,24 @@ Options:
   --strict   exit with status 1 when a requirement or verification fails
 `
 
-var helps = map[string]string{"build": buildHelp, "calc": calcHelp, "diff": diffHelp, "watch": watchHelp, "new": newHelp, "size": sizeHelp}
+const helpHelp = `Usage: coilmemo help [COMMAND]
+
+Without COMMAND, list the commands; with one, print its help (the same as
+'coilmemo COMMAND --help').
+`
+
+var helps = map[string]string{"build": buildHelp, "calc": calcHelp, "diff": diffHelp, "watch": watchHelp, "new": newHelp, "size": sizeHelp, "help": helpHelp}
+
+// commands is the dispatch table: one line a command.
+var commands = map[string]func(args []string, stdout, stderr io.Writer) error{
+	"build": build,
+	"calc":  calcCmd,
+	"diff":  diffCmd,
+	"watch": watchCmd,
+	"new":   newCmd,
+	"size":  sizeCmd,
+	"help":  helpCmd,
+}
 
 // exitError carries an exit status.
 type exitError struct {
@@ -87,6 +91,7 @@ type exitError struct {
 func (e *exitError) Error() string { return e.msg }
 
 func main() {
+	stopOnSignal()
 	err := run(os.Args[1:], os.Stdout, os.Stderr)
 	if err == nil {
 		return
@@ -112,45 +117,66 @@ func run(args []string, stdout, stderr io.Writer) error {
 		return &exitError{code: 2}
 	}
 	switch args[0] {
-	case "build":
-		return build(args[1:], stdout, stderr)
-	case "calc":
-		return calcCmd(args[1:], stdout, stderr)
-	case "diff":
-		return diffCmd(args[1:], stdout, stderr)
-	case "watch":
-		return watchCmd(args[1:], stdout, stderr)
-	case "new":
-		return newCmd(args[1:], stdout)
-	case "size":
-		return sizeCmd(args[1:], stdout, stderr)
-	case "help", "-h", "-help", "--help":
-		if len(args) > 1 {
-			h, ok := helps[args[1]]
-			if !ok {
-				return usageErr("no help for %q", args[1])
-			}
-			fmt.Fprint(stdout, h)
-			return nil
-		}
-		fmt.Fprintf(stdout, usage, memo.Version)
-		return nil
+	case "-h", "-help", "--help":
+		return helpCmd(args[1:], stdout, stderr)
 	case "version", "--version":
 		fmt.Fprintln(stdout, "coilmemo", memo.Version)
 		return nil
 	}
+	if cmd, ok := commands[args[0]]; ok {
+		return cmd(args[1:], stdout, stderr)
+	}
+	names := make([]string, 0, len(commands)+1)
+	for n := range commands {
+		names = append(names, n)
+	}
+	if s := nearest(args[0], append(names, "version")); s != "" {
+		return usageErr("unknown command %q; did you mean %q?", args[0], s)
+	}
 	return usageErr("unknown command %q", args[0])
 }
 
+func helpCmd(args []string, stdout, stderr io.Writer) error {
+	switch {
+	case len(args) == 0:
+		fmt.Fprintf(stdout, usage, memo.Version)
+		return nil
+	case len(args) > 1:
+		return usageErr("help takes at most one command")
+	}
+	topic := args[0]
+	if topic == "-h" || topic == "-help" || topic == "--help" {
+		topic = "help"
+	}
+	if h, ok := helps[topic]; ok {
+		fmt.Fprint(stdout, h)
+		return nil
+	}
+	names := make([]string, 0, len(helps))
+	for n := range helps {
+		names = append(names, n)
+	}
+	if s := nearest(args[0], names); s != "" {
+		return usageErr("no help for %q; did you mean %q?", args[0], s)
+	}
+	return usageErr("no help for %q", args[0])
+}
+
 // parseInterleaved parses flags that may stand before, between or after
-// the positional arguments, and returns the positional ones.
+// the positional arguments, and returns the positional ones. Everything
+// after "--" is positional. An unknown flag is reported with the nearest
+// defined one.
 func parseInterleaved(fs *flag.FlagSet, args []string) ([]string, error) {
 	var pos []string
 	for {
 		if err := fs.Parse(args); err != nil {
-			return nil, err
+			return nil, unknownFlag(fs, err)
 		}
-		args = fs.Args()
+		rest := fs.Args()
+		if n := len(args) - len(rest); n > 0 && args[n-1] == "--" {
+			return append(pos, rest...), nil
+		}
+		args = rest
 		if len(args) == 0 {
 			return pos, nil
 		}
@@ -159,10 +185,38 @@ func parseInterleaved(fs *flag.FlagSet, args []string) ([]string, error) {
 	}
 }
 
+// unknownFlag rewrites the flag package's "flag provided but not
+// defined: -jsn" as "unknown option --jsn; did you mean --json?".
+func unknownFlag(fs *flag.FlagSet, err error) error {
+	const prefix = "flag provided but not defined: "
+	msg := err.Error()
+	if !strings.HasPrefix(msg, prefix) {
+		return err
+	}
+	name := strings.TrimLeft(strings.TrimPrefix(msg, prefix), "-")
+	var names []string
+	fs.VisitAll(func(f *flag.Flag) { names = append(names, f.Name) })
+	names = append(names, "help")
+	if s := nearest(name, names); s != "" {
+		return fmt.Errorf("%s has no option %s; did you mean %s?", fs.Name(), dashes(name), dashes(s))
+	}
+	return fmt.Errorf("%s has no option %s", fs.Name(), dashes(name))
+}
+
+// dashes writes an option as the help texts do: -o, --json.
+func dashes(name string) string {
+	if len([]rune(name)) == 1 {
+		return "-" + name
+	}
+	return "--" + name
+}
+
+// newFlagSet returns a flag set that prints nothing itself: flagErr prints
+// the help (once) for -h/--help and a usage error otherwise.
 func newFlagSet(name, help string, stdout io.Writer) *flag.FlagSet {
 	fs := flag.NewFlagSet(name, flag.ContinueOnError)
 	fs.SetOutput(io.Discard)
-	fs.Usage = func() { fmt.Fprint(stdout, help) }
+	fs.Usage = func() {}
 	return fs
 }
 
@@ -180,6 +234,7 @@ func load(path string, stderr io.Writer) (*analysis.Study, error) {
 	if err != nil {
 		return nil, err
 	}
+	warnPlaceholders(path, src, stderr)
 	date, _, err := sourceDateEpoch(os.Getenv("SOURCE_DATE_EPOCH"))
 	if err != nil {
 		return nil, &exitError{2, err.Error()}
@@ -227,106 +282,6 @@ func readSpec(path string) ([]byte, error) {
 	return src, nil
 }
 
-func build(args []string, stdout, stderr io.Writer) error {
-	fs := newFlagSet("build", buildHelp, stdout)
-	out := fs.String("o", "", "output file or directory")
-	strict := fs.Bool("strict", false, "exit 1 on a failed requirement")
-	specs, err := parseInterleaved(fs, args)
-	if err != nil {
-		return flagErr(err, buildHelp, stdout)
-	}
-	if len(specs) == 0 {
-		return usageErr("build needs at least one spec file")
-	}
-	var bad, failed int
-	for _, path := range specs {
-		job, err := load(path, stderr)
-		if err != nil {
-			var ee *exitError
-			if errors.As(err, &ee) && ee.code == 2 {
-				fmt.Fprintln(stderr, ee.msg)
-				bad++
-				continue
-			}
-			return err
-		}
-		target := outputPath(path, *out, len(specs) > 1)
-		if sameFile(path, target) {
-			fmt.Fprintf(stderr, "%s: the output %s is the spec itself; nothing written\n", path, target)
-			bad++
-			continue
-		}
-		b, err := memo.PDF(job)
-		if err != nil {
-			return fmt.Errorf("%s: rendering the memo: %w", path, err)
-		}
-		if err := writeAtomic(target, b); err != nil {
-			return err
-		}
-		lf, cf := job.Failed()
-		note := ""
-		if lf+cf > 0 {
-			failed++
-			note = fmt.Sprintf(" (%d requirement(s) and %d check(s) FAILED)", lf, cf)
-		}
-		fmt.Fprintf(stdout, "%s → %s, %d bytes%s\n", path, target, len(b), note)
-	}
-	if bad > 0 {
-		return &exitError{code: 2}
-	}
-	if *strict && failed > 0 {
-		return &exitError{1, "coilmemo: --strict: a requirement or check failed"}
-	}
-	return nil
-}
-
-// outputPath is where a spec's memo goes.
-func outputPath(spec, out string, several bool) string {
-	base := strings.TrimSuffix(filepath.Base(spec), filepath.Ext(spec)) + ".pdf"
-	switch {
-	case out == "":
-		return filepath.Join(filepath.Dir(spec), base)
-	case several:
-		return filepath.Join(out, base)
-	}
-	return out
-}
-
-// sameFile reports whether two paths name the same existing file.
-func sameFile(a, b string) bool {
-	fa, errA := os.Stat(a)
-	fb, errB := os.Stat(b)
-	return errA == nil && errB == nil && os.SameFile(fa, fb)
-}
-
-// writeAtomic writes b to a temporary file beside path and renames it into
-// place, so a failed run never leaves a half-written memo.
-func writeAtomic(path string, b []byte) error {
-	dir := filepath.Dir(path)
-	if err := os.MkdirAll(dir, 0o755); err != nil {
-		return err
-	}
-	f, err := os.CreateTemp(dir, ".coilmemo-*.tmp")
-	if err != nil {
-		return err
-	}
-	tmp := f.Name()
-	if _, err := f.Write(b); err != nil {
-		f.Close()
-		os.Remove(tmp)
-		return err
-	}
-	if err := f.Close(); err != nil {
-		os.Remove(tmp)
-		return err
-	}
-	if err := os.Chmod(tmp, 0o644); err != nil {
-		os.Remove(tmp)
-		return err
-	}
-	return os.Rename(tmp, path)
-}
-
 func calcCmd(args []string, stdout, stderr io.Writer) error {
 	fs := newFlagSet("calc", calcHelp, stdout)
 	asJSON := fs.Bool("json", false, "print JSON")
@@ -347,9 +302,12 @@ func calcCmd(args []string, stdout, stderr io.Writer) error {
 		if err != nil {
 			return err
 		}
-		stdout.Write(b)
+		_, err = stdout.Write(b)
 	} else {
-		memo.WriteSummary(stdout, job)
+		err = memo.WriteSummary(stdout, job)
+	}
+	if err != nil {
+		return &exitError{2, "coilmemo: writing the results: " + reason(err)}
 	}
 	if lf, cf := job.Failed(); *strict && lf+cf > 0 {
 		return &exitError{1, "coilmemo: --strict: a requirement or check failed"}

@@ -11,7 +11,8 @@ import (
 const watchHelp = `Usage: coilmemo watch SPEC [-o OUT]
 
 Build the memo of SPEC, then rebuild it each time the file is saved, until
-interrupted (Ctrl-C). Problems in the spec are printed and the previous memo
+interrupted (Ctrl-C). A SPEC that does not exist, or is not a regular
+file, is a usage error (exit status 2). Problems in the spec are printed and the previous memo
 is left in place until the spec is sound again.
 `
 
@@ -25,6 +26,9 @@ func watchCmd(args []string, stdout, stderr io.Writer) error {
 	if len(pos) != 1 {
 		return usageErr("watch takes one spec file")
 	}
+	if _, err := readSpec(pos[0]); err != nil {
+		return err // a missing file, a folder or a device: nothing to watch
+	}
 	return watch(pos[0], *out, stdout, stderr, 300*time.Millisecond, nil)
 }
 
@@ -32,13 +36,18 @@ func watchCmd(args []string, stdout, stderr io.Writer) error {
 // polling every interval, until stop is closed (never, from the command).
 func watch(path, out string, stdout, stderr io.Writer, interval time.Duration, stop <-chan struct{}) error {
 	var last os.FileInfo
+	lastErr := ""
 	fmt.Fprintf(stdout, "watching %s (Ctrl-C to stop)\n", path)
 	for {
 		fi, err := os.Stat(path)
 		if err != nil {
-			fmt.Fprintln(stderr, "coilmemo:", err)
+			if err.Error() != lastErr { // once, not every poll
+				fmt.Fprintln(stderr, "coilmemo:", err)
+				lastErr = err.Error()
+			}
+			last = nil
 		} else if last == nil || !fi.ModTime().Equal(last.ModTime()) || fi.Size() != last.Size() {
-			last = fi
+			last, lastErr = fi, ""
 			args := []string{path}
 			if out != "" {
 				args = append(args, "-o", out)
