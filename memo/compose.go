@@ -155,6 +155,9 @@ func (c *composer) titlePage() {
 	}})
 	c.heading(1, "Results summary")
 	c.add(c.verdict())
+	if p, ok := c.sizingSummary(); ok {
+		c.add(p)
+	}
 	c.add(c.summaryTable())
 	if len(c.j.Limits) > 0 {
 		c.add(c.limitsTable())

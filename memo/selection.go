@@ -354,3 +354,24 @@ func (c *composer) meritText(sz *analysis.Sizing) {
 	c.para(fmt.Sprintf("It depends on the geometry of the turns alone. Turns and wire only trade current against voltage at the same merit, so once the winding space is fixed, the moment a given power and copper mass buy is fixed too: m = √(%s × P × M). More moment for the same power and mass needs larger turns (the merit grows as the square of their radius) or a conductor with a smaller ρ ρm.",
 		Eng(sz.Merit, "A²·m⁴/(W·kg)", 4)))
 }
+
+// sizingSummary is page 1's line on a sized design: what was chosen, for
+// what, out of how many choices.
+func (c *composer) sizingSummary() (doc.Paragraph, bool) {
+	sz := c.j.Sizing
+	if sz == nil {
+		return doc.Paragraph{}, false
+	}
+	ch := sz.Chosen
+	var vals []string
+	for k, r := range sz.Size.Ranges {
+		vals = append(vals, r.Key+" "+rangeValueOf(r, ch.Values[k]))
+	}
+	what := fmt.Sprintf("%s, %d turns", ch.Wire.Name(), ch.Turns)
+	if len(vals) > 0 {
+		what += ", " + strings.Join(vals, ", ")
+	}
+	return doc.Paragraph{Spans: []doc.Span{{Text: "Sized for " + sz.Objective.String() + ": ", Strong: true},
+		{Text: fmt.Sprintf("%s (%s), the best that meets every requirement of the %s searched; see Design selection.",
+			what, objectiveValue(sz.Objective, ch.Objective), count(sz.Discrete, "choice"))}}}, true
+}
