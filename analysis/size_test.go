@@ -246,3 +246,14 @@ func TestSizeGoldenSection(t *testing.T) {
 		t.Errorf("mean diameter %.6g m, want the mass limit's %.6g m (within 1e-4 of the range below it)", D, want)
 	}
 }
+
+// An a.c. voltage drive needs every choice's inductance: a search that
+// would take too long is refused at once, at the size block.
+func TestSizeACWorkBound(t *testing.T) {
+	src := strings.Replace(sizeSpec("turns = 100 .. 3000\nwire = AWG 20 .. AWG 36\nradial-build = 0 .. 10 mm\nobjective = minimum power", "moment >= 0.1 A m2"),
+		"voltage = 5 V\n", "voltage = 5 V\nfrequency = 50 Hz\n", 1)
+	_, diags := Run("s.md", []byte(src), Options{})
+	if len(diags) != 1 || !strings.Contains(diags[0].Msg, "a.c. voltage") || diags[0].Line != 13 {
+		t.Fatalf("%v", diags)
+	}
+}
