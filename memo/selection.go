@@ -39,6 +39,9 @@ func (c *composer) selection() {
 	c.frontFigure(sz)
 	c.add(c.choiceTable(sz))
 	c.para(c.whyText(sz))
+	if t := c.cornerText(); t != "" {
+		c.para(t)
+	}
 	c.meritText(sz)
 }
 
@@ -374,4 +377,25 @@ func (c *composer) sizingSummary() (doc.Paragraph, bool) {
 	return doc.Paragraph{Spans: []doc.Span{{Text: "Sized for " + sz.Objective.String() + ": ", Strong: true},
 		{Text: fmt.Sprintf("%s (%s), the best that meets every requirement of the %s searched; see Design selection.",
 			what, objectiveValue(sz.Objective, ch.Objective), count(sz.Discrete, "choice"))}}}, true
+}
+
+// cornerText says, for a spec with tolerances, that the search judged the
+// nominal design, and which requirements the choice then fails at a
+// tolerance corner.
+func (c *composer) cornerText() string {
+	wc := c.j.WorstCase
+	if wc == nil {
+		return ""
+	}
+	var failing []string
+	for i, l := range c.j.Limits {
+		if i < len(wc.Limits) && wc.Limits[i].NominalPass && !l.Pass {
+			failing = append(failing, limitName(l)+" "+relText(l.Limit)+" "+worstValue(l.Limit.Quantity, l.Limit.Required, 3))
+		}
+	}
+	if len(failing) == 0 {
+		return "The search judges each choice at its nominal values; the chosen design also meets every requirement at every corner of the tolerances (see Worst case)."
+	}
+	return fmt.Sprintf("The search judges each choice at its nominal values. At the corners of the tolerances the chosen design fails %s (see Worst case): size it again with that requirement tightened by the spread the Worst case section shows.",
+		strings.Join(failing, " and "))
 }
