@@ -52,7 +52,7 @@ type Report struct {
 	// (worstcase.go); absent without a tolerances block.
 	WorstCase map[string]WorstReport `json:"worst_case,omitempty"`
 	// Sizing is the size block's choice (sizing.go); absent without one.
-	Sizing *SizingReport `json:"sizing,omitempty"`
+	Sizing *SizingReport `json:"size,omitempty"`
 }
 
 // SweepReport is the design re-evaluated over one parameter's range.

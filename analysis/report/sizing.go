@@ -9,6 +9,9 @@ import (
 // runners-up.
 type SizingReport struct {
 	Objective string `json:"objective"`
+	// Value is the objective's value at the choice, SI (W, kg, A·m² or
+	// A·m²/W).
+	Value Num `json:"value"`
 	// Coils are the coil blocks sized (all alike).
 	Coils  []string        `json:"coils"`
 	Chosen SizingCandidate `json:"chosen"`
@@ -54,7 +57,7 @@ func addSizing(rep *Report, j *analysis.Study) {
 		return
 	}
 	r := &SizingReport{
-		Objective: sz.Objective.String(), Candidates: sz.Discrete, Evaluated: sz.Evaluated,
+		Objective: sz.Objective.String(), Value: Num(sz.Chosen.Objective), Candidates: sz.Discrete, Evaluated: sz.Evaluated,
 		Feasible: sz.Feasible, FullEvaluations: sz.Full, MeritA2m4PerWkg: Num(sz.Merit),
 		Chosen: sizingCandidate(sz, sz.Chosen), RunnersUp: []SizingCandidate{},
 	}
