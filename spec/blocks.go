@@ -231,11 +231,7 @@ func (p *parser) sweepBlock(b *rawBlock, coils []*coilIn) {
 		}
 		dim, ok := sweepDims[e.key]
 		if !ok {
-			isCoilKey := false
-			for _, k := range coilKeys {
-				isCoilKey = isCoilKey || k == e.key
-			}
-			if isCoilKey {
+			if isCoilKey(e.key) {
 				p.errf(e.line, "cannot sweep %q: a sweep steps one of %s", e.key, strings.Join(sweepKeys(), ", "))
 			} else {
 				p.unknownKey(e, blockSweep, append(sweepKeys(), "coil"))

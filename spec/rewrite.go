@@ -94,17 +94,8 @@ func setValue(line, v string) string {
 		}
 	}
 	comment := ""
-	in := false
-	for k := 0; k < len(body); k++ {
-		switch body[k] {
-		case '"':
-			in = !in
-		case '#':
-			if !in {
-				comment, body = body[k:], body[:k]
-				k = len(body)
-			}
-		}
+	if k, _ := commentStart(body); k < len(body) {
+		comment, body = body[k:], body[:k]
 	}
 	lead := body[:len(body)-len(strings.TrimLeft(body, " \t"))]
 	if lead == "" {

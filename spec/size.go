@@ -174,11 +174,7 @@ func (p *parser) sizeBlock(b *rawBlock) *Size {
 		default:
 			dim, ok := sweepDims[e.key]
 			if !ok || e.key == "duty" {
-				known := false
-				for _, k := range coilKeys {
-					known = known || k == e.key
-				}
-				if known {
+				if isCoilKey(e.key) {
 					p.errf(e.line, "size: %q cannot be left free: a size block sets turns, wire and the numeric coil keys (%s)", e.key, strings.Join(sizeRangeKeys(), ", "))
 				} else {
 					p.unknownKey(e, blockSize, append(append([]string(nil), sizeKeys...), sizeRangeKeys()...))

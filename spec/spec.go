@@ -339,6 +339,17 @@ func (p *parser) paramBlock(c *ast.FencedCodeBlock) *rawBlock {
 
 // stripComment removes a # comment, except inside double quotes.
 func stripComment(s string) (string, error) {
+	i, open := commentStart(s)
+	if open {
+		return s, fmt.Errorf("unterminated quote in %q", strings.TrimSpace(s))
+	}
+	return s[:i], nil
+}
+
+// commentStart returns the offset of the # that starts a comment in s
+// (len(s) when none), a # inside double quotes not counting, and whether
+// a quote is left open.
+func commentStart(s string) (int, bool) {
 	in := false
 	for i := 0; i < len(s); i++ {
 		switch s[i] {
@@ -346,14 +357,11 @@ func stripComment(s string) (string, error) {
 			in = !in
 		case '#':
 			if !in {
-				return s[:i], nil
+				return i, false
 			}
 		}
 	}
-	if in {
-		return s, fmt.Errorf("unterminated quote in %q", strings.TrimSpace(s))
-	}
-	return s, nil
+	return len(s), in
 }
 
 func (p *parser) table(t *east.Table) doc.Table {
