@@ -62,7 +62,7 @@ type Sizing struct {
 	// it, among choices that meet every other cheap constraint.
 	Front []FrontPoint
 	// Merit is m²/(P·M) of the chosen winding (calc.MomentMerit), A²·m⁴/(W·kg),
-	// NaN unless one air-core coil block is sized; MeritResistivity the
+	// NaN unless one coil block is sized (cored coils are not: spec); MeritResistivity the
 	// resistivity it takes, at the winding's mean temperature, Ω·m.
 	Merit, MeritResistivity float64
 	// Stated are the coil blocks' own values of the free keys that the
@@ -202,18 +202,12 @@ func SizeDesign(s *spec.Spec) (*Sizing, *spec.Spec, spec.Diagnostics) {
 		{Name: "apart", Limit: -1, Cheap: true},
 		{Name: "thermal", Limit: -1, Cheap: true},
 	}
-	for _, i := range sz.Targets {
-		z.cored = z.cored || s.Design.Coils[i].Core.Present()
-	}
 	for i, l := range s.Design.Limits {
 		cheap := cheapQuantities[l.Quantity] || (lowerBoundOnly[l.Quantity] && l.Relation == calc.AtMost)
 		axial := true
 		if l.Quantity == "field" || l.Quantity == "field-center" {
 			axial = z.fieldOnAxes(l)
 			cheap = cheap && axial
-		}
-		if l.Quantity == "moment" && z.cored {
-			cheap = false
 		}
 		z.axial = append(z.axial, axial)
 		z.cons = append(z.cons, Constraint{Name: limitText(l), Limit: i, Cheap: cheap, Closest: math.NaN()})
@@ -580,13 +574,6 @@ func (z *sizer) cheap(d *calc.Design, c *Candidate) {
 		cr.Heat.Problem, cr.Heat.Steady = op.Thermal, op.State
 		cr.Density = op.Current / calc.ConductorArea(co.Wire.Bare)
 		cr.Moment = calc.MagneticMoment(co, w, op.Current)
-		if co.Core.Present() {
-			core := calc.EvaluateCore(co, w, op.Current)
-			cr.Moment = calc.CoredMoment(co, w, op.Current, core)
-			if !math.IsNaN(core.Mass) {
-				cr.Mass += core.Mass
-			}
-		}
 		res.Coils[i] = cr
 		res.Moment = res.Moment.Add(cr.Moment)
 		windings = append(windings, w)
@@ -1062,7 +1049,7 @@ func (z *sizer) curves(cands []Candidate) []SizeCurve {
 // merit is calc.MomentMerit of the chosen winding at its mean temperature,
 // for one sized air-core coil block.
 func (z *sizer) merit(c *Candidate) (merit, rho float64) {
-	if len(z.sz.Targets) != 1 || z.cored {
+	if len(z.sz.Targets) != 1 {
 		return math.NaN(), math.NaN()
 	}
 	d := z.base

@@ -257,3 +257,13 @@ func TestSizeACWorkBound(t *testing.T) {
 		t.Fatalf("%v", diags)
 	}
 }
+
+// A cored coil is refused at the size block, at once.
+func TestSizeCoredRefused(t *testing.T) {
+	src := strings.Replace(sizeSpec("turns = 100 .. 3000\nwire = AWG 20 .. AWG 36\nradial-build = 0 .. 10 mm\nobjective = minimum power", "moment >= 0.1 A m2"),
+		"voltage = 5 V\n", "voltage = 5 V\ncore-permeability = 5000\ncore-saturation = 0.75 T\ncore-length = 70 mm\ncore-diameter = 6 mm\n", 1)
+	_, diags := Run("s.md", []byte(src), Options{})
+	if !strings.Contains(diags.Error(), "has a core") {
+		t.Fatalf("%v", diags)
+	}
+}

@@ -433,6 +433,9 @@ func (p *parser) checkSize(coils []*coilIn) {
 		if s.ObjectiveLine > 0 && s.Objective.Maximise() && c.Form == calc.Pair && c.Opposing {
 			p.errf(s.ObjectiveLine, "objective %s: coil %q is an opposing pair, whose moment is zero whatever its winding; size it for a field gradient with objective = minimum power and a gradient limit", s.Objective, c.Name)
 		}
+		if c.Core.Present() {
+			p.errf(s.Line, "size: coil %q has a core, and the size search does not take cores yet: the core's model (its demagnetisation and B–H curve) takes 20 to 120 ms a choice, too slow to run over every choice; size the winding as an air coil for the share of the moment the core leaves it, or step the turns with a sweep block", c.Name)
+		}
 		if s.ObjectiveLine > 0 && isReceiver(ci) {
 			p.errf(s.ObjectiveLine, "objective %s: coil %q is a pick-up coil (no drive): it carries no current, so it has no moment or power to size for", s.Objective, c.Name)
 		}
