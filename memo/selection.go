@@ -39,6 +39,9 @@ func (c *composer) selection() {
 	c.frontFigure(sz)
 	c.add(c.choiceTable(sz))
 	c.para(c.whyText(sz))
+	if t := edgeText(sz); t != "" {
+		c.para(t)
+	}
 	if t := c.cornerText(); t != "" {
 		c.para(t)
 	}
@@ -398,4 +401,40 @@ func (c *composer) cornerText() string {
 	}
 	return fmt.Sprintf("The search judges each choice at its nominal values. At the corners of the tolerances the chosen design fails %s (see Worst case): size it again with that requirement tightened by the spread the Worst case section shows.",
 		strings.Join(failing, " and "))
+}
+
+// edgeText says when the choice sits at an end of a free range, where a
+// wider range may hold a better design.
+func edgeText(sz *analysis.Sizing) string {
+	s, ch := sz.Size, sz.Chosen
+	var ends []string
+	if s.TurnsLine > 0 {
+		switch ch.Turns {
+		case s.TurnsHi:
+			ends = append(ends, fmt.Sprintf("the most turns allowed (%d)", ch.Turns))
+		case s.TurnsLo:
+			ends = append(ends, fmt.Sprintf("the fewest turns allowed (%d)", ch.Turns))
+		}
+	}
+	if s.WireLine > 0 && len(s.Wires) > 1 {
+		switch ch.WireIndex {
+		case 0:
+			ends = append(ends, "the thickest wire listed ("+ch.Wire.Name()+")")
+		case len(s.Wires) - 1:
+			ends = append(ends, "the thinnest wire listed ("+ch.Wire.Name()+")")
+		}
+	}
+	for k, r := range s.Ranges {
+		v, tol := ch.Values[k], 1e-3*(r.Hi-r.Lo)
+		switch {
+		case v >= r.Hi-tol:
+			ends = append(ends, fmt.Sprintf("the top of the %s range (%s)", r.Key, rangeValueOf(r, r.Hi)))
+		case v <= r.Lo+tol && r.Key != "radial-build":
+			ends = append(ends, fmt.Sprintf("the bottom of the %s range (%s)", r.Key, rangeValueOf(r, r.Lo)))
+		}
+	}
+	if len(ends) == 0 {
+		return ""
+	}
+	return "The choice sits at " + strings.Join(ends, " and at ") + ": a design beyond that end may be better still, so widen the range there if the build allows it."
 }
