@@ -42,7 +42,12 @@ func IsReceiver(c calc.Coil) bool {
 
 // studyKinds computes the core, receiver and a.c. figures of every coil
 // block from the air-core results r (calc.Evaluate).
-func studyKinds(d calc.Design, r calc.Results) []CoilKinds {
+func studyKinds(d calc.Design, r calc.Results) []CoilKinds { return kindsOf(d, r, false) }
+
+// kindsOf is studyKinds; with cored set, r are results already through
+// coredResults, whose inductance includes the core's share (so it is not
+// added again); the Air fields are then not the air coil's.
+func kindsOf(d calc.Design, r calc.Results, cored bool) []CoilKinds {
 	out := make([]CoilKinds, len(d.Coils))
 	for i, c := range d.Coils {
 		if i >= len(r.Coils) {
@@ -59,7 +64,7 @@ func studyKinds(d calc.Design, r calc.Results) []CoilKinds {
 			if cr.Current != 0 {
 				k.EndField = RodEndField(c, cr, core)
 			}
-			if !math.IsNaN(core.InductanceAdded) {
+			if !math.IsNaN(core.InductanceAdded) && !cored {
 				L += core.InductanceAdded
 				if IsReceiver(c) {
 					L = cr.Inductance + core.InductanceAddedInitial
@@ -120,6 +125,15 @@ func coredResults(d calc.Design, r calc.Results, kinds []CoilKinds) calc.Results
 				if cr.RHot > 0 {
 					cr.TimeConstant = cr.Inductance / cr.RHot
 				}
+				cr.Switch = coredSwitching(c, *cr, d.Conditions)
+				if c.Frequency > 0 {
+					tm := cr.Heat.Steady.Mean
+					if !(tm > 0) { // a corner's quick evaluation carries no heat balance
+						tm = cr.Temperature
+					}
+					cr.AC = calc.AC(c, cr.Inductance, cr.RHot, tm, c.Frequency)
+					cr.ACBounds = calc.ACBoundsFor(c.Drive, c.Frequency, cr.RHot, cr.AC.Reactance)
+				}
 			}
 			if !math.IsNaN(k.Core.Mass) {
 				cr.Mass += k.Core.Mass
@@ -137,6 +151,39 @@ func coredResults(d calc.Design, r calc.Results, kinds []CoilKinds) calc.Results
 	out.TorqueDesign = calc.TorqueAtAngle(total.Norm(), bg.Norm(), d.Conditions.DesignAngle)
 	out.GradientForce = calc.GradientForce(total.Norm(), d.Conditions.FieldGradient)
 	return out
+}
+
+// coredSwitching is the switching of a cored coil block at its cored
+// inductance cr.Inductance, sized as calc.Evaluate sizes it (for the worst
+// current the switch may open, the winding then cold under voltage drive).
+func coredSwitching(c calc.Coil, cr calc.CoilResult, cond calc.Conditions) calc.SwitchResult {
+	rCold := cr.RHot
+	if c.Drive == calc.VoltageDrive {
+		rCold = calc.ResistanceAt(cr.R20, c.Wire.Material.Alpha20, calc.ColdTemperature(cond))
+	}
+	return calc.SwitchingWorst(cr.Inductance, cr.RHot, rCold, cr.Current, cr.SwitchOnCurrent, cr.Voltage, c.SwitchOff, c.DriverRating, c.Drive == calc.VoltageDrive)
+}
+
+// WithCores returns the results r of calc.Evaluate (or of a worst-case
+// corner's quick evaluation) of design d with every cored coil block's
+// figures replaced by the cored ones (coredResults): what the study's
+// limits, the sweep's and the worst case's corners are all judged on.
+func WithCores(d calc.Design, r calc.Results) calc.Results {
+	for _, c := range d.Coils {
+		if c.Core.Present() {
+			return coredResults(d, r, studyKinds(d, r))
+		}
+	}
+	return r
+}
+
+// kindLimit is LimitValue's case for the limit quantities of cored and
+// pick-up coils and a.c. windings; r are cored results (WithCores).
+func kindLimit(l calc.Limit, d calc.Design, r calc.Results) (float64, bool) {
+	if _, ok := kindQuantities[l.Quantity]; !ok {
+		return 0, false
+	}
+	return KindLimitValue(l, d, kindsOf(d, r, true))
 }
 
 // KindLimitValue returns the value, SI, of the limit quantities of cored
@@ -213,22 +260,4 @@ var kindQuantities = map[string]func(CoilKinds) float64{
 		}
 		return k.AC.Rac
 	},
-}
-
-// judgeKindLimits re-judges the limits on the cored and pick-up quantities
-// with the kinds' figures.
-func judgeKindLimits(d calc.Design, kinds []CoilKinds, ls []LimitResult) {
-	for i := range ls {
-		v, ok := KindLimitValue(ls[i].Limit, d, kinds)
-		if !ok {
-			continue
-		}
-		ls[i].Computed = v
-		switch ls[i].Limit.Relation {
-		case calc.AtLeast:
-			ls[i].Pass = v >= ls[i].Limit.Required
-		case calc.AtMost:
-			ls[i].Pass = v <= ls[i].Limit.Required
-		}
-	}
 }

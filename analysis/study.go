@@ -86,7 +86,6 @@ func Analyse(s *spec.Spec, o Options) *Study {
 	st.Results = coredResults(s.Design, air, kinds)
 	st.Cooling = calc.EffectiveCooling(s.Design.Conditions.Cooling)
 	st.Limits = JudgeLimits(s.Design, st.Results)
-	judgeKindLimits(s.Design, kinds, st.Limits)
 	for i, c := range s.Design.Coils {
 		st.Coils = append(st.Coils, StudyCoil(c, air.Coils[i], s.Design.Conditions)) // the winding alone; the core in Kinds
 		st.Coils[i].Kinds = kinds[i]
