@@ -58,6 +58,16 @@ func (c *composer) core() {
 			steps = append(steps, Step{What: "Inductance with the core: the air-core value plus the core's flux linkage per ampere",
 				Symbolic: `L = L_{air} + \Delta L`, Numbers: fmt.Sprintf(`%s + %s`, Q(k.AirInductance, "H", 4), Q(r.InductanceAdded, "H", 4)),
 				Result: Q(cr.Inductance, "H", 4)})
+		} else { // a pick-up coil: what the core does for reception
+			steps = append(steps,
+				Step{What: "Effective area: the winding's turn areas plus the core's flux linkage per tesla of a uniform axial field (by reciprocity, the core's moment per ampere)",
+					Symbolic: `A_{eff} = \sum A + \sum_j \frac{M_j}{H_0} V_j \frac{h_{0,j}}{I}`,
+					Numbers:  fmt.Sprintf(`%s + %s`, Q(cr.Winding.AreaSum, "m²", 4), Q(r.EffectiveArea-cr.Winding.AreaSum, "m²", 4)), Result: Q(r.EffectiveArea, "m²", 4)},
+				Step{What: "Gain of the core in reception", Symbolic: `\frac{A_{eff}}{\sum A}`,
+					Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(r.EffectiveArea, "m²", 4), Q(cr.Winding.AreaSum, "m²", 4)), Result: N(r.EffectiveArea/cr.Winding.AreaSum, 4)},
+				Step{What: "Small-signal inductance with the core: the air-core value plus the core's flux linkage per ampere at vanishing current",
+					Symbolic: `L = L_{air} + \Delta L_0`, Numbers: fmt.Sprintf(`%s + %s`, Q(k.AirInductance, "H", 4), Q(r.InductanceAddedInitial, "H", 4)),
+					Result: Q(cr.Inductance, "H", 4)})
 		}
 		if !math.IsNaN(r.Mass) {
 			steps = append(steps, Step{What: "Mass of the core", Symbolic: `m_c = \rho_c \frac{\pi D_c^2}{4} \ell_c`,
