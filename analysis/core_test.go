@@ -128,3 +128,83 @@ func TestCoredLimitsWorstCase(t *testing.T) {
 		t.Errorf("sensitivity %g ≥ 1 V/T judged failed", w.Worst)
 	}
 }
+
+// The field figures of a cored coil carry the core: the on-axis profile at
+// a probe on the axis, the map at a probe in the meridian plane and the
+// rod-end figure of the safety finding are the same numbers (winding plus
+// the rod's pole-model field), the profile's dipole is the cored moment's,
+// and beyond the 1 % distance the two agree within 1 %.
+func TestCoredFiguresMatchNumbers(t *testing.T) {
+	src := rodSpec + "core-permeability = 1000\n```\n```probes\nend = (0, 0, 78 mm)\nside = (20 mm, 0, 30 mm)\n```\n"
+	st := studyOf(t, src)
+	cs, cr := st.Coils[0], st.Results.Coils[0]
+	k := cs.Kinds.Core
+	at := func(zs []float64, vs []float64, z float64) float64 { // linear interpolation
+		for i := 1; i < len(zs); i++ {
+			if zs[i] >= z {
+				f := (z - zs[i-1]) / (zs[i] - zs[i-1])
+				return vs[i-1] + f*(vs[i]-vs[i-1])
+			}
+		}
+		return math.NaN()
+	}
+	// The end probe is on the axis 8 mm beyond the rod's end (140 mm rod,
+	// 8 mm diameter): one diameter, where the safety finding states it.
+	end := st.Results.Probes[0].B.Norm()
+	if math.Abs(end/cs.Kinds.EndField-1) > 1e-9 {
+		t.Errorf("probe at the rod's end %g T, rod-end figure %g T", end, cs.Kinds.EndField)
+	}
+	co := st.Spec.Design.Coils[0]
+	both := func(p calc.Vec) float64 {
+		return calc.CoilField(co, cr.Winding, cr.Current, p).Add(calc.CorePoleField(co, *k, p)).Norm()
+	}
+	for i, z := range cs.Axis.Z { // the profile's nodes beyond the rod's end
+		if z > 0.075 && z < 0.2 {
+			if want := both(calc.Vec{0, 0, z}); math.Abs(cs.Axis.Exact[i]/want-1) > 1e-9 {
+				t.Errorf("profile at %g m: %g T, winding + core %g T", z, cs.Axis.Exact[i], want)
+			}
+		}
+	}
+	if got := at(cs.Axis.Z, cs.Axis.Exact, 0.2); math.Abs(got/both(calc.Vec{0, 0, 0.2})-1) > 0.02 {
+		t.Errorf("profile at 200 mm %g T, winding + core %g T", got, both(calc.Vec{0, 0, 0.2}))
+	}
+	if air := calc.CoilField(co, cr.Winding, cr.Current, calc.Vec{0, 0, 0.078}).Norm(); !(end > 3*air) {
+		t.Errorf("rod end %g T not well above the winding's own %g T", end, air)
+	}
+	// The map node nearest the side probe.
+	m := cs.Map
+	if m.ZHalf < 0.07 {
+		t.Errorf("map reaches z = %g m, short of the rod's end at 70 mm", m.ZHalf)
+	}
+	ix, iz := 0, 0
+	for i, x := range m.X {
+		if math.Abs(x-0.02) < math.Abs(m.X[ix]-0.02) {
+			ix = i
+		}
+	}
+	for i, z := range m.Z {
+		if math.Abs(z-0.03) < math.Abs(m.Z[iz]-0.03) {
+			iz = i
+		}
+	}
+	p := calc.Vec{m.X[ix], 0, m.Z[iz]}
+	want := both(p)
+	if got := m.B[ix*len(m.Z)+iz]; math.Abs(got/want-1) > 1e-9 {
+		t.Errorf("map at %v: %g T, winding + core %g T", p, got, want)
+	}
+	// Dipole: the cored moment's, within 1 % beyond the stated distance.
+	d1 := cr.Dipole.Axis1
+	if math.IsNaN(d1) || d1 < 0.07 {
+		t.Fatalf("1 %% dipole distance on the axis %g m", d1)
+	}
+	for i, z := range cs.Axis.Z {
+		if z > d1*1.001 {
+			if e := math.Abs(cs.Axis.Dipole[i]/cs.Axis.Exact[i] - 1); e > 0.01 {
+				t.Errorf("z = %g m beyond %g m: dipole and exact differ by %.3g", z, d1, e)
+			}
+		}
+	}
+	if dm := calc.Mu0 * cr.Moment.Norm() / (2 * math.Pi * math.Pow(cs.Axis.Z[len(cs.Axis.Z)-1], 3)); math.Abs(cs.Axis.Dipole[len(cs.Axis.Z)-1]/dm-1) > 1e-12 {
+		t.Errorf("profile's dipole %g, cored moment's μ0 m/(2π z³) %g", cs.Axis.Dipole[len(cs.Axis.Z)-1], dm)
+	}
+}

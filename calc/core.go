@@ -552,3 +552,44 @@ func (r *rodModel) solveCurve(curve func(float64) (float64, float64), h0, start 
 // rampRatio is the largest factor by which solveCurveRamp raises the
 // current from one step to the next.
 const rampRatio = 1.2
+
+// CoredDipoleDistances is DipoleDistances for coil c (winding w, current
+// I) with its core r: the exact field is the winding's plus the core's
+// (CorePoleField), the dipole that of the cored moment (CoredMoment), and
+// the search starts beyond the larger of the winding's and the rod's
+// extents. Zero moment gives NaN distances.
+func CoredDipoleDistances(c Coil, w Winding, I float64, r CoreResult) DipoleReach {
+	s := NewCoilSource(c, w, I)
+	fr := CoilFrame(c.Axis)
+	m := CoredMoment(c, w, I, r)
+	size := math.Max(coilExtent(c, w), math.Hypot(c.Core.Length/2, c.Core.Diameter/2))
+	rng := func(dirs []Vec, tol float64) float64 {
+		if !(size > 0) || m.Norm() == 0 || m.IsNaN() {
+			return math.NaN()
+		}
+		out := 0.0
+		for _, u := range dirs {
+			relErr := func(d float64) float64 {
+				p := c.Centre.Add(u.Scale(d))
+				ex := s.At(p).Add(CorePoleField(c, r, p))
+				return DipoleField(m, u.Scale(d)).Sub(ex).Norm() / ex.Norm()
+			}
+			d := dipoleBeyond(relErr, size, tol)
+			if math.IsNaN(d) {
+				return d
+			}
+			out = math.Max(out, d)
+		}
+		return out
+	}
+	axis, plane := []Vec{fr.U}, []Vec{fr.E1}
+	var between []Vec
+	for k := 1; k < 9; k++ {
+		sn, co := math.Sincos(float64(k) * math.Pi / 18)
+		between = append(between, fr.U.Scale(co).Add(fr.E1.Scale(sn)))
+	}
+	d := DipoleReach{Axis1: rng(axis, 0.01), Axis01: rng(axis, 0.001), Plane1: rng(plane, 0.01), Plane01: rng(plane, 0.001)}
+	d.Any1 = math.Max(math.Max(d.Axis1, d.Plane1), rng(between, 0.01))
+	d.Any01 = math.Max(math.Max(d.Axis01, d.Plane01), rng(between, 0.001))
+	return d
+}

@@ -5,7 +5,9 @@ import (
 	"math"
 
 	"coilmemo/analysis"
+	"coilmemo/calc"
 	"coilmemo/doc"
+	"coilmemo/figures"
 )
 
 // core writes up the soft-magnetic cores: demagnetising factor, apparent
@@ -126,4 +128,27 @@ func kindCautions(j *analysis.Study, f analysis.Finding) []doc.Callout {
 			Eng(co.Frequency, "Hz", 3), fmt.Sprintf("%.3g", f.Value), Eng(k.ACPower, "W", 3))}}}}
 	}
 	return nil
+}
+
+// coreSketch is a cored coil block's core for its figures: the rod's
+// section (in the half-plane above the axis, or for a map mirrored below it
+// too), centred on the coil, drawn under the winding; for the sketch also
+// its diameter and length dimensions and a phrase for the figure's text.
+// Nothing for an air coil (cs.Kinds.Core nil).
+func coreSketch(co calc.Coil, cs *analysis.CoilStudy, mirrored bool) ([]figures.Section, []figures.Dimension, string) {
+	k := co.Core
+	if cs == nil || cs.Kinds.Core == nil || !(k.Diameter > 0) || !(k.Length > 0) {
+		return nil, nil, ""
+	}
+	a, h := k.Diameter/2, k.Length/2
+	y0 := 0.0
+	if mirrored {
+		y0 = -a
+	}
+	s := []figures.Section{{X0: -h, X1: h, Y0: y0, Y1: a, Core: true}}
+	dims := []figures.Dimension{
+		{Kind: figures.Diameter, A: a, Label: "Ø " + mmText(k.Diameter) + " core"},
+		{Kind: figures.Axial, A: -h, B: h, Label: mmText(k.Length) + " core"},
+	}
+	return s, dims, fmt.Sprintf("; the core, Ø %s × %s, in grey", mmText(k.Diameter), mmText(k.Length))
 }
