@@ -2,6 +2,8 @@ package analysis
 
 import (
 	"math"
+	"runtime"
+	"sync"
 
 	"coilmemo/calc"
 )
@@ -42,7 +44,12 @@ func IsReceiver(c calc.Coil) bool {
 
 // studyKinds computes the core, receiver and a.c. figures of every coil
 // block from the air-core results r (calc.Evaluate).
-func studyKinds(d calc.Design, r calc.Results) []CoilKinds {
+func studyKinds(d calc.Design, r calc.Results) []CoilKinds { return kindsOf(d, r, false) }
+
+// kindsOf is studyKinds; with cored set, r are results already through
+// coredResults, whose inductance includes the core's share (so it is not
+// added again); the Air fields are then not the air coil's.
+func kindsOf(d calc.Design, r calc.Results, cored bool) []CoilKinds {
 	out := make([]CoilKinds, len(d.Coils))
 	for i, c := range d.Coils {
 		if i >= len(r.Coils) {
@@ -59,7 +66,7 @@ func studyKinds(d calc.Design, r calc.Results) []CoilKinds {
 			if cr.Current != 0 {
 				k.EndField = RodEndField(c, cr, core)
 			}
-			if !math.IsNaN(core.InductanceAdded) {
+			if !math.IsNaN(core.InductanceAdded) && !cored {
 				L += core.InductanceAdded
 				if IsReceiver(c) {
 					L = cr.Inductance + core.InductanceAddedInitial
@@ -99,7 +106,8 @@ func studyKinds(d calc.Design, r calc.Results) []CoilKinds {
 // block replaced by the cored ones: the moment (winding plus core), the
 // inductance (air-core plus the core's share at the current), the mass
 // (conductor plus core), and the totals and torques that follow from the
-// moment. Probes outside the cores get the core's pole-model field added.
+// moment. The probes, the field at each coil's centre and at the origin get
+// the core's pole-model field added.
 func coredResults(d calc.Design, r calc.Results, kinds []CoilKinds) calc.Results {
 	out := r
 	out.Coils = append([]calc.CoilResult(nil), r.Coils...)
@@ -120,12 +128,29 @@ func coredResults(d calc.Design, r calc.Results, kinds []CoilKinds) calc.Results
 				if cr.RHot > 0 {
 					cr.TimeConstant = cr.Inductance / cr.RHot
 				}
+				cr.Switch = coredSwitching(c, *cr, d.Conditions)
+				if c.Frequency > 0 {
+					tm := cr.Heat.Steady.Mean
+					if !(tm > 0) { // a corner's quick evaluation carries no heat balance
+						tm = cr.Temperature
+					}
+					cr.AC = calc.AC(c, cr.Inductance, cr.RHot, tm, c.Frequency)
+					cr.ACBounds = calc.ACBoundsFor(c.Drive, c.Frequency, cr.RHot, cr.AC.Reactance)
+				}
 			}
 			if !math.IsNaN(k.Core.Mass) {
 				cr.Mass += k.Core.Mass
 			}
 			for j, p := range out.Probes {
 				out.Probes[j].B = p.B.Add(calc.CorePoleField(c, *k.Core, p.At))
+			}
+			// The field at the coil's own centre and at the origin: inside
+			// or outside the rod, the pole model's (in the rod, μ0 (H + M)).
+			if bc := calc.CorePoleField(c, *k.Core, c.Centre); !bc.IsNaN() {
+				cr.FieldCentre = cr.FieldCentre.Add(bc)
+			}
+			if bo := calc.CorePoleField(c, *k.Core, calc.Vec{}); !bo.IsNaN() {
+				out.FieldCentre = out.FieldCentre.Add(bo)
 			}
 		}
 		total = total.Add(cr.Moment)
@@ -137,6 +162,39 @@ func coredResults(d calc.Design, r calc.Results, kinds []CoilKinds) calc.Results
 	out.TorqueDesign = calc.TorqueAtAngle(total.Norm(), bg.Norm(), d.Conditions.DesignAngle)
 	out.GradientForce = calc.GradientForce(total.Norm(), d.Conditions.FieldGradient)
 	return out
+}
+
+// coredSwitching is the switching of a cored coil block at its cored
+// inductance cr.Inductance, sized as calc.Evaluate sizes it (for the worst
+// current the switch may open, the winding then cold under voltage drive).
+func coredSwitching(c calc.Coil, cr calc.CoilResult, cond calc.Conditions) calc.SwitchResult {
+	rCold := cr.RHot
+	if c.Drive == calc.VoltageDrive {
+		rCold = calc.ResistanceAt(cr.R20, c.Wire.Material.Alpha20, calc.ColdTemperature(cond))
+	}
+	return calc.SwitchingWorst(cr.Inductance, cr.RHot, rCold, cr.Current, cr.SwitchOnCurrent, cr.Voltage, c.SwitchOff, c.DriverRating, c.Drive == calc.VoltageDrive)
+}
+
+// WithCores returns the results r of calc.Evaluate (or of a worst-case
+// corner's quick evaluation) of design d with every cored coil block's
+// figures replaced by the cored ones (coredResults): what the study's
+// limits, the sweep's and the worst case's corners are all judged on.
+func WithCores(d calc.Design, r calc.Results) calc.Results {
+	for _, c := range d.Coils {
+		if c.Core.Present() {
+			return coredResults(d, r, studyKinds(d, r))
+		}
+	}
+	return r
+}
+
+// kindLimit is LimitValue's case for the limit quantities of cored and
+// pick-up coils and a.c. windings; r are cored results (WithCores).
+func kindLimit(l calc.Limit, d calc.Design, r calc.Results) (float64, bool) {
+	if _, ok := kindQuantities[l.Quantity]; !ok {
+		return 0, false
+	}
+	return KindLimitValue(l, d, kindsOf(d, r, true))
 }
 
 // KindLimitValue returns the value, SI, of the limit quantities of cored
@@ -215,20 +273,84 @@ var kindQuantities = map[string]func(CoilKinds) float64{
 	},
 }
 
-// judgeKindLimits re-judges the limits on the cored and pick-up quantities
-// with the kinds' figures.
-func judgeKindLimits(d calc.Design, kinds []CoilKinds, ls []LimitResult) {
-	for i := range ls {
-		v, ok := KindLimitValue(ls[i].Limit, d, kinds)
-		if !ok {
-			continue
-		}
-		ls[i].Computed = v
-		switch ls[i].Limit.Relation {
-		case calc.AtLeast:
-			ls[i].Pass = v >= ls[i].Limit.Required
-		case calc.AtMost:
-			ls[i].Pass = v <= ls[i].Limit.Required
-		}
+// coreStudy replaces the figures of a cored coil block with current (cs,
+// results cr with the core) by the cored ones: the point-dipole distances
+// (of the cored moment against the winding's field plus the core's), the
+// on-axis profile and the map of |B| of winding and core together (the
+// rod's field by its pole model, calc.CorePoleField), the map widened to
+// take in the rod's ends. A pick-up coil (no current) keeps its figures.
+func coreStudy(cs *CoilStudy, co calc.Coil, cr *calc.CoilResult, k *calc.CoreResult) {
+	if k == nil || cr.Current == 0 || len(k.Charge) == 0 || co.Form == calc.Rectangle || co.Form == calc.Pair {
+		return
 	}
+	w := cr.Winding
+	cr.Dipole = calc.CoredDipoleDistances(co, w, cr.Current, *k)
+	src := calc.NewCoilSource(co, w, cr.Current)
+	fr := calc.CoilFrame(co.Axis)
+	field := func(x, z float64) calc.Vec {
+		p := co.Centre.Add(fr.E1.Scale(x)).Add(fr.U.Scale(z))
+		return src.At(p).Add(calc.CorePoleField(co, *k, p))
+	}
+
+	// On the axis.
+	size := math.Max(AxialSize(co), co.Core.Length/2)
+	p := AxisProfile{Dipole1pc: cr.Dipole.Axis1, Peak: math.Inf(-1)}
+	zmax := 6 * size
+	if !math.IsNaN(p.Dipole1pc) {
+		zmax = math.Max(zmax, 1.5*p.Dipole1pc)
+	}
+	for i := range axisPoints {
+		z := -zmax + 2*zmax*float64(i)/float64(axisPoints-1)
+		b := field(0, z).Norm()
+		p.Z, p.Exact = append(p.Z, z), append(p.Exact, b)
+		p.Peak = math.Max(p.Peak, b)
+		dip := math.NaN()
+		if math.Abs(z) > size {
+			dip = calc.DipoleField(cr.Moment, fr.U.Scale(z)).Norm()
+		}
+		p.Dipole = append(p.Dipole, dip)
+	}
+	cs.Axis = p
+
+	// The map, over the winding and the rod's ends.
+	old := cs.Map
+	if old == nil {
+		return
+	}
+	e := cs.Envelope
+	xHalf := math.Max(old.XHalf, 1.6*e.R1)
+	zHalf := math.Max(old.ZHalf, co.Core.Length/2+0.9*e.R1)
+	nz, nx := MapGrid, MapGrid
+	if zHalf > xHalf {
+		nx = max(61, int(math.Round(MapGrid*xHalf/zHalf)))
+	} else {
+		nz = max(61, int(math.Round(MapGrid*zHalf/xHalf)))
+	}
+	nx |= 1
+	nz |= 1
+	m := &MapData{Z: SymmetricSpace(zHalf, nz), X: SymmetricSpace(xHalf, nx), XHalf: xHalf, ZHalf: zHalf}
+	g := calc.FieldMap(co, w, cr.Current, m.X, m.Z)
+	m.B = make([]float64, len(m.Z)*len(m.X))
+	var wg sync.WaitGroup
+	rows := make(chan int)
+	for range runtime.GOMAXPROCS(0) {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for ix := range rows {
+				for iz, z := range m.Z {
+					gk := iz*len(m.X) + ix
+					pt := co.Centre.Add(fr.E1.Scale(m.X[ix])).Add(fr.U.Scale(z))
+					bc := fr.ToLocal(calc.CorePoleField(co, *k, pt)) // (E1, E2, U) components
+					m.B[ix*len(m.Z)+iz] = math.Hypot(g.BX[gk]+bc[0], g.BZ[gk]+bc[2])
+				}
+			}
+		}()
+	}
+	for ix := range m.X {
+		rows <- ix
+	}
+	close(rows)
+	wg.Wait()
+	cs.Map = m
 }

@@ -80,3 +80,131 @@ func TestReceiverStudy(t *testing.T) {
 		t.Errorf("limits %+v (S %g, fsr %g)", l, r.Sensitivity, r.SelfResonance)
 	}
 }
+
+// The limits of cored and pick-up coils go through LimitValue, so the
+// worst case over the tolerance corners sees them: a linear core's peak
+// flux density is proportional to the current, so at supply +10 % it is
+// 1.1 times the nominal; a pick-up coil's sensitivity S = 2π f A_eff is
+// proportional to its frequency, so at frequency −5 % it is 0.95 times the
+// nominal. Both worst values are finite, at the right corner, and agree
+// with the verdicts; the cored inductance's time constant is judged at the
+// corners too (L with the core over R, not the air coil's).
+func TestCoredLimitsWorstCase(t *testing.T) {
+	src := rodSpec + "core-permeability = 1000\n```\n" +
+		"```limits\ncore-flux-density <= 0.5 T\ntime-constant >= 1 us\n```\n```tolerances\nsupply = ±10 %\n```\n"
+	_, st := worstOf(t, src)
+	nom := st.Limits[0].Computed
+	if !(nom > 0) || math.IsInf(nom, 0) {
+		t.Fatalf("nominal core flux density %g", nom)
+	}
+	wl := st.WorstCase.Limits[0]
+	if math.IsNaN(wl.Worst) || math.Abs(wl.Worst/nom-1.1) > 1e-9 || wl.Corner < 0 || wl.Corner&supplyHigh == 0 {
+		t.Errorf("worst core flux density %g at corner %d, want 1.1 × %g at supply +10 %%", wl.Worst, wl.Corner, nom)
+	}
+	if wl.Pass != (wl.Worst <= 0.5) || st.Limits[0].Pass != wl.Pass {
+		t.Errorf("verdict %v / %v for worst %g T ≤ 0.5 T", wl.Pass, st.Limits[0].Pass, wl.Worst)
+	}
+	cr := st.Results.Coils[0]
+	if tau := st.Limits[1].Computed; math.Abs(tau-cr.Inductance/cr.RHot) > 1e-12*tau || !(cr.Inductance > 2*st.Coils[0].Kinds.AirInductance) {
+		t.Errorf("time constant %g, want cored L/R %g (air L %g)", tau, cr.Inductance/cr.RHot, st.Coils[0].Kinds.AirInductance)
+	}
+	// Current drive: L does not move with the supply and R only by the
+	// winding's warming (well under 1 % here), so the corners' τ stays
+	// within 1 % of the nominal cored one, far from the air coil's.
+	if w := st.WorstCase.Limits[1].Worst; math.Abs(w/st.Limits[1].Computed-1) > 0.01 {
+		t.Errorf("corner time constant %g, nominal %g (air %g)", w, st.Limits[1].Computed, st.Coils[0].Kinds.AirInductance/cr.RHot)
+	}
+
+	rec := "```coil\nname = pick\nform = solenoid\ninner-diameter = 20 mm\nouter-diameter = 40 mm\nlength = 50 mm\nturns = 2000\nwire = AWG 36\nfrequency = 100 Hz\n" +
+		"core-permeability = 500\ncore-length = 80 mm\ncore-diameter = 10 mm\n```\n" +
+		"```limits\nsensitivity >= 1 V/T\n```\n```tolerances\nfrequency = ±5 %\n```\n"
+	_, sr := worstOf(t, rec)
+	s := sr.Limits[0].Computed
+	w := sr.WorstCase.Limits[0]
+	if math.IsNaN(w.Worst) || math.Abs(w.Worst/s-0.95) > 1e-9 || w.Corner != 0 {
+		t.Errorf("worst sensitivity %g at corner %d, want 0.95 × %g at frequency −5 %%", w.Worst, w.Corner, s)
+	}
+	if !w.Pass || !sr.Limits[0].Pass {
+		t.Errorf("sensitivity %g ≥ 1 V/T judged failed", w.Worst)
+	}
+}
+
+// The field figures of a cored coil carry the core: the on-axis profile at
+// a probe on the axis, the map at a probe in the meridian plane and the
+// rod-end figure of the safety finding are the same numbers (winding plus
+// the rod's pole-model field), the profile's dipole is the cored moment's,
+// and beyond the 1 % distance the two agree within 1 %.
+func TestCoredFiguresMatchNumbers(t *testing.T) {
+	src := rodSpec + "core-permeability = 1000\n```\n```probes\nend = (0, 0, 78 mm)\nside = (20 mm, 0, 30 mm)\n```\n"
+	st := studyOf(t, src)
+	cs, cr := st.Coils[0], st.Results.Coils[0]
+	k := cs.Kinds.Core
+	at := func(zs []float64, vs []float64, z float64) float64 { // linear interpolation
+		for i := 1; i < len(zs); i++ {
+			if zs[i] >= z {
+				f := (z - zs[i-1]) / (zs[i] - zs[i-1])
+				return vs[i-1] + f*(vs[i]-vs[i-1])
+			}
+		}
+		return math.NaN()
+	}
+	// The end probe is on the axis 8 mm beyond the rod's end (140 mm rod,
+	// 8 mm diameter): one diameter, where the safety finding states it.
+	end := st.Results.Probes[0].B.Norm()
+	if math.Abs(end/cs.Kinds.EndField-1) > 1e-9 {
+		t.Errorf("probe at the rod's end %g T, rod-end figure %g T", end, cs.Kinds.EndField)
+	}
+	co := st.Spec.Design.Coils[0]
+	both := func(p calc.Vec) float64 {
+		return calc.CoilField(co, cr.Winding, cr.Current, p).Add(calc.CorePoleField(co, *k, p)).Norm()
+	}
+	for i, z := range cs.Axis.Z { // the profile's nodes beyond the rod's end
+		if z > 0.075 && z < 0.2 {
+			if want := both(calc.Vec{0, 0, z}); math.Abs(cs.Axis.Exact[i]/want-1) > 1e-9 {
+				t.Errorf("profile at %g m: %g T, winding + core %g T", z, cs.Axis.Exact[i], want)
+			}
+		}
+	}
+	if got := at(cs.Axis.Z, cs.Axis.Exact, 0.2); math.Abs(got/both(calc.Vec{0, 0, 0.2})-1) > 0.02 {
+		t.Errorf("profile at 200 mm %g T, winding + core %g T", got, both(calc.Vec{0, 0, 0.2}))
+	}
+	if air := calc.CoilField(co, cr.Winding, cr.Current, calc.Vec{0, 0, 0.078}).Norm(); !(end > 3*air) {
+		t.Errorf("rod end %g T not well above the winding's own %g T", end, air)
+	}
+	// The map node nearest the side probe.
+	m := cs.Map
+	if m.ZHalf < 0.07 {
+		t.Errorf("map reaches z = %g m, short of the rod's end at 70 mm", m.ZHalf)
+	}
+	ix, iz := 0, 0
+	for i, x := range m.X {
+		if math.Abs(x-0.02) < math.Abs(m.X[ix]-0.02) {
+			ix = i
+		}
+	}
+	for i, z := range m.Z {
+		if math.Abs(z-0.03) < math.Abs(m.Z[iz]-0.03) {
+			iz = i
+		}
+	}
+	p := calc.Vec{m.X[ix], 0, m.Z[iz]}
+	want := both(p)
+	if got := m.B[ix*len(m.Z)+iz]; math.Abs(got/want-1) > 1e-9 {
+		t.Errorf("map at %v: %g T, winding + core %g T", p, got, want)
+	}
+	// Dipole: the cored moment's, within 1 % beyond the stated distance.
+	d1 := cr.Dipole.Axis1
+	if math.IsNaN(d1) || d1 < 0.07 {
+		t.Fatalf("1 %% dipole distance on the axis %g m", d1)
+	}
+	for i, z := range cs.Axis.Z {
+		if z > d1*1.001 {
+			if e := math.Abs(cs.Axis.Dipole[i]/cs.Axis.Exact[i] - 1); e > 0.01 {
+				t.Errorf("z = %g m beyond %g m: dipole and exact differ by %.3g", z, d1, e)
+			}
+		}
+	}
+	if dm := calc.Mu0 * cr.Moment.Norm() / (2 * math.Pi * math.Pow(cs.Axis.Z[len(cs.Axis.Z)-1], 3)); math.Abs(cs.Axis.Dipole[len(cs.Axis.Z)-1]/dm-1) > 1e-12 {
+		t.Errorf("profile's dipole %g, cored moment's μ0 m/(2π z³) %g", cs.Axis.Dipole[len(cs.Axis.Z)-1], dm)
+	}
+}

@@ -79,8 +79,13 @@ func subjectOf(l calc.Limit, d calc.Design) (Tested, int, int) {
 // same quantity of that block alone (field-center and field at its own
 // centre; torque of its moment in the background field); for a probe, |B|
 // of all coils there. A quantity unknown for any coil it covers (NaN, e.g.
-// a runaway temperature) makes the value NaN.
+// a runaway temperature) makes the value NaN. The quantities of cored and
+// pick-up coils and a.c. windings are KindLimitValue's. r are the results
+// with the cores (WithCores).
 func LimitValue(l calc.Limit, d calc.Design, r calc.Results) float64 {
+	if v, ok := kindLimit(l, d, r); ok { // cored and pick-up quantities: analysis/core.go
+		return v
+	}
 	on, ci, pi := subjectOf(l, d)
 	if on == OnProbe {
 		if l.Quantity == "field" && pi < len(r.Probes) {

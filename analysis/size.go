@@ -786,12 +786,8 @@ func contains(xs []int, x int) bool {
 // evaluateDesign computes a design's results and judges its limits as the
 // study does: calc.Evaluate, then the cores, then the limits.
 func evaluateDesign(d calc.Design) (calc.Results, []LimitResult) {
-	air := calc.Evaluate(d)
-	kinds := studyKinds(d, air)
-	r := coredResults(d, air, kinds)
-	ls := JudgeLimits(d, r)
-	judgeKindLimits(d, kinds, ls)
-	return r, ls
+	r := WithCores(d, calc.Evaluate(d))
+	return r, JudgeLimits(d, r)
 }
 
 // margin is a limit's relative margin, positive when it is met: (computed

@@ -97,10 +97,10 @@ func Analyse(s *spec.Spec, o Options) *Study {
 	st.Results = coredResults(s.Design, air, kinds)
 	st.Cooling = calc.EffectiveCooling(s.Design.Conditions.Cooling)
 	st.Limits = JudgeLimits(s.Design, st.Results)
-	judgeKindLimits(s.Design, kinds, st.Limits)
 	for i, c := range s.Design.Coils {
 		st.Coils = append(st.Coils, StudyCoil(c, air.Coils[i], s.Design.Conditions)) // the winding alone; the core in Kinds
 		st.Coils[i].Kinds = kinds[i]
+		coreStudy(&st.Coils[i], c, &st.Results.Coils[i], kinds[i].Core) // the core in the field figures: analysis/core.go
 	}
 	st.Design = analyseDesign(s.Design, st.Results)
 	st.Checks = append(Verify(s.Design, air), kindChecks(s.Design, air, kinds)...)

@@ -42,7 +42,7 @@ func RunSweep(s *spec.Spec) []SweepStep {
 			}
 		}
 		if st.Feasible {
-			st.Results = calc.Evaluate(d)
+			st.Results = WithCores(d, calc.Evaluate(d))
 			st.Limits = JudgeLimits(d, st.Results)
 			st.Hottest = math.Inf(-1)
 			for _, cr := range st.Results.Coils {

@@ -264,6 +264,7 @@ func evaluateFor(d calc.Design, quantities []string, exact bool, excess []float6
 	default:
 		r = quickEvaluate(d, excess)
 	}
+	r = WithCores(d, r) // cored coils judged as at nominal
 	ev := evaluation{pass: true}
 	if excess == nil {
 		for k, c := range d.Coils {

@@ -218,40 +218,139 @@ func CoredMoment(c Coil, w Winding, I float64, r CoreResult) Vec {
 
 // CorePoleField returns the field, T, at the global point p of the core's
 // magnetisation alone (add the winding's CoilField for the whole coil), by
-// the pole model: the magnetisation's axial jumps as point charges q_p, A·m,
-// on the axis at z_p (Jackson, Classical Electrodynamics, 3rd ed., §5.9,
-// the magnetic scalar potential of a magnetisation):
+// the pole model of the slice solution: the magnetisation's jump at each
+// node z_p of the rod, charge q_p (A·m) spread uniformly over the rod's
+// cross-section of radius a there (surface charge q_p/(π a²)), not
+// concentrated on the axis. Outside the rod the field of these face charges
+// is that of the equivalent surface currents M_j on each slice's side
+// (Jackson, Classical Electrodynamics, 3rd ed., §5.8–5.9); summed by parts
+// over the slices, each node contributes the field of a semi-infinite
+// current sheet in closed form (Derby & Olbert, "Cylindrical magnets and
+// ideal solenoids", Am. J. Phys. 78 (2010) 229, eqs. 5–6):
 //
-//	B = μ0/(4π) Σ_p q_p (r − r_p)/|r − r_p|³
+//	Bρ = −(μ0/π) Σ_p (q_p/(π a²)) α_p C(k_p, 1, 1, −1)
+//	Bz = −(μ0/π) Σ_p (q_p/(π a²)) (a/(a + ρ)) β_p C(k_p, γ², 1, γ)
+//	u = z − z_p, α = a/√(u² + (a+ρ)²), β = u/√(u² + (a+ρ)²),
+//	γ = (a − ρ)/(a + ρ), k = √((u² + (a−ρ)²)/(u² + (a+ρ)²))
 //
-// Outside the core and a core's radius away from its ends this is the rod's
-// field to the model's accuracy; far away it tends to the dipole field of
-// the core's moment Σ q_p z_p.
+// with C Bulirsch's complete elliptic integral (cel). Inside the rod the same
+// sum is B = μ0 (H + M), the flux density in the core. Far away it tends to
+// the dipole field of the core's moment Σ q_p z_p. NaN on the rod's surface
+// at a node (k = 0), where the sheet's field is not defined.
 func CorePoleField(c Coil, r CoreResult, p Vec) Vec {
+	a := c.Core.Diameter / 2
+	if !(a > 0) {
+		return nanVec()
+	}
 	fr := CoilFrame(c.Axis)
 	l := fr.ToLocal(p.Sub(c.Centre))
-	var h Vec
+	rho := math.Hypot(l[0], l[1])
+	area := math.Pi * a * a
+	g := (a - rho) / (a + rho)
+	var br, bz float64
 	for i, q := range r.Charge {
 		if q == 0 {
 			continue
 		}
-		d := l.Sub(Vec{0, 0, r.Z[i]})
+		u := l[2] - r.Z[i]
+		den := math.Sqrt(u*u + (a+rho)*(a+rho))
+		kc := math.Sqrt(u*u+(a-rho)*(a-rho)) / den
+		if kc == 0 {
+			return nanVec()
+		}
+		sig := -q / area // the jump M above − M below
+		br += sig * a / den * cel(kc, 1, 1, -1)
+		bz += sig * a / (a + rho) * u / den * cel(kc, g*g, 1, g)
+	}
+	br *= Mu0 / math.Pi
+	bz *= Mu0 / math.Pi
+	var v Vec
+	if rho > 0 {
+		v = Vec{br * l[0] / rho, br * l[1] / rho, bz}
+	} else {
+		v = Vec{0, 0, bz}
+	}
+	return fr.ToGlobal(v)
+}
+
+// cel is Bulirsch's general complete elliptic integral
+//
+//	C(kc, p, c, s) = ∫₀^{π/2} (c cos²φ + s sin²φ) / ((cos²φ + p sin²φ) √(cos²φ + kc² sin²φ)) dφ
+//
+// by his algorithm (Bulirsch, Numer. Math. 13 (1969) 305, "cel"; in the
+// form of Derby & Olbert, Am. J. Phys. 78 (2010) 229, appendix), to full
+// double precision. C(kc, 1, 1, 1) = K(1 − kc²) and C(kc, 1, 1, kc²) =
+// E(1 − kc²). NaN for kc = 0.
+func cel(kc, p, c, s float64) float64 {
+	if kc == 0 {
+		return math.NaN()
+	}
+	const tol = 1e-15
+	k := math.Abs(kc)
+	pp, cc, ss := p, c, s
+	em := 1.0
+	if p > 0 {
+		pp = math.Sqrt(p)
+		ss = s / pp
+	} else {
+		f := kc * kc
+		q := 1 - f
+		g := 1 - pp
+		f -= pp
+		q *= ss - c*pp
+		pp = math.Sqrt(f / g)
+		cc = (c - ss) / g
+		ss = -q/(g*g*pp) + cc*pp
+	}
+	f := cc
+	cc += ss / pp
+	g := k / pp
+	ss = 2 * (ss + f*g)
+	pp += g
+	g = em
+	em += k
+	kk := k
+	for it := 0; math.Abs(g-k) > g*tol && it < 60; it++ {
+		k = 2 * math.Sqrt(kk)
+		kk = k * em
+		f = cc
+		cc += ss / pp
+		g = kk / pp
+		ss = 2 * (ss + f*g)
+		pp += g
+		g = em
+		em += k
+	}
+	return math.Pi / 2 * (ss + cc*em) / (em * (em + pp))
+}
+
+// corePointPoles is the field, T, at the global point p of magnetic point
+// charges q_p, A·m, on coil c's axis at local z_p: B = μ0/(4π) Σ_p q_p
+// (r − r_p)/|r − r_p|³ (Jackson, 3rd ed., §5.9).
+func corePointPoles(c Coil, z, q []float64, p Vec) Vec {
+	fr := CoilFrame(c.Axis)
+	l := fr.ToLocal(p.Sub(c.Centre))
+	var h Vec
+	for i, qi := range q {
+		if qi == 0 {
+			continue
+		}
+		d := l.Sub(Vec{0, 0, z[i]})
 		n := d.Norm()
 		if n == 0 {
 			return nanVec()
 		}
-		h = h.Add(d.Scale(q / (n * n * n)))
+		h = h.Add(d.Scale(qi / (n * n * n)))
 	}
 	return fr.ToGlobal(h.Scale(Mu0 / (4 * math.Pi)))
 }
 
 // CoreTwoPoleField is the two-pole form of CorePoleField: charges ±Q
 // (PoleStrength) at ±s/2 on the axis, s the PoleSeparation, which have the
-// core's moment Q·s exactly (Bozorth, Ferromagnetism, 1951, ch. 19, the
-// effective poles of a rod).
+// core's moment Q·s exactly, as point charges on the axis (Bozorth,
+// Ferromagnetism, 1951, ch. 19, the effective poles of a rod).
 func CoreTwoPoleField(c Coil, r CoreResult, p Vec) Vec {
-	two := CoreResult{Z: []float64{-r.PoleSeparation / 2, r.PoleSeparation / 2}, Charge: []float64{-r.PoleStrength, r.PoleStrength}}
-	return CorePoleField(c, two, p)
+	return corePointPoles(c, []float64{-r.PoleSeparation / 2, r.PoleSeparation / 2}, []float64{-r.PoleStrength, r.PoleStrength}, p)
 }
 
 // windingBore returns the diameter of the winding's bore: the inner
@@ -453,3 +552,44 @@ func (r *rodModel) solveCurve(curve func(float64) (float64, float64), h0, start 
 // rampRatio is the largest factor by which solveCurveRamp raises the
 // current from one step to the next.
 const rampRatio = 1.2
+
+// CoredDipoleDistances is DipoleDistances for coil c (winding w, current
+// I) with its core r: the exact field is the winding's plus the core's
+// (CorePoleField), the dipole that of the cored moment (CoredMoment), and
+// the search starts beyond the larger of the winding's and the rod's
+// extents. Zero moment gives NaN distances.
+func CoredDipoleDistances(c Coil, w Winding, I float64, r CoreResult) DipoleReach {
+	s := NewCoilSource(c, w, I)
+	fr := CoilFrame(c.Axis)
+	m := CoredMoment(c, w, I, r)
+	size := math.Max(coilExtent(c, w), math.Hypot(c.Core.Length/2, c.Core.Diameter/2))
+	rng := func(dirs []Vec, tol float64) float64 {
+		if !(size > 0) || m.Norm() == 0 || m.IsNaN() {
+			return math.NaN()
+		}
+		out := 0.0
+		for _, u := range dirs {
+			relErr := func(d float64) float64 {
+				p := c.Centre.Add(u.Scale(d))
+				ex := s.At(p).Add(CorePoleField(c, r, p))
+				return DipoleField(m, u.Scale(d)).Sub(ex).Norm() / ex.Norm()
+			}
+			d := dipoleBeyond(relErr, size, tol)
+			if math.IsNaN(d) {
+				return d
+			}
+			out = math.Max(out, d)
+		}
+		return out
+	}
+	axis, plane := []Vec{fr.U}, []Vec{fr.E1}
+	var between []Vec
+	for k := 1; k < 9; k++ {
+		sn, co := math.Sincos(float64(k) * math.Pi / 18)
+		between = append(between, fr.U.Scale(co).Add(fr.E1.Scale(sn)))
+	}
+	d := DipoleReach{Axis1: rng(axis, 0.01), Axis01: rng(axis, 0.001), Plane1: rng(plane, 0.01), Plane01: rng(plane, 0.001)}
+	d.Any1 = math.Max(math.Max(d.Axis1, d.Plane1), rng(between, 0.01))
+	d.Any01 = math.Max(math.Max(d.Axis01, d.Plane01), rng(between, 0.001))
+	return d
+}

@@ -3,6 +3,8 @@ package calc
 import (
 	"math"
 	"testing"
+
+	"gonum.org/v1/gonum/integrate/quad"
 )
 
 // torqueRod is a small-satellite torque rod: 600 turns of AWG 30 in four
@@ -169,5 +171,59 @@ func TestCoreBHCurve(t *testing.T) {
 	checkRel(t, "curve vs ideal", curve.CoreMoment, ideal.CoreMoment, 1e-6)
 	if c := (Coil{Form: Rectangle, Core: c.Core}); EvaluateCore(c, w, 1).Problem == "" {
 		t.Error("a rectangle with a core must be refused")
+	}
+}
+
+func TestCelCompleteIntegrals(t *testing.T) {
+	// C(kc, 1, 1, 1) = K(m) and C(kc, 1, 1, kc²) = E(m), m = 1 − kc²
+	// (Bulirsch 1969); K and E from gonum's Carlson-form implementation.
+	for _, kc := range []float64{0.01, 0.3, 0.7, 1, 1.5} {
+		m := 1 - kc*kc
+		if m < 0 {
+			continue
+		}
+		checkRel(t, "cel = K", cel(kc, 1, 1, 1), ellipticK(m), 1e-13)
+		checkRel(t, "cel = E", cel(kc, 1, 1, kc*kc), ellipticE(m), 1e-13)
+	}
+	// Other p > 0, c, s against the definition by quadrature,
+	// ∫ (c cos² + s sin²)/((cos² + p sin²)√(cos² + kc² sin²)) dφ.
+	for _, c := range []struct{ kc, p, cc, s float64 }{{0.5, 0.25, 1, 0.5}, {0.8, 0.09, 1, -1}, {0.05, 0.9, 1, 0.3}} {
+		f := func(phi float64) float64 {
+			co, si := math.Cos(phi)*math.Cos(phi), math.Sin(phi)*math.Sin(phi)
+			return (c.cc*co + c.s*si) / ((co + c.p*si) * math.Sqrt(co+c.kc*c.kc*si))
+		}
+		want := quad.Fixed(f, 0, math.Pi/2, 400, quad.Legendre{}, 0)
+		checkRel(t, "cel by quadrature", cel(c.kc, c.p, c.cc, c.s), want, 1e-10)
+	}
+}
+
+// The rod's field from its slice charges is the field of the equivalent
+// surface currents: for a uniformly magnetised rod (charges ∓M·πa² at its
+// ends) it must equal the Biot–Savart field of a current sheet of M A/m,
+// here integrated independently over the sheet's loops (LoopField, Gauss–
+// Legendre quadrature), outside the rod, beside and beyond its end faces
+// and inside it (where it is μ0 (H + M)); and on the axis the textbook
+// sheet field μ0 M/2 (cos θ1 − cos θ2).
+func TestCorePoleFieldIsSheetField(t *testing.T) {
+	a, L, M := 5e-3, 0.1, 1e5
+	c := Coil{Core: Core{Diameter: 2 * a, Length: L, Permeability: 100}}
+	area := math.Pi * a * a
+	r := CoreResult{Z: []float64{-L / 2, L / 2}, Charge: []float64{-M * area, M * area}}
+	sheet := func(rho, z float64) (float64, float64) {
+		fr := func(zp float64) float64 { b, _ := LoopField(a, M, rho, z-zp); return b }
+		fz := func(zp float64) float64 { _, b := LoopField(a, M, rho, z-zp); return b }
+		return quad.Fixed(fr, -L/2, L/2, 4000, quad.Legendre{}, 0), quad.Fixed(fz, -L/2, L/2, 4000, quad.Legendre{}, 0)
+	}
+	for _, pt := range [][2]float64{{0, 0}, {2e-3, 0.03}, {0, 0.06}, {3e-3, 0.052}, {8e-3, 0.05}, {1.5e-2, 0}, {0.02, 0.08}, {0.2, 0.3}} {
+		wr, wz := sheet(pt[0], pt[1])
+		got := CorePoleField(c, r, Vec{pt[0], 0, pt[1]})
+		want := Vec{wr, 0, wz}
+		if e := vecRelErr(got, want); e > 1e-6 {
+			t.Errorf("(ρ, z) = (%g, %g): %v, sheet %v (%.2g)", pt[0], pt[1], got, want, e)
+		}
+	}
+	for _, z := range []float64{0, 0.04, 0.07} {
+		want := Mu0 * M / 2 * ((z+L/2)/math.Hypot(a, z+L/2) - (z-L/2)/math.Hypot(a, z-L/2))
+		checkRel(t, "on-axis sheet field", CorePoleField(c, r, Vec{0, 0, z})[2], want, 1e-12)
 	}
 }

@@ -11,7 +11,10 @@ func TestSpheroidDemagOsbornTable(t *testing.T) {
 	// Osborn, Phys. Rev. 67 (1945) 351, table of the prolate spheroid's
 	// factor against the axis ratio, to four figures (values recalled from
 	// memory, as reprinted in Bozorth, Ferromagnetism, 1951, Table 19-1;
-	// not checked against the printed page). The sphere's 1/3 is exact.
+	// not checked against the printed page: the table's text could not be
+	// found to read). An independent mpmath evaluation of the prolate
+	// formula gives 0.173564, 0.0558210, 0.0202859 and 0.00674905, which
+	// the recalled four-figure values round. The sphere's 1/3 is exact.
 	// Tolerance: half a unit in the last printed figure.
 	for _, c := range []struct{ p, n, tol float64 }{
 		{1, 1.0 / 3, 1e-12},
@@ -52,7 +55,13 @@ func TestSpheroidLongRodLimit(t *testing.T) {
 func TestCylinderDemagUniformNagaoka(t *testing.T) {
 	// Nm(χ = 0) = 1 − k_N: Nagaoka's coefficient from Grover, Inductance
 	// Calculations (1946), Table 36, at ℓ/D = 1: 0.688423, so Nm(γ = 1) =
-	// 0.311577; at ℓ/D = 0.5 (γ = 0.5): 0.525510 → 0.474490.
+	// 0.311577; at ℓ/D = 0.5 (γ = 0.5): 0.525510 → 0.474490 (the table's
+	// values recalled from memory, not read from the printed page; an
+	// independent mpmath evaluation of Nagaoka's elliptic-integral formula
+	// gives 0.6884226 and 0.5255100). Chen, Brug & Goldfarb, IEEE Trans.
+	// Magn. 27 (1991) 3601, compute their χ = 0 factors exactly from the
+	// same inductance formulas; their tables' text could not be found to
+	// check further values against.
 	for _, c := range []struct{ gamma, nm float64 }{{1, 0.311577}, {0.5, 0.474490}} {
 		nm, _ := CylinderDemagUniform(c.gamma)
 		if math.Abs(nm-c.nm) > 2e-6 {

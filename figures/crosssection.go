@@ -156,7 +156,7 @@ func drawCrossSection(c vg.Canvas, w, h vg.Length, d SketchData) {
 		dc.StrokeLine2(axis, X(zc), Y(0)-vg.Points(4), X(zc), Y(r1)+vg.Points(6))
 	}
 	for _, s := range d.Sections {
-		drawSection(c, X(s.X0), Y(s.Y0), X(s.X1), Y(s.Y1), s.Round)
+		drawSection(c, X(s.X0), Y(s.Y0), X(s.X1), Y(s.Y1), s)
 	}
 
 	ls := draw.LineStyle{Color: dimInk, Width: dimWidth}

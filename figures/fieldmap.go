@@ -19,6 +19,9 @@ import (
 type Section struct {
 	X0, Y0, X1, Y1 float64
 	Round          bool
+	// Core marks a soft-magnetic core's section, drawn in steel grey
+	// (draw it before the windings, which then lie over it).
+	Core bool
 }
 
 // MapData is a scalar field over a rectangular grid, for FieldMap.
@@ -38,6 +41,8 @@ type MapData struct {
 // Winding fill and outline in maps and sketches.
 var (
 	Copper     = color.NRGBA{R: 0xc9, G: 0x8e, B: 0x62, A: 0xff}
+	CoreSteel  = color.NRGBA{R: 0x9a, G: 0xa1, B: 0xa8, A: 0xff} // a core's section
+	CoreEdge   = color.NRGBA{R: 0x4a, G: 0x50, B: 0x56, A: 0xff}
 	CopperEdge = color.NRGBA{R: 0x6e, G: 0x3f, B: 0x1c, A: 0xff}
 	contourInk = color.NRGBA{R: 0xff, G: 0xff, B: 0xff, A: 0xc0}
 )
@@ -379,13 +384,14 @@ func (sp *sectionPlot) Plot(c draw.Canvas, p *plot.Plot) {
 	for _, s := range sp.sections {
 		x0, x1 := trX(s.X0/sp.scale), trX(s.X1/sp.scale)
 		y0, y1 := trY(s.Y0/sp.scale), trY(s.Y1/sp.scale)
-		drawSection(c.Canvas, x0, y0, x1, y1, s.Round)
+		drawSection(c.Canvas, x0, y0, x1, y1, s)
 	}
 }
 
 // drawSection fills and outlines one cross-section given in canvas
 // coordinates; a round one is drawn as a circle of at least 1.6 pt radius.
-func drawSection(c vg.Canvas, x0, y0, x1, y1 vg.Length, round bool) {
+func drawSection(c vg.Canvas, x0, y0, x1, y1 vg.Length, s Section) {
+	round := s.Round
 	if x0 > x1 {
 		x0, x1 = x1, x0
 	}
@@ -415,9 +421,13 @@ func drawSection(c vg.Canvas, x0, y0, x1, y1 vg.Length, round bool) {
 		path.Line(vg.Point{X: x0, Y: y1})
 		path.Close()
 	}
-	c.SetColor(Copper)
+	fill, edge := Copper, CopperEdge
+	if s.Core {
+		fill, edge = CoreSteel, CoreEdge
+	}
+	c.SetColor(fill)
 	c.Fill(path)
-	c.SetColor(CopperEdge)
+	c.SetColor(edge)
 	c.SetLineWidth(vg.Points(0.5))
 	c.SetLineDash(nil, 0)
 	c.Stroke(path)

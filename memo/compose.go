@@ -53,12 +53,12 @@ var Sections = []Section{
 	section{"assumptions", (*composer).assumptions},
 	section{"selection", (*composer).selection},
 	section{"method", (*composer).method},
-	section{"field", (*composer).field},
-	section{"torque", (*composer).torque},
+	section{"field", driven((*composer).field)},   // not for pick-up coils alone (receiver.go)
+	section{"torque", driven((*composer).torque)}, // not for pick-up coils alone (receiver.go)
 	section{"core", (*composer).core},
-	section{"electrical", (*composer).electrical},
+	section{"electrical", driven((*composer).electrical)}, // not for pick-up coils alone (receiver.go)
 	section{"receiver", (*composer).receiver},
-	section{"heating", (*composer).heating},
+	section{"heating", driven((*composer).heating)}, // not for pick-up coils alone (receiver.go)
 	section{"sweep", (*composer).sweep},
 	section{"worst-case", (*composer).worstCase},
 	section{"verification", (*composer).verification},
@@ -158,7 +158,12 @@ func (c *composer) titlePage() {
 	if p, ok := c.sizingSummary(); ok {
 		c.add(p)
 	}
-	c.add(c.summaryTable())
+	if !c.receiverOnly() {
+		c.add(c.summaryTable())
+	}
+	if c.anyReceiver() {
+		c.add(c.receiverSummary()) // pick-up coils: receiver.go
+	}
 	if len(c.j.Limits) > 0 {
 		c.add(c.limitsTable())
 	}

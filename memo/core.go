@@ -5,7 +5,9 @@ import (
 	"math"
 
 	"coilmemo/analysis"
+	"coilmemo/calc"
 	"coilmemo/doc"
+	"coilmemo/figures"
 )
 
 // core writes up the soft-magnetic cores: demagnetising factor, apparent
@@ -58,6 +60,16 @@ func (c *composer) core() {
 			steps = append(steps, Step{What: "Inductance with the core: the air-core value plus the core's flux linkage per ampere",
 				Symbolic: `L = L_{air} + \Delta L`, Numbers: fmt.Sprintf(`%s + %s`, Q(k.AirInductance, "H", 4), Q(r.InductanceAdded, "H", 4)),
 				Result: Q(cr.Inductance, "H", 4)})
+		} else { // a pick-up coil: what the core does for reception
+			steps = append(steps,
+				Step{What: "Effective area: the winding's turn areas plus the core's flux linkage per tesla of a uniform axial field (by reciprocity, the core's moment per ampere)",
+					Symbolic: `A_{eff} = \sum A + \sum_j \frac{M_j}{H_0} V_j \frac{h_{0,j}}{I}`,
+					Numbers:  fmt.Sprintf(`%s + %s`, Q(cr.Winding.AreaSum, "m²", 4), Q(r.EffectiveArea-cr.Winding.AreaSum, "m²", 4)), Result: Q(r.EffectiveArea, "m²", 4)},
+				Step{What: "Gain of the core in reception", Symbolic: `\frac{A_{eff}}{\sum A}`,
+					Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(r.EffectiveArea, "m²", 4), Q(cr.Winding.AreaSum, "m²", 4)), Result: N(r.EffectiveArea/cr.Winding.AreaSum, 4)},
+				Step{What: "Small-signal inductance with the core: the air-core value plus the core's flux linkage per ampere at vanishing current",
+					Symbolic: `L = L_{air} + \Delta L_0`, Numbers: fmt.Sprintf(`%s + %s`, Q(k.AirInductance, "H", 4), Q(r.InductanceAddedInitial, "H", 4)),
+					Result: Q(cr.Inductance, "H", 4)})
 		}
 		if !math.IsNaN(r.Mass) {
 			steps = append(steps, Step{What: "Mass of the core", Symbolic: `m_c = \rho_c \frac{\pi D_c^2}{4} \ell_c`,
@@ -116,4 +128,27 @@ func kindCautions(j *analysis.Study, f analysis.Finding) []doc.Callout {
 			Eng(co.Frequency, "Hz", 3), fmt.Sprintf("%.3g", f.Value), Eng(k.ACPower, "W", 3))}}}}
 	}
 	return nil
+}
+
+// coreSketch is a cored coil block's core for its figures: the rod's
+// section (in the half-plane above the axis, or for a map mirrored below it
+// too), centred on the coil, drawn under the winding; for the sketch also
+// its diameter and length dimensions and a phrase for the figure's text.
+// Nothing for an air coil (cs.Kinds.Core nil).
+func coreSketch(co calc.Coil, cs *analysis.CoilStudy, mirrored bool) ([]figures.Section, []figures.Dimension, string) {
+	k := co.Core
+	if cs == nil || cs.Kinds.Core == nil || !(k.Diameter > 0) || !(k.Length > 0) {
+		return nil, nil, ""
+	}
+	a, h := k.Diameter/2, k.Length/2
+	y0 := 0.0
+	if mirrored {
+		y0 = -a
+	}
+	s := []figures.Section{{X0: -h, X1: h, Y0: y0, Y1: a, Core: true}}
+	dims := []figures.Dimension{
+		{Kind: figures.Diameter, A: a, Label: "Ø " + mmText(k.Diameter) + " core"},
+		{Kind: figures.Axial, A: -h, B: h, Label: mmText(k.Length) + " core"},
+	}
+	return s, dims, fmt.Sprintf("; the core, Ø %s × %s, in grey", mmText(k.Diameter), mmText(k.Length))
 }

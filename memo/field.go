@@ -97,6 +97,8 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 		return
 	}
 	var sd figures.SketchData
+	coreS, coreDims, coreDesc := coreSketch(co, cs, false) // the core, drawn under the winding: memo/core.go
+	sd.Sections = append(sd.Sections, coreS...)
 	for _, z := range cs.Placements {
 		sd.Sections = append(sd.Sections, figures.Section{X0: z + e.Z0, X1: z + e.Z1, Y0: e.R0, Y1: e.R1, Round: e.Round})
 	}
@@ -123,6 +125,8 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 		desc = fmt.Sprintf("%d turns in %d layers of up to %d turns, %s long with a radial build of %s",
 			co.Turns, w.LayerCount, w.TurnsPerLayer, mmText(e.Z1-e.Z0), mmText(co.RadialBuild))
 	}
+	sd.Dimensions = append(sd.Dimensions, coreDims...)
+	desc += coreDesc
 	if co.Form == calc.Pair {
 		s := math.Abs(co.Spacing)
 		sd.CentreLines = []float64{-s / 2, s / 2}
@@ -198,6 +202,7 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 		yLabel = "Position across the width x"
 	} else {
 		e := cs.Envelope
+		sections, _, _ = coreSketch(co, cs, true) // memo/core.go
 		for _, z := range cs.Placements {
 			for _, s := range []float64{1, -1} {
 				sections = append(sections, figures.Section{X0: z + e.Z0, X1: z + e.Z1, Y0: s * e.R0, Y1: s * e.R1, Round: e.Round})

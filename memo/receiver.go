@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"math"
 
+	"coilmemo/analysis"
+	"coilmemo/calc"
 	"coilmemo/doc"
 	"coilmemo/figures"
 )
@@ -52,13 +54,17 @@ func (c *composer) receiver() {
 						Symbolic: `S = 2 \pi f A_{eff}`, Numbers: fmt.Sprintf(`2\pi \cdot %s \cdot %s`, Q(r.Frequency, "Hz", 4), Q(r.EffectiveArea, "m²", 4)),
 						Result: Q(r.Sensitivity, "V/T", 4)},
 					Step{What: "Thermal noise of the winding (Nyquist, Phys. Rev. 32 (1928) 110)", Symbolic: `e_n = \sqrt{4 k T R_{ac}}`,
-						Numbers: fmt.Sprintf(`\sqrt{4 k \cdot %s \cdot %s}`, Q(r.Resistance, "Ω", 4), "T"), Result: Q(r.NoiseVoltage, "V/√Hz", 3)},
+						Numbers: fmt.Sprintf(`\sqrt{4 k \cdot %s \cdot %s}`, Q(noiseTemperature(c.j.Results.Coils[i].Temperature), "K", 4), Q(r.Resistance, "Ω", 4)), Result: Q(r.NoiseVoltage, "V/√Hz", 3)},
 					Step{What: "Noise-equivalent field", Symbolic: `B_n = \frac{e_n}{S}`,
 						Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(r.NoiseVoltage, "V/√Hz", 3), Q(r.Sensitivity, "V/T", 4)), Result: Q(r.NoiseField, "T/√Hz", 3)})
 			}
 			if !math.IsNaN(r.BandNoiseField) {
 				steps = append(steps, Step{What: fmt.Sprintf("Noise-equivalent field over the band %s to %s", Eng(co.BandLow, "Hz", 3), Eng(co.BandHigh, "Hz", 3)),
 					Symbolic: `B_{rms} = \sqrt{\int B_n(f)^2 \, df}`, Result: Q(r.BandNoiseField, "T", 3)})
+			}
+			if k.Core == nil {
+				steps = append(steps, Step{What: "Inductance of the winding (the verification section compares it with an independent formula)",
+					Symbolic: `L`, Result: Q(c.j.Results.Coils[i].Inductance, "H", 4)})
 			}
 			steps = append(steps, Step{What: "Capacitance across the terminals: the winding's own plus the load", Symbolic: `C = C_s + C_{load}`,
 				Numbers: fmt.Sprintf(`%s + %s`, Q(r.SelfCapacitance, "F", 3), Q(co.LoadCapacitance, "F", 3)), Result: Q(r.Capacitance, "F", 3)})
@@ -89,4 +95,111 @@ func (c *composer) receiver() {
 				Summary: fmt.Sprintf("Peak near %s.", Eng(r.SelfResonance, "Hz", 3))})
 		}
 	}
+}
+
+// receiverOnly says whether every coil block of the design is a pick-up
+// coil: the design then has no drive, and the sections that state a
+// driven coil's field, torque, switching and heating (all zero, or
+// meaningless, at no current) are not written; the receiver section and
+// page 1 state the receiver's own figures instead.
+func (c *composer) receiverOnly() bool {
+	d := c.j.Spec.Design
+	if len(d.Coils) == 0 {
+		return false
+	}
+	for _, co := range d.Coils {
+		if !analysis.IsReceiver(co) {
+			return false
+		}
+	}
+	return true
+}
+
+// anyReceiver says whether some coil block is a pick-up coil.
+func (c *composer) anyReceiver() bool {
+	for _, co := range c.j.Spec.Design.Coils {
+		if analysis.IsReceiver(co) {
+			return true
+		}
+	}
+	return false
+}
+
+// driven wraps a section that is about driven coils: it writes nothing
+// for a design of pick-up coils only (receiverOnly).
+func driven(fn func(*composer)) func(*composer) {
+	return func(c *composer) {
+		if c.receiverOnly() {
+			return
+		}
+		fn(c)
+	}
+}
+
+// receiverSummary is page 1's table of the pick-up coils: sensitivity,
+// noise-equivalent field at the design frequency and over the band,
+// self-resonance with the load, resistance, inductance and capacitance.
+func (c *composer) receiverSummary() doc.Table {
+	d := c.j.Spec.Design
+	var idx []int
+	head := []string{"Result"}
+	for i, co := range d.Coils {
+		if i < len(c.j.Coils) && c.j.Coils[i].Kinds.Receiver != nil {
+			idx = append(idx, i)
+			head = append(head, co.Name)
+		}
+	}
+	row := func(name string, f func(i int) string) []doc.Cell {
+		cells := []doc.Cell{{Text: name}}
+		for _, i := range idx {
+			cells = append(cells, doc.Cell{Text: f(i)})
+		}
+		return cells
+	}
+	rec := func(i int) calc.ReceiverResult { return *c.j.Coils[i].Kinds.Receiver }
+	orDash := func(v float64, unit string, sig int) string {
+		if math.IsNaN(v) {
+			return "—"
+		}
+		return Eng(v, unit, sig)
+	}
+	rows := [][]doc.Cell{
+		row("Design frequency", func(i int) string { return orDash(nonZero(rec(i).Frequency), "Hz", 3) }),
+		row("Sensitivity (open circuit, at the design frequency)", func(i int) string { return orDash(nonZero(rec(i).Sensitivity), "V/T", 4) }),
+		row("Noise-equivalent field at the design frequency", func(i int) string { return orDash(nonZero(rec(i).NoiseField), "T/√Hz", 3) }),
+		row("Noise-equivalent field, rms over the band", func(i int) string {
+			co := d.Coils[i]
+			if math.IsNaN(rec(i).BandNoiseField) {
+				return "—"
+			}
+			return fmt.Sprintf("%s (%s to %s)", Eng(rec(i).BandNoiseField, "T", 3), Eng(co.BandLow, "Hz", 3), Eng(co.BandHigh, "Hz", 3))
+		}),
+		row("Self-resonance, with the load", func(i int) string { return orDash(rec(i).SelfResonance, "Hz", 3) }),
+		row("Resistance, a.c. at the design frequency", func(i int) string { return orDash(rec(i).Resistance, "Ω", 3) }),
+		row("Inductance (with the core, small signal)", func(i int) string { return orDash(c.j.Results.Coils[i].Inductance, "H", 3) }),
+		row("Capacitance across the terminals (winding + load)", func(i int) string { return orDash(rec(i).Capacitance, "F", 3) }),
+		row("Effective area (flux linkage per tesla)", func(i int) string { return orDash(rec(i).EffectiveArea, "m²", 3) }),
+		row("Wire length / conductor mass", func(i int) string {
+			return Eng(c.j.Results.Coils[i].Length, "m", 3) + " / " + Eng(c.j.Coils[i].Kinds.AirMass, "kg", 3)
+		}),
+	}
+	align, widths := perCoilColumns(len(idx), 2.2, 1.5)
+	return doc.Table{Caption: "Headline results of the pick-up coils (no drive)", Header: head, Rows: rows, Align: align, Widths: widths}
+}
+
+// noiseTemperature is the winding temperature the thermal noise is taken
+// at, K: the coil's, or 20 °C where it is unknown (as the analysis takes it).
+func noiseTemperature(t float64) float64 {
+	if math.IsNaN(t) {
+		return 293.15
+	}
+	return t
+}
+
+// nonZero is v, or NaN for 0 (a figure that needs a design frequency).
+func nonZero(v float64) float64 {
+	if v == 0 {
+		return math.NaN()
+	}
+	return v
 }
