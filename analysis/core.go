@@ -76,8 +76,10 @@ func kindsOf(d calc.Design, r calc.Results, cored bool) []CoilKinds {
 				aEff = core.EffectiveArea
 			}
 		}
-		T := cr.Temperature
-		if math.IsNaN(T) {
+		// the winding's mean temperature, at which its resistance (and the
+		// heat balance's a.c. factor) is taken
+		T := cr.Heat.Steady.Mean
+		if math.IsNaN(T) || !(T > 0) {
 			T = calc.CelsiusToKelvin(20)
 		}
 		if IsReceiver(c) {
@@ -94,7 +96,7 @@ func kindsOf(d calc.Design, r calc.Results, cored bool) []CoilKinds {
 			k.AC = &ac
 			if !IsReceiver(c) {
 				k.AboveResonance = calc.AboveSelfResonance(c.Frequency, k.SelfResonance)
-				k.ACPower = ac.Factor * cr.PowerOn * c.Duty
+				k.ACPower = cr.Power // the heat balance takes R_ac (calc.OperatingPoint)
 			}
 		}
 		out[i] = k

@@ -103,3 +103,19 @@ func AboveSelfResonance(f, fsr float64) bool {
 func NearSelfResonance(f, fsr float64) bool {
 	return fsr > 0 && f > fsr/3
 }
+
+// HeatingACFactor returns R_ac/R_dc, the factor on the d.c. resistance
+// that the heat balance of driven coil c takes at its frequency: Dowell's
+// factor of ACResistance at mean winding temperature T, for a coil with a
+// layered winding model (not a pair or a rectangle); 1 for d.c. or where
+// the factor is unknown.
+func HeatingACFactor(c Coil, w Winding, T float64) float64 {
+	if !(c.Frequency > 0) || math.IsInf(c.Frequency, 0) || c.Form == Rectangle || c.Form == Pair {
+		return 1
+	}
+	f := ACResistance(c, w, 1, T, c.Frequency).Factor
+	if !(f >= 1) || math.IsInf(f, 0) {
+		return 1
+	}
+	return f
+}

@@ -159,7 +159,10 @@ func ColdTemperature(cond Conditions) float64 { return math.Min(T20, Ambient(con
 // V/|Z(T)| under voltage drive, |Z| = R(T) for d.c. and √(R(T)² + (ωL)²)
 // for an a.c. drive of frequency f = ω/2π, L = CoilInductance; the Voltage
 // is across the whole block), the voltage I·R(T) (d.c.) and the power
-// I² R(T), on and averaged, and the runaway verdict (Judge). Unknown values
+// I² R(T), on and averaged, and the runaway verdict (Judge). An a.c.
+// drive heats at R_ac = F·R(T), F the Dowell factor of HeatingACFactor at
+// the steady mean temperature (solved for together with it), and a
+// voltage drive's current is V/√((F R)² + (ωL)²). Unknown values
 // are NaN: all the temperature-dependent ones when there is no steady
 // state, except an imposed current.
 func OperatingPoint(c Coil, w Winding, cond Conditions) Operating {
@@ -200,19 +203,38 @@ func OperatingPoint(c Coil, w Winding, cond Conditions) Operating {
 		return op
 	}
 	st := tp.Steady()
+	if c.Frequency > 0 && (c.Current != 0 || c.Voltage != 0) {
+		// An a.c. winding heats at R_ac, whose factor depends on the
+		// temperature (the skin depth grows with the resistivity):
+		// solve again at the factor of the last solution's mean
+		// temperature until the factor settles.
+		for range 30 {
+			if !st.Settled || math.IsNaN(st.Mean) {
+				break
+			}
+			f := HeatingACFactor(c, w, st.Mean)
+			if math.Abs(f-tp.acFactor()) <= 1e-12*f {
+				break
+			}
+			tp.ACFactor = f
+			st = tp.Steady()
+		}
+		op.Thermal = tp
+	}
 	op.State = st
 	op.Temperature = st.HotSpot
 	op.Verdict = Judge(ThermalLimit(c), st.HotSpot, st.Settled, st.NoSolution)
 	op.Runaway = op.Verdict.Runaway
 	op.RHot = ResistanceAt(tp.R20, tp.Alpha20, st.Mean)
+	rac := op.RHot * tp.acFactor()
 	if c.Drive == VoltageDrive {
-		op.Current = c.Voltage / impedance(op.RHot)
+		op.Current = c.Voltage / impedance(rac)
 		op.Voltage = c.Voltage
 	} else {
 		op.Current = c.Current
 		op.Voltage = c.Current * op.RHot
 	}
-	op.PowerOn = op.Current * op.Current * op.RHot
+	op.PowerOn = op.Current * op.Current * rac
 	op.Power = tp.Duty * op.PowerOn
 	return op
 }

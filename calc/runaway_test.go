@@ -234,10 +234,17 @@ func TestACVoltageDriveHeatsAtImpedance(t *testing.T) {
 	ac := OperatingPoint(c, w, cond)
 	X := 2 * math.Pi * 200 * CoilInductance(c, w)
 	checkRel(t, "reactance", ac.Reactance, X, 1e-12)
-	checkRel(t, "a.c. current V/|Z(T)|", ac.Current, 24/math.Hypot(ac.RHot, X), 1e-12)
+	// the winding heats at R_ac = F·R(T), F Dowell's factor at the mean
+	// temperature it settles at
 	tp := ac.Thermal
 	st := ac.State
-	checkRel(t, "heat balance at I²R", tp.HeatOut(st.Surface), ac.Current*ac.Current*ac.RHot, 1e-9)
+	F := tp.ACFactor
+	checkRel(t, "Dowell factor at the settled mean temperature", F, HeatingACFactor(c, w, st.Mean), 1e-9)
+	if !(F >= 1) {
+		t.Fatalf("a.c. factor %g", F)
+	}
+	checkRel(t, "a.c. current V/|Z(T)|", ac.Current, 24/math.Hypot(F*ac.RHot, X), 1e-12)
+	checkRel(t, "heat balance at I²R_ac", tp.HeatOut(st.Surface), ac.Current*ac.Current*F*ac.RHot, 1e-8)
 	if !(ac.Temperature < dc.Temperature) || !(ac.Current < dc.Current) {
 		t.Errorf("a.c. %.1f °C %.4f A, d.c. %.1f °C %.4f A", KelvinToCelsius(ac.Temperature), ac.Current, KelvinToCelsius(dc.Temperature), dc.Current)
 	}

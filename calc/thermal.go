@@ -57,6 +57,10 @@ type ThermalProblem struct {
 	// Reactance is ωL, Ω, of an a.c. voltage drive (0: d.c.): the current is
 	// then V/|Z(T)|, |Z| = √(R(T)² + X²), and the heat I² R(T).
 	Reactance float64
+	// ACFactor is R_ac/R_dc of an a.c. drive (HeatingACFactor; 0 or 1:
+	// d.c.): the heat is I² R(T) ACFactor, and a voltage drive's current
+	// V/|Z| with |Z| = √((ACFactor R(T))² + X²).
+	ACFactor float64
 }
 
 // The cooling defaults, one home for the spec reader and calc alike.
@@ -106,7 +110,7 @@ func ResistanceAt(r20, alpha20, T float64) float64 { return r20 * ResistanceFact
 // V/|Z| of the series R–L circuit heats only the resistance (any circuit
 // text on a.c. power, P = I_rms² R).
 func (tp ThermalProblem) PowerOn(T float64) float64 {
-	R := ResistanceAt(tp.R20, tp.Alpha20, T)
+	R := ResistanceAt(tp.R20, tp.Alpha20, T) * tp.acFactor()
 	if tp.Drive == VoltageDrive {
 		if X := tp.Reactance; X != 0 {
 			return tp.Voltage * tp.Voltage * R / (R*R + X*X)
@@ -114,6 +118,14 @@ func (tp ThermalProblem) PowerOn(T float64) float64 {
 		return tp.Voltage * tp.Voltage / R
 	}
 	return tp.Current * tp.Current * R
+}
+
+// acFactor is ACFactor as used: 1 when not set.
+func (tp ThermalProblem) acFactor() float64 {
+	if tp.ACFactor > 0 && !math.IsInf(tp.ACFactor, 0) {
+		return tp.ACFactor
+	}
+	return 1
 }
 
 // HeatIn returns the average heat input, W, at mean winding temperature T:

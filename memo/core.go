@@ -124,8 +124,8 @@ func kindCautions(j *analysis.Study, f analysis.Finding) []doc.Callout {
 			Eng(co.Frequency, "Hz", 3), Eng(f.Value, "Hz", 3))}}}}
 	case analysis.ProximityLosses:
 		return []doc.Callout{{Severity: doc.Caution, Title: "Proximity losses, " + name, Spans: []doc.Span{{Text: fmt.Sprintf(
-			"At %s the a.c. resistance is %s times the d.c. resistance (Dowell's method): the winding dissipates %s, not the d.c. figure. Use stranded (litz) wire or fewer layers.",
-			Eng(co.Frequency, "Hz", 3), fmt.Sprintf("%.3g", f.Value), Eng(k.ACPower, "W", 3))}}}}
+			"At %s the a.c. resistance is %s times the d.c. resistance (Dowell's method): the winding dissipates %s where the d.c. resistance alone would give %s. The power and temperatures of this memo include it. Use stranded (litz) wire or fewer layers.",
+			Eng(co.Frequency, "Hz", 3), fmt.Sprintf("%.3g", f.Value), Eng(k.ACPower, "W", 3), Eng(k.ACPower/f.Value, "W", 3))}}}}
 	}
 	return nil
 }

@@ -47,7 +47,7 @@ func (c *composer) electrical() {
 		c.para(suppressionText(co, cr))
 		if cr.AC.Frequency > 0 {
 			c.derive(acSteps(co, cr)...)
-			c.para(acText(co, cr))
+			c.para(acText(co, cr, c.j.Coils[i].Kinds))
 		}
 	}
 	c.couplings()
@@ -248,24 +248,46 @@ func acSteps(co calc.Coil, cr calc.CoilResult) []Step {
 }
 
 // acText says where the d.c. model stops holding at the drive frequency.
-func acText(co calc.Coil, cr calc.CoilResult) string {
+// factorText writes a ratio near 1 with the digits that show its
+// departure from 1 (1.0001), others to three figures.
+func factorText(f float64) string {
+	if f < 1.1 {
+		return Sig(f, 5)
+	}
+	return Sig(f, 3)
+}
+
+func acText(co calc.Coil, cr calc.CoilResult, k analysis.CoilKinds) string {
 	a := cr.AC
 	var b strings.Builder
 	ratio := a.Reactance / cr.RHot
-	if a.Reactive {
-		fmt.Fprintf(&b, "At %s the reactance is %s times the resistance: it is not negligible, and the current follows the impedance, not the resistance alone; the d.c. figures of this memo (current, moment, field, heating) do not hold at this frequency. ",
+	switch {
+	case a.Reactive && co.Drive == calc.VoltageDrive:
+		fmt.Fprintf(&b, "At %s the reactance is %s times the resistance: it is not negligible, and the current follows the impedance, V/|Z|, as this memo takes it throughout (current, moment, field and heating). ",
 			Eng(a.Frequency, "Hz", 3), Sig(ratio, 2))
-	} else {
+	case a.Reactive:
+		fmt.Fprintf(&b, "At %s the reactance is %s times the resistance: the imposed current sets the moment, field and heating, but the driver must supply the voltage across the impedance, well above the resistive drop. ",
+			Eng(a.Frequency, "Hz", 3), Sig(ratio, 2))
+	default:
 		fmt.Fprintf(&b, "At %s the reactance is only %s of the resistance, so the d.c. figures hold to within about half a per cent. ", Eng(a.Frequency, "Hz", 3), Sig(ratio, 2))
 	}
-	if a.SkinLimited {
-		fmt.Fprintf(&b, "The skin depth %s is less than the wire radius %s: the current crowds to the wire's surface and the a.c. resistance exceeds the d.c. value (in a multilayer winding the proximity effect of neighbouring turns raises it further), so the losses are higher than computed here. ",
+	F := cr.Heat.Problem.ACFactor
+	switch {
+	case F > 1 && k.AC != nil:
+		fmt.Fprintf(&b, "The skin depth is %s against a wire radius of %s; over the winding's %d layers Dowell's method gives R_ac/R_dc = %s for skin and proximity effects together, and the power and temperatures of this memo are at that a.c. resistance. ",
+			Eng(a.SkinDepth, "m", 3), Eng(a.WireRadius, "m", 3), k.AC.Layers, factorText(F))
+	case a.SkinLimited:
+		fmt.Fprintf(&b, "The skin depth %s is less than the wire radius %s: the current crowds to the wire's surface and the a.c. resistance exceeds the d.c. value (the proximity effect of neighbouring turns raises it further; no layered model applies to this form), so the losses are higher than computed here. ",
 			Eng(a.SkinDepth, "m", 3), Eng(a.WireRadius, "m", 3))
-	} else {
-		fmt.Fprintf(&b, "The skin depth %s exceeds the wire radius %s, so the skin effect in a single wire is small; the proximity effect of neighbouring turns is not assessed. ",
+	default:
+		fmt.Fprintf(&b, "The skin depth %s exceeds the wire radius %s, so the skin effect in a single wire is small; the proximity effect of neighbouring turns is not assessed for this form. ",
 			Eng(a.SkinDepth, "m", 3), Eng(a.WireRadius, "m", 3))
 	}
-	b.WriteString("The series R–L model leaves out the winding's capacitance and holds only well below its self-resonant frequency, which is not computed here.")
+	if fsr := k.SelfResonance; fsr > 0 {
+		fmt.Fprintf(&b, "The series R–L model leaves out the winding's capacitance and holds only well below its self-resonance, %s.", Eng(fsr, "Hz", 3))
+	} else {
+		b.WriteString("The series R–L model leaves out the winding's capacitance and holds only well below its self-resonant frequency, which is not computed for this form.")
+	}
 	return b.String()
 }
 

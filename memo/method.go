@@ -116,18 +116,39 @@ func coilSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []Step 
 			Numbers:  fmt.Sprintf(`%s \left[ 1 + %s\,\unit{K^{-1}} \cdot (%s - 20\,\unit{°C}) \right]`, Q(cr.R20, "Ω", 4), N(mat.Alpha20, 3), Q(T, "°C", 3)),
 			Result:   Q(cr.RHot, "Ω", 4)})
 	}
-	if co.Drive == calc.VoltageDrive {
+	// An a.c. drive heats at R_ac = F_R R(T) (Dowell's factor at the mean
+	// temperature) and a voltage drive's current is V/|Z|.
+	F := cr.Heat.Problem.ACFactor
+	ac := F > 1 || cr.Reactance > 0
+	if !(F > 1) {
+		F = 1
+	}
+	switch {
+	case co.Drive == calc.VoltageDrive && ac:
+		add(Step{What: "Current under a.c. voltage drive: the impedance of the a.c. resistance F_R R(T) (Dowell's factor at the mean temperature) and the reactance ωL",
+			Symbolic: `I = \frac{V}{\sqrt{(F_R R(T))^2 + (\omega L)^2}}`,
+			Numbers:  fmt.Sprintf(`\frac{%s}{\sqrt{(%s \cdot %s)^2 + %s^2}}`, Q(co.Voltage, "V", 4), N(F, 5), Q(cr.RHot, "Ω", 4), Paren(Q(cr.Reactance, "Ω", 4))),
+			Result:   Q(cr.Current, "A", 4)})
+		add(Step{What: "Current when cold (switch-on)", Symbolic: `I_{20} = \frac{V}{R_{20}}`,
+			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(co.Voltage, "V", 4), Q(cr.R20, "Ω", 4)), Result: Q(cr.ColdCurrent, "A", 4)})
+	case co.Drive == calc.VoltageDrive:
 		add(Step{What: "Current under voltage drive, at the hot resistance", Symbolic: `I = \frac{V}{R(T)}`,
 			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(co.Voltage, "V", 4), Q(cr.RHot, "Ω", 4)), Result: Q(cr.Current, "A", 4)})
 		add(Step{What: "Current when cold (switch-on)", Symbolic: `I_{20} = \frac{V}{R_{20}}`,
 			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(co.Voltage, "V", 4), Q(cr.R20, "Ω", 4)), Result: Q(cr.ColdCurrent, "A", 4)})
-	} else {
+	default:
 		add(Step{What: "Voltage under current drive, at the hot resistance", Symbolic: `V = I\, R(T)`,
 			Numbers: fmt.Sprintf(`%s \cdot %s`, Q(cr.Current, "A", 4), Q(cr.RHot, "Ω", 4)), Result: Q(cr.Voltage, "V", 4)})
 	}
 	pOn := cr.PowerOn
-	add(Step{What: "Power while energised", Symbolic: `P = I^2 R(T)`,
-		Numbers: fmt.Sprintf(`%s^2 \cdot %s`, Paren(Q(cr.Current, "A", 4)), Q(cr.RHot, "Ω", 4)), Result: Q(pOn, "W", 4)})
+	if F > 1 {
+		add(Step{What: "Power while energised, at the a.c. resistance F_R R(T): Dowell's factor for skin and proximity losses at the mean temperature",
+			Symbolic: `P = I^2 F_R R(T)`,
+			Numbers:  fmt.Sprintf(`%s^2 \cdot %s \cdot %s`, Paren(Q(cr.Current, "A", 4)), N(F, 5), Q(cr.RHot, "Ω", 4)), Result: Q(pOn, "W", 4)})
+	} else {
+		add(Step{What: "Power while energised", Symbolic: `P = I^2 R(T)`,
+			Numbers: fmt.Sprintf(`%s^2 \cdot %s`, Paren(Q(cr.Current, "A", 4)), Q(cr.RHot, "Ω", 4)), Result: Q(pOn, "W", 4)})
+	}
 	if duty := cr.Duty; duty < 1 {
 		add(Step{What: "Power averaged over the duty cycle δ", Symbolic: `\bar{P} = \delta P`,
 			Numbers: fmt.Sprintf(`%s \cdot %s`, N(duty, 3), Q(pOn, "W", 4)), Result: Q(cr.Power, "W", 4)})
