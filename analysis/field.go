@@ -2,6 +2,9 @@ package analysis
 
 import (
 	"math"
+	"runtime"
+	"sync"
+	"sync/atomic"
 
 	"coilmemo/calc"
 )
@@ -233,21 +236,52 @@ func allCoilsMap(d calc.Design, r calc.Results) *MapData {
 	xs := SymmetricSpace(half, AllMapGrid)
 	step := 2 * half / float64(AllMapGrid-1)
 	fm := calc.NewFieldModel(d)
+	envs := make([]calc.Envelope, len(hidden)) // once per map, not per node
+	for j, k := range hidden {
+		envs[j] = calc.WindingEnvelope(d.Coils[k], r.Coils[k].Winding)
+	}
 	m := &MapData{X: xs, Z: xs, XHalf: half, ZHalf: half, B: make([]float64, len(xs)*len(xs))}
-	for ix, x := range xs {
+	// One column of nodes per task; every node is computed alone and
+	// stored in its own place, so the map does not depend on scheduling.
+	eachIndex(len(xs), func(ix int) {
+		x := xs[ix]
 		for iz, z := range xs {
 			p := calc.Vec{x, 0, z}
 			v := fm.At(p).Norm()
-			for _, k := range hidden {
-				co := d.Coils[k]
-				if nearWinding(co, calc.WindingEnvelope(co, r.Coils[k].Winding), p, step) {
+			for j, k := range hidden {
+				if nearWinding(d.Coils[k], envs[j], p, step) {
 					v = math.NaN()
 				}
 			}
 			m.B[ix*len(xs)+iz] = v
 		}
-	}
+	})
 	return m
+}
+
+// eachIndex calls f(i) for every i < n on up to runtime.GOMAXPROCS
+// goroutines and returns when all are done; f must write only to places
+// of its own index.
+func eachIndex(n int, f func(i int)) {
+	workers := min(runtime.GOMAXPROCS(0), n)
+	if workers <= 1 {
+		for i := range n {
+			f(i)
+		}
+		return
+	}
+	var next atomic.Int64
+	var wg sync.WaitGroup
+	for range workers {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for i := int(next.Add(1)) - 1; i < n; i = int(next.Add(1)) - 1 {
+				f(i)
+			}
+		}()
+	}
+	wg.Wait()
 }
 
 // DrawnInXZ reports whether the winding of co can be drawn in the

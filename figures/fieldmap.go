@@ -5,6 +5,7 @@ import (
 	"image"
 	"image/color"
 	"math"
+	"sort"
 	"strconv"
 
 	"gonum.org/v1/plot"
@@ -58,11 +59,16 @@ type MapScale struct {
 // largest |B| at nodes outside the sections, the bottom Decades below it
 // (or the smallest value, if higher).
 func (d MapData) Scale() MapScale {
+	return d.scale(sectionMask(d.X, d.Y, d.Sections))
+}
+
+// scale is Scale with the nodes inside the sections given (sectionMask).
+func (d MapData) scale(inside []bool) MapScale {
 	hi, lo := 0.0, math.Inf(1)
-	for iy, y := range d.Y {
-		for ix, x := range d.X {
+	for iy := range d.Y {
+		for ix := range d.X {
 			v := d.B[iy*len(d.X)+ix]
-			if !(v > 0) || math.IsInf(v, 0) || inSections(d.Sections, x, y) {
+			if !(v > 0) || math.IsInf(v, 0) || inside[iy*len(d.X)+ix] {
 				continue
 			}
 			hi = math.Max(hi, v)
@@ -90,6 +96,57 @@ func (d MapData) Scale() MapScale {
 		}
 	}
 	return s
+}
+
+// sectionMask reports for every node of the grid (x, y), at index
+// iy·len(x) + ix, whether it lies inside one of the sections: the test of
+// inSections, made once per grid rather than once per use and per node.
+// Each section visits only the nodes of its bounding box (found by binary
+// search in the ascending node positions, widened by one node on each
+// side so that rounding at a circle's edge cannot drop a node); grids
+// whose positions are not ascending are tested node by node.
+func sectionMask(x, y []float64, ss []Section) []bool {
+	m := make([]bool, len(x)*len(y))
+	if len(ss) == 0 {
+		return m
+	}
+	if !sort.Float64sAreSorted(x) || !sort.Float64sAreSorted(y) {
+		for iy, yv := range y {
+			for ix, xv := range x {
+				m[iy*len(x)+ix] = inSections(ss, xv, yv)
+			}
+		}
+		return m
+	}
+	span := func(a []float64, lo, hi float64) (int, int) {
+		i := max(sort.SearchFloat64s(a, lo)-1, 0)
+		j := min(sort.SearchFloat64s(a, hi)+1, len(a))
+		return i, j
+	}
+	for k := range ss {
+		one := ss[k : k+1]
+		s := ss[k]
+		x0, x1 := math.Min(s.X0, s.X1), math.Max(s.X0, s.X1)
+		y0, y1 := math.Min(s.Y0, s.Y1), math.Max(s.Y0, s.Y1)
+		if s.Round {
+			r := (x1 - x0) / 2
+			cy := (y0 + y1) / 2
+			y0, y1 = cy-r, cy+r
+		}
+		if math.IsNaN(x0) || math.IsNaN(x1) || math.IsNaN(y0) || math.IsNaN(y1) {
+			continue // inSections holds no node inside such a section
+		}
+		ix0, ix1 := span(x, x0, x1)
+		iy0, iy1 := span(y, y0, y1)
+		for iy := iy0; iy < iy1; iy++ {
+			for ix := ix0; ix < ix1; ix++ {
+				if k := iy*len(x) + ix; !m[k] && inSections(one, x[ix], y[iy]) {
+					m[k] = true
+				}
+			}
+		}
+	}
+	return m
 }
 
 func inSections(ss []Section, x, y float64) bool {
@@ -125,7 +182,8 @@ func drawFieldMap(c vg.Canvas, w, h vg.Length, d MapData) {
 	if len(d.X) < 2 || len(d.Y) < 2 || len(d.B) != len(d.X)*len(d.Y) {
 		return
 	}
-	sc := d.Scale()
+	inside := sectionMask(d.X, d.Y, d.Sections)
+	sc := d.scale(inside)
 	lp := EngPrefix(d.X[0], d.X[len(d.X)-1], d.Y[0], d.Y[len(d.Y)-1])
 	if lp.Factor > 1 {
 		lp = Prefix{"", 1}
@@ -135,9 +193,10 @@ func drawFieldMap(c vg.Canvas, w, h vg.Length, d MapData) {
 	p.Y.Min, p.Y.Max = d.Y[0]/lp.Factor, d.Y[len(d.Y)-1]/lp.Factor
 	p.X.Padding, p.Y.Padding = 0, 0
 
-	img := mapImage(d, sc)
+	logv := logGrid(d.B, inside)
+	img := mapImage(d, sc, logv)
 	p.Add(plotter.NewImage(img, p.X.Min, p.Y.Min, p.X.Max, p.Y.Max))
-	p.Add(&contourPlot{d: d, levels: sc.Levels, scale: lp.Factor})
+	p.Add(&contourPlot{d: d, logv: logv, levels: sc.Levels, scale: lp.Factor})
 	p.Add(&sectionPlot{sections: d.Sections, scale: lp.Factor})
 
 	// Room for the colour bar on the right.
@@ -170,24 +229,13 @@ func drawFieldMap(c vg.Canvas, w, h vg.Length, d MapData) {
 
 // mapImage renders the grid as an image at about three pixels per node
 // (at most 600 across), interpolating log10 |B| bilinearly.
-func mapImage(d MapData, sc MapScale) image.Image {
+// logv is logGrid of the map.
+func mapImage(d MapData, sc MapScale, logv []float64) image.Image {
 	nx, ny := len(d.X), len(d.Y)
 	f := max(1, min(3, 600/max(nx, ny)))
 	W, H := (nx-1)*f+1, (ny-1)*f+1
 	img := image.NewNRGBA(image.Rect(0, 0, W, H))
 	l0, l1 := math.Log10(sc.Lo), math.Log10(sc.Hi)
-	logv := make([]float64, len(d.B))
-	for iy, y := range d.Y {
-		for ix, x := range d.X {
-			k := iy*nx + ix
-			v := d.B[k]
-			if !(v > 0) || math.IsInf(v, 0) || inSections(d.Sections, x, y) {
-				logv[k] = math.NaN()
-				continue
-			}
-			logv[k] = math.Log10(v)
-		}
-	}
 	for py := range H {
 		gy := float64(H-1-py) / float64(f) // row 0 is the top
 		iy := min(int(gy), ny-2)
@@ -214,9 +262,25 @@ func mapImage(d MapData, sc MapScale) image.Image {
 	return img
 }
 
+// logGrid returns log10 |B| at every node, NaN where the node is blank:
+// a value that is NaN, infinite or not positive, or a node inside a
+// section (inside, from sectionMask).
+func logGrid(b []float64, inside []bool) []float64 {
+	logv := make([]float64, len(b))
+	for k, v := range b {
+		if !(v > 0) || math.IsInf(v, 0) || inside[k] {
+			logv[k] = math.NaN()
+			continue
+		}
+		logv[k] = math.Log10(v)
+	}
+	return logv
+}
+
 // contourPlot draws the contour lines of a map.
 type contourPlot struct {
 	d      MapData
+	logv   []float64 // logGrid of the map
 	levels []float64
 	scale  float64
 }
@@ -225,7 +289,7 @@ func (cp *contourPlot) Plot(c draw.Canvas, p *plot.Plot) {
 	trX, trY := p.Transforms(&c)
 	ls := draw.LineStyle{Color: contourInk, Width: vg.Points(0.45)}
 	for _, lv := range cp.levels {
-		for _, line := range Contour(cp.d.X, cp.d.Y, cp.d.B, lv, cp.d.Sections) {
+		for _, line := range contourLog(cp.d.X, cp.d.Y, cp.logv, lv) {
 			pts := make([]vg.Point, len(line))
 			for i, q := range line {
 				pts[i] = vg.Point{X: trX(q[0] / cp.scale), Y: trY(q[1] / cp.scale)}
@@ -241,21 +305,23 @@ func (cp *contourPlot) Plot(c draw.Canvas, p *plot.Plot) {
 // mean). Cells with a blank corner (NaN, non-positive, inside a section)
 // are skipped. Segments are joined into polylines through shared edges.
 func Contour(x, y, v []float64, level float64, sections []Section) [][][2]float64 {
+	if len(x) < 2 || len(y) < 2 || !(level > 0) {
+		return nil
+	}
+	return contourLog(x, y, logGrid(v, sectionMask(x, y, sections)), level)
+}
+
+// contourLog is Contour over logv, log10 of the grid function with its
+// blank nodes NaN (logGrid).
+func contourLog(x, y, logv []float64, level float64) [][][2]float64 {
 	nx, ny := len(x), len(y)
 	if nx < 2 || ny < 2 || !(level > 0) {
 		return nil
 	}
 	lv := math.Log10(level)
-	g := make([]float64, len(v))
-	for iy := range ny {
-		for ix := range nx {
-			k := iy*nx + ix
-			if !(v[k] > 0) || math.IsInf(v[k], 0) || inSections(sections, x[ix], y[iy]) {
-				g[k] = math.NaN()
-			} else {
-				g[k] = math.Log10(v[k]) - lv
-			}
-		}
+	g := make([]float64, len(logv))
+	for k, l := range logv {
+		g[k] = l - lv // NaN stays NaN
 	}
 	// An edge is identified by its lower-left node and direction
 	// (0: towards +x, 1: towards +y).

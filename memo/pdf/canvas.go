@@ -359,12 +359,23 @@ func (c *Canvas) FillString(f font.Face, pt vg.Point, s string) {
 	c.pdf.TransformEnd()
 }
 
+// imageEncoder is the PNG encoder of DrawImage. The PDF carries the PNG's
+// compressed data as it is (an opaque image's IDAT stream becomes the image
+// XObject), so its level sets both the encoding time and the memo's size.
+// Measured on the eight examples' |B| map rasters (BenchmarkMapImagePNG in
+// package memo, docs/performance.md): zlib's fastest level encodes them in
+// about a third of the default level's time, at 413 kB against 264 kB for
+// the eight; the best level saves only 8 % more than the default at four
+// times its cost. A map raster is one of a memo's few large objects, so
+// speed wins: BestSpeed.
+var imageEncoder = png.Encoder{CompressionLevel: png.BestSpeed}
+
 // DrawImage implements vg.Canvas. The image is embedded as a PNG under a
 // name derived from its content, so equal images are stored once and the
 // output does not depend on drawing order.
 func (c *Canvas) DrawImage(rect vg.Rectangle, img image.Image) {
 	var buf bytes.Buffer
-	if err := png.Encode(&buf, img); err != nil {
+	if err := imageEncoder.Encode(&buf, img); err != nil {
 		c.pdf.SetError(err)
 		return
 	}

@@ -43,19 +43,9 @@ func render(d *doc.Document, o options) (out []byte, err error) {
 			out, err = nil, fmt.Errorf("pdf: render: %v", p)
 		}
 	}()
-	// Pass 1 lays the document out without setting any text, to learn the
-	// page count; pass 2 sets everything, with "Page X of Y" known exactly
-	// (so it can be right-aligned with the true width of Y).
-	dry := newRenderer(d, options{}, 0, true)
-	if err := dry.run(); err != nil {
+	r, err := layOutTwice(d, o)
+	if err != nil {
 		return nil, err
-	}
-	r := newRenderer(d, o, dry.pdf.PageNo(), false)
-	if err := r.run(); err != nil {
-		return nil, err
-	}
-	if r.pdf.PageNo() != dry.pdf.PageNo() {
-		return nil, fmt.Errorf("pdf: layout passes disagree: %d pages, then %d", dry.pdf.PageNo(), r.pdf.PageNo())
 	}
 	var buf bytes.Buffer
 	if err := r.pdf.Output(&buf); err != nil {
@@ -64,18 +54,78 @@ func render(d *doc.Document, o options) (out []byte, err error) {
 	return buf.Bytes(), nil
 }
 
+// layOutTwice runs the two layout passes. Pass 1 (dry) lays the document
+// out without setting any text, to learn the page count; pass 2 sets
+// everything, with "Page X of Y" known exactly (so it can be right-aligned
+// with the true width of Y). The passes run at the same time, each on its
+// own fpdf document: pass 2 needs the count only when it sets its first
+// footer, at the end of page 1 (pageCount waits for it there), and the dry
+// pass, which sets no text and draws no figures, is several times faster,
+// so on a machine with a free core its cost is hidden. The set pass does
+// not depend on when the count arrives, so the bytes are those of the
+// passes run one after the other.
+func layOutTwice(d *doc.Document, o options) (*renderer, error) {
+	type result struct {
+		pages int
+		err   error
+	}
+	done := make(chan result, 1)
+	go func() {
+		var res result
+		defer func() {
+			if p := recover(); p != nil {
+				res = result{err: fmt.Errorf("pdf: render: %v", p)}
+			}
+			done <- res
+		}()
+		dry := newRenderer(d, options{}, 0, true)
+		res.err = dry.run()
+		res.pages = dry.pdf.PageNo()
+	}()
+	r := newRenderer(d, o, 0, false)
+	var dry result
+	var got bool
+	wait := func() result {
+		if !got {
+			dry, got = <-done, true
+		}
+		return dry
+	}
+	r.pageCount = func() int { return wait().pages }
+	err := func() (err error) {
+		defer func() { // a panic in the set pass: wait for the dry pass, then re-raise
+			if p := recover(); p != nil {
+				wait()
+				panic(p)
+			}
+		}()
+		return r.run()
+	}()
+	if dry := wait(); dry.err != nil {
+		return nil, dry.err
+	} else if err != nil {
+		return nil, err
+	} else if r.pdf.PageNo() != dry.pages {
+		return nil, fmt.Errorf("pdf: layout passes disagree: %d pages, then %d", dry.pages, r.pdf.PageNo())
+	}
+	return r, nil
+}
+
 // epoch stands in for a missing creation date so output stays reproducible.
 var epoch = time.Date(2000, 1, 1, 0, 0, 0, 0, time.UTC)
 
 type renderer struct {
-	pdf     *fpdf.Fpdf
-	fonts   *fontSet
-	meta    doc.Meta
-	blocks  []doc.Block
-	total   int  // page count, 0 while unknown
-	dry     bool // lay out only
-	onText  func(page int, s string)
-	onPlace func(page int, x, y float64, s string)
+	pdf    *fpdf.Fpdf
+	fonts  *fontSet
+	meta   doc.Meta
+	blocks []doc.Block
+	total  int  // page count, 0 while unknown
+	dry    bool // lay out only
+	// pageCount, if set, gives the page count when total is 0 (it may
+	// wait for the dry pass; see layOutTwice).
+	pageCount func() int
+	onText    func(page int, s string)
+	onPlace   func(page int, x, y float64, s string)
 
 	x, w  float64 // current column
 	y     float64 // cursor, points from the top edge
@@ -277,6 +327,9 @@ func (r *renderer) footer() {
 	}
 	if !r.meta.Created.IsZero() {
 		left = append(left, r.meta.Created.UTC().Format("2006-01-02"))
+	}
+	if r.total == 0 && r.pageCount != nil {
+		r.total = r.pageCount()
 	}
 	page := fmt.Sprintf("Page %d of %d", r.pdf.PageNo(), r.total)
 	w := textWidthOf("sans", "", styHeader.size, page)
