@@ -47,6 +47,7 @@ func (s section) write(c *composer) { s.fn(c) }
 // design writes nothing.
 var Sections = []Section{
 	section{"summary", (*composer).titlePage},
+	section{"contents", (*composer).contents},
 	section{"purpose", (*composer).purpose},
 	section{"inputs", (*composer).inputs},
 	section{"assumptions", (*composer).assumptions},
@@ -111,6 +112,7 @@ func compose(j *analysis.Study) (*doc.Document, *composer) {
 		c.starts = append(c.starts, len(c.blocks))
 		sec.write(c)
 	}
+	fillContents(c.blocks)
 	var names []string
 	for _, co := range s.Design.Coils {
 		names = append(names, co.Name)
@@ -150,6 +152,7 @@ func (c *composer) titlePage() {
 		field("Document", m.DocumentID), field("Revision", m.Revision),
 		field("Date", m.Date), field("Status", m.Status),
 		field("Prepared by", m.Author), field("Checked by", m.Checker),
+		field("Approved by", m.Approver),
 	}})
 	c.heading(1, "Results summary")
 	c.add(c.verdict())

@@ -21,7 +21,7 @@ type kv struct {
 
 // Keys of each block, in the order the reference documents them.
 var (
-	memoKeys = []string{"title", "client", "project", "document-id", "revision", "date", "author", "checker", "status", "history"}
+	memoKeys = []string{"title", "client", "project", "document-id", "revision", "date", "author", "checker", "approver", "prepared-date", "checked-date", "approved-date", "previous", "status", "history"}
 	coilKeys = []string{"name", "form", "mean-diameter", "inner-diameter", "outer-diameter", "length",
 		"radial-build", "width", "height", "turns", "wire", "wire-outer-diameter", "conductor",
 		"insulation-class", "current", "voltage", "duty", "spacing", "sense", "axis", "centre",
@@ -205,6 +205,31 @@ func (p *parser) memoBlock(b *rawBlock) {
 			m.Author = e.value
 		case "checker":
 			m.Checker = e.value
+		case "approver":
+			m.Approver = e.value
+		case "prepared-date", "checked-date", "approved-date":
+			t, err := parseDate(e.value)
+			if err != nil {
+				p.errf(e.line, "%s: %q is not an ISO 8601 date; write YYYY-MM-DD, e.g. 2025-03-14", e.key, e.value)
+				si = ""
+				break
+			}
+			si = t.Format("2006-01-02")
+			switch e.key {
+			case "prepared-date":
+				m.PreparedDate = si
+			case "checked-date":
+				m.CheckedDate = si
+			default:
+				m.ApprovedDate = si
+			}
+		case "previous":
+			if strings.TrimSpace(e.value) == "" || strings.TrimSpace(e.value) == "git:" {
+				p.errf(e.line, "previous: name the previous revision's spec, a path relative to this spec or git:REV")
+				si = ""
+				break
+			}
+			m.Previous, m.PreviousLine = strings.TrimSpace(e.value), e.line
 		case "status":
 			m.Status = e.value
 		case "history":

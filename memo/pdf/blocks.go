@@ -100,6 +100,8 @@ func (r *renderer) heading(h doc.Heading, next doc.Block) {
 }
 
 func (r *renderer) headingBookmark(h doc.Heading, hl headingLayout, number int) {
+	r.headPages = append(r.headPages, r.pdf.PageNo())
+	r.place("heading", r.y, r.y+hl.h)
 	if h.Level <= 1 {
 		r.h1 = number
 		r.bookmark(hl.number+" "+h.Text, 0)
@@ -644,6 +646,7 @@ func (r *renderer) table(t doc.Table) {
 			r.rule(r.x, y, r.x+r.w, 0.3, colRule)
 		}
 		r.tableRow(tl, cells, y, h)
+		r.place("table", y, y+h)
 		y += h
 		onPage++
 	}

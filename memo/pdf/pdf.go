@@ -51,6 +51,7 @@ func render(d *doc.Document, o options) (out []byte, err error) {
 		return nil, err
 	}
 	r := newRenderer(d, o, dry.pdf.PageNo(), false)
+	r.tocPages = dry.headPages
 	if err := r.run(); err != nil {
 		return nil, err
 	}
@@ -86,6 +87,54 @@ type renderer struct {
 	depth        int     // list nesting
 	marker       *marker // list marker waiting for its item's first line
 	outline      int     // level of the last bookmark, -1 before the first
+
+	headPages []int // the page of every heading, in order
+	tocPages  []int // headPages of the layout pass, for the contents
+	boxes     []Box // placement records
+}
+
+// Box is one placement record of the layout: a block's kind and the
+// vertical extent it took on a page, points from the top edge.
+type Box struct {
+	Page        int
+	Kind        string // "heading", "text", "table", "figure", …
+	Top, Bottom float64
+}
+
+// Layout is what the layout engine placed where, for tests of the page
+// rules: no measurement of pixels, only the engine's own records.
+type Layout struct {
+	Pages int
+	// BodyTop and BodyBottom bound the text area of every page.
+	BodyTop, BodyBottom float64
+	Boxes               []Box
+	// Broken lists the pages ended by an explicit page break.
+	Broken []int
+}
+
+// Measure lays d out without drawing and returns the placements.
+func Measure(d *doc.Document) (l *Layout, err error) {
+	defer func() {
+		if p := recover(); p != nil {
+			l, err = nil, fmt.Errorf("pdf: layout: %v", p)
+		}
+	}()
+	r := newRenderer(d, options{}, 0, true)
+	if err := r.run(); err != nil {
+		return nil, err
+	}
+	l = &Layout{Pages: r.pdf.PageNo(), BodyTop: bodyTop, BodyBottom: bodyBottom, Boxes: r.boxes}
+	for _, b := range r.boxes {
+		if b.Kind == "break" {
+			l.Broken = append(l.Broken, b.Page)
+		}
+	}
+	return l, nil
+}
+
+// place records that kind took top..bottom on the current page.
+func (r *renderer) place(kind string, top, bottom float64) {
+	r.boxes = append(r.boxes, Box{Page: r.pdf.PageNo(), Kind: kind, Top: top, Bottom: bottom})
 }
 
 type marker struct {
@@ -162,6 +211,7 @@ func (r *renderer) need(gap, h float64) {
 	r.y += r.space
 	r.space = 0
 	r.fresh = false
+	r.place("block", r.y, r.y+h)
 }
 
 // room is the height left on the page after the pending space.
@@ -224,8 +274,13 @@ func (r *renderer) block(b doc.Block, next doc.Block) {
 		r.equation(*b)
 	case doc.PageBreak, *doc.PageBreak:
 		if !r.fresh {
+			r.place("break", r.y, r.y)
 			r.newPage()
 		}
+	case doc.Contents:
+		r.contents(b)
+	case *doc.Contents:
+		r.contents(*b)
 	case nil:
 	default:
 		r.pdf.SetError(fmt.Errorf("pdf: unknown block type %T", b))
