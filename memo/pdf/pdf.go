@@ -91,13 +91,17 @@ type renderer struct {
 	headPages []int // the page of every heading, in order
 	tocPages  []int // headPages of the layout pass, for the contents
 	boxes     []Box // placement records
+	kind      string
+	index     int         // the top-level block being set
+	rest      []doc.Block // the top-level blocks after it
 }
 
 // Box is one placement record of the layout: a block's kind and the
 // vertical extent it took on a page, points from the top edge.
 type Box struct {
 	Page        int
-	Kind        string // "heading", "text", "table", "figure", …
+	Block       int    // index of the top-level block it belongs to
+	Kind        string // "heading", "paragraph", "table", "figure", …
 	Top, Bottom float64
 }
 
@@ -134,7 +138,7 @@ func Measure(d *doc.Document) (l *Layout, err error) {
 
 // place records that kind took top..bottom on the current page.
 func (r *renderer) place(kind string, top, bottom float64) {
-	r.boxes = append(r.boxes, Box{Page: r.pdf.PageNo(), Kind: kind, Top: top, Bottom: bottom})
+	r.boxes = append(r.boxes, Box{Page: r.pdf.PageNo(), Block: r.index, Kind: kind, Top: top, Bottom: bottom})
 }
 
 type marker struct {
@@ -211,7 +215,7 @@ func (r *renderer) need(gap, h float64) {
 	r.y += r.space
 	r.space = 0
 	r.fresh = false
-	r.place("block", r.y, r.y+h)
+	r.place(r.kind, r.y, r.y+h)
 }
 
 // room is the height left on the page after the pending space.
@@ -226,12 +230,32 @@ func (r *renderer) after(gap float64) { r.space = gap }
 
 func (r *renderer) blockList(bs []doc.Block) {
 	for i, b := range bs {
+		r.index = i
+		r.kind = kindOf(b)
+		r.rest = bs[i+1:]
 		var next doc.Block
 		if i+1 < len(bs) {
 			next = bs[i+1]
 		}
 		r.block(b, next)
 	}
+}
+
+// kindOf names a block's kind in the placement records.
+func kindOf(b doc.Block) string {
+	switch b.(type) {
+	case doc.Heading, *doc.Heading:
+		return "heading"
+	case doc.Paragraph, *doc.Paragraph:
+		return "paragraph"
+	case doc.Figure, *doc.Figure:
+		return "figure"
+	case doc.Table, *doc.Table:
+		return "table"
+	case doc.Equation, *doc.Equation:
+		return "equation"
+	}
+	return "block"
 }
 
 func (r *renderer) block(b doc.Block, next doc.Block) {
