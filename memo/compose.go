@@ -10,6 +10,7 @@ import (
 
 	"coilmemo/calc"
 	"coilmemo/doc"
+	"coilmemo/format"
 	"coilmemo/templates"
 )
 
@@ -48,6 +49,7 @@ func (s section) write(c *composer) { s.fn(c) }
 var Sections = []Section{
 	section{"summary", (*composer).titlePage},
 	section{"contents", (*composer).contents},
+	section{"changes", (*composer).changes},
 	section{"purpose", (*composer).purpose},
 	section{"inputs", (*composer).inputs},
 	section{"assumptions", (*composer).assumptions},
@@ -441,23 +443,7 @@ func testedOn(st *analysis.Study, l analysis.LimitResult, q spec.LimitQuantity) 
 }
 
 // displayUnit maps a LimitQuantities unit to the unit Eng prints.
-func displayUnit(u string) string {
-	switch u {
-	case "A m2":
-		return "A·m²"
-	case "degC":
-		return "°C"
-	case "ohm":
-		return "Ω"
-	case "A/m2":
-		return "A/m²"
-	case "N m":
-		return "N·m"
-	case "T/m":
-		return "T/m"
-	}
-	return u
-}
+func displayUnit(u string) string { return format.Unit(u) }
 
 func (c *composer) purpose() {
 	c.heading(1, "Purpose and description")

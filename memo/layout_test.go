@@ -8,6 +8,7 @@ import (
 	"strings"
 	"testing"
 
+	"coilmemo/analysis"
 	"coilmemo/memo/pdf"
 )
 
@@ -26,7 +27,10 @@ func TestExamplePages(t *testing.T) {
 			if err != nil {
 				t.Fatal(err)
 			}
-			j, diags := evaluate(f, src)
+			j, diags := analysis.Run(f, src, analysis.Options{ReadPrevious: func(ref string) (string, []byte, error) {
+				b, err := os.ReadFile(filepath.Join(filepath.Dir(f), ref))
+				return ref, b, err
+			}})
 			if len(diags) > 0 {
 				t.Fatal(diags)
 			}
