@@ -906,7 +906,7 @@ func limitValueText(v float64, unit string) string {
 	if unit == "degC" {
 		return format.Sig(format.Celsius(v), 4) + " °C"
 	}
-	return format.Eng(v, format.DisplayUnit(unit), 3)
+	return format.Eng(v, format.Unit(unit), 3)
 }
 
 // limitText is a limit as a size table names it: "moment >= 0.2 A m2".

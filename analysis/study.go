@@ -33,6 +33,10 @@ type Options struct {
 	// read by the command line; zero means none was given, and the
 	// spec's own date (or none) is used.
 	Date time.Time
+	// ReadPrevious, if set, reads the previous revision's spec that the
+	// memo block's `previous` names (see ComparePrevious); the command
+	// line supplies it, as the analysis does no I/O of its own.
+	ReadPrevious func(ref string) (name string, src []byte, err error)
 }
 
 // Study is one evaluated spec: everything the memo and the JSON report
@@ -63,6 +67,9 @@ type Study struct {
 	// DateSource says where Created came from: "SOURCE_DATE_EPOCH", "memo
 	// date" or "" (not dated).
 	DateSource string
+	// Changes is what moved since the previous revision the memo block
+	// names; nil without one.
+	Changes *Changes
 }
 
 // Run parses and analyses a spec. Diagnostics are returned (and nothing
@@ -83,6 +90,9 @@ func Run(file string, src []byte, o Options) (*Study, spec.Diagnostics) {
 	st := Analyse(s, o)
 	st.Sizing = sz
 	st.SHA256 = hex.EncodeToString(sum[:])
+	if diags := ComparePrevious(st, o); len(diags) > 0 {
+		return nil, diags
+	}
 	return st, nil
 }
 

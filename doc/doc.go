@@ -5,6 +5,7 @@
 package doc
 
 import (
+	"fmt"
 	"time"
 
 	"gonum.org/v1/plot/vg"
@@ -155,6 +156,46 @@ type Code struct {
 // PageBreak starts a new page.
 type PageBreak struct{}
 
+// Contents is the table of contents: a title and one entry per heading of
+// the document, in order. Backends that paginate add each heading's page
+// and make the same entries the document's bookmarks, so the two agree.
+type Contents struct {
+	Title   string
+	Entries []ContentsEntry
+}
+
+// ContentsEntry is one heading listed in the contents.
+type ContentsEntry struct {
+	Level  int
+	Number string // the section number of a level-1 heading, "" below
+	Text   string
+}
+
+// ContentsOf lists the headings among blocks in order, numbering the
+// level-1 headings 1, 2, … as the backends do.
+func ContentsOf(blocks []Block) []ContentsEntry {
+	var out []ContentsEntry
+	n := 0
+	for _, b := range blocks {
+		h, ok := b.(Heading)
+		if !ok {
+			if p, isPtr := b.(*Heading); isPtr && p != nil {
+				h, ok = *p, true
+			}
+		}
+		if !ok {
+			continue
+		}
+		e := ContentsEntry{Level: max(h.Level, 1), Text: h.Text}
+		if h.Level <= 1 {
+			n++
+			e.Number = fmt.Sprint(n)
+		}
+		out = append(out, e)
+	}
+	return out
+}
+
 func (Heading) isBlock()    {}
 func (Paragraph) isBlock()  {}
 func (List) isBlock()       {}
@@ -165,6 +206,7 @@ func (TitleBlock) isBlock() {}
 func (Code) isBlock()       {}
 func (Equation) isBlock()   {}
 func (PageBreak) isBlock()  {}
+func (Contents) isBlock()   {}
 
 // Text is a convenience for a one-span plain paragraph.
 func Text(s string) Paragraph { return Paragraph{Spans: []Span{{Text: s}}} }

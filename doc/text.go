@@ -95,6 +95,16 @@ func writeBlock(b *bufio.Writer, blk Block, indent string, section *int) {
 		writeEquation(b, v, indent)
 	case PageBreak:
 		b.WriteString("---- page break ----\n")
+	case Contents:
+		fmt.Fprintf(b, "== %s ==\n", v.Title)
+		for _, e := range v.Entries {
+			pad := strings.Repeat("  ", max(e.Level-1, 0))
+			if e.Number != "" {
+				fmt.Fprintf(b, "%s%s %s\n", pad, e.Number, e.Text)
+			} else {
+				fmt.Fprintf(b, "%s%s\n", pad, e.Text)
+			}
+		}
 	default:
 		fmt.Fprintf(b, "%s<unknown block %T>\n", indent, blk)
 	}

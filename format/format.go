@@ -203,9 +203,56 @@ func superscript(s string) string {
 	return b.String()
 }
 
-// DisplayUnit maps a unit as the spec's limit quantities write it ("A m2",
-// "degC", "ohm") to the symbol Eng prints ("A·m²", "°C", "Ω").
-func DisplayUnit(u string) string {
+// SignedPercent formats a relative change as a signed percentage to two
+// significant figures: +6.3 %, −0.52 %; a change smaller than 0.001 % in
+// size is "< 0.001 %" (never "−0.0 %" or a power of ten), and none is
+// "0 %".
+func SignedPercent(v float64) string {
+	switch {
+	case math.IsNaN(v):
+		return "n/a"
+	case v == 0:
+		return "0 %"
+	}
+	p := 100 * v
+	if math.Abs(p) < 1e-3 {
+		return "< 0.001 %"
+	}
+	s := Sig(p, 2)
+	if p > 0 {
+		s = "+" + s
+	}
+	return s + " %"
+}
+
+// Change writes a value's move from old to new, both SI in unit, to four
+// significant figures, with the difference: relative for most quantities
+// ("+6.3 %"), in kelvin for a temperature (unit "°C", values in kelvin:
+// "+3.2 K"), and absolute where the old value is zero.
+func Change(old, new float64, unit string) (from, to, delta string) {
+	if unit == "°C" || unit == "degC" {
+		from, to = Eng(Celsius(old), "°C", 4), Eng(Celsius(new), "°C", 4)
+		return from, to, Signed(new-old, "K", 2)
+	}
+	from, to = Eng(old, unit, 4), Eng(new, unit, 4)
+	if old == 0 || math.IsNaN(old) || math.IsNaN(new) {
+		return from, to, Signed(new-old, unit, 3)
+	}
+	return from, to, SignedPercent((new - old) / math.Abs(old))
+}
+
+// Signed is Eng with an explicit sign: "+3.2 K", "−12 mA".
+func Signed(v float64, unit string, sig int) string {
+	s := Eng(v, unit, sig)
+	if v > 0 && !math.IsInf(v, 0) {
+		return "+" + s
+	}
+	return s
+}
+
+// Unit writes a unit as spec.LimitQuantities names it ("A m2", "degC",
+// "ohm") the way the memo prints it ("A·m²", "°C", "Ω").
+func Unit(u string) string {
 	switch u {
 	case "A m2":
 		return "A·m²"

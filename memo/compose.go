@@ -48,6 +48,8 @@ func (s section) write(c *composer) { s.fn(c) }
 // design writes nothing.
 var Sections = []Section{
 	section{"summary", (*composer).titlePage},
+	section{"contents", (*composer).contents},
+	section{"changes", (*composer).changes},
 	section{"purpose", (*composer).purpose},
 	section{"inputs", (*composer).inputs},
 	section{"assumptions", (*composer).assumptions},
@@ -113,6 +115,7 @@ func compose(j *analysis.Study) (*doc.Document, *composer) {
 		c.starts = append(c.starts, len(c.blocks))
 		sec.write(c)
 	}
+	fillContents(c.blocks)
 	var names []string
 	for _, co := range s.Design.Coils {
 		names = append(names, co.Name)
@@ -152,6 +155,7 @@ func (c *composer) titlePage() {
 		field("Document", m.DocumentID), field("Revision", m.Revision),
 		field("Date", m.Date), field("Status", m.Status),
 		field("Prepared by", m.Author), field("Checked by", m.Checker),
+		field("Approved by", m.Approver),
 	}})
 	c.heading(1, "Results summary")
 	c.add(c.verdict())
@@ -448,7 +452,7 @@ func testedOn(st *analysis.Study, l analysis.LimitResult, q spec.LimitQuantity) 
 }
 
 // displayUnit maps a LimitQuantities unit to the unit Eng prints.
-func displayUnit(u string) string { return format.DisplayUnit(u) }
+func displayUnit(u string) string { return format.Unit(u) }
 
 func (c *composer) purpose() {
 	c.heading(1, "Purpose and description")

@@ -21,7 +21,7 @@ type kv struct {
 
 // Keys of each block, in the order the reference documents them.
 var (
-	memoKeys = []string{"title", "client", "project", "document-id", "revision", "date", "author", "checker", "status", "history"}
+	memoKeys = []string{"title", "client", "project", "document-id", "revision", "date", "author", "checker", "approver", "prepared-date", "checked-date", "approved-date", "previous", "status", "history"}
 	coilKeys = []string{"name", "form", "mean-diameter", "inner-diameter", "outer-diameter", "length",
 		"radial-build", "width", "height", "turns", "wire", "wire-outer-diameter", "conductor",
 		"insulation-class", "current", "voltage", "duty", "spacing", "sense", "axis", "centre",
@@ -60,8 +60,10 @@ func (p *parser) design() {
 	// state the keys it leaves free.
 	for _, b := range p.blocks {
 		if b.kind == blockSize && p.size == nil {
+			e0 := len(p.spec.Entries)
 			p.size = p.sizeBlock(b)
 			p.spec.Size = p.size
+			p.spec.Entries = p.spec.Entries[:e0] // its entries are taken in source order below
 		}
 	}
 	var sweepBlock *rawBlock
@@ -94,7 +96,11 @@ func (p *parser) design() {
 		case blockTolerances:
 			defer func() { p.tolerancesBlock(b, coils) }() // once every coil and the conditions are read
 		case blockSize:
-			// read above
+			// read above; read again here only for its entries, in source
+			// order (its problems were reported the first time)
+			n := len(p.diags)
+			p.sizeBlock(b)
+			p.diags = p.diags[:n]
 		}
 	}
 	if !seenConditions {
@@ -219,6 +225,31 @@ func (p *parser) memoBlock(b *rawBlock) {
 			m.Author = e.value
 		case "checker":
 			m.Checker = e.value
+		case "approver":
+			m.Approver = e.value
+		case "prepared-date", "checked-date", "approved-date":
+			t, err := parseDate(e.value)
+			if err != nil {
+				p.errf(e.line, "%s: %q is not an ISO 8601 date; write YYYY-MM-DD, e.g. 2025-03-14", e.key, e.value)
+				si = ""
+				break
+			}
+			si = t.Format("2006-01-02")
+			switch e.key {
+			case "prepared-date":
+				m.PreparedDate = si
+			case "checked-date":
+				m.CheckedDate = si
+			default:
+				m.ApprovedDate = si
+			}
+		case "previous":
+			if strings.TrimSpace(e.value) == "" || strings.TrimSpace(e.value) == "git:" {
+				p.errf(e.line, "previous: name the previous revision's spec, a path relative to this spec or git:REV")
+				si = ""
+				break
+			}
+			m.Previous, m.PreviousLine = strings.TrimSpace(e.value), e.line
 		case "status":
 			m.Status = e.value
 		case "history":

@@ -73,6 +73,17 @@ type Entry struct {
 type Memo struct {
 	Title, Client, Project, DocumentID, Revision, Date, Author, Checker, Status string
 
+	// Approver signs the memo off; the dates per role are ISO 8601 as
+	// YYYY-MM-DD ("" when not given).
+	Approver                                string
+	PreparedDate, CheckedDate, ApprovedDate string
+
+	// Previous names the previous revision's spec: a path relative to
+	// this spec, or "git:REV" for this spec's file at that git revision.
+	// PreviousLine is its source line.
+	Previous     string
+	PreviousLine int
+
 	DateValue time.Time // Date parsed (UTC midnight for a plain date); zero when none
 
 	// History is the revision history, one `history` line each, in the

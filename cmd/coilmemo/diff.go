@@ -1,29 +1,36 @@
 package main
 
 import (
+	"bytes"
 	"encoding/json"
 	"errors"
 	"fmt"
 	"io"
-	"math"
-	"sort"
+	"os/exec"
+	"path/filepath"
 	"strings"
 
 	"coilmemo/analysis"
-	"coilmemo/analysis/report"
-	"coilmemo/spec"
+	"coilmemo/format"
 )
 
-const diffHelp = `Usage: coilmemo diff OLD NEW
+const diffHelp = `Usage: coilmemo diff OLD NEW [--json]
 
-Compare two revisions of a spec: the inputs that changed (as written) and
-the results that changed (from the same figures as calc --json, with the
-relative change). Exit status 0 whether or not they differ; 2 when either
-spec has problems.
+Compare two revisions of a spec, coil by coil (the design as a whole
+first): the headline results that moved, the requirements whose value or
+verdict moved, then the inputs that changed. Values in engineering units;
+temperatures change in kelvin, other results by their relative change.
+The memo's "Changes since revision X" section lists the same.
+
+  --json   the same changes as JSON, values in SI
+
+Exit status 0 when no requirement went from PASS to FAIL, 1 when one did
+(for CI), 2 when either spec has problems.
 `
 
 func diffCmd(args []string, stdout, stderr io.Writer) error {
 	fs := newFlagSet("diff", diffHelp, stdout)
+	asJSON := fs.Bool("json", false, "JSON output")
 	pos, err := parseInterleaved(fs, args)
 	if err != nil {
 		return flagErr(err, diffHelp, stdout)
@@ -42,173 +49,216 @@ func diffCmd(args []string, stdout, stderr io.Writer) error {
 	if errA != nil || errB != nil {
 		return &exitError{code: 2}
 	}
-	writeDiff(stdout, pos[0], pos[1], a, b)
+	ch := analysis.Compare(a, b)
+	if *asJSON {
+		if err := writeDiffJSON(stdout, pos[0], pos[1], ch); err != nil {
+			return err
+		}
+	} else {
+		writeDiff(stdout, pos[0], pos[1], ch)
+	}
+	if ch.Regressed {
+		return &exitError{1, "coilmemo diff: a requirement met in " + pos[0] + " is not met in " + pos[1]}
+	}
 	return nil
 }
 
-// entryKey identifies an input across revisions.
-func entryKey(e spec.Entry) string {
-	k := e.Block
-	if e.Coil != "" {
-		k += " " + e.Coil
+// writeDiff prints the changes for a reader.
+func writeDiff(w io.Writer, oldName, newName string, ch analysis.Changes) {
+	fmt.Fprintf(w, "--- %s%s\n+++ %s%s\n", oldName, revNote(ch.From), newName, revNote(ch.To))
+	if len(ch.Groups) == 0 {
+		fmt.Fprintln(w, "\nno change")
+		return
 	}
-	return k + ": " + e.Key
-}
-
-func writeDiff(w io.Writer, oldName, newName string, a, b *analysis.Study) {
-	fmt.Fprintf(w, "--- %s\n+++ %s\n", oldName, newName)
-	show := func(e spec.Entry) string {
-		if e.Default {
-			return "(default " + e.SI + ")"
+	for _, g := range ch.Groups {
+		if g.Coil == "" {
+			fmt.Fprintln(w, "\nDesign as a whole")
+		} else {
+			fmt.Fprintf(w, "\nCoil %q\n", g.Coil)
 		}
-		return e.Raw
-	}
-	olds := map[string]spec.Entry{}
-	var order []string
-	for _, e := range a.Spec.Entries {
-		k := entryKey(e)
-		if _, dup := olds[k]; !dup {
-			order = append(order, k)
+		for _, r := range g.Results {
+			from, to, d := format.Change(r.Old, r.New, r.Unit)
+			fmt.Fprintf(w, "  %s: %s → %s  (%s)\n", r.Quantity, from, to, d)
 		}
-		olds[k] = e
-	}
-	news := map[string]spec.Entry{}
-	for _, e := range b.Spec.Entries {
-		k := entryKey(e)
-		if _, ok := olds[k]; !ok {
-			if _, dup := news[k]; !dup {
-				order = append(order, k)
+		for _, l := range g.Limits {
+			unit := format.Unit(l.Unit)
+			req := "requirement " + l.Stated() + " " + format.Eng(display(l.Required, unit), unit, 3)
+			if !l.InOld {
+				_, to, _ := format.Change(l.New, l.New, unit)
+				fmt.Fprintf(w, "  %s: (new) → %s %s\n", req, to, verdict(l.NewPass))
+				continue
 			}
-		}
-		news[k] = e
-	}
-	fmt.Fprintln(w, "\nInputs")
-	n := 0
-	for _, k := range order {
-		o, inOld := olds[k]
-		nw, inNew := news[k]
-		switch {
-		case inOld && inNew && show(o) != show(nw):
-			fmt.Fprintf(w, "  %s: %s → %s\n", k, show(o), show(nw))
-		case inOld && !inNew:
-			fmt.Fprintf(w, "  %s: %s → (removed)\n", k, show(o))
-		case !inOld && inNew:
-			fmt.Fprintf(w, "  %s: (new) → %s\n", k, show(nw))
-		default:
-			continue
-		}
-		n++
-	}
-	if n == 0 {
-		fmt.Fprintln(w, "  no change")
-	}
-	fa, fb := flatten(report.Build(a)), flatten(report.Build(b))
-	keys := map[string]bool{}
-	for k := range fa {
-		keys[k] = true
-	}
-	for k := range fb {
-		keys[k] = true
-	}
-	var sorted []string
-	for k := range keys {
-		sorted = append(sorted, k)
-	}
-	sort.Strings(sorted)
-	fmt.Fprintln(w, "\nResults")
-	n = 0
-	for _, k := range sorted {
-		// Checks are reported by their outcome only; their figures
-		// repeat the results above.
-		if k == "spec" || k == "spec_sha256" || k == "tool" ||
-			strings.HasPrefix(k, "checks[") && !strings.HasSuffix(k, ".pass") {
-			continue
-		}
-		va, okA := fa[k]
-		vb, okB := fb[k]
-		if okA && okB && same(va, vb) {
-			continue
-		}
-		line := fmt.Sprintf("  %s: %s → %s", k, valueText(va, okA), valueText(vb, okB))
-		if x, ok := va.(float64); ok && okB {
-			if y, ok := vb.(float64); ok && x != 0 {
-				line += fmt.Sprintf("  (%+.3g %%)", 100*(y-x)/math.Abs(x))
+			from, to, d := format.Change(l.Old, l.New, unit)
+			note := d
+			if l.OldPass != l.NewPass {
+				note = verdict(l.OldPass) + " → " + verdict(l.NewPass)
 			}
+			fmt.Fprintf(w, "  %s: %s %s → %s %s  (%s)\n", req, from, verdict(l.OldPass), to, verdict(l.NewPass), note)
 		}
-		fmt.Fprintln(w, strings.Replace(line, "+-", "−", 1))
-		n++
-	}
-	if n == 0 {
-		fmt.Fprintln(w, "  no change")
+		for _, in := range g.Inputs {
+			old, nw := in.Old, in.New
+			if old == "" {
+				old = "(absent)"
+			}
+			if nw == "" {
+				nw = "(absent)"
+			}
+			fmt.Fprintf(w, "  input %s: %s: %s → %s\n", in.Block, in.Key, old, nw)
+		}
 	}
 }
 
-// same reports equal values, taking numbers that differ by rounding noise
-// (1 part in 10⁹) as equal.
-func same(a, b any) bool {
-	x, okX := a.(float64)
-	y, okY := b.(float64)
-	if okX && okY {
-		return x == y || math.Abs(x-y) <= 1e-9*math.Max(math.Abs(x), math.Abs(y))
+func revNote(rev string) string {
+	if rev == "" {
+		return ""
 	}
-	return fmt.Sprint(a) == fmt.Sprint(b)
+	return "  (revision " + rev + ")"
 }
 
-func valueText(v any, ok bool) string {
-	if !ok {
-		return "(absent)"
+func verdict(pass bool) string {
+	if pass {
+		return "PASS"
 	}
-	if v == nil {
-		return "null"
-	}
-	if f, isNum := v.(float64); isNum {
-		return fmt.Sprintf("%.6g", f)
-	}
-	return fmt.Sprint(v)
+	return "FAIL"
 }
 
-// flatten turns the JSON report into path → scalar, naming array elements
-// by their "name" (or "quantity") field where they have one, so that the
-// same coil or limit is compared across revisions.
-func flatten(r report.Report) map[string]any {
-	b, _ := json.Marshal(r)
-	var v any
-	json.Unmarshal(b, &v)
-	out := map[string]any{}
-	var walk func(prefix string, v any)
-	walk = func(prefix string, v any) {
-		switch t := v.(type) {
-		case map[string]any:
-			for k, x := range t {
-				p := k
-				if prefix != "" {
-					p = prefix + "." + k
+func display(v float64, unit string) float64 {
+	if unit == "°C" {
+		return format.Celsius(v)
+	}
+	return v
+}
+
+// diffJSON is `diff --json`: the changes in SI, temperatures in kelvin.
+type diffJSON struct {
+	Old       string      `json:"old"`
+	New       string      `json:"new"`
+	From      string      `json:"from_revision"`
+	To        string      `json:"to_revision"`
+	Regressed bool        `json:"regressed"`
+	Groups    []groupJSON `json:"groups"`
+}
+
+type groupJSON struct {
+	Coil    string       `json:"coil"`
+	Results []resultJSON `json:"results"`
+	Limits  []limitJSON  `json:"limits"`
+	Inputs  []inputJSON  `json:"inputs"`
+}
+
+type resultJSON struct {
+	Key      string   `json:"key"`
+	Quantity string   `json:"quantity"`
+	Unit     string   `json:"unit"`
+	Old      float64  `json:"old"`
+	New      float64  `json:"new"`
+	Delta    float64  `json:"delta"`
+	Relative *float64 `json:"relative"`
+}
+
+type limitJSON struct {
+	Requirement string   `json:"requirement"`
+	Required    float64  `json:"required"`
+	Old         *float64 `json:"old"`
+	New         float64  `json:"new"`
+	OldPass     *bool    `json:"old_pass"`
+	NewPass     bool     `json:"new_pass"`
+}
+
+type inputJSON struct {
+	Block string `json:"block"`
+	Key   string `json:"key"`
+	Old   string `json:"old"`
+	New   string `json:"new"`
+	OldSI string `json:"old_si"`
+	NewSI string `json:"new_si"`
+}
+
+func writeDiffJSON(w io.Writer, oldName, newName string, ch analysis.Changes) error {
+	out := diffJSON{Old: oldName, New: newName, From: ch.From, To: ch.To, Regressed: ch.Regressed, Groups: []groupJSON{}}
+	finite := func(v float64) float64 {
+		if v != v { // NaN has no JSON form
+			return 0
+		}
+		return v
+	}
+	for _, g := range ch.Groups {
+		gj := groupJSON{Coil: g.Coil, Results: []resultJSON{}, Limits: []limitJSON{}, Inputs: []inputJSON{}}
+		for _, r := range g.Results {
+			unit := r.Unit
+			if unit == "°C" {
+				unit = "K"
+			}
+			rj := resultJSON{Key: r.Key, Quantity: r.Quantity, Unit: unit, Old: finite(r.Old), New: finite(r.New), Delta: finite(r.Delta())}
+			if rel := r.Relative(); rel == rel && r.Unit != "°C" {
+				rj.Relative = &rel
+			}
+			gj.Results = append(gj.Results, rj)
+		}
+		for _, l := range g.Limits {
+			lj := limitJSON{Requirement: l.Requirement, Required: finite(l.Required), New: finite(l.New), NewPass: l.NewPass}
+			if l.InOld {
+				old, pass := finite(l.Old), l.OldPass
+				lj.Old, lj.OldPass = &old, &pass
+			}
+			gj.Limits = append(gj.Limits, lj)
+		}
+		for _, in := range g.Inputs {
+			gj.Inputs = append(gj.Inputs, inputJSON{Block: in.Block, Key: in.Key, Old: in.Old, New: in.New, OldSI: in.OldSI, NewSI: in.NewSI})
+		}
+		out.Groups = append(out.Groups, gj)
+	}
+	b, err := json.MarshalIndent(out, "", "  ")
+	if err != nil {
+		return err
+	}
+	_, err = w.Write(append(b, '\n'))
+	return err
+}
+
+// previousReader reads the previous revision a spec at path names in its
+// memo block: a path relative to the spec's folder, or git:REV for the
+// spec's own file at git revision REV (git show REV:./file, run in the
+// spec's folder).
+func previousReader(path string) func(ref string) (string, []byte, error) {
+	return func(ref string) (string, []byte, error) {
+		dir, file := filepath.Split(path)
+		if dir == "" {
+			dir = "."
+		}
+		if rev, ok := strings.CutPrefix(ref, "git:"); ok {
+			if strings.HasPrefix(rev, "-") {
+				return "", nil, fmt.Errorf("git revision %q is not a revision name", rev)
+			}
+			inside := exec.Command("git", "-C", dir, "rev-parse", "--is-inside-work-tree")
+			if outp, err := inside.Output(); err != nil || strings.TrimSpace(string(outp)) != "true" {
+				return "", nil, fmt.Errorf("git:%s: %s is not in a git work tree", rev, path)
+			}
+			var stderr bytes.Buffer
+			show := exec.Command("git", "-C", dir, "show", rev+":./"+file)
+			show.Stderr = &stderr
+			src, err := show.Output()
+			if err != nil {
+				msg := strings.TrimSpace(strings.SplitN(stderr.String(), "\n", 2)[0])
+				if msg == "" {
+					msg = err.Error()
 				}
-				walk(p, x)
+				return "", nil, fmt.Errorf("git show %s:%s: %s", rev, file, msg)
 			}
-		case []any:
-			for i, x := range t {
-				label := fmt.Sprint(i)
-				if m, ok := x.(map[string]any); ok {
-					for _, f := range []string{"name", "quantity"} {
-						if s, ok := m[f].(string); ok {
-							label = s
-							if c, ok := m["coil"].(string); ok && c != "" {
-								label = c + ": " + s
-							}
-							if rel, ok := m["relation"].(string); ok {
-								label += " " + rel
-							}
-							break
-						}
-					}
-				}
-				walk(prefix+"["+label+"]", x)
-			}
-		default:
-			out[prefix] = t
+			return file + "@" + rev, src, nil
 		}
+		p := ref
+		if !filepath.IsAbs(p) {
+			p = filepath.Join(dir, ref)
+		}
+		src, err := readSpec(p)
+		if err != nil {
+			var ee *exitError
+			if errors.As(err, &ee) {
+				return "", nil, errors.New(strings.TrimPrefix(ee.msg, "coilmemo: "))
+			}
+			return "", nil, err
+		}
+		return filepath.Base(p), src, nil
 	}
-	walk("", v)
-	return out
 }

@@ -239,7 +239,7 @@ func load(path string, stderr io.Writer) (*analysis.Study, error) {
 	if err != nil {
 		return nil, &exitError{2, err.Error()}
 	}
-	job, diags := analysis.Run(path, src, analysis.Options{Name: filepath.Base(path), Date: date})
+	job, diags := analysis.Run(path, src, analysis.Options{Name: filepath.Base(path), Date: date, ReadPrevious: previousReader(path)})
 	if len(diags) > 0 {
 		for _, d := range diags {
 			fmt.Fprintln(stderr, d.Error())

@@ -160,35 +160,6 @@ func TestNew(t *testing.T) {
 	}
 }
 
-// diff names the changed inputs and results, and only those.
-func TestDiff(t *testing.T) {
-	src, _ := os.ReadFile("../../examples/torque-coil.md")
-	changed := strings.Replace(string(src), "turns            = 200", "turns            = 240", 1)
-	if changed == string(src) {
-		t.Fatal("example changed: the turns line was not found")
-	}
-	path := filepath.Join(t.TempDir(), "new.md")
-	os.WriteFile(path, []byte(changed), 0o644)
-	var o, e bytes.Buffer
-	if err := run([]string{"diff", "../../examples/torque-coil.md", path}, &o, &e); err != nil {
-		t.Fatalf("%v\n%s", err, e.String())
-	}
-	out := o.String()
-	for _, want := range []string{"turns: 200 → 240", "coils[torque coil Z].wire_length_m", "(+20 %)"} {
-		if !strings.Contains(out, want) {
-			t.Errorf("diff lacks %q:\n%s", want, out)
-		}
-	}
-	if strings.Contains(out, "mean-diameter") || strings.Contains(out, "spec_sha256") {
-		t.Errorf("diff shows unchanged or irrelevant items:\n%s", out)
-	}
-	o.Reset()
-	run([]string{"diff", path, path}, &o, &e)
-	if strings.Count(o.String(), "no change") != 2 {
-		t.Errorf("diff of a spec with itself:\n%s", o.String())
-	}
-}
-
 // watch builds at once and stops when told.
 func TestWatchBuildsOnce(t *testing.T) {
 	dir := t.TempDir()

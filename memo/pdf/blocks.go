@@ -75,8 +75,15 @@ func (r *renderer) heading(h doc.Heading, next doc.Block) {
 		r.longHeading(h, hl, number)
 		return
 	}
-	// Keep the heading with the start of what follows it.
-	if !r.fresh && hl.h+hl.hs.after+r.minHeight(next) > r.room(hl.hs.before) {
+	// Keep the heading with the start of what follows it (with a lead-in
+	// and its figure both, when that is what follows), and never start
+	// one in the bottom 15 % of the text area.
+	keep := r.minHeight(next)
+	if r.depth == 0 && len(r.rest) > 0 {
+		keep = r.keepAfterHeading(next, r.rest[1:])
+	}
+	if !r.fresh && (hl.h+hl.hs.after+keep > r.room(hl.hs.before) ||
+		r.y+max(r.space, hl.hs.before) > bodyTop+headingFloor*(bodyBottom-bodyTop)) {
 		r.newPage()
 	}
 	r.need(hl.hs.before, hl.h)
@@ -100,6 +107,8 @@ func (r *renderer) heading(h doc.Heading, next doc.Block) {
 }
 
 func (r *renderer) headingBookmark(h doc.Heading, hl headingLayout, number int) {
+	r.headPages = append(r.headPages, r.pdf.PageNo())
+	r.place("heading", r.y, r.y+hl.h)
 	if h.Level <= 1 {
 		r.h1 = number
 		r.bookmark(hl.number+" "+h.Text, 0)
@@ -125,6 +134,29 @@ func (r *renderer) longHeading(h doc.Heading, hl headingLayout, number int) {
 	}
 	r.flowLines(hl.lines, hl.hs.st, 0, hl.hs.after)
 	r.x, r.w = ox, ow
+}
+
+// headingFloor is the fraction of the text area below which no heading
+// starts.
+const headingFloor = 0.85
+
+// leadInLines is the longest paragraph that counts as a figure's lead-in:
+// kept on the page of the figure it introduces.
+const leadInLines = 5
+
+// keepAfterHeading is the height that must follow a heading on its page:
+// the least of the next block, or, when that block is a figure's short
+// lead-in, the lead-in and the figure (shrunk as far as figure allows).
+func (r *renderer) keepAfterHeading(next doc.Block, after []doc.Block) float64 {
+	if p, ok := next.(doc.Paragraph); ok && len(after) > 0 {
+		if f, ok := after[0].(doc.Figure); ok {
+			n := len(layoutSpans(p.Spans, styBody, r.w, r.w))
+			if n <= leadInLines {
+				return float64(n)*leadBody + 6.5 + 8 + minFigureScale*r.layoutFigure(f).total
+			}
+		}
+	}
+	return r.minHeight(next)
 }
 
 // minHeight is the least of a block that must follow a heading on the
@@ -185,6 +217,17 @@ func (r *renderer) paragraph(p doc.Paragraph) {
 	after := 6.5
 	if r.depth > 0 {
 		after = 2.5
+	}
+	// A short paragraph right before a figure is its lead-in: the two
+	// share a page. If the figure, shrunk as far as figure allows, does
+	// not fit below the paragraph, both start the next page.
+	if r.depth == 0 && !r.fresh && len(r.rest) > 0 && len(lines) <= leadInLines {
+		if f, ok := r.rest[0].(doc.Figure); ok {
+			need := float64(len(lines))*leadBody + after + 8 + minFigureScale*r.layoutFigure(f).total
+			if need > r.room(0) {
+				r.newPage()
+			}
+		}
 	}
 	r.flowLines(lines, styBody, 0, after)
 }
@@ -617,6 +660,9 @@ func (r *renderer) table(t doc.Table) {
 	if len(tl.rowH) > 0 {
 		first += min(tl.rowH[0], 3*leadTable+2*cellPadY)
 	}
+	if len(tl.rowH) > 1 && tl.rowH[0]+tl.rowH[1] < (bodyBottom-bodyTop)/4 {
+		first += tl.rowH[1] // no table starts with a single row at a page foot
+	}
 	r.need(8, first)
 	y := r.y
 	for _, l := range tl.cap {
@@ -636,7 +682,11 @@ func (r *renderer) table(t doc.Table) {
 			y, onPage = r.splitRow(tl, cells, y, onPage)
 			continue
 		}
-		if onPage > 0 && y+h > bodyBottom {
+		// Break before this row if it does not fit, or if it is the
+		// last but one and the last would be left alone on the next page.
+		last := i == len(tl.rows)-2 && onPage > 1 && y+h <= bodyBottom &&
+			y+h+tl.rowH[i+1] > bodyBottom && tl.rowH[i+1] <= tall
+		if onPage > 0 && (y+h > bodyBottom || last) {
 			y = r.tableContinued(tl, y)
 			onPage = 0
 		}
@@ -644,6 +694,7 @@ func (r *renderer) table(t doc.Table) {
 			r.rule(r.x, y, r.x+r.w, 0.3, colRule)
 		}
 		r.tableRow(tl, cells, y, h)
+		r.place("table", y, y+h)
 		y += h
 		onPage++
 	}
@@ -918,12 +969,24 @@ func (r *renderer) layoutFigure(f doc.Figure) figureLayout {
 	return fl
 }
 
+// minFigureScale is how far a figure may shrink to fit the rest of a page
+// rather than leave the space blank and move to the next.
+const minFigureScale = 0.72
+
 func (r *renderer) figure(f doc.Figure) {
 	fl := r.layoutFigure(f)
 	if f.Number > 0 {
 		r.fig = f.Number
 	} else {
 		r.fig++
+	}
+	if room := r.room(8); !r.fresh && fl.total > room {
+		capH := fl.total - fl.h
+		if k := (room - capH) / fl.h; k >= minFigureScale {
+			fl.w *= k
+			fl.h *= k
+			fl.total = fl.h + capH
+		}
 	}
 	r.need(8, fl.total)
 	x := r.x + (r.w-fl.w)/2

@@ -67,6 +67,7 @@ func render(d *doc.Document, o options) (out []byte, err error) {
 func layOutTwice(d *doc.Document, o options) (*renderer, error) {
 	type result struct {
 		pages int
+		heads []int // the page of every heading, for the contents
 		err   error
 	}
 	done := make(chan result, 1)
@@ -80,7 +81,7 @@ func layOutTwice(d *doc.Document, o options) (*renderer, error) {
 		}()
 		dry := newRenderer(d, options{}, 0, true)
 		res.err = dry.run()
-		res.pages = dry.pdf.PageNo()
+		res.pages, res.heads = dry.pdf.PageNo(), dry.headPages
 	}()
 	r := newRenderer(d, o, 0, false)
 	var dry result
@@ -92,6 +93,7 @@ func layOutTwice(d *doc.Document, o options) (*renderer, error) {
 		return dry
 	}
 	r.pageCount = func() int { return wait().pages }
+	r.headingPages = func() []int { return wait().heads }
 	err := func() (err error) {
 		defer func() { // a panic in the set pass: wait for the dry pass, then re-raise
 			if p := recover(); p != nil {
@@ -124,8 +126,11 @@ type renderer struct {
 	// pageCount, if set, gives the page count when total is 0 (it may
 	// wait for the dry pass; see layOutTwice).
 	pageCount func() int
-	onText    func(page int, s string)
-	onPlace   func(page int, x, y float64, s string)
+	// headingPages, if set, gives the dry pass's heading pages (tocPages)
+	// when the contents are set; it may wait for the dry pass.
+	headingPages func() []int
+	onText       func(page int, s string)
+	onPlace      func(page int, x, y float64, s string)
 
 	x, w  float64 // current column
 	y     float64 // cursor, points from the top edge
@@ -136,6 +141,58 @@ type renderer struct {
 	depth        int     // list nesting
 	marker       *marker // list marker waiting for its item's first line
 	outline      int     // level of the last bookmark, -1 before the first
+
+	headPages []int // the page of every heading, in order
+	tocPages  []int // headPages of the layout pass, for the contents
+	boxes     []Box // placement records
+	kind      string
+	index     int         // the top-level block being set
+	rest      []doc.Block // the top-level blocks after it
+}
+
+// Box is one placement record of the layout: a block's kind and the
+// vertical extent it took on a page, points from the top edge.
+type Box struct {
+	Page        int
+	Block       int    // index of the top-level block it belongs to
+	Kind        string // "heading", "paragraph", "table", "figure", …
+	Top, Bottom float64
+}
+
+// Layout is what the layout engine placed where, for tests of the page
+// rules: no measurement of pixels, only the engine's own records.
+type Layout struct {
+	Pages int
+	// BodyTop and BodyBottom bound the text area of every page.
+	BodyTop, BodyBottom float64
+	Boxes               []Box
+	// Broken lists the pages ended by an explicit page break.
+	Broken []int
+}
+
+// Measure lays d out without drawing and returns the placements.
+func Measure(d *doc.Document) (l *Layout, err error) {
+	defer func() {
+		if p := recover(); p != nil {
+			l, err = nil, fmt.Errorf("pdf: layout: %v", p)
+		}
+	}()
+	r := newRenderer(d, options{}, 0, true)
+	if err := r.run(); err != nil {
+		return nil, err
+	}
+	l = &Layout{Pages: r.pdf.PageNo(), BodyTop: bodyTop, BodyBottom: bodyBottom, Boxes: r.boxes}
+	for _, b := range r.boxes {
+		if b.Kind == "break" {
+			l.Broken = append(l.Broken, b.Page)
+		}
+	}
+	return l, nil
+}
+
+// place records that kind took top..bottom on the current page.
+func (r *renderer) place(kind string, top, bottom float64) {
+	r.boxes = append(r.boxes, Box{Page: r.pdf.PageNo(), Block: r.index, Kind: kind, Top: top, Bottom: bottom})
 }
 
 type marker struct {
@@ -212,6 +269,7 @@ func (r *renderer) need(gap, h float64) {
 	r.y += r.space
 	r.space = 0
 	r.fresh = false
+	r.place(r.kind, r.y, r.y+h)
 }
 
 // room is the height left on the page after the pending space.
@@ -226,12 +284,32 @@ func (r *renderer) after(gap float64) { r.space = gap }
 
 func (r *renderer) blockList(bs []doc.Block) {
 	for i, b := range bs {
+		r.index = i
+		r.kind = kindOf(b)
+		r.rest = bs[i+1:]
 		var next doc.Block
 		if i+1 < len(bs) {
 			next = bs[i+1]
 		}
 		r.block(b, next)
 	}
+}
+
+// kindOf names a block's kind in the placement records.
+func kindOf(b doc.Block) string {
+	switch b.(type) {
+	case doc.Heading, *doc.Heading:
+		return "heading"
+	case doc.Paragraph, *doc.Paragraph:
+		return "paragraph"
+	case doc.Figure, *doc.Figure:
+		return "figure"
+	case doc.Table, *doc.Table:
+		return "table"
+	case doc.Equation, *doc.Equation:
+		return "equation"
+	}
+	return "block"
 }
 
 func (r *renderer) block(b doc.Block, next doc.Block) {
@@ -274,8 +352,13 @@ func (r *renderer) block(b doc.Block, next doc.Block) {
 		r.equation(*b)
 	case doc.PageBreak, *doc.PageBreak:
 		if !r.fresh {
+			r.place("break", r.y, r.y)
 			r.newPage()
 		}
+	case doc.Contents:
+		r.contents(b)
+	case *doc.Contents:
+		r.contents(*b)
 	case nil:
 	default:
 		r.pdf.SetError(fmt.Errorf("pdf: unknown block type %T", b))
