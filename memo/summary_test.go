@@ -49,6 +49,11 @@ func TestSummaryMarkdown(t *testing.T) {
 				t.Errorf("%s: unrendered markup %q in\n%s", c.file, bad, h)
 			}
 		}
+		for _, l := range strings.Split(md.String(), "\n") {
+			if strings.HasPrefix(l, "| current (A) |") && strings.Contains(l, "| Current |") {
+				t.Errorf("%s: a current sweep shows the current twice: %s", c.file, l)
+			}
+		}
 		for _, w := range c.want {
 			if !strings.Contains(h, w) {
 				t.Errorf("%s: rendered Markdown lacks %q", c.file, w)
