@@ -228,7 +228,7 @@ func SizeDesign(s *spec.Spec) (*Sizing, *spec.Spec, spec.Diagnostics) {
 	if secs := z.acCost(steps); secs > maxACSeconds {
 		return nil, nil, spec.Diagnostics{{File: s.File, Line: sz.Line, Msg: fmt.Sprintf(
 			"size: the coil is driven by an a.c. voltage, so its current depends on the inductance of every choice, which the search would compute %s times (about %s s of work, more than the %s s a search may take); narrow the turns or the wires, or size it under its d.c. or current drive first",
-			format.Count(out.Discrete*steps), format.Sig(secs, 2), format.Sig(maxACSeconds, 2))}}
+			format.Digits(out.Discrete*steps), format.Sig(secs, 2), format.Sig(maxACSeconds, 2))}}
 	}
 	cands := z.enumerate()
 	z.findApart()
@@ -899,7 +899,7 @@ func countText(n int, noun string) string {
 	if n == 1 {
 		return "1 " + noun
 	}
-	return format.Count(n) + " " + noun + "s"
+	return format.Digits(n) + " " + noun + "s"
 }
 
 func limitValueText(v float64, unit string) string {

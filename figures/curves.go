@@ -3,6 +3,7 @@ package figures
 import (
 	"math"
 	"strconv"
+	"strings"
 
 	"gonum.org/v1/plot"
 	"gonum.org/v1/plot/plotter"
@@ -50,6 +51,10 @@ func onAxisPlot(z, exact, dipole []float64, marks []Mark) (*plot.Plot, vg.Length
 		elo, ehi, _ := positiveRange(exact, nil)
 		p.Y.Min = math.Pow(10, math.Floor(math.Log10(math.Max(elo, lo)/bp.Factor)))
 		p.Y.Max = math.Pow(10, math.Ceil(math.Log10(ehi/bp.Factor)))
+		// Six decades below the top are as far as a reader looks; a field
+		// that cancels (an opposing pair's centre) would otherwise pull
+		// the axis down to rounding noise.
+		p.Y.Min = math.Max(p.Y.Min, p.Y.Max*1e-6)
 	} else {
 		_, ehi, _ := finiteRange(exact)
 		p.Y.Min = 0
@@ -117,28 +122,55 @@ func positiveRange(a, b []float64) (lo, hi float64, ok bool) {
 	return lo, hi, ok
 }
 
-// decadeTicks labels every decade of a log axis and marks 2…9 between.
+// decadeTicks labels the decades of a log axis — every one, or every
+// second, third … so that at most seven carry a label — and marks 2…9
+// between them when the axis spans few decades. Labels are short: 0.01 …
+// 1000 written out, beyond that a power of ten (10⁻⁶, 10⁴).
 type decadeTicks struct{}
 
 func (decadeTicks) Ticks(min, max float64) []plot.Tick {
 	var ticks []plot.Tick
 	e0 := int(math.Floor(math.Log10(min) + 1e-9))
 	e1 := int(math.Ceil(math.Log10(max) - 1e-9))
+	every := (e1 - e0 + 6) / 7
+	every = int(math.Max(1, float64(every)))
 	for e := e0; e <= e1; e++ {
 		d := math.Pow(10, float64(e))
 		for k := 1; k < 10; k++ {
+			if k > 1 && every > 1 {
+				break // many decades: no minor marks
+			}
 			v := d * float64(k)
 			if v < min*(1-1e-9) || v > max*(1+1e-9) {
 				continue
 			}
 			t := plot.Tick{Value: v}
-			if k == 1 {
-				t.Label = strconv.FormatFloat(v, 'f', -1, 64)
+			if k == 1 && ((e-e0)%every == 0) {
+				t.Label = decadeLabel(e)
 			}
 			ticks = append(ticks, t)
 		}
 	}
 	return ticks
+}
+
+// decadeLabel writes 10^e the short way.
+func decadeLabel(e int) string {
+	if e >= -2 && e <= 3 {
+		return strconv.FormatFloat(math.Pow(10, float64(e)), 'f', -1, 64)
+	}
+	const sup = "⁰¹²³⁴⁵⁶⁷⁸⁹"
+	digits := []rune(sup)
+	var b strings.Builder
+	b.WriteString("10")
+	if e < 0 {
+		b.WriteString("⁻")
+		e = -e
+	}
+	for _, c := range strconv.Itoa(e) {
+		b.WriteRune(digits[c-'0'])
+	}
+	return b.String()
 }
 
 // angleTicks puts ticks on round angles.

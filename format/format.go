@@ -8,6 +8,7 @@ import (
 	"coilmemo/calc"
 
 	"math"
+	"regexp"
 	"strconv"
 	"strings"
 )
@@ -132,10 +133,10 @@ func Sig(v float64, sig int) string {
 	return strings.Replace(s, "-", "−", 1)
 }
 
-// Percent formats a ratio as a percentage to two significant figures,
-// with a power of ten below 0.001 %: 0.0031 → "0.31 %", 1.6e-8 →
-// "1.6×10⁻⁶ %". The verification table writes every relative difference
-// and tolerance this one way.
+// Percent formats a ratio as a percentage to two significant figures;
+// below 0.001 % in size it is "< 0.001 %", never a power of ten or a
+// signed zero: 0.0031 → "0.31 %", 1.6e-8 → "< 0.001 %". The verification
+// table writes every relative difference and tolerance this one way.
 func Percent(v float64) string {
 	switch {
 	case math.IsNaN(v):
@@ -144,10 +145,127 @@ func Percent(v float64) string {
 		return "0 %"
 	}
 	p := 100 * v
-	if math.Abs(p) >= 1e-3 {
-		return Sig(p, 2) + " %"
+	if math.Abs(p) < 1e-3 {
+		return "< 0.001 %"
 	}
-	return Sci(p, 2) + " %"
+	return Sig(p, 2) + " %"
+}
+
+// Margin formats a signed margin to one decimal, "+12.5 %" or "−3.1 K":
+// a margin that rounds to zero is "0.0" without a sign.
+func Margin(v float64, unit string) string {
+	if math.IsNaN(v) {
+		return "n/a"
+	}
+	s := strconv.FormatFloat(v, 'f', 1, 64)
+	switch {
+	case s == "0.0" || s == "-0.0":
+		s = "0.0"
+	case v > 0:
+		s = "+" + s
+	}
+	return strings.Replace(s, "-", "−", 1) + " " + unit
+}
+
+// Count writes "n things" with the noun in the singular for one:
+// Count(1, "check", "checks") = "1 check".
+func Count(n int, one, many string) string {
+	if n == 1 {
+		return "1 " + one
+	}
+	return Digits(n) + " " + many
+}
+
+// EngTrim writes an SI value with an engineering prefix and no more
+// digits than it has, up to sig significant figures, trailing zeros
+// dropped: EngTrim(0.000237217, "m", 6) = "237.217 µm", EngTrim(2e-6, "s",
+// 6) = "2 µs", EngTrim(0.12, "m", 6) = "120 mm".
+func EngTrim(v float64, unit string, sig int) string {
+	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
+		return Eng(v, unit, sig)
+	}
+	return trimmed(v, engExp(v), sig) + " " + prefix(engExp(v)) + unit
+}
+
+// engExp is the engineering exponent (a multiple of 3, −15 … 12) of v.
+func engExp(v float64) int {
+	if v == 0 {
+		return 0
+	}
+	exp := int(math.Floor(math.Log10(math.Abs(v))/3)) * 3
+	return min(max(exp, -15), 12)
+}
+
+// trimmed writes v/10^exp to sig significant figures without trailing
+// zeros, with a true minus sign.
+func trimmed(v float64, exp, sig int) string {
+	m := v / math.Pow(10, float64(exp))
+	if m == 0 {
+		return "0"
+	}
+	mag := int(math.Floor(math.Log10(math.Abs(m))))
+	p := math.Pow(10, float64(sig-1-mag))
+	m = math.Round(m*p) / p
+	s := strconv.FormatFloat(m, 'f', -1, 64)
+	if strings.Contains(s, "e") {
+		s = Sig(m, sig)
+	}
+	return strings.Replace(s, "-", "−", 1)
+}
+
+// engUnits are the units SIText rewrites with a prefix.
+var engUnits = map[string]bool{"m": true, "A": true, "V": true, "T": true, "Hz": true, "F": true, "H": true,
+	"s": true, "W": true, "Ω": true, "ohm": true, "T/m": true, "A/m": true, "N": true, "N·m": true, "A·m²": true}
+
+var (
+	siScalar = regexp.MustCompile(`^(-?[0-9.]+(?:e[-+]?[0-9]+)?) (\S+)(.*)$`)
+	siVector = regexp.MustCompile(`^\((-?[0-9.e+-]+), (-?[0-9.e+-]+), (-?[0-9.e+-]+)\) (\S+)(.*)$`)
+	siRange  = regexp.MustCompile(`^(-?[0-9.]+(?:e[-+]?[0-9]+)?) (\S+) \.\. (-?[0-9.]+(?:e[-+]?[0-9]+)?) (\S+)(.*)$`)
+)
+
+// SIText rewrites a value as the spec reader states it in SI ("0.000237217
+// m (heavy-build estimate)", "2e-06 s", "(0, 3e-05, 0) T", "10 Hz .. 10000
+// Hz") in engineering units, keeping every digit it has (up to 6) and
+// any remark after it: "237.217 µm (heavy-build estimate)", "2 µs",
+// "(0, 30, 0) µT", "10 Hz .. 10 kHz". A vector's components share one
+// prefix. Anything else (kelvin, counts, dates) is returned as it is.
+func SIText(s string) string {
+	for _, rel := range []string{"<= ", ">= "} {
+		if rest, ok := strings.CutPrefix(s, rel); ok {
+			return rel + SIText(rest)
+		}
+	}
+	if m := siRange.FindStringSubmatch(s); m != nil && engUnits[m[2]] && m[2] == m[4] {
+		a, errA := strconv.ParseFloat(m[1], 64)
+		b, errB := strconv.ParseFloat(m[3], 64)
+		if errA == nil && errB == nil {
+			return EngTrim(a, m[2], 6) + " .. " + EngTrim(b, m[4], 6) + m[5]
+		}
+	}
+	if m := siVector.FindStringSubmatch(s); m != nil && engUnits[m[4]] {
+		var v [3]float64
+		big := 0.0
+		for i := range v {
+			x, err := strconv.ParseFloat(m[i+1], 64)
+			if err != nil {
+				return s
+			}
+			v[i] = x
+			big = max(big, math.Abs(x))
+		}
+		exp := engExp(big)
+		parts := make([]string, 3)
+		for i, x := range v {
+			parts[i] = trimmed(x, exp, 6)
+		}
+		return "(" + strings.Join(parts, ", ") + ") " + prefix(exp) + m[4] + m[5]
+	}
+	if m := siScalar.FindStringSubmatch(s); m != nil && engUnits[m[2]] {
+		if v, err := strconv.ParseFloat(m[1], 64); err == nil {
+			return EngTrim(v, m[2], 6) + m[3]
+		}
+	}
+	return s
 }
 
 // Sci formats v in scientific notation with sig significant figures,
@@ -268,9 +386,9 @@ func Unit(u string) string {
 	return u
 }
 
-// Count writes a whole number as a count: digits, grouped in threes by a
-// thin space from 10 000 up ("9999", "50 167"), as SI style writes numbers.
-func Count(n int) string {
+// Digits writes a whole number: digits, grouped in threes by a thin space
+// from 10 000 up ("9999", "50 167"), as SI style writes numbers.
+func Digits(n int) string {
 	s := strconv.Itoa(n)
 	neg := strings.HasPrefix(s, "-")
 	s = strings.TrimPrefix(s, "-")

@@ -210,8 +210,8 @@ func (c *composer) verdict() doc.Paragraph {
 	}
 	if failedChecks > 0 {
 		s = append(s, doc.Span{Text: fmt.Sprintf("%d verification check(s) failed: see the Verification section before relying on these results.", failedChecks), Strong: true}, doc.Span{Text: " "})
-	} else if len(c.j.Checks) > 0 {
-		s = append(s, doc.Span{Text: fmt.Sprintf("All %d verification checks agree within tolerance. ", len(c.j.Checks))})
+	} else if n := len(c.j.Checks); n > 0 {
+		s = append(s, doc.Span{Text: checksVerdict(n)})
 	}
 	for _, cr := range r.Coils {
 		switch {
@@ -225,6 +225,18 @@ func (c *composer) verdict() doc.Paragraph {
 		s = append(s, doc.Span{Text: "The design raises no safety warning; the general cautions are in the Safety section."})
 	}
 	return doc.Paragraph{Spans: s}
+}
+
+// checksVerdict is page 1's sentence on n verification checks that all
+// agree, in plain grammar for any count.
+func checksVerdict(n int) string {
+	switch n {
+	case 1:
+		return "The verification check agrees within tolerance. "
+	case 2:
+		return "Both verification checks agree within tolerance. "
+	}
+	return fmt.Sprintf("All %d verification checks agree within tolerance. ", n)
 }
 
 // requirementsVerdict is page 1's sentence on n requirements of which
@@ -372,13 +384,13 @@ func (c *composer) limitsTable() doc.Table {
 			if l.Limit.Relation == calc.AtMost {
 				mg = -mg
 			}
-			margin = strings.Replace(fmt.Sprintf("%+.1f K", mg), "-", "−", 1)
+			margin = format.Margin(mg, "K")
 		case req != 0:
 			mg := (got - req) / math.Abs(req)
 			if l.Limit.Relation == calc.AtMost {
 				mg = -mg
 			}
-			margin = strings.Replace(fmt.Sprintf("%+.1f %%", 100*mg), "-", "−", 1)
+			margin = format.Margin(100*mg, "%")
 		}
 		st := doc.Pass
 		if !l.Pass {
@@ -480,11 +492,11 @@ func (c *composer) inputs() {
 			raw, line = "(default)", ""
 		}
 		rows = append(rows, []doc.Cell{
-			{Text: e.Block}, {Text: e.Key}, {Text: raw}, {Text: e.SI}, {Text: line},
+			{Text: e.Block}, {Text: e.Key}, {Text: raw}, {Text: format.SIText(e.SI)}, {Text: line},
 		})
 	}
 	c.add(doc.Table{Caption: "Spec parameters as written and in SI units",
-		Header: []string{"Block", "Key", "As written", "SI", "Line"},
+		Header: []string{"Block", "Key", "As written", "In SI units", "Line"},
 		Rows:   rows, Widths: []float64{1, 1.5, 2, 2.2, 0.5},
 		Align: []doc.Align{doc.Left, doc.Left, doc.Left, doc.Left, doc.Right}})
 }

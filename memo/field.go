@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"math"
 	"strconv"
+	"strings"
 
 	"coilmemo/calc"
 	"coilmemo/doc"
@@ -23,14 +24,14 @@ func (c *composer) field() {
 	r := c.j.Results
 	B0 := r.FieldCentre
 	c.para(fmt.Sprintf("With every coil at its steady operating current, the flux density at the origin is |B| = %s (Bx = %s, By = %s, Bz = %s). The background field is not included in these figures.",
-		Eng(B0.Norm(), "T", 4), Eng(B0[0], "T", 3), Eng(B0[1], "T", 3), Eng(B0[2], "T", 3)))
+		Eng(B0.Norm(), "T", 4), Eng(B0[0], "T", 4), Eng(B0[1], "T", 4), Eng(B0[2], "T", 4)))
 	c.para("Fields are computed from the exact field of each circular turn (complete elliptic integrals) or of each straight side of a rectangle (closed-form Biot–Savart integral), superposed. For maps and profiles the turns of a thick winding are grouped by Gauss quadrature over the winding cross-section, which reproduces the turn-by-turn sum to better than one part in 10⁹ and falls back to the individual turns near the winding.")
 	if len(r.Probes) > 0 {
 		var rows [][]doc.Cell
 		for _, p := range r.Probes {
 			rows = append(rows, []doc.Cell{{Text: p.Name},
-				{Text: fmt.Sprintf("(%s, %s, %s) mm", Sig(p.At[0]*1e3, 4), Sig(p.At[1]*1e3, 4), Sig(p.At[2]*1e3, 4))},
-				{Text: Eng(p.B[0], "T", 3)}, {Text: Eng(p.B[1], "T", 3)}, {Text: Eng(p.B[2], "T", 3)},
+				{Text: fmt.Sprintf("(%s, %s, %s) mm", mmNum(p.At[0]), mmNum(p.At[1]), mmNum(p.At[2]))},
+				{Text: Eng(p.B[0], "T", 4)}, {Text: Eng(p.B[1], "T", 4)}, {Text: Eng(p.B[2], "T", 4)},
 				{Text: Eng(p.B.Norm(), "T", 4), Strong: true}})
 		}
 		c.add(doc.Table{Caption: "Flux density at the probe points (all coils)",
@@ -51,6 +52,16 @@ func (c *composer) field() {
 		}
 	}
 	c.allCoilsMap()
+}
+
+// mmNum is a length in millimetres to 0.01 mm without trailing zeros or
+// a signed zero, with a true minus sign: the probe positions all alike.
+func mmNum(v float64) string {
+	s := strings.TrimSuffix(mmText(v), " mm")
+	if s == "-0" {
+		return "0"
+	}
+	return strings.Replace(s, "-", "−", 1)
 }
 
 // mmText prints a length in millimetres to 0.01 mm without trailing zeros.

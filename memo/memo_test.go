@@ -39,7 +39,7 @@ func TestPDFReproducible(t *testing.T) {
 }
 
 func TestPercent(t *testing.T) {
-	for v, want := range map[float64]string{0: "0 %", 0.0031: "0.31 %", 0.01: "1.0 %", 1.6e-8: "1.6×10⁻⁶ %", 1e-9: "1.0×10⁻⁷ %", 2e-5: "0.0020 %"} {
+	for v, want := range map[float64]string{0: "0 %", 0.0031: "0.31 %", 0.01: "1.0 %", 1.6e-8: "< 0.001 %", 1e-9: "< 0.001 %", 2e-5: "0.0020 %"} {
 		if got := Percent(v); got != want {
 			t.Errorf("Percent(%g) = %q, want %q", v, got, want)
 		}

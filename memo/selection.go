@@ -33,7 +33,7 @@ func (c *composer) selection() {
 		coils = "coils " + strings.Join(names, ", ") + " (all alike)"
 	}
 	c.para(fmt.Sprintf("The spec leaves %s of %s to be chosen for %s. Every whole turn count with every wire was searched: %s, %s of them meeting every requirement that the winding's layout and heat balance decide; %s evaluated in full, best first, to confirm the choice. The rest of this memo is the chosen design's.",
-		freeList(sz), coils, sz.Objective, count(sz.Discrete, "choice"), format.Count(sz.Feasible), count(sz.Full, "was", "were")))
+		freeList(sz), coils, sz.Objective, count(sz.Discrete, "choice"), format.Digits(sz.Feasible), count(sz.Full, "was", "were")))
 	c.add(c.requirementTable(sz))
 	c.tradeFigure(sz)
 	c.frontFigure(sz)
@@ -55,12 +55,12 @@ func count(n int, words ...string) string {
 		if n == 1 {
 			return fmt.Sprintf("1 %s", words[0])
 		}
-		return fmt.Sprintf("%s %s", format.Count(n), words[1])
+		return fmt.Sprintf("%s %s", format.Digits(n), words[1])
 	}
 	if n == 1 {
 		return "1 " + words[0]
 	}
-	return format.Count(n) + " " + words[0] + "s"
+	return format.Digits(n) + " " + words[0] + "s"
 }
 
 // freeList names the free keys with their ranges.
@@ -115,7 +115,7 @@ func (c *composer) requirementTable(sz *analysis.Sizing) doc.Table {
 		if !con.Cheap {
 			how = "full evaluation"
 		}
-		rows = append(rows, []doc.Cell{{Text: what}, {Text: how}, {Text: format.Count(con.Excluded)}, {Text: at}})
+		rows = append(rows, []doc.Cell{{Text: what}, {Text: how}, {Text: format.Digits(con.Excluded)}, {Text: at}})
 	}
 	return doc.Table{Caption: "Requirements the choice must meet: the choices each excludes, and the margin left at the choice",
 		Header: []string{"Requirement", "Decided by", "Choices excluded", "At the choice"},
@@ -316,7 +316,7 @@ func (c *composer) whyText(sz *analysis.Sizing) string {
 	if sz.Binding >= 0 {
 		con := sz.Constraints[sz.Binding]
 		fmt.Fprintf(&b, " Each of the %s with a better %s fails a requirement; the one that stops most of them (%s) is %s.",
-			count(sz.Better, "choice"), strings.ToLower(oName(sz.Objective)), format.Count(sz.BindingCount), c.constraintName(con, sz.Binding))
+			count(sz.Better, "choice"), strings.ToLower(oName(sz.Objective)), format.Digits(sz.BindingCount), c.constraintName(con, sz.Binding))
 	}
 	if sz.Next >= 0 {
 		con := sz.Constraints[sz.Next]

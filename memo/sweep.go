@@ -197,6 +197,18 @@ func (c *composer) sweep() {
 		header, align, widths = append(header, extraHead), append(align, doc.Right), append(widths, 1.4)
 	}
 	header, align, widths = append(header, "Limits met"), append(align, doc.Center), append(widths, 1)
+	if sw.Param == "current" {
+		// the swept value is the current: no second column of it
+		const col = 3
+		header = append(header[:col:col], header[col+1:]...)
+		align = append(align[:col:col], align[col+1:]...)
+		widths = append(widths[:col:col], widths[col+1:]...)
+		for i, r := range rows {
+			if len(r) > col {
+				rows[i] = append(r[:col:col], r[col+1:]...)
+			}
+		}
+	}
 	c.add(doc.Table{Caption: "Results at each step of the sweep",
 		Header: header,
 		Rows:   rows,

@@ -73,7 +73,7 @@ func sizeCmd(args []string, stdout, stderr io.Writer) error {
 		}
 	}
 	comment := fmt.Sprintf("%s = %s with %s (%s choices, %s feasible)", sz.Objective, objectiveText(sz), strings.Join(picked, ", "),
-		format.Count(sz.Discrete), format.Count(sz.Feasible))
+		format.Digits(sz.Discrete), format.Digits(sz.Feasible))
 	sized := spec.WriteChoice(src, original, values, comment)
 	fmt.Fprintf(stderr, "%s: %s\n", filepath.Base(path), comment)
 	if *out == "" {

@@ -1,0 +1,60 @@
+package format
+
+import "testing"
+
+func TestPercentAndMargin(t *testing.T) {
+	for _, c := range []struct{ got, want string }{
+		{Percent(0), "0 %"}, {Percent(0.0031), "0.31 %"}, {Percent(0.01), "1.0 %"},
+		{Percent(1e-9), "< 0.001 %"}, {Percent(1.6e-8), "< 0.001 %"}, {Percent(-3e-12), "< 0.001 %"}, {Percent(2e-5), "0.0020 %"},
+		{SignedPercent(0.063), "+6.3 %"}, {SignedPercent(-0.0052), "−0.52 %"}, {SignedPercent(-1e-9), "< 0.001 %"}, {SignedPercent(0), "0 %"},
+		{Margin(-0.04, "%"), "0.0 %"}, {Margin(0.04, "%"), "0.0 %"}, {Margin(-3.14, "K"), "−3.1 K"}, {Margin(12.46, "%"), "+12.5 %"},
+		{Count(1, "check", "checks"), "1 check"}, {Count(2, "check", "checks"), "2 checks"}, {Count(0, "check", "checks"), "0 checks"},
+	} {
+		if c.got != c.want {
+			t.Errorf("got %q, want %q", c.got, c.want)
+		}
+	}
+}
+
+func TestChangeUnits(t *testing.T) {
+	// 42.27 °C → 44.95 °C is a rise of 2.68 K, written in kelvin.
+	from, to, d := Change(273.15+42.27, 273.15+44.95, "°C")
+	if from != "42.27 °C" || to != "44.95 °C" || d != "+2.7 K" {
+		t.Errorf("temperature: %q → %q (%q)", from, to, d)
+	}
+	from, to, d = Change(449.6e-6, 584.5e-6, "T")
+	if from != "449.6 µT" || to != "584.5 µT" || d != "+30 %" {
+		t.Errorf("field: %q → %q (%q)", from, to, d)
+	}
+	if _, _, d := Change(0, 2e-3, "A"); d != "+2.00 mA" {
+		t.Errorf("from zero: %q", d)
+	}
+}
+
+// Raw SI from the spec reader is written in engineering units without
+// losing or inventing digits.
+func TestSIText(t *testing.T) {
+	for in, want := range map[string]string{
+		"0.000237217 m (heavy-build estimate)": "237.217 µm (heavy-build estimate)",
+		"2e-06 s":                              "2 µs",
+		"2e-6 s":                               "2 µs",
+		"0.12 m":                               "120 mm",
+		"0.003 m = (outer-diameter − inner-diameter)/2": "3 mm = (outer-diameter − inner-diameter)/2",
+		"(0, 3e-05, 0) T":        "(0, 30, 0) µT",
+		"(0.01, 0, 0.01) m":      "(10, 0, 10) mm",
+		"(0, 0, 0) m":            "(0, 0, 0) m",
+		"10 Hz .. 10000 Hz":      "10 Hz .. 10 kHz",
+		"1.5e-10 F":              "150 pF",
+		"1 A":                    "1 A",
+		"293.15 K (20 °C)":       "293.15 K (20 °C)",
+		"0.85":                   "0.85",
+		"2026-12-01":             "2026-12-01",
+		"AWG 28 (bare 0.321 mm)": "AWG 28 (bare 0.321 mm)",
+		"1.5708 rad (90°)":       "1.5708 rad (90°)",
+		"-0.02 m":                "−20 mm",
+	} {
+		if got := SIText(in); got != want {
+			t.Errorf("SIText(%q) = %q, want %q", in, got, want)
+		}
+	}
+}

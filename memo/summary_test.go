@@ -1,0 +1,63 @@
+package memo
+
+import (
+	"bytes"
+	"os"
+	"strings"
+	"testing"
+
+	"github.com/yuin/goldmark"
+	"github.com/yuin/goldmark/extension"
+)
+
+// calc's text output is Markdown a code host renders: every table a
+// table, every emphasis closed, with the probes and the sweep.
+func TestSummaryMarkdown(t *testing.T) {
+	for _, c := range []struct {
+		file   string
+		tables int
+		want   []string
+	}{
+		{"../examples/torque-coil.md", 4, []string{"<th>Probe</th>", "<td>Magnetic moment |m|</td>", "<strong>WARNING</strong> Field above"}},
+		{"../examples/bench-solenoid.md", 0, []string{"<h3>Parameter sweep</h3>", "Results at each step of the sweep"}},
+	} {
+		src, err := os.ReadFile(c.file)
+		if err != nil {
+			t.Fatal(err)
+		}
+		j, diags := evaluate(c.file, src)
+		if len(diags) > 0 {
+			t.Fatal(diags)
+		}
+		var md bytes.Buffer
+		if err := WriteSummary(&md, j); err != nil {
+			t.Fatal(err)
+		}
+		var html bytes.Buffer
+		if err := goldmark.New(goldmark.WithExtensions(extension.Table)).Convert(md.Bytes(), &html); err != nil {
+			t.Fatal(err)
+		}
+		h := html.String()
+		if n, want := strings.Count(h, "<table>"), strings.Count(md.String(), "|\n| ---"); n != want || n == 0 {
+			t.Errorf("%s: %d tables rendered, %d written", c.file, n, want)
+		}
+		if c.tables > 0 && strings.Count(h, "<table>") != c.tables {
+			t.Errorf("%s: %d tables, want %d", c.file, strings.Count(h, "<table>"), c.tables)
+		}
+		for _, bad := range []string{"**", "\\|", "<p>|"} {
+			if strings.Contains(h, bad) {
+				t.Errorf("%s: unrendered markup %q in\n%s", c.file, bad, h)
+			}
+		}
+		for _, l := range strings.Split(md.String(), "\n") {
+			if strings.HasPrefix(l, "| current (A) |") && strings.Contains(l, "| Current |") {
+				t.Errorf("%s: a current sweep shows the current twice: %s", c.file, l)
+			}
+		}
+		for _, w := range c.want {
+			if !strings.Contains(h, w) {
+				t.Errorf("%s: rendered Markdown lacks %q", c.file, w)
+			}
+		}
+	}
+}
