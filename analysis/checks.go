@@ -272,9 +272,16 @@ func wireCheck(c calc.Coil) []Check {
 
 // numericCoilField integrates dB = μ0 I/(4π) dl × r/|r|³ round every turn
 // of the winding with 96-point Gauss–Legendre quadrature: a method
-// independent of the elliptic-integral closed form.
+// independent of the elliptic-integral closed form. Every turn of a block
+// shares the axis, so p is taken into the block's cylindrical frame once
+// and each turn is integrated in its own plane (biotsavart.CircleLocal,
+// the same integral and nodes as biotsavart.Circle): the cost is one
+// 96-node sum per distinct turn position.
 func numericCoilField(c calc.Coil, w calc.Winding, I float64, p calc.Vec) calc.Vec {
 	fr := calc.CoilFrame(c.Axis)
+	// The circles' own axis: the current flows from E1 towards E2.
+	ax := fr.E1.Cross(fr.E2)
+	along := fr.U.Dot(ax) // ±1: the turns' centres lie on the axis
 	var B calc.Vec
 	centres := []calc.Vec{c.Centre}
 	currents := []float64{I}
@@ -288,6 +295,15 @@ func numericCoilField(c calc.Coil, w calc.Winding, I float64, p calc.Vec) calc.V
 		currents = []float64{I, I2}
 	}
 	for k, ctr := range centres {
+		d := p.Sub(ctr)
+		z0 := d.Dot(ax)
+		perp := d.Sub(ax.Scale(z0))
+		rho := perp.Norm()
+		rhat := fr.E1
+		if rho > 0 {
+			rhat = perp.Scale(1 / rho)
+		}
+		var br, bz float64
 		for _, l := range w.Layers {
 			// Coincident turns (a thin coil) are integrated once and counted.
 			for i := 0; i < len(l.Z); {
@@ -295,19 +311,15 @@ func numericCoilField(c calc.Coil, w calc.Winding, I float64, p calc.Vec) calc.V
 				for j < len(l.Z) && l.Z[j] == l.Z[i] {
 					j++
 				}
-				b := loopIntegral(fr, ctr.Add(fr.U.Scale(l.Z[i])), l.Radius, currents[k], p)
-				B = B.Add(b.Scale(float64(j - i)))
+				r, z := biotsavart.CircleLocal(l.Radius, currents[k], rho, z0-along*l.Z[i], 1, 96)
+				br += r * float64(j-i)
+				bz += z * float64(j-i)
 				i = j
 			}
 		}
+		B = B.Add(rhat.Scale(br)).Add(ax.Scale(bz))
 	}
 	return B
-}
-
-// loopIntegral is the field at p of one turn of radius a centred on ctr
-// in frame fr: 96-point Gauss–Legendre round the circle.
-func loopIntegral(fr calc.Frame, ctr calc.Vec, a, I float64, p calc.Vec) calc.Vec {
-	return biotsavart.Circle(ctr, fr.E1, fr.E2, a, I, p, 1, 96)
 }
 
 // ringMutual is Maxwell's mutual inductance of two coaxial circles of

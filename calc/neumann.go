@@ -51,14 +51,25 @@ func loopPotential(a, rho, z float64) float64 {
 	return Mu0 / (math.Pi * k) * math.Sqrt(a/rho) * br
 }
 
-// points returns the point and tangent dl/dθ of filament f at angle θ.
-func (f Filament) at(th float64) (p, t Vec) {
-	fr := CoilFrame(f.Axis)
-	c, s := math.Cos(th), math.Sin(th)
+// atTrig returns the point and tangent dl/dθ of filament f at angle θ,
+// given its frame fr (CoilFrame of its axis), cos θ and sin θ: the frame
+// and the trigonometry are computed once for a loop over many angles.
+func (f Filament) atTrig(fr Frame, c, s float64) (p, t Vec) {
 	p = f.Centre.Add(fr.E1.Scale(f.Radius * c)).Add(fr.E2.Scale(f.Radius * s))
 	t = fr.E1.Scale(-f.Radius * s).Add(fr.E2.Scale(f.Radius * c))
 	return p, t
 }
+
+// neumannTrig holds cos θᵢ and sin θᵢ at the trapezoidal points
+// θᵢ = i·2π/neumannPoints, computed once for every pair of filaments.
+var neumannTrig = func() (t [neumannPoints][2]float64) {
+	h := 2 * math.Pi / neumannPoints
+	for i := range t {
+		th := h * float64(i)
+		t[i] = [2]float64{math.Cos(th), math.Sin(th)}
+	}
+	return t
+}()
 
 // FilamentMutual returns the mutual inductance, H, of circular filaments f1
 // and f2 in any position (see the file comment). NaN when the filaments
@@ -70,8 +81,9 @@ func FilamentMutual(f1, f2 Filament) float64 {
 	fr := CoilFrame(f1.Axis)
 	h := 2 * math.Pi / neumannPoints
 	s := 0.0
+	fr2 := CoilFrame(f2.Axis)
 	for i := range neumannPoints {
-		p, t := f2.at(h * float64(i))
+		p, t := f2.atTrig(fr2, neumannTrig[i][0], neumannTrig[i][1])
 		l := fr.ToLocal(p.Sub(f1.Centre))
 		rho := math.Hypot(l[0], l[1])
 		if !(rho > 0) {
@@ -98,8 +110,9 @@ func FilamentForce(f1 Filament, I1 float64, f2 Filament, I2 float64) Vec {
 	fr := CoilFrame(f1.Axis)
 	h := 2 * math.Pi / neumannPoints
 	var F Vec
+	fr2 := CoilFrame(f2.Axis)
 	for i := range neumannPoints {
-		p, t := f2.at(h * float64(i))
+		p, t := f2.atTrig(fr2, neumannTrig[i][0], neumannTrig[i][1])
 		l := fr.ToLocal(p.Sub(f1.Centre))
 		rho := math.Hypot(l[0], l[1])
 		br, bz := LoopField(f1.Radius, I1, rho, l[2])

@@ -57,25 +57,81 @@ func cross(a, b Vec) Vec {
 }
 func norm(a Vec) float64 { return math.Sqrt(a[0]*a[0] + a[1]*a[1] + a[2]*a[2]) }
 
+// circleNodes holds, for one (panels, n) rule round a circle, the sine
+// and cosine of every node's angle φ = (j + x_k)·2π/panels (panel j, node
+// x_k on [0, 1]) and its weight, in the order Circle sums them.
+type circleNodes struct {
+	sin, cos, w []float64
+	dphi        float64
+}
+
+var circleRules sync.Map // [2]int{panels, n} → *circleNodes
+
+// circleRule returns the nodes of Circle's rule, computed once per rule
+// (the same values Circle would compute per call, so the sums are the
+// same to the bit).
+func circleRule(panels, n int) *circleNodes {
+	key := [2]int{panels, n}
+	if v, ok := circleRules.Load(key); ok {
+		return v.(*circleNodes)
+	}
+	r := legendre(n)
+	cn := &circleNodes{dphi: 2 * math.Pi / float64(panels)}
+	for j := range panels {
+		for k, x := range r.x {
+			s, co := math.Sincos((float64(j) + x) * cn.dphi)
+			cn.sin = append(cn.sin, s)
+			cn.cos = append(cn.cos, co)
+			cn.w = append(cn.w, r.w[k])
+		}
+	}
+	v, _ := circleRules.LoadOrStore(key, cn)
+	return v.(*circleNodes)
+}
+
 // Circle is the field at p of current I in a circle of radius a centred
 // on c in the plane of the orthonormal vectors e1, e2, flowing from e1
 // towards e2, integrated over panels equal arcs, n nodes each.
 func Circle(c, e1, e2 Vec, a, I float64, p Vec, panels, n int) Vec {
-	r := legendre(n)
+	r := circleRule(panels, n)
 	var B Vec
-	dphi := 2 * math.Pi / float64(panels)
-	for j := range panels {
-		for k, x := range r.x {
-			phi := (float64(j) + x) * dphi
-			s, co := math.Sincos(phi)
-			l := add(add(c, scale(e1, a*co)), scale(e2, a*s))
-			dl := add(scale(e1, -a*s), scale(e2, a*co))
-			d := sub(p, l)
-			n := norm(d)
-			B = add(B, scale(cross(dl, d), r.w[k]*dphi/(n*n*n)))
-		}
+	dphi := r.dphi
+	for k, s := range r.sin {
+		co := r.cos[k]
+		l := add(add(c, scale(e1, a*co)), scale(e2, a*s))
+		dl := add(scale(e1, -a*s), scale(e2, a*co))
+		d := sub(p, l)
+		n := norm(d)
+		B = add(B, scale(cross(dl, d), r.w[k]*dphi/(n*n*n)))
 	}
 	return scale(B, mu0*I/(4*math.Pi))
+}
+
+// CircleLocal is Circle in the circle's own frame: the field of current I
+// in the circle of radius a about the z axis in the plane z = 0, at the
+// point a distance rho from the axis and z from the plane, as its radial
+// and axial components. With the point on the x axis of that frame
+// (φ = 0) the integrand reduces to
+//
+//	dl × (p − l) = a (z cos φ, z sin φ, a − ρ cos φ) dφ,
+//	|p − l|² = ρ² + a² + z² − 2aρ cos φ,
+//
+// whose y component is odd in φ about π and integrates to zero; the x
+// and z components are summed over the same nodes as Circle, so the two
+// agree to rounding (a relative difference of order 10⁻¹⁶), at a fraction
+// of the cost: no vectors are built per node and the same rule serves
+// every turn.
+func CircleLocal(a, I, rho, z float64, panels, n int) (brho, bz float64) {
+	r := circleRule(panels, n)
+	q := rho*rho + a*a + z*z
+	for k, co := range r.cos {
+		d2 := q - 2*a*rho*co
+		f := r.w[k] / (d2 * math.Sqrt(d2))
+		brho += z * co * f
+		bz += (a - rho*co) * f
+	}
+	c := mu0 * I / (4 * math.Pi) * a * r.dphi
+	return c * brho, c * bz
 }
 
 // Polygon is the field at p of current I round the closed polygon of
