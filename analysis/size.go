@@ -324,9 +324,8 @@ func (z *sizer) acCost(steps int) float64 {
 	return t * float64(len(z.wires())*steps*len(z.sz.Targets))
 }
 
-// golden is the number of golden-section steps that shrink a bracket of
-// relative width w... to tol: ⌈ln(tol)/ln(0.618)⌉ for a bracket of two
-// grid intervals.
+// golden is the number of golden-section steps that shrink a bracket to
+// the fraction tol of its width: ⌈ln(tol)/ln(0.618)⌉.
 func golden(tol float64) int {
 	return int(math.Ceil(math.Log(tol) / math.Log(0.6180339887498949)))
 }
