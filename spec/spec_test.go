@@ -480,7 +480,7 @@ func TestSuggest(t *testing.T) {
 			t.Errorf("nearest(%q) = %q, want %q", c.in, got, c.want)
 		}
 	}
-	if distance("ab", "ba") != 1 || distance("", "abc") != 3 || distance("kitten", "sitting") != 3 {
+	if EditDistance("ab", "ba") != 1 || EditDistance("", "abc") != 3 || EditDistance("kitten", "sitting") != 3 {
 		t.Error("distance")
 	}
 }

@@ -2,10 +2,11 @@ package spec
 
 import "strings"
 
-// distance is the optimal-string-alignment edit distance between a and b:
-// insertions, deletions, substitutions and swaps of two adjacent
-// characters each cost one.
-func distance(a, b string) int {
+// EditDistance is the optimal-string-alignment edit distance between a
+// and b: insertions, deletions, substitutions and swaps of two adjacent
+// characters each cost one. The spec reader's and the command line's
+// suggestions both rank by it.
+func EditDistance(a, b string) int {
 	ra, rb := []rune(a), []rune(b)
 	if len(ra) > 64 || len(rb) > 64 {
 		// long garbage is never a misspelt key
@@ -41,7 +42,7 @@ func nearest(s string, candidates []string) string {
 	s = strings.ToLower(s)
 	best, bestD := "", 1<<30
 	for _, c := range candidates {
-		if d := distance(s, c); d < bestD {
+		if d := EditDistance(s, c); d < bestD {
 			best, bestD = c, d
 		}
 	}

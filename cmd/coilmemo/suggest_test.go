@@ -4,6 +4,8 @@ import (
 	"bytes"
 	"strings"
 	"testing"
+
+	"coilmemo/spec"
 )
 
 // The edit distance against textbook cases (recalled from memory): the
@@ -19,11 +21,11 @@ func TestEditDistance(t *testing.T) {
 		{"kitten", "sitting", 3}, {"", "abc", 3}, {"build", "build", 0}, {"bulid", "build", 1},
 		{"ca", "abc", 3}, {"jsn", "json", 1}, {"µT", "uT", 1},
 	} {
-		if got := editDistance(c.a, c.b); got != c.d {
-			t.Errorf("editDistance(%q, %q) = %d, want %d", c.a, c.b, got, c.d)
+		if got := spec.EditDistance(c.a, c.b); got != c.d {
+			t.Errorf("EditDistance(%q, %q) = %d, want %d", c.a, c.b, got, c.d)
 		}
-		if got := editDistance(c.b, c.a); got != c.d {
-			t.Errorf("editDistance(%q, %q) = %d, want %d (symmetry)", c.b, c.a, got, c.d)
+		if got := spec.EditDistance(c.b, c.a); got != c.d {
+			t.Errorf("EditDistance(%q, %q) = %d, want %d (symmetry)", c.b, c.a, got, c.d)
 		}
 	}
 	names := []string{"build", "calc", "diff", "watch", "new", "help", "version"}
