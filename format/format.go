@@ -326,21 +326,11 @@ func superscript(s string) string {
 // size is "< 0.001 %" (never "−0.0 %" or a power of ten), and none is
 // "0 %".
 func SignedPercent(v float64) string {
-	switch {
-	case math.IsNaN(v):
-		return "n/a"
-	case v == 0:
-		return "0 %"
+	s := Percent(v)
+	if v > 0 && 100*v >= 1e-3 {
+		return "+" + s
 	}
-	p := 100 * v
-	if math.Abs(p) < 1e-3 {
-		return "< 0.001 %"
-	}
-	s := Sig(p, 2)
-	if p > 0 {
-		s = "+" + s
-	}
-	return s + " %"
+	return s
 }
 
 // Change writes a value's move from old to new, both SI in unit, to four
