@@ -322,14 +322,7 @@ func coreStudy(cs *CoilStudy, co calc.Coil, cr *calc.CoilResult, k *calc.CoreRes
 	e := cs.Envelope
 	xHalf := math.Max(old.XHalf, 1.6*e.R1)
 	zHalf := math.Max(old.ZHalf, co.Core.Length/2+0.9*e.R1)
-	nz, nx := MapGrid, MapGrid
-	if zHalf > xHalf {
-		nx = max(61, int(math.Round(MapGrid*xHalf/zHalf)))
-	} else {
-		nz = max(61, int(math.Round(MapGrid*zHalf/xHalf)))
-	}
-	nx |= 1
-	nz |= 1
+	nx, nz := mapNodes(xHalf, zHalf)
 	m := &MapData{Z: SymmetricSpace(zHalf, nz), X: SymmetricSpace(xHalf, nx), XHalf: xHalf, ZHalf: zHalf}
 	g := calc.FieldMap(co, w, cr.Current, m.X, m.Z)
 	m.B = make([]float64, len(m.Z)*len(m.X))

@@ -15,6 +15,20 @@ const axisPoints = 241
 // MapGrid is the number of nodes along the longer side of a coil's map.
 const MapGrid = 200
 
+// mapNodes are the node counts across (x) and along (z) a coil's map of
+// half-sizes xHalf × zHalf: MapGrid along the longer side, the other in
+// proportion but at least 61, both odd so that nodes fall on the axis and
+// the mid-plane.
+func mapNodes(xHalf, zHalf float64) (nx, nz int) {
+	nz, nx = MapGrid, MapGrid
+	if zHalf > xHalf {
+		nx = max(61, int(math.Round(MapGrid*xHalf/zHalf)))
+	} else {
+		nz = max(61, int(math.Round(MapGrid*zHalf/xHalf)))
+	}
+	return nx | 1, nz | 1
+}
+
 // AllMapGrid is the node count along each side of the map of all coils.
 const AllMapGrid = 121
 
@@ -93,15 +107,7 @@ func coilMap(co calc.Coil, cr calc.CoilResult, cs CoilStudy) *MapData {
 	if !(xHalf > 0) || !(zHalf > 0) || math.IsInf(xHalf, 0) || math.IsInf(zHalf, 0) {
 		return nil
 	}
-	nz, nx := MapGrid, MapGrid
-	if zHalf > xHalf {
-		nx = max(61, int(math.Round(MapGrid*xHalf/zHalf)))
-	} else {
-		nz = max(61, int(math.Round(MapGrid*zHalf/xHalf)))
-	}
-	// Odd counts put nodes on the axis and the mid-plane.
-	nx |= 1
-	nz |= 1
+	nx, nz := mapNodes(xHalf, zHalf)
 	m := &MapData{Z: SymmetricSpace(zHalf, nz), X: SymmetricSpace(xHalf, nx), XHalf: xHalf, ZHalf: zHalf}
 	g := calc.FieldMap(co, cr.Winding, cr.Current, m.X, m.Z)
 	m.B = make([]float64, len(m.Z)*len(m.X))
