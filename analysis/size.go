@@ -3,11 +3,9 @@ package analysis
 import (
 	"fmt"
 	"math"
-	"runtime"
 	"sort"
 	"strconv"
 	"strings"
-	"sync"
 
 	"coilmemo/calc"
 	"coilmemo/calc/units"
@@ -356,25 +354,16 @@ func (z *sizer) enumerate() []Candidate {
 	return out
 }
 
-// searchAll computes the cheap figures of every choice, split over the
-// machine's cores; each choice's result depends on it alone, so the
-// outcome does not depend on the split.
+// searchAll computes the cheap figures of every choice on every core
+// (eachIndex); each choice's result depends on it alone, so the outcome
+// does not depend on the split.
 func (z *sizer) searchAll(cands []Candidate, evaluated *int) {
-	workers := min(runtime.GOMAXPROCS(0), max(1, len(cands)/64))
-	var wg sync.WaitGroup
-	counts := make([]int, workers)
-	for w := 0; w < workers; w++ {
-		wg.Add(1)
-		go func(w int) {
-			defer wg.Done()
-			d := z.base
-			d.Coils = append([]calc.Coil(nil), z.base.Coils...)
-			for i := w; i < len(cands); i += workers {
-				counts[w] += z.search(&d, &cands[i])
-			}
-		}(w)
-	}
-	wg.Wait()
+	counts := make([]int, len(cands))
+	eachIndex(len(cands), func(i int) {
+		d := z.base
+		d.Coils = append([]calc.Coil(nil), z.base.Coils...)
+		counts[i] = z.search(&d, &cands[i])
+	})
 	for _, n := range counts {
 		*evaluated += n
 	}
