@@ -839,7 +839,7 @@ func (z *sizer) noChoice(out *Sizing) string {
 			}
 		}
 		msg := fmt.Sprintf("size: no choice meets every requirement: %s meet those the layout and heat balance decide, but the %s evaluated in full, best first, fail",
-			countText(out.Feasible, "choice"), countText(out.Full, "choice"))
+			format.Count(out.Feasible, "choice", "choices"), format.Count(out.Full, "choice", "choices"))
 		if worst >= 0 {
 			what := z.cons[worst].Name
 			if worst == consApart {
@@ -881,13 +881,6 @@ func (z *sizer) noChoice(out *Sizing) string {
 		msg += " (they run above their insulation class, or have no steady temperature)"
 	}
 	return msg
-}
-
-func countText(n int, noun string) string {
-	if n == 1 {
-		return "1 " + noun
-	}
-	return format.Digits(n) + " " + noun + "s"
 }
 
 func limitValueText(v float64, unit string) string {

@@ -33,7 +33,7 @@ func (c *composer) selection() {
 		coils = "coils " + strings.Join(names, ", ") + " (all alike)"
 	}
 	c.para(fmt.Sprintf("The spec leaves %s of %s to be chosen for %s. Every whole turn count with every wire was searched: %s, %s of them meeting every requirement that the winding's layout and heat balance decide; %s evaluated in full, best first, to confirm the choice. The rest of this memo is the chosen design's.",
-		freeList(sz), coils, sz.Objective, count(sz.Discrete, "choice"), format.Digits(sz.Feasible), count(sz.Full, "was", "were")))
+		freeList(sz), coils, sz.Objective, format.Count(sz.Discrete, "choice", "choices"), format.Digits(sz.Feasible), format.Count(sz.Full, "was", "were")))
 	c.add(c.requirementTable(sz))
 	c.tradeFigure(sz)
 	c.frontFigure(sz)
@@ -46,21 +46,6 @@ func (c *composer) selection() {
 		c.para(t)
 	}
 	c.meritText(sz)
-}
-
-// count writes n with a noun in its number: "1 choice", "3 choices"; with
-// two words, the singular and plural verb.
-func count(n int, words ...string) string {
-	if len(words) == 2 {
-		if n == 1 {
-			return fmt.Sprintf("1 %s", words[0])
-		}
-		return fmt.Sprintf("%s %s", format.Digits(n), words[1])
-	}
-	if n == 1 {
-		return "1 " + words[0]
-	}
-	return format.Digits(n) + " " + words[0] + "s"
 }
 
 // freeList names the free keys with their ranges.
@@ -316,7 +301,7 @@ func (c *composer) whyText(sz *analysis.Sizing) string {
 	if sz.Binding >= 0 {
 		con := sz.Constraints[sz.Binding]
 		fmt.Fprintf(&b, " Each of the %s with a better %s fails a requirement; the one that stops most of them (%s) is %s.",
-			count(sz.Better, "choice"), strings.ToLower(oName(sz.Objective)), format.Digits(sz.BindingCount), c.constraintName(con, sz.Binding))
+			format.Count(sz.Better, "choice", "choices"), strings.ToLower(oName(sz.Objective)), format.Digits(sz.BindingCount), c.constraintName(con, sz.Binding))
 	}
 	if sz.Next >= 0 {
 		con := sz.Constraints[sz.Next]
@@ -379,7 +364,7 @@ func (c *composer) sizingSummary() (doc.Paragraph, bool) {
 	}
 	return doc.Paragraph{Spans: []doc.Span{{Text: "Sized for " + sz.Objective.String() + ": ", Strong: true},
 		{Text: fmt.Sprintf("%s (%s), the best that meets every requirement of the %s searched; see Design selection.",
-			what, objectiveValue(sz.Objective, ch.Objective), count(sz.Discrete, "choice"))}}}, true
+			what, objectiveValue(sz.Objective, ch.Objective), format.Count(sz.Discrete, "choice", "choices"))}}}, true
 }
 
 // cornerText says, for a spec with tolerances, that the search judged the
