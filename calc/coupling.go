@@ -159,39 +159,49 @@ func Couplings(coils []Coil, ws []Winding, currents, selfL []float64) []Coupling
 	var out []Coupling
 	for i := range coils {
 		for j := i + 1; j < len(coils); j++ {
-			a, b := coils[i], coils[j]
-			cp := Coupling{A: i, B: j, Distance: b.Centre.Sub(a.Centre).Norm(), Mutual: math.NaN(), K: math.NaN(), Dipole: nanVec()}
-			if ok, _ := coaxial(a, b); ok {
-				cp.Coaxial = true
-				cp.Mutual, cp.Overlap = CoaxialMutual(a, ws[i], b, ws[j])
-				if !cp.Overlap {
-					cp.Force = CoaxialForceBetween(a, ws[i], currents[i], b, ws[j], currents[j])
-					cp.Exact = true
-					if selfL[i] > 0 && selfL[j] > 0 {
-						cp.K = cp.Mutual / math.Sqrt(selfL[i]*selfL[j])
-					}
-				} else {
-					cp.Force = nanVec()
-				}
-			} else {
-				cp.Dipole = DipoleForceBetween(a, ws[i], currents[i], b, ws[j], currents[j])
-				cp.Force = cp.Dipole
-				if M := NeumannMutual(a, ws[i], b, ws[j]); !math.IsNaN(M) {
-					cp.Mutual = M
-					cp.Force = LorentzForceBetween(a, ws[i], currents[i], b, ws[j], currents[j])
-					cp.Exact = true
-					if selfL[i] > 0 && selfL[j] > 0 {
-						cp.K = cp.Mutual / math.Sqrt(selfL[i]*selfL[j])
-					}
-				} else if a.Form != Rectangle && b.Form != Rectangle {
-					cp.Overlap = true
-					cp.Force = nanVec()
-				}
-			}
-			out = append(out, cp)
+			out = append(out, Coupling{A: i, B: j})
 		}
 	}
+	// Each pair is independent: computed on every core, each into its own
+	// slot, so the result does not depend on the scheduling.
+	parallelBlocks(len(out), 1, func(k int) {
+		out[k] = coupling(coils, ws, currents, selfL, out[k].A, out[k].B)
+	})
 	return out
+}
+
+// coupling returns the Coupling of coil blocks i and j.
+func coupling(coils []Coil, ws []Winding, currents, selfL []float64, i, j int) Coupling {
+	a, b := coils[i], coils[j]
+	cp := Coupling{A: i, B: j, Distance: b.Centre.Sub(a.Centre).Norm(), Mutual: math.NaN(), K: math.NaN(), Dipole: nanVec()}
+	if ok, _ := coaxial(a, b); ok {
+		cp.Coaxial = true
+		cp.Mutual, cp.Overlap = CoaxialMutual(a, ws[i], b, ws[j])
+		if !cp.Overlap {
+			cp.Force = CoaxialForceBetween(a, ws[i], currents[i], b, ws[j], currents[j])
+			cp.Exact = true
+			if selfL[i] > 0 && selfL[j] > 0 {
+				cp.K = cp.Mutual / math.Sqrt(selfL[i]*selfL[j])
+			}
+		} else {
+			cp.Force = nanVec()
+		}
+		return cp
+	}
+	cp.Dipole = DipoleForceBetween(a, ws[i], currents[i], b, ws[j], currents[j])
+	cp.Force = cp.Dipole
+	if M := NeumannMutual(a, ws[i], b, ws[j]); !math.IsNaN(M) {
+		cp.Mutual = M
+		cp.Force = LorentzForceBetween(a, ws[i], currents[i], b, ws[j], currents[j])
+		cp.Exact = true
+		if selfL[i] > 0 && selfL[j] > 0 {
+			cp.K = cp.Mutual / math.Sqrt(selfL[i]*selfL[j])
+		}
+	} else if a.Form != Rectangle && b.Form != Rectangle {
+		cp.Overlap = true
+		cp.Force = nanVec()
+	}
+	return cp
 }
 
 // DipoleForceBetween returns the force, N, on the moment of block b

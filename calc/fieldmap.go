@@ -106,6 +106,13 @@ func (s *CoilSource) Map(x, z []float64) FieldGrid {
 // goroutines, handing out indices in blocks; it returns when all are done.
 // f must only write to places that belong to its own index.
 func parallel(n int, f func(i int)) {
+	parallelBlocks(n, parallelBlock, f)
+}
+
+// parallelBlocks is parallel with blocks of the given size (1 for tasks
+// that are each large, such as a pair of coils).
+func parallelBlocks(n, block int, f func(i int)) {
+	parallelBlock := block
 	workers := min(runtime.GOMAXPROCS(0), (n+parallelBlock-1)/parallelBlock)
 	if workers <= 1 {
 		for i := range n {
@@ -120,7 +127,7 @@ func parallel(n int, f func(i int)) {
 		go func() {
 			defer wg.Done()
 			for {
-				i0 := int(next.Add(parallelBlock)) - parallelBlock
+				i0 := int(next.Add(int64(parallelBlock))) - parallelBlock
 				if i0 >= n {
 					return
 				}

@@ -75,15 +75,21 @@ var neumannTrig = func() (t [neumannPoints][2]float64) {
 // and f2 in any position (see the file comment). NaN when the filaments
 // touch or the data are not usable.
 func FilamentMutual(f1, f2 Filament) float64 {
+	return filamentMutual(f1, f2, neumannTrig[:])
+}
+
+// filamentMutual is FilamentMutual by the trapezoidal rule on the points
+// of trig (cos θᵢ, sin θᵢ at θᵢ = i·2π/len(trig)).
+func filamentMutual(f1, f2 Filament, trig [][2]float64) float64 {
 	if !(f1.Radius > 0) || !(f2.Radius > 0) {
 		return math.NaN()
 	}
 	fr := CoilFrame(f1.Axis)
-	h := 2 * math.Pi / neumannPoints
+	h := 2 * math.Pi / float64(len(trig))
 	s := 0.0
 	fr2 := CoilFrame(f2.Axis)
-	for i := range neumannPoints {
-		p, t := f2.atTrig(fr2, neumannTrig[i][0], neumannTrig[i][1])
+	for _, cs := range trig {
+		p, t := f2.atTrig(fr2, cs[0], cs[1])
 		l := fr.ToLocal(p.Sub(f1.Centre))
 		rho := math.Hypot(l[0], l[1])
 		if !(rho > 0) {
@@ -104,15 +110,21 @@ func FilamentMutual(f1, f2 Filament) float64 {
 // field of filament f1 (current I1): F = I₂ ∮₂ dl₂ × B₁ (Lorentz), B₁ the
 // exact field of f1 (LoopField). NaN vector when the filaments touch.
 func FilamentForce(f1 Filament, I1 float64, f2 Filament, I2 float64) Vec {
+	return filamentForce(f1, I1, f2, I2, neumannTrig[:])
+}
+
+// filamentForce is FilamentForce by the trapezoidal rule on the points of
+// trig (see filamentMutual).
+func filamentForce(f1 Filament, I1 float64, f2 Filament, I2 float64, trig [][2]float64) Vec {
 	if !(f1.Radius > 0) || !(f2.Radius > 0) {
 		return nanVec()
 	}
 	fr := CoilFrame(f1.Axis)
-	h := 2 * math.Pi / neumannPoints
+	h := 2 * math.Pi / float64(len(trig))
 	var F Vec
 	fr2 := CoilFrame(f2.Axis)
-	for i := range neumannPoints {
-		p, t := f2.atTrig(fr2, neumannTrig[i][0], neumannTrig[i][1])
+	for _, cs := range trig {
+		p, t := f2.atTrig(fr2, cs[0], cs[1])
 		l := fr.ToLocal(p.Sub(f1.Centre))
 		rho := math.Hypot(l[0], l[1])
 		br, bz := LoopField(f1.Radius, I1, rho, l[2])
@@ -165,6 +177,9 @@ func NeumannMutual(a Coil, wa Winding, b Coil, wb Winding) float64 {
 	if a.Form == Rectangle || b.Form == Rectangle {
 		return math.NaN()
 	}
+	if M, ok := ruleMutual(a, wa, b, wb); ok {
+		return M
+	}
 	fa, na := blockFilaments(a, wa)
 	fb, nb := blockFilaments(b, wb)
 	if len(fa) == 0 || len(fb) == 0 {
@@ -186,6 +201,9 @@ func NeumannMutual(a Coil, wa Winding, b Coil, wb Winding) float64 {
 func LorentzForceBetween(a Coil, wa Winding, Ia float64, b Coil, wb Winding, Ib float64) Vec {
 	if a.Form == Rectangle || b.Form == Rectangle {
 		return nanVec()
+	}
+	if F, ok := ruleForce(a, wa, Ia, b, wb, Ib); ok {
+		return F
 	}
 	fa, na := blockFilaments(a, wa)
 	fb, nb := blockFilaments(b, wb)
