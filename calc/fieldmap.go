@@ -45,6 +45,17 @@ func FieldMap(c Coil, w Winding, I float64, x, z []float64) FieldGrid {
 
 // Map is FieldMap on a prepared source.
 func (s *CoilSource) Map(x, z []float64) FieldGrid {
+	return s.MapOutside(x, z, nil)
+}
+
+// MapOutside is Map with the nodes where skip(x, z) holds left
+// uncomputed, NaN (nil skip computes every node): for the nodes inside a
+// winding's own cross-section, which its map figure masks, and where the
+// filament model's field has no meaning below the scale of a wire. skip
+// must be symmetric as the winding is (the same at ±x, and at ±z when the
+// winding is symmetric about its mid-plane), as a node's mirror images
+// take its value.
+func (s *CoilSource) MapOutside(x, z []float64, skip func(x, z float64) bool) FieldGrid {
 	nx, nz := len(x), len(z)
 	g := FieldGrid{X: append([]float64(nil), x...), Z: append([]float64(nil), z...),
 		BX: make([]float64, nx*nz), BZ: make([]float64, nx*nz)}
@@ -78,6 +89,10 @@ func (s *CoilSource) Map(x, z []float64) FieldGrid {
 	}
 	parallel(len(todo), func(i int) {
 		k := todo[i]
+		if skip != nil && skip(x[k%nx], z[k/nx]) {
+			g.BX[k], g.BZ[k] = math.NaN(), math.NaN()
+			return
+		}
 		g.BX[k], g.BZ[k] = s.Local(x[k%nx], z[k/nx])
 	})
 	for _, k := range todo {

@@ -110,9 +110,9 @@ func ruleNodes(p *panel, g float64, out []cell) []cell {
 	}
 	qr, qz = min(qr, len(p.rr)), min(qz, len(p.rz))
 	rr, rz := p.rr[qr-1], p.rz[qz-1]
-	for a, r := range rr.x {
-		for b, z := range rz.x {
-			out = append(out, cell{r: r, z: z, n: rr.w[a] * rz.w[b]})
+	for a, xr := range rr.x {
+		for b, xz := range rz.x {
+			out = append(out, cell{r: p.ar.at(xr), z: p.az.at(xz), n: (rr.w[a] * p.ar.wmul) * (rz.w[b] * p.az.wmul)})
 		}
 	}
 	return out

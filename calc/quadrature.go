@@ -72,16 +72,18 @@ var ruleCache sync.Map // [2]int{g, n} → gaussRule
 // {0, …, g−1} (weights summing to g). n ≥ g gives the points themselves
 // with unit weights.
 func discreteGauss(g, n int) gaussRule {
-	if n >= g {
+	n = min(n, g)
+	key := [2]int{g, n}
+	if r, ok := ruleCache.Load(key); ok {
+		return r.(gaussRule)
+	}
+	if n == g {
 		r := gaussRule{x: make([]float64, g), w: make([]float64, g)}
 		for i := range g {
 			r.x[i], r.w[i] = float64(i), 1
 		}
+		ruleCache.Store(key, r)
 		return r
-	}
-	key := [2]int{g, n}
-	if r, ok := ruleCache.Load(key); ok {
-		return r.(gaussRule)
 	}
 	G := float64(g)
 	J := mat.NewSymDense(n, nil)
@@ -133,12 +135,22 @@ type panel struct {
 	i0, nr, j0, nz int
 	rlo, rhi       float64 // extent of the filament radii
 	zlo, zhi       float64 // extent of the filament axial positions
-	// rr[q−1], rz[q−1]: the q-node rules in r and z, positions in metres
-	// and weights in turns (times mult), for q up to min(n, quadMaxOrder)
-	// (a leaf: up to n, the last being the exact sum).
+	// rr[q−1], rz[q−1]: the q-node rules in r and z on the panel's own
+	// turn indices (discreteGauss, shared), for q up to min(n,
+	// quadMaxOrder) (a leaf: up to n, the last being the exact sum); node
+	// x of a rule sits at ar.at(x) with weight w·ar.wmul.
 	rr, rz []gaussRule
+	ar, az affine
 	kids   [2]*panel
 }
+
+// affine places a rule's nodes: position x0 + (off + x)·dx, weight w·wmul.
+type affine struct {
+	x0, dx, wmul float64
+	off          int
+}
+
+func (a affine) at(x float64) float64 { return a.x0 + (float64(a.off)+x)*a.dx }
 
 func newPanel(l *lattice, i0, nr, j0, nz int) *panel {
 	p := &panel{i0: i0, nr: nr, j0: j0, nz: nz}
@@ -151,25 +163,19 @@ func newPanel(l *lattice, i0, nr, j0, nz int) *panel {
 		p.zlo, p.zhi = p.zhi, p.zlo
 	}
 	leaf := nr <= quadLeaf && nz <= quadLeaf
-	mk := func(n, off int, x0, dx, wmul float64) []gaussRule {
+	mk := func(n int) []gaussRule {
 		top := min(n, quadMaxOrder)
 		if leaf {
 			top = n
 		}
 		out := make([]gaussRule, top)
 		for q := 1; q <= top; q++ {
-			g := discreteGauss(n, q)
-			r := gaussRule{x: make([]float64, len(g.x)), w: make([]float64, len(g.w))}
-			for k := range g.x {
-				r.x[k] = x0 + (float64(off)+g.x[k])*dx
-				r.w[k] = g.w[k] * wmul
-			}
-			out[q-1] = r
+			out[q-1] = discreteGauss(n, q)
 		}
 		return out
 	}
-	p.rr = mk(nr, i0, l.r0, l.dr, 1)
-	p.rz = mk(nz, j0, l.z0, l.dz, l.mult)
+	p.rr, p.ar = mk(nr), affine{x0: l.r0, dx: l.dr, wmul: 1, off: i0}
+	p.rz, p.az = mk(nz), affine{x0: l.z0, dx: l.dz, wmul: l.mult, off: j0}
 	if !leaf {
 		if nr >= nz {
 			h := nr / 2
@@ -239,10 +245,11 @@ func (p *panel) field(I, rho, z float64, br, bz *float64) {
 		return
 	}
 	rr, rz := p.rr[qr-1], p.rz[qz-1]
-	for a, r := range rr.x {
-		Ia := I * rr.w[a]
-		for b, zz := range rz.x {
-			dr, dz := LoopField(r, Ia*rz.w[b], rho, z-zz)
+	for a, xr := range rr.x {
+		r := p.ar.at(xr)
+		Ia := I * (rr.w[a] * p.ar.wmul)
+		for b, xz := range rz.x {
+			dr, dz := LoopField(r, Ia*(rz.w[b]*p.az.wmul), rho, z-p.az.at(xz))
 			*br += dr
 			*bz += dz
 		}
