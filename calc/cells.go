@@ -83,15 +83,52 @@ func cellsOf(w Winding, d float64, g int) []cell {
 	return out
 }
 
+// cellRows groups consecutive cells (in cellsOf's order) of equal radius
+// and turn count whose centroids step evenly along the axis into rows (a
+// row of cells holding mult = n turns each), so that the sums over pairs
+// of cells cost O(n) per pair of rows as the turn sums do (rowSum).
+func cellRows(cs []cell) []row {
+	var out []row
+	for i := 0; i < len(cs); {
+		j := i + 1
+		for j < len(cs) && cs[j].r == cs[i].r && cs[j].n == cs[i].n {
+			if j >= i+2 {
+				s := cs[i+1].z - cs[i].z
+				if math.Abs(cs[j].z-cs[i].z-float64(j-i)*s) > 1e-9*math.Abs(s)*float64(j-i) {
+					break
+				}
+			} else if cs[j].z == cs[i].z {
+				break
+			}
+			j++
+		}
+		r := row{r: cs[i].r, z0: cs[i].z, n: j - i, mult: int(cs[i].n)}
+		if j-i > 1 {
+			r.s = cs[i+1].z - cs[i].z
+		}
+		out = append(out, r)
+		i = j
+	}
+	return out
+}
+
 // CellInductance returns the self-inductance, H, of winding w (outer wire
 // diameter d) by the cell method above with g × g turns per cell.
 func CellInductance(w Winding, d float64, g int) float64 {
-	cs := cellsOf(w, d, g)
+	rs := cellRows(cellsOf(w, d, g))
 	L := 0.0
-	for i, a := range cs {
-		L += a.n * a.n * Mu0 * a.r * (math.Log(8*a.r/(0.44705*d*math.Sqrt(a.n))) - 2)
-		for _, b := range cs[i+1:] {
-			L += 2 * a.n * b.n * MutualInductance(a.r, b.r, b.z-a.z)
+	for i, p := range rs {
+		// A cell's own inductance in place of its coincident "pairs";
+		// rowSum multiplies the kernel by n².
+		self := func(a, b, dz float64) float64 {
+			if dz == 0 && a == b {
+				return Mu0 * a * (math.Log(8*a/(0.44705*d*math.Sqrt(float64(p.mult)))) - 2)
+			}
+			return MutualInductance(a, b, dz)
+		}
+		L += rowSum(p, p, 0, self)
+		for _, q := range rs[i+1:] {
+			L += 2 * rowSum(p, q, 0, MutualInductance)
 		}
 	}
 	return L
@@ -101,11 +138,11 @@ func CellInductance(w Winding, d float64, g int) float64 {
 // displaced by dz along the axis, by the cell method (filaments at the cell
 // centroids).
 func CellMutual(w Winding, d float64, g int, dz float64) float64 {
-	cs := cellsOf(w, d, g)
+	rs := cellRows(cellsOf(w, d, g))
 	M := 0.0
-	for _, a := range cs {
-		for _, b := range cs {
-			M += a.n * b.n * MutualInductance(a.r, b.r, b.z+dz-a.z)
+	for _, p := range rs {
+		for _, q := range rs {
+			M += rowSum(p, q, dz, MutualInductance)
 		}
 	}
 	return M

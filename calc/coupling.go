@@ -91,12 +91,12 @@ func windingSum(w1 Winding, d1 float64, w2 Winding, d2, dz float64, kernel func(
 		}
 		return s
 	}
-	c1 := cellsOf(w1, d1, cellSize(w1.TurnCount()))
-	c2 := cellsOf(w2, d2, cellSize(w2.TurnCount()))
+	c1 := cellRows(cellsOf(w1, d1, cellSize(w1.TurnCount())))
+	c2 := cellRows(cellsOf(w2, d2, cellSize(w2.TurnCount())))
 	s := 0.0
-	for _, a := range c1 {
-		for _, b := range c2 {
-			s += a.n * b.n * kernel(a.r, b.r, b.z+dz-a.z)
+	for _, p := range c1 {
+		for _, q := range c2 {
+			s += rowSum(p, q, dz, kernel)
 		}
 	}
 	return s

@@ -119,6 +119,31 @@ func discreteGauss(g, n int) gaussRule {
 	return r
 }
 
+var (
+	rulesMu    sync.RWMutex
+	rulesCache = map[[2]int][]gaussRule{}
+)
+
+// gaussRules returns the rules discreteGauss(g, q) for q = 1 … top, a
+// slice shared by every caller (read only).
+func gaussRules(g, top int) []gaussRule {
+	key := [2]int{g, top}
+	rulesMu.RLock()
+	rs, ok := rulesCache[key]
+	rulesMu.RUnlock()
+	if ok {
+		return rs
+	}
+	rs = make([]gaussRule, top)
+	for q := 1; q <= top; q++ {
+		rs[q-1] = discreteGauss(g, q)
+	}
+	rulesMu.Lock()
+	rulesCache[key] = rs
+	rulesMu.Unlock()
+	return rs
+}
+
 // lattice is a block of turns at radii r0 + i·dr (i < nr) and axial
 // positions z0 + j·dz (j < nz), each position holding mult turns.
 type lattice struct {
@@ -168,11 +193,7 @@ func newPanel(l *lattice, i0, nr, j0, nz int) *panel {
 		if leaf {
 			top = n
 		}
-		out := make([]gaussRule, top)
-		for q := 1; q <= top; q++ {
-			out[q-1] = discreteGauss(n, q)
-		}
-		return out
+		return gaussRules(n, top)
 	}
 	p.rr, p.ar = mk(nr), affine{x0: l.r0, dx: l.dr, wmul: 1, off: i0}
 	p.rz, p.az = mk(nz), affine{x0: l.z0, dx: l.dz, wmul: l.mult, off: j0}
