@@ -42,6 +42,12 @@ type CoilStudy struct {
 // StudyCoil is the CoilStudy of coil block co with results cr in the
 // given conditions.
 func StudyCoil(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) CoilStudy {
+	return studyCoil(co, cr, cond, nil)
+}
+
+// studyCoil is StudyCoil taking the map from maps when an identical
+// winding with the same current was mapped before (nil: always computed).
+func studyCoil(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, maps mapCache) CoilStudy {
 	w := cr.Winding
 	cs := CoilStudy{Outer: calc.WireOuter(co), Series: calc.SeriesCoils(co), ConductorArea: calc.ConductorArea(co.Wire.Bare)}
 	cs.Bundle = calc.BundleDiameter(cs.Outer, co.Turns)
@@ -56,7 +62,7 @@ func StudyCoil(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) CoilStudy
 		}
 	}
 	cs.Axis = profileOnAxis(co, cr, axisPoints)
-	cs.Map = coilMap(co, cr, cs)
+	cs.Map = maps.coilMap(co, cr, cs)
 	cs.Pair = pairCurves(co, cr)
 	cs.Inductance = inductanceParts(co, cr, cs.Outer)
 	cs.Heat = heatParts(co, cr, cond, cs.Outer)

@@ -123,6 +123,45 @@ func coilMap(co calc.Coil, cr calc.CoilResult, cs CoilStudy) *MapData {
 	return m
 }
 
+// mapKey is what a coil's own map depends on: its winding (laid out from
+// the form, dimensions, turns and wire) and current, in its own frame —
+// not its name or place, nor, for a circular coil, the direction of its
+// axis.
+type mapKey struct {
+	form                                    calc.Form
+	mean, inner, outer, length, build, w, h float64
+	turns                                   int
+	gauge                                   int
+	bare, wireOuter                         float64
+	spacing                                 float64
+	opposing                                bool
+	axis                                    calc.Vec
+	current                                 float64
+}
+
+// mapCache shares the maps of identical windings within one analysis (an
+// array of like coils is mapped once). A nil cache computes every map.
+type mapCache map[mapKey]*MapData
+
+func (mc mapCache) coilMap(co calc.Coil, cr calc.CoilResult, cs CoilStudy) *MapData {
+	if mc == nil {
+		return coilMap(co, cr, cs)
+	}
+	k := mapKey{form: co.Form, mean: co.MeanDiameter, inner: co.InnerDiameter, outer: co.OuterDiameter,
+		length: co.Length, build: co.RadialBuild, w: co.Width, h: co.Height, turns: co.Turns,
+		gauge: co.Wire.Gauge, bare: co.Wire.Bare, wireOuter: co.Wire.Outer,
+		spacing: co.Spacing, opposing: co.Opposing, current: cr.Current}
+	if co.Form == calc.Rectangle {
+		k.axis = co.Axis // a rectangle's map is taken through its frame
+	}
+	if m, ok := mc[k]; ok {
+		return m
+	}
+	m := coilMap(co, cr, cs)
+	mc[k] = m
+	return m
+}
+
 // inWinding reports whether the point at radius x and axial position z of
 // a circular coil's own frame lies inside one of its winding
 // cross-sections by more than a hair (10⁻⁹ of the section's size): nodes

@@ -165,9 +165,10 @@ func electricalFindings(i int, co calc.Coil, cr calc.CoilResult) []Finding {
 
 // reach returns the largest distance from origin along the unit direction
 // u at which |B| ≥ level, searching inward from rmax in steps of 25 % and
-// refining by bisection; 0 when the level is not reached at or beyond rmin,
-// which must lie outside every winding. Valid because the field outside
-// the windings falls monotonically with distance.
+// refining by bisection to 10⁻⁹ of the distance; 0 when the level is not
+// reached at or beyond rmin, which must lie outside every winding. Valid
+// because the field outside the windings falls monotonically with
+// distance.
 func reach(fm *calc.FieldModel, origin, u calc.Vec, level, rmin, rmax float64) float64 {
 	at := func(r float64) float64 { return fm.At(origin.Add(u.Scale(r))).Norm() }
 	if at(rmax) >= level {
@@ -177,7 +178,7 @@ func reach(fm *calc.FieldModel, origin, u calc.Vec, level, rmin, rmax float64) f
 	for {
 		lo := math.Max(hi/1.25, rmin)
 		if at(lo) >= level {
-			for range 50 {
+			for hi-lo > 1e-9*hi {
 				mid := 0.5 * (lo + hi)
 				if at(mid) >= level {
 					lo = mid
@@ -213,9 +214,10 @@ func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach
 			ir.Probes = append(ir.Probes, i)
 		}
 	}
-	for i, co := range d.Coils {
-		ir.Windings = append(ir.Windings, windingReach(fm, co, coils[i], ext))
-	}
+	// Each coil's search is independent: on every core, each into its own
+	// slot.
+	ir.Windings = make([]WindingReach, len(d.Coils))
+	eachIndex(len(d.Coils), func(i int) { ir.Windings[i] = windingReach(fm, d.Coils[i], coils[i], ext) })
 	return ir
 }
 

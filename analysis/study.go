@@ -107,8 +107,9 @@ func Analyse(s *spec.Spec, o Options) *Study {
 	st.Results = coredResults(s.Design, air, kinds)
 	st.Cooling = calc.EffectiveCooling(s.Design.Conditions.Cooling)
 	st.Limits = JudgeLimits(s.Design, st.Results)
+	maps := mapCache{}
 	for i, c := range s.Design.Coils {
-		st.Coils = append(st.Coils, StudyCoil(c, air.Coils[i], s.Design.Conditions)) // the winding alone; the core in Kinds
+		st.Coils = append(st.Coils, studyCoil(c, air.Coils[i], s.Design.Conditions, maps)) // the winding alone; the core in Kinds
 		st.Coils[i].Kinds = kinds[i]
 		coreStudy(&st.Coils[i], c, &st.Results.Coils[i], kinds[i].Core) // the core in the field figures: analysis/core.go
 	}

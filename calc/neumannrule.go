@@ -41,7 +41,7 @@ import (
 // (size/distance)² removed.
 
 // ruleEps is the target error per direction of the quadrature rules.
-const ruleEps = 1e-10
+const ruleEps = 1e-9
 
 // roundingFloor is the fraction of Σ|terms| below which a sum of terms
 // of both signs is rounding, not a result (a hundred times float64's
@@ -241,13 +241,23 @@ func ruleForce(a Coil, wa Winding, Ia float64, b Coil, wb Winding, Ib float64) (
 	if !ok {
 		return Vec{}, false
 	}
-	var F Vec
+	var F, mag Vec
 	for _, rp := range rps {
 		for j, g := range rp.fb {
 			trig := trigTable(rp.points[j])
 			for i, f := range rp.fa {
-				F = F.Add(filamentForce(f, Ia*rp.na[i], g, Ib*rp.nb[j], trig))
+				t := filamentForce(f, Ia*rp.na[i], g, Ib*rp.nb[j], trig)
+				F = F.Add(t)
+				mag = mag.Add(Vec{math.Abs(t[0]), math.Abs(t[1]), math.Abs(t[2])})
 			}
+		}
+	}
+	// Against the terms' sizes in every direction: a component is
+	// rounding when it is below the rounding of the largest.
+	floor := roundingFloor * math.Max(mag[0], math.Max(mag[1], mag[2]))
+	for k := range F {
+		if math.Abs(F[k]) <= floor {
+			F[k] = 0 // rounding of terms that cancel, as for M
 		}
 	}
 	return F, true

@@ -24,6 +24,15 @@ type composer struct {
 	cautions []doc.Callout // worded once: page 1 lists them, the Safety section gives them
 	// starts is the index into blocks where each section began.
 	starts []int
+	// mapped holds, for each field map already drawn, its coil and
+	// figure number: a coil whose winding and current repeat an earlier
+	// one's shares its map (analysis), and the memo refers back to it.
+	mapped map[*analysis.MapData]drawnMap
+}
+
+type drawnMap struct {
+	coil   string
+	figure int
 }
 
 // Section writes one part of the memo from the study its writer holds.

@@ -199,6 +199,10 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 	if m == nil {
 		return // no extent to map
 	}
+	if d, ok := c.mapped[m]; ok {
+		c.para(fmt.Sprintf("Coil %q has the same winding and current as coil %q: its map of |B| in its own frame is that of Figure %d.", co.Name, d.coil, d.figure))
+		return
+	}
 	var sections []figures.Section
 	xLabel, yLabel := "Axial position z", "Radial position ρ"
 	if u := co.Axis.Unit(); !(u[2] > 1-1e-12) {
@@ -230,6 +234,10 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 	drawMap := figures.FieldMap(figures.MapData{X: m.Z, Y: m.X, B: m.B, Sections: sections,
 		XLabel: xLabel, YLabel: yLabel})
 	n := c.figure + 1
+	if c.mapped == nil {
+		c.mapped = map[*analysis.MapData]drawnMap{}
+	}
+	c.mapped[m] = drawnMap{coil: co.Name, figure: n}
 	plane := "the meridian plane (through the axis)"
 	if co.Form == calc.Rectangle {
 		plane = "the plane through the axis and across the width"

@@ -151,7 +151,24 @@ func buildProblems(c calc.Coil, stated func(string) bool) []buildProblem {
 // section, every 2° round the axis; along each side of a rectangle) are
 // tested against the other's envelope.
 func windingsIntersect(a, b calc.Coil) bool {
+	if b.Centre.Sub(a.Centre).Norm() > 1.01*(roughRadius(a)+roughRadius(b)) {
+		return false // apart: no layout needed
+	}
 	return pointsInside(a, b) || pointsInside(b, a)
+}
+
+// roughRadius bounds from above the distance from a coil block's centre
+// to any point of its winding, from its stated dimensions (a wire or
+// bundle diameter of room on every side).
+func roughRadius(c calc.Coil) float64 {
+	d := calc.WireOuter(c)
+	pad := math.Max(d, calc.BundleDiameter(d, c.Turns))
+	if c.Form == calc.Rectangle {
+		return math.Hypot(c.Width/2, c.Height/2) + pad
+	}
+	r := math.Max(c.MeanDiameter/2+c.RadialBuild/2, c.OuterDiameter/2) + pad
+	z := c.Length/2 + math.Abs(c.Spacing)/2 + pad
+	return math.Hypot(r, z)
 }
 
 // pointsInside reports whether a sample point of a's winding lies inside

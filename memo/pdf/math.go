@@ -2,6 +2,8 @@ package pdf
 
 import (
 	"fmt"
+	"strings"
+	"sync"
 
 	"coilmemo/doc"
 	"coilmemo/memo/mathlayout"
@@ -102,11 +104,46 @@ type eqLayout struct {
 // description; when a line will not fit there even when broken, the
 // description goes above and the equation takes the full width.
 func (r *renderer) layoutEquation(e doc.Equation) eqLayout {
-	if el, ok := r.layoutEquationIn(e, false); ok {
+	k := eqKey{w: r.w, label: e.Label, desc: e.Description, lines: strings.Join(e.Lines, "\x00"), result: e.Result}
+	if el, ok := r.eqs.get(k); ok {
 		return el
 	}
-	el, _ := r.layoutEquationIn(e, true)
+	el, ok := r.layoutEquationIn(e, false)
+	if !ok {
+		el, _ = r.layoutEquationIn(e, true)
+	}
+	r.eqs.put(k, el)
 	return el
+}
+
+// eqKey is what an equation's layout depends on: its text and the
+// column's width (the fonts' metrics are fixed).
+type eqKey struct {
+	w                  float64
+	label, desc, lines string
+	result             bool
+}
+
+// eqCache keeps the layouts of the equations set so far; each is
+// measured, then set, in both passes, and a memo of many like coils
+// repeats equations. The layouts are read only once made. Safe for the
+// two passes' concurrent use.
+type eqCache struct {
+	mu sync.Mutex
+	m  map[eqKey]eqLayout
+}
+
+func (c *eqCache) get(k eqKey) (eqLayout, bool) {
+	c.mu.Lock()
+	defer c.mu.Unlock()
+	el, ok := c.m[k]
+	return el, ok
+}
+
+func (c *eqCache) put(k eqKey, el eqLayout) {
+	c.mu.Lock()
+	defer c.mu.Unlock()
+	c.m[k] = el
 }
 
 // layoutEquationIn sets the lines: a line that starts with a relation sign

@@ -71,6 +71,7 @@ func layOutTwice(d *doc.Document, o options) (*renderer, error) {
 		err   error
 	}
 	done := make(chan result, 1)
+	eqs := &eqCache{m: map[eqKey]eqLayout{}} // shared by both passes
 	go func() {
 		var res result
 		defer func() {
@@ -80,10 +81,12 @@ func layOutTwice(d *doc.Document, o options) (*renderer, error) {
 			done <- res
 		}()
 		dry := newRenderer(d, options{}, 0, true)
+		dry.eqs = eqs
 		res.err = dry.run()
 		res.pages, res.heads = dry.pdf.PageNo(), dry.headPages
 	}()
 	r := newRenderer(d, o, 0, false)
+	r.eqs = eqs
 	var dry result
 	var got bool
 	wait := func() result {
@@ -130,6 +133,7 @@ type renderer struct {
 	// when the contents are set; it may wait for the dry pass.
 	headingPages func() []int
 	onText       func(page int, s string)
+	eqs          *eqCache // equation layouts, shared with the other pass
 	onPlace      func(page int, x, y float64, s string)
 
 	x, w  float64 // current column
@@ -213,6 +217,7 @@ func newRenderer(d *doc.Document, o options, total int, dry bool) *renderer {
 		onText:  o.onText,
 		onPlace: o.onPlace,
 		outline: -1,
+		eqs:     &eqCache{m: map[eqKey]eqLayout{}},
 	}
 	created := d.Meta.Created
 	if created.IsZero() {
