@@ -333,7 +333,7 @@ func (c *composer) summaryTable() doc.Table {
 		}
 	}
 	blank := func(cells []doc.Cell) []doc.Cell {
-		for range idx[1:] {
+		for range max(len(idx)-1, 0) {
 			cells = append(cells, doc.Cell{})
 		}
 		return cells
