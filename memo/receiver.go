@@ -335,7 +335,7 @@ func (c *composer) receiverSummary() doc.Table {
 		}),
 		row("Self-resonance, with the load", func(i int) string { return orDash(rec(i).SelfResonance, "Hz", 3) }),
 		row("Resistance, a.c. at the design frequency", func(i int) string { return orDash(rec(i).Resistance, "Ω", 3) }),
-		row("Inductance (with the core, small signal)", func(i int) string { return orDash(c.j.Results.Coils[i].Inductance, "H", 3) }),
+		row("Inductance (small signal; with the core where there is one)", func(i int) string { return orDash(c.j.Results.Coils[i].Inductance, "H", 3) }),
 		row("Capacitance across the terminals (winding + load)", func(i int) string { return orDash(rec(i).Capacitance, "F", 3) }),
 		row("Effective area (flux linkage per tesla)", func(i int) string { return orDash(rec(i).EffectiveArea, "m²", 3) }),
 		row("Wire length / conductor mass", func(i int) string {
