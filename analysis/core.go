@@ -17,7 +17,8 @@ type CoilKinds struct {
 	// diameters beyond the core's end, T (NaN without a core or current).
 	EndField float64
 	// Air is the block's result without its core (the winding alone): the
-	// moment, inductance and mass before the core's share is added.
+	// moment, inductance and mass before the core's share is added;
+	// AirMass is the conductor's mass (the results' Mass adds the core's).
 	AirMoment     calc.Vec
 	AirInductance float64
 	AirMass       float64
@@ -31,6 +32,13 @@ type CoilKinds struct {
 	AboveResonance  bool
 	SelfResonance   float64
 	SelfCapacitance float64 // F, the winding's (with a pick-up coil's load)
+	// Capacitance is how the winding's own self-capacitance was found (its
+	// formula and figures; without a pick-up coil's load).
+	Capacitance calc.CapacitanceParts
+	// Temperature is the winding temperature, K, that the a.c. resistance
+	// and a pick-up coil's thermal noise are taken at: the steady mean, or
+	// 20 °C where the results carry none.
+	Temperature float64
 	// ACPower is the heating at R_ac of a driven winding at its r.m.s.
 	// current, W (NaN without a frequency).
 	ACPower float64
@@ -82,13 +90,15 @@ func kindsOf(d calc.Design, r calc.Results, cored bool) []CoilKinds {
 		if math.IsNaN(T) || !(T > 0) {
 			T = calc.CelsiusToKelvin(20)
 		}
+		k.Temperature = T
+		k.Capacitance = calc.SelfCapacitanceParts(c, w)
 		if IsReceiver(c) {
 			rec := calc.EvaluateReceiver(c, w, aEff, cr.RHot, L, T)
 			k.Receiver = &rec
 			k.SelfResonance, k.SelfCapacitance = rec.SelfResonance, rec.Capacitance
 			k.AboveResonance = rec.AboveResonance
 		} else {
-			k.SelfCapacitance = calc.SelfCapacitance(c, w)
+			k.SelfCapacitance = k.Capacitance.Capacitance
 			k.SelfResonance = calc.SelfResonance(L, k.SelfCapacitance)
 		}
 		if c.Frequency > 0 && c.Form != calc.Rectangle && c.Form != calc.Pair {

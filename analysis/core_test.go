@@ -208,3 +208,45 @@ func TestCoredFiguresMatchNumbers(t *testing.T) {
 		t.Errorf("profile's dipole %g, cored moment's μ0 m/(2π z³) %g", cs.Axis.Dipole[len(cs.Axis.Z)-1], dm)
 	}
 }
+
+// A cored coil's conductor mass is kept apart from the core's: the
+// conductor's is ρ A ℓ of its wire (copper, 8890 kg/m³ by IEC 60028, at
+// the wire length laid out), the core's ρ π D²/4 ℓ (7800 × π (4 mm)² ×
+// 140 mm), and the results' mass is their sum.
+func TestCoredMassesApart(t *testing.T) {
+	st := studyOf(t, rodSpec+"core-permeability = 1000\n```\n")
+	k := st.Coils[0].Kinds
+	cr := st.Results.Coils[0]
+	d := st.Spec.Design.Coils[0].Wire.Bare
+	wire := 8890 * math.Pi * d * d / 4 * cr.Length
+	if math.Abs(k.AirMass/wire-1) > 1e-9 {
+		t.Errorf("conductor mass %g kg, want ρ A ℓ = %g kg", k.AirMass, wire)
+	}
+	core := 7800 * math.Pi * 0.004 * 0.004 * 0.140
+	if math.Abs(k.Core.Mass/core-1) > 1e-12 {
+		t.Errorf("core mass %g kg, want %g kg", k.Core.Mass, core)
+	}
+	if math.Abs(cr.Mass-(wire+core)) > 1e-9*cr.Mass {
+		t.Errorf("total mass %g kg, want conductor + core %g kg", cr.Mass, wire+core)
+	}
+}
+
+// The self-capacitance's parts, which the memo derives, are the ones the
+// receiver's figure was computed from: a single-layer solenoid by
+// Medhurst's fit on its mean diameter and length, a layered winding by the
+// energy method over its layers.
+func TestSelfCapacitanceParts(t *testing.T) {
+	one := studyOf(t, "```coil\nname = R\nform = solenoid\nmean-diameter = 20 mm\nlength = 30 mm\nturns = 100\nwire = AWG 30\nfrequency = 2 kHz\n```\n")
+	p := one.Coils[0].Kinds.Capacitance
+	if p.Layered || p.Diameter != 0.020 || p.Length != 0.030 || p.Capacitance != calc.MedhurstCapacitance(0.020, 0.030) ||
+		p.Capacitance != one.Coils[0].Kinds.Receiver.SelfCapacitance {
+		t.Errorf("single layer: parts %+v, receiver C_s %g", p, one.Coils[0].Kinds.Receiver.SelfCapacitance)
+	}
+	many := studyOf(t, "```coil\nname = R\nform = solenoid\ninner-diameter = 12 mm\nouter-diameter = 18 mm\nlength = 20 mm\nturns = 400\nwire = AWG 38\nfrequency = 1 kHz\n```\n")
+	q := many.Coils[0].Kinds.Capacitance
+	w := many.Results.Coils[0].Winding
+	if !q.Layered || q.Layers != w.LayerCount || q.Capacitance != calc.LayeredCapacitance(q.LayerCapacitance, q.Layers) ||
+		q.Capacitance != many.Coils[0].Kinds.Receiver.SelfCapacitance {
+		t.Errorf("layered: parts %+v (%d layers), receiver C_s %g", q, w.LayerCount, many.Coils[0].Kinds.Receiver.SelfCapacitance)
+	}
+}

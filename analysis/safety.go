@@ -86,7 +86,8 @@ type ImplantReach struct {
 // Surface the largest |B| found at its outer surface (where a hand can
 // reach it), and Distance the largest distance from that surface, along
 // the coil's axis beyond its end faces and outward in its plane, at which
-// |B| still reaches ImplantField (0 when it does not).
+// |B| still reaches ImplantField (0 when it does not). For a cored coil
+// the surface includes the rod's end faces, and the field the core's.
 type WindingReach struct {
 	Surface  float64 // T
 	Distance float64 // m
@@ -168,9 +169,9 @@ func electricalFindings(i int, co calc.Coil, cr calc.CoilResult) []Finding {
 // refining by bisection to 10⁻⁹ of the distance; 0 when the level is not
 // reached at or beyond rmin, which must lie outside every winding. Valid
 // because the field outside the windings falls monotonically with
-// distance.
-func reach(fm *calc.FieldModel, origin, u calc.Vec, level, rmin, rmax float64) float64 {
-	at := func(r float64) float64 { return fm.At(origin.Add(u.Scale(r))).Norm() }
+// distance. field is the field of all coils (implantField).
+func reach(field func(calc.Vec) calc.Vec, origin, u calc.Vec, level, rmin, rmax float64) float64 {
+	at := func(r float64) float64 { return field(origin.Add(u.Scale(r))).Norm() }
 	if at(rmax) >= level {
 		return rmax
 	}
@@ -195,14 +196,53 @@ func reach(fm *calc.FieldModel, origin, u calc.Vec, level, rmin, rmax float64) f
 	}
 }
 
-func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach {
+// implantField is the field, T, of all coils at their operating currents
+// that the implant level is searched in: the windings' (calc.FieldModel)
+// and, for every cored coil block with current, its core's by the rod's
+// pole model (calc.CorePoleField), which dominates near the rod.
+func implantField(d calc.Design, coils []CoilStudy) func(calc.Vec) calc.Vec {
+	fm := calc.NewFieldModel(d)
+	type cored struct {
+		c calc.Coil
+		k calc.CoreResult
+	}
+	var cores []cored
+	for i, co := range d.Coils {
+		if i < len(coils) && fm.Currents[i] != 0 {
+			if k := coils[i].Kinds.Core; k != nil && len(k.Charge) > 0 {
+				cores = append(cores, cored{co, *k})
+			}
+		}
+	}
+	return func(p calc.Vec) calc.Vec {
+		b := fm.At(p)
+		for _, c := range cores {
+			b = b.Add(calc.CorePoleField(c.c, c.k, p))
+		}
+		return b
+	}
+}
+
+// reachExtent is DesignExtent widened to take in every core: the radius
+// about the origin of a sphere that holds every winding and rod.
+func reachExtent(d calc.Design) float64 {
 	ext := DesignExtent(d)
+	for _, co := range d.Coils {
+		if co.Core.Present() && co.Core.Length > 0 && co.Core.Diameter > 0 {
+			ext = math.Max(ext, co.Centre.Norm()+math.Hypot(co.Core.Diameter/2, co.Core.Length/2))
+		}
+	}
+	return ext
+}
+
+func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach {
+	ext := reachExtent(d)
 	ir := ImplantReach{Origin: r.FieldCentre.Norm()}
 	if !(ext > 0) {
 		return ir
 	}
 	ir.Searched = true
-	fm := calc.NewFieldModel(d)
+	fm := implantField(d, coils)
 	// Along the axis the search may come close to the origin (a bore holds
 	// no conductor); in the plane it stops outside the windings.
 	ir.Axial = math.Max(reach(fm, calc.Vec{}, calc.Vec{0, 0, 1}, ImplantField, ext*0.01, ext*1e3),
@@ -224,8 +264,9 @@ func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach
 // windingReach searches the field of all coils outward from the surface
 // of one coil block's winding: from the middle of each end face along the
 // axis, and from the outer surface in the coil's plane (for a rectangle,
-// from the middle of each side across it), in both senses.
-func windingReach(fm *calc.FieldModel, co calc.Coil, cs CoilStudy, ext float64) WindingReach {
+// from the middle of each side across it), in both senses; for a cored
+// coil also from the middle of each end face of the rod along the axis.
+func windingReach(fm func(calc.Vec) calc.Vec, co calc.Coil, cs CoilStudy, ext float64) WindingReach {
 	fr := calc.CoilFrame(co.Axis)
 	e := cs.Envelope
 	type start struct {
@@ -254,10 +295,15 @@ func windingReach(fm *calc.FieldModel, co calc.Coil, cs CoilStudy, ext float64) 
 					start{c.Add(fr.E1.Scale(rm)).Add(fr.U.Scale(s * (e.Z1 + gap))), fr.U.Scale(s)})
 			}
 		}
+		if cs.Kinds.Core != nil && co.Core.Length > 0 {
+			for _, s := range []float64{1, -1} {
+				starts = append(starts, start{co.Centre.Add(fr.U.Scale(s * (co.Core.Length/2 + gap))), fr.U.Scale(s)})
+			}
+		}
 	}
 	var wr WindingReach
 	for _, st := range starts {
-		b := fm.At(st.at).Norm()
+		b := fm(st.at).Norm()
 		if math.IsNaN(b) {
 			continue
 		}

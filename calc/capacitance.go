@@ -78,13 +78,38 @@ func LayeredCapacitance(cl float64, p int) float64 {
 // the turns of a layer facing the next one, each of the length of a turn at
 // the radius between the two layers. NaN when the wire's overall diameter
 // is not above its bare diameter (no enamel to compute through) for a
-// layered winding, or for a Rectangle or Pair (not modelled).
+// layered winding, or for a Rectangle or Pair (not modelled). Its parts are
+// SelfCapacitanceParts.
 func SelfCapacitance(c Coil, w Winding) float64 {
+	return SelfCapacitanceParts(c, w).Capacitance
+}
+
+// CapacitanceParts is how SelfCapacitance found a winding's
+// self-capacitance: by MedhurstCapacitance of Diameter and Length, or
+// (Layered) by LayeredCapacitance of LayerCapacitance C_l, the mean gap's,
+// over Layers layers. Capacitance is the result, F (NaN where not modelled).
+type CapacitanceParts struct {
+	Layered          bool
+	Diameter, Length float64 // m, Medhurst's D and ℓ
+	Layers           int
+	LayerCapacitance float64 // F
+	Capacitance      float64 // F
+}
+
+// SelfCapacitanceParts is SelfCapacitance with the figures it went through.
+func SelfCapacitanceParts(c Coil, w Winding) CapacitanceParts {
+	n := math.NaN()
+	out := CapacitanceParts{Diameter: n, Length: n, LayerCapacitance: n, Capacitance: n}
 	if c.Form == Rectangle || c.Form == Pair || w.TurnCount() == 0 {
-		return math.NaN()
+		return out
+	}
+	medhurst := func(D, l float64) CapacitanceParts {
+		out.Diameter, out.Length, out.Layers = D, l, 1
+		out.Capacitance = MedhurstCapacitance(D, l)
+		return out
 	}
 	if !w.Thin && w.LayerCount == 1 {
-		return MedhurstCapacitance(c.MeanDiameter, c.Length)
+		return medhurst(c.MeanDiameter, c.Length)
 	}
 	r, ro := c.Wire.Bare/2, c.Wire.Outer/2
 	layers, perLayer := w.LayerCount, w.TurnsPerLayer
@@ -95,7 +120,7 @@ func SelfCapacitance(c Coil, w Winding) float64 {
 		radius = func(int) float64 { return c.MeanDiameter / 2 }
 	}
 	if layers < 2 {
-		return MedhurstCapacitance(c.MeanDiameter, math.Max(c.Length, c.Wire.Outer))
+		return medhurst(c.MeanDiameter, math.Max(c.Length, c.Wire.Outer))
 	}
 	var cl float64
 	for k := 0; k < layers-1; k++ {
@@ -106,7 +131,9 @@ func SelfCapacitance(c Coil, w Winding) float64 {
 		cl += float64(n) * TurnToTurnCapacitance(r, ro, 2*math.Pi*radius(k), EnamelPermittivity)
 	}
 	cl /= float64(layers - 1) // the mean gap's capacitance
-	return LayeredCapacitance(cl, layers)
+	out.Layered, out.Layers, out.LayerCapacitance = true, layers, cl
+	out.Capacitance = LayeredCapacitance(cl, layers)
+	return out
 }
 
 // SelfResonance returns the self-resonant frequency, Hz, of inductance L,

@@ -39,8 +39,10 @@ func (c *composer) assumptions() {
 		item(lead, false, text)
 	}
 	general("Filament model", templates.Text("assume-filament", nil))
-	general("Cooling", coolingAssumption(d, c.j.Cooling))
-	general("Thermal model", templates.Text("assume-thermal", nil))
+	if !c.receiverOnly() { // a pick-up coil is not heated
+		general("Cooling", coolingAssumption(d, c.j.Cooling))
+		general("Thermal model", templates.Text("assume-thermal", nil))
+	}
 	c.add(doc.List{Items: items})
 	items = nil
 	for i, co := range d.Coils {
@@ -48,7 +50,11 @@ func (c *composer) assumptions() {
 			break
 		}
 		cr := r.Coils[i]
-		for _, f := range validityFlags(co, cr, &c.j.Coils[i], d) {
+		flags := validityFlags(co, cr, &c.j.Coils[i], d)
+		if c.pickUp(i) {
+			flags = pickUpFlags(co, cr, &c.j.Coils[i], d) // memo/receiver.go
+		}
+		for _, f := range flags {
 			item(fmt.Sprintf("%s, %s", f.what, co.Name), f.flagged, f.text)
 		}
 	}

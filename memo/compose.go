@@ -270,17 +270,22 @@ func requirementsVerdict(n, failed int) string {
 	return fmt.Sprintf("%d of the %d stated requirements are NOT met.", failed, n)
 }
 
+// summaryTable is page 1's table of the driven coils (a pick-up coil has
+// its own, receiverSummary): a column per driven coil block, the totals of
+// all coils below. A cored coil's conductor and core masses are stated
+// apart, with their total.
 func (c *composer) summaryTable() doc.Table {
 	r := c.j.Results
 	d := c.j.Spec.Design
+	idx := c.drivenCoils() // memo/receiver.go
 	head := []string{"Result"}
-	for _, cr := range r.Coils {
-		head = append(head, cr.Name)
+	for _, i := range idx {
+		head = append(head, r.Coils[i].Name)
 	}
 	row := func(name string, f func(i int, cr calc.CoilResult) string) []doc.Cell {
 		cells := []doc.Cell{{Text: name}}
-		for i, cr := range r.Coils {
-			cells = append(cells, doc.Cell{Text: f(i, cr)})
+		for _, i := range idx {
+			cells = append(cells, doc.Cell{Text: f(i, r.Coils[i])})
 		}
 		return cells
 	}
@@ -303,12 +308,28 @@ func (c *composer) summaryTable() doc.Table {
 			return Eng(Celsius(d.Coils[i].InsulationClass), "°C", 3)
 		}),
 		row("Inductance", func(_ int, cr calc.CoilResult) string { return Eng(cr.Inductance, "H", 3) }),
-		row("Wire length / conductor mass", func(_ int, cr calc.CoilResult) string {
-			return Eng(cr.Length, "m", 3) + " / " + Eng(cr.Mass, "kg", 3)
+		row("Wire length / conductor mass", func(i int, cr calc.CoilResult) string {
+			return Eng(cr.Length, "m", 3) + " / " + Eng(c.j.Coils[i].Kinds.AirMass, "kg", 3)
 		}),
 	}
-	for _, co := range d.Coils {
-		if co.Form == calc.Pair && co.Opposing {
+	anyCore := false
+	for _, i := range idx {
+		anyCore = anyCore || c.j.Coils[i].Kinds.Core != nil
+	}
+	if anyCore {
+		rows = append(rows, row("Core mass / total mass (conductor and core)", func(i int, cr calc.CoilResult) string {
+			k := c.j.Coils[i].Kinds.Core
+			switch {
+			case k == nil:
+				return "—"
+			case math.IsNaN(k.Mass):
+				return "no core density stated"
+			}
+			return Eng(k.Mass, "kg", 3) + " / " + Eng(cr.Mass, "kg", 3)
+		}))
+	}
+	for _, i := range idx {
+		if co := d.Coils[i]; co.Form == calc.Pair && co.Opposing {
 			// A gradient pair's purpose is its gradient: its moment and
 			// centre field are zero by design.
 			rows = append(rows[:1], append([][]doc.Cell{row("Axial gradient at centre ∂Bz/∂z", func(k int, cr calc.CoilResult) string {
@@ -320,27 +341,29 @@ func (c *composer) summaryTable() doc.Table {
 			break
 		}
 	}
-	if len(r.Coils) > 1 {
+	blank := func(cells []doc.Cell) []doc.Cell {
+		for range max(len(idx)-1, 0) {
+			cells = append(cells, doc.Cell{})
+		}
+		return cells
+	}
+	if len(idx) > 1 {
 		total := func(name, v string) []doc.Cell {
-			cells := []doc.Cell{{Text: name}, {Text: v, Strong: true}}
-			for range r.Coils[1:] {
-				cells = append(cells, doc.Cell{})
-			}
-			return cells
+			return blank([]doc.Cell{{Text: name}, {Text: v, Strong: true}})
 		}
 		rows = append(rows,
 			total("All coils: moment |m|", Eng(r.Moment.Norm(), "A·m²", 3)),
 			total("All coils: |B| at origin", Eng(r.FieldCentre.Norm(), "T", 3)))
 	}
 	if d.Conditions.BackgroundField.Norm() > 0 {
-		cells := []doc.Cell{{Text: "Torque in background field (max / design angle)"}, {Text: Eng(r.TorqueMax, "N·m", 3) + " / " + Eng(r.TorqueDesign, "N·m", 3)}}
-		for range r.Coils[1:] {
-			cells = append(cells, doc.Cell{})
-		}
-		rows = append(rows, cells)
+		rows = append(rows, blank([]doc.Cell{{Text: "Torque in background field (max / design angle)"}, {Text: Eng(r.TorqueMax, "N·m", 3) + " / " + Eng(r.TorqueDesign, "N·m", 3)}}))
 	}
-	align, widths := perCoilColumns(len(r.Coils), 2.2, 1.5)
-	return doc.Table{Caption: "Headline results at the steady operating point", Header: head, Rows: rows, Align: align, Widths: widths}
+	align, widths := perCoilColumns(len(idx), 2.2, 1.5)
+	caption := "Headline results at the steady operating point"
+	if len(idx) < len(r.Coils) {
+		caption += " (driven coils; the pick-up coils in the next table)"
+	}
+	return doc.Table{Caption: caption, Header: head, Rows: rows, Align: align, Widths: widths}
 }
 
 // powerLabel names the power row: averaged over the duty cycle only where

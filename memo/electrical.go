@@ -25,6 +25,10 @@ func (c *composer) electrical() {
 	}
 	c.heading(1, "Inductance and switching")
 	c.para(templates.Text("electrical", nil))
+	if p := c.pickUpNote("it has no switching transient, stored energy or drive figures, and its inductance is derived with its other figures in the Method and results section",
+		"they have no switching transient, stored energy or drive figures, and their inductances are derived with their other figures in the Method and results section"); p != "" {
+		c.para(p)
+	}
 	for i, co := range d.Coils {
 		if i >= len(r.Coils) {
 			break
@@ -32,6 +36,9 @@ func (c *composer) electrical() {
 		cr := r.Coils[i]
 		if math.IsNaN(cr.Inductance) || cr.Winding.TurnCount() == 0 {
 			continue
+		}
+		if c.pickUp(i) {
+			continue // no current: no switching or drive figures (the note above)
 		}
 		c.heading(2, fmt.Sprintf("Coil %q", co.Name))
 		c.derive(selfInductanceSteps(co, cr, &c.j.Coils[i])...)
@@ -323,7 +330,15 @@ func (c *composer) couplings() {
 			k = Sig(cp.K, 3)
 			method = "Lorentz integral I₂∮dl × B₁ (Neumann's M)"
 		}
-		if !cp.Force.IsNaN() && !cp.Overlap {
+		switch pa, pb := c.pickUp(cp.A), c.pickUp(cp.B); {
+		case cp.Overlap:
+		case pa || pb:
+			name := a.Name
+			if pb {
+				name = b.Name
+			}
+			F = fmt.Sprintf("none: %q carries no current", name)
+		case !cp.Force.IsNaN():
 			F = forceText(cp, a, b)
 		}
 		rows = append(rows, []doc.Cell{{Text: a.Name + " → " + b.Name}, {Text: arr}, {Text: Eng(cp.Distance, "m", 3)},
@@ -375,15 +390,16 @@ func (c *composer) gradientForce() {
 	c.heading(2, "Force in the stated field gradient")
 	c.para(fmt.Sprintf("The background field is stated to have a gradient of %s. A moment m feels the force F = ∇(m·B) (Jackson, Classical Electrodynamics, eq. 5.69); with the field component along the moment changing at G along the moment, F = m·G. It is the largest such force when G is the largest rate of change of that component in any direction.",
 		Eng(G, "T/m", 3)))
-	for i, co := range d.Coils {
-		if i >= len(r.Coils) {
-			break
-		}
-		cr := r.Coils[i]
+	driven := c.drivenCoils()
+	for _, i := range driven {
+		co, cr := d.Coils[i], r.Coils[i]
 		c.derive(Step{What: fmt.Sprintf("Force on the moment of coil %q", co.Name), Symbolic: `F = m G`,
 			Numbers: fmt.Sprintf(`%s \cdot %s`, Q(cr.Moment.Norm(), "A·m²", 4), Q(G, "T/m", 3)), Result: Q(cr.GradientForce, "N", 3)})
 	}
-	if len(r.Coils) > 1 {
+	if p := c.pickUpNote("it has no moment and feels no such force", "they have no moment and feel no such force"); p != "" {
+		c.para(p)
+	}
+	if len(driven) > 1 {
 		c.derive(Step{What: "Force on the total moment of all coils", Symbolic: `F = |\vec{m}| G`,
 			Numbers: fmt.Sprintf(`%s \cdot %s`, Q(r.Moment.Norm(), "A·m²", 4), Q(G, "T/m", 3)), Result: Q(r.GradientForce, "N", 3)})
 	}

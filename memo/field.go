@@ -23,8 +23,17 @@ func (c *composer) field() {
 	d := c.j.Spec.Design
 	r := c.j.Results
 	B0 := r.FieldCentre
-	c.para(fmt.Sprintf("With every coil at its steady operating current, the flux density at the origin is |B| = %s (Bx = %s, By = %s, Bz = %s). The background field is not included in these figures.",
-		Eng(B0.Norm(), "T", 4), Eng(B0[0], "T", 4), Eng(B0[1], "T", 4), Eng(B0[2], "T", 4)))
+	every := "every coil"
+	if c.anyReceiver() {
+		every = "every driven coil"
+	}
+	c.para(fmt.Sprintf("With %s at its steady operating current, the flux density at the origin is |B| = %s (Bx = %s, By = %s, Bz = %s). The background field is not included in these figures.",
+		every, Eng(B0.Norm(), "T", 4), Eng(B0[0], "T", 4), Eng(B0[1], "T", 4), Eng(B0[2], "T", 4)))
+	if p := c.pickUpNote(
+		"it makes no field of its own and has no figures here; the field figures are the driven coils', and its response to a field is in the section Pick-up and a.c. figures",
+		"they make no field of their own and have no figures here; the field figures are the driven coils', and their response to a field is in the section Pick-up and a.c. figures"); p != "" {
+		c.para(p)
+	}
 	c.para("Fields are computed from the exact field of each circular turn (complete elliptic integrals) or of each straight side of a rectangle (closed-form Biot–Savart integral), superposed. For maps and profiles the turns of a thick winding are grouped by Gauss quadrature over the winding cross-section, which reproduces the turn-by-turn sum to better than one part in 10⁹ and falls back to the individual turns near the winding.")
 	if len(r.Probes) > 0 {
 		var rows [][]doc.Cell
@@ -39,8 +48,8 @@ func (c *composer) field() {
 			Widths: []float64{1.3, 2, 1, 1, 1, 1.1},
 			Align:  []doc.Align{doc.Left, doc.Left, doc.Right, doc.Right, doc.Right, doc.Right}})
 	}
-	for i, co := range d.Coils {
-		cr := r.Coils[i]
+	for _, i := range c.drivenCoils() {
+		co, cr := d.Coils[i], r.Coils[i]
 		c.heading(2, fmt.Sprintf("Field of coil %q", co.Name))
 		cs := &c.j.Coils[i]
 		c.crossSection(co, cr, cs)

@@ -88,6 +88,9 @@ func (c *composer) allCoilsMap() {
 	c.heading(2, "Field of all coils together")
 	n := c.figure + 1
 	text := fmt.Sprintf("Figure %d maps |B| of all %d coil blocks energised together over the xz-plane through the origin, on a logarithmic colour scale with contour lines as in the maps above.", n, len(d.Coils))
+	if c.anyReceiver() {
+		text = fmt.Sprintf("Figure %d maps |B| over the xz-plane through the origin with the driven coils energised together and the pick-up coils' windings drawn in, on a logarithmic colour scale with contour lines as in the maps above.", n)
+	}
 	caption := "|B| of all coils together over the xz-plane through the origin (viridis, logarithmic; contours at the values marked on the colour bar)"
 	if len(undrawn) > 0 {
 		text += fmt.Sprintf(" The windings of %s cross this plane obliquely and are not drawn (the map is left blank where they pass); their field is included.", joinAnd(undrawn))

@@ -21,14 +21,30 @@ func wireName(w calc.Wire) string {
 // derivation.
 func (c *composer) method() {
 	c.heading(1, "Method and results")
-	c.para(templates.Text("method", nil))
+	switch {
+	case c.receiverOnly():
+		c.para(templates.Text("method-pickup", map[string]bool{"Only": true}))
+	case c.anyReceiver():
+		c.para(templates.Text("method", nil))
+		c.para(templates.Text("method-pickup", map[string]bool{"Only": false}))
+	default:
+		c.para(templates.Text("method", nil))
+	}
 	d := c.j.Spec.Design
 	r := c.j.Results
 	for i, co := range d.Coils {
 		if i >= len(r.Coils) {
 			break
 		}
-		c.heading(2, fmt.Sprintf("Coil %q (%s, %d turns, %s)", co.Name, analysis.FormName(co), co.Turns, wireName(co.Wire)))
+		what := analysis.FormName(co)
+		if c.pickUp(i) {
+			what += ", pick-up"
+		}
+		c.heading(2, fmt.Sprintf("Coil %q (%s, %d turns, %s)", co.Name, what, co.Turns, wireName(co.Wire)))
+		if c.pickUp(i) {
+			c.derive(c.pickUpSteps(i)...) // memo/receiver.go
+			continue
+		}
 		c.derive(coilSteps(co, r.Coils[i], &c.j.Coils[i])...)
 	}
 }
@@ -37,6 +53,82 @@ func (c *composer) method() {
 // temperature and operating point, moment and field (the inductance and the
 // heat balance follow in sections of their own).
 func coilSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []Step {
+	steps := windingSteps(co, cr, cs)
+	add := func(s ...Step) { steps = append(steps, s...) }
+	add(thermalSteps(co, cr)...)
+	add(hotResistanceStep(co, cr)...)
+	A := cs.ConductorArea
+	// An a.c. drive heats at R_ac = F_R R(T) (Dowell's factor at the mean
+	// temperature) and a voltage drive's current is V/|Z|.
+	F := cr.Heat.Problem.ACFactor
+	ac := F > 1 || cr.Reactance > 0
+	if !(F > 1) {
+		F = 1
+	}
+	switch {
+	case co.Drive == calc.VoltageDrive && ac:
+		add(Step{What: "Current under a.c. voltage drive: the impedance of the a.c. resistance F_R R(T) (Dowell's factor at the mean temperature) and the reactance ωL",
+			Symbolic: `I = \frac{V}{\sqrt{(F_R R(T))^2 + (\omega L)^2}}`,
+			Numbers:  fmt.Sprintf(`\frac{%s}{\sqrt{(%s \cdot %s)^2 + %s^2}}`, Q(co.Voltage, "V", 4), N(F, 5), Q(cr.RHot, "Ω", 4), Paren(Q(cr.Reactance, "Ω", 4))),
+			Result:   Q(cr.Current, "A", 4)})
+		add(Step{What: "Current when cold (switch-on)", Symbolic: `I_{20} = \frac{V}{R_{20}}`,
+			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(co.Voltage, "V", 4), Q(cr.R20, "Ω", 4)), Result: Q(cr.ColdCurrent, "A", 4)})
+	case co.Drive == calc.VoltageDrive:
+		add(Step{What: "Current under voltage drive, at the hot resistance", Symbolic: `I = \frac{V}{R(T)}`,
+			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(co.Voltage, "V", 4), Q(cr.RHot, "Ω", 4)), Result: Q(cr.Current, "A", 4)})
+		add(Step{What: "Current when cold (switch-on)", Symbolic: `I_{20} = \frac{V}{R_{20}}`,
+			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(co.Voltage, "V", 4), Q(cr.R20, "Ω", 4)), Result: Q(cr.ColdCurrent, "A", 4)})
+	default:
+		add(Step{What: "Voltage under current drive, at the hot resistance", Symbolic: `V = I\, R(T)`,
+			Numbers: fmt.Sprintf(`%s \cdot %s`, Q(cr.Current, "A", 4), Q(cr.RHot, "Ω", 4)), Result: Q(cr.Voltage, "V", 4)})
+	}
+	pOn := cr.PowerOn
+	if F > 1 {
+		add(Step{What: "Power while energised, at the a.c. resistance F_R R(T): Dowell's factor for skin and proximity losses at the mean temperature",
+			Symbolic: `P = I^2 F_R R(T)`,
+			Numbers:  fmt.Sprintf(`%s^2 \cdot %s \cdot %s`, Paren(Q(cr.Current, "A", 4)), N(F, 5), Q(cr.RHot, "Ω", 4)), Result: Q(pOn, "W", 4)})
+	} else {
+		add(Step{What: "Power while energised", Symbolic: `P = I^2 R(T)`,
+			Numbers: fmt.Sprintf(`%s^2 \cdot %s`, Paren(Q(cr.Current, "A", 4)), Q(cr.RHot, "Ω", 4)), Result: Q(pOn, "W", 4)})
+	}
+	if duty := cr.Duty; duty < 1 {
+		add(Step{What: "Power averaged over the duty cycle δ", Symbolic: `\bar{P} = \delta P`,
+			Numbers: fmt.Sprintf(`%s \cdot %s`, N(duty, 3), Q(pOn, "W", 4)), Result: Q(cr.Power, "W", 4)})
+	}
+	add(Step{What: "Current density in the conductor", Symbolic: `J = \frac{I}{A}`,
+		Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(cr.Current, "A", 4), Q(A, "m²", 4)), Result: Q(cr.Density, "A/m²", 3)})
+	add(momentSteps(co, cr)...)
+	// The inductance is derived in the Inductance and switching section.
+	return steps
+}
+
+// conductorMass is a coil block's conductor mass, kg: a cored coil's
+// results add the core's to it (the study keeps the conductor's apart).
+func conductorMass(cr calc.CoilResult, cs *analysis.CoilStudy) float64 {
+	if cs.Kinds.Core != nil {
+		return cs.Kinds.AirMass
+	}
+	return cr.Mass
+}
+
+// hotResistanceStep is the resistance at the winding's mean temperature.
+func hotResistanceStep(co calc.Coil, cr calc.CoilResult) []Step {
+	if cr.Verdict.NoSolution || math.IsNaN(cr.RHot) {
+		return nil
+	}
+	mat := co.Wire.Material
+	// the temperature the resistance was taken at (the winding's mean)
+	T := Celsius(cr.Heat.Steady.Mean)
+	return []Step{{What: fmt.Sprintf("Resistance at the mean winding temperature, temperature coefficient %s /K", Sig(mat.Alpha20, 3)),
+		Symbolic: `R(T) = R_{20} \left[ 1 + \alpha_{20} (T - 20\,\unit{°C}) \right]`,
+		Numbers:  fmt.Sprintf(`%s \left[ 1 + %s\,\unit{K^{-1}} \cdot (%s - 20\,\unit{°C}) \right]`, Q(cr.R20, "Ω", 4), N(mat.Alpha20, 3), Q(T, "°C", 3)),
+		Result:   Q(cr.RHot, "Ω", 4)}}
+}
+
+// windingSteps derive the wire and winding of one coil block: wire
+// diameter and section, layout, wire length, conductor mass and the
+// resistance at 20 °C.
+func windingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []Step {
 	w := cr.Winding
 	mat := co.Wire.Material
 	var steps []Step
@@ -102,61 +194,11 @@ func coilSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []Step 
 	}
 	add(Step{What: "Conductor mass, density " + Eng(mat.Density, "kg/m³", 4), Symbolic: `m_c = \rho_m A \ell_w`,
 		Numbers: fmt.Sprintf(`%s \cdot %s \cdot %s`, Q(mat.Density, "kg/m³", 4), Q(A, "m²", 4), Q(cr.Length, "m", 4)),
-		Result:  Q(cr.Mass, "kg", 3)})
+		Result:  Q(conductorMass(cr, cs), "kg", 3)})
 	add(Step{What: fmt.Sprintf("Resistance at 20 °C, resistivity of %s %s", mat.Name, Eng(mat.Rho20, "Ω·m", 5)),
 		Symbolic: `R_{20} = \frac{\rho_{20}\, \ell_w}{A}`,
 		Numbers:  fmt.Sprintf(`\frac{%s \cdot %s}{%s}`, Q(mat.Rho20, "Ω·m", 5), Q(cr.Length, "m", 4), Q(A, "m²", 4)),
 		Result:   Q(cr.R20, "Ω", 4)})
-	add(thermalSteps(co, cr)...)
-	if !cr.Verdict.NoSolution && !math.IsNaN(cr.RHot) {
-		// the temperature the resistance was taken at (the winding's mean)
-		T := Celsius(cr.Heat.Steady.Mean)
-		add(Step{What: fmt.Sprintf("Resistance at the mean winding temperature, temperature coefficient %s /K", Sig(mat.Alpha20, 3)),
-			Symbolic: `R(T) = R_{20} \left[ 1 + \alpha_{20} (T - 20\,\unit{°C}) \right]`,
-			Numbers:  fmt.Sprintf(`%s \left[ 1 + %s\,\unit{K^{-1}} \cdot (%s - 20\,\unit{°C}) \right]`, Q(cr.R20, "Ω", 4), N(mat.Alpha20, 3), Q(T, "°C", 3)),
-			Result:   Q(cr.RHot, "Ω", 4)})
-	}
-	// An a.c. drive heats at R_ac = F_R R(T) (Dowell's factor at the mean
-	// temperature) and a voltage drive's current is V/|Z|.
-	F := cr.Heat.Problem.ACFactor
-	ac := F > 1 || cr.Reactance > 0
-	if !(F > 1) {
-		F = 1
-	}
-	switch {
-	case co.Drive == calc.VoltageDrive && ac:
-		add(Step{What: "Current under a.c. voltage drive: the impedance of the a.c. resistance F_R R(T) (Dowell's factor at the mean temperature) and the reactance ωL",
-			Symbolic: `I = \frac{V}{\sqrt{(F_R R(T))^2 + (\omega L)^2}}`,
-			Numbers:  fmt.Sprintf(`\frac{%s}{\sqrt{(%s \cdot %s)^2 + %s^2}}`, Q(co.Voltage, "V", 4), N(F, 5), Q(cr.RHot, "Ω", 4), Paren(Q(cr.Reactance, "Ω", 4))),
-			Result:   Q(cr.Current, "A", 4)})
-		add(Step{What: "Current when cold (switch-on)", Symbolic: `I_{20} = \frac{V}{R_{20}}`,
-			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(co.Voltage, "V", 4), Q(cr.R20, "Ω", 4)), Result: Q(cr.ColdCurrent, "A", 4)})
-	case co.Drive == calc.VoltageDrive:
-		add(Step{What: "Current under voltage drive, at the hot resistance", Symbolic: `I = \frac{V}{R(T)}`,
-			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(co.Voltage, "V", 4), Q(cr.RHot, "Ω", 4)), Result: Q(cr.Current, "A", 4)})
-		add(Step{What: "Current when cold (switch-on)", Symbolic: `I_{20} = \frac{V}{R_{20}}`,
-			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(co.Voltage, "V", 4), Q(cr.R20, "Ω", 4)), Result: Q(cr.ColdCurrent, "A", 4)})
-	default:
-		add(Step{What: "Voltage under current drive, at the hot resistance", Symbolic: `V = I\, R(T)`,
-			Numbers: fmt.Sprintf(`%s \cdot %s`, Q(cr.Current, "A", 4), Q(cr.RHot, "Ω", 4)), Result: Q(cr.Voltage, "V", 4)})
-	}
-	pOn := cr.PowerOn
-	if F > 1 {
-		add(Step{What: "Power while energised, at the a.c. resistance F_R R(T): Dowell's factor for skin and proximity losses at the mean temperature",
-			Symbolic: `P = I^2 F_R R(T)`,
-			Numbers:  fmt.Sprintf(`%s^2 \cdot %s \cdot %s`, Paren(Q(cr.Current, "A", 4)), N(F, 5), Q(cr.RHot, "Ω", 4)), Result: Q(pOn, "W", 4)})
-	} else {
-		add(Step{What: "Power while energised", Symbolic: `P = I^2 R(T)`,
-			Numbers: fmt.Sprintf(`%s^2 \cdot %s`, Paren(Q(cr.Current, "A", 4)), Q(cr.RHot, "Ω", 4)), Result: Q(pOn, "W", 4)})
-	}
-	if duty := cr.Duty; duty < 1 {
-		add(Step{What: "Power averaged over the duty cycle δ", Symbolic: `\bar{P} = \delta P`,
-			Numbers: fmt.Sprintf(`%s \cdot %s`, N(duty, 3), Q(pOn, "W", 4)), Result: Q(cr.Power, "W", 4)})
-	}
-	add(Step{What: "Current density in the conductor", Symbolic: `J = \frac{I}{A}`,
-		Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(cr.Current, "A", 4), Q(A, "m²", 4)), Result: Q(cr.Density, "A/m²", 3)})
-	add(momentSteps(co, cr)...)
-	// The inductance is derived in the Inductance and switching section.
 	return steps
 }
 

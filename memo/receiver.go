@@ -3,6 +3,7 @@ package memo
 import (
 	"fmt"
 	"math"
+	"strings"
 
 	"coilmemo/analysis"
 	"coilmemo/calc"
@@ -29,50 +30,20 @@ func (c *composer) receiver() {
 			first = false
 		}
 		c.heading(2, fmt.Sprintf("Coil %q", co.Name))
-		var steps []Step
-		if a := k.AC; a != nil {
-			cr := c.j.Results.Coils[i]
-			steps = append(steps,
-				Step{What: fmt.Sprintf("Equivalent foil thickness over the skin depth for %d layer(s) of round wire (Dowell, Proc. IEE 113 (1966) 1387, §4)", a.Layers),
-					Symbolic: `\Delta = \frac{\sqrt{\pi}}{2} \frac{d}{\delta} \sqrt{\eta}`,
-					Numbers:  fmt.Sprintf(`\frac{\sqrt{\pi}}{2} \cdot \frac{%s}{%s} \cdot \sqrt{%s}`, Q(co.Wire.Bare, "m", 4), Q(a.SkinDepth, "m", 4), N(a.Porosity, 4)),
-					Result:   N(a.Delta, 4)},
-				Step{What: "Ratio of a.c. to d.c. resistance (Dowell 1966, eq. 21 over the layers)",
-					Symbolic: `F_R = \Delta \left( \varsigma_1(\Delta) + \frac{2}{3} (p^2 - 1) \varsigma_2(\Delta) \right)`,
-					Numbers:  fmt.Sprintf(`F_R(%s, p = %d)`, N(a.Delta, 4), a.Layers), Result: N(a.Factor, 4)},
-				Step{What: "A.c. resistance at the winding temperature", Symbolic: `R_{ac} = F_R R_{dc}`,
-					Numbers: fmt.Sprintf(`%s \cdot %s`, N(a.Factor, 4), Q(cr.RHot, "Ω", 4)), Result: Q(a.Rac, "Ω", 4)})
-			if !math.IsNaN(k.ACPower) {
-				steps = append(steps, Step{What: "Heating at the a.c. resistance (duty-averaged)", Symbolic: `P_{ac} = F_R P_{dc}`,
-					Numbers: fmt.Sprintf(`%s \cdot %s`, N(a.Factor, 4), Q(cr.PowerOn*co.Duty, "W", 4)), Result: Q(k.ACPower, "W", 4)})
-			}
-		}
 		if r := k.Receiver; r != nil {
-			if r.Frequency > 0 {
-				steps = append(steps,
-					Step{What: "Sensitivity by Faraday's law (Tumanski, Meas. Sci. Technol. 18 (2007) R31, eq. 1), effective area including the core",
-						Symbolic: `S = 2 \pi f A_{eff}`, Numbers: fmt.Sprintf(`2\pi \cdot %s \cdot %s`, Q(r.Frequency, "Hz", 4), Q(r.EffectiveArea, "m²", 4)),
-						Result: Q(r.Sensitivity, "V/T", 4)},
-					Step{What: "Thermal noise of the winding (Nyquist, Phys. Rev. 32 (1928) 110)", Symbolic: `e_n = \sqrt{4 k T R_{ac}}`,
-						Numbers: fmt.Sprintf(`\sqrt{4 k \cdot %s \cdot %s}`, Q(noiseTemperature(c.j.Results.Coils[i].Temperature), "K", 4), Q(r.Resistance, "Ω", 4)), Result: Q(r.NoiseVoltage, "V/√Hz", 3)},
-					Step{What: "Noise-equivalent field", Symbolic: `B_n = \frac{e_n}{S}`,
-						Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(r.NoiseVoltage, "V/√Hz", 3), Q(r.Sensitivity, "V/T", 4)), Result: Q(r.NoiseField, "T/√Hz", 3)})
+			c.para(pickUpText(co, r, k))
+		} else {
+			steps := acLossSteps(co, c.j.Results.Coils[i], *k.AC)
+			if !math.IsNaN(k.ACPower) {
+				cr := c.j.Results.Coils[i]
+				steps = append(steps, Step{What: "Heating at the a.c. resistance (duty-averaged)", Symbolic: `P_{ac} = F_R P_{dc}`,
+					Numbers: fmt.Sprintf(`%s \cdot %s`, N(k.AC.Factor, 4), Q(cr.PowerOn*co.Duty, "W", 4)), Result: Q(k.ACPower, "W", 4)})
 			}
-			if !math.IsNaN(r.BandNoiseField) {
-				steps = append(steps, Step{What: fmt.Sprintf("Noise-equivalent field over the band %s to %s", Eng(co.BandLow, "Hz", 3), Eng(co.BandHigh, "Hz", 3)),
-					Symbolic: `B_{rms} = \sqrt{\int B_n(f)^2 \, df}`, Result: Q(r.BandNoiseField, "T", 3)})
+			if !math.IsNaN(k.SelfResonance) {
+				steps = append(steps, Step{What: "Self-resonant frequency", Symbolic: `f_{sr} = \frac{1}{2 \pi \sqrt{L C}}`, Result: Q(k.SelfResonance, "Hz", 3)})
 			}
-			if k.Core == nil {
-				steps = append(steps, Step{What: "Inductance of the winding (the verification section compares it with an independent formula)",
-					Symbolic: `L`, Result: Q(c.j.Results.Coils[i].Inductance, "H", 4)})
-			}
-			steps = append(steps, Step{What: "Capacitance across the terminals: the winding's own plus the load", Symbolic: `C = C_s + C_{load}`,
-				Numbers: fmt.Sprintf(`%s + %s`, Q(r.SelfCapacitance, "F", 3), Q(co.LoadCapacitance, "F", 3)), Result: Q(r.Capacitance, "F", 3)})
+			c.derive(steps...)
 		}
-		if !math.IsNaN(k.SelfResonance) {
-			steps = append(steps, Step{What: "Self-resonant frequency", Symbolic: `f_{sr} = \frac{1}{2 \pi \sqrt{L C}}`, Result: Q(k.SelfResonance, "Hz", 3)})
-		}
-		c.derive(steps...)
 		if k.AboveResonance {
 			c.para("The frequency is at or above the self-resonance: the series R–L model does not hold there, and no impedance is quoted.")
 		}
@@ -95,6 +66,151 @@ func (c *composer) receiver() {
 				Summary: fmt.Sprintf("Peak near %s.", Eng(r.SelfResonance, "Hz", 3))})
 		}
 	}
+}
+
+// pickUpText sums up a pick-up coil's figures for the section on pick-up
+// coils; they are derived in the Method and results section.
+func pickUpText(co calc.Coil, r *calc.ReceiverResult, k analysis.CoilKinds) string {
+	var b strings.Builder
+	fmt.Fprintf(&b, "The figures of pick-up coil %q are derived in the Method and results section. ", co.Name)
+	if r.Frequency > 0 {
+		fmt.Fprintf(&b, "At %s it gives %s per tesla of field along its axis (open circuit), and the thermal noise of its winding equals a field of %s. ",
+			Eng(r.Frequency, "Hz", 3), Eng(r.Sensitivity, "V", 4), Eng(r.NoiseField, "T/√Hz", 3))
+	}
+	if !math.IsNaN(r.BandNoiseField) {
+		fmt.Fprintf(&b, "Over the band %s to %s that noise is %s rms. ", Eng(co.BandLow, "Hz", 3), Eng(co.BandHigh, "Hz", 3), Eng(r.BandNoiseField, "T", 3))
+	}
+	if fsr := r.SelfResonance; fsr > 0 {
+		fmt.Fprintf(&b, "With its load it resonates at %s, above which the lumped model does not hold.", Eng(fsr, "Hz", 3))
+	} else {
+		b.WriteString("Its self-resonance is not computed for this form.")
+	}
+	return strings.TrimSpace(b.String())
+}
+
+// acLossSteps derive a winding's a.c. resistance at its frequency by
+// Dowell's method, at the hot resistance of cr.
+func acLossSteps(co calc.Coil, cr calc.CoilResult, a calc.ACLoss) []Step {
+	return []Step{
+		{What: fmt.Sprintf("Equivalent foil thickness over the skin depth for %d layer(s) of round wire (Dowell, Proc. IEE 113 (1966) 1387, §4)", a.Layers),
+			Symbolic: `\Delta = \frac{\sqrt{\pi}}{2} \frac{d}{\delta} \sqrt{\eta}`,
+			Numbers:  fmt.Sprintf(`\frac{\sqrt{\pi}}{2} \cdot \frac{%s}{%s} \cdot \sqrt{%s}`, Q(co.Wire.Bare, "m", 4), Q(a.SkinDepth, "m", 4), N(a.Porosity, 4)),
+			Result:   N(a.Delta, 4)},
+		{What: "Ratio of a.c. to d.c. resistance (Dowell 1966, eq. 21 over the layers)",
+			Symbolic: `F_R = \Delta \left( \varsigma_1(\Delta) + \frac{2}{3} (p^2 - 1) \varsigma_2(\Delta) \right)`,
+			Numbers:  fmt.Sprintf(`F_R(%s, p = %d)`, N(a.Delta, 4), a.Layers), Result: N(a.Factor, 4)},
+		{What: "A.c. resistance at the winding temperature", Symbolic: `R_{ac} = F_R R_{dc}`,
+			Numbers: fmt.Sprintf(`%s \cdot %s`, N(a.Factor, 4), Q(cr.RHot, "Ω", 4)), Result: Q(a.Rac, "Ω", 4)},
+	}
+}
+
+// pickUpSteps derive pick-up coil i's figures for the Method and results
+// section: wire and winding, the resistance at the ambient temperature (no
+// current heats it) and at the design frequency (Dowell), the effective
+// area, sensitivity and thermal noise, the inductance, the self-capacitance
+// by the formula that suits the winding, and the self-resonance with the
+// load — every number from the Study.
+func (c *composer) pickUpSteps(i int) []Step {
+	co := c.j.Spec.Design.Coils[i]
+	cr := c.j.Results.Coils[i]
+	cs := &c.j.Coils[i]
+	k := cs.Kinds
+	r := k.Receiver
+	steps := windingSteps(co, cr, cs) // memo/method.go
+	add := func(s ...Step) { steps = append(steps, s...) }
+	if r == nil {
+		return steps
+	}
+	add(Step{What: "Winding temperature: a pick-up coil carries no current, so its winding is at the ambient temperature; its resistance and thermal noise are taken there",
+		Symbolic: `T = ` + Q(Celsius(k.Temperature), "°C", 3)})
+	for _, st := range hotResistanceStep(co, cr) {
+		st.What = strings.Replace(st.What, "at the mean winding temperature", "at the winding temperature", 1)
+		add(st)
+	}
+	if a := k.AC; a != nil {
+		add(acLossSteps(co, cr, *a)...)
+	}
+	if k.Core != nil {
+		add(Step{What: "Effective area, the flux linkage per tesla of a uniform axial field, with the core (derived in the Core section)",
+			Symbolic: `A_{eff} = ` + Q(r.EffectiveArea, "m²", 4)})
+	} else {
+		add(Step{What: "Effective area, the flux linkage per tesla of a uniform axial field: the area of every turn, summed",
+			Symbolic: `A_{eff} = \sum_{i=1}^{N} \pi r_i^2`, Result: Q(r.EffectiveArea, "m²", 4)})
+	}
+	if r.Frequency > 0 {
+		add(Step{What: "Sensitivity by Faraday's law (Tumanski, Meas. Sci. Technol. 18 (2007) R31, eq. 1)",
+			Symbolic: `S = 2 \pi f A_{eff}`, Numbers: fmt.Sprintf(`2\pi \cdot %s \cdot %s`, Q(r.Frequency, "Hz", 4), Q(r.EffectiveArea, "m²", 4)),
+			Result: Q(r.Sensitivity, "V/T", 4)})
+		R, name := `R_{ac}`, "a.c. resistance"
+		if k.AC == nil {
+			R, name = `R(T)`, "resistance"
+		}
+		add(Step{What: fmt.Sprintf("Thermal noise of the winding's %s (Nyquist, Phys. Rev. 32 (1928) 110)", name), Symbolic: `e_n = \sqrt{4 k T ` + R + `}`,
+			Numbers: fmt.Sprintf(`\sqrt{4 k \cdot %s \cdot %s}`, Q(k.Temperature, "K", 4), Q(r.Resistance, "Ω", 4)), Result: Q(r.NoiseVoltage, "V/√Hz", 3)},
+			Step{What: "Noise-equivalent field: the field whose e.m.f. equals the thermal noise", Symbolic: `B_n = \frac{e_n}{S}`,
+				Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(r.NoiseVoltage, "V/√Hz", 3), Q(r.Sensitivity, "V/T", 4)), Result: Q(r.NoiseField, "T/√Hz", 3)})
+	}
+	if !math.IsNaN(r.BandNoiseField) {
+		add(Step{What: fmt.Sprintf("Noise-equivalent field over the band %s to %s, with the resistance at each frequency (Gauss–Legendre quadrature in ln f)", Eng(co.BandLow, "Hz", 3), Eng(co.BandHigh, "Hz", 3)),
+			Symbolic: `B_{rms} = \sqrt{\int_{f_1}^{f_2} \left( \frac{\sqrt{4 k T R_{ac}(f)}}{2 \pi f A_{eff}} \right)^2 df}`, Result: Q(r.BandNoiseField, "T", 3)})
+	}
+	add(selfInductanceSteps(co, cr, cs)...) // memo/electrical.go
+	if k.Core != nil {
+		add(Step{What: "Small-signal inductance with the core (derived in the Core section)", Symbolic: `L = ` + Q(cr.Inductance, "H", 4)})
+	}
+	add(capacitanceSteps(co, k.Capacitance)...)
+	add(Step{What: "Capacitance across the terminals: the winding's own plus the load", Symbolic: `C = C_s + C_{load}`,
+		Numbers: fmt.Sprintf(`%s + %s`, Q(r.SelfCapacitance, "F", 3), Q(co.LoadCapacitance, "F", 3)), Result: Q(r.Capacitance, "F", 3)})
+	if !math.IsNaN(r.SelfResonance) {
+		add(Step{What: "Self-resonant frequency: the parallel resonance of the inductance and the capacitance across it (Terman, Radio Engineers' Handbook, 1943, §3)",
+			Symbolic: `f_{sr} = \frac{1}{2 \pi \sqrt{L C}}`,
+			Numbers:  fmt.Sprintf(`\frac{1}{2 \pi \sqrt{%s \cdot %s}}`, Q(cr.Inductance, "H", 4), Q(r.Capacitance, "F", 3)),
+			Result:   Q(r.SelfResonance, "Hz", 3)})
+	}
+	return steps
+}
+
+// capacitanceSteps derive a winding's self-capacitance by the formula the
+// analysis chose (calc.SelfCapacitanceParts).
+func capacitanceSteps(co calc.Coil, p calc.CapacitanceParts) []Step {
+	switch {
+	case math.IsNaN(p.Capacitance):
+		return []Step{{What: "Self-capacitance of the winding: not modelled for this form", Symbolic: `C_s = ` + Words("not computed")}}
+	case p.Layered:
+		return []Step{
+			{What: fmt.Sprintf("Capacitance between adjacent layers: the turn-to-turn capacitances of the turns facing the next layer, through the enamel (relative permittivity %s, common practice) and the air beside the contact, summed (Massarini & Kazimierczuk, IEEE Trans. Power Electron. 12 (1997) 671), the mean over the %d gaps",
+				Sig(calc.EnamelPermittivity, 2), p.Layers-1),
+				Symbolic: `C_l = \sum C_{tt}`, Result: Q(p.LayerCapacitance, "F", 3)},
+			{What: fmt.Sprintf("Self-capacitance of %d layers wound back and forth, by the energy stored in the gaps (Dalessandro, Cavalcante & Kolar, IEEE Trans. Power Electron. 22 (2007) 2081)", p.Layers),
+				Symbolic: `C_s = \frac{4}{3} C_l \frac{p - 1}{p^2}`,
+				Numbers:  fmt.Sprintf(`\frac{4}{3} \cdot %s \cdot \frac{%d - 1}{%d^2}`, Q(p.LayerCapacitance, "F", 3), p.Layers, p.Layers),
+				Result:   Q(p.Capacitance, "F", 3)},
+		}
+	}
+	return []Step{{What: "Self-capacitance of a single-layer solenoid of diameter D and length ℓ, Medhurst's measured shape factor as fitted (Medhurst, Wireless Engineer 24 (1947) 35 and 80)",
+		Symbolic: `C_s = D \left( 0.1126 \frac{\ell}{D} + 0.08 + 0.27 \sqrt{\frac{D}{\ell}} \right) \cdot 100\,\unit{pF/m}`,
+		Numbers: fmt.Sprintf(`%s \left( 0.1126 \cdot \frac{%s}{%s} + 0.08 + 0.27 \sqrt{\frac{%s}{%s}} \right) \cdot 100\,\unit{pF/m}`,
+			Q(p.Diameter, "m", 4), Q(p.Length, "m", 4), Q(p.Diameter, "m", 4), Q(p.Diameter, "m", 4), Q(p.Length, "m", 4)),
+		Result: Q(p.Capacitance, "F", 3)}}
+}
+
+// pickUpFlags are a pick-up coil's validity flags: those of its winding
+// and wire, and in place of the drive and thermal ones (no current flows)
+// the range of its lumped model.
+func pickUpFlags(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.Design) []validity {
+	var out []validity
+	for _, f := range []func(calc.Coil, calc.CoilResult, *analysis.CoilStudy, calc.Design) []validity{thinWireFlag, radialBuildFlag, wireBuildFlag} {
+		out = append(out, f(co, cr, cs, d)...)
+	}
+	k := cs.Kinds
+	v := validity{what: "Pick-up coil", text: fmt.Sprintf("no current flows, so the winding is not heated and stays at the ambient temperature, %s, at which its resistance and thermal noise are taken. ", Eng(Celsius(k.Temperature), "°C", 3))}
+	if fsr := k.SelfResonance; fsr > 0 {
+		v.text += fmt.Sprintf("Its response is that of a lumped series R–L with the capacitance across the terminals, which holds well below the self-resonance, %s; the thermal noise of any amplifier it feeds is not included.", Eng(fsr, "Hz", 3))
+		v.flagged = k.AboveResonance
+	} else {
+		v.text += "Its self-resonance is not computed for this form; its response is that of a lumped series R–L, and the thermal noise of any amplifier it feeds is not included."
+	}
+	return append(out, v)
 }
 
 // receiverOnly says whether every coil block of the design is a pick-up
@@ -123,6 +239,49 @@ func (c *composer) anyReceiver() bool {
 		}
 	}
 	return false
+}
+
+// drivenCoils are the indices of the coil blocks that are not pick-up
+// coils, in spec order: the coils whose current, field, switching and
+// heating the memo writes up.
+func (c *composer) drivenCoils() []int {
+	var idx []int
+	for i, co := range c.j.Spec.Design.Coils {
+		if i < len(c.j.Results.Coils) && !analysis.IsReceiver(co) {
+			idx = append(idx, i)
+		}
+	}
+	return idx
+}
+
+// pickUp says whether coil block i is a pick-up coil.
+func (c *composer) pickUp(i int) bool {
+	d := c.j.Spec.Design
+	return i < len(d.Coils) && analysis.IsReceiver(d.Coils[i])
+}
+
+// pickUpNote names the pick-up coils of a design that also has driven
+// ones, for a section about the driven coils: "Coil "S" is a pick-up coil
+// (no drive) and carries no current: " followed by one (for one pick-up
+// coil) or many (for several), and a full stop; "" without pick-up coils
+// or without driven ones (the section is then not written).
+func (c *composer) pickUpNote(one, many string) string {
+	if c.receiverOnly() {
+		return ""
+	}
+	var names []string
+	for i, co := range c.j.Spec.Design.Coils {
+		if c.pickUp(i) {
+			names = append(names, fmt.Sprintf("%q", co.Name))
+		}
+	}
+	switch len(names) {
+	case 0:
+		return ""
+	case 1:
+		return fmt.Sprintf("Coil %s is a pick-up coil (no drive) and carries no current: %s.", names[0], one)
+	}
+	return fmt.Sprintf("Coils %s are pick-up coils (no drive) and carry no current: %s.", joinAnd(names), many)
 }
 
 // driven wraps a section that is about driven coils: it writes nothing
@@ -176,24 +335,31 @@ func (c *composer) receiverSummary() doc.Table {
 		}),
 		row("Self-resonance, with the load", func(i int) string { return orDash(rec(i).SelfResonance, "Hz", 3) }),
 		row("Resistance, a.c. at the design frequency", func(i int) string { return orDash(rec(i).Resistance, "Ω", 3) }),
-		row("Inductance (with the core, small signal)", func(i int) string { return orDash(c.j.Results.Coils[i].Inductance, "H", 3) }),
+		row("Inductance (small signal; with the core where there is one)", func(i int) string { return orDash(c.j.Results.Coils[i].Inductance, "H", 3) }),
 		row("Capacitance across the terminals (winding + load)", func(i int) string { return orDash(rec(i).Capacitance, "F", 3) }),
 		row("Effective area (flux linkage per tesla)", func(i int) string { return orDash(rec(i).EffectiveArea, "m²", 3) }),
 		row("Wire length / conductor mass", func(i int) string {
 			return Eng(c.j.Results.Coils[i].Length, "m", 3) + " / " + Eng(c.j.Coils[i].Kinds.AirMass, "kg", 3)
 		}),
 	}
+	anyCore := false
+	for _, i := range idx {
+		anyCore = anyCore || c.j.Coils[i].Kinds.Core != nil
+	}
+	if anyCore {
+		rows = append(rows, row("Core mass / total mass (conductor and core)", func(i int) string {
+			k := c.j.Coils[i].Kinds.Core
+			switch {
+			case k == nil:
+				return "—"
+			case math.IsNaN(k.Mass):
+				return "no core density stated"
+			}
+			return Eng(k.Mass, "kg", 3) + " / " + Eng(c.j.Results.Coils[i].Mass, "kg", 3)
+		}))
+	}
 	align, widths := perCoilColumns(len(idx), 2.2, 1.5)
 	return doc.Table{Caption: "Headline results of the pick-up coils (no drive)", Header: head, Rows: rows, Align: align, Widths: widths}
-}
-
-// noiseTemperature is the winding temperature the thermal noise is taken
-// at, K: the coil's, or 20 °C where it is unknown (as the analysis takes it).
-func noiseTemperature(t float64) float64 {
-	if math.IsNaN(t) {
-		return 293.15
-	}
-	return t
 }
 
 // nonZero is v, or NaN for 0 (a figure that needs a design frequency).

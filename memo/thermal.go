@@ -485,14 +485,15 @@ func celsiusAll(k []float64) []float64 {
 func (c *composer) thermalTable() doc.Table {
 	d := c.j.Spec.Design
 	r := c.j.Results
+	idx := c.drivenCoils() // a pick-up coil is not heated
 	head := []string{"Result"}
-	for _, cr := range r.Coils {
-		head = append(head, cr.Name)
+	for _, i := range idx {
+		head = append(head, r.Coils[i].Name)
 	}
 	row := func(name string, f func(co calc.Coil, cr calc.CoilResult) string) []doc.Cell {
 		cells := []doc.Cell{{Text: name}}
-		for i, cr := range r.Coils {
-			cells = append(cells, doc.Cell{Text: f(d.Coils[i], cr)})
+		for _, i := range idx {
+			cells = append(cells, doc.Cell{Text: f(d.Coils[i], r.Coils[i])})
 		}
 		return cells
 	}
@@ -574,7 +575,7 @@ func (c *composer) thermalTable() doc.Table {
 			return Eng(cr.Moment.Norm(), "A·m²", 3) + " / " + Eng(cr.Heat.ColdMoment, "A·m²", 3)
 		}))
 	}
-	align, widths := perCoilColumns(len(r.Coils), 2.4, 1.6)
+	align, widths := perCoilColumns(len(idx), 2.4, 1.6)
 	return doc.Table{Caption: "Thermal results at the steady operating point", Header: head, Rows: rows, Align: align, Widths: widths}
 }
 
