@@ -7,6 +7,7 @@ import (
 	"strings"
 	"testing"
 
+	"gonum.org/v1/plot/vg"
 	"gonum.org/v1/plot/vg/recorder"
 )
 
@@ -259,6 +260,64 @@ func TestDeviationPlot(t *testing.T) {
 	for _, want := range []string{"B/B(0) − 1 (%)", "Distance from the centre (mm)", "Along the axis", "Radially, mid-plane", "|1|", "|-1|", "|0|"} {
 		if !strings.Contains(all, want) {
 			t.Errorf("deviation plot lacks %q: %s", want, all)
+		}
+	}
+}
+
+// No dimension text of a sketch is struck through by a line: a pair's
+// winding-length label centred on a mid-plane moves beside its
+// dimension.
+func TestCrossSectionLabelsClear(t *testing.T) {
+	d := SketchData{
+		Sections: []Section{{X0: -0.04, X1: -0.03, Y0: 0.045, Y1: 0.055}, {X0: 0.03, X1: 0.04, Y0: 0.045, Y1: 0.055}},
+		Dimensions: []Dimension{
+			{Kind: Axial, A: -0.04, B: -0.03, Label: "10 mm"},
+			{Kind: Axial, A: -0.035, B: 0.035, Label: "spacing 70 mm"},
+		},
+		CentreLines: []float64{-0.035, 0.035},
+	}
+	var c recorder.Canvas
+	CrossSection(d)(&c, 460, 200)
+	type seg struct{ x, y0, y1 vg.Length }
+	var vert []seg
+	type box struct {
+		text           string
+		x0, x1, y0, y1 vg.Length
+	}
+	var boxes []box
+	lab := style(TickSize, Ink)
+	var stack []vg.Point
+	off := vg.Point{}
+	for _, a := range c.Actions {
+		switch a := a.(type) {
+		case *recorder.Push:
+			stack = append(stack, off)
+		case *recorder.Pop:
+			off, stack = stack[len(stack)-1], stack[:len(stack)-1]
+		case *recorder.Translate:
+			off = vg.Point{X: off.X + a.Point.X, Y: off.Y + a.Point.Y}
+		case *recorder.Stroke:
+			var prev vg.Point
+			for i, pc := range a.Path {
+				if i > 0 && pc.Type == vg.LineComp && math.Abs(float64(pc.Pos.X-prev.X)) < 0.01 {
+					vert = append(vert, seg{pc.Pos.X, min(pc.Pos.Y, prev.Y), max(pc.Pos.Y, prev.Y)})
+				}
+				prev = pc.Pos
+			}
+		case *recorder.FillString:
+			p := vg.Point{X: off.X + a.Point.X, Y: off.Y + a.Point.Y}
+			e := lab.FontExtents()
+			boxes = append(boxes, box{a.String, p.X, p.X + lab.Width(a.String), p.Y - e.Descent, p.Y + e.Ascent})
+		}
+	}
+	if len(boxes) < 3 || len(vert) < 4 {
+		t.Fatalf("%d labels, %d vertical lines recorded", len(boxes), len(vert))
+	}
+	for _, b := range boxes {
+		for _, v := range vert {
+			if v.x > b.x0+0.5 && v.x < b.x1-0.5 && v.y1 > b.y0+0.5 && v.y0 < b.y1-0.5 {
+				t.Errorf("label %q (%.1f–%.1f × %.1f–%.1f pt) struck by the line at x = %.1f pt", b.text, b.x0, b.x1, b.y0, b.y1, v.x)
+			}
 		}
 	}
 }
