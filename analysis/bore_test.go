@@ -88,8 +88,28 @@ func TestBoreProfileGradientPair(t *testing.T) {
 	if st.Coils[0].Axis.Bore.PeakZ <= 0 {
 		t.Error("no peak found")
 	}
-	// A loop has none.
-	if bp := runFigureDesign(t, "thin-loop").Coils[0].Axis.Bore; bp != nil {
-		t.Error("a loop has a bore profile")
+}
+
+// A thin loop's near profile falls to half its centre value where
+// (R² + z²)^{3/2} = 2 R³ (B(z) = μ0 N I R² / (2 (R² + z²)^{3/2}), Jackson,
+// Classical Electrodynamics, 3rd ed., §5.5): at z = R √(2^{2/3} − 1) ≈
+// 0.766 R, to the bundle's finite size; a loop has no ends.
+func TestBoreProfileLoop(t *testing.T) {
+	st := runFigureDesign(t, "thin-loop")
+	co := st.Spec.Design.Coils[0]
+	bp := st.Coils[0].Axis.Bore
+	if bp == nil || len(bp.Ends) != 0 || !math.IsNaN(bp.EndRatio) {
+		t.Fatalf("loop profile %+v", bp)
+	}
+	R := co.MeanDiameter / 2
+	want := R * math.Sqrt(math.Pow(2, 2.0/3)-1)
+	if math.Abs(bp.Half/want-1) > 1e-3 {
+		t.Errorf("half-field distance %g m, thin loop %g m", bp.Half, want)
+	}
+	if centre := calc.Mu0 * float64(co.Turns) * st.Results.Coils[0].Current / (2 * R); math.Abs(bp.Centre/centre-1) > 1e-3 {
+		t.Errorf("centre %g T, μ0 N I / 2R = %g T", bp.Centre, centre)
+	}
+	if hi := bp.Z[len(bp.Z)-1]; math.Abs(hi-3*AxialSize(co)) > 1e-12 {
+		t.Errorf("profile to %g m, want 3 sizes %g m", hi, 3*AxialSize(co))
 	}
 }

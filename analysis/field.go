@@ -39,16 +39,17 @@ type AxisProfile struct {
 	Z, Exact, Dipole []float64
 	Dipole1pc        float64 // m, NaN when not found
 	Peak             float64 // T, largest |B| of the profile
-	// Bore is the near profile of an air-core solenoid or pair (nil for
-	// other coils, and for a cored coil, whose profile is the core's).
+	// Bore is the near profile of an air-core coil block (nil for a
+	// cored coil, whose profile is the core's).
 	Bore *BoreProfile
 }
 
-// BoreProfile is the signed axial flux density Bz of an air-core
-// solenoid or pair along its own axis over the region a reader works in:
-// a solenoid's bore and mouths out to 1.5 lengths from the centre (at
+// BoreProfile is the signed axial flux density Bz of an air-core coil
+// block along its own axis over the region a reader works in: a
+// solenoid's bore and mouths out to 1.5 lengths from the centre (at
 // least one outer radius beyond its ends), a pair's space between the
-// coils and one radius beyond them. For an opposing pair Gz is the
+// coils and one radius beyond them, a loop's or rectangle's out to three
+// times its size (AxialSize). For an opposing pair Gz is the
 // axial gradient ∂Bz/∂z at the same points (central difference over
 // ±10⁻⁴ R). Ends are the positions of the winding's ends along the axis,
 // ascending (four for a pair).
@@ -66,6 +67,10 @@ type BoreProfile struct {
 
 	Centre, Flat, EndRatio float64 // T, m, 1
 	Peak, PeakZ            float64 // T, m
+	// Half is the distance from the centre along the axis at which Bz
+	// has fallen to half its centre value (NaN for an opposing pair, or
+	// when it does not within the profile).
+	Half float64 // m
 }
 
 // boreTolerance is the band of a bore profile's flat region: 1 %.
@@ -75,23 +80,32 @@ const boreTolerance = 0.01
 const borePoints = 241
 
 func boreProfile(co calc.Coil, cr calc.CoilResult, src *calc.CoilSource, fr calc.Frame) *BoreProfile {
-	if co.Form != calc.Solenoid && co.Form != calc.Pair {
-		return nil
-	}
-	e := calc.WindingEnvelope(co, cr.Winding)
-	R := co.MeanDiameter / 2
-	if !(R > 0) || !(e.Z1 > e.Z0) || math.IsInf(e.R1, 0) {
-		return nil
-	}
 	bp := &BoreProfile{}
-	for _, z := range calc.Placements(co) {
-		bp.Ends = append(bp.Ends, z+e.Z0, z+e.Z1)
+	var half, outer float64
+	switch co.Form {
+	case calc.Loop, calc.Rectangle:
+		// A flat coil: its plane at the centre, no ends; out to three
+		// times its size.
+		half = 3 * AxialSize(co)
+		if !(half > 0) || math.IsInf(half, 0) {
+			return nil
+		}
+	default:
+		e := calc.WindingEnvelope(co, cr.Winding)
+		R := co.MeanDiameter / 2
+		if !(R > 0) || !(e.Z1 > e.Z0) || math.IsInf(e.R1, 0) {
+			return nil
+		}
+		for _, z := range calc.Placements(co) {
+			bp.Ends = append(bp.Ends, z+e.Z0, z+e.Z1)
+		}
+		outer = bp.Ends[len(bp.Ends)-1]
+		half = math.Max(1.5*(e.Z1-e.Z0), outer+e.R1)
+		if co.Form == calc.Pair {
+			half = outer + R
+		}
 	}
-	outer := bp.Ends[len(bp.Ends)-1]
-	half := math.Max(1.5*(e.Z1-e.Z0), outer+e.R1)
-	if co.Form == calc.Pair {
-		half = outer + R
-	}
+	R := math.Max(co.MeanDiameter/2, math.Max(co.Width, co.Height)/2)
 	bz := func(z float64) float64 { return src.At(co.Centre.Add(fr.U.Scale(z))).Dot(fr.U) }
 	h := 1e-4 * R
 	bp.Z = SymmetricSpace(half, borePoints)
@@ -106,27 +120,34 @@ func boreProfile(co calc.Coil, cr calc.CoilResult, src *calc.CoilSource, fr calc
 		}
 	}
 	bp.Centre = bz(0)
-	bp.Flat, bp.EndRatio = math.NaN(), math.NaN()
+	bp.Flat, bp.EndRatio, bp.Half = math.NaN(), math.NaN(), math.NaN()
 	if co.Opposing || bp.Centre == 0 {
 		return bp
 	}
-	bp.EndRatio = bz(outer) / bp.Centre
-	out := func(z float64) bool { return math.Abs(bz(z)/bp.Centre-1) > boreTolerance }
-	for i := borePoints / 2; i+1 < len(bp.Z); i++ {
-		if !out(bp.Z[i+1]) {
-			continue
-		}
-		a, b := bp.Z[i], bp.Z[i+1]
-		for range 40 {
-			if m := (a + b) / 2; out(m) {
-				b = m
-			} else {
-				a = m
-			}
-		}
-		bp.Flat = (a + b) / 2
-		break
+	if len(bp.Ends) > 0 {
+		bp.EndRatio = bz(outer) / bp.Centre
 	}
+	// first finds the first distance from the centre at which out holds,
+	// by bisection between the profile's points; NaN when none does.
+	first := func(out func(z float64) bool) float64 {
+		for i := borePoints / 2; i+1 < len(bp.Z); i++ {
+			if !out(bp.Z[i+1]) {
+				continue
+			}
+			a, b := bp.Z[i], bp.Z[i+1]
+			for range 40 {
+				if m := (a + b) / 2; out(m) {
+					b = m
+				} else {
+					a = m
+				}
+			}
+			return (a + b) / 2
+		}
+		return math.NaN()
+	}
+	bp.Flat = first(func(z float64) bool { return math.Abs(bz(z)/bp.Centre-1) > boreTolerance })
+	bp.Half = first(func(z float64) bool { return bz(z)/bp.Centre < 0.5 })
 	return bp
 }
 

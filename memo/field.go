@@ -53,6 +53,8 @@ func (c *composer) field() {
 			c.boreFigure(co, cs, i)
 		case pairProfile:
 			c.pairProfileFigure(co, cs)
+		case nearProfile:
+			c.nearFigure(co, cs, i)
 		default:
 			c.axisFigure(co, cr, cs)
 		}
@@ -245,6 +247,32 @@ func (c *composer) boreFigure(co calc.Coil, cs *analysis.CoilStudy, i int) {
 	c.para(text)
 	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight * 0.85, Draw: figures.Profile(d),
 		Summary: fmt.Sprintf("%s on axis: %s at the centre, within 1 %% over ±%s.", bs, Eng(bp.Centre, "T", 3), Eng(bp.Flat, "m", 3))})
+}
+
+// nearFigure adds a loop's or rectangle's field along its axis near its
+// plane, on linear axes, with a centre-field requirement drawn.
+func (c *composer) nearFigure(co calc.Coil, cs *analysis.CoilStudy, i int) {
+	bp := cs.Axis.Bore
+	bs, _ := axialSymbol(co)
+	n := c.figure + 1
+	edge := bp.Z[len(bp.Z)-1]
+	text := fmt.Sprintf("Figure %d shows the axial flux density %s along the axis of coil %q on linear scales, out to %s on either side of its plane (dotted): it is %s at the centre",
+		n, bs, co.Name, Eng(edge, "m", 3), Eng(bp.Centre, "T", 4))
+	if !math.IsNaN(bp.Half) {
+		text += fmt.Sprintf(", half of that at ±%s", Eng(bp.Half, "m", 3))
+	}
+	text += fmt.Sprintf(" and %s at ±%s.", Eng(bp.Bz[len(bp.Bz)-1], "T", 3), Eng(edge, "m", 3)) + axialNote(co)
+	d := figures.ProfileData{Axis: axisName(co), Z: bp.Z, Y: bp.Bz, YName: "Axial flux density " + bs, Unit: "T",
+		Marks: []figures.Mark{{X: 0, Label: "coil plane"}}}
+	caption := fmt.Sprintf("Axial flux density %s along the axis of coil %q (exact field; dotted: the coil's plane)", bs, co.Name)
+	if req, ok := c.centreRequirement(i); ok {
+		d.Levels = append(d.Levels, figures.Level{Y: math.Copysign(req.Limit.Required, bp.Centre), Label: "required " + relText(req.Limit) + " " + Eng(req.Limit.Required, "T", 3)})
+		caption += "; dashed: the required centre field"
+		text += fmt.Sprintf(" The required centre field (dashed) is %s.", map[bool]string{true: "met", false: "not met"}[req.Pass])
+	}
+	c.para(text)
+	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight * 0.8, Draw: figures.Profile(d),
+		Summary: fmt.Sprintf("%s on axis: %s at the centre, half of it at ±%s.", bs, Eng(bp.Centre, "T", 3), Eng(bp.Half, "m", 3))})
 }
 
 // centreRequirement finds the centre-field requirement that applies to

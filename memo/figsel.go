@@ -20,12 +20,12 @@ import (
 //   - Axis profile: a moment design (a requirement on the moment or the
 //     torque, or a size block that seeks moment) is judged by its
 //     far field, so it gets |B| on the axis with the point dipole beside
-//     it, on a log axis when the field spans decades. An air-core
-//     solenoid or pair that is not a moment design is judged by its
-//     near field: Bz on linear axes over the bore (a solenoid, out to
-//     about 1.5 lengths, the ends marked) or across the pair (the
-//     windings shaded). Every other coil (loops, rectangles, cored coils)
-//     gets the far-field profile.
+//     it, on a log axis when the field spans decades. An air-core coil
+//     that is not a moment design is judged by its near field: Bz on
+//     linear axes over the bore (a solenoid, out to about 1.5 lengths,
+//     the ends marked), across the pair (the windings shaded) or out to
+//     three sizes of a loop or rectangle (its plane marked). A cored coil
+//     gets the far-field profile of winding and core.
 //   - Pairs: an aiding pair its homogeneity (the field's departure from
 //     its centre value against the distance from the centre, axially and
 //     radially, with a uniform-radius requirement drawn); an opposing pair
@@ -45,6 +45,7 @@ const (
 	farProfile  profileKind = iota // |B| with the dipole beside it
 	boreProfile                    // a solenoid's Bz over its bore, linear
 	pairProfile                    // a pair's Bz across the pair, linear
+	nearProfile                    // a loop's or rectangle's Bz near its plane, linear
 )
 
 // coilFigures is the choice of figures for one coil block.
@@ -82,6 +83,8 @@ func figuresFor(j *analysis.Study, i int) coilFigures {
 		f.Profile = farProfile
 	case co.Form == calc.Pair:
 		f.Profile = pairProfile
+	case co.Form == calc.Loop || co.Form == calc.Rectangle:
+		f.Profile = nearProfile
 	default:
 		f.Profile = boreProfile
 	}

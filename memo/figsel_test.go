@@ -97,14 +97,14 @@ func TestFigureSelection(t *testing.T) {
 		{"x-axis-coil", coilFigures{Sketch: true, Profile: boreProfile}, false, false,
 			[]string{"Axial flux density Bx along the bore"}, []string{"Torque magnitude"},
 			[]string{"At other angles θ between moment and field the torque is"}},
-		{"thin-loop", coilFigures{Sketch: false, Profile: farProfile}, false, false,
-			[]string{"point-dipole approximation"}, []string{"Cross-section", "Torque magnitude", "Warm-up"},
-			[]string{"too small against the coil to be worth a sketch", "so no warm-up curve is drawn", "the two curves merge beyond"}},
-		{"rectangle", coilFigures{Sketch: true, Profile: farProfile}, false, false,
-			[]string{"in plan", "point-dipole approximation"}, []string{"along the bore"}, nil},
+		{"thin-loop", coilFigures{Sketch: false, Profile: nearProfile}, false, false,
+			[]string{"Axial flux density Bz along the axis of coil"}, []string{"Cross-section", "Torque magnitude", "Warm-up", "point-dipole approximation"},
+			[]string{"too small against the coil to be worth a sketch", "so no warm-up curve is drawn", "half of that at ±"}},
+		{"rectangle", coilFigures{Sketch: true, Profile: nearProfile}, false, false,
+			[]string{"in plan", "dotted: the coil's plane"}, []string{"along the bore", "point-dipole approximation"}, nil},
 		{"tilted-torquer", coilFigures{Sketch: true, Profile: farProfile}, true, true,
 			[]string{"point-dipole approximation", "Torque magnitude"}, []string{"along the bore"},
-			[]string{"a sine, zero with the moment along the field"}},
+			[]string{"a sine, zero with the moment along the field", "the two curves merge beyond"}},
 	} {
 		t.Run(c.design, func(t *testing.T) {
 			j, d := figureDesign(t, c.design)
