@@ -100,12 +100,19 @@ func onAxisPlot(axis string, z, exact, dipole []float64, marks []Mark) (*plot.Pl
 		p.X.Min, p.X.Max = xlo/zp.Factor, xhi/zp.Factor
 	}
 	top := vg.Length(0)
+	avoid := append(exSegs, diSegs...)
 	if len(marks) > 0 {
 		m := &markLines{marks: marks, scale: zp.Factor}
 		p.Add(m)
 		top = m.height()
+		// The legend keeps clear of the marks' lines too.
+		for _, mk := range marks {
+			if !mk.NoLine {
+				avoid = append(avoid, plotter.XYs{{X: mk.X / zp.Factor, Y: p.Y.Min}, {X: mk.X / zp.Factor, Y: p.Y.Max}})
+			}
+		}
 	}
-	return p, top, append(exSegs, diSegs...)
+	return p, top, avoid
 }
 
 // TorqueAngle plots torque (N·m) against angle (degrees).
