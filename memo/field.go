@@ -174,7 +174,13 @@ func sketchHeight(co calc.Coil, e calc.Envelope) vg.Length {
 	if e.Round {
 		top = 50 * vg.Millimeter // a bundle on a diameter: little to see
 	}
-	return max(min(h, top), 50*vg.Millimeter)
+	bottom := 50 * vg.Millimeter
+	if co.RadialBuild <= 0 && co.Form != calc.Pair {
+		// One layer, one diameter to dimension: a long, flat sketch needs
+		// no more than its dimensions' room.
+		bottom = 36 * vg.Millimeter
+	}
+	return max(min(h, top), bottom)
 }
 
 // axisFigure adds the on-axis profile with the dipole overlay.
