@@ -39,6 +39,116 @@ type AxisProfile struct {
 	Z, Exact, Dipole []float64
 	Dipole1pc        float64 // m, NaN when not found
 	Peak             float64 // T, largest |B| of the profile
+	// Bore is the near profile of an air-core coil block (nil for a
+	// cored coil, whose profile is the core's).
+	Bore *BoreProfile
+}
+
+// BoreProfile is the signed axial flux density Bz of an air-core coil
+// block along its own axis over the region a reader works in: a
+// solenoid's bore and mouths out to 1.5 lengths from the centre (at
+// least one outer radius beyond its ends), a pair's space between the
+// coils and one radius beyond them, a loop's or rectangle's out to three
+// times its size (AxialSize). For an opposing pair Gz is the
+// axial gradient ∂Bz/∂z at the same points (central difference over
+// ±10⁻⁴ R). Ends are the positions of the winding's ends along the axis,
+// ascending (four for a pair).
+//
+// Centre is Bz at the centre; Flat the distance from the centre along the
+// axis within which Bz stays within ±1 % of it (bisection on the exact
+// field; NaN for an opposing pair, whose centre field is zero, or when
+// the profile never leaves the band); EndRatio Bz at the outermost end of
+// the winding relative to Centre (NaN for an opposing pair); PeakZ ≥ 0
+// and Peak the position and value of the largest |Bz| of the profile.
+type BoreProfile struct {
+	Z, Bz []float64 // m, T
+	Gz    []float64 // T/m; nil unless an opposing pair
+	Ends  []float64 // m
+
+	Centre, Flat, EndRatio float64 // T, m, 1
+	Peak, PeakZ            float64 // T, m
+	// Half is the distance from the centre along the axis at which Bz
+	// has fallen to half its centre value (NaN for an opposing pair, or
+	// when it does not within the profile).
+	Half float64 // m
+}
+
+// boreTolerance is the band of a bore profile's flat region: 1 %.
+const boreTolerance = 0.01
+
+// borePoints is the number of points of a bore profile.
+const borePoints = 241
+
+func boreProfile(co calc.Coil, cr calc.CoilResult, src *calc.CoilSource, fr calc.Frame) *BoreProfile {
+	bp := &BoreProfile{}
+	var half, outer float64
+	switch co.Form {
+	case calc.Loop, calc.Rectangle:
+		// A flat coil: its plane at the centre, no ends; out to three
+		// times its size.
+		half = 3 * AxialSize(co)
+		if !(half > 0) || math.IsInf(half, 0) {
+			return nil
+		}
+	default:
+		e := calc.WindingEnvelope(co, cr.Winding)
+		R := co.MeanDiameter / 2
+		if !(R > 0) || !(e.Z1 > e.Z0) || math.IsInf(e.R1, 0) {
+			return nil
+		}
+		for _, z := range calc.Placements(co) {
+			bp.Ends = append(bp.Ends, z+e.Z0, z+e.Z1)
+		}
+		outer = bp.Ends[len(bp.Ends)-1]
+		half = math.Max(1.5*(e.Z1-e.Z0), outer+e.R1)
+		if co.Form == calc.Pair {
+			half = outer + R
+		}
+	}
+	R := math.Max(co.MeanDiameter/2, math.Max(co.Width, co.Height)/2)
+	bz := func(z float64) float64 { return src.At(co.Centre.Add(fr.U.Scale(z))).Dot(fr.U) }
+	h := 1e-4 * R
+	bp.Z = SymmetricSpace(half, borePoints)
+	for _, z := range bp.Z {
+		b := bz(z)
+		bp.Bz = append(bp.Bz, b)
+		if co.Form == calc.Pair && co.Opposing {
+			bp.Gz = append(bp.Gz, (bz(z+h)-bz(z-h))/(2*h))
+		}
+		if z >= 0 && math.Abs(b) > math.Abs(bp.Peak) {
+			bp.Peak, bp.PeakZ = b, z
+		}
+	}
+	bp.Centre = bz(0)
+	bp.Flat, bp.EndRatio, bp.Half = math.NaN(), math.NaN(), math.NaN()
+	if co.Opposing || bp.Centre == 0 {
+		return bp
+	}
+	if len(bp.Ends) > 0 {
+		bp.EndRatio = bz(outer) / bp.Centre
+	}
+	// first finds the first distance from the centre at which out holds,
+	// by bisection between the profile's points; NaN when none does.
+	first := func(out func(z float64) bool) float64 {
+		for i := borePoints / 2; i+1 < len(bp.Z); i++ {
+			if !out(bp.Z[i+1]) {
+				continue
+			}
+			a, b := bp.Z[i], bp.Z[i+1]
+			for range 40 {
+				if m := (a + b) / 2; out(m) {
+					b = m
+				} else {
+					a = m
+				}
+			}
+			return (a + b) / 2
+		}
+		return math.NaN()
+	}
+	bp.Flat = first(func(z float64) bool { return math.Abs(bz(z)/bp.Centre-1) > boreTolerance })
+	bp.Half = first(func(z float64) bool { return bz(z)/bp.Centre < 0.5 })
+	return bp
 }
 
 func profileOnAxis(co calc.Coil, cr calc.CoilResult, n int) AxisProfile {
@@ -64,6 +174,7 @@ func profileOnAxis(co calc.Coil, cr calc.CoilResult, n int) AxisProfile {
 		}
 		p.Dipole = append(p.Dipole, dip)
 	}
+	p.Bore = boreProfile(co, cr, src, fr)
 	return p
 }
 
@@ -103,6 +214,9 @@ func coilMap(co calc.Coil, cr calc.CoilResult, cs CoilStudy) *MapData {
 		}
 		xHalf = 1.6 * e.R1
 		zHalf = math.Max(half+0.9*e.R1, 0.75*xHalf)
+		// A long solenoid's map reaches out far enough to show the field
+		// returning round the winding, not a sliver along the bore.
+		xHalf = math.Max(xHalf, 0.35*zHalf)
 	}
 	if !(xHalf > 0) || !(zHalf > 0) || math.IsInf(xHalf, 0) || math.IsInf(zHalf, 0) {
 		return nil

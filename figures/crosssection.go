@@ -191,6 +191,38 @@ func drawCrossSection(c vg.Canvas, w, h vg.Length, d SketchData) {
 		}
 		return z
 	}
+	// The vertical lines above the sections — mid-planes and the axial
+	// dimensions' extension lines — which no axial label may cross.
+	type vline struct{ x, y0, y1 vg.Length }
+	var vlines []vline
+	for _, zc := range d.CentreLines {
+		vlines = append(vlines, vline{X(zc), Y(0) - vg.Points(4), Y(r1) + vg.Points(6)})
+	}
+	{
+		k := 0
+		for _, dm := range d.Dimensions {
+			if dm.Kind != Axial {
+				continue
+			}
+			k++
+			ya := Y(topOf(dm.A, dm.B)) + vg.Points(1.5)
+			y := Y(r1) + vg.Length(k)*dimGap - vg.Points(3) + vg.Points(2)
+			vlines = append(vlines, vline{X(dm.A), ya, y}, vline{X(dm.B), ya, y})
+		}
+	}
+	// clear reports whether a label box [x0, x1] × [y0, y1] stays clear
+	// of every vertical line, and within the figure.
+	clear := func(x0, x1, y0, y1 vg.Length) bool {
+		if x0 < 0 || x1 > w {
+			return false
+		}
+		for _, v := range vlines {
+			if v.x > x0-vg.Points(1.5) && v.x < x1+vg.Points(1.5) && v.y1 > y0 && v.y0 < y1 {
+				return false
+			}
+		}
+		return true
+	}
 	for _, dm := range d.Dimensions {
 		switch dm.Kind {
 		case Diameter:
@@ -232,19 +264,45 @@ func drawCrossSection(c vg.Canvas, w, h vg.Length, d SketchData) {
 				arrow(dc, vg.Point{X: xb, Y: y}, -1, 0)
 			}
 			lx := (xa + xb) / 2
-			if lw > xb-xa+2*arrowLen {
-				// Label beside the short dimension, on the side with room.
-				sty.XAlign = draw.XLeft
-				lx = xb + arrowLen + vg.Points(6)
-				sty.YAlign = draw.YCenter
-				if lx+lw > w {
-					sty.XAlign = draw.XRight
-					lx = xa - arrowLen - vg.Points(6)
-				}
-				dc.FillText(sty, vg.Point{X: lx, Y: y}, dm.Label)
+			lh := lab.Height(dm.Label)
+			// Over the line, centred, when it fits there clear of other
+			// lines; else beside the dimension, right or left, level with
+			// it (a short dimension's label, or one a mid-plane or
+			// another dimension's extension line would strike through).
+			if lw <= xb-xa+2*arrowLen && clear(lx-lw/2, lx+lw/2, y+vg.Points(1.5), y+vg.Points(1.5)+lh) {
+				dc.FillText(sty, vg.Point{X: lx, Y: y + vg.Points(1.5)}, dm.Label)
 				continue
 			}
-			dc.FillText(sty, vg.Point{X: lx, Y: y + vg.Points(1.5)}, dm.Label)
+			sty.YAlign = draw.YCenter
+			right := xb + arrowLen + vg.Points(6)
+			if xb-xa >= 2*arrowLen+vg.Points(2) {
+				right = xb + vg.Points(4) // arrows inside: the line ends at xb
+			}
+			left := xa - (right - xb)
+			switch {
+			case clear(right, right+lw, y-lh/2, y+lh/2):
+				sty.XAlign = draw.XLeft
+				lx = right
+			case clear(left-lw, left, y-lh/2, y+lh/2):
+				sty.XAlign = draw.XRight
+				lx = left
+			default:
+				// No clear place: over the line, the lines behind it
+				// broken by a white ground.
+				sty.YAlign = draw.YBottom
+				ly := y + vg.Points(1.5)
+				dc.SetColor(color.White)
+				var bg vg.Path
+				bg.Move(vg.Point{X: lx - lw/2 - 1, Y: ly})
+				bg.Line(vg.Point{X: lx + lw/2 + 1, Y: ly})
+				bg.Line(vg.Point{X: lx + lw/2 + 1, Y: ly + lh})
+				bg.Line(vg.Point{X: lx - lw/2 - 1, Y: ly + lh})
+				bg.Close()
+				dc.Fill(bg)
+				dc.FillText(sty, vg.Point{X: lx, Y: ly}, dm.Label)
+				continue
+			}
+			dc.FillText(sty, vg.Point{X: lx, Y: y}, dm.Label)
 		case Radial:
 			iRad++
 			za := z1

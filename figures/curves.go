@@ -17,6 +17,9 @@ import (
 type Mark struct {
 	X     float64
 	Label string
+	// NoLine sets the label alone, without the line (e.g. over a shaded
+	// winding).
+	NoLine bool
 }
 
 // OnAxis plots the axial flux density |B| against axial position: the
@@ -24,12 +27,31 @@ type Mark struct {
 // where it is not drawn, e.g. inside the winding) overlaid. The y axis is
 // logarithmic when the data span more than two decades. Units get the
 // engineering prefix that suits the data (mm, mT, µT, …).
-func OnAxis(z, exact, dipole []float64, marks ...Mark) DrawFunc {
-	p, top, curves := onAxisPlot(z, exact, dipole, marks)
+//
+// axis names the coil's axis for the abscissa's label (AxialLabel): "z"
+// for a coil along z, "x" for one along x, a direction for a tilted one.
+// On a log axis every labelled tick carries its unit ("10 µT"), so the
+// axis label has none.
+func OnAxis(axis string, z, exact, dipole []float64, marks ...Mark) DrawFunc {
+	p, top, curves := onAxisPlot(axis, z, exact, dipole, marks)
 	return drawer(p, top, curves)
 }
 
-func onAxisPlot(z, exact, dipole []float64, marks []Mark) (*plot.Plot, vg.Length, []plotter.XYs) {
+// AxialLabel is the label of an abscissa along a coil's axis: "Axial
+// position z" for a coil whose axis is z, and the axis named for any
+// other: "Axial position along the coil's axis x", or for a direction
+// "Axial position along the coil's axis û = (0.71, 0.71, 0)".
+func AxialLabel(axis string) string {
+	switch {
+	case axis == "" || axis == "z":
+		return "Axial position z"
+	case strings.HasPrefix(axis, "("):
+		return "Axial position along the coil's axis û = " + axis
+	}
+	return "Axial position along the coil's axis " + axis
+}
+
+func onAxisPlot(axis string, z, exact, dipole []float64, marks []Mark) (*plot.Plot, vg.Length, []plotter.XYs) {
 	zp := EngPrefix(z...)
 	if zp.Factor > 1 {
 		zp = Prefix{"", 1} // no km of coil axis
@@ -39,13 +61,17 @@ func onAxisPlot(z, exact, dipole []float64, marks []Mark) (*plot.Plot, vg.Length
 	lo, hi, ok := positiveRange(exact, dipole)
 	logY := ok && hi/lo > 100
 
-	p := NewPlot("Axial position z ("+zp.Symbol+"m)", "Flux density |B| ("+bp.Symbol+"T)")
+	yLabel := "Flux density |B| (" + bp.Symbol + "T)"
+	if logY {
+		yLabel = "Flux density |B|"
+	}
+	p := NewPlot(AxialLabel(axis)+" ("+zp.Symbol+"m)", yLabel)
 	exSegs := segments(z, exact, zp.Factor, bp.Factor, logY)
 	diSegs := segments(z, dipole, zp.Factor, bp.Factor, logY)
 
 	if logY {
 		p.Y.Scale = plot.LogScale{}
-		p.Y.Tick.Marker = decadeTicks{}
+		p.Y.Tick.Marker = engDecadeTicks{unit: "T", factor: bp.Factor}
 		// Decades enclosing the exact curve; the approximation is clipped
 		// to them rather than stretching the axis.
 		elo, ehi, _ := positiveRange(exact, nil)
@@ -74,12 +100,19 @@ func onAxisPlot(z, exact, dipole []float64, marks []Mark) (*plot.Plot, vg.Length
 		p.X.Min, p.X.Max = xlo/zp.Factor, xhi/zp.Factor
 	}
 	top := vg.Length(0)
+	avoid := append(exSegs, diSegs...)
 	if len(marks) > 0 {
 		m := &markLines{marks: marks, scale: zp.Factor}
 		p.Add(m)
 		top = m.height()
+		// The legend keeps clear of the marks' lines too.
+		for _, mk := range marks {
+			if !mk.NoLine {
+				avoid = append(avoid, plotter.XYs{{X: mk.X / zp.Factor, Y: p.Y.Min}, {X: mk.X / zp.Factor, Y: p.Y.Max}})
+			}
+		}
 	}
-	return p, top, append(exSegs, diSegs...)
+	return p, top, avoid
 }
 
 // TorqueAngle plots torque (N·m) against angle (degrees).
@@ -152,6 +185,46 @@ func (decadeTicks) Ticks(min, max float64) []plot.Tick {
 		}
 	}
 	return ticks
+}
+
+// engDecadeTicks are decadeTicks labelled in engineering units: the axis
+// holds values in units of factor·unit, and each labelled decade is
+// written with the prefix under which it reads 1, 10 or 100 ("100 nT",
+// "1 µT").
+type engDecadeTicks struct {
+	unit   string
+	factor float64
+}
+
+func (t engDecadeTicks) Ticks(min, max float64) []plot.Tick {
+	ticks := decadeTicks{}.Ticks(min, max)
+	for i := range ticks {
+		if ticks[i].Label != "" {
+			ticks[i].Label = EngLabel(ticks[i].Value*t.factor, t.unit)
+		}
+	}
+	return ticks
+}
+
+// tickPrefixes extend the prefixes down to femto, for the foot of a log
+// axis.
+var tickPrefixes = append(append([]Prefix{}, prefixes...), Prefix{"f", 1e-15})
+
+// EngLabel writes a tick value v (SI) with the SI prefix under which it
+// reads from 1 to below 1000, and the unit: 2e-5 T is "20 µT".
+func EngLabel(v float64, unit string) string {
+	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
+		return "0 " + unit
+	}
+	pf := tickPrefixes[len(tickPrefixes)-1]
+	for _, q := range tickPrefixes {
+		if math.Abs(v) >= q.Factor*0.9995 {
+			pf = q
+			break
+		}
+	}
+	m := math.Round(v/pf.Factor*1000) / 1000
+	return strconv.FormatFloat(m, 'f', -1, 64) + " " + pf.Symbol + unit
 }
 
 // decadeLabel writes 10^e the short way.
@@ -249,7 +322,9 @@ func (m *markLines) Plot(c draw.Canvas, p *plot.Plot) {
 			continue
 		}
 		x := trX(v)
-		c.StrokeLine2(ls, x, c.Min.Y, x, c.Max.Y)
+		if !mk.NoLine {
+			c.StrokeLine2(ls, x, c.Min.Y, x, c.Max.Y)
+		}
 		if mk.Label == "" {
 			continue
 		}

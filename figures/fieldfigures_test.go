@@ -1,12 +1,14 @@
 package figures
 
 import (
+	"fmt"
 	"image"
 	"image/color"
 	"math"
 	"strings"
 	"testing"
 
+	"gonum.org/v1/plot/vg"
 	"gonum.org/v1/plot/vg/recorder"
 )
 
@@ -261,4 +263,109 @@ func TestDeviationPlot(t *testing.T) {
 			t.Errorf("deviation plot lacks %q: %s", want, all)
 		}
 	}
+}
+
+// No dimension text of a sketch is struck through by a line: a pair's
+// winding-length label centred on a mid-plane moves beside its
+// dimension; a multilayer coil's labels stay clear too.
+func TestCrossSectionLabelsClear(t *testing.T) {
+	pair := SketchData{
+		Sections: []Section{{X0: -0.04, X1: -0.03, Y0: 0.045, Y1: 0.055}, {X0: 0.03, X1: 0.04, Y0: 0.045, Y1: 0.055}},
+		Dimensions: []Dimension{
+			{Kind: Axial, A: -0.04, B: -0.03, Label: "10 mm"},
+			{Kind: Axial, A: -0.035, B: 0.035, Label: "spacing 70 mm"},
+		},
+		CentreLines: []float64{-0.035, 0.035},
+	}
+	thick := SketchData{
+		Sections: []Section{{X0: -0.0125, X1: 0.0125, Y0: 0.0065, Y1: 0.01475}},
+		Dimensions: []Dimension{
+			{Kind: Diameter, A: 0.0065, Label: "Ø 13 mm inner"},
+			{Kind: Diameter, A: 0.0106, Label: "Ø 21.25 mm mean"},
+			{Kind: Diameter, A: 0.01475, Label: "Ø 29.5 mm outer"},
+			{Kind: Axial, A: -0.0125, B: 0.0125, Label: "25 mm"},
+			{Kind: Radial, A: 0.0065, B: 0.01475, Label: "8.25 mm"},
+		},
+	}
+	thinPair := SketchData{
+		Sections: []Section{{X0: -0.076, X1: -0.074, Y0: 0.099, Y1: 0.101, Round: true}, {X0: 0.074, X1: 0.076, Y0: 0.099, Y1: 0.101, Round: true}},
+		Dimensions: []Dimension{
+			{Kind: Diameter, A: 0.1, Label: "Ø 200 mm mean"},
+			{Kind: Axial, A: -0.075, B: 0.075, Label: "spacing 150 mm"},
+		},
+		CentreLines: []float64{-0.075, 0.075},
+		Notes:       []Note{{X: 0.076, Y: 0.101, Text: "30 turns, bundle ≈ Ø 2 mm"}},
+	}
+	for name, d := range map[string]SketchData{"pair": pair, "thick": thick, "thin pair": thinPair} {
+		for _, n := range sketchCrossings(d, 460, 200) {
+			t.Errorf("%s: %s", name, n)
+		}
+	}
+}
+
+// sketchCrossings draws a sketch and lists every label (set upright)
+// that a straight line of the drawing strikes through.
+func sketchCrossings(d SketchData, w, h vg.Length) []string {
+	var c recorder.Canvas
+	CrossSection(d)(&c, w, h)
+	type seg struct{ a, b vg.Point }
+	var segs []seg
+	type box struct {
+		text           string
+		x0, x1, y0, y1 vg.Length
+	}
+	var boxes []box
+	lab := style(TickSize, Ink)
+	type state struct {
+		off     vg.Point
+		rotated bool
+	}
+	var stack []state
+	cur := state{}
+	for _, a := range c.Actions {
+		switch a := a.(type) {
+		case *recorder.Push:
+			stack = append(stack, cur)
+		case *recorder.Pop:
+			cur, stack = stack[len(stack)-1], stack[:len(stack)-1]
+		case *recorder.Translate:
+			cur.off = vg.Point{X: cur.off.X + a.Point.X, Y: cur.off.Y + a.Point.Y}
+		case *recorder.Rotate:
+			cur.rotated = cur.rotated || a.Angle != 0
+		case *recorder.Stroke:
+			var prev vg.Point
+			for i, pc := range a.Path {
+				if i > 0 && pc.Type == vg.LineComp {
+					segs = append(segs, seg{prev, pc.Pos})
+				}
+				prev = pc.Pos
+			}
+		case *recorder.FillString:
+			if cur.rotated {
+				continue
+			}
+			p := vg.Point{X: cur.off.X + a.Point.X, Y: cur.off.Y + a.Point.Y}
+			e := lab.FontExtents()
+			boxes = append(boxes, box{a.String, p.X, p.X + lab.Width(a.String), p.Y - e.Descent, p.Y + e.Ascent})
+		}
+	}
+	var out []string
+	for _, b := range boxes {
+		for _, s := range segs {
+			// A vertical or horizontal line through the box's inside.
+			switch {
+			case math.Abs(float64(s.a.X-s.b.X)) < 0.01:
+				x, y0, y1 := s.a.X, min(s.a.Y, s.b.Y), max(s.a.Y, s.b.Y)
+				if x > b.x0+0.5 && x < b.x1-0.5 && y1 > b.y0+0.5 && y0 < b.y1-0.5 {
+					out = append(out, fmt.Sprintf("label %q struck by the vertical line at x = %.1f pt", b.text, x))
+				}
+			case math.Abs(float64(s.a.Y-s.b.Y)) < 0.01:
+				y, x0, x1 := s.a.Y, min(s.a.X, s.b.X), max(s.a.X, s.b.X)
+				if y > b.y0+1 && y < b.y1-1 && x1 > b.x0+0.5 && x0 < b.x1-0.5 {
+					out = append(out, fmt.Sprintf("label %q struck by the horizontal line at y = %.1f pt", b.text, y))
+				}
+			}
+		}
+	}
+	return out
 }

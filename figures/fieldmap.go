@@ -204,6 +204,13 @@ func drawFieldMap(c vg.Canvas, w, h vg.Length, d MapData) {
 	barRoom := vg.Length(barW)*vg.Millimeter + vg.Points(44)
 	dc := draw.Canvas{Canvas: c, Rectangle: vg.Rectangle{Max: vg.Point{X: w, Y: h}}}
 	dc = draw.Crop(dc, vg.Points(1), -vg.Points(6)-barRoom, vg.Points(1), -vg.Points(14))
+	// The y-axis label is set here, as in drawer: gonum/plot keeps room
+	// for it about the axis's midpoint, which on a flat map (a long
+	// solenoid's) would squeeze the data area to a sliver.
+	ylabel, ysty := p.Y.Label.Text, p.Y.Label.TextStyle
+	lw := ysty.Height(ylabel) + ysty.FontExtents().Descent + p.Y.Label.Padding
+	p.Y.Label.Text = ""
+	dc = draw.Crop(dc, lw, 0, 0, 0)
 	// Equal scales: shrink the plot's canvas in the direction with room to
 	// spare, keeping it centred.
 	for range 3 {
@@ -221,6 +228,21 @@ func drawFieldMap(c vg.Canvas, w, h vg.Length, d MapData) {
 	}
 	p.Draw(dc)
 	da := p.DataCanvas(dc)
+	p.Y.Label.Text = ylabel
+	ysty.Rotation = math.Pi / 2
+	ysty.XAlign = draw.XCenter
+	ysty.YAlign = draw.YBottom
+	ytl := p.Y.Tick.Label
+	var tickW vg.Length
+	for _, tk := range p.Y.Tick.Marker.Ticks(p.Y.Min, p.Y.Max) {
+		if tk.Label != "" {
+			tickW = max(tickW, ytl.Width(tk.Label))
+		}
+	}
+	lx := da.Min.X - tickW - p.Y.Tick.Length - p.Y.Label.Padding - ysty.FontExtents().Descent
+	c.Push()
+	dc.FillText(ysty, vg.Point{X: lx, Y: da.Center().Y}, ylabel)
+	c.Pop()
 	drawColourBar(c, vg.Rectangle{
 		Min: vg.Point{X: da.Max.X + vg.Points(10), Y: da.Min.Y},
 		Max: vg.Point{X: da.Max.X + vg.Points(10) + vg.Length(barW)*vg.Millimeter, Y: da.Max.Y},

@@ -201,9 +201,14 @@ func placeLegend(p *plot.Plot, dc draw.Canvas, curves []plotter.XYs) {
 			a := vg.Point{X: trX(xy[i].X), Y: trY(xy[i].Y)}
 			pts = append(pts, a)
 			if i+1 < len(xy) && inRange(xy[i+1].X, xy[i+1].Y) {
+				// Points every 2 pt along the segment, so that a line
+				// counts by its length under the legend, however few
+				// its data points (a requirement line has two).
 				b := vg.Point{X: trX(xy[i+1].X), Y: trY(xy[i+1].Y)}
-				for k := 1; k < 8; k++ {
-					t := vg.Length(k) / 8
+				n := int(math.Ceil(float64(math.Hypot(float64(b.X-a.X), float64(b.Y-a.Y)) / 2)))
+				n = min(max(n, 1), 2000)
+				for k := 1; k < n; k++ {
+					t := vg.Length(k) / vg.Length(n)
 					pts = append(pts, vg.Point{X: a.X + (b.X-a.X)*t, Y: a.Y + (b.Y-a.Y)*t})
 				}
 			}

@@ -82,7 +82,7 @@ func sampleAxis(n int, decay float64) (z, ex, di []float64) {
 func TestOnAxisText(t *testing.T) {
 	z, ex, di := sampleAxis(200, 1.5)
 	var c recorder.Canvas
-	OnAxis(z, ex, di, Mark{X: 0.03, Label: "end"})(&c, 400, 240)
+	OnAxis("z", z, ex, di, Mark{X: 0.03, Label: "end"})(&c, 400, 240)
 	var texts []string
 	for _, a := range c.Actions {
 		if fs, ok := a.(*recorder.FillString); ok {
@@ -93,7 +93,9 @@ func TestOnAxisText(t *testing.T) {
 		}
 	}
 	all := strings.Join(texts, "|")
-	for _, want := range []string{"Axial position z (mm)", "Flux density |B| (mT)", "Exact (finite winding)", "Dipole approximation", "end", "|0.1|"} {
+	// A log axis (this profile spans three decades): the ticks carry the
+	// unit, the axis label none.
+	for _, want := range []string{"Axial position z (mm)", "Flux density |B||Axial", "Exact (finite winding)", "Dipole approximation", "end", "|100 µT|", "|1 mT|"} {
 		if !strings.Contains(all, want) {
 			t.Errorf("figure text lacks %q: %s", want, all)
 		}
@@ -107,7 +109,7 @@ func TestOnAxisScale(t *testing.T) {
 		log   bool
 	}{{1.5, true}, {0.2, false}} {
 		z, ex, di := sampleAxis(50, c.decay)
-		p, _, _ := onAxisPlot(z, ex, di, nil)
+		p, _, _ := onAxisPlot("z", z, ex, di, nil)
 		_, isLog := p.Y.Scale.(plot.LogScale)
 		if isLog != c.log {
 			t.Errorf("decay %g: log scale %v, want %v", c.decay, isLog, c.log)
@@ -153,5 +155,31 @@ func TestLegendCorner(t *testing.T) {
 	Drawer(p, segs...)(&c, 300, 200)
 	if !p.Legend.Top || !p.Legend.Left {
 		t.Errorf("legend top=%v left=%v, want top left", p.Legend.Top, p.Legend.Left)
+	}
+}
+
+// The abscissa along a coil's axis names the axis unless it is z.
+func TestAxialLabel(t *testing.T) {
+	for axis, want := range map[string]string{
+		"z": "Axial position z", "": "Axial position z",
+		"x":               "Axial position along the coil's axis x",
+		"−y":              "Axial position along the coil's axis −y",
+		"(0.71, 0.71, 0)": "Axial position along the coil's axis û = (0.71, 0.71, 0)",
+	} {
+		if got := AxialLabel(axis); got != want {
+			t.Errorf("AxialLabel(%q) = %q, want %q", axis, got, want)
+		}
+	}
+}
+
+// Log-axis ticks carry engineering units; linear ones plain numbers.
+func TestEngLabel(t *testing.T) {
+	for _, c := range []struct {
+		v    float64
+		want string
+	}{{1e-6, "1 µT"}, {9.999999999999999e-06, "10 µT"}, {1e-4, "100 µT"}, {1e-3, "1 mT"}, {2e-9, "2 nT"}, {1e-15, "1 fT"}} {
+		if got := EngLabel(c.v, "T"); got != c.want {
+			t.Errorf("EngLabel(%g) = %q, want %q", c.v, got, c.want)
+		}
 	}
 }

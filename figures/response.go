@@ -11,9 +11,10 @@ import (
 // frequency, Hz, both on logarithmic axes, with marks (e.g. the design
 // frequency and the self-resonance) as labelled vertical lines in Hz.
 func Response(f, sens []float64, marks ...Mark) DrawFunc {
-	p := NewPlot("Frequency f (Hz)", "Sensitivity |V/B| (V/T)")
+	// Both axes are logarithmic, their ticks in engineering units.
+	p := NewPlot("Frequency f", "Sensitivity |V/B|")
 	p.X.Scale, p.Y.Scale = plot.LogScale{}, plot.LogScale{}
-	p.X.Tick.Marker, p.Y.Tick.Marker = decadeTicks{}, decadeTicks{}
+	p.X.Tick.Marker, p.Y.Tick.Marker = engDecadeTicks{unit: "Hz", factor: 1}, engDecadeTicks{unit: "V/T", factor: 1}
 	segs := segments(f, sens, 1, 1, true)
 	if lo, hi, ok := positiveRange(sens, nil); ok {
 		p.Y.Min = math.Pow(10, math.Floor(math.Log10(lo)))

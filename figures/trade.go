@@ -48,8 +48,15 @@ func Trade(d TradeData) DrawFunc {
 	ys = append(append(ys, d.YLimits...), d.ChosenY)
 	xp, yp := EngPrefix(xs...), EngPrefix(ys...)
 	p := NewPlot(d.XName+" ("+xp.Symbol+d.XUnit+")", d.YName+" ("+yp.Symbol+d.YUnit+")")
-	logX := logAxis(&p.X, xs, xp.Factor)
-	logY := logAxis(&p.Y, ys, yp.Factor)
+	logX := logAxis(&p.X, xs, xp.Factor, d.XUnit)
+	logY := logAxis(&p.Y, ys, yp.Factor, d.YUnit)
+	// A log axis's ticks carry their unit: the label names the quantity.
+	if logX {
+		p.X.Label.Text = d.XName
+	}
+	if logY {
+		p.Y.Label.Text = d.YName
+	}
 	var curves []plotter.XYs
 	scaled := func(x, y []float64) []plotter.XYs { return segments(x, y, xp.Factor, yp.Factor, logX || logY) }
 	var trace, mark *plotter.Scatter
@@ -163,14 +170,15 @@ func scatter(p *plot.Plot, segs []plotter.XYs, c color.Color, radius float64) *p
 // logAxis makes ax logarithmic, over whole decades, when the positive
 // values v span more than a decade and a half, and sets its range; it
 // reports whether it did.
-func logAxis(ax *plot.Axis, v []float64, factor float64) bool {
+// A log axis's ticks are labelled in engineering units of unit.
+func logAxis(ax *plot.Axis, v []float64, factor float64, unit string) bool {
 	lo, hi, ok := positiveRange(v, nil)
 	if !ok {
 		return false
 	}
 	if hi/lo > math.Pow(10, 1.5) {
 		ax.Scale = plot.LogScale{}
-		ax.Tick.Marker = decadeTicks{}
+		ax.Tick.Marker = engDecadeTicks{unit: unit, factor: factor}
 		ax.Min = math.Pow(10, math.Floor(math.Log10(lo/factor)))
 		ax.Max = math.Pow(10, math.Ceil(math.Log10(hi/factor)))
 		return true

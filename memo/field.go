@@ -52,13 +52,23 @@ func (c *composer) field() {
 		co, cr := d.Coils[i], r.Coils[i]
 		c.heading(2, fmt.Sprintf("Field of coil %q", co.Name))
 		cs := &c.j.Coils[i]
-		c.crossSection(co, cr, cs)
-		c.axisFigure(co, cr, cs)
+		f := figuresFor(c.j, i) // which figures: memo/figsel.go
+		c.crossSection(co, cr, cs, f)
+		if co.Form == calc.Pair {
+			c.pairRegion(co, cr, cs, i, f) // the pair's purpose first
+		}
+		switch f.Profile {
+		case boreProfile:
+			c.boreFigure(co, cs, i)
+		case pairProfile:
+			c.pairProfileFigure(co, cs)
+		case nearProfile:
+			c.nearFigure(co, cs, i)
+		default:
+			c.axisFigure(co, cr, cs)
+		}
 		c.fieldMap(co, cr, cs)
 		c.dipoleDistances(co, cr)
-		if co.Form == calc.Pair {
-			c.pairRegion(co, cr, cs)
-		}
 	}
 	c.allCoilsMap()
 }
@@ -91,7 +101,7 @@ func trimDot(s string) string {
 }
 
 // crossSection adds the dimensioned sketch of the winding.
-func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) {
+func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, f coilFigures) {
 	w := cr.Winding
 	n := c.figure + 1
 	if co.Form == calc.Rectangle {
@@ -110,7 +120,7 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 	if !(e.R1 > 0) || math.IsInf(e.R1, 0) {
 		return // nothing to draw
 	}
-	if w.Thin && co.Form != calc.Pair {
+	if !f.Sketch {
 		// At the coil's scale a thin coil's section is a dot: say it.
 		c.para(fmt.Sprintf("The winding of coil %q is thin: all %d turns lie in one round bundle about %s across on the mean diameter of %s, a section too small against the coil to be worth a sketch.",
 			co.Name, co.Turns, mmText(e.R1-e.R0), mmText(co.MeanDiameter)))
@@ -173,7 +183,13 @@ func sketchHeight(co calc.Coil, e calc.Envelope) vg.Length {
 	if e.Round {
 		top = 50 * vg.Millimeter // a bundle on a diameter: little to see
 	}
-	return max(min(h, top), 50*vg.Millimeter)
+	bottom := 50 * vg.Millimeter
+	if co.RadialBuild <= 0 && co.Form != calc.Pair {
+		// One layer, one diameter to dimension: a long, flat sketch needs
+		// no more than its dimensions' room.
+		bottom = 36 * vg.Millimeter
+	}
+	return max(min(h, top), bottom)
 }
 
 // axisFigure adds the on-axis profile with the dipole overlay.
@@ -192,14 +208,132 @@ func (c *composer) axisFigure(co calc.Coil, cr calc.CoilResult, cs *analysis.Coi
 	}
 	n := c.figure + 1
 	text := fmt.Sprintf("Figure %d shows the flux density along the axis of coil %q", n, co.Name)
-	if cr.Moment.Norm() > 0 {
-		text += ", with the field of a point dipole of the coil's moment for comparison."
-	} else {
+	switch {
+	case cr.Moment.Norm() > 0 && !math.IsNaN(p.Dipole1pc):
+		text += fmt.Sprintf(", with the field of a point dipole of the coil's moment for comparison: the two curves merge beyond ±%s from the centre (dotted), where the dipole is within 1 %% of the exact field; nearer the winding the dipole overstates the field.",
+			Eng(p.Dipole1pc, "m", 3))
+	case cr.Moment.Norm() > 0:
+		text += ", with the field of a point dipole of the coil's moment for comparison; away from the winding the two curves merge."
+	default:
 		text += "; its two halves oppose, so it has no dipole moment."
+	}
+	if lo, hi := profileDecades(p.Exact); hi/lo > 100 {
+		text += fmt.Sprintf(" The field falls from %s at its peak to %s at ±%s, so the flux density is on a logarithmic scale.",
+			Eng(hi, "T", 3), Eng(lo, "T", 3), Eng(p.Z[len(p.Z)-1], "m", 3))
 	}
 	c.para(text)
 	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight,
-		Draw: figures.OnAxis(p.Z, p.Exact, p.Dipole, marks...), Summary: summary})
+		Draw: figures.OnAxis(axisName(co), p.Z, p.Exact, p.Dipole, marks...), Summary: summary})
+}
+
+// profileDecades is the smallest and largest positive value of a profile.
+func profileDecades(v []float64) (lo, hi float64) {
+	lo, hi = math.Inf(1), 0
+	for _, x := range v {
+		if x > 0 && !math.IsInf(x, 0) {
+			lo, hi = math.Min(lo, x), math.Max(hi, x)
+		}
+	}
+	return lo, hi
+}
+
+// boreFigure adds a solenoid's field over its bore, on linear axes, with
+// its ends marked and a centre-field requirement drawn.
+func (c *composer) boreFigure(co calc.Coil, cs *analysis.CoilStudy, i int) {
+	bp := cs.Axis.Bore
+	bs, _ := axialSymbol(co)
+	n := c.figure + 1
+	L := bp.Ends[len(bp.Ends)-1] - bp.Ends[0]
+	text := fmt.Sprintf("Figure %d shows the axial flux density %s along the bore of coil %q, out to %s from the centre; the winding's ends are dotted.", n, bs, co.Name, Eng(bp.Z[len(bp.Z)-1], "m", 3)) + axialNote(co)
+	if !math.IsNaN(bp.Flat) {
+		text += fmt.Sprintf(" The field stays within 1 %% of its centre value, %s, over ±%s (%s %% of the winding's length)", Eng(bp.Centre, "T", 4), Eng(bp.Flat, "m", 3), Sig(200*bp.Flat/L, 2))
+	}
+	if !math.IsNaN(bp.EndRatio) {
+		text += fmt.Sprintf(" and has fallen to %s %% of it at the ends.", Sig(100*bp.EndRatio, 2))
+	}
+	d := figures.ProfileData{Axis: axisName(co), Z: bp.Z, Y: bp.Bz, YName: "Axial flux density " + bs, Unit: "T",
+		Marks: []figures.Mark{{X: bp.Ends[0], Label: "end"}, {X: bp.Ends[len(bp.Ends)-1], Label: "end"}}}
+	caption := fmt.Sprintf("Axial flux density %s along the bore of coil %q (exact field; dotted: the winding's ends)", bs, co.Name)
+	if req, ok := c.centreRequirement(i); ok {
+		d.Levels = append(d.Levels, figures.Level{Y: math.Copysign(req.Limit.Required, bp.Centre), Label: "required " + relText(req.Limit) + " " + Eng(req.Limit.Required, "T", 3)})
+		caption += "; dashed: the required centre field"
+		text += fmt.Sprintf(" The required centre field (dashed) is %s.", map[bool]string{true: "met", false: "not met"}[req.Pass])
+	}
+	c.para(text)
+	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight * 0.85, Draw: figures.Profile(d),
+		Summary: fmt.Sprintf("%s on axis: %s at the centre, within 1 %% over ±%s.", bs, Eng(bp.Centre, "T", 3), Eng(bp.Flat, "m", 3))})
+}
+
+// nearFigure adds a loop's or rectangle's field along its axis near its
+// plane, on linear axes, with a centre-field requirement drawn.
+func (c *composer) nearFigure(co calc.Coil, cs *analysis.CoilStudy, i int) {
+	bp := cs.Axis.Bore
+	bs, _ := axialSymbol(co)
+	n := c.figure + 1
+	edge := bp.Z[len(bp.Z)-1]
+	text := fmt.Sprintf("Figure %d shows the axial flux density %s along the axis of coil %q on linear scales, out to %s on either side of its plane (dotted): it is %s at the centre",
+		n, bs, co.Name, Eng(edge, "m", 3), Eng(bp.Centre, "T", 4))
+	if !math.IsNaN(bp.Half) {
+		text += fmt.Sprintf(", half of that at ±%s", Eng(bp.Half, "m", 3))
+	}
+	text += fmt.Sprintf(" and %s at ±%s.", Eng(bp.Bz[len(bp.Bz)-1], "T", 3), Eng(edge, "m", 3)) + axialNote(co)
+	d := figures.ProfileData{Axis: axisName(co), Z: bp.Z, Y: bp.Bz, YName: "Axial flux density " + bs, Unit: "T",
+		Marks: []figures.Mark{{X: 0, Label: "coil plane"}}}
+	caption := fmt.Sprintf("Axial flux density %s along the axis of coil %q (exact field; dotted: the coil's plane)", bs, co.Name)
+	if req, ok := c.centreRequirement(i); ok {
+		d.Levels = append(d.Levels, figures.Level{Y: math.Copysign(req.Limit.Required, bp.Centre), Label: "required " + relText(req.Limit) + " " + Eng(req.Limit.Required, "T", 3)})
+		caption += "; dashed: the required centre field"
+		text += fmt.Sprintf(" The required centre field (dashed) is %s.", map[bool]string{true: "met", false: "not met"}[req.Pass])
+	}
+	c.para(text)
+	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight * 0.8, Draw: figures.Profile(d),
+		Summary: fmt.Sprintf("%s on axis: %s at the centre, half of it at ±%s.", bs, Eng(bp.Centre, "T", 3), Eng(bp.Half, "m", 3))})
+}
+
+// centreRequirement finds the centre-field requirement that applies to
+// coil block i alone: one naming it, or one on the design when it is the
+// only coil.
+func (c *composer) centreRequirement(i int) (analysis.LimitResult, bool) {
+	for _, l := range c.j.Limits {
+		if l.Limit.Quantity != "field-center" {
+			continue
+		}
+		if l.Coil == i || (l.Limit.Subject == "" && len(c.j.Spec.Design.Coils) == 1) {
+			return l, true
+		}
+	}
+	return analysis.LimitResult{}, false
+}
+
+// pairProfileFigure adds a pair's Bz along its axis across the pair, on
+// linear axes, with the windings shaded.
+func (c *composer) pairProfileFigure(co calc.Coil, cs *analysis.CoilStudy) {
+	bp := cs.Axis.Bore
+	bs, _ := axialSymbol(co)
+	n := c.figure + 1
+	var spans [][2]float64
+	for k := 0; k+1 < len(bp.Ends); k += 2 {
+		spans = append(spans, [2]float64{bp.Ends[k], bp.Ends[k+1]})
+	}
+	d := figures.ProfileData{Axis: axisName(co), Z: bp.Z, Y: bp.Bz, YName: "Axial flux density " + bs, Unit: "T",
+		Windings: spans, WindingLabel: "coil"}
+	var text string
+	if co.Opposing {
+		text = fmt.Sprintf("Figure %d shows the axial flux density %s along the axis of pair %q, through the pair and one radius beyond it; the windings are shaded. %s passes through zero at the centre, grows in proportion to the distance from it, peaks at %s at ±%s near the coils and falls away beyond them, reversed on the two sides.",
+			n, bs, co.Name, bs, Eng(math.Abs(bp.Peak), "T", 3), Eng(bp.PeakZ, "m", 3))
+	} else {
+		text = fmt.Sprintf("Figure %d shows the axial flux density %s along the axis of pair %q, through the pair and one radius beyond it; the windings are shaded. Between the coils the field is a plateau at %s",
+			n, bs, co.Name, Eng(bp.Centre, "T", 4))
+		if !math.IsNaN(bp.Flat) {
+			text += fmt.Sprintf(", within 1 %% over ±%s", Eng(bp.Flat, "m", 3))
+		}
+		text += "; beyond the coils it falls away."
+	}
+	text += axialNote(co)
+	c.para(text)
+	c.fig(doc.Figure{Caption: fmt.Sprintf("Axial flux density %s along the axis of pair %q (exact field; shaded: the windings)", bs, co.Name),
+		Width: figWidth, Height: figHeight * 0.8, Draw: figures.Profile(d),
+		Summary: fmt.Sprintf("%s on axis: %s at the centre; largest %s at %s.", bs, Eng(bp.Centre, "T", 3), Eng(math.Abs(bp.Peak), "T", 3), Eng(bp.PeakZ, "m", 3))})
 }
 
 // fieldMap adds the map of |B| over the meridian plane.
@@ -213,11 +347,8 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 		return
 	}
 	var sections []figures.Section
-	xLabel, yLabel := "Axial position z", "Radial position ρ"
-	if u := co.Axis.Unit(); !(u[2] > 1-1e-12) {
-		// The map is in the coil's own frame: name its axis, not z.
-		xLabel = "Position along the coil's axis"
-	}
+	// The map is in the coil's own frame: its axis named, z or not.
+	xLabel, yLabel := figures.AxialLabel(axisName(co)), "Radial position ρ"
 	if co.Form == calc.Rectangle {
 		b := cs.Bundle
 		for _, x := range []float64{-co.Width / 2, co.Width / 2} {
@@ -251,8 +382,12 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 	if co.Form == calc.Rectangle {
 		plane = "the plane through the axis and across the width"
 	}
-	c.para(fmt.Sprintf("Figure %d maps the magnitude of the flux density of coil %q alone over %s, on a logarithmic colour scale with contour lines at 1–2–5 steps per decade; the winding cross-sections are drawn in.",
-		n, co.Name, plane))
+	text := fmt.Sprintf("Figure %d maps the magnitude of the flux density of coil %q alone over %s, on a logarithmic colour scale with contour lines at 1–2–5 steps per decade; the winding cross-sections are drawn in.",
+		n, co.Name, plane)
+	if centre, edge, ok := mapLevels(m); ok {
+		text += fmt.Sprintf(" The field is strongest next to the winding; it is %s at the centre and at most %s on the map's edge.", Eng(centre, "T", 3), Eng(edge, "T", 3))
+	}
+	c.para(text)
 	c.fig(doc.Figure{
 		Caption: fmt.Sprintf("|B| of coil %q over %s (coil frame; colour scale: viridis, van der Walt & Smith 2015, logarithmic; contours at the values marked on the colour bar)", co.Name, plane),
 		Width:   figWidth, Height: h, Draw: drawMap,
@@ -313,7 +448,7 @@ func (c *composer) dipoleDistances(co calc.Coil, cr calc.CoilResult) {
 
 // pairRegion reports a pair's centre field and homogeneous region, or its
 // gradient and linear region.
-func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) {
+func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, i int, f coilFigures) {
 	pr := cr.Pair
 	R := co.MeanDiameter / 2
 	s := math.Abs(co.Spacing)
@@ -342,12 +477,33 @@ func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult, cs *analysis.Coi
 			},
 			Widths: []float64{1.2, 2, 2},
 			Align:  []doc.Align{doc.Left, doc.Right, doc.Right}})
+		if !f.Homogeneity {
+			return
+		}
 		pos, ax, ra := pc.Pos, pc.Axial, pc.Radial
 		n := c.figure + 1
-		c.para(fmt.Sprintf("Figure %d plots the departure of the field from its centre value along both directions, with the ±1 %% and ±0.1 %% bands.", n))
-		c.fig(doc.Figure{Caption: fmt.Sprintf("Homogeneity of pair %q: B(z)/B(0) − 1 along the axis and B(ρ)/B(0) − 1 radially in the mid-plane, axial components, with the ±1 %% and ±0.1 %% (shaded) bands", co.Name),
+		dd := figures.DeviationData{Pos: pos, Axial: ax, Radial: ra, Quantity: "B", Bands: []float64{0.01, 0.001}}
+		text := fmt.Sprintf("Figure %d plots the departure of the field from its centre value against the distance from the centre, along the axis and radially in the mid-plane, on linear scales: the field stays within 1 %% of its centre value out to %s along the axis and %s radially, and within 0.1 %% out to %s and %s.",
+			n, Eng(pr.Axial1, "m", 3), Eng(pr.Radial1, "m", 3), Eng(pr.Axial01, "m", 3), Eng(pr.Radial01, "m", 3))
+		caption := fmt.Sprintf("Homogeneity of pair %q: B(z)/B(0) − 1 along the axis and B(ρ)/B(0) − 1 radially in the mid-plane, axial components, with the ±1 %% and ±0.1 %% (shaded) bands", co.Name)
+		if r, tol, ok := uniformRequirement(c.j, i); ok {
+			if tol != 0.01 && tol != 0.001 {
+				dd.Bands = append(dd.Bands, tol)
+			}
+			tolText := strconv.FormatFloat(100*tol, 'f', -1, 64) + " %"
+			dd.Required, dd.RequiredLabel = r, "required "+Eng(r, "m", 3)
+			caption += fmt.Sprintf("; dotted: the required uniform radius, %s within %s", Eng(r, "m", 3), tolText)
+			reach := c.uniformReach(i)
+			verdict := "so the requirement is met"
+			if !(reach >= r) {
+				verdict = "so the requirement is not met"
+			}
+			text += fmt.Sprintf(" The requirement (dotted) is a region of radius %s within %s; the field holds that tolerance out to %s in the worse direction, %s.", Eng(r, "m", 3), tolText, Eng(reach, "m", 3), verdict)
+		}
+		c.para(text)
+		c.fig(doc.Figure{Caption: caption,
 			Width: figWidth, Height: figHeight * 0.85,
-			Draw: figures.DeviationPlot(figures.DeviationData{Pos: pos, Axial: ax, Radial: ra, Quantity: "B", Bands: []float64{0.01, 0.001}}),
+			Draw: figures.DeviationPlot(dd),
 			Summary: fmt.Sprintf("Within ±1 %%: ±%s axially, %s radially; within ±0.1 %%: ±%s axially, %s radially.",
 				Eng(pr.Axial1, "m", 3), Eng(pr.Radial1, "m", 3), Eng(pr.Axial01, "m", 3), Eng(pr.Radial01, "m", 3))})
 		return
@@ -369,13 +525,45 @@ func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult, cs *analysis.Coi
 		},
 		Widths: []float64{3, 1.6},
 		Align:  []doc.Align{doc.Left, doc.Right}})
-	pos, ax, ra := pc.Pos, pc.Axial, pc.Radial
+	if !f.Gradient {
+		return
+	}
+	bp := cs.Axis.Bore
 	n := c.figure + 1
-	c.para(fmt.Sprintf("Figure %d plots the departure of the local gradient from its centre value, with the ±1 %% band.", n))
-	c.fig(doc.Figure{Caption: fmt.Sprintf("Linearity of gradient pair %q: local ∂Bz/∂z relative to the centre value, along the axis and radially in the mid-plane, with the ±1 %% band", co.Name),
-		Width: figWidth, Height: figHeight * 0.85,
-		Draw:    figures.DeviationPlot(figures.DeviationData{Pos: pos, Axial: ax, Radial: ra, Quantity: "G", Bands: []float64{0.01}}),
+	var spans [][2]float64
+	for k := 0; k+1 < len(bp.Ends); k += 2 {
+		spans = append(spans, [2]float64{bp.Ends[k], bp.Ends[k+1]})
+	}
+	bs, as := axialSymbol(co)
+	grad := "∂" + bs + "/∂" + as
+	d := figures.ProfileData{Axis: axisName(co), Z: bp.Z, Y: bp.Gz, YName: "Axial gradient " + grad, Unit: "T/m",
+		Windings: spans, WindingLabel: "coil",
+		Marks: []figures.Mark{{X: -pr.LinearAxial, Label: "±1 %"}, {X: pr.LinearAxial, Label: "±1 %"}}}
+	text := fmt.Sprintf("Figure %d shows the axial gradient %s along the axis of pair %q on linear scales: it holds at %s within 1 %% out to ±%s from the centre (dotted), then weakens, and reverses beyond the coils (shaded).",
+		n, grad, co.Name, Eng(G, "T/m", 4), Eng(pr.LinearAxial, "m", 3))
+	caption := fmt.Sprintf("Axial gradient %s along the axis of gradient pair %q (dotted: where it departs by 1 %% from the centre value; shaded: the windings)", grad, co.Name)
+	if g, rel, ok := gradientRequirement(c.j, i); ok {
+		l := calc.Limit{Relation: rel}
+		d.Levels = append(d.Levels, figures.Level{Y: math.Copysign(g, G), Label: "required " + relText(l) + " " + Eng(g, "T/m", 3)})
+		caption += "; dashed: the required gradient"
+		met := (rel == calc.AtLeast && math.Abs(G) >= g) || (rel == calc.AtMost && math.Abs(G) <= g)
+		text += fmt.Sprintf(" The required gradient, %s %s (dashed), is %s at the centre.", relText(l), Eng(g, "T/m", 3), map[bool]string{true: "met", false: "not met"}[met])
+	}
+	c.para(text)
+	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight * 0.85, Draw: figures.Profile(d),
 		Summary: fmt.Sprintf("Gradient %s; within ±1 %%: ±%s axially, %s radially.", Eng(G, "T/m", 4), Eng(pr.LinearAxial, "m", 3), Eng(pr.LinearRadial, "m", 3))})
+}
+
+// uniformReach is the computed value of coil block i's uniform-radius
+// requirement (the smaller of its axial and radial reach), NaN without
+// one.
+func (c *composer) uniformReach(i int) float64 {
+	for _, l := range c.j.Limits {
+		if l.Limit.Quantity == "uniform-radius" && l.Coil == i {
+			return l.Computed
+		}
+	}
+	return math.NaN()
 }
 
 // Figure size in the memo: the text width of an A4 page with our margins.
@@ -401,10 +589,38 @@ func (c *composer) torque() {
 		"Design": Eng(r.TorqueDesign, "N·m", 4),
 		"Tx":     Eng(r.Torque[0], "N·m", 3), "Ty": Eng(r.Torque[1], "N·m", 3), "Tz": Eng(r.Torque[2], "N·m", 3),
 	}))
+	if !torqueFigure(c.j) {
+		// Not a moment design: the sine is the same for every coil, so the
+		// peak and the design angle above say all it would (memo/figsel.go).
+		c.para("At other angles θ between moment and field the torque is |τ| = m B sin θ, between zero along the field and the largest value above at right angles to it.")
+		return
+	}
 	ang, tq := c.j.Design.TorqueAngle, c.j.Design.Torque
 	n := c.figure + 1
-	c.para(fmt.Sprintf("Figure %d shows the torque magnitude against the angle between moment and field.", n))
+	c.para(fmt.Sprintf("Figure %d shows the torque magnitude against the angle between moment and field: a sine, zero with the moment along the field or against it and largest at right angles, so a tilt of 30° from square still leaves %s %% of the peak.",
+		n, Sig(100*math.Cos(math.Pi/6), 2)))
 	c.fig(doc.Figure{Caption: "Torque magnitude |τ| = m B sin θ against the angle θ between moment and background field",
 		Width: figWidth, Height: figHeight * 0.8, Draw: figures.TorqueAngle(ang, tq),
 		Summary: fmt.Sprintf("Peak %s at 90°.", Eng(r.TorqueMax, "N·m", 3))})
+}
+
+// mapLevels reads a coil's map: |B| at its centre node and the largest
+// |B| on its edge (ok false when either is unknown).
+func mapLevels(m *analysis.MapData) (centre, edge float64, ok bool) {
+	nx, nz := len(m.X), len(m.Z)
+	if nx < 3 || nz < 3 || len(m.B) != nx*nz {
+		return 0, 0, false
+	}
+	centre = m.B[(nx/2)*nz+nz/2]
+	edge = math.Inf(-1)
+	for ix := range nx {
+		for iz := range nz {
+			if ix == 0 || ix == nx-1 || iz == 0 || iz == nz-1 {
+				if v := m.B[ix*nz+iz]; !math.IsNaN(v) {
+					edge = math.Max(edge, v)
+				}
+			}
+		}
+	}
+	return centre, edge, !math.IsNaN(centre) && !math.IsInf(edge, 0)
 }

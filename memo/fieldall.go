@@ -96,6 +96,9 @@ func (c *composer) allCoilsMap() {
 		text += fmt.Sprintf(" The windings of %s cross this plane obliquely and are not drawn (the map is left blank where they pass); their field is included.", joinAnd(undrawn))
 		caption += "; windings drawn where their axis lies along x, y or z"
 	}
+	if centre, edge, ok := mapLevels(m); ok {
+		text += fmt.Sprintf(" The fields of the coils add: |B| is %s at the origin and at most %s on the map's edge.", Eng(centre, "T", 3), Eng(edge, "T", 3))
+	}
 	c.para(text)
 	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: 125 * vg.Millimeter, Draw: draw,
 		Summary: fmt.Sprintf("|B| of all coils over ±%s in x and z; |B| at the origin %s.", Eng(half, "m", 3), Eng(c.j.Results.FieldCentre.Norm(), "T", 3))})

@@ -63,6 +63,17 @@ func sweepViewOf(sw *spec.Sweep, d calc.Design) sweepView {
 	v := sweepView{extra: func(calc.Results) string { return "" },
 		plotName: "Magnetic moment |m|", plotUnit: "A·m²", plotLimit: "moment",
 		plotValue: func(r calc.Results) float64 { return r.Moment.Norm() }}
+	// A design judged by its field, not its moment, has its field plotted:
+	// the quantity the requirement is on.
+	moment, field := false, false
+	for _, l := range d.Limits {
+		moment = moment || l.Quantity == "moment"
+		field = field || (l.Quantity == "field-center" && l.Subject == "")
+	}
+	if field && !moment {
+		v.plotName, v.plotUnit, v.plotLimit = "|B| at the origin", "T", "field-center"
+		v.plotValue = func(r calc.Results) float64 { return r.FieldCentre.Norm() }
+	}
 	swept := 0
 	for i, co := range d.Coils {
 		if sw.Coil == co.Name {
@@ -93,7 +104,7 @@ func (c *composer) sweepFigures(label string, x, first, temp []float64, v sweepV
 	limit := func(q string) []float64 {
 		var out []float64
 		for _, l := range c.j.Spec.Design.Limits {
-			if l.Quantity == q {
+			if l.Quantity == q && l.Subject == "" {
 				v := l.Required
 				if q == "temperature" {
 					v = Celsius(v)
@@ -105,10 +116,23 @@ func (c *composer) sweepFigures(label string, x, first, temp []float64, v sweepV
 	}
 	n := c.figure + 1
 	what := "the " + strings.ToLower(v.plotName[:1]) + v.plotName[1:]
-	if v.plotLimit == "moment" {
+	switch v.plotLimit {
+	case "moment":
 		what = "the total moment"
+	case "field-center":
+		what = "the flux density at the origin"
 	}
-	c.para(fmt.Sprintf("Figures %d and %d show %s and the hottest winding temperature across the sweep, with the stated requirements as dashed lines.", n, n+1, what))
+	text := fmt.Sprintf("Figures %d and %d show %s and the hottest winding temperature across the sweep, with the stated requirements as dashed lines.", n, n+1, what)
+	for _, q := range []string{v.plotLimit, "temperature"} {
+		vals := first
+		if q == "temperature" {
+			vals = temp
+		}
+		if t := c.sweepMet(q, label, x, vals); t != "" {
+			text += " " + t
+		}
+	}
+	c.para(text)
 	var req []float64
 	if v.plotLimit != "" {
 		req = limit(v.plotLimit)
@@ -216,4 +240,45 @@ func (c *composer) sweep() {
 	if len(x) >= 2 {
 		c.sweepFigures(label, x, first, temp, v)
 	}
+}
+
+// sweepMet says over which swept values the design-wide requirement on
+// quantity q is met, judged on the plotted values ("" without one).
+func (c *composer) sweepMet(q, label string, x, vals []float64) string {
+	if q == "" {
+		return ""
+	}
+	for _, l := range c.j.Spec.Design.Limits {
+		if l.Quantity != q || l.Subject != "" {
+			continue
+		}
+		req := l.Required
+		if q == "temperature" {
+			req = Celsius(req)
+		}
+		var met []float64
+		for i, v := range vals {
+			if (l.Relation == calc.AtLeast && v >= req) || (l.Relation == calc.AtMost && v <= req) {
+				met = append(met, x[i])
+			}
+		}
+		what := map[string]string{"field-center": "centre-field", "moment": "moment", "temperature": "temperature"}[q]
+		name := strings.SplitN(label, " (", 2)[0]
+		num := func(v float64) string { return strconv.FormatFloat(v, 'g', 6, 64) }
+		unit := ""
+		if i := strings.Index(label, "("); i >= 0 {
+			unit = " " + strings.TrimSuffix(label[i+1:], ")")
+		}
+		switch {
+		case len(met) == 0:
+			return fmt.Sprintf("The %s requirement is met nowhere in the sweep.", what)
+		case len(met) == len(vals):
+			return fmt.Sprintf("The %s requirement is met over the whole sweep.", what)
+		case met[0] == x[0]:
+			return fmt.Sprintf("The %s requirement is met up to %s = %s%s.", what, name, num(met[len(met)-1]), unit)
+		default:
+			return fmt.Sprintf("The %s requirement is met from %s = %s%s.", what, name, num(met[0]), unit)
+		}
+	}
+	return ""
 }

@@ -468,7 +468,18 @@ func (c *composer) warmUpFigure(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 		caption += "; dashed: insulation class, dotted: steady states"
 	}
 	n := c.figure + 1
-	c.para(fmt.Sprintf("Figure %d shows the warm-up of coil %q.", n, co.Name))
+	lead := fmt.Sprintf("Figure %d shows the warm-up of coil %q: energised continuously, its hottest point climbs from %s to %s in %s",
+		n, co.Name, Eng(Celsius(tp.Ambient), "°C", 3), Eng(Celsius(hot[len(hot)-1]), "°C", 3), duration(t[len(t)-1]))
+	switch {
+	case steady.Settled && math.Abs(steady.HotSpot-hot[len(hot)-1]) < 0.5:
+		lead += ", where it has settled: the curve's plateau is the steady state"
+	case steady.Settled:
+		lead += fmt.Sprintf(", on its way to the steady %s", Eng(Celsius(steady.HotSpot), "°C", 3))
+	}
+	if cy.On > 0 && cy.Settled {
+		lead += fmt.Sprintf("; on the duty cycle it peaks at %s", Eng(Celsius(cy.PeakHot), "°C", 3))
+	}
+	c.para(lead + ".")
 	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight * 0.85,
 		Draw: figures.WarmUp(curves, levels...), Summary: summary})
 }

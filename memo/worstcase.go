@@ -176,6 +176,21 @@ func (c *composer) sensitivity(wc *analysis.WorstCase) {
 	c.para("Each tolerance moved alone from its low to its high end, the others at nominal, changes each result by the amount below (per cent of the nominal value; the temperature in kelvin). The largest entry in a row is the tolerance that moves that result most.")
 	c.add(doc.Table{Caption: "Sensitivity: change of each result over each tolerance's range", Header: header, Rows: rows, Widths: widths, Align: align})
 	if len(labels) > 0 {
+		// What to see: the longest bar.
+		bi, bj, big := -1, -1, 0.0
+		for i, row := range swing {
+			for j, v := range row {
+				if math.Abs(v) > big && j < len(names) {
+					bi, bj, big = i, j, math.Abs(v)
+				}
+			}
+		}
+		text := fmt.Sprintf("Figure %d shows the same swings as bars, one group per result.", c.figure+1)
+		if bi >= 0 {
+			what := strings.ToLower(labels[bi][:1]) + labels[bi][1:]
+			text += fmt.Sprintf(" The longest bar is the swing of the %s over the %s tolerance, %s %%: that tolerance is the one to hold tightest.", what, names[bj], Sig(big, 2))
+		}
+		c.para(text)
 		c.fig(doc.Figure{Caption: "Sensitivity of each result to each tolerance (swing from low to high end, % of nominal)",
 			Width: figWidth, Height: figHeight * 0.8, Draw: figures.Sensitivity(labels, names, swing),
 			Summary: fmt.Sprintf("Bars for %d results and %d tolerances.", len(labels), len(names))})
@@ -220,6 +235,19 @@ func (c *composer) monteCarlo(wc *analysis.WorstCase) {
 				req = append(req, l.Required)
 			}
 		}
+		v := mc.Values[0]
+		text := fmt.Sprintf("Figure %d shows how the magnetic moment spreads over the samples: from %s to %s, 90 %% of them between %s and %s.",
+			c.figure+1, Eng(v[0], "A·m²", 3), Eng(v[len(v)-1], "A·m²", 3), Eng(analysis.Percentile(v, 5), "A·m²", 3), Eng(analysis.Percentile(v, 95), "A·m²", 3))
+		if len(req) > 0 {
+			below := 0
+			for _, x := range v {
+				if x < req[0] {
+					below++
+				}
+			}
+			text += fmt.Sprintf(" The required moment (dashed) is %s; %s of the samples fall short of it.", Eng(req[0], "A·m²", 3), Sig(100*float64(below)/float64(len(v)), 2)+" %")
+		}
+		c.para(text)
 		c.fig(doc.Figure{Caption: "Distribution of the magnetic moment over the Monte Carlo samples", Width: figWidth, Height: figHeight * 0.7,
 			Draw:    figures.Histogram("Magnetic moment |m| (A·m²)", mc.Values[0], req),
 			Summary: fmt.Sprintf("Moment from %s to %s.", Eng(mc.Values[0][0], "A·m²", 3), Eng(mc.Values[0][len(mc.Values[0])-1], "A·m²", 3))})

@@ -227,9 +227,46 @@ func (r *renderer) paragraph(p doc.Paragraph) {
 			if need > r.room(0) {
 				r.newPage()
 			}
+		} else if leadsIn(p) {
+			// A short paragraph ending in a colon introduces what follows
+			// (a list, a table, an equation): it keeps the start of it —
+			// a list's first three items — on its page.
+			need := float64(len(lines))*leadBody + after + r.minHeight(r.rest[0])
+			if l, ok := r.rest[0].(doc.List); ok {
+				need = float64(len(lines))*leadBody + after + r.listStart(l, 3)
+			}
+			if need > r.room(0) {
+				r.newPage()
+			}
 		}
 	}
 	r.flowLines(lines, styBody, 0, after)
+}
+
+// leadsIn reports whether a paragraph ends in a colon: it introduces the
+// block after it.
+func leadsIn(p doc.Paragraph) bool {
+	if len(p.Spans) == 0 {
+		return false
+	}
+	return strings.HasSuffix(strings.TrimSpace(p.Spans[len(p.Spans)-1].Text), ":")
+}
+
+// listStart is the height of the first n items of a list whose items
+// begin with a paragraph (the first two lines of each), or two lines.
+func (r *renderer) listStart(l doc.List, n int) float64 {
+	h := 0.0
+	for _, it := range l.Items[:min(n, len(l.Items))] {
+		if len(it) == 0 {
+			continue
+		}
+		if p, ok := it[0].(doc.Paragraph); ok {
+			h += float64(min(len(layoutSpans(p.Spans, styBody, r.w-15, r.w-15)), 2))*leadBody + 2.5
+			continue
+		}
+		h += 2 * leadBody
+	}
+	return max(h, 2*leadBody)
 }
 
 // flowLines sets lines at the cursor, breaking pages between lines with

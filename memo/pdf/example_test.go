@@ -147,7 +147,7 @@ func exampleDocument(extra int) *doc.Document {
 	add(doc.Heading{Level: 1, Text: "Field on the axis"})
 	add(doc.Paragraph{Spans: []doc.Span{{Text: "Figure 1 compares the exact on-axis solution with the dipole far-field approximation. The two agree within 3 % beyond |z| = 120 mm."}}})
 	add(doc.Figure{Number: 1, Caption: "Axial flux density |B| against position z; exact solution and dipole approximation.",
-		Width: 440, Height: 250, Draw: figures.OnAxis(z, ex, di,
+		Width: 440, Height: 250, Draw: figures.OnAxis("z", z, ex, di,
 			figures.Mark{X: -0.03, Label: "winding end"}, figures.Mark{X: 0.03, Label: "winding end"}, figures.Mark{X: 0.092, Label: "0.5 mT"}),
 		Summary: "on-axis field"})
 	add(doc.Heading{Level: 2, Text: "Torque on a tilted probe"})

@@ -1,0 +1,99 @@
+package figures
+
+import (
+	"math"
+	"strings"
+	"testing"
+
+	"gonum.org/v1/plot/vg"
+	"gonum.org/v1/plot/vg/recorder"
+)
+
+func drawnTexts(f DrawFunc, w, h vg.Length) string {
+	var c recorder.Canvas
+	f(&c, w, h)
+	var out []string
+	for _, a := range c.Actions {
+		if fs, ok := a.(*recorder.FillString); ok {
+			out = append(out, fs.String)
+		}
+	}
+	return strings.Join(out, "|")
+}
+
+// A profile that changes sign is drawn about zero; one that keeps its sign
+// from zero; marks, windings and requirements carry their labels.
+func TestProfile(t *testing.T) {
+	var z, bz, g []float64
+	for i := 0; i <= 100; i++ {
+		x := -0.2 + 0.4*float64(i)/100
+		z = append(z, x)
+		bz = append(bz, 1e-3/(1+math.Pow(x/0.1, 8)))
+		g = append(g, -0.02*x*math.Exp(-x*x/0.01))
+	}
+	d := ProfileData{Axis: "x", Z: z, Y: bz, YName: "Axial flux density Bx", Unit: "T",
+		Marks:  []Mark{{X: -0.1, Label: "end"}, {X: 0.1, Label: "end"}},
+		Levels: []Level{{Y: 0.8e-3, Label: "required ≥ 800 µT"}}}
+	p, _, _ := profilePlot(d)
+	if p.Y.Min != 0 || !(p.Y.Max > 1) {
+		t.Errorf("one-signed profile: y from %g to %g mT, want from 0", p.Y.Min, p.Y.Max)
+	}
+	all := drawnTexts(Profile(d), 400, 220)
+	for _, want := range []string{"Axial position along the coil's axis x (mm)", "Axial flux density Bx (mT)", "end", "required ≥ 800 µT"} {
+		if !strings.Contains(all, want) {
+			t.Errorf("profile lacks %q: %s", want, all)
+		}
+	}
+	gd := ProfileData{Axis: "z", Z: z, Y: g, YName: "Axial gradient ∂Bz/∂z", Unit: "T/m",
+		Windings: [][2]float64{{-0.12, -0.1}, {0.1, 0.12}}, WindingLabel: "coil"}
+	p, _, _ = profilePlot(gd)
+	if !(p.Y.Min < 0 && math.Abs(p.Y.Min+p.Y.Max) < 1e-12) {
+		t.Errorf("signed profile: y from %g to %g, want symmetric about zero", p.Y.Min, p.Y.Max)
+	}
+	if all := drawnTexts(Profile(gd), 400, 220); strings.Count(all, "coil") != 2 || !strings.Contains(all, "Axial gradient ∂Bz/∂z (µT/m)") {
+		t.Errorf("gradient profile text %s", all)
+	}
+}
+
+// The legend keeps clear of a requirement line as of a curve: a curve
+// rising to the right leaves the top left and the bottom right free, and
+// a requirement line along the top takes the top left away.
+func TestLegendAvoidsRequirement(t *testing.T) {
+	var z, y []float64
+	for i := 0; i <= 60; i++ {
+		x := float64(i) / 60
+		z = append(z, x)
+		y = append(y, x*x)
+	}
+	d := ProfileData{Z: z, Y: y, YName: "B", Unit: "T", CurveName: "field",
+		Levels: []Level{{Y: 1.0, Label: "required ≥ 1 T"}}}
+	p, top, avoid := profilePlot(d)
+	var c recorder.Canvas
+	drawer(p, top, avoid)(&c, 400, 220)
+	if p.Legend.Top || p.Legend.Left {
+		t.Errorf("legend top=%v left=%v, want bottom right", p.Legend.Top, p.Legend.Left)
+	}
+}
+
+// A uniform-radius requirement is drawn as a labelled line, even beyond
+// the curves; a band below 0.1 % turns the axis to ppm.
+func TestDeviationRequirement(t *testing.T) {
+	var d DeviationData
+	for i := 0; i <= 40; i++ {
+		x := 0.02 * float64(i) / 40
+		d.Pos = append(d.Pos, x)
+		d.Axial = append(d.Axial, -math.Pow(x/0.02, 4)*0.02)
+		d.Radial = append(d.Radial, -math.Pow(x/0.02, 4)*0.01)
+	}
+	d.Bands, d.Required, d.RequiredLabel = []float64{0.01, 0.001}, 0.03, "required 30 mm"
+	all := drawnTexts(DeviationPlot(d), 400, 220)
+	for _, want := range []string{"required 30 mm", "B/B(0) − 1 (%)", "|30|"} {
+		if !strings.Contains(all, want) {
+			t.Errorf("deviation plot lacks %q: %s", want, all)
+		}
+	}
+	d.Bands = []float64{0.001, 0.0001}
+	if all := drawnTexts(DeviationPlot(d), 400, 220); !strings.Contains(all, "B/B(0) − 1 (ppm)") || !strings.Contains(all, "|1000|") {
+		t.Errorf("tight bands not in ppm: %s", all)
+	}
+}

@@ -1,0 +1,162 @@
+package memo
+
+import (
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"gonum.org/v1/plot/vg/recorder"
+
+	"coilmemo/analysis"
+	"coilmemo/doc"
+)
+
+// figureDesign analyses one of the figure-test designs in
+// testdata/figures and composes its memo.
+func figureDesign(t *testing.T, name string) (*analysis.Study, *doc.Document) {
+	t.Helper()
+	f := filepath.Join("..", "testdata", "figures", name+".md")
+	src, err := os.ReadFile(f)
+	if err != nil {
+		t.Fatal(err)
+	}
+	j, diags := evaluate(f, src)
+	if len(diags) > 0 {
+		t.Fatal(diags)
+	}
+	return j, Compose(j)
+}
+
+// captions lists the memo's figure captions, and texts every string its
+// figures draw.
+func captions(d *doc.Document) (caps []string, texts string) {
+	var all []string
+	for _, b := range d.Blocks {
+		f, ok := b.(doc.Figure)
+		if !ok {
+			continue
+		}
+		caps = append(caps, f.Caption)
+		var c recorder.Canvas
+		f.Draw(&c, f.Width, f.Height)
+		for _, a := range c.Actions {
+			if fs, ok := a.(*recorder.FillString); ok {
+				all = append(all, fs.String)
+			}
+		}
+	}
+	return caps, strings.Join(all, "|")
+}
+
+func prose(d *doc.Document) string {
+	var b strings.Builder
+	for _, bl := range d.Blocks {
+		if p, ok := bl.(doc.Paragraph); ok {
+			for _, s := range p.Spans {
+				b.WriteString(s.Text)
+			}
+			b.WriteString("\n")
+		}
+	}
+	return b.String()
+}
+
+func countWith(caps []string, part string) int {
+	n := 0
+	for _, c := range caps {
+		if strings.Contains(c, part) {
+			n++
+		}
+	}
+	return n
+}
+
+// Each design gets the figures of its purpose (the rules in figsel.go).
+func TestFigureSelection(t *testing.T) {
+	for _, c := range []struct {
+		design      string
+		want        coilFigures
+		moment      bool
+		torqueFig   bool
+		has, hasNot []string // caption parts
+		says        []string // lead-in parts
+	}{
+		{"aiding-pair", coilFigures{Sketch: true, Profile: pairProfile, Homogeneity: true}, false, false,
+			[]string{"Homogeneity of pair", "required uniform radius", "Axial flux density Bz along the axis of pair"},
+			[]string{"point-dipole approximation", "Linearity"},
+			[]string{"the field stays within 1 % of its centre value out to", "so the requirement is met"}},
+		{"gradient-pair", coilFigures{Sketch: true, Profile: pairProfile, Gradient: true}, false, false,
+			[]string{"Axial gradient ∂Bz/∂z along the axis", "the required gradient", "Axial flux density Bz along the axis of pair"},
+			[]string{"Homogeneity", "point-dipole approximation"},
+			[]string{"passes through zero at the centre", "is met at the centre"}},
+		{"long-solenoid", coilFigures{Sketch: true, Profile: boreProfile}, false, false,
+			[]string{"along the bore of coil", "the required centre field"},
+			[]string{"point-dipole approximation"},
+			[]string{"The field stays within 1 % of its centre value", "at the ends"}},
+		{"x-axis-coil", coilFigures{Sketch: true, Profile: boreProfile}, false, false,
+			[]string{"Axial flux density Bx along the bore"}, []string{"Torque magnitude"},
+			[]string{"At other angles θ between moment and field the torque is"}},
+		{"thin-loop", coilFigures{Sketch: false, Profile: nearProfile}, false, false,
+			[]string{"Axial flux density Bz along the axis of coil"}, []string{"Cross-section", "Torque magnitude", "Warm-up", "point-dipole approximation"},
+			[]string{"too small against the coil to be worth a sketch", "so no warm-up curve is drawn", "half of that at ±"}},
+		{"rectangle", coilFigures{Sketch: true, Profile: nearProfile}, false, false,
+			[]string{"in plan", "dotted: the coil's plane"}, []string{"along the bore", "point-dipole approximation"}, nil},
+		{"tilted-torquer", coilFigures{Sketch: true, Profile: farProfile}, true, true,
+			[]string{"point-dipole approximation", "Torque magnitude"}, []string{"along the bore"},
+			[]string{"a sine, zero with the moment along the field", "the two curves merge beyond"}},
+	} {
+		t.Run(c.design, func(t *testing.T) {
+			j, d := figureDesign(t, c.design)
+			if got := figuresFor(j, 0); got != c.want {
+				t.Errorf("figures %+v, want %+v", got, c.want)
+			}
+			if got := momentDesign(j); got != c.moment {
+				t.Errorf("moment design %v, want %v", got, c.moment)
+			}
+			if got := torqueFigure(j); got != c.torqueFig {
+				t.Errorf("torque figure %v, want %v", got, c.torqueFig)
+			}
+			caps, _ := captions(d)
+			for _, h := range c.has {
+				if countWith(caps, h) == 0 {
+					t.Errorf("no figure captioned %q in %q", h, caps)
+				}
+			}
+			for _, h := range c.hasNot {
+				if n := countWith(caps, h); n > 0 {
+					t.Errorf("%d figures captioned %q, want none", n, h)
+				}
+			}
+			text := prose(d)
+			for _, s := range c.says {
+				if !strings.Contains(text, s) {
+					t.Errorf("the memo does not say %q", s)
+				}
+			}
+		})
+	}
+}
+
+// A figure along a coil's axis names that axis: z for a coil along z, the
+// coil's own axis otherwise, never "Axial position z" for a coil along x
+// or a tilted one.
+func TestAxisLabels(t *testing.T) {
+	for _, c := range []struct {
+		design, want, wantNot string
+	}{
+		{"long-solenoid", "Axial position z (mm)", "coil's axis"},
+		{"aiding-pair", "Axial position z (mm)", "coil's axis"},
+		{"x-axis-coil", "Axial position along the coil's axis x (mm)", "Axial position z"},
+		{"tilted-torquer", "Axial position along the coil's axis û = (0.71, 0.71, 0) (mm)", "Axial position z"},
+	} {
+		_, d := figureDesign(t, c.design)
+		_, texts := captions(d)
+		if !strings.Contains(texts, c.want) {
+			t.Errorf("%s: figures lack %q: %s", c.design, c.want, texts)
+		}
+		if strings.Contains(texts, c.wantNot) {
+			t.Errorf("%s: figures say %q", c.design, c.wantNot)
+		}
+	}
+}
