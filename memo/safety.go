@@ -61,8 +61,13 @@ func Cautions(j *analysis.Study) []doc.Callout {
 		}
 		for i, w := range ir.Windings {
 			if w.Surface >= analysis.ImplantField {
-				where = append(where, fmt.Sprintf("next to the winding of coil %q, where |B| reaches %s at its surface and stays above 0.5 mT up to %s from it",
-					d.Coils[i].Name, Eng(w.Surface, "T", 3), Eng(w.Distance, "m", 2)))
+				what, its := "the winding", "its surface"
+				if i < len(j.Coils) && j.Coils[i].Kinds.Core != nil {
+					// The search starts from the rod's end faces too.
+					what, its = "the winding and core", "their surfaces (the rod's end faces included)"
+				}
+				where = append(where, fmt.Sprintf("next to %s of coil %q, where |B| reaches %s at %s and stays above 0.5 mT up to %s from it",
+					what, d.Coils[i].Name, Eng(w.Surface, "T", 3), its, Eng(w.Distance, "m", 2)))
 			}
 		}
 		for _, k := range ir.Probes {
