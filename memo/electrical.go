@@ -348,6 +348,7 @@ func (c *composer) couplings() {
 		Header: []string{"Coils", "Arrangement", "Centres apart", "Mutual inductance", "Coupling k", "Force", "Method"},
 		Rows:   rows, Widths: []float64{1.6, 1.1, 0.9, 1.2, 0.8, 1.6, 1.3},
 		Align: []doc.Align{doc.Left, doc.Left, doc.Right, doc.Right, doc.Right, doc.Left, doc.Left}})
+	c.coredCouplingNote()
 	if anyCoaxial {
 		c.derive(
 			Step{What: "Mutual inductance of two coaxial windings: Maxwell's formula for every pair of turns (radii rᵢ, rⱼ, planes zⱼ − zᵢ apart), with the senses of the currents",
@@ -438,4 +439,30 @@ func switchOffCaution(f analysis.Finding, cr calc.CoilResult, name string) doc.C
 	return doc.Callout{Severity: doc.Caution, Title: "Switch-off voltage, " + name,
 		Spans: []doc.Span{{Text: templates.Text("caution-inductive", map[string]string{
 			"Energy": Eng(s.Energy, "J", 3), "Spike": spike, "Diode": diode, "Resistor": resistor})}}}
+}
+
+// coredCouplingNote says, for every cored coil with a row in the coupling
+// table, that the row is its winding's in air and how much the core's
+// moment exceeds the winding's: the core raises the coupling to a distant
+// coil by about that ratio, so the air figures are the lower bound.
+func (c *composer) coredCouplingNote() {
+	var parts []string
+	for i, cs := range c.j.Coils {
+		k := cs.Kinds
+		if k.Core == nil || i >= len(c.j.Results.Coils) {
+			continue
+		}
+		air := k.AirMoment.Norm()
+		cored := c.j.Results.Coils[i].Moment.Norm()
+		if !(air > 0) || !(cored > 0) {
+			continue
+		}
+		parts = append(parts, fmt.Sprintf("coil %q (moment %s with its core against %s for the winding alone, %s×)",
+			c.j.Spec.Design.Coils[i].Name, Eng(cored, "A·m²", 3), Eng(air, "A·m²", 3), Sig(cored/air, 3)))
+	}
+	if len(parts) == 0 {
+		return
+	}
+	c.para("The rows of a cored coil are those of its winding in air: " + strings.Join(parts, "; ") +
+		". The core carries more of the flux, which raises the mutual inductance and the force to a distant coil by about the ratio of the moments and more near the rod's ends, so these figures are lower bounds there.")
 }
