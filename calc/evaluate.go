@@ -74,7 +74,7 @@ func evaluateCoil(c Coil, cond Conditions) CoilResult {
 	if area > 0 {
 		cr.Density = op.Current / area
 	}
-	cr.Inductance = CoilInductance(c, w)
+	cr.Inductance = coilInductance(c, w)
 	cr.Moment = MagneticMoment(c, w, op.Current)
 	cr.MomentMeanArea = MomentMeanArea(c, op.Current)
 	cr.FieldCentre = CoilField(c, w, op.Current, c.Centre)
@@ -115,7 +115,7 @@ func evaluateCoil(c Coil, cond Conditions) CoilResult {
 	if c.InsulationClass > 0 {
 		cr.InsulationMargin = c.InsulationClass - cr.Temperature
 	}
-	cr.Dipole = DipoleDistances(c, w, op.Current)
+	cr.Dipole = dipoleDistances(c, w, op.Current)
 	cr.Pair = AnalysePair(c, w, op.Current)
 	cr.PairForce = PairForce(c, w, op.Current)
 	cr.HomogeneityAxial, cr.HomogeneityRadial = math.NaN(), math.NaN()
