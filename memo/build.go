@@ -18,3 +18,7 @@ func Document(st *analysis.Study) *doc.Document { return Compose(st) }
 
 // PDF renders the memo of a study.
 func PDF(st *analysis.Study) ([]byte, error) { return pdf.Render(Compose(st)) }
+
+// WarmPDF starts preparing the PDF writer for a PDF that will follow
+// (its embedded faces registered on another core; see pdf.Warm).
+func WarmPDF() { pdf.Warm() }

@@ -135,6 +135,7 @@ func buildOne(j *buildJob) {
 			j.outcome = builtBug
 		}
 	}()
+	memo.WarmPDF() // the PDF writer's faces on another core while the spec is analysed
 	job, err := load(j.spec, &j.stderr)
 	if err != nil {
 		var ee *exitError

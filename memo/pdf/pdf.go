@@ -206,10 +206,20 @@ type marker struct {
 }
 
 func newRenderer(d *doc.Document, o options, total int, dry bool) *renderer {
-	pdf := fpdf.NewCustom(&fpdf.InitType{OrientationStr: "P", UnitStr: "pt", SizeStr: "A4"})
+	// The dry pass sets no text and needs no faces; the set pass takes a
+	// document with the common faces registered (warm.go).
+	var fs *fontSet
+	var pdf *fpdf.Fpdf
+	if dry {
+		pdf = fpdf.NewCustom(&fpdf.InitType{OrientationStr: "P", UnitStr: "pt", SizeStr: "A4"})
+		fs = &fontSet{pdf: pdf}
+	} else {
+		p := takePrepared()
+		pdf, fs = p.pdf, &fontSet{pdf: p.pdf, added: p.added}
+	}
 	r := &renderer{
 		pdf:     pdf,
-		fonts:   &fontSet{pdf: pdf},
+		fonts:   fs,
 		meta:    d.Meta,
 		blocks:  d.Blocks,
 		total:   total,

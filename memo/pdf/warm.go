@@ -1,0 +1,65 @@
+package pdf
+
+import (
+	"github.com/go-pdf/fpdf"
+
+	"coilmemo/fonts"
+)
+
+// Documents prepared ahead. Registering an embedded TrueType face with
+// fpdf parses the whole file and derives its id from the face's width
+// table, about 4 ms a face; a memo sets five faces. Every document the set
+// pass writes registers those five up front, in one order (commonFaces), so
+// a document prepared on another core while the analysis runs (Warm) is
+// the same as one made on the spot, and the bytes do not depend on which
+// was used. A face beyond the five is registered when first set, as
+// before.
+
+// commonFaces are the faces every memo sets: body text, headings, emphasis
+// and the mathematics.
+var commonFaces = [][2]string{{"sans", ""}, {"sans", "B"}, {"sans", "I"}, {"serif", ""}, {"serif", "I"}}
+
+// prepared is a new fpdf document with the common faces registered.
+type prepared struct {
+	pdf   *fpdf.Fpdf
+	added map[string]bool
+}
+
+func prepare() prepared {
+	p := prepared{pdf: fpdf.NewCustom(&fpdf.InitType{OrientationStr: "P", UnitStr: "pt", SizeStr: "A4"}), added: map[string]bool{}}
+	for _, f := range commonFaces {
+		s := fonts.Lookup(f[0], f[1])
+		p.pdf.AddUTF8FontFromBytes(s.Family, s.Style, s.TTF)
+		p.added[f[0]+"/"+f[1]] = true
+	}
+	return p
+}
+
+// ready holds documents prepared by Warm, at most two.
+var ready = make(chan prepared, 2)
+
+// Warm starts preparing a document for the next Render on another
+// goroutine, to be called when a Render will follow (before the analysis
+// it waits on). A prepared document nobody takes is kept for a later
+// Render; beyond two, Warm does nothing.
+func Warm() {
+	if len(ready) == cap(ready) {
+		return
+	}
+	go func() {
+		select {
+		case ready <- prepare():
+		default:
+		}
+	}()
+}
+
+// takePrepared returns a document prepared by Warm, or prepares one.
+func takePrepared() prepared {
+	select {
+	case p := <-ready:
+		return p
+	default:
+		return prepare()
+	}
+}
