@@ -202,10 +202,17 @@ func surfaceMax(h calc.HeatResult) float64 {
 func switchVoltage(c calc.CoilResult) float64 {
 	s := c.Switch
 	if s.SwitchOff > 0 {
+		if !math.IsNaN(s.SpikeWorst) {
+			return s.SpikeWorst // at the largest current the switch may open
+		}
 		return s.Spike
 	}
 	if math.IsNaN(c.Inductance) {
 		return math.NaN()
 	}
-	return calc.SwitchOffSpike(c.Inductance, c.Current, AssumedSwitchOff, s.Supply)
+	I := c.Current
+	if w := s.WorstCurrent; w > math.Abs(I) {
+		I = w
+	}
+	return calc.SwitchOffSpike(c.Inductance, I, AssumedSwitchOff, s.Supply)
 }

@@ -230,7 +230,7 @@ func quickEvaluate(d calc.Design, excess []float64) calc.Results {
 				}
 			}
 		}
-		cr.Switch = calc.Switching(cr.Inductance, op.RHot, op.Current, op.Voltage, c.SwitchOff, c.DriverRating, c.Drive == calc.VoltageDrive)
+		cr.Switch = calc.SwitchingFor(c, d.Conditions, cr.Inductance, op)
 		res.Coils = append(res.Coils, cr)
 		fm.Coils = append(fm.Coils, c)
 		fm.Windings = append(fm.Windings, w)

@@ -102,11 +102,7 @@ func evaluateCoil(c Coil, cond Conditions) CoilResult {
 		cr.Runaway = cr.Verdict.Runaway
 	}
 	cr.SwitchOnCurrent = op.SwitchOnCurrent
-	Rcold := ResistanceAt(op.R20, op.Thermal.Alpha20, ColdTemperature(cond))
-	if c.Drive == CurrentDrive {
-		Rcold = op.RHot
-	}
-	cr.Switch = SwitchingWorst(cr.Inductance, op.RHot, Rcold, op.Current, op.SwitchOnCurrent, op.Voltage, c.SwitchOff, c.DriverRating, c.Drive == VoltageDrive)
+	cr.Switch = SwitchingFor(c, cond, cr.Inductance, op)
 	cr.Reactance = op.Reactance
 	cr.ACBounds = ACBoundsFor(c.Drive, c.Frequency, op.RHot, 2*math.Pi*c.Frequency*cr.Inductance)
 	cr.AC = AC(c, cr.Inductance, op.RHot, op.State.Mean, c.Frequency)
@@ -123,4 +119,16 @@ func evaluateCoil(c Coil, cond Conditions) CoilResult {
 		cr.HomogeneityAxial, cr.HomogeneityRadial = cr.Pair.Axial1, cr.Pair.Radial1
 	}
 	return cr
+}
+
+// SwitchingFor returns the switching figures of coil block c of
+// inductance L at its operating point op: SwitchingWorst with the worst
+// current the switch may open the switch-on current (for a voltage drive
+// the cold one, the winding then at the cold resistance).
+func SwitchingFor(c Coil, cond Conditions, L float64, op Operating) SwitchResult {
+	Rcold := ResistanceAt(op.R20, op.Thermal.Alpha20, ColdTemperature(cond))
+	if c.Drive == CurrentDrive {
+		Rcold = op.RHot
+	}
+	return SwitchingWorst(L, op.RHot, Rcold, op.Current, op.SwitchOnCurrent, op.Voltage, c.SwitchOff, c.DriverRating, c.Drive == VoltageDrive)
 }

@@ -181,10 +181,19 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult) []Step {
 		Step{What: "Magnetic energy stored at full current", Symbolic: `W = \frac{1}{2} L I^2`,
 			Numbers: fmt.Sprintf(`\frac{1}{2} \cdot %s \cdot %s^2`, L, Paren(I)), Result: Q(s.Energy, "J", 3)})
 	if s.SwitchOff > 0 {
-		steps = append(steps, Step{What: fmt.Sprintf("Voltage across a switch that opens in %s with no suppression: the coil's L·di/dt on top of the supply Vₛ (%s)", Eng(s.SwitchOff, "s", 3), supply),
-			Symbolic: `V_{sw} = \frac{L I}{t_{\mathrm{off}}} + V_s`,
-			Numbers:  fmt.Sprintf(`\frac{%s \cdot %s}{%s} + %s`, L, I, Q(s.SwitchOff, "s", 3), Q(s.Supply, "V", 3)),
-			Result:   Q(s.Spike, "V", 3)})
+		if cold := math.Abs(s.WorstCurrent); cold > math.Abs(cr.Current) {
+			// A voltage-driven coil switched off while still cold opens its
+			// larger switch-on current: the worst spike.
+			steps = append(steps, Step{What: fmt.Sprintf("Voltage across a switch that opens in %s with no suppression, at the cold switch-on current I_c (the worst case; at the hot current it is %s): the coil's L·di/dt on top of the supply Vₛ (%s)", Eng(s.SwitchOff, "s", 3), Eng(s.Spike, "V", 3), supply),
+				Symbolic: `V_{sw} = \frac{L I_c}{t_{\mathrm{off}}} + V_s`,
+				Numbers:  fmt.Sprintf(`\frac{%s \cdot %s}{%s} + %s`, L, Q(cold, "A", 4), Q(s.SwitchOff, "s", 3), Q(s.Supply, "V", 3)),
+				Result:   Q(s.SpikeWorst, "V", 3)})
+		} else {
+			steps = append(steps, Step{What: fmt.Sprintf("Voltage across a switch that opens in %s with no suppression: the coil's L·di/dt on top of the supply Vₛ (%s)", Eng(s.SwitchOff, "s", 3), supply),
+				Symbolic: `V_{sw} = \frac{L I}{t_{\mathrm{off}}} + V_s`,
+				Numbers:  fmt.Sprintf(`\frac{%s \cdot %s}{%s} + %s`, L, I, Q(s.SwitchOff, "s", 3), Q(s.Supply, "V", 3)),
+				Result:   Q(s.Spike, "V", 3)})
+		}
 	}
 	steps = append(steps, Step{What: "Freewheeling diode across the coil: the switch sees about the supply; the current decays through the coil's own resistance to 10 %",
 		Symbolic: `t_{10} = \frac{L}{R} \ln 10`, Numbers: fmt.Sprintf(`%s \cdot \ln 10`, Q(s.DiodeDecay, "s", 3)), Result: Q(s.DiodeTime10, "s", 3)})
@@ -207,17 +216,26 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult) []Step {
 	return steps
 }
 
+// worstSpike is the unsuppressed switch-off spike at the largest current
+// the switch may open (the cold switch-on current of a voltage drive).
+func worstSpike(s calc.SwitchResult) float64 {
+	if !math.IsNaN(s.SpikeWorst) {
+		return s.SpikeWorst
+	}
+	return s.Spike
+}
+
 // suppressionText is the suggested suppression in words.
 func suppressionText(co calc.Coil, cr calc.CoilResult) string {
 	s := cr.Switch
 	var b strings.Builder
 	if s.SwitchOff > 0 {
-		fmt.Fprintf(&b, "Unsuppressed, a switch opening in %s would see about %s. ", Eng(s.SwitchOff, "s", 3), Eng(s.Spike, "V", 3))
+		fmt.Fprintf(&b, "Unsuppressed, a switch opening in %s would see about %s. ", Eng(s.SwitchOff, "s", 3), Eng(worstSpike(s), "V", 3))
 	} else {
 		b.WriteString("No switch-off time is stated (switch-off), so the unsuppressed spike is not estimated; it is L·I/t for a switch opening in t. ")
 	}
 	fmt.Fprintf(&b, "Suggested suppression: a freewheeling diode across the coil rated for at least %s continuous, which keeps the switch near the %s supply and lets the current decay to 10 %% in %s",
-		Eng(math.Abs(cr.Current), "A", 3), Eng(s.Supply, "V", 3), Eng(s.DiodeTime10, "s", 3))
+		Eng(math.Max(math.Abs(cr.Current), math.Abs(s.WorstCurrent)), "A", 3), Eng(s.Supply, "V", 3), Eng(s.DiodeTime10, "s", 3))
 	switch {
 	case !math.IsNaN(s.Resistor):
 		fmt.Fprintf(&b, "; where a faster release matters, a resistor of at most %s in series with the diode shortens the decay to %s while keeping the switch within %s (the diode drop of about 0.7 V is neglected).",
@@ -427,7 +445,7 @@ func switchOffCaution(f analysis.Finding, cr calc.CoilResult, name string) doc.C
 		spike = fmt.Sprintf("A switch that opens in %s with no suppression would see about %s.", Eng(f.SwitchOff, "s", 3), Eng(f.Value, "V", 3))
 	}
 	diode := fmt.Sprintf("A freewheeling diode across the coil, rated for at least %s, keeps the switch near the %s supply; the current then decays to 10 %% in %s.",
-		Eng(math.Abs(cr.Current), "A", 3), Eng(s.Supply, "V", 3), Eng(s.DiodeTime10, "s", 3))
+		Eng(math.Max(math.Abs(cr.Current), math.Abs(s.WorstCurrent)), "A", 3), Eng(s.Supply, "V", 3), Eng(s.DiodeTime10, "s", 3))
 	resistor := ""
 	if math.IsNaN(s.Clamp) {
 		resistor = "A resistor in series with the diode speeds the decay; state the driver's voltage rating to size it."

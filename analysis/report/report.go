@@ -277,12 +277,15 @@ type CoilHeatSwitch struct {
 	RiseTime           Num `json:"rise_time_s"`
 	Energy             Num `json:"energy_J"`
 	SwitchOffVoltage   Num `json:"switch_off_voltage_V"`
-	SuppressionR       Num `json:"suppression_resistor_ohm"`
-	SkinDepth          Num `json:"skin_depth_m"`
-	Impedance          Num `json:"impedance_ohm"`
-	CurrentAC          Num `json:"current_ac_A"`
-	Force              Num `json:"force_N"`
-	PairForce          Num `json:"pair_force_N"`
+	// SwitchOffVoltageWorst is the spike at the largest current the switch
+	// may open (a voltage drive's cold switch-on current), V.
+	SwitchOffVoltageWorst Num `json:"switch_off_voltage_worst_V"`
+	SuppressionR          Num `json:"suppression_resistor_ohm"`
+	SkinDepth             Num `json:"skin_depth_m"`
+	Impedance             Num `json:"impedance_ohm"`
+	CurrentAC             Num `json:"current_ac_A"`
+	Force                 Num `json:"force_N"`
+	PairForce             Num `json:"pair_force_N"`
 }
 
 func coilHeatSwitch(co calc.Coil, cr calc.CoilResult) CoilHeatSwitch {
@@ -296,7 +299,7 @@ func coilHeatSwitch(co calc.Coil, cr calc.CoilResult) CoilHeatSwitch {
 		TimeToLimit: Num(h.TimeToLimit), CyclePeak: Num(format.Celsius(h.Cycle.PeakHot)), CycleTrough: Num(format.Celsius(h.Cycle.Trough)),
 		MomentCold: Num(h.ColdMoment), HeatCapacity: Num(h.HeatCapacity),
 		TimeConstant: Num(s.TimeConstant), RiseTime: Num(s.RiseTime), Energy: Num(s.Energy),
-		SwitchOffVoltage: Num(s.Spike), SuppressionR: Num(s.Resistor),
+		SwitchOffVoltage: Num(s.Spike), SwitchOffVoltageWorst: Num(s.SpikeWorst), SuppressionR: Num(s.Resistor),
 		SkinDepth: Num(a.SkinDepth), Impedance: Num(a.Impedance), CurrentAC: Num(a.Current),
 		Force: Num(cr.GradientForce), PairForce: Num(pair),
 	}

@@ -152,7 +152,7 @@ func (r *renderer) keepAfterHeading(next doc.Block, after []doc.Block) float64 {
 		if f, ok := after[0].(doc.Figure); ok {
 			n := len(layoutSpans(p.Spans, styBody, r.w, r.w))
 			if n <= leadInLines {
-				return float64(n)*leadBody + 6.5 + 8 + minFigureScale*r.layoutFigure(f).total
+				return float64(n)*leadBody + 6.5 + 8 + r.leastFigure(f)
 			}
 		}
 	}
@@ -223,7 +223,7 @@ func (r *renderer) paragraph(p doc.Paragraph) {
 	// not fit below the paragraph, both start the next page.
 	if r.depth == 0 && !r.fresh && len(r.rest) > 0 && len(lines) <= leadInLines {
 		if f, ok := r.rest[0].(doc.Figure); ok {
-			need := float64(len(lines))*leadBody + after + 8 + minFigureScale*r.layoutFigure(f).total
+			need := float64(len(lines))*leadBody + after + 8 + r.leastFigure(f)
 			if need > r.room(0) {
 				r.newPage()
 			}
@@ -1004,6 +1004,14 @@ func (r *renderer) layoutFigure(f doc.Figure) figureLayout {
 	}
 	fl.total = fl.h + figureCaptionGap + float64(len(fl.cap))*leadCaption
 	return fl
+}
+
+// leastFigure is the least height figure f takes on a page: its drawing
+// shrunk as far as minFigureScale allows, with its caption (which does not
+// shrink) — what figure places it in.
+func (r *renderer) leastFigure(f doc.Figure) float64 {
+	fl := r.layoutFigure(f)
+	return minFigureScale*fl.h + (fl.total - fl.h)
 }
 
 // minFigureScale is how far a figure may shrink to fit the rest of a page
