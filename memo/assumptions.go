@@ -90,15 +90,15 @@ func thinWireFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d ca
 	var out []validity
 	w := cr.Winding
 	R := co.MeanDiameter / 2
-	// Thin-wire ratio: the winding's cross-section against its diameter.
+	// Thin-wire ratio: a filament's conductor against the coil's diameter.
 	if co.Form != calc.Rectangle && R > 0 && co.Wire.Outer > 0 {
 		depth := co.Wire.Outer
 		what := "wire diameter"
-		switch {
-		case w.Thin:
+		// Laid-out turns (a solenoid, a multilayer winding) are filaments
+		// each of its own wire, so the wire's diameter is the ratio's
+		// length; a thin coil's turns lie in one bundle.
+		if w.Thin {
 			depth, what = cs.Bundle, "bundle diameter"
-		case co.RadialBuild > 0:
-			depth, what = math.Max(co.RadialBuild, co.Length), "winding depth"
 		}
 		ratio := depth / (2 * R)
 		v := validity{what: "Thin-wire ratio"}

@@ -516,7 +516,7 @@ func (c *composer) purpose() {
 
 func (c *composer) inputs() {
 	c.heading(1, "Inputs")
-	c.para(templates.Text("inputs", map[string]string{"File": c.j.Spec.File}))
+	c.para(templates.Text("inputs", map[string]string{"File": c.j.Name})) // the base name: the bytes do not depend on the path typed
 	var rows [][]doc.Cell
 	for _, e := range c.j.Spec.Entries {
 		raw, line := e.Raw, fmt.Sprint(e.Line)

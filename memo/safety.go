@@ -54,10 +54,10 @@ func Cautions(j *analysis.Study) []doc.Callout {
 			where = append(where, "at the origin, where |B| = "+Eng(ir.Origin, "T", 3))
 		}
 		if ir.Axial > 0 {
-			where = append(where, "up to "+Eng(ir.Axial, "m", 2)+" from the origin along the z axis")
+			where = append(where, "as far as "+Eng(ir.Axial, "m", 2)+" from the origin along the z axis")
 		}
 		if ir.Radial > 0 {
-			where = append(where, "up to "+Eng(ir.Radial, "m", 2)+" from the origin in the xy plane")
+			where = append(where, "as far as "+Eng(ir.Radial, "m", 2)+" from the origin in the xy plane")
 		}
 		for i, w := range ir.Windings {
 			if w.Surface >= analysis.ImplantField {
@@ -66,7 +66,10 @@ func Cautions(j *analysis.Study) []doc.Callout {
 					// The search starts from the rod's end faces too.
 					what, its = "the winding and core", "their surfaces (the rod's end faces included)"
 				}
-				where = append(where, fmt.Sprintf("next to %s of coil %q, where |B| reaches %s at %s and stays above 0.5 mT up to %s from it",
+				// The search runs out from the surface along the coil's axis
+				// and plane with every coil's field, and reports the farthest
+				// point above the level: beyond it the level is not reached.
+				where = append(where, fmt.Sprintf("next to %s of coil %q, where |B| reaches %s at %s, and 0.5 mT is exceeded as far as %s from it along its axis or in its plane (the field of every winding counted)",
 					what, d.Coils[i].Name, Eng(w.Surface, "T", 3), its, Eng(w.Distance, "m", 2)))
 			}
 		}
