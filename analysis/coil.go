@@ -42,6 +42,12 @@ type CoilStudy struct {
 // StudyCoil is the CoilStudy of coil block co with results cr in the
 // given conditions.
 func StudyCoil(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) CoilStudy {
+	return studyCoil(co, cr, cond, 0)
+}
+
+// studyCoil is StudyCoil with its map's node count along the longer side
+// (0: MapGrid; see Options.MapNodes).
+func studyCoil(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, grid int) CoilStudy {
 	w := cr.Winding
 	cs := CoilStudy{Outer: calc.WireOuter(co), Series: calc.SeriesCoils(co), ConductorArea: calc.ConductorArea(co.Wire.Bare)}
 	cs.Bundle = calc.BundleDiameter(cs.Outer, co.Turns)
@@ -56,7 +62,7 @@ func StudyCoil(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) CoilStudy
 		}
 	}
 	cs.Axis = profileOnAxis(co, cr, axisPoints)
-	cs.Map = coilMap(co, cr, cs)
+	cs.Map = coilMap(co, cr, cs, grid)
 	cs.Pair = pairCurves(co, cr)
 	cs.Inductance = inductanceParts(co, cr, cs.Outer)
 	cs.Heat = heatParts(co, cr, cond, cs.Outer)
