@@ -31,9 +31,9 @@ func TestAllCoilsMapSameOnOneCore(t *testing.T) {
 		t.Fatal("no spec.md")
 	}
 	r := calc.Evaluate(s.Design)
-	many := allCoilsMap(s.Design, r)
+	many := allCoilsMap(s.Design, r, 0)
 	old := runtime.GOMAXPROCS(1)
-	one := allCoilsMap(s.Design, r)
+	one := allCoilsMap(s.Design, r, 0)
 	runtime.GOMAXPROCS(old)
 	if many == nil || one == nil || len(many.B) != len(one.B) {
 		t.Fatal("no map")

@@ -42,12 +42,14 @@ type CoilStudy struct {
 // StudyCoil is the CoilStudy of coil block co with results cr in the
 // given conditions.
 func StudyCoil(co calc.Coil, cr calc.CoilResult, cond calc.Conditions) CoilStudy {
-	return studyCoil(co, cr, cond, nil)
+	return studyCoil(co, cr, cond, nil, 0)
 }
 
 // studyCoil is StudyCoil taking the map from maps when an identical
-// winding with the same current was mapped before (nil: always computed).
-func studyCoil(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, maps mapCache) CoilStudy {
+// winding with the same current was mapped on the same grid before (nil:
+// always computed), with its map's node count along the longer side
+// (0: MapGrid; see Options.MapNodes).
+func studyCoil(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, maps mapCache, grid int) CoilStudy {
 	w := cr.Winding
 	cs := CoilStudy{Outer: calc.WireOuter(co), Series: calc.SeriesCoils(co), ConductorArea: calc.ConductorArea(co.Wire.Bare)}
 	cs.Bundle = calc.BundleDiameter(cs.Outer, co.Turns)
@@ -62,7 +64,7 @@ func studyCoil(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, maps mapC
 		}
 	}
 	cs.Axis = profileOnAxis(co, cr, axisPoints)
-	cs.Map = maps.coilMap(co, cr, cs)
+	cs.Map = maps.coilMap(co, cr, cs, grid)
 	cs.Pair = pairCurves(co, cr)
 	cs.Inductance = inductanceParts(co, cr, cs.Outer)
 	cs.Heat = heatParts(co, cr, cond, cs.Outer)

@@ -290,8 +290,9 @@ var kindQuantities = map[string]func(CoilKinds) float64{
 // (of the cored moment against the winding's field plus the core's), the
 // on-axis profile and the map of |B| of winding and core together (the
 // rod's field by its pole model, calc.CorePoleField), the map widened to
-// take in the rod's ends. A pick-up coil (no current) keeps its figures.
-func coreStudy(cs *CoilStudy, co calc.Coil, cr *calc.CoilResult, k *calc.CoreResult) {
+// take in the rod's ends (grid nodes along its longer side, 0: MapGrid).
+// A pick-up coil (no current) keeps its figures.
+func coreStudy(cs *CoilStudy, co calc.Coil, cr *calc.CoilResult, k *calc.CoreResult, grid int) {
 	if k == nil || cr.Current == 0 || len(k.Charge) == 0 || co.Form == calc.Rectangle || co.Form == calc.Pair {
 		return
 	}
@@ -332,7 +333,7 @@ func coreStudy(cs *CoilStudy, co calc.Coil, cr *calc.CoilResult, k *calc.CoreRes
 	e := cs.Envelope
 	xHalf := math.Max(old.XHalf, 1.6*e.R1)
 	zHalf := math.Max(old.ZHalf, co.Core.Length/2+0.9*e.R1)
-	nx, nz := mapNodes(xHalf, zHalf)
+	nx, nz := mapNodes(xHalf, zHalf, grid)
 	m := &MapData{Z: SymmetricSpace(zHalf, nz), X: SymmetricSpace(xHalf, nx), XHalf: xHalf, ZHalf: zHalf}
 	g := calc.FieldMap(co, w, cr.Current, m.X, m.Z)
 	m.B = make([]float64, len(m.Z)*len(m.X))

@@ -16,15 +16,20 @@ const axisPoints = 241
 const MapGrid = 200
 
 // mapNodes are the node counts across (x) and along (z) a coil's map of
-// half-sizes xHalf × zHalf: MapGrid along the longer side, the other in
-// proportion but at least 61, both odd so that nodes fall on the axis and
-// the mid-plane.
-func mapNodes(xHalf, zHalf float64) (nx, nz int) {
-	nz, nx = MapGrid, MapGrid
+// half-sizes xHalf × zHalf: grid along the longer side (MapGrid when grid
+// is 0), the other in proportion but at least 61/200 of it (61 of
+// MapGrid), both odd so that nodes fall on the axis and the mid-plane.
+func mapNodes(xHalf, zHalf float64, grid int) (nx, nz int) {
+	if grid <= 0 {
+		grid = MapGrid
+	}
+	least := max(3, (61*grid+MapGrid/2)/MapGrid)
+	g := float64(grid)
+	nz, nx = grid, grid
 	if zHalf > xHalf {
-		nx = max(61, int(math.Round(MapGrid*xHalf/zHalf)))
+		nx = max(least, int(math.Round(g*xHalf/zHalf)))
 	} else {
-		nz = max(61, int(math.Round(MapGrid*zHalf/xHalf)))
+		nz = max(least, int(math.Round(g*zHalf/xHalf)))
 	}
 	return nx | 1, nz | 1
 }
@@ -201,7 +206,7 @@ type MapData struct {
 	XHalf, ZHalf float64
 }
 
-func coilMap(co calc.Coil, cr calc.CoilResult, cs CoilStudy) *MapData {
+func coilMap(co calc.Coil, cr calc.CoilResult, cs CoilStudy, grid int) *MapData {
 	var zHalf, xHalf float64
 	if co.Form == calc.Rectangle {
 		xHalf = 0.8 * co.Width
@@ -221,7 +226,7 @@ func coilMap(co calc.Coil, cr calc.CoilResult, cs CoilStudy) *MapData {
 	if !(xHalf > 0) || !(zHalf > 0) || math.IsInf(xHalf, 0) || math.IsInf(zHalf, 0) {
 		return nil
 	}
-	nx, nz := mapNodes(xHalf, zHalf)
+	nx, nz := mapNodes(xHalf, zHalf, grid)
 	m := &MapData{Z: SymmetricSpace(zHalf, nz), X: SymmetricSpace(xHalf, nx), XHalf: xHalf, ZHalf: zHalf}
 	var skip func(x, z float64) bool
 	if co.Form != calc.Rectangle {
@@ -251,27 +256,28 @@ type mapKey struct {
 	opposing                                bool
 	axis                                    calc.Vec
 	current                                 float64
+	grid                                    int
 }
 
 // mapCache shares the maps of identical windings within one analysis (an
 // array of like coils is mapped once). A nil cache computes every map.
 type mapCache map[mapKey]*MapData
 
-func (mc mapCache) coilMap(co calc.Coil, cr calc.CoilResult, cs CoilStudy) *MapData {
+func (mc mapCache) coilMap(co calc.Coil, cr calc.CoilResult, cs CoilStudy, grid int) *MapData {
 	if mc == nil {
-		return coilMap(co, cr, cs)
+		return coilMap(co, cr, cs, grid)
 	}
 	k := mapKey{form: co.Form, mean: co.MeanDiameter, inner: co.InnerDiameter, outer: co.OuterDiameter,
 		length: co.Length, build: co.RadialBuild, w: co.Width, h: co.Height, turns: co.Turns,
 		gauge: co.Wire.Gauge, bare: co.Wire.Bare, wireOuter: co.Wire.Outer,
-		spacing: co.Spacing, opposing: co.Opposing, current: cr.Current}
+		spacing: co.Spacing, opposing: co.Opposing, current: cr.Current, grid: grid}
 	if co.Form == calc.Rectangle {
 		k.axis = co.Axis // a rectangle's map is taken through its frame
 	}
 	if m, ok := mc[k]; ok {
 		return m
 	}
-	m := coilMap(co, cr, cs)
+	m := coilMap(co, cr, cs, grid)
 	mc[k] = m
 	return m
 }
@@ -395,7 +401,7 @@ type DesignStudy struct {
 	All *MapData
 }
 
-func analyseDesign(d calc.Design, r calc.Results) DesignStudy {
+func analyseDesign(d calc.Design, r calc.Results, grid int) DesignStudy {
 	ds := DesignStudy{Extent: DesignExtent(d)}
 	if Bb := d.Conditions.BackgroundField; Bb.Norm() > 0 {
 		for i := 0; i <= 180; i += 2 {
@@ -404,11 +410,16 @@ func analyseDesign(d calc.Design, r calc.Results) DesignStudy {
 			ds.Torque = append(ds.Torque, calc.TorqueAtAngle(r.Moment.Norm(), Bb.Norm(), a*math.Pi/180))
 		}
 	}
-	ds.All = allCoilsMap(d, r)
+	ds.All = allCoilsMap(d, r, grid)
 	return ds
 }
 
-func allCoilsMap(d calc.Design, r calc.Results) *MapData {
+// allCoilsMap is the map of all coils, grid nodes a side (AllMapGrid when
+// grid is 0).
+func allCoilsMap(d calc.Design, r calc.Results, grid int) *MapData {
+	if grid <= 0 {
+		grid = AllMapGrid
+	}
 	if len(d.Coils) < 2 {
 		return nil
 	}
@@ -422,8 +433,8 @@ func allCoilsMap(d calc.Design, r calc.Results) *MapData {
 			hidden = append(hidden, i)
 		}
 	}
-	xs := SymmetricSpace(half, AllMapGrid)
-	step := 2 * half / float64(AllMapGrid-1)
+	xs := SymmetricSpace(half, grid|1)
+	step := 2 * half / float64(len(xs)-1)
 	fm := calc.NewFieldModel(d)
 	envs := make([]calc.Envelope, len(hidden)) // once per map, not per node
 	for j, k := range hidden {

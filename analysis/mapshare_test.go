@@ -22,7 +22,7 @@ func TestIdenticalCoilsShareTheirMap(t *testing.T) {
 	if c == a {
 		t.Fatal("coil c, at 0.4 A, shares the 0.5 A map")
 	}
-	alone := coilMap(st.Spec.Design.Coils[1], st.Results.Coils[1], st.Coils[1])
+	alone := coilMap(st.Spec.Design.Coils[1], st.Results.Coils[1], st.Coils[1], 0)
 	nan, inside := 0, 0
 	for k := range alone.B {
 		x, z := alone.X[k/len(alone.Z)], alone.Z[k%len(alone.Z)]

@@ -110,7 +110,7 @@ func BenchmarkStageCoilMap(b *testing.B) {
 			cs := StudyCoil(co, c.r.Coils[i], c.s.Design.Conditions)
 			b.Run(c.name+"/"+co.Name, func(b *testing.B) {
 				for range b.N {
-					coilMap(co, c.r.Coils[i], cs)
+					coilMap(co, c.r.Coils[i], cs, 0)
 				}
 			})
 		}
@@ -126,7 +126,7 @@ func BenchmarkStageAllCoilsMap(b *testing.B) {
 		}
 		b.Run(c.name, func(b *testing.B) {
 			for range b.N {
-				allCoilsMap(c.s.Design, c.r)
+				allCoilsMap(c.s.Design, c.r, 0)
 			}
 		})
 	}

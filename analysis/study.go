@@ -37,6 +37,12 @@ type Options struct {
 	// memo block's `previous` names (see ComparePrevious); the command
 	// line supplies it, as the analysis does no I/O of its own.
 	ReadPrevious func(ref string) (name string, src []byte, err error)
+	// MapNodes, if set, is the node count along the longer side of every
+	// field map (each coil's, the all-coils map), in place of MapGrid and
+	// AllMapGrid: a coarse grid for the whole-pipeline fuzz target, which
+	// keeps every map, figure and layout path at a fraction of the cost.
+	// Zero, as in every build, keeps the memo's grids.
+	MapNodes int
 }
 
 // Study is one evaluated spec: everything the memo and the JSON report
@@ -109,11 +115,11 @@ func Analyse(s *spec.Spec, o Options) *Study {
 	st.Limits = JudgeLimits(s.Design, st.Results)
 	maps := mapCache{}
 	for i, c := range s.Design.Coils {
-		st.Coils = append(st.Coils, studyCoil(c, air.Coils[i], s.Design.Conditions, maps)) // the winding alone; the core in Kinds
+		st.Coils = append(st.Coils, studyCoil(c, air.Coils[i], s.Design.Conditions, maps, o.MapNodes)) // the winding alone; the core in Kinds
 		st.Coils[i].Kinds = kinds[i]
-		coreStudy(&st.Coils[i], c, &st.Results.Coils[i], kinds[i].Core) // the core in the field figures: analysis/core.go
+		coreStudy(&st.Coils[i], c, &st.Results.Coils[i], kinds[i].Core, o.MapNodes) // the core in the field figures: analysis/core.go
 	}
-	st.Design = analyseDesign(s.Design, st.Results)
+	st.Design = analyseDesign(s.Design, st.Results, o.MapNodes)
 	st.Checks = append(Verify(s.Design, air), kindChecks(s.Design, air, kinds)...)
 	st.Sweep = RunSweep(s)
 	st.Safety = assessSafety(s.Design, st.Results, st.Coils)

@@ -80,9 +80,38 @@ func coaxial(a, b Coil) (bool, float64) {
 // by dz along the common axis), turn by turn when that costs at most
 // turnSumBudget evaluations, else over cells of g × g turns (see cells.go)
 // with d1, d2 the outer wire diameters.
-func windingSum(w1 Winding, d1 float64, w2 Winding, d2, dz float64, kernel func(a, b, d float64) float64) float64 {
+//
+// Windings whose turns lie in spherical shells that do not meet are summed
+// instead over the discrete Gauss rules of both cross-sections (ruleNodes,
+// neumannrule.go) when that is cheaper: the same sum to within about
+// ruleEps (TestCoaxialRulesMatchTurnSum), at a cost that falls with the
+// distance.
+func windingSum(co1 Coil, w1 Winding, d1 float64, co2 Coil, w2 Winding, d2, dz float64, kernel func(a, b, d float64) float64) float64 {
 	r1, r2 := rowsOf(w1), rowsOf(w2)
-	if rowPairCost(r1, r2, false) <= turnSumBudget {
+	cost := rowPairCost(r1, r2, false)
+	if l1, l2 := latticesOf(co1, w1), latticesOf(co2, w2); len(l1) > 0 && len(l2) > 0 {
+		lo1, hi1 := shell(l1)
+		lo2, hi2 := shell(l2)
+		if g := shellGap(Vec{}, lo1, hi1, Vec{0, 0, dz}, lo2, hi2); g > 0 {
+			var c1, c2 []cell
+			for _, l := range l1 {
+				c1 = ruleNodes(l.root, g, c1)
+			}
+			for _, l := range l2 {
+				c2 = ruleNodes(l.root, g, c2)
+			}
+			if float64(len(c1)*len(c2)) < math.Min(cost, turnSumBudget) {
+				s := 0.0
+				for _, a := range c1 {
+					for _, b := range c2 {
+						s += a.n * b.n * kernel(a.r, b.r, b.z+dz-a.z)
+					}
+				}
+				return s
+			}
+		}
+	}
+	if cost <= turnSumBudget {
 		s := 0.0
 		for _, p := range r1 {
 			for _, q := range r2 {
@@ -122,7 +151,7 @@ func CoaxialMutual(a Coil, wa Winding, b Coil, wb Winding) (M float64, overlap b
 	for _, sa := range subCoils(a) {
 		for _, sb := range subCoils(b) {
 			dz := sb.centre.Sub(sa.centre).Dot(u)
-			m := windingSum(wa, outerOf(a), wb, outerOf(b), dz, MutualInductance)
+			m := windingSum(a, wa, outerOf(a), b, wb, outerOf(b), dz, MutualInductance)
 			M += sa.sign * sb.sign * sense * m
 		}
 	}
@@ -146,7 +175,7 @@ func CoaxialForceBetween(a Coil, wa Winding, Ia float64, b Coil, wb Winding, Ib 
 	for _, sa := range subCoils(a) {
 		for _, sb := range subCoils(b) {
 			dz := sb.centre.Sub(sa.centre).Dot(u)
-			g := windingSum(wa, outerOf(a), wb, outerOf(b), dz, MutualInductanceGradient)
+			g := windingSum(a, wa, outerOf(a), b, wb, outerOf(b), dz, MutualInductanceGradient)
 			F += sa.sign * sb.sign * sense * g
 		}
 	}

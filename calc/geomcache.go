@@ -44,8 +44,9 @@ func keyOf(c Coil, withAxis bool) geomKey {
 const geomCacheSize = 4096
 
 type geomCache[V any] struct {
-	mu sync.Mutex
-	m  map[geomKey]V
+	mu  sync.Mutex
+	m   map[geomKey]V
+	cap int // entries kept (geomCacheSize when 0)
 }
 
 func (g *geomCache[V]) get(k geomKey, compute func() V) V {
@@ -57,7 +58,11 @@ func (g *geomCache[V]) get(k geomKey, compute func() V) V {
 	}
 	v = compute()
 	g.mu.Lock()
-	if g.m == nil || len(g.m) >= geomCacheSize {
+	size := g.cap
+	if size == 0 {
+		size = geomCacheSize
+	}
+	if g.m == nil || len(g.m) >= size {
 		g.m = map[geomKey]V{}
 	}
 	g.m[k] = v
@@ -68,7 +73,48 @@ func (g *geomCache[V]) get(k geomKey, compute func() V) V {
 var (
 	inductanceCache geomCache[float64]
 	dipoleCache     geomCache[DipoleReach]
+	latticeCache    = geomCache[latticeEntry]{cap: 64}
 )
+
+// latticeEntry is a winding's panel tree with the fingerprint of the
+// winding it was built from.
+type latticeEntry struct {
+	print [6]float64
+	ls    []*lattice
+}
+
+// fingerprint sums up a winding: its turns, layers and the first and last
+// layers' radius and first turn. Windings laid out from one geometry share
+// it; a winding assembled otherwise (a test's, or one edited) that happened
+// to share its coil's key would not.
+func fingerprint(w Winding) [6]float64 {
+	f := [6]float64{float64(w.TurnCount()), float64(len(w.Layers))}
+	if n := len(w.Layers); n > 0 {
+		a, b := w.Layers[0], w.Layers[n-1]
+		f[2], f[3] = a.Radius, b.Radius
+		if len(a.Z) > 0 {
+			f[4] = a.Z[0]
+		}
+		if len(b.Z) > 0 {
+			f[5] = b.Z[len(b.Z)-1]
+		}
+	}
+	return f
+}
+
+// latticesOf is lattices(w), memoised for windings laid out from coil c's
+// geometry: the panel tree of a large winding costs as much as many field
+// evaluations, and couplings, maps and searches each want it. The tree is
+// read only once built. A winding whose fingerprint differs from the one
+// cached under c's key is built afresh.
+func latticesOf(c Coil, w Winding) []*lattice {
+	fp := fingerprint(w)
+	e := latticeCache.get(keyOf(c, false), func() latticeEntry { return latticeEntry{fp, lattices(w)} })
+	if e.print != fp {
+		return lattices(w)
+	}
+	return e.ls
+}
 
 // coilInductance is CoilInductance(c, w) for w = LayOut(c), memoised.
 func coilInductance(c Coil, w Winding) float64 {

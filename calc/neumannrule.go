@@ -165,7 +165,7 @@ type rulePair struct {
 }
 
 func rulePairs(a Coil, wa Winding, b Coil, wb Winding) ([]rulePair, bool) {
-	la, lb := lattices(wa), lattices(wb)
+	la, lb := latticesOf(a, wa), latticesOf(b, wb)
 	if len(la) == 0 || len(lb) == 0 {
 		return nil, false
 	}

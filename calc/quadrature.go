@@ -334,7 +334,7 @@ func NewCoilSource(c Coil, w Winding, I float64) *CoilSource {
 	if c.Form == Rectangle {
 		return s
 	}
-	s.lattices = lattices(w)
+	s.lattices = latticesOf(c, w)
 	switch c.Form {
 	case Pair:
 		I2 := I

@@ -12,6 +12,10 @@ import (
 
 // ---- conditions ----
 
+// maxAmbient is the hottest ambient a spec accepts, K (500 °C): above
+// every insulation class, and within the range of the air properties.
+const maxAmbient = 500 + zeroCelsius
+
 // conditionsBlock reads the conditions block; b has no lines when the spec
 // has none, and then only the defaults are set.
 func (p *parser) conditionsBlock(b *rawBlock) {
@@ -31,6 +35,8 @@ func (p *parser) conditionsBlock(b *rawBlock) {
 		case "ambient":
 			if q, err := units.ParseAs(e.value, units.Temperature); err != nil {
 				p.errf(e.line, "ambient: %v", err)
+			} else if q.Value > maxAmbient {
+				p.errf(e.line, "ambient: %s is more than 500 degC, the most a spec accepts", e.value)
 			} else {
 				cond.Ambient = q.Value
 				si = q.String()
@@ -296,7 +302,8 @@ func (p *parser) sweepBlock(b *rawBlock, coils []*coilIn) {
 }
 
 // sweepStepProblem checks every value of a sweep as the coil block's own
-// key would be checked: positive where the key must be, a duty within
+// key would be checked: positive where the key must be, within the
+// upper bound of its dimension (upperBounds, calc.MaxTurns), a duty within
 // (0, 100 %], a spacing only on a pair, a wire's outer diameter above its
 // bare one, a diameter that leaves a bore. It names the first bad step.
 func sweepStepProblem(sw *Sweep, targets []*coilIn) string {
@@ -313,6 +320,10 @@ func sweepStepProblem(sw *Sweep, targets []*coilIn) string {
 				bad = "is negative"
 			case sw.Param != "duty" && sw.Param != "radial-build" && !(v > 0):
 				bad = "is not above zero"
+			case upperBounds[sweepDims[sw.Param]] > 0 && v > upperBounds[sweepDims[sw.Param]]:
+				bad = fmt.Sprintf("is more than %s, the most a spec accepts", units.Format(upperBounds[sweepDims[sw.Param]], sweepDims[sw.Param]))
+			case sw.Param == "turns" && v > calc.MaxTurns:
+				bad = fmt.Sprintf("is more than %d turns, the most this tool lays out", calc.MaxTurns)
 			case sw.Param == "spacing" && c.Form != calc.Pair:
 				bad = fmt.Sprintf("spacing applies only to form = pair, and coil %q is not a pair", c.Name)
 			case sw.Param == "wire-outer-diameter" && v <= c.Wire.Bare:

@@ -119,8 +119,9 @@ func (p *parser) design() {
 		p.spec.Design.Coils = append(p.spec.Design.Coils, c.c)
 		p.spec.CoilFences = append(p.spec.CoilFences, c.fence)
 	}
-	p.checkWorkBounds(coils)
-	p.checkBuildable(coils)
+	if p.checkWorkBounds(coils) {
+		p.checkBuildable(coils) // pairs of coils: not over 300 of them
+	}
 	if sweepBlock != nil {
 		p.sweepBlock(sweepBlock, coils)
 	}

@@ -509,8 +509,10 @@ const byteOrderMark = "\uFEFF"
 const maxTextDiags = 20
 
 // checkText reports every byte of src that is not UTF-8 and every control
-// character other than tab and the line breaks (all text of a spec is
-// printed: prose in the memo, values in its inputs table), and returns src
+// character other than tab and the line breaks, LF and CRLF (a lone CR
+// is reported: the Markdown reader would take it for a line break that
+// the line count does not see; all text of a spec is printed: prose in
+// the memo, values in its inputs table), and returns src
 // with each of them replaced by '?' so that the rest of the spec is read
 // with its positions unchanged.
 func (p *parser) checkText(src []byte) []byte {
@@ -530,7 +532,13 @@ func (p *parser) checkText(src []byte) []byte {
 	for i := 0; i < len(src); {
 		c := src[i]
 		if c < utf8.RuneSelf {
-			if (c < 0x20 && c != '\t' && c != '\n' && c != '\r') || c == 0x7f {
+			switch {
+			case c == '\r' && (i+1 == len(src) || src[i+1] != '\n'):
+				// a line break to the Markdown reader but not to the
+				// line count, so positions would drift
+				report(i, "carriage return without a line feed; save the spec with LF or CRLF line endings")
+				out[i] = '?'
+			case (c < 0x20 && c != '\t' && c != '\n' && c != '\r') || c == 0x7f:
 				report(i, "control character U+%04X; a spec may hold no control characters other than tab", c)
 				out[i] = '?'
 			}

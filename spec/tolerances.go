@@ -143,6 +143,9 @@ func (p *parser) tolerancesBlock(b *rawBlock, coils []*coilIn) {
 		case "ambient":
 			tol.Mode, tol.Dim = Range, units.Temperature
 			tol.Lo, tol.Hi, err = valueRange(e.value, units.Temperature)
+			if err == nil && tol.Hi > maxAmbient {
+				err = fmt.Errorf("the range %s goes above 500 degC, the most a spec accepts", e.value)
+			}
 			if err == nil {
 				amb := p.spec.Design.Conditions.Ambient
 				if amb < tol.Lo-1e-9 || amb > tol.Hi+1e-9 {

@@ -11,8 +11,11 @@ const (
 	MaxProbes = 200
 )
 
-// checkWorkBounds refuses more coils, probes or turns than the bounds.
-func (p *parser) checkWorkBounds(coils []*coilIn) {
+// checkWorkBounds refuses more coils, probes or turns than the bounds,
+// and reports whether the spec keeps to them: the checks whose work grows
+// with the coils (checkBuildable's pairs) run only on a spec that does.
+func (p *parser) checkWorkBounds(coils []*coilIn) bool {
+	n := len(p.diags)
 	if len(coils) > MaxCoils {
 		p.errf(coils[MaxCoils].fence, "more than %d coil blocks (this is block %d); a spec holds at most %d", MaxCoils, MaxCoils+1, MaxCoils)
 	}
@@ -24,4 +27,5 @@ func (p *parser) checkWorkBounds(coils []*coilIn) {
 	if n := len(p.spec.Design.Probes); n > MaxProbes {
 		p.errf(1, "%d probes: a spec holds at most %d", n, MaxProbes)
 	}
+	return len(p.diags) == n
 }

@@ -55,8 +55,8 @@ func fuzzing() bool {
 
 // FuzzPipeline runs what a build runs — the reader, every calculation,
 // the composition of the memo, its text backend, the summary and the
-// JSON — on mutated specs: whatever the reader accepts must compose
-// without a panic, and whatever it refuses is refused with positioned
+// JSON — on mutated specs, the maps on the coarse grid fuzzMapNodes:
+// whatever the reader accepts must compose without a panic, and whatever it refuses is refused with positioned
 // messages. The PDF (layout, figures, fonts: 0.1–0.2 s a memo) is
 // rendered for every seed, and while fuzzing for one input in 64, chosen
 // by the input's hash so that a crasher reproduces; the rest of the
@@ -74,7 +74,7 @@ func FuzzPipeline(f *testing.F) {
 		// it); mended, more mutants get past the reader to the rest.
 		src = bytes.ToValidUTF8(src, []byte("\uFFFD"))
 		start := time.Now()
-		st, diags := analysis.Run("fuzz.md", src, analysis.Options{Name: "fuzz.md"})
+		st, diags := analysis.Run("fuzz.md", src, analysis.Options{Name: "fuzz.md", MapNodes: fuzzMapNodes})
 		if len(diags) > 0 {
 			for _, d := range diags {
 				if d.File != "fuzz.md" || d.Line < 1 || d.Msg == "" {
@@ -123,44 +123,76 @@ func TestPipelineSeedsSound(t *testing.T) {
 	}
 }
 
+// fuzzMapNodes is the fuzz targets' map grid (analysis.Options.MapNodes):
+// every map, figure and layout path of a build, at about a hundredth of
+// the nodes of the memo's maps.
+const fuzzMapNodes = 21
+
+// designArgs are FuzzDesign's arguments.
+type designArgs struct {
+	form    uint8
+	turns   uint16
+	a, b, c float64
+	drive   float64
+	opts    uint16
+	text    string
+}
+
+// designSeeds are FuzzDesign's seeds, one for each form and the blocks.
+var designSeeds = []designArgs{
+	{0, 10, 80, 0, 0, 0.2, 0, "Small loop"},
+	{1, 200, 30, 40, 3, 0.5, 0x1f, "Solenoid *with* sweep"},
+	{2, 20, 100, 60, 0, 1, 0x2a, "Rectangle"},
+	{3, 30, 100, 50, 0, 1, 0x1c5, "Pair, opposing"},
+	{1, 300, 12, 60, 1, 0.1, 0x300, "Cored rod"},
+}
+
 // FuzzDesign fuzzes the numbers and choices of a design rather than its
 // text: a spec assembled from them (form, turns, dimensions, drive, and
 // which blocks it has) gets past the reader far more often than a mutated
 // text does, so the calculations, the composition and the layout see
 // extreme but accepted designs. The text goes into the title and prose.
+// The maps are computed on a coarse grid (fuzzMapNodes), and while
+// fuzzing the PDF is rendered for one design in 64.
 func FuzzDesign(f *testing.F) {
-	f.Add(uint8(0), uint16(10), 80.0, 0.0, 0.0, 0.2, uint16(0), "Small loop")
-	f.Add(uint8(1), uint16(200), 30.0, 40.0, 3.0, 0.5, uint16(0x1f), "Solenoid *with* sweep")
-	f.Add(uint8(2), uint16(20), 100.0, 60.0, 0.0, 1.0, uint16(0x2a), "Rectangle")
-	f.Add(uint8(3), uint16(30), 100.0, 50.0, 0.0, 1.0, uint16(0x1c5), "Pair, opposing")
-	f.Add(uint8(1), uint16(300), 12.0, 60.0, 1.0, 0.1, uint16(0x300), "Cored rod")
+	for _, d := range designSeeds {
+		f.Add(d.form, d.turns, d.a, d.b, d.c, d.drive, d.opts, d.text)
+	}
+	every := !fuzzing()
 	f.Fuzz(func(t *testing.T, form uint8, turns uint16, a, b, c, drive float64, opts uint16, text string) {
-		src := designSpec(form, turns, a, b, c, drive, opts, text)
-		start := time.Now()
-		st, diags := analysis.Run("fuzz.md", []byte(src), analysis.Options{Name: "fuzz.md"})
-		if len(diags) > 0 {
-			for _, d := range diags {
-				if d.File != "fuzz.md" || d.Line < 1 || d.Msg == "" {
-					t.Fatalf("badly positioned diagnostic %+v", d)
-				}
-			}
-			return
-		}
-		if err := doc.WriteText(io.Discard, memo.Document(st)); err != nil {
-			t.Fatal(err)
-		}
-		if _, err := report.JSON(st); err != nil {
-			t.Fatal(err)
-		}
-		if h := sha256.Sum256([]byte(src)); !fuzzing() || h[0]%64 == 0 {
-			if _, err := memo.PDF(st); err != nil {
-				t.Fatal(err)
-			}
-		}
-		if el := time.Since(start); el > 20*time.Second {
-			t.Errorf("%v for the design\n%s", el, src)
-		}
+		runDesign(t, designSpec(form, turns, a, b, c, drive, opts, text), every)
 	})
+}
+
+// runDesign runs a build of the design spec src but the file: the reader,
+// the calculations at the coarse map grid, the memo's text and the JSON,
+// and the PDF when pdf is set or for one spec in 64 (by its hash, so that
+// a crasher reproduces).
+func runDesign(t testing.TB, src string, pdf bool) {
+	start := time.Now()
+	st, diags := analysis.Run("fuzz.md", []byte(src), analysis.Options{Name: "fuzz.md", MapNodes: fuzzMapNodes})
+	if len(diags) > 0 {
+		for _, d := range diags {
+			if d.File != "fuzz.md" || d.Line < 1 || d.Msg == "" {
+				t.Fatalf("badly positioned diagnostic %+v", d)
+			}
+		}
+		return
+	}
+	if err := doc.WriteText(io.Discard, memo.Document(st)); err != nil {
+		t.Fatal(err)
+	}
+	if _, err := report.JSON(st); err != nil {
+		t.Fatal(err)
+	}
+	if h := sha256.Sum256([]byte(src)); pdf || h[0]%64 == 0 {
+		if _, err := memo.PDF(st); err != nil {
+			t.Fatal(err)
+		}
+	}
+	if el := time.Since(start); el > 20*time.Second {
+		t.Errorf("%v for the design\n%s", el, src)
+	}
 }
 
 // designSpec writes a spec from fuzzed numbers; opts' bits add blocks and
