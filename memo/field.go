@@ -67,9 +67,13 @@ func (c *composer) field() {
 		default:
 			c.axisFigure(co, cr, cs)
 		}
+		if pm := planeShown(c.j, i); pm != nil {
+			c.planeFigure(co, pm) // memo/plane.go
+		}
 		c.fieldMap(co, cr, cs)
 		c.dipoleDistances(co, cr)
 	}
+	c.axisSetFigure() // memo/axisset.go
 	c.allCoilsMap()
 }
 
