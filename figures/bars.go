@@ -17,7 +17,7 @@ type BarGroups struct {
 	Series []string    // series names, in the legend
 	Values [][]float64 // Values[g][s], SI, in Unit; NaN draws no bar
 	YName  string      // the ordinate's quantity, e.g. "Moment component"
-	Unit   string      // e.g. "A·m²"
+	Unit   string      // e.g. "A·m²"; "" for a plain number (no prefix)
 }
 
 // barColours are the series' fills, in order.
@@ -34,7 +34,11 @@ func GroupedBars(d BarGroups) DrawFunc {
 		all = append(all, g...)
 	}
 	yp := EngPrefix(all...)
-	p := NewPlot("", d.YName+" ("+yp.Symbol+d.Unit+")")
+	label := d.YName + " (" + yp.Symbol + d.Unit + ")"
+	if d.Unit == "" {
+		yp, label = Prefix{"", 1}, d.YName
+	}
+	p := NewPlot("", label)
 	lo, hi, ok := finiteRange(all)
 	if !ok {
 		return Drawer(p)

@@ -5,6 +5,7 @@ import (
 	"math"
 	"strings"
 
+	"coilmemo/calc"
 	"coilmemo/doc"
 	"coilmemo/figures"
 )
@@ -60,11 +61,25 @@ func (c *composer) axisSetFigure() {
 	}
 	text += fmt.Sprintf(". The total moment is %s.", Eng(c.j.Results.Moment.Norm(), "A·m²", 3))
 	c.para(text)
-	c.para(fmt.Sprintf("Figure %d shows each coil's moment vector by its components along x, y and z, one group of bars per coil: in a set whose coils are square to one another each group has one bar, along that coil's axis.", n))
-	c.fig(doc.Figure{Caption: "Moment vector of each coil of the set by its components (coil alone at its operating current)",
+	// Moments of very different sizes are drawn as directions, each
+	// coil's components over its own |m|, so that the small ones show.
+	bars := figures.BarGroups{Groups: names, Series: []string{"mx", "my", "mz"}, Values: vals, YName: "Moment component", Unit: "A·m²"}
+	caption := "Moment vector of each coil of the set by its components (coil alone at its operating current)"
+	what := "moment vector"
+	if mlo, mhi := momentSpread(as.Moments); mhi > 10*mlo {
+		for k, m := range as.Moments {
+			if mn := m.Norm(); mn > 0 {
+				bars.Values[k] = []float64{m[0] / mn, m[1] / mn, m[2] / mn}
+			}
+		}
+		bars.YName, bars.Unit = "Moment component over |m|", ""
+		caption = "Direction of each coil's moment: its components over its own magnitude |m| (the magnitudes differ too much to share a scale; they are given in the text)"
+		what = "moment direction (its components over its own |m|, since the magnitudes differ by more than ten times)"
+	}
+	c.para(fmt.Sprintf("Figure %d shows each coil's %s along x, y and z, one group of bars per coil: in a set whose coils are square to one another each group has one bar, along that coil's axis.", n, what))
+	c.fig(doc.Figure{Caption: caption,
 		Width: figWidth, Height: figHeight * 0.8,
-		Draw: figures.GroupedBars(figures.BarGroups{Groups: names, Series: []string{"mx", "my", "mz"}, Values: vals,
-			YName: "Moment component", Unit: "A·m²"}),
+		Draw:    figures.GroupedBars(bars),
 		Summary: "Moments: " + strings.Join(dirs, "; ") + "."})
 	// The coupling coefficients.
 	worst, wa, wb := math.NaN(), -1, -1
@@ -97,7 +112,11 @@ func (c *composer) axisSetFigure() {
 	}
 	t := "The table gives the coupling coefficient k = M/√(L₁ L₂) of every two coils of the set, from their mutual inductance M (Maxwell's formula for coaxial coils, Neumann's double line integral over the turns for the others) and their self-inductances: the fraction of one coil's flux that links the other, and the share of a current step in one that appears as an induced voltage in the other."
 	if !math.IsNaN(worst) {
-		t += fmt.Sprintf(" The largest cross-coupling is |k| = %s, between %q and %q", kText(worst), names[wa], names[wb])
+		kt := "= " + kText(worst)
+		if worst < 1e-4 {
+			kt = "< 0.0001"
+		}
+		t += fmt.Sprintf(" The largest cross-coupling is |k| %s, between %q and %q", kt, names[wa], names[wb])
 		if worst < 0.01 {
 			t += ": under 1 %, so the axes can be driven independently."
 		} else {
@@ -109,6 +128,15 @@ func (c *composer) axisSetFigure() {
 	c.para(t)
 	c.add(doc.Table{Caption: "Coupling coefficients k between the coils of the set (— where no mutual inductance is computed)",
 		Header: append([]string{"k"}, names...), Rows: rows, Widths: widths, Align: align})
+}
+
+// momentSpread is the smallest and largest magnitude of the moments.
+func momentSpread(ms []calc.Vec) (lo, hi float64) {
+	lo, hi = math.Inf(1), 0
+	for _, m := range ms {
+		lo, hi = math.Min(lo, m.Norm()), math.Max(hi, m.Norm())
+	}
+	return lo, hi
 }
 
 // kText writes a coupling coefficient to three significant figures, or

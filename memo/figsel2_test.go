@@ -146,3 +146,25 @@ func containsPrefix(ss []string, p string) bool {
 	}
 	return false
 }
+
+// TestAxisSetDirections: moments of very different sizes are drawn as
+// directions (components over each coil's |m|), so the small one shows.
+func TestAxisSetDirections(t *testing.T) {
+	src := "```coil\nname = big\nmean-diameter = 200 mm\nturns = 200\nwire = AWG 22\ncurrent = 1 A\n```\n" +
+		"```coil\nname = small\nmean-diameter = 30 mm\nturns = 10\nwire = AWG 30\naxis = x\ncentre = (300, 0, 0) mm\ncurrent = 0.1 A\n```\n"
+	j, diags := evaluate("t.md", []byte(src))
+	if len(diags) > 0 {
+		t.Fatal(diags)
+	}
+	d := Compose(j)
+	caps, texts := captions(d)
+	if !containsPrefix(caps, "Direction of each coil's moment") {
+		t.Fatalf("moments 10⁴ apart drawn on one scale: %q", caps)
+	}
+	if !strings.Contains(texts, "Moment component over |m|") {
+		t.Errorf("the ordinate is not the normalised component: %q", texts)
+	}
+	if p := prose(d); !strings.Contains(p, `"big" 6.28 A·m² along z; "small" 707 µA·m² along x`) || !strings.Contains(p, "The largest cross-coupling is |k| < 0.0001,") {
+		t.Errorf("the magnitudes are not in the text: %q", p)
+	}
+}

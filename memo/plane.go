@@ -78,11 +78,20 @@ func (c *composer) planeFigure(co calc.Coil, pm *analysis.PlaneMap) {
 		text += fmt.Sprintf(" At the probe it is %s of the centre value.", planePercent(p.Bn/pm.Centre-1))
 	}
 	c.para(text)
-	c.para(fmt.Sprintf("Figure %d maps %s of coil %q alone over that plane on a linear colour scale, with contour lines at %s of the centre value: the region inside the innermost contour is the usable one. The coil's mean turn is dashed and the probes are marked.",
-		n, bs, co.Name, levels))
+	// The tightest band drawn: the contours nearest the centre value.
+	tight := math.Inf(1)
+	for _, lv := range d.PlaneLevels() {
+		tight = math.Min(tight, math.Abs(lv/pm.Centre-1))
+	}
+	read := ""
+	if !math.IsInf(tight, 0) {
+		read = fmt.Sprintf(": inside the contours nearest the centre the field is within %s %% of its centre value", strconv.FormatFloat(math.Round(1000*tight)/10, 'f', -1, 64))
+	}
+	c.para(fmt.Sprintf("Figure %d maps %s of coil %q alone over that plane on a linear colour scale, with contour lines at %s of the centre value%s. The coil's mean turn is dashed and the probes are marked.",
+		n, bs, co.Name, levels, read))
 	// The height follows the map's proportions, as the meridian map's.
-	fh := vg.Length(118*pm.VHalf/pm.UHalf)*vg.Millimeter + 24*vg.Millimeter
-	fh = max(min(fh, 125*vg.Millimeter), 60*vg.Millimeter)
+	fh := vg.Length(100*pm.VHalf/pm.UHalf)*vg.Millimeter + 22*vg.Millimeter
+	fh = max(min(fh, 110*vg.Millimeter), 55*vg.Millimeter)
 	c.fig(doc.Figure{
 		Caption: fmt.Sprintf("%s of coil %q over %s (colour scale: viridis, van der Walt & Smith 2015, linear; white contours at the departures from the centre value marked on the colour bar; dashed: the coil's mean turn; dots: probes)", bs, co.Name, where),
 		Width:   figWidth, Height: fh, Draw: figures.PlaneMap(d),
