@@ -64,13 +64,32 @@ func planeRange(v []float64) (lo, hi float64, ok bool) {
 	return lo, hi, hi >= lo
 }
 
+// colourRange is the range of the colour scale for values from lo to hi:
+// beside a conductor the field runs far beyond the centre value, so the
+// colours stop at ±ColourSpan of Ref and the region of interest keeps its
+// shades (values beyond take the end colours); clipLo and clipHi say
+// which end was cut.
+func (d PlaneData) colourRange(lo, hi float64) (a, b float64, clipLo, clipHi bool) {
+	a, b = lo, hi
+	if r := math.Abs(d.Ref); r > 0 {
+		if v := d.Ref - ColourSpan*r; a < v {
+			a, clipLo = v, true
+		}
+		if v := d.Ref + ColourSpan*r; b > v {
+			b, clipHi = v, true
+		}
+	}
+	return a, b, clipLo, clipHi
+}
+
 // PlaneLevels returns the contour levels of d, T: Ref·(1 + s) for each
-// step s that falls strictly inside the map's range.
+// step s that falls strictly inside the map's range and its colour scale.
 func (d PlaneData) PlaneLevels() []float64 {
 	lo, hi, ok := planeRange(d.V)
 	if !ok || d.Ref == 0 {
 		return nil
 	}
+	lo, hi, _, _ = d.colourRange(lo, hi)
 	var out []float64
 	for _, s := range d.Steps {
 		v := d.Ref * (1 + s)
@@ -90,6 +109,7 @@ func drawPlaneMap(c vg.Canvas, w, h vg.Length, d PlaneData) {
 	if !ok {
 		return
 	}
+	lo, hi, clipLo, clipHi := d.colourRange(lo, hi)
 	if !(hi > lo) {
 		hi = lo + math.Max(math.Abs(lo)*1e-3, 1e-12)
 	}
@@ -142,8 +162,12 @@ func drawPlaneMap(c vg.Canvas, w, h vg.Length, d PlaneData) {
 	drawLinearBar(c, vg.Rectangle{
 		Min: vg.Point{X: da.Max.X + vg.Points(10), Y: da.Min.Y},
 		Max: vg.Point{X: da.Max.X + vg.Points(10) + vg.Length(barW)*vg.Millimeter, Y: da.Max.Y},
-	}, d, lo, hi, levels)
+	}, d, lo, hi, levels, clipLo, clipHi)
 }
+
+// ColourSpan is how far from the reference value, as a fraction of it, a
+// plane map's colour scale reaches at most.
+const ColourSpan = 1.5
 
 // planeImage renders the grid at about four pixels per node, linear in
 // the value between lo and hi; a blank node takes its nearest neighbour's
@@ -246,7 +270,7 @@ func (o *planeOverlay) Plot(c draw.Canvas, p *plot.Plot) {
 // (bottom) to hi, the contour levels as ticks labelled in their
 // departure from Ref ("+5 %"), the ends labelled in teslas and the
 // quantity above.
-func drawLinearBar(c vg.Canvas, r vg.Rectangle, d PlaneData, lo, hi float64, levels []float64) {
+func drawLinearBar(c vg.Canvas, r vg.Rectangle, d PlaneData, lo, hi float64, levels []float64, clipLo, clipHi bool) {
 	const n = 256
 	img := image.NewNRGBA(image.Rect(0, 0, 1, n))
 	for i := range n {
@@ -264,8 +288,14 @@ func drawLinearBar(c vg.Canvas, r vg.Rectangle, d PlaneData, lo, hi float64, lev
 	// The ends first, in teslas; then the levels that keep clear of them
 	// and of each other, nearest the reference first.
 	used := []vg.Length{r.Min.Y, r.Max.Y}
-	dc.FillText(sty, vg.Point{X: r.Max.X + vg.Points(3.5), Y: r.Min.Y}, engLabel(lo, "T"))
-	dc.FillText(sty, vg.Point{X: r.Max.X + vg.Points(3.5), Y: r.Max.Y}, engLabel(hi, "T"))
+	end := func(v float64, clip bool, sign string) string {
+		if clip {
+			return sign + " " + engLabel(v, "T")
+		}
+		return engLabel(v, "T")
+	}
+	dc.FillText(sty, vg.Point{X: r.Max.X + vg.Points(3.5), Y: r.Min.Y}, end(lo, clipLo, "≤"))
+	dc.FillText(sty, vg.Point{X: r.Max.X + vg.Points(3.5), Y: r.Max.Y}, end(hi, clipHi, "≥"))
 	order := append([]float64{}, levels...)
 	for i := 1; i < len(order); i++ { // by |departure|, smallest first
 		for k := i; k > 0 && math.Abs(order[k]/d.Ref-1) < math.Abs(order[k-1]/d.Ref-1); k-- {

@@ -60,3 +60,28 @@ func TestPercentLabel(t *testing.T) {
 		}
 	}
 }
+
+// Beside a conductor the value runs far beyond the reference: the colour
+// scale stops at ±ColourSpan of it, the bar says so, and no contour is
+// drawn beyond it.
+func TestPlaneMapClipsColours(t *testing.T) {
+	x := []float64{-1, 0, 1}
+	d := PlaneData{X: x, Y: x, Ref: 1, Steps: ContourSteps, Quantity: "Bz",
+		V: []float64{0.9, 1, 0.95, 1, 1, 1, 1.1, 1, 40}}
+	for _, lv := range d.PlaneLevels() {
+		if lv >= 1+ColourSpan {
+			t.Errorf("contour at %g beyond the colour scale's top %g", lv, 1+ColourSpan)
+		}
+	}
+	var c recorder.Canvas
+	PlaneMap(d)(&c, 400, 300)
+	top := false
+	for _, a := range c.Actions {
+		if fs, ok := a.(*recorder.FillString); ok && fs.String == "≥ 2.5 T" {
+			top = true
+		}
+	}
+	if !top {
+		t.Error(`the clipped top is not labelled "≥ 2.5 T"`)
+	}
+}
