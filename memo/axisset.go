@@ -28,6 +28,10 @@ func (c *composer) axisSetFigure() {
 		m := as.Moments[k]
 		names = append(names, co.Name)
 		vals = append(vals, []float64{m[0], m[1], m[2]})
+		if m.Norm() == 0 {
+			dirs = append(dirs, fmt.Sprintf("%q no net moment, its two halves opposing", co.Name))
+			continue
+		}
 		dirs = append(dirs, fmt.Sprintf("%q %s along %s", co.Name, Eng(m.Norm(), "A·m²", 3), axisName(co)))
 	}
 	lo, hi := math.Inf(1), math.Inf(-1)
@@ -130,11 +134,14 @@ func (c *composer) axisSetFigure() {
 		Header: append([]string{"k"}, names...), Rows: rows, Widths: widths, Align: align})
 }
 
-// momentSpread is the smallest and largest magnitude of the moments.
+// momentSpread is the smallest and largest magnitude of the moments that
+// are not zero (an opposing pair has none).
 func momentSpread(ms []calc.Vec) (lo, hi float64) {
 	lo, hi = math.Inf(1), 0
 	for _, m := range ms {
-		lo, hi = math.Min(lo, m.Norm()), math.Max(hi, m.Norm())
+		if n := m.Norm(); n > 0 {
+			lo, hi = math.Min(lo, n), math.Max(hi, n)
+		}
 	}
 	return lo, hi
 }
