@@ -10,6 +10,8 @@ import (
 // axis) of one rectangular coil block alone over a plane parallel to its
 // own, the plane of interest of a panel coil: the plane in which every
 // probe lies, or else the plane through the first probe (PlaneOfInterest).
+// The map covers 1.5 times the coil's sides, widened to hold the probes in
+// the plane that lie within planeReach of the axis.
 //
 // U and V are the node positions (m) along the coil frame's E1 (the
 // rectangle's width) and E2 (its height), measured from the foot of the
@@ -32,7 +34,8 @@ type PlaneMap struct {
 	VHalf    float64
 	Bn       []float64
 	Centre   float64 // T
-	Probes   []PlanePoint
+	Probes   []PlanePoint // the probes in the plane within the map's reach
+	InPlane  int          // the number of probes in the plane, all told
 	Within   []PlaneRegion
 	Min, Max float64 // T, extremes of Bn over the map's nodes
 }
@@ -61,6 +64,11 @@ var PlaneTolerances = []float64{0.01, 0.05}
 
 // planeNodes is the node count along the longer side of a plane map.
 const planeNodes = 61
+
+// planeReach bounds a plane map: probes further from the axis than this
+// many times the coil's width (or height) are not mapped, so that the map
+// stays at the coil's scale.
+const planeReach = 2.0
 
 // planeSame is how near a probe must lie to a plane to be in it, m.
 const planeSame = 1e-6
@@ -111,6 +119,10 @@ func planeMap(d calc.Design, r calc.Results, i int) *PlaneMap {
 		l := fr.ToLocal(p.At.Sub(co.Centre))
 		if math.Abs(l[2]-dist) > planeSame {
 			continue
+		}
+		pm.InPlane++
+		if math.Abs(l[0]) > planeReach*co.Width || math.Abs(l[1]) > planeReach*co.Height {
+			continue // far off: the map stays at the coil's scale
 		}
 		pm.Probes = append(pm.Probes, PlanePoint{Name: p.Name, U: l[0], V: l[1], Bn: bn(l[0], l[1]), Index: k})
 		pm.UHalf = math.Max(pm.UHalf, 1.15*math.Abs(l[0]))

@@ -151,3 +151,18 @@ func TestPlaneOfInterestRules(t *testing.T) {
 		t.Error("a plane map without probes")
 	}
 }
+
+// A probe in the plane far off the coil is counted but not mapped: the map
+// stays at the coil's scale (1.5 times its sides).
+func TestPlaneMapFarProbe(t *testing.T) {
+	j := evaluateSpec(t, panelSpec("a = (0, 0, 50) mm\nfar = (900 m, 0 mm, 50 mm)\nnear = (250 mm, 0 mm, 50 mm)\n"))
+	pm := j.Design.Planes[0]
+	if pm.InPlane != 3 || len(pm.Probes) != 2 || pm.Probes[1].Name != "near" {
+		t.Fatalf("%d in the plane, %d mapped (%+v); want 3 and 2", pm.InPlane, len(pm.Probes), pm.Probes)
+	}
+	// The near probe at 250 mm widens the map to 1.15 × 250 mm; the far
+	// one does not.
+	if math.Abs(pm.UHalf-1.15*0.25) > 1e-12 || math.Abs(pm.VHalf-0.15) > 1e-12 {
+		t.Errorf("map half-sides %g × %g m, want 0.2875 × 0.15", pm.UHalf, pm.VHalf)
+	}
+}

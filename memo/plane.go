@@ -33,16 +33,17 @@ func (c *composer) planeFigure(co calc.Coil, pm *analysis.PlaneMap) {
 	if pm.Dist == 0 {
 		where = "its own plane"
 	}
-	probes := "the probe " + fmt.Sprintf("%q", pm.Probes[0].Name)
-	if len(pm.Probes) > 1 {
-		probes = fmt.Sprintf("the %d probes", len(pm.Probes))
+	first := c.j.Spec.Design.Probes[0].Name // the plane is through it
+	probes := fmt.Sprintf("the probe %q", first)
+	if pm.InPlane > 1 {
+		probes = fmt.Sprintf("the %d probes", pm.InPlane)
 	}
 	which := "in which " + probes + " lie"
-	if len(pm.Probes) == 1 {
+	if pm.InPlane == 1 {
 		which = "in which " + probes + " lies"
 	}
 	if !pm.AllInIt {
-		which = fmt.Sprintf("through the first probe, %q (%s of the design's probes lie in it)", pm.Probes[0].Name, countWord(len(pm.Probes)))
+		which = fmt.Sprintf("through the first probe, %q (%s of the design's probes lie in it)", first, countWord(pm.InPlane))
 	}
 	levels := stepsText(d.PlaneLevels(), pm.Centre)
 	// First what the plane shows, then the lead-in (kept short, so that
@@ -73,9 +74,19 @@ func (c *composer) planeFigure(co calc.Coil, pm *analysis.PlaneMap) {
 		for _, p := range pm.Probes {
 			lo, hi = math.Min(lo, p.Bn/pm.Centre-1), math.Max(hi, p.Bn/pm.Centre-1)
 		}
-		text += fmt.Sprintf(" Over the probes it runs from %s to %s of the centre value.", planePercent(lo), planePercent(hi))
-	} else if p := pm.Probes[0]; p.U != 0 || p.V != 0 {
+		on := ""
+		if len(pm.Probes) < pm.InPlane {
+			on = " on the map"
+		}
+		text += fmt.Sprintf(" Over the probes%s it runs from %s to %s of the centre value.", on, planePercent(lo), planePercent(hi))
+	} else if len(pm.Probes) == 1 && (pm.Probes[0].U != 0 || pm.Probes[0].V != 0) {
+		p := pm.Probes[0]
 		text += fmt.Sprintf(" At the probe it is %s of the centre value.", planePercent(p.Bn/pm.Centre-1))
+	}
+	if far := pm.InPlane - len(pm.Probes); far == 1 {
+		text += " One probe in the plane lies more than twice the coil's size from its axis, beyond the map."
+	} else if far > 1 {
+		text += fmt.Sprintf(" %s probes in the plane lie more than twice the coil's size from its axis, beyond the map.", strings.ToUpper(countWord(far)[:1])+countWord(far)[1:])
 	}
 	c.para(text)
 	// The tightest band drawn: the contours nearest the centre value.
