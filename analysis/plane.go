@@ -33,7 +33,7 @@ type PlaneMap struct {
 	UHalf    float64 // m, the map's half-sides
 	VHalf    float64
 	Bn       []float64
-	Centre   float64 // T
+	Centre   float64      // T
 	Probes   []PlanePoint // the probes in the plane within the map's reach
 	InPlane  int          // the number of probes in the plane, all told
 	Within   []PlaneRegion
