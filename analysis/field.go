@@ -399,6 +399,12 @@ type DesignStudy struct {
 	// near windings that cross the plane obliquely (they are not drawn).
 	// Nil for a design of one coil block.
 	All *MapData
+	// Planes holds, by coil block, the map of a rectangle's field over
+	// its plane of interest (plane.go), nil for the others.
+	Planes []*PlaneMap
+	// Axes is the set of driven coils with axes not all parallel, their
+	// moments and couplings (axisset.go); nil for other designs.
+	Axes *AxisSet
 }
 
 func analyseDesign(d calc.Design, r calc.Results, grid int) DesignStudy {
@@ -411,6 +417,10 @@ func analyseDesign(d calc.Design, r calc.Results, grid int) DesignStudy {
 		}
 	}
 	ds.All = allCoilsMap(d, r, grid)
+	for i := range d.Coils {
+		ds.Planes = append(ds.Planes, planeMap(d, r, i))
+	}
+	ds.Axes = axisSet(d, r)
 	return ds
 }
 

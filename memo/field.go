@@ -67,9 +67,14 @@ func (c *composer) field() {
 		default:
 			c.axisFigure(co, cr, cs)
 		}
-		c.fieldMap(co, cr, cs)
+		pm := planeShown(c.j, i)
+		if pm != nil {
+			c.planeFigure(co, pm) // memo/plane.go
+		}
+		c.fieldMap(co, cr, cs, pm != nil)
 		c.dipoleDistances(co, cr)
 	}
+	c.axisSetFigure() // memo/axisset.go
 	c.allCoilsMap()
 }
 
@@ -336,8 +341,9 @@ func (c *composer) pairProfileFigure(co calc.Coil, cs *analysis.CoilStudy) {
 		Summary: fmt.Sprintf("%s on axis: %s at the centre; largest %s at %s.", bs, Eng(bp.Centre, "T", 3), Eng(math.Abs(bp.Peak), "T", 3), Eng(bp.PeakZ, "m", 3))})
 }
 
-// fieldMap adds the map of |B| over the meridian plane.
-func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) {
+// fieldMap adds the map of |B| over the meridian plane; afterPlane says a
+// plane map precedes it (memo/plane.go), and it is then drawn smaller.
+func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, afterPlane bool) {
 	m := cs.Map
 	if m == nil {
 		return // no extent to map
@@ -369,6 +375,11 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 	// 118 mm between the axis labels and the colour bar).
 	h := vg.Length(118*xHalf/zHalf)*vg.Millimeter + 24*vg.Millimeter
 	h = max(min(h, 125*vg.Millimeter), 60*vg.Millimeter)
+	if afterPlane {
+		// The plane map above is the panel's main field figure: this one
+		// takes less of the page, so that both share one.
+		h = min(h, 100*vg.Millimeter)
+	}
 	// The figure's horizontal axis is z, its vertical the radial
 	// coordinate.
 	drawMap := figures.FieldMap(figures.MapData{X: m.Z, Y: m.X, B: m.B, Sections: sections,

@@ -37,6 +37,17 @@ import (
 //     design, and the text gives its peak.
 //   - Warm-up (memo/thermal.go): not drawn when the winding warms by less
 //     than 1 K.
+//   - Plane of interest: a rectangle (a panel coil) with probes gets Bn,
+//     the flux density normal to it, mapped over the plane parallel to
+//     it in which every probe lies or, when the probes are not in one
+//     such plane, the plane through the first probe (the probes in it
+//     marked); with the uniform regions (±1 %, ±5 % of the centre value)
+//     in its text. A rectangle without probes gets none: its axis
+//     profile and meridian map already show its near field, and no other
+//     plane is named.
+//   - Coil set: two or more driven coils whose axes are not all parallel
+//     (a three-axis torquer set) get a bar chart of each coil's moment by
+//     its components and a table of their coupling coefficients.
 
 // profileKind is which on-axis figure a coil block gets.
 type profileKind int
@@ -93,6 +104,22 @@ func figuresFor(j *analysis.Study, i int) coilFigures {
 		f.Gradient = co.Opposing && cs.Axis.Bore != nil && cs.Axis.Bore.Gz != nil
 	}
 	return f
+}
+
+// planeShown is the plane map of coil block i, nil when it gets none
+// (the rules above; analysis.PlaneOfInterest finds the plane).
+func planeShown(j *analysis.Study, i int) *analysis.PlaneMap {
+	if i < len(j.Design.Planes) {
+		return j.Design.Planes[i]
+	}
+	return nil
+}
+
+// axisSetShown reports whether the design gets the coil set's moments and
+// couplings: two or more driven coils whose axes are not all parallel.
+func axisSetShown(j *analysis.Study) bool {
+	as := j.Design.Axes
+	return as != nil && len(as.Coils) >= 2
 }
 
 // torqueFigure reports whether the torque section draws |τ| against the

@@ -60,12 +60,76 @@ func (c *composer) receiver() {
 				marks = append(marks, figures.Mark{X: fsr, Label: "f_sr"})
 			}
 			n := c.figure + 1
-			c.para(fmt.Sprintf("Figure %d shows the sensitivity at the terminals against frequency.", n))
+			reading, lead := responseLeadIn(n, r, f, s)
+			if reading != "" {
+				c.para(reading)
+			}
+			c.para(lead)
 			c.fig(doc.Figure{Caption: fmt.Sprintf("Terminal sensitivity of coil %q against frequency (lumped R–L–C model)", co.Name),
 				Width: figWidth, Height: figHeight * 0.85, Draw: figures.Response(f, s, marks...),
 				Summary: fmt.Sprintf("Peak near %s.", Eng(r.SelfResonance, "Hz", 3))})
 		}
 	}
+}
+
+// responseLeadIn says what to read from the response figure n of
+// pick-up coil r (frequencies f, terminal sensitivities s): reading, the
+// band where the coil follows the induction law 2π f A_eff (within
+// 10 %), and lead, the figure's short lead-in naming the straight rise,
+// the resonance peak and where the lumped model stops.
+func responseLeadIn(n int, r *calc.ReceiverResult, f, s []float64) (reading, lead string) {
+	lead = fmt.Sprintf("Figure %d shows the sensitivity at the terminals against frequency, both on logarithmic scales.", n)
+	a := r.EffectiveArea
+	if !(a > 0) {
+		return "", lead
+	}
+	var b strings.Builder
+	// ratio is the terminal sensitivity over the induction law's.
+	ratio := func(k int) float64 { return s[k] / (2 * math.Pi * f[k] * a) }
+	edge := -1
+	for k := range f {
+		if math.Abs(ratio(k)-1) > 0.1 {
+			edge = k
+			break
+		}
+	}
+	law := fmt.Sprintf("in proportion to frequency, as the induction law 2π f A_eff gives (2π A_eff = %s per hertz)", Eng(2*math.Pi*a, "V/T", 3))
+	switch {
+	case edge < 0:
+		fmt.Fprintf(&b, "Over the whole range plotted the terminal sensitivity rises %s, within 10 %%: that is the coil's working band.", law)
+	case edge == 0:
+		fmt.Fprintf(&b, "Already at %s the terminal sensitivity departs from the induction law 2π f A_eff by more than 10 %%.", Eng(f[0], "Hz", 3))
+	default:
+		fmt.Fprintf(&b, "Up to about %s the terminal sensitivity rises %s, within 10 %%: that is the coil's working band.", Eng(f[edge-1], "Hz", 2), law)
+	}
+	if r.Frequency > 0 {
+		if edge < 0 || r.Frequency < f[max(edge-1, 0)] {
+			b.WriteString(" The design frequency lies in it.")
+		} else {
+			b.WriteString(" The design frequency lies beyond it, where the capacitance already shapes the response.")
+		}
+	}
+	pk := 0
+	for k := range s {
+		if s[k] > s[pk] {
+			pk = k
+		}
+	}
+	fsr := r.SelfResonance
+	switch {
+	case pk < len(s)-1 && pk > 0:
+		fr := ""
+		if fsr > 0 {
+			fr = fmt.Sprintf(" (f_sr = %s, dotted)", Eng(fsr, "Hz", 3))
+		}
+		lead += fmt.Sprintf(" The straight rise is the working band; the peak, %s times the induction law near %s, is the self-resonance%s. Above it the lumped R–L–C model no longer describes the winding: the curve there is a trend, not values to use.",
+			Sig(ratio(pk), 2), Eng(f[pk], "Hz", 3), fr)
+	case fsr > 0:
+		lead += fmt.Sprintf(" The straight rise is the working band; the self-resonance, %s, lies beyond the range plotted.", Eng(fsr, "Hz", 3))
+	default:
+		lead += " The straight rise is the working band."
+	}
+	return b.String(), lead
 }
 
 // pickUpText sums up a pick-up coil's figures for the section on pick-up

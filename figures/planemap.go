@@ -1,0 +1,331 @@
+package figures
+
+import (
+	"fmt"
+	"image"
+	"image/color"
+	"math"
+	"strconv"
+
+	"gonum.org/v1/plot"
+	"gonum.org/v1/plot/plotter"
+	"gonum.org/v1/plot/vg"
+	"gonum.org/v1/plot/vg/draw"
+)
+
+// PlaneData is a signed field component over a plane, for PlaneMap: a
+// panel coil's normal flux density over its plane of interest.
+type PlaneData struct {
+	X, Y []float64 // m, node positions, ascending
+	// V holds the component, T, at node (X[ix], Y[iy]) at index
+	// iy·len(X) + ix; NaN nodes are left blank.
+	V []float64
+	// Ref is the reference value (the centre's), T: the contours are at
+	// the departures Steps from it and the colour bar is marked in them.
+	Ref   float64
+	Steps []float64 // e.g. ±0.01, ±0.05 (fractions of Ref)
+	// Outline is the coil's mean turn projected on the plane, a closed
+	// polygon drawn dashed (m).
+	Outline [][2]float64
+	// Points are the probes in the plane, marked and named.
+	Points         []PlanePoint
+	XLabel, YLabel string // quantities of the axes; the unit is added
+	Quantity       string // the colour bar's title, e.g. "Bz"
+}
+
+// PlanePoint is a marked point of a PlaneMap.
+type PlanePoint struct {
+	X, Y  float64 // m
+	Label string
+}
+
+// ContourSteps are the departures from the reference value at which a
+// plane map draws contours: ±1, 2, 5, 10, 20, 50 % and +100, +200 %.
+var ContourSteps = []float64{-0.5, -0.2, -0.1, -0.05, -0.02, -0.01, 0.01, 0.02, 0.05, 0.1, 0.2, 0.5, 1, 2}
+
+// PlaneMap draws the component over the plane as a colour image (Viridis,
+// linear between the smallest and largest value of the map, bilinear
+// between the nodes), white contour lines at the departures Steps from
+// Ref, the coil's outline dashed and the probes as white dots with their
+// names, with a colour bar on the right marked in the departures and
+// labelled in teslas at its ends. Both lengths are drawn to one scale.
+func PlaneMap(d PlaneData) DrawFunc {
+	return func(c vg.Canvas, w, h vg.Length) { drawPlaneMap(c, w, h, d) }
+}
+
+// planeRange is the smallest and largest finite value of the map.
+func planeRange(v []float64) (lo, hi float64, ok bool) {
+	lo, hi = math.Inf(1), math.Inf(-1)
+	for _, x := range v {
+		if !math.IsNaN(x) && !math.IsInf(x, 0) {
+			lo, hi = math.Min(lo, x), math.Max(hi, x)
+		}
+	}
+	return lo, hi, hi >= lo
+}
+
+// colourRange is the range of the colour scale for values from lo to hi:
+// beside a conductor the field runs far beyond the centre value, so the
+// colours stop at ±ColourSpan of Ref and the region of interest keeps its
+// shades (values beyond take the end colours); clipLo and clipHi say
+// which end was cut.
+func (d PlaneData) colourRange(lo, hi float64) (a, b float64, clipLo, clipHi bool) {
+	a, b = lo, hi
+	if r := math.Abs(d.Ref); r > 0 {
+		if v := d.Ref - ColourSpan*r; a < v {
+			a, clipLo = v, true
+		}
+		if v := d.Ref + ColourSpan*r; b > v {
+			b, clipHi = v, true
+		}
+	}
+	return a, b, clipLo, clipHi
+}
+
+// PlaneLevels returns the contour levels of d, T: Ref·(1 + s) for each
+// step s that falls strictly inside the map's range and its colour scale.
+func (d PlaneData) PlaneLevels() []float64 {
+	lo, hi, ok := planeRange(d.V)
+	if !ok || d.Ref == 0 {
+		return nil
+	}
+	lo, hi, _, _ = d.colourRange(lo, hi)
+	var out []float64
+	for _, s := range d.Steps {
+		v := d.Ref * (1 + s)
+		if v > lo && v < hi {
+			out = append(out, v)
+		}
+	}
+	return out
+}
+
+func drawPlaneMap(c vg.Canvas, w, h vg.Length, d PlaneData) {
+	nx, ny := len(d.X), len(d.Y)
+	if nx < 2 || ny < 2 || len(d.V) != nx*ny {
+		return
+	}
+	lo, hi, ok := planeRange(d.V)
+	if !ok {
+		return
+	}
+	lo, hi, clipLo, clipHi := d.colourRange(lo, hi)
+	if !(hi > lo) {
+		hi = lo + math.Max(math.Abs(lo)*1e-3, 1e-12)
+	}
+	lp := EngPrefix(d.X[0], d.X[nx-1], d.Y[0], d.Y[ny-1])
+	if lp.Factor > 1 {
+		lp = Prefix{"", 1}
+	}
+	p := newAxes(d.XLabel+" ("+lp.Symbol+"m)", d.YLabel+" ("+lp.Symbol+"m)")
+	p.X.Min, p.X.Max = d.X[0]/lp.Factor, d.X[nx-1]/lp.Factor
+	p.Y.Min, p.Y.Max = d.Y[0]/lp.Factor, d.Y[ny-1]/lp.Factor
+	p.X.Padding, p.Y.Padding = 0, 0
+	p.Add(plotter.NewImage(planeImage(d, lo, hi), p.X.Min, p.Y.Min, p.X.Max, p.Y.Max))
+	levels := d.PlaneLevels()
+	p.Add(&planeOverlay{d: d, levels: levels, scale: lp.Factor})
+
+	const barW = 4.5 // mm
+	barRoom := vg.Length(barW)*vg.Millimeter + vg.Points(44)
+	dc := draw.Canvas{Canvas: c, Rectangle: vg.Rectangle{Max: vg.Point{X: w, Y: h}}}
+	dc = draw.Crop(dc, vg.Points(1), -vg.Points(6)-barRoom, vg.Points(1), -vg.Points(14))
+	ylabel, ysty := p.Y.Label.Text, p.Y.Label.TextStyle
+	lw := ysty.Height(ylabel) + ysty.FontExtents().Descent + p.Y.Label.Padding
+	p.Y.Label.Text = ""
+	dc = draw.Crop(dc, lw, 0, 0, 0)
+	for range 3 {
+		da := p.DataCanvas(dc)
+		sx := da.Size().X / vg.Length(p.X.Max-p.X.Min)
+		sy := da.Size().Y / vg.Length(p.Y.Max-p.Y.Min)
+		switch {
+		case sx > sy*1.0005:
+			cut := da.Size().X - sy*vg.Length(p.X.Max-p.X.Min)
+			dc = draw.Crop(dc, cut/2, -cut/2, 0, 0)
+		case sy > sx*1.0005:
+			cut := da.Size().Y - sx*vg.Length(p.Y.Max-p.Y.Min)
+			dc = draw.Crop(dc, 0, 0, cut/2, -cut/2)
+		}
+	}
+	p.Draw(dc)
+	da := p.DataCanvas(dc)
+	ysty.Rotation = math.Pi / 2
+	ysty.XAlign = draw.XCenter
+	ysty.YAlign = draw.YBottom
+	var tickW vg.Length
+	for _, tk := range p.Y.Tick.Marker.Ticks(p.Y.Min, p.Y.Max) {
+		if tk.Label != "" {
+			tickW = max(tickW, p.Y.Tick.Label.Width(tk.Label))
+		}
+	}
+	lx := da.Min.X - tickW - p.Y.Tick.Length - p.Y.Label.Padding - ysty.FontExtents().Descent
+	dc.FillText(ysty, vg.Point{X: lx, Y: da.Center().Y}, ylabel)
+	drawLinearBar(c, vg.Rectangle{
+		Min: vg.Point{X: da.Max.X + vg.Points(10), Y: da.Min.Y},
+		Max: vg.Point{X: da.Max.X + vg.Points(10) + vg.Length(barW)*vg.Millimeter, Y: da.Max.Y},
+	}, d, lo, hi, levels, clipLo, clipHi)
+}
+
+// ColourSpan is how far from the reference value, as a fraction of it, a
+// plane map's colour scale reaches at most.
+const ColourSpan = 1.5
+
+// planeImage renders the grid at about four pixels per node, linear in
+// the value between lo and hi; a blank node takes its nearest neighbour's
+// colour next to valued ones, else white.
+func planeImage(d PlaneData, lo, hi float64) image.Image {
+	nx, ny := len(d.X), len(d.Y)
+	f := max(1, min(4, 600/max(nx, ny)))
+	W, H := (nx-1)*f+1, (ny-1)*f+1
+	img := image.NewNRGBA(image.Rect(0, 0, W, H))
+	for py := range H {
+		gy := float64(H-1-py) / float64(f)
+		iy := min(int(gy), ny-2)
+		ty := gy - float64(iy)
+		for px := range W {
+			gx := float64(px) / float64(f)
+			ix := min(int(gx), nx-2)
+			tx := gx - float64(ix)
+			a, b := d.V[iy*nx+ix], d.V[iy*nx+ix+1]
+			cc, dd := d.V[(iy+1)*nx+ix], d.V[(iy+1)*nx+ix+1]
+			v := (1-ty)*((1-tx)*a+tx*b) + ty*((1-tx)*cc+tx*dd)
+			if math.IsNaN(v) {
+				jx, jy := ix+int(math.Round(tx)), iy+int(math.Round(ty))
+				v = d.V[jy*nx+jx]
+			}
+			if math.IsNaN(v) {
+				img.SetNRGBA(px, py, color.NRGBA{R: 0xff, G: 0xff, B: 0xff, A: 0xff})
+				continue
+			}
+			img.SetNRGBA(px, py, Viridis((v-lo)/(hi-lo)))
+		}
+	}
+	return img
+}
+
+// PlaneContours returns the contour polylines of d at level (T), by the
+// marching squares of Contour on the linear value.
+func PlaneContours(d PlaneData, level float64) [][][2]float64 {
+	// contourLog contours its grid minus log10 of the level it is given:
+	// handing it the values themselves and 10^level contours them at level.
+	return contourLog(d.X, d.Y, d.V, math.Pow(10, level))
+}
+
+// planeOverlay draws a plane map's contours, outline and probes.
+type planeOverlay struct {
+	d      PlaneData
+	levels []float64
+	scale  float64
+}
+
+func (o *planeOverlay) Plot(c draw.Canvas, p *plot.Plot) {
+	trX, trY := p.Transforms(&c)
+	pt := func(q [2]float64) vg.Point { return vg.Point{X: trX(q[0] / o.scale), Y: trY(q[1] / o.scale)} }
+	ls := draw.LineStyle{Color: contourInk, Width: vg.Points(0.5)}
+	for _, lv := range o.levels {
+		for _, line := range PlaneContours(o.d, lv) {
+			pts := make([]vg.Point, len(line))
+			for i, q := range line {
+				pts[i] = pt(q)
+			}
+			c.StrokeLines(ls, pts)
+		}
+	}
+	if n := len(o.d.Outline); n > 1 {
+		pts := make([]vg.Point, 0, n+1)
+		for _, q := range o.d.Outline {
+			pts = append(pts, pt(q))
+		}
+		pts = append(pts, pts[0])
+		c.StrokeLines(draw.LineStyle{Color: Copper, Width: vg.Points(1.1), Dashes: Dashed}, pts)
+	}
+	sty := style(markLabelSize, Ink)
+	sty.XAlign, sty.YAlign = draw.XLeft, draw.YBottom
+	for _, q := range o.d.Points {
+		a := pt([2]float64{q.X, q.Y})
+		var path vg.Path
+		r := vg.Points(2.2)
+		path.Move(vg.Point{X: a.X + r, Y: a.Y})
+		path.Arc(a, r, 0, 2*math.Pi)
+		path.Close()
+		c.SetColor(color.White)
+		c.Fill(path)
+		c.SetColor(Ink)
+		c.SetLineWidth(vg.Points(0.6))
+		c.SetLineDash(nil, 0)
+		c.Stroke(path)
+		if q.Label != "" {
+			at := vg.Point{X: a.X + vg.Points(3), Y: a.Y + vg.Points(2)}
+			// A white backing keeps the name legible over any colour.
+			wd, ht := sty.Width(q.Label), sty.Height(q.Label)
+			bg := vg.Rectangle{Min: vg.Point{X: at.X - vg.Points(0.8), Y: at.Y - vg.Points(0.5)},
+				Max: vg.Point{X: at.X + wd + vg.Points(0.8), Y: at.Y + ht}}
+			c.SetColor(color.NRGBA{R: 0xff, G: 0xff, B: 0xff, A: 0xd0})
+			c.Fill(bg.Path())
+			c.FillText(sty, at, q.Label)
+		}
+	}
+}
+
+// drawLinearBar draws a plane map's colour bar in r: the gradient from lo
+// (bottom) to hi, the contour levels as ticks labelled in their
+// departure from Ref ("+5 %"), the ends labelled in teslas and the
+// quantity above.
+func drawLinearBar(c vg.Canvas, r vg.Rectangle, d PlaneData, lo, hi float64, levels []float64, clipLo, clipHi bool) {
+	const n = 256
+	img := image.NewNRGBA(image.Rect(0, 0, 1, n))
+	for i := range n {
+		img.SetNRGBA(0, n-1-i, Viridis(float64(i)/(n-1)))
+	}
+	c.DrawImage(r, img)
+	dc := draw.Canvas{Canvas: c, Rectangle: r}
+	edge := draw.LineStyle{Color: Muted, Width: ThinWidth}
+	dc.StrokeLines(edge, []vg.Point{r.Min, {X: r.Max.X, Y: r.Min.Y}, r.Max, {X: r.Min.X, Y: r.Max.Y}, r.Min})
+	yOf := func(v float64) vg.Length { return r.Min.Y + (r.Max.Y-r.Min.Y)*vg.Length((v-lo)/(hi-lo)) }
+	sty := style(TickSize, Muted)
+	sty.YAlign = draw.YCenter
+	minGap := sty.Height("0") * 1.15
+	tick := draw.LineStyle{Color: Ink, Width: vg.Points(0.5)}
+	// The ends first, in teslas; then the levels that keep clear of them
+	// and of each other, nearest the reference first.
+	used := []vg.Length{r.Min.Y, r.Max.Y}
+	end := func(v float64, clip bool, sign string) string {
+		if clip {
+			return sign + " " + engLabel(v, "T")
+		}
+		return engLabel(v, "T")
+	}
+	dc.FillText(sty, vg.Point{X: r.Max.X + vg.Points(3.5), Y: r.Min.Y}, end(lo, clipLo, "≤"))
+	dc.FillText(sty, vg.Point{X: r.Max.X + vg.Points(3.5), Y: r.Max.Y}, end(hi, clipHi, "≥"))
+	order := append([]float64{}, levels...)
+	for i := 1; i < len(order); i++ { // by |departure|, smallest first
+		for k := i; k > 0 && math.Abs(order[k]/d.Ref-1) < math.Abs(order[k-1]/d.Ref-1); k-- {
+			order[k], order[k-1] = order[k-1], order[k]
+		}
+	}
+	for _, v := range order {
+		y := yOf(v)
+		dc.StrokeLine2(tick, r.Min.X, y, r.Max.X+vg.Points(2), y)
+		clear := true
+		for _, u := range used {
+			if math.Abs(float64(y-u)) < float64(minGap) {
+				clear = false
+			}
+		}
+		if clear {
+			dc.FillText(sty, vg.Point{X: r.Max.X + vg.Points(3.5), Y: y}, percentLabel(v/d.Ref-1))
+			used = append(used, y)
+		}
+	}
+	title := style(LabelSize, Ink)
+	title.XAlign = draw.XCenter
+	dc.FillText(title, vg.Point{X: (r.Min.X + r.Max.X) / 2, Y: r.Max.Y + vg.Points(4)}, d.Quantity)
+}
+
+// percentLabel writes a departure as a signed percentage: "+5 %", "−1 %".
+func percentLabel(f float64) string {
+	s := strconv.FormatFloat(math.Round(f*1000)/10, 'f', -1, 64)
+	if f > 0 {
+		return fmt.Sprintf("+%s %%", s)
+	}
+	return fmt.Sprintf("−%s %%", s[1:])
+}
