@@ -124,7 +124,7 @@ func radialBuildFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d
 		used := float64(w.LayerCount) * co.Wire.Outer
 		if used < 0.95*co.RadialBuild {
 			out = append(out, validity{what: "Radial build", flagged: true, text: fmt.Sprintf(
-				"the %d turns lie in %d layers %s deep, less than the stated radial build of %s; the turns' mean radius is %s against the stated %s. All results use the turns as laid out; state the radial build the coil will really have, or the turns that fill it.",
+				"the %d turns lie in %d layers %s deep, less than the stated radial build of %s; the turns' mean radius is %s against the stated %s. All results use the turns as laid out; a coil wound to fill the stated build would have more turns or a larger mean radius than these results assume.",
 				co.Turns, w.LayerCount, Eng(used, "m", 3), Eng(co.RadialBuild, "m", 3), Eng(cs.MeanRadius, "m", 4), Eng(R, "m", 4))})
 		}
 	}
@@ -137,7 +137,7 @@ func wireBuildFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d c
 
 	if co.Wire.OuterEstimated {
 		out = append(out, validity{what: "Wire build", flagged: true, text: fmt.Sprintf(
-			"the wire's overall diameter (%s over %s bare) is an estimate for heavy-build enamelled wire. The winding's length, layers, surface and so its temperature follow from it; state wire-outer-diameter from the wire maker's data sheet.",
+			"the wire's overall diameter (%s over %s bare) is an estimate for heavy-build enamelled wire. The winding's length, layers, surface and so its temperature follow from it; the wire maker's data sheet value would replace the estimate.",
 			Eng(co.Wire.Outer, "m", 3), Eng(co.Wire.Bare, "m", 3))})
 	}
 	return out
@@ -207,7 +207,7 @@ func driveFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.
 		out = append(out, v)
 	case cr.TimeConstant > 0 && !math.IsInf(cr.TimeConstant, 0):
 		out = append(out, validity{what: "Direct current", text: fmt.Sprintf(
-			"the results are steady d.c. values. After switch-on the current rises with the time constant $\\tau = L/R$ = %s and is within 1 %% of its final value after $4.6\\,\\tau$ = %s; faster switching or an a.c. drive (give frequency) changes current, field and heating.",
+			"the results are steady d.c. values. After switch-on the current rises with the time constant $\\tau = L/R$ = %s and is within 1 %% of its final value after $4.6\\,\\tau$ = %s; faster switching or an a.c. drive changes current, field and heating.",
 			Eng(cr.TimeConstant, "s", 3), Eng(4.6*cr.TimeConstant, "s", 3))})
 	default:
 		out = append(out, validity{what: "Direct current", text: templates.Text("assume-dc", nil)})

@@ -232,7 +232,7 @@ func suppressionText(co calc.Coil, cr calc.CoilResult) string {
 	if s.SwitchOff > 0 {
 		fmt.Fprintf(&b, "Unsuppressed, a switch opening in %s would see about %s. ", Eng(s.SwitchOff, "s", 3), Eng(worstSpike(s), "V", 3))
 	} else {
-		b.WriteString("No switch-off time is stated (switch-off), so the unsuppressed spike is not estimated; it is L·I/t for a switch opening in t. ")
+		b.WriteString("No switch-off time is stated, so the unsuppressed spike is not estimated; it is L·I/t for a switch opening in t. ")
 	}
 	fmt.Fprintf(&b, "Suggested suppression: a freewheeling diode across the coil rated for at least %s continuous, which keeps the switch near the %s supply and lets the current decay to 10 %% in %s",
 		Eng(math.Max(math.Abs(cr.Current), math.Abs(s.WorstCurrent)), "A", 3), Eng(s.Supply, "V", 3), Eng(s.DiodeTime10, "s", 3))
@@ -241,7 +241,7 @@ func suppressionText(co calc.Coil, cr calc.CoilResult) string {
 		fmt.Fprintf(&b, "; where a faster release matters, a resistor of at most %s in series with the diode shortens the decay to %s while keeping the switch within %s (the diode drop of about 0.7 V is neglected).",
 			Eng(s.Resistor, "Ω", 3), Eng(s.ResistorTime10, "s", 3), Eng(s.Clamp, "V", 3))
 	case math.IsNaN(s.Clamp):
-		b.WriteString(". A resistor in series with the diode would speed the decay; state the driver's voltage rating (driver-rating) to size it.")
+		b.WriteString(". A resistor in series with the diode would speed the decay; it is sized from the voltage the driver withstands, which is not given, so it is not sized here.")
 	default:
 		b.WriteString(".")
 	}
@@ -448,7 +448,7 @@ func switchOffCaution(f analysis.Finding, cr calc.CoilResult, name string) doc.C
 		Eng(math.Max(math.Abs(cr.Current), math.Abs(s.WorstCurrent)), "A", 3), Eng(s.Supply, "V", 3), Eng(s.DiodeTime10, "s", 3))
 	resistor := ""
 	if math.IsNaN(s.Clamp) {
-		resistor = "A resistor in series with the diode speeds the decay; state the driver's voltage rating to size it."
+		resistor = "A resistor in series with the diode speeds the decay; it is sized from the voltage the driver withstands, which is not given."
 	}
 	if !math.IsNaN(s.Resistor) {
 		resistor = fmt.Sprintf("For a faster release, a resistor of at most %s in series with the diode keeps the switch within %s and shortens the decay to %s.",

@@ -19,7 +19,7 @@ func (c *composer) record() {
 		date += " (the memo's date)"
 	}
 	if !c.j.Dated {
-		date = "not stated (give the memo a date, or set SOURCE_DATE_EPOCH)"
+		date = "not stated"
 	}
 	rows := [][]doc.Cell{
 		{{Text: "Spec file"}, {Text: filepath.Base(s.File)}},

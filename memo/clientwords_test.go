@@ -1,0 +1,40 @@
+package memo
+
+import (
+	"bytes"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"coilmemo/doc"
+)
+
+// The memo speaks to its client: no remark in it tells the spec's author
+// which key to add (those go to the terminal). Checked over every example
+// and figure-test design.
+func TestNoRemarksToTheAuthor(t *testing.T) {
+	files, _ := filepath.Glob("../examples/*.md")
+	more, _ := filepath.Glob("../testdata/figures/*.md")
+	files = append(files, more...)
+	for _, f := range files {
+		src, err := os.ReadFile(f)
+		if err != nil {
+			t.Fatal(err)
+		}
+		j, diags := evaluate(filepath.Base(f), src)
+		if len(diags) > 0 {
+			continue // a spec that needs its previous revision's file
+		}
+		var buf bytes.Buffer
+		if err := doc.WriteText(&buf, Document(j)); err != nil {
+			t.Fatal(err)
+		}
+		text := buf.String()
+		for _, p := range []string{"(give ", "state the ", "State the ", "(switch-off)", "(driver-rating)", "state wire-", "SOURCE_DATE_EPOCH"} {
+			if i := strings.Index(text, p); i >= 0 {
+				t.Errorf("%s: %q in the memo: …%s…", filepath.Base(f), p, text[max(0, i-60):min(len(text), i+60)])
+			}
+		}
+	}
+}
