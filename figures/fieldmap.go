@@ -10,6 +10,7 @@ import (
 
 	"gonum.org/v1/plot"
 	"gonum.org/v1/plot/plotter"
+	"gonum.org/v1/plot/text"
 	"gonum.org/v1/plot/vg"
 	"gonum.org/v1/plot/vg/draw"
 )
@@ -199,33 +200,7 @@ func drawFieldMap(c vg.Canvas, w, h vg.Length, d MapData) {
 	p.Add(&contourPlot{d: d, logv: logv, levels: sc.Levels, scale: lp.Factor})
 	p.Add(&sectionPlot{sections: d.Sections, scale: lp.Factor})
 
-	// Room for the colour bar on the right.
-	const barW = 4.5 // mm
-	barRoom := vg.Length(barW)*vg.Millimeter + vg.Points(44)
-	dc := draw.Canvas{Canvas: c, Rectangle: vg.Rectangle{Max: vg.Point{X: w, Y: h}}}
-	dc = draw.Crop(dc, vg.Points(1), -vg.Points(6)-barRoom, vg.Points(1), -vg.Points(14))
-	// The y-axis label is set here, as in drawer: gonum/plot keeps room
-	// for it about the axis's midpoint, which on a flat map (a long
-	// solenoid's) would squeeze the data area to a sliver.
-	ylabel, ysty := p.Y.Label.Text, p.Y.Label.TextStyle
-	lw := ysty.Height(ylabel) + ysty.FontExtents().Descent + p.Y.Label.Padding
-	p.Y.Label.Text = ""
-	dc = draw.Crop(dc, lw, 0, 0, 0)
-	// Equal scales: shrink the plot's canvas in the direction with room to
-	// spare, keeping it centred.
-	for range 3 {
-		da := p.DataCanvas(dc)
-		sx := da.Size().X / vg.Length(p.X.Max-p.X.Min)
-		sy := da.Size().Y / vg.Length(p.Y.Max-p.Y.Min)
-		switch {
-		case sx > sy*1.0005:
-			cut := da.Size().X - sy*vg.Length(p.X.Max-p.X.Min)
-			dc = draw.Crop(dc, cut/2, -cut/2, 0, 0)
-		case sy > sx*1.0005:
-			cut := da.Size().Y - sx*vg.Length(p.Y.Max-p.Y.Min)
-			dc = draw.Crop(dc, 0, 0, cut/2, -cut/2)
-		}
-	}
+	dc, ylabel, ysty := mapCanvas(c, w, h, p)
 	p.Draw(dc)
 	da := p.DataCanvas(dc)
 	p.Y.Label.Text = ylabel
@@ -570,4 +545,38 @@ func engLabel(v float64, unit string) string {
 	p := EngPrefix(v)
 	s := strconv.FormatFloat(v/p.Factor, 'g', 3, 64)
 	return fmt.Sprintf("%s %s%s", s, p.Symbol, unit)
+}
+
+// barW is the width of a map's colour bar, mm.
+const barW = 4.5
+
+// mapCanvas is the canvas a map plot p draws on within w × h: room for a
+// colour bar on the right, for the y-axis label (set by the caller, as
+// gonum/plot keeps room for it about the axis's midpoint, which on a flat
+// map — a long solenoid's — would squeeze the data area to a sliver), and
+// equal horizontal and vertical scales, the canvas shrunk in the direction
+// with room to spare and kept centred. It returns the y label's text and
+// style, cleared from p.
+func mapCanvas(c vg.Canvas, w, h vg.Length, p *plot.Plot) (draw.Canvas, string, text.Style) {
+	barRoom := vg.Length(barW)*vg.Millimeter + vg.Points(44)
+	dc := draw.Canvas{Canvas: c, Rectangle: vg.Rectangle{Max: vg.Point{X: w, Y: h}}}
+	dc = draw.Crop(dc, vg.Points(1), -vg.Points(6)-barRoom, vg.Points(1), -vg.Points(14))
+	ylabel, ysty := p.Y.Label.Text, p.Y.Label.TextStyle
+	lw := ysty.Height(ylabel) + ysty.FontExtents().Descent + p.Y.Label.Padding
+	p.Y.Label.Text = ""
+	dc = draw.Crop(dc, lw, 0, 0, 0)
+	for range 3 {
+		da := p.DataCanvas(dc)
+		sx := da.Size().X / vg.Length(p.X.Max-p.X.Min)
+		sy := da.Size().Y / vg.Length(p.Y.Max-p.Y.Min)
+		switch {
+		case sx > sy*1.0005:
+			cut := da.Size().X - sy*vg.Length(p.X.Max-p.X.Min)
+			dc = draw.Crop(dc, cut/2, -cut/2, 0, 0)
+		case sy > sx*1.0005:
+			cut := da.Size().Y - sx*vg.Length(p.Y.Max-p.Y.Min)
+			dc = draw.Crop(dc, 0, 0, cut/2, -cut/2)
+		}
+	}
+	return dc, ylabel, ysty
 }

@@ -125,27 +125,7 @@ func drawPlaneMap(c vg.Canvas, w, h vg.Length, d PlaneData) {
 	levels := d.PlaneLevels()
 	p.Add(&planeOverlay{d: d, levels: levels, scale: lp.Factor})
 
-	const barW = 4.5 // mm
-	barRoom := vg.Length(barW)*vg.Millimeter + vg.Points(44)
-	dc := draw.Canvas{Canvas: c, Rectangle: vg.Rectangle{Max: vg.Point{X: w, Y: h}}}
-	dc = draw.Crop(dc, vg.Points(1), -vg.Points(6)-barRoom, vg.Points(1), -vg.Points(14))
-	ylabel, ysty := p.Y.Label.Text, p.Y.Label.TextStyle
-	lw := ysty.Height(ylabel) + ysty.FontExtents().Descent + p.Y.Label.Padding
-	p.Y.Label.Text = ""
-	dc = draw.Crop(dc, lw, 0, 0, 0)
-	for range 3 {
-		da := p.DataCanvas(dc)
-		sx := da.Size().X / vg.Length(p.X.Max-p.X.Min)
-		sy := da.Size().Y / vg.Length(p.Y.Max-p.Y.Min)
-		switch {
-		case sx > sy*1.0005:
-			cut := da.Size().X - sy*vg.Length(p.X.Max-p.X.Min)
-			dc = draw.Crop(dc, cut/2, -cut/2, 0, 0)
-		case sy > sx*1.0005:
-			cut := da.Size().Y - sx*vg.Length(p.Y.Max-p.Y.Min)
-			dc = draw.Crop(dc, 0, 0, cut/2, -cut/2)
-		}
-	}
+	dc, ylabel, ysty := mapCanvas(c, w, h, p)
 	p.Draw(dc)
 	da := p.DataCanvas(dc)
 	ysty.Rotation = math.Pi / 2
