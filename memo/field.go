@@ -259,11 +259,7 @@ func (c *composer) boreFigure(co calc.Coil, cs *analysis.CoilStudy, i int) {
 	d := figures.ProfileData{Axis: axisName(co), Z: bp.Z, Y: bp.Bz, YName: "Axial flux density " + bs, Unit: "T",
 		Marks: []figures.Mark{{X: bp.Ends[0], Label: "end"}, {X: bp.Ends[len(bp.Ends)-1], Label: "end"}}}
 	caption := fmt.Sprintf("Axial flux density %s along the bore of coil %q (exact field; dotted: the winding's ends)", bs, co.Name)
-	if req, ok := c.centreRequirement(i); ok {
-		d.Levels = append(d.Levels, figures.Level{Y: math.Copysign(req.Limit.Required, bp.Centre), Label: "required " + relText(req.Limit) + " " + Eng(req.Limit.Required, "T", 3)})
-		caption += "; dashed: the required centre field"
-		text += fmt.Sprintf(" The required centre field (dashed) is %s.", map[bool]string{true: "met", false: "not met"}[req.Pass])
-	}
+	caption, text = c.drawCentreRequirement(i, bp.Centre, &d, caption, text)
 	c.para(text)
 	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight * 0.85, Draw: figures.Profile(d),
 		Summary: fmt.Sprintf("%s on axis: %s at the centre, within 1 %% over ±%s.", bs, Eng(bp.Centre, "T", 3), Eng(bp.Flat, "m", 3))})
@@ -285,14 +281,24 @@ func (c *composer) nearFigure(co calc.Coil, cs *analysis.CoilStudy, i int) {
 	d := figures.ProfileData{Axis: axisName(co), Z: bp.Z, Y: bp.Bz, YName: "Axial flux density " + bs, Unit: "T",
 		Marks: []figures.Mark{{X: 0, Label: "coil plane"}}}
 	caption := fmt.Sprintf("Axial flux density %s along the axis of coil %q (exact field; dotted: the coil's plane)", bs, co.Name)
-	if req, ok := c.centreRequirement(i); ok {
-		d.Levels = append(d.Levels, figures.Level{Y: math.Copysign(req.Limit.Required, bp.Centre), Label: "required " + relText(req.Limit) + " " + Eng(req.Limit.Required, "T", 3)})
-		caption += "; dashed: the required centre field"
-		text += fmt.Sprintf(" The required centre field (dashed) is %s.", map[bool]string{true: "met", false: "not met"}[req.Pass])
-	}
+	caption, text = c.drawCentreRequirement(i, bp.Centre, &d, caption, text)
 	c.para(text)
 	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight * 0.8, Draw: figures.Profile(d),
 		Summary: fmt.Sprintf("%s on axis: %s at the centre, half of it at ±%s.", bs, Eng(bp.Centre, "T", 3), Eng(bp.Half, "m", 3))})
+}
+
+// drawCentreRequirement adds coil block i's centre-field requirement, if
+// it has one, to a profile figure d (a dashed level with the sign of the
+// centre field) and says in the caption and the text whether it is met.
+func (c *composer) drawCentreRequirement(i int, centre float64, d *figures.ProfileData, caption, text string) (string, string) {
+	req, ok := c.centreRequirement(i)
+	if !ok {
+		return caption, text
+	}
+	d.Levels = append(d.Levels, figures.Level{Y: math.Copysign(req.Limit.Required, centre), Label: "required " + relText(req.Limit) + " " + Eng(req.Limit.Required, "T", 3)})
+	caption += "; dashed: the required centre field"
+	text += fmt.Sprintf(" The required centre field (dashed) is %s.", map[bool]string{true: "met", false: "not met"}[req.Pass])
+	return caption, text
 }
 
 // centreRequirement finds the centre-field requirement that applies to
