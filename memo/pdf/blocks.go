@@ -149,10 +149,15 @@ const leadInLines = 5
 // lead-in, the lead-in and the figure (shrunk as far as figure allows).
 func (r *renderer) keepAfterHeading(next doc.Block, after []doc.Block) float64 {
 	if p, ok := next.(doc.Paragraph); ok && len(after) > 0 {
-		if f, ok := after[0].(doc.Figure); ok {
-			n := len(layoutSpans(p.Spans, styBody, r.w, r.w))
-			if n <= leadInLines {
-				return float64(n)*leadBody + 6.5 + 8 + r.leastFigure(f)
+		n := len(layoutSpans(p.Spans, styBody, r.w, r.w))
+		if n <= leadInLines {
+			switch b := after[0].(type) {
+			case doc.Figure:
+				return float64(n)*leadBody + 6.5 + 8 + r.leastFigure(b)
+			case doc.Table:
+				// A heading, its short introduction and the start of the
+				// table it introduces (a section such as Verification).
+				return float64(n)*leadBody + 6.5 + r.minHeight(b)
 			}
 		}
 	}
@@ -189,12 +194,7 @@ func (r *renderer) minHeight(b doc.Block) float64 {
 	case doc.List:
 		return 2 * leadBody
 	case doc.Table:
-		tl := r.layoutTable(b, 0)
-		h := tl.capH + tl.headH
-		if len(tl.rowH) > 0 {
-			h += tl.rowH[0]
-		}
-		return h
+		return 8 + tableStart(r.layoutTable(b, 0))
 	case doc.Figure:
 		fl := r.layoutFigure(b)
 		return fl.total
@@ -691,16 +691,7 @@ func (r *renderer) table(t doc.Table) {
 		r.flowLines(tl.cap, styCaption, 8, 3)
 		tl.cap, tl.capH = nil, 0
 	}
-	// the caption, the header and the first row (or the first lines of a
-	// row too tall for a page) stay together
-	first := tl.capH + tl.headH
-	if len(tl.rowH) > 0 {
-		first += min(tl.rowH[0], 3*leadTable+2*cellPadY)
-	}
-	if len(tl.rowH) > 1 && tl.rowH[0]+tl.rowH[1] < (bodyBottom-bodyTop)/4 {
-		first += tl.rowH[1] // no table starts with a single row at a page foot
-	}
-	r.need(8, first)
+	r.need(8, tableStart(tl))
 	y := r.y
 	for _, l := range tl.cap {
 		r.drawLine(l, r.x, y+baselineOffset(sizeCaption, leadCaption))
@@ -1012,6 +1003,21 @@ func (r *renderer) layoutFigure(f doc.Figure) figureLayout {
 func (r *renderer) leastFigure(f doc.Figure) float64 {
 	fl := r.layoutFigure(f)
 	return minFigureScale*fl.h + (fl.total - fl.h)
+}
+
+// tableStart is the height of a table's start that stays together: the
+// caption, the header and the first row (or the first lines of a row too
+// tall for a page), and the second row too when both are short, so that
+// no table starts with a single row at a page foot.
+func tableStart(tl *tableLayout) float64 {
+	first := tl.capH + tl.headH
+	if len(tl.rowH) > 0 {
+		first += min(tl.rowH[0], 3*leadTable+2*cellPadY)
+	}
+	if len(tl.rowH) > 1 && tl.rowH[0]+tl.rowH[1] < (bodyBottom-bodyTop)/4 {
+		first += tl.rowH[1]
+	}
+	return first
 }
 
 // minFigureScale is how far a figure may shrink to fit the rest of a page
