@@ -124,6 +124,10 @@ type Cooling struct {
 type Conditions struct {
 	Ambient         float64 // K
 	BackgroundField Vec     // T, e.g. geomagnetic field in orbit
+	// BackgroundMagnitudeOnly is set when the field was stated as a
+	// magnitude: it is then held along x, and its direction against the
+	// moment is the design angle's business, not a result.
+	BackgroundMagnitudeOnly bool
 	// DesignAngle is the angle between the moment and the background field
 	// at which torque is reported, rad; the worst case (π/2) when not given.
 	DesignAngle float64

@@ -38,3 +38,24 @@ func TestNoRemarksToTheAuthor(t *testing.T) {
 		}
 	}
 }
+
+// A background field given as a magnitude has no direction: the memo
+// gives no torque vector for it, and gives one for a field stated as a
+// vector.
+func TestTorqueVectorOnlyForAStatedDirection(t *testing.T) {
+	coil := "```coil\nname = x\nform = loop\nmean-diameter = 100 mm\nturns = 50\nwire = AWG 26\ncurrent = 0.2 A\naxis = x\n```\n"
+	text := func(field string) string {
+		j := mustEvaluate(t, coil+"```conditions\nbackground-field = "+field+"\n```\n")
+		var buf bytes.Buffer
+		if err := doc.WriteText(&buf, Document(j)); err != nil {
+			t.Fatal(err)
+		}
+		return buf.String()
+	}
+	if s := text("50 uT"); strings.Contains(s, "As designed, τ =") || !strings.Contains(s, "stated as a magnitude") {
+		t.Error("a magnitude field got a torque vector")
+	}
+	if s := text("(0, 0, 50) uT"); !strings.Contains(s, "As designed, τ =") {
+		t.Error("a vector field got no torque vector")
+	}
+}

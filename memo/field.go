@@ -589,6 +589,16 @@ const (
 	figHeight = 85 * vg.Millimeter
 )
 
+// asDesigned is the torque vector with the field as stated, or, for a
+// field stated as a magnitude (whose direction is not known), what stands
+// in its place.
+func asDesigned(cond calc.Conditions, t calc.Vec) string {
+	if cond.BackgroundMagnitudeOnly {
+		return "The field is stated as a magnitude, so its direction against the moment is the design angle's; no torque vector is given."
+	}
+	return fmt.Sprintf("As designed, τ = (%s, %s, %s).", Eng(t[0], "N·m", 3), Eng(t[1], "N·m", 3), Eng(t[2], "N·m", 3))
+}
+
 // torque reports τ = m × B in the background field.
 func (c *composer) torque() {
 	d := c.j.Spec.Design
@@ -599,12 +609,12 @@ func (c *composer) torque() {
 	}
 	c.heading(1, "Torque in the background field")
 	c.para(templates.Text("torque", map[string]string{
-		"B":      Eng(Bb.Norm(), "T", 3),
-		"M":      Eng(r.Moment.Norm(), "A·m²", 4),
-		"Max":    Eng(r.TorqueMax, "N·m", 4),
-		"Angle":  Sig(d.Conditions.DesignAngle*180/math.Pi, 3),
-		"Design": Eng(r.TorqueDesign, "N·m", 4),
-		"Tx":     Eng(r.Torque[0], "N·m", 3), "Ty": Eng(r.Torque[1], "N·m", 3), "Tz": Eng(r.Torque[2], "N·m", 3),
+		"B":          Eng(Bb.Norm(), "T", 3),
+		"M":          Eng(r.Moment.Norm(), "A·m²", 4),
+		"Max":        Eng(r.TorqueMax, "N·m", 4),
+		"Angle":      Sig(d.Conditions.DesignAngle*180/math.Pi, 3),
+		"Design":     Eng(r.TorqueDesign, "N·m", 4),
+		"AsDesigned": asDesigned(d.Conditions, r.Torque),
 	}))
 	if !torqueFigure(c.j) {
 		// Not a moment design: the sine is the same for every coil, so the

@@ -47,6 +47,7 @@ func (p *parser) conditionsBlock(b *rawBlock) {
 				p.errf(e.line, "background-field: %v", err)
 			} else {
 				cond.BackgroundField = v
+				cond.BackgroundMagnitudeOnly = !strings.HasPrefix(strings.TrimSpace(e.value), "(")
 				si = formatVec(v, units.FluxDensity)
 			}
 		case "design-angle":
