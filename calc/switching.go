@@ -61,8 +61,9 @@ type SwitchResult struct {
 
 	// WorstCurrent is the largest current the switch opens, A (see the file
 	// comment), and SpikeWorst the unsuppressed switch voltage at it,
-	// L·I_w/t_off + Supply (NaN without a switch-off time).
-	WorstCurrent, SpikeWorst float64
+	// L·I_w/t_off + Supply (NaN without a switch-off time), and
+	// EnergyWorst the energy stored at it, ½ L I_w², J.
+	WorstCurrent, SpikeWorst, EnergyWorst float64
 	// SwitchVoltage is the voltage, V, across the opening switch at
 	// WorstCurrent with the suggested suppression: Supply + I·R_s with the
 	// resistor–diode path (the clamp, by construction), the supply alone
@@ -112,6 +113,7 @@ func SwitchingWorst(L, R, Rw, I, Iw, V, tOff, rating float64, stated bool) Switc
 	}
 	s.WorstCurrent = Iw
 	s.Energy = L * I * I / 2
+	s.EnergyWorst = L * Iw * Iw / 2
 	if R > 0 && !math.IsInf(R, 0) {
 		s.TimeConstant = L / R
 		s.RiseTime = math.Ln10 * s.TimeConstant

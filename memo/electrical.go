@@ -456,7 +456,17 @@ func switchOffCaution(f analysis.Finding, cr calc.CoilResult, name string) doc.C
 	}
 	return doc.Callout{Severity: doc.Caution, Title: "Switch-off voltage, " + name,
 		Spans: []doc.Span{{Text: templates.Text("caution-inductive", map[string]string{
-			"Energy": Eng(s.Energy, "J", 3), "Spike": spike, "Diode": diode, "Resistor": resistor})}}}
+			"Energy": storedText(s), "Spike": spike, "Diode": diode, "Resistor": resistor})}}}
+}
+
+// storedText is the energy the coil stores at full current, and at the
+// cold switch-on current when that is larger (the switch may open it).
+func storedText(s calc.SwitchResult) string {
+	t := Eng(s.Energy, "J", 3) + " in its magnetic field at full current"
+	if s.EnergyWorst > s.Energy*(1+1e-9) {
+		t += " (" + Eng(s.EnergyWorst, "J", 3) + " at the cold switch-on current)"
+	}
+	return t
 }
 
 // coredCouplingNote says, for every cored coil with a row in the coupling
