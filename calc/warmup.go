@@ -244,6 +244,57 @@ func (tp ThermalProblem) rate(C float64, on bool) func(state) state {
 	}
 }
 
+// lagSettle is how many internal time constants the lags are integrated
+// for before phase holds them at their driven values (e^−40 of their
+// start is left).
+const lagSettle = 40
+
+// phase integrates one on (on) or off period of span seconds from y, as
+// integrate does with rate(C, on). When the internal lags' time constant is
+// short against the period (span above 5·lagSettle·τ), the explicit step
+// would stay bound to a few τ over the whole period (a stiff system, up to
+// integrate's step limit): the lags are then integrated with the rest for
+// lagSettle·τ, by when they follow the power they are driven by, and held
+// at those driven values, x = (RiseMax − RiseMean)·P and u = RiseMean·P,
+// for the rest of the period. What that leaves out is the lag itself,
+// about τ times the power's rate of change, against thermal time constants
+// that are longer by the same factor.
+func (tp ThermalProblem) phase(C float64, on bool, y state, span, hmax float64, stop func(state) bool, visit func(float64, state)) (float64, state) {
+	tl := lagSettle * tp.InternalTau
+	if !(tp.InternalTau > 0) || !(span > 5*tl) {
+		return integrate(tp.rate(C, on), y, span, hmax, stop, visit)
+	}
+	t1, y1 := integrate(tp.rate(C, on), y, tl, math.Min(hmax, tl/8), stop, visit)
+	if t1 < tl || math.IsNaN(y1[0]) || (stop != nil && stop(y1)) {
+		return t1, y1
+	}
+	power := func(T float64) float64 {
+		if on {
+			return tp.PowerOn(T)
+		}
+		return 0
+	}
+	slave := func(v state) state {
+		p := power(v[0])
+		return state{v[0], tp.extraRise() * p, tp.RiseMean * p}
+	}
+	f := func(v state) state {
+		v = slave(v)
+		p := power(v[0])
+		return state{(p - tp.HeatOut(tp.surfaceOf(v, p))) / C, 0, 0}
+	}
+	var vis func(float64, state)
+	if visit != nil {
+		vis = func(s float64, v state) { visit(tl+s, slave(v)) }
+	}
+	st := stop
+	if stop != nil {
+		st = func(v state) bool { return stop(slave(v)) }
+	}
+	t2, y2 := integrate(f, slave(y1), span-tl, hmax, st, vis)
+	return tl + t2, slave(y2)
+}
+
 // hotSpot returns the hottest winding temperature, K, of state y with the
 // power on or off: T + x when the internal rise lags (InternalTau > 0),
 // else T + (RiseMax − RiseMean) P(T) with the power on and T with it off.
@@ -325,7 +376,7 @@ func (tp ThermalProblem) WarmUpCurve(C, tEnd, onTime float64) (t, mean, hot []fl
 			// Without a lag the hot spot jumps when the power switches.
 			t, mean, hot = append(t, t0), append(mean, y[0]), append(hot, tp.hotSpot(y, on))
 			start := t0
-			_, y = integrate(tp.rate(C, on), y, ph.span, math.Min(hmax, ph.span/8), ceiling, func(s float64, v state) {
+			_, y = tp.phase(C, on, y, ph.span, math.Min(hmax, ph.span/8), ceiling, func(s float64, v state) {
 				t, mean, hot = append(t, start+s), append(mean, v[0]), append(hot, tp.hotSpot(v, on))
 			})
 			t0 += ph.span
@@ -381,11 +432,11 @@ func (tp ThermalProblem) PeriodicCycle(C, onTime float64) Cycle {
 		return state{T0, lag * tp.extraRise() * p, lag * tp.RiseMean * p}
 	}
 	period := func(T0 float64) (peak, end state) {
-		_, peak = integrate(tp.rate(C, true), start(T0), onTime, onTime/4, ceil, nil)
+		_, peak = tp.phase(C, true, start(T0), onTime, onTime/4, ceil, nil)
 		if ceiling(peak[0]) || math.IsNaN(peak[0]) {
 			return peak, state{math.Inf(1), 0, 0}
 		}
-		_, end = integrate(tp.rate(C, false), peak, cy.Off, cy.Off/4, ceil, nil)
+		_, end = tp.phase(C, false, peak, cy.Off, cy.Off/4, ceil, nil)
 		return peak, end
 	}
 	g := func(T0 float64) float64 { _, e := period(T0); return e[0] - T0 }
@@ -421,7 +472,7 @@ func (tp ThermalProblem) PeriodicCycle(C, onTime float64) Cycle {
 	// trapezoidal rule over the integration's steps (at most onTime/64).
 	var e float64
 	prevT, prevY := 0.0, T0
-	integrate(tp.rate(C, true), start(T0), onTime, onTime/64, nil, func(s float64, y state) {
+	tp.phase(C, true, start(T0), onTime, onTime/64, nil, func(s float64, y state) {
 		e += (s - prevT) * (tp.PowerOn(prevY) + tp.PowerOn(y[0])) / 2
 		prevT, prevY = s, y[0]
 	})
