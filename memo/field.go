@@ -295,7 +295,7 @@ func (c *composer) drawCentreRequirement(i int, centre float64, d *figures.Profi
 	if !ok {
 		return caption, text
 	}
-	d.Levels = append(d.Levels, figures.Level{Y: math.Copysign(req.Limit.Required, centre), Label: "required " + relText(req.Limit) + " " + Eng(req.Limit.Required, "T", 3)})
+	d.Levels = append(d.Levels, figures.Level{Y: math.Copysign(req.Limit.Required, centre), Label: "required |B| " + relText(req.Limit) + " " + Eng(req.Limit.Required, "T", 3)})
 	caption += "; dashed: the required centre field"
 	text += fmt.Sprintf(" The required centre field (dashed) is %s.", map[bool]string{true: "met", false: "not met"}[req.Pass])
 	return caption, text
@@ -561,7 +561,9 @@ func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult, cs *analysis.Coi
 	caption := fmt.Sprintf("Axial gradient %s along the axis of gradient pair %q (dotted: where it departs by 1 %% from the centre value; shaded: the windings)", grad, co.Name)
 	if g, rel, ok := gradientRequirement(c.j, i); ok {
 		l := calc.Limit{Relation: rel}
-		d.Levels = append(d.Levels, figures.Level{Y: math.Copysign(g, G), Label: "required " + relText(l) + " " + Eng(g, "T/m", 3)})
+		// The requirement is on the magnitude; the line is drawn on the
+		// side of the curve, and its label says so.
+		d.Levels = append(d.Levels, figures.Level{Y: math.Copysign(g, G), Label: "required |" + grad + "| " + relText(l) + " " + Eng(g, "T/m", 3)})
 		caption += "; dashed: the required gradient"
 		met := (rel == calc.AtLeast && math.Abs(G) >= g) || (rel == calc.AtMost && math.Abs(G) <= g)
 		text += fmt.Sprintf(" The required gradient, %s %s (dashed), is %s at the centre.", relText(l), Eng(g, "T/m", 3), map[bool]string{true: "met", false: "not met"}[met])
