@@ -260,6 +260,37 @@ const lagSettle = 40
 // about τ times the power's rate of change, against thermal time constants
 // that are longer by the same factor.
 func (tp ThermalProblem) phase(C float64, on bool, y state, span, hmax float64, stop func(state) bool, visit func(float64, state)) (float64, state) {
+	// A winding whose own heat balance settles in a small part of the
+	// period (a few turns of fine wire on a large former: microseconds
+	// against minutes) is a stiff system for the explicit steps as well:
+	// it is integrated until settled, checked to have reached its balance
+	// (the rate of change times the settling time below 10⁻⁹ K), and held
+	// there to the period's end.
+	if tth := tp.ThermalTimeConstant(C, y[0]); tth > 0 && span > 5*lagSettle*math.Max(tth, tp.InternalTau) {
+		tq := lagSettle * math.Max(tth, tp.InternalTau)
+		t1, y1 := tp.phaseLags(C, on, y, tq, math.Min(hmax, tq/8), stop, visit)
+		if t1 < tq || math.IsNaN(y1[0]) || (stop != nil && stop(y1)) {
+			return t1, y1
+		}
+		d := tp.rate(C, on)(y1)
+		if math.Abs(d[0])*tq < 1e-9 && math.Abs(d[1])*tq < 1e-9 && math.Abs(d[2])*tq < 1e-9 {
+			if visit != nil {
+				visit(span, y1)
+			}
+			return span, y1
+		}
+		var vis func(float64, state)
+		if visit != nil {
+			vis = func(s float64, v state) { visit(tq+s, v) }
+		}
+		t2, y2 := tp.phaseLags(C, on, y1, span-tq, hmax, stop, vis)
+		return tq + t2, y2
+	}
+	return tp.phaseLags(C, on, y, span, hmax, stop, visit)
+}
+
+// phaseLags is phase with the lags held once settled (see phase).
+func (tp ThermalProblem) phaseLags(C float64, on bool, y state, span, hmax float64, stop func(state) bool, visit func(float64, state)) (float64, state) {
 	tl := lagSettle * tp.InternalTau
 	if !(tp.InternalTau > 0) || !(span > 5*tl) {
 		return integrate(tp.rate(C, on), y, span, hmax, stop, visit)
