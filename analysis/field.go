@@ -2,9 +2,6 @@ package analysis
 
 import (
 	"math"
-	"runtime"
-	"sync"
-	"sync/atomic"
 
 	"coilmemo/calc"
 )
@@ -470,29 +467,9 @@ func allCoilsMap(d calc.Design, r calc.Results, grid int) *MapData {
 }
 
 // eachIndex calls f(i) for every i < n on up to runtime.GOMAXPROCS
-// goroutines and returns when all are done; f must write only to places
-// of its own index.
-func eachIndex(n int, f func(i int)) {
-	workers := min(runtime.GOMAXPROCS(0), n)
-	if workers <= 1 {
-		for i := range n {
-			f(i)
-		}
-		return
-	}
-	var next atomic.Int64
-	var wg sync.WaitGroup
-	for range workers {
-		wg.Add(1)
-		go func() {
-			defer wg.Done()
-			for i := int(next.Add(1)) - 1; i < n; i = int(next.Add(1)) - 1 {
-				f(i)
-			}
-		}()
-	}
-	wg.Wait()
-}
+// goroutines, handing out one index at a time (calc.ParallelBlocks), and
+// returns when all are done; f must write only to places of its own index.
+func eachIndex(n int, f func(i int)) { calc.ParallelBlocks(n, 1, f) }
 
 // DrawnInXZ reports whether the winding of co can be drawn in the
 // xz-plane through the origin: a circular coil whose axis lies along x or

@@ -193,7 +193,7 @@ func Couplings(coils []Coil, ws []Winding, currents, selfL []float64) []Coupling
 	}
 	// Each pair is independent: computed on every core, each into its own
 	// slot, so the result does not depend on the scheduling.
-	parallelBlocks(len(out), 1, func(k int) {
+	ParallelBlocks(len(out), 1, func(k int) {
 		out[k] = coupling(coils, ws, currents, selfL, out[k].A, out[k].B)
 	})
 	return out

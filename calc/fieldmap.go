@@ -121,12 +121,13 @@ func (s *CoilSource) MapOutside(x, z []float64, skip func(x, z float64) bool) Fi
 // goroutines, handing out indices in blocks; it returns when all are done.
 // f must only write to places that belong to its own index.
 func parallel(n int, f func(i int)) {
-	parallelBlocks(n, parallelBlock, f)
+	ParallelBlocks(n, parallelBlock, f)
 }
 
-// parallelBlocks is parallel with blocks of the given size (1 for tasks
-// that are each large, such as a pair of coils).
-func parallelBlocks(n, block int, f func(i int)) {
+// ParallelBlocks is parallel with blocks of the given size (1 for tasks
+// that are each large, such as a pair of coils or a coil's study). It is
+// the one worker pool of the project: the analysis stage uses it too.
+func ParallelBlocks(n, block int, f func(i int)) {
 	parallelBlock := block
 	workers := min(runtime.GOMAXPROCS(0), (n+parallelBlock-1)/parallelBlock)
 	if workers <= 1 {

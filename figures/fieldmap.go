@@ -499,15 +499,7 @@ func drawSection(c vg.Canvas, x0, y0, x1, y1 vg.Length, s Section) {
 // drawColourBar draws the scale's gradient in r with log ticks and labels
 // on its right and the quantity above it.
 func drawColourBar(c vg.Canvas, r vg.Rectangle, sc MapScale) {
-	const n = 256
-	img := image.NewNRGBA(image.Rect(0, 0, 1, n))
-	for i := range n {
-		img.SetNRGBA(0, n-1-i, Viridis(float64(i)/(n-1)))
-	}
-	c.DrawImage(r, img)
-	dc := draw.Canvas{Canvas: c, Rectangle: r}
-	edge := draw.LineStyle{Color: Muted, Width: ThinWidth}
-	dc.StrokeLines(edge, []vg.Point{r.Min, {X: r.Max.X, Y: r.Min.Y}, r.Max, {X: r.Min.X, Y: r.Max.Y}, r.Min})
+	dc := drawBarGradient(c, r)
 	l0, l1 := math.Log10(sc.Lo), math.Log10(sc.Hi)
 	yOf := func(v float64) vg.Length {
 		return r.Min.Y + (r.Max.Y-r.Min.Y)*vg.Length((math.Log10(v)-l0)/(l1-l0))
@@ -579,4 +571,20 @@ func mapCanvas(c vg.Canvas, w, h vg.Length, p *plot.Plot) (draw.Canvas, string, 
 		}
 	}
 	return dc, ylabel, ysty
+}
+
+// drawBarGradient draws a colour bar's Viridis gradient in r (bottom to
+// top) with a thin edge round it, and returns the canvas of r for its
+// ticks and labels.
+func drawBarGradient(c vg.Canvas, r vg.Rectangle) draw.Canvas {
+	const n = 256
+	img := image.NewNRGBA(image.Rect(0, 0, 1, n))
+	for i := range n {
+		img.SetNRGBA(0, n-1-i, Viridis(float64(i)/(n-1)))
+	}
+	c.DrawImage(r, img)
+	dc := draw.Canvas{Canvas: c, Rectangle: r}
+	edge := draw.LineStyle{Color: Muted, Width: ThinWidth}
+	dc.StrokeLines(edge, []vg.Point{r.Min, {X: r.Max.X, Y: r.Min.Y}, r.Max, {X: r.Min.X, Y: r.Max.Y}, r.Min})
+	return dc
 }

@@ -251,15 +251,7 @@ func (o *planeOverlay) Plot(c draw.Canvas, p *plot.Plot) {
 // departure from Ref ("+5 %"), the ends labelled in teslas and the
 // quantity above.
 func drawLinearBar(c vg.Canvas, r vg.Rectangle, d PlaneData, lo, hi float64, levels []float64, clipLo, clipHi bool) {
-	const n = 256
-	img := image.NewNRGBA(image.Rect(0, 0, 1, n))
-	for i := range n {
-		img.SetNRGBA(0, n-1-i, Viridis(float64(i)/(n-1)))
-	}
-	c.DrawImage(r, img)
-	dc := draw.Canvas{Canvas: c, Rectangle: r}
-	edge := draw.LineStyle{Color: Muted, Width: ThinWidth}
-	dc.StrokeLines(edge, []vg.Point{r.Min, {X: r.Max.X, Y: r.Min.Y}, r.Max, {X: r.Min.X, Y: r.Max.Y}, r.Min})
+	dc := drawBarGradient(c, r)
 	yOf := func(v float64) vg.Length { return r.Min.Y + (r.Max.Y-r.Min.Y)*vg.Length((v-lo)/(hi-lo)) }
 	sty := style(TickSize, Muted)
 	sty.YAlign = draw.YCenter
