@@ -147,13 +147,19 @@ func rk4Step(f func(state) state, y state, h float64) state {
 // the crossing located by bisection on the last step's length; else it
 // returns (span, y(span)). hmax bounds the step.
 func integrate(f func(state) state, y0 state, span, hmax float64, stop func(state) bool, visit func(t float64, y state)) (float64, state) {
+	return integrateN(f, y0, span, hmax, stop, visit, 200000)
+}
+
+// integrateN is integrate with at most steps attempted steps; it returns
+// where it got to when they run out.
+func integrateN(f func(state) state, y0 state, span, hmax float64, stop func(state) bool, visit func(t float64, y state), steps int) (float64, state) {
 	t, y := 0.0, y0
 	h := math.Min(hmax, span/64)
 	if !(h > 0) {
 		return 0, y0
 	}
 	nan := state{math.NaN(), math.NaN(), math.NaN()}
-	for n := 0; t < span && n < 200000; n++ {
+	for n := 0; t < span && n < steps; n++ {
 		h = math.Min(h, span-t)
 		one := rk4Step(f, y, h)
 		half := rk4Step(f, y, h/2)
@@ -292,7 +298,12 @@ func (tp ThermalProblem) phase(C float64, on bool, y state, span, hmax float64, 
 // phaseLags is phase with the lags held once settled (see phase).
 func (tp ThermalProblem) phaseLags(C float64, on bool, y state, span, hmax float64, stop func(state) bool, visit func(float64, state)) (float64, state) {
 	tl := lagSettle * tp.InternalTau
-	if !(tp.InternalTau > 0) || !(span > 5*tl) {
+	if !(tp.InternalTau > 0) {
+		// No lag: the rises keep their values and the mean alone moves.
+		lift := func(T float64) state { return state{T, y[1], y[2]} }
+		return integrateMean(tp.rate(C, on), lift, y, span, hmax, stop, visit)
+	}
+	if !(span > 5*tl) {
 		return integrate(tp.rate(C, on), y, span, hmax, stop, visit)
 	}
 	t1, y1 := integrate(tp.rate(C, on), y, tl, math.Min(hmax, tl/8), stop, visit)
@@ -322,7 +333,8 @@ func (tp ThermalProblem) phaseLags(C float64, on bool, y state, span, hmax float
 	if stop != nil {
 		st = func(v state) bool { return stop(slave(v)) }
 	}
-	t2, y2 := integrate(f, slave(y1), span-tl, hmax, st, vis)
+	lift := func(T float64) state { return slave(state{T}) }
+	t2, y2 := integrateMean(f, lift, slave(y1), span-tl, hmax, st, vis)
 	return tl + t2, slave(y2)
 }
 
