@@ -2,6 +2,8 @@ package memo
 
 import (
 	"fmt"
+	"slices"
+	"sort"
 	"strings"
 
 	"coilmemo/analysis"
@@ -9,9 +11,9 @@ import (
 	"coilmemo/templates"
 )
 
-// Cautions words the safety findings of the study, in the order the
-// analysis found them (coil by coil, then the field), always closing with
-// the general cautions.
+// Cautions words the safety findings of the study: one caution per hazard
+// naming the coils it applies to (mergeCautions), most severe first, the
+// field's reach among them, always closing with the general cautions.
 func Cautions(j *analysis.Study) []doc.Callout {
 	d := j.Spec.Design
 	r := j.Results
@@ -47,7 +49,6 @@ func Cautions(j *analysis.Study) []doc.Callout {
 			out = append(out, kindCautions(j, f)...) // memo/core.go
 		}
 	}
-	out = mergeCautions(out)
 	if ir := j.Safety.Implant; ir.Searched {
 		var where []string
 		if ir.Origin >= analysis.ImplantField {
@@ -59,19 +60,39 @@ func Cautions(j *analysis.Study) []doc.Callout {
 		if ir.Radial > 0 {
 			where = append(where, "as far as "+Eng(ir.Radial, "m", 2)+" from the origin in the xy plane")
 		}
+		type near struct{ name, surface, dist string }
+		var nears []near
+		cored := false
 		for i, w := range ir.Windings {
 			if w.Surface >= analysis.ImplantField {
-				what, its := "the winding", "its surface"
-				if i < len(j.Coils) && j.Coils[i].Kinds.Core != nil {
-					// The search starts from the rod's end faces too.
-					what, its = "the winding and core", "their surfaces (the rod's end faces included)"
-				}
-				// The search runs out from the surface along the coil's axis
-				// and plane with every coil's field, and reports the farthest
-				// point above the level: beyond it the level is not reached.
-				where = append(where, fmt.Sprintf("next to %s of coil %q, where |B| reaches %s at %s, and 0.5 mT is exceeded as far as %s from it along its axis or in its plane (the field of every winding counted)",
-					what, d.Coils[i].Name, Eng(w.Surface, "T", 3), its, Eng(w.Distance, "m", 2)))
+				cored = cored || (i < len(j.Coils) && j.Coils[i].Kinds.Core != nil)
+				nears = append(nears, near{fmt.Sprintf("%q", d.Coils[i].Name), Eng(w.Surface, "T", 3), Eng(w.Distance, "m", 2)})
 			}
+		}
+		// The search runs out from each winding's surface along the coil's
+		// axis and plane with every coil's field, and reports the farthest
+		// point above the level: beyond it the level is not reached.
+		switch {
+		case len(nears) == 1:
+			what, its := "the winding", "its surface"
+			if cored {
+				// The search starts from the rod's end faces too.
+				what, its = "the winding and core", "their surfaces (the rod's end faces included)"
+			}
+			where = append(where, fmt.Sprintf("next to %s of coil %s, where |B| reaches %s at %s, and 0.5 mT is exceeded as far as %s from it along its axis or in its plane (the field of every winding counted)",
+				what, nears[0].name, nears[0].surface, its, nears[0].dist))
+		case len(nears) > 1:
+			var at, far []string
+			for _, n := range nears {
+				at = append(at, n.surface+" (coil "+n.name+")")
+				far = append(far, n.dist+" ("+n.name+")")
+			}
+			what := "the windings"
+			if cored {
+				what = "the windings and cores (the rods' end faces included)"
+			}
+			where = append(where, fmt.Sprintf("next to %s, where |B| at the surface reaches %s, and 0.5 mT is exceeded as far as %s from them along their axes or in their planes (the field of every winding counted)",
+				what, joinAnd(at), joinAnd(far)))
 		}
 		for _, k := range ir.Probes {
 			p := r.Probes[k]
@@ -85,6 +106,7 @@ func Cautions(j *analysis.Study) []doc.Callout {
 				Spans: []doc.Span{{Text: templates.Text("caution-implant-none", nil)}}})
 		}
 	}
+	out = mergeCautions(out)
 	general := templates.Paragraphs("caution-general", nil)
 	for i, p := range general {
 		t := "Limits of this memo"
@@ -96,14 +118,21 @@ func Cautions(j *analysis.Study) []doc.Callout {
 	return out
 }
 
-// mergeCautions gives one caution per hazard: cautions of several coils
-// whose words are the same (titles "…, coil "X"" with equal severity and
-// text) become one whose title lists the coils.
+// mergeCautions gives one caution per hazard: the cautions of several
+// coils with the same title before ", coil …" and the same severity become
+// one whose title lists the coils. Where their words are the same they are
+// given once; where they differ, the sentences that differ are given coil
+// by coil ("Coil "a": …"), in the order of the text, and the sentences
+// common to all of them (the consequence and the remedy) once after them.
+// The result is ordered most severe first, hazards in the order they were
+// found within a severity, so that page 1 lists them as the Safety section
+// gives them.
 func mergeCautions(in []doc.Callout) []doc.Callout {
 	type group struct {
 		c     doc.Callout
 		base  string
 		names []string
+		texts []string
 	}
 	var groups []*group
 	for _, c := range in {
@@ -112,25 +141,103 @@ func mergeCautions(in []doc.Callout) []doc.Callout {
 			groups = append(groups, &group{c: c})
 			continue
 		}
-		text := spanText(c.Spans)
 		merged := false
 		for _, g := range groups {
-			if g.base == base && g.c.Severity == c.Severity && spanText(g.c.Spans) == text {
+			if g.base == base && g.c.Severity == c.Severity {
 				g.names = append(g.names, name)
+				g.texts = append(g.texts, spanText(c.Spans))
 				merged = true
 				break
 			}
 		}
 		if !merged {
-			groups = append(groups, &group{c: c, base: base, names: []string{name}})
+			groups = append(groups, &group{c: c, base: base, names: []string{name}, texts: []string{spanText(c.Spans)}})
 		}
 	}
 	out := make([]doc.Callout, 0, len(groups))
 	for _, g := range groups {
 		if len(g.names) > 1 {
 			g.c.Title = g.base + ", coils " + joinAnd(g.names)
+			g.c.Spans = mergedSpans(g.names, g.texts)
 		}
 		out = append(out, g.c)
+	}
+	sort.SliceStable(out, func(a, b int) bool { return out[a].Severity > out[b].Severity })
+	return out
+}
+
+// mergedSpans words one hazard's texts for several coils (names quoted as
+// in the titles): once when they are all the same; else the sentences that
+// differ coil by coil, then those they share.
+func mergedSpans(names, texts []string) []doc.Span {
+	same := true
+	for _, t := range texts[1:] {
+		same = same && t == texts[0]
+	}
+	if same {
+		return []doc.Span{{Text: texts[0]}}
+	}
+	split := make([][]string, len(texts))
+	for i, t := range texts {
+		split[i] = sentences(t)
+	}
+	shared := map[string]bool{}
+	for _, s := range split[0] {
+		in := true
+		for _, o := range split[1:] {
+			in = in && slices.Contains(o, s)
+		}
+		shared[s] = in
+	}
+	var spans []doc.Span
+	for i, ss := range split {
+		var own []string
+		for _, s := range ss {
+			if !shared[s] {
+				own = append(own, s)
+			}
+		}
+		if len(own) > 0 {
+			spans = append(spans, doc.Span{Text: "Coil " + names[i] + ": ", Strong: true}, doc.Span{Text: strings.Join(own, " ") + " "})
+		}
+	}
+	var common []string
+	for _, s := range split[0] {
+		if shared[s] {
+			common = append(common, s)
+		}
+	}
+	if len(common) > 0 {
+		spans = append(spans, doc.Span{Text: strings.Join(common, " ")})
+	}
+	if n := len(spans) - 1; n >= 0 {
+		spans[n].Text = strings.TrimRight(spans[n].Text, " ")
+	}
+	return spans
+}
+
+// sentences splits text at a full stop followed by a space and a capital
+// letter or a digit (not after the abbreviations a.c., d.c., e.g., i.e.).
+func sentences(text string) []string {
+	var out []string
+	start := 0
+	for i := 0; i+2 < len(text); i++ {
+		if text[i] != '.' || text[i+1] != ' ' {
+			continue
+		}
+		next := text[i+2]
+		if !(next >= 'A' && next <= 'Z' || next >= '0' && next <= '9') {
+			continue
+		}
+		head := text[start : i+1]
+		if strings.HasSuffix(head, "a.c.") || strings.HasSuffix(head, "d.c.") || strings.HasSuffix(head, "e.g.") || strings.HasSuffix(head, "i.e.") {
+			continue
+		}
+		out = append(out, strings.TrimSpace(head))
+		start = i + 2
+	}
+	if rest := strings.TrimSpace(text[start:]); rest != "" {
+		out = append(out, rest)
 	}
 	return out
 }

@@ -75,3 +75,72 @@ func titles(cs []doc.Callout) []string {
 	}
 	return out
 }
+
+// Three coils too hot to touch, each at its own temperature: one "Hot
+// surface" caution naming all three, each coil's temperature given once
+// with its name, the shared advice once; and page 1 lists the cautions in
+// the order the Safety section gives them (most severe first).
+func TestOneCautionPerHazard(t *testing.T) {
+	src := "# Three hot coils\n\n"
+	for i, c := range []struct{ name, axis, current string }{{"x coil", "x", "0.8 A"}, {"y coil", "y", "0.9 A"}, {"z coil", "z", "1 A"}} {
+		src += "```coil\nname = " + c.name + "\naxis = " + c.axis + "\nmean-diameter = " + []string{"100", "120", "140"}[i] +
+			" mm\nturns = 100\nwire = AWG 28\ncurrent = " + c.current + "\n```\n\n"
+	}
+	j, diags := evaluate("t.md", []byte(src))
+	if len(diags) > 0 {
+		t.Fatalf("spec problems: %v", diags)
+	}
+	cs := Cautions(j)
+	var hot []doc.Callout
+	for _, c := range cs {
+		if strings.HasPrefix(c.Title, "Hot surface") {
+			hot = append(hot, c)
+		}
+	}
+	if len(hot) != 1 {
+		t.Fatalf("%d hot-surface cautions, want 1: %v", len(hot), titles(cs))
+	}
+	text := spanText(hot[0].Spans)
+	for i, name := range []string{"x coil", "y coil", "z coil"} {
+		if !strings.Contains(hot[0].Title, `"`+name+`"`) {
+			t.Errorf("title %q does not name %q", hot[0].Title, name)
+		}
+		ts := j.Coils[i].Heat.SurfaceMax
+		want := `Coil "` + name + `": The winding surface reaches ` + Eng(Celsius(ts), "°C", 3) + "."
+		if !strings.Contains(text, want) {
+			t.Errorf("the caution does not say %q:\n%s", want, text)
+		}
+	}
+	if n := strings.Count(text, "allow it to cool"); n != 1 {
+		t.Errorf("the shared advice is given %d times:\n%s", n, text)
+	}
+	// Page 1's list against the Safety section's order.
+	c := &composer{j: j, cautions: cs}
+	var listed, given []string
+	for _, it := range c.cautionList().Items {
+		p := it[0].(doc.Paragraph)
+		listed = append(listed, p.Spans[1].Text)
+	}
+	for _, co := range cs {
+		if co.Severity == doc.Warning || co.Severity == doc.Caution {
+			given = append(given, co.Title)
+		}
+	}
+	if strings.Join(listed, "|") != strings.Join(given, "|") {
+		t.Errorf("page 1 lists\n%q\nthe Safety section gives\n%q", listed, given)
+	}
+	for i := 1; i < len(cs); i++ {
+		if cs[i].Severity > cs[i-1].Severity {
+			t.Errorf("%s after %s", titles(cs)[i], titles(cs)[i-1])
+		}
+	}
+}
+
+// A sentence split keeps abbreviations and decimals inside sentences.
+func TestSentences(t *testing.T) {
+	got := sentences("At 50 kHz the a.c. resistance is 2.5 times the d.c. one. 3 V is e.g. Low. Done.")
+	want := []string{"At 50 kHz the a.c. resistance is 2.5 times the d.c. one.", "3 V is e.g. Low.", "Done."}
+	if strings.Join(got, "|") != strings.Join(want, "|") {
+		t.Errorf("got %q, want %q", got, want)
+	}
+}
