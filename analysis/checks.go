@@ -119,11 +119,24 @@ func centreFieldCheck(c calc.Coil, cr calc.CoilResult) []Check {
 			sheet += float64(n) * calc.LoopFieldOnAxis(l.Radius, I, 0)
 			method = "N·μ0·I/(2R) closed form"
 		} else {
-			sheet += calc.SolenoidAxisField(l.Radius, c.Length*float64(n)/float64(w.TurnsPerLayer), n, I, 0)
+			sheet += calc.SolenoidAxisField(l.Radius, layerExtent(c, w, l), n, I, 0)
 		}
 	}
 	return []Check{newCheck(c.Name, "field at coil centre",
 		"Σ exact loop fields (elliptic integrals)", method, exact, sheet, "T", 0.01)}
+}
+
+// layerExtent is the length of the current sheet that stands for layer l
+// of winding w: n turns at the layer's pitch, the single layer's
+// Length/N, or the span of its turns' centres plus one pitch (turns that
+// touch, over a part of the length when they do not fill it).
+func layerExtent(c calc.Coil, w calc.Winding, l calc.Layer) float64 {
+	n := len(l.Z)
+	if w.LayerCount <= 1 && c.RadialBuild <= 0 || n < 2 {
+		return c.Length * float64(n) / float64(max(w.TurnsPerLayer, 1))
+	}
+	span := l.Z[n-1] - l.Z[0]
+	return span * float64(n) / float64(n-1)
 }
 
 // offAxisCheck compares the field at an off-axis point outside the

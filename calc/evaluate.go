@@ -98,7 +98,7 @@ func evaluateCoil(c Coil, cond Conditions) CoilResult {
 		if cy.Settled && op.State.Settled {
 			cr.Temperature = math.Max(cy.PeakHot, op.State.HotSpot)
 		}
-		cr.Verdict = Judge(ThermalLimit(c), cr.Temperature, cy.Settled, cy.NoSolution)
+		cr.Verdict = Judge(ThermalLimit(c), cr.Temperature, cy.Settled, cy.NoSolution).WithMelting(c.Wire.Material, cr.Temperature)
 		cr.Runaway = cr.Verdict.Runaway
 	}
 	cr.SwitchOnCurrent = op.SwitchOnCurrent

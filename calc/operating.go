@@ -223,7 +223,7 @@ func OperatingPoint(c Coil, w Winding, cond Conditions) Operating {
 	}
 	op.State = st
 	op.Temperature = st.HotSpot
-	op.Verdict = Judge(ThermalLimit(c), st.HotSpot, st.Settled, st.NoSolution)
+	op.Verdict = Judge(ThermalLimit(c), st.HotSpot, st.Settled, st.NoSolution).WithMelting(c.Wire.Material, st.HotSpot)
 	op.Runaway = op.Verdict.Runaway
 	op.RHot = ResistanceAt(tp.R20, tp.Alpha20, st.Mean)
 	rac := op.RHot * tp.acFactor()

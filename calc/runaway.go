@@ -61,6 +61,20 @@ type ThermalVerdict struct {
 	// SettledAboveLimit: a steady (or periodic) state exists, but its hot
 	// spot lies above Limit. Runaway is then set too.
 	SettledAboveLimit bool
+	// AboveMelting: that state's hot spot lies above the conductor's
+	// melting point (ConductorLimit), where the heat balance is an
+	// extrapolation past the winding's end; Melting is that point, K (NaN
+	// for a conductor of another name).
+	AboveMelting bool
+	Melting      float64
+}
+
+// WithMelting returns v with the melting point of conductor m and whether
+// the hot spot (K) of a settled state lies above it.
+func (v ThermalVerdict) WithMelting(m Material, hot float64) ThermalVerdict {
+	v.Melting = ConductorLimit(m)
+	v.AboveMelting = v.SettledAboveLimit && hot > v.Melting
+	return v
 }
 
 // Judge returns the verdict for a block whose heat balance settled (hot

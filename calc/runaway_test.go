@@ -56,7 +56,7 @@ func TestOverdrivenCoilAlwaysRunsAway(t *testing.T) {
 	}
 	// At 50 mA the same coil settles well inside its class: no runaway.
 	c, cond := torqueCoilAt(0.05)
-	if cr := Evaluate(Design{Coils: []Coil{c}, Conditions: cond}).Coils[0]; cr.Runaway || cr.Verdict != (ThermalVerdict{Limit: c.InsulationClass}) {
+	if cr := Evaluate(Design{Coils: []Coil{c}, Conditions: cond}).Coils[0]; cr.Runaway || cr.Verdict != (ThermalVerdict{Limit: c.InsulationClass, Melting: CopperFreezingPoint}) {
 		t.Errorf("50 mA: %+v at %.2f °C", cr.Verdict, KelvinToCelsius(cr.Temperature))
 	}
 }

@@ -218,12 +218,15 @@ func (c *composer) verdict() doc.Paragraph {
 		s = append(s, doc.Span{Text: w})
 	}
 	if failedChecks > 0 {
-		s = append(s, doc.Span{Text: fmt.Sprintf("%d verification check(s) failed: see the Verification section before relying on these results.", failedChecks), Strong: true}, doc.Span{Text: " "})
+		s = append(s, doc.Span{Text: format.Count(failedChecks, "verification check", "verification checks") + " failed: see the Verification section before relying on these results.", Strong: true}, doc.Span{Text: " "})
 	} else if n := len(c.j.Checks); n > 0 {
 		s = append(s, doc.Span{Text: checksVerdict(n)})
 	}
 	for _, cr := range r.Coils {
 		switch {
+		case cr.Verdict.AboveMelting:
+			s = append(s, doc.Span{Text: fmt.Sprintf("Coil %q has no steady temperature below the melting point of its conductor (%s): the winding would be destroyed first.",
+				cr.Name, Eng(Celsius(cr.Verdict.Melting), "°C", 4)), Strong: true}, doc.Span{Text: " "})
 		case cr.Verdict.SettledAboveLimit:
 			s = append(s, doc.Span{Text: fmt.Sprintf("Coil %q settles at %s, above what its insulation survives.", cr.Name, Eng(Celsius(cr.Temperature), "°C", 3)), Strong: true}, doc.Span{Text: " "})
 		case cr.Runaway:
@@ -301,6 +304,9 @@ func (c *composer) summaryTable() doc.Table {
 		row("Winding temperature, hottest point", func(i int, cr calc.CoilResult) string {
 			if cr.Runaway && !cr.Verdict.SettledAboveLimit {
 				return "runaway"
+			}
+			if cr.Verdict.AboveMelting {
+				return "above melting"
 			}
 			return Eng(Celsius(cr.Temperature), "°C", 3)
 		}),

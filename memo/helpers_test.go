@@ -30,7 +30,7 @@ func TestFailedCheckOnPageOne(t *testing.T) {
 	p := (&composer{j: j}).verdict()
 	found := false
 	for _, s := range p.Spans {
-		if s.Strong && strings.Contains(s.Text, "verification check(s) failed") {
+		if s.Strong && strings.Contains(s.Text, "1 verification check failed") {
 			found = true
 		}
 	}

@@ -7,6 +7,7 @@ import (
 	"strings"
 
 	"coilmemo/analysis"
+	"coilmemo/calc"
 	"coilmemo/doc"
 	"coilmemo/templates"
 )
@@ -28,7 +29,7 @@ func Cautions(j *analysis.Study) []doc.Callout {
 		case analysis.ClassExceeded:
 			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Insulation class exceeded, " + name,
 				Spans: []doc.Span{{Text: templates.Text("caution-class", map[string]string{
-					"Temperature": Eng(Celsius(f.Value), "°C", 3), "Class": Eng(Celsius(co.InsulationClass), "°C", 3),
+					"Temperature": hotText(cr, f.Value), "Class": Eng(Celsius(co.InsulationClass), "°C", 3),
 					"Time": classTimeText(cr)})}}})
 		case analysis.ClassIfLeftOn:
 			out = append(out, doc.Callout{Severity: doc.Caution, Title: "Insulation class if left energised, " + name,
@@ -39,7 +40,7 @@ func Cautions(j *analysis.Study) []doc.Callout {
 		case analysis.HighDensity:
 			out = append(out, doc.Callout{Severity: doc.Note, Title: "Current density above common practice, " + name,
 				Spans: []doc.Span{{Text: templates.Text("caution-density", map[string]string{"Density": Eng(f.Value, "A/m²", 3),
-					"Temperature": Eng(Celsius(cr.Temperature), "°C", 3)})}}})
+					"Temperature": hotText(cr, cr.Temperature)})}}})
 		case analysis.HazardousVoltage:
 			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Hazardous voltage, " + name,
 				Spans: []doc.Span{{Text: templates.Text("caution-voltage", map[string]string{"Voltage": Eng(f.Value, "V", 3)})}}})
@@ -256,4 +257,13 @@ func (c *composer) safety() {
 	for _, co := range c.cautions {
 		c.add(co)
 	}
+}
+
+// hotText words a hot spot of T kelvin: as a temperature, or, above the
+// conductor's melting point, as the melting point that it would pass.
+func hotText(cr calc.CoilResult, T float64) string {
+	if cr.Verdict.AboveMelting && T > cr.Verdict.Melting {
+		return "more than " + Eng(Celsius(cr.Verdict.Melting), "°C", 4) + " (the melting point of its conductor)"
+	}
+	return Eng(Celsius(T), "°C", 3)
 }

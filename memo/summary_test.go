@@ -61,3 +61,24 @@ func TestSummaryMarkdown(t *testing.T) {
 		}
 	}
 }
+
+// A winding whose heat balance would settle only above copper's melting
+// point (1084.62 °C, ITS-90) is not given that figure as a temperature on
+// page 1: the verdict says it melts first and the headline table says so.
+func TestAboveMeltingOnPageOne(t *testing.T) {
+	j := mustEvaluate(t, "```coil\nname = c1\nform = solenoid\nmean-diameter = 6.86 mm\nlength = 872 mm\nradial-build = 6 mm\nturns = 236\nwire = AWG 30\nvoltage = 94.1 V\n```\n")
+	cr := j.Results.Coils[0]
+	if !cr.Verdict.AboveMelting || !(cr.Temperature > 1357.77) {
+		t.Fatalf("verdict %+v at %.1f K", cr.Verdict, cr.Temperature)
+	}
+	c := &composer{j: j, cautions: Cautions(j)}
+	v := spanText(c.verdict().Spans)
+	if !strings.Contains(v, "no steady temperature below the melting point of its conductor (1085 °C)") || strings.Contains(v, Eng(Celsius(cr.Temperature), "°C", 3)) {
+		t.Errorf("verdict: %s", v)
+	}
+	for _, co := range c.cautions {
+		if strings.Contains(spanText(co.Spans), Eng(Celsius(cr.Temperature), "°C", 3)) {
+			t.Errorf("caution %q quotes the extrapolated %s", co.Title, Eng(Celsius(cr.Temperature), "°C", 3))
+		}
+	}
+}

@@ -13,6 +13,7 @@ import (
 	"strings"
 	"syscall"
 
+	"coilmemo/format"
 	"coilmemo/memo"
 )
 
@@ -163,7 +164,14 @@ func buildOne(j *buildJob) {
 	note := ""
 	if lf+cf > 0 {
 		j.outcome = builtFailed
-		note = fmt.Sprintf(" (%d requirement(s) and %d check(s) FAILED)", lf, cf)
+		var failed []string
+		if lf > 0 {
+			failed = append(failed, format.Count(lf, "requirement", "requirements"))
+		}
+		if cf > 0 {
+			failed = append(failed, format.Count(cf, "verification check", "verification checks"))
+		}
+		note = " (" + strings.Join(failed, " and ") + " FAILED)"
 	}
 	fmt.Fprintf(&j.stdout, "%s → %s, %d bytes%s\n", j.spec, j.shown, len(b), note)
 }
