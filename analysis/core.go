@@ -171,7 +171,8 @@ func coredResults(d calc.Design, r calc.Results, kinds []CoilKinds) calc.Results
 	out.Moment = total
 	out.Torque = calc.Torque(total, bg)
 	out.TorqueMax = calc.TorqueMax(total, bg)
-	out.TorqueDesign = calc.TorqueAtAngle(total.Norm(), bg.Norm(), d.Conditions.DesignAngle)
+	out.TorqueAngle = calc.DesignAngle(total, d.Conditions)
+	out.TorqueDesign = calc.TorqueAtAngle(total.Norm(), bg.Norm(), out.TorqueAngle)
 	out.GradientForce = calc.GradientForce(total.Norm(), d.Conditions.FieldGradient)
 	return out
 }

@@ -129,8 +129,11 @@ type Conditions struct {
 	// moment is the design angle's business, not a result.
 	BackgroundMagnitudeOnly bool
 	// DesignAngle is the angle between the moment and the background field
-	// at which torque is reported, rad; the worst case (π/2) when not given.
-	DesignAngle float64
+	// at which torque is reported, rad, when DesignAngleStated; else π/2,
+	// and the angle used is the one as designed for a field given as a
+	// vector (see the function DesignAngle).
+	DesignAngle       float64
+	DesignAngleStated bool
 	Cooling     Cooling
 	// FieldGradient is a stated gradient of the background field, T/m: the
 	// rate of change of the field component along a moment, per metre along

@@ -14,9 +14,9 @@ const HomogeneityTolerance = 0.01
 // stored energy, thermal time constant, insulation margin, dipole range and
 // the force between a pair's coils and its 1 % homogeneous region.
 // Then the totals: field at the origin, total moment, torque in the
-// background field (τ = m × B; maximum |m||B|; |m||B| sin θ at
-// Conditions.DesignAngle θ, taken as given — the reader fills in π/2 when
-// the spec is silent), the field at every probe, and every limit checked
+// background field (τ = m × B; maximum |m||B|; |m||B| sin θ at the angle
+// DesignAngle gives: the stated design angle, else the angle as designed for
+// a field given as a vector, else π/2), the field at every probe, and every limit checked
 // (see CheckLimits). Unknown quantities are NaN. Evaluate does not panic on
 // degenerate input (no coils, no turns, no current, no wire): it returns NaN
 // or zero as the case is.
@@ -35,7 +35,8 @@ func Evaluate(d Design) Results {
 	bg := d.Conditions.BackgroundField
 	res.Torque = Torque(res.Moment, bg)
 	res.TorqueMax = TorqueMax(res.Moment, bg)
-	res.TorqueDesign = TorqueAtAngle(res.Moment.Norm(), bg.Norm(), d.Conditions.DesignAngle)
+	res.TorqueAngle = DesignAngle(res.Moment, d.Conditions)
+	res.TorqueDesign = TorqueAtAngle(res.Moment.Norm(), bg.Norm(), res.TorqueAngle)
 	for _, p := range d.Probes {
 		res.Probes = append(res.Probes, ProbeResult{Name: p.Name, At: p.At, B: fm.At(p.At)})
 	}

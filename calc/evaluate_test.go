@@ -25,7 +25,7 @@ func sampleDesign() Design {
 			{Name: "frame", Form: Rectangle, Width: 0.1, Height: 0.06, Turns: 30, Wire: WireFromGauge(28, cu),
 				Drive: CurrentDrive, Current: 0.05, Duty: 1, Axis: Vec{0, 0, 1}, Centre: Vec{0, 0, -1}},
 		},
-		Conditions: Conditions{Ambient: T20, BackgroundField: Vec{0, 3e-5, 0}, DesignAngle: math.Pi / 6, Cooling: StillAir()},
+		Conditions: Conditions{Ambient: T20, BackgroundField: Vec{0, 3e-5, 0}, DesignAngle: math.Pi / 6, DesignAngleStated: true, Cooling: StillAir()},
 		Probes:     []Probe{{Name: "sensor", At: Vec{0, 0, 0.12}}},
 	}
 }

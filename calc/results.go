@@ -120,8 +120,10 @@ type Results struct {
 	Moment      Vec // A·m², total
 	Torque      Vec // N·m, m × B_background with m as designed
 	TorqueMax   float64
-	// TorqueDesign is |τ| at Conditions.DesignAngle between m and B.
+	// TorqueDesign is |τ| at TorqueAngle between m and B.
 	TorqueDesign float64
+	// TorqueAngle is that angle, rad (DesignAngle).
+	TorqueAngle float64
 	Probes       []ProbeResult
 	// Couplings holds the mutual inductance and force of every pair of coil
 	// blocks; GradientForce is |m| × Conditions.FieldGradient for the total

@@ -601,6 +601,19 @@ func asDesigned(cond calc.Conditions, t calc.Vec) string {
 	return fmt.Sprintf("As designed, τ = (%s, %s, %s).", Eng(t[0], "N·m", 3), Eng(t[1], "N·m", 3), Eng(t[2], "N·m", 3))
 }
 
+// torqueAngleText says at which angle between moment and field the torque
+// is reported (calc.DesignAngle), as a phrase before "it is".
+func torqueAngleText(cond calc.Conditions, theta float64) string {
+	deg := Sig(theta*180/math.Pi, 3) + "°"
+	switch {
+	case cond.DesignAngleStated:
+		return "at the stated design angle of " + deg
+	case cond.BackgroundMagnitudeOnly:
+		return "at the design angle of " + deg + " (taken, as the field's direction is not given)"
+	}
+	return "at the angle between moment and field as designed, " + deg + ","
+}
+
 // torque reports τ = m × B in the background field.
 func (c *composer) torque() {
 	d := c.j.Spec.Design
@@ -614,7 +627,7 @@ func (c *composer) torque() {
 		"B":          Eng(Bb.Norm(), "T", 3),
 		"M":          Eng(r.Moment.Norm(), "A·m²", 4),
 		"Max":        Eng(r.TorqueMax, "N·m", 4),
-		"Angle":      Sig(d.Conditions.DesignAngle*180/math.Pi, 3),
+		"AtAngle":    torqueAngleText(d.Conditions, r.TorqueAngle),
 		"Design":     Eng(r.TorqueDesign, "N·m", 4),
 		"AsDesigned": asDesigned(d.Conditions, r.Torque),
 	}))

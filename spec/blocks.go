@@ -58,7 +58,7 @@ func (p *parser) conditionsBlock(b *rawBlock) {
 			case q.Value < 0 || q.Value > math.Pi*(1+1e-12):
 				p.errf(e.line, "design-angle: %s is outside 0..180 deg", e.value)
 			default:
-				cond.DesignAngle = q.Value
+				cond.DesignAngle, cond.DesignAngleStated = q.Value, true
 				si = q.String()
 			}
 		case "cooling":
@@ -145,7 +145,11 @@ func (p *parser) conditionsBlock(b *rawBlock) {
 	}
 	add("ambient", units.Format(cond.Ambient, units.Temperature)+" (20 °C)")
 	add("background-field", "(0, 0, 0) T")
-	add("design-angle", units.Format(cond.DesignAngle, units.Angle)+" (90°)")
+	if cond.BackgroundMagnitudeOnly || cond.BackgroundField.Norm() == 0 {
+		add("design-angle", units.Format(cond.DesignAngle, units.Angle)+" (90°)")
+	} else {
+		add("design-angle", "as designed (the angle between the total moment and the field)")
+	}
 	if !given["cooling"] && hLine == 0 {
 		add("cooling", "still-air (natural convection, Churchill–Chu)")
 	}

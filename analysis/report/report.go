@@ -41,6 +41,7 @@ type Report struct {
 	Probes       []ProbeReport `json:"probes"`
 	TorqueMax    Num           `json:"torque_max_N_m"`
 	TorqueDesign Num           `json:"torque_N_m"`
+	TorqueAngle  Num           `json:"torque_angle_deg"`
 	TorqueVector [3]Num        `json:"torque_vector_N_m"`
 	Limits       []LimitReport `json:"limits"`
 	Checks       []CheckReport `json:"checks"`
@@ -178,7 +179,7 @@ func Build(j *analysis.Study) Report {
 	rep := Report{
 		Tool: "coilmemo " + analysis.Version, Spec: j.Name, SpecSHA256: j.SHA256,
 		FieldCenter: vec(r.FieldCentre), Moment: Num(r.Moment.Norm()), MomentVector: vec(r.Moment),
-		TorqueMax: Num(r.TorqueMax), TorqueDesign: Num(r.TorqueDesign), TorqueVector: vec(r.Torque),
+		TorqueMax: Num(r.TorqueMax), TorqueDesign: Num(r.TorqueDesign), TorqueAngle: Num(r.TorqueAngle * 180 / math.Pi), TorqueVector: vec(r.Torque),
 		Coils: []CoilReport{}, Probes: []ProbeReport{}, Limits: []LimitReport{}, Checks: []CheckReport{},
 	}
 	rep.LimitsFailed, rep.ChecksFailed = j.Failed()
