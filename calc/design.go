@@ -134,7 +134,7 @@ type Conditions struct {
 	// vector (see the function DesignAngle).
 	DesignAngle       float64
 	DesignAngleStated bool
-	Cooling     Cooling
+	Cooling           Cooling
 	// FieldGradient is a stated gradient of the background field, T/m: the
 	// rate of change of the field component along a moment, per metre along
 	// it (0: none).

@@ -124,7 +124,7 @@ type Results struct {
 	TorqueDesign float64
 	// TorqueAngle is that angle, rad (DesignAngle).
 	TorqueAngle float64
-	Probes       []ProbeResult
+	Probes      []ProbeResult
 	// Couplings holds the mutual inductance and force of every pair of coil
 	// blocks; GradientForce is |m| × Conditions.FieldGradient for the total
 	// moment, N (NaN when no gradient is stated).
