@@ -152,10 +152,19 @@ func Percent(v float64) string {
 }
 
 // Margin formats a signed margin to one decimal, "+12.5 %" or "−3.1 K":
-// a margin that rounds to zero is "0.0" without a sign.
+// a margin that rounds to zero is "0.0" without a sign, and one of 10⁴ or
+// more (a requirement met many times over) is given to three significant
+// figures, "+4.30×10¹⁰ %".
 func Margin(v float64, unit string) string {
 	if math.IsNaN(v) {
 		return "n/a"
+	}
+	if math.Abs(v) >= 1e4 && !math.IsInf(v, 0) {
+		s := Sci(v, 3)
+		if v > 0 {
+			s = "+" + s
+		}
+		return s + " " + unit
 	}
 	s := strconv.FormatFloat(v, 'f', 1, 64)
 	switch {

@@ -7,7 +7,7 @@ func TestPercentAndMargin(t *testing.T) {
 		{Percent(0), "0 %"}, {Percent(0.0031), "0.31 %"}, {Percent(0.01), "1.0 %"},
 		{Percent(1e-9), "< 0.001 %"}, {Percent(1.6e-8), "< 0.001 %"}, {Percent(-3e-12), "< 0.001 %"}, {Percent(2e-5), "0.0020 %"},
 		{SignedPercent(0.063), "+6.3 %"}, {SignedPercent(-0.0052), "−0.52 %"}, {SignedPercent(-1e-9), "< 0.001 %"}, {SignedPercent(0), "0 %"},
-		{Margin(-0.04, "%"), "0.0 %"}, {Margin(0.04, "%"), "0.0 %"}, {Margin(-3.14, "K"), "−3.1 K"}, {Margin(12.46, "%"), "+12.5 %"},
+		{Margin(-0.04, "%"), "0.0 %"}, {Margin(0.04, "%"), "0.0 %"}, {Margin(-3.14, "K"), "−3.1 K"}, {Margin(12.46, "%"), "+12.5 %"}, {Margin(9999.94, "%"), "+9999.9 %"}, {Margin(4.30198e10, "%"), "+4.30×10¹⁰ %"}, {Margin(-2.5e4, "K"), "−2.50×10⁴ K"},
 		{Count(1, "check", "checks"), "1 check"}, {Count(2, "check", "checks"), "2 checks"}, {Count(0, "check", "checks"), "0 checks"},
 	} {
 		if c.got != c.want {
