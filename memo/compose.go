@@ -506,11 +506,20 @@ func displayUnit(u string) string { return format.Unit(u) }
 
 func (c *composer) purpose() {
 	c.heading(1, "Purpose and description")
-	if len(c.j.Spec.Narrative) == 0 {
+	narrative := c.j.Spec.Narrative
+	// Headings alone (a spec whose only prose is its title) describe
+	// nothing: the memo says so rather than leave them on their own.
+	prose := false
+	for _, b := range narrative {
+		if _, ok := b.(doc.Heading); !ok {
+			prose = true
+		}
+	}
+	if !prose {
 		c.para(templates.Text("purpose-default", nil))
 		return
 	}
-	for _, b := range c.j.Spec.Narrative {
+	for _, b := range narrative {
 		// The spec's own headings sit below the memo's section heading.
 		if h, ok := b.(doc.Heading); ok {
 			h.Level = min(h.Level+1, 3)

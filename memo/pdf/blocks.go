@@ -2,6 +2,7 @@ package pdf
 
 import (
 	"fmt"
+	"math"
 	"strings"
 
 	"coilmemo/doc"
@@ -80,10 +81,25 @@ func (r *renderer) heading(h doc.Heading, next doc.Block) {
 	// one in the bottom 15 % of the text area.
 	keep := r.minHeight(next)
 	if r.depth == 0 && len(r.rest) > 0 {
-		keep = r.keepAfterHeading(next, r.rest[1:])
+		keep = r.keepFrom(0)
+	}
+	floor := bodyTop + headingFloor*(bodyBottom-bodyTop)
+	// The headings right below it start no lower than the floor either.
+	below := r.y + max(r.space, hl.hs.before) + hl.h + hl.hs.after
+	for k := 0; r.depth == 0 && k+1 < len(r.rest); k++ {
+		hn, ok := r.rest[k].(doc.Heading)
+		if !ok {
+			break
+		}
+		nl := r.layoutHeading(hn, 0)
+		if below+nl.hs.before > floor {
+			below = math.Inf(1)
+			break
+		}
+		below += nl.hs.before + nl.h + nl.hs.after
 	}
 	if !r.fresh && (hl.h+hl.hs.after+keep > r.room(hl.hs.before) ||
-		r.y+max(r.space, hl.hs.before) > bodyTop+headingFloor*(bodyBottom-bodyTop)) {
+		r.y+max(r.space, hl.hs.before) > floor || math.IsInf(below, 1)) {
 		r.newPage()
 	}
 	r.need(hl.hs.before, hl.h)
@@ -143,6 +159,21 @@ const headingFloor = 0.85
 // leadInLines is the longest paragraph that counts as a figure's lead-in:
 // kept on the page of the figure it introduces.
 const leadInLines = 5
+
+// keepFrom is the height that must follow a heading whose next block is
+// r.rest[k]: keepAfterHeading's, or for a heading right below it (a
+// section's first subsection) that heading and what it keeps, so that
+// neither is left alone at a page foot.
+func (r *renderer) keepFrom(k int) float64 {
+	if k >= len(r.rest) {
+		return 0
+	}
+	if hn, ok := r.rest[k].(doc.Heading); ok && k+1 < len(r.rest) {
+		nl := r.layoutHeading(hn, 0)
+		return nl.hs.before + nl.h + nl.hs.after + r.keepFrom(k+1)
+	}
+	return r.keepAfterHeading(r.rest[k], r.rest[k+1:])
+}
 
 // keepAfterHeading is the height that must follow a heading on its page:
 // the least of the next block, or, when that block is a figure's short

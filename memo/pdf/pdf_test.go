@@ -351,3 +351,23 @@ func TestAstralCharacters(t *testing.T) {
 		t.Fatalf("a document with emoji: %v", err)
 	}
 }
+
+// A section heading followed at once by its first subsection: the two and
+// the subsection's first paragraph share a page, wherever the page fills.
+func TestHeadingChainKeptWithNext(t *testing.T) {
+	for fill := 30; fill < 44; fill++ {
+		d := &doc.Document{Meta: doc.Meta{DocID: "K"}}
+		for i := 0; i < fill; i++ {
+			d.Blocks = append(d.Blocks, doc.Text(fmt.Sprintf("Line %d.", i)))
+		}
+		d.Blocks = append(d.Blocks, doc.Heading{Level: 1, Text: "Section"}, doc.Heading{Level: 2, Text: "Subsection"},
+			doc.Text("Body."))
+		pageOf := map[string]int{}
+		if _, err := render(d, options{compress: true, onText: func(page int, s string) { pageOf[s] = page }}); err != nil {
+			t.Fatal(err)
+		}
+		if a, b, c := pageOf["Section"], pageOf["Subsection"], pageOf["Body."]; a == 0 || a != b || b != c {
+			t.Errorf("fill %d: section heading on page %d, subsection on %d, its text on %d", fill, a, b, c)
+		}
+	}
+}
