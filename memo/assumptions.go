@@ -45,6 +45,13 @@ func (c *composer) assumptions() {
 	}
 	c.add(doc.List{Items: items})
 	items = nil
+	// A flag that reads the same for several coils (like coils of a set)
+	// is given once, naming them all.
+	type group struct {
+		f     validity
+		names []string
+	}
+	var groups []*group
 	for i, co := range d.Coils {
 		if i >= len(r.Coils) {
 			break
@@ -54,9 +61,19 @@ func (c *composer) assumptions() {
 		if c.pickUp(i) {
 			flags = pickUpFlags(co, cr, &c.j.Coils[i], d) // memo/receiver.go
 		}
+	next:
 		for _, f := range flags {
-			item(fmt.Sprintf("%s, %s", f.what, co.Name), f.flagged, f.text)
+			for _, g := range groups {
+				if g.f == f {
+					g.names = append(g.names, co.Name)
+					continue next
+				}
+			}
+			groups = append(groups, &group{f: f, names: []string{co.Name}})
 		}
+	}
+	for _, g := range groups {
+		item(fmt.Sprintf("%s, %s", g.f.what, joinAnd(g.names)), g.f.flagged, g.f.text)
 	}
 	if len(items) > 0 {
 		c.para("Validity of the models for this design, coil by coil:")

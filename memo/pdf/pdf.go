@@ -15,6 +15,7 @@ package pdf
 import (
 	"bytes"
 	"fmt"
+	"slices"
 	"strings"
 	"time"
 
@@ -298,8 +299,25 @@ func (r *renderer) room(gap float64) float64 {
 func (r *renderer) after(gap float64) { r.space = gap }
 
 func (r *renderer) blockList(bs []doc.Block) {
-	for i, b := range bs {
+	var order []int // the blocks' indices in bs as given, once floatFigure reorders
+	for i := 0; i < len(bs); i++ {
+		if r.depth == 0 {
+			if k := r.floatFigure(bs, i); k > i+2 {
+				if order == nil {
+					order = make([]int, len(bs))
+					for n := range order {
+						order[n] = n
+					}
+				}
+				bs = slices.Concat(bs[:i], bs[i+2:k], bs[i:i+2], bs[k:])
+				order = slices.Concat(order[:i], order[i+2:k], order[i:i+2], order[k:])
+			}
+		}
+		b := bs[i]
 		r.index = i
+		if order != nil {
+			r.index = order[i]
+		}
 		r.kind = kindOf(b)
 		r.rest = bs[i+1:]
 		var next doc.Block
@@ -308,6 +326,54 @@ func (r *renderer) blockList(bs []doc.Block) {
 		}
 		r.block(b, next)
 	}
+}
+
+// floatBlank is the part of the text area a figure's lead-in and figure
+// that move to the next page may leave blank before floatFigure lets the
+// text after them fill it.
+const floatBlank = 0.25
+
+// floatFigure returns k > i+2 when bs[i] is the short lead-in of figure
+// bs[i+1] that, with the figure shrunk as far as figure allows, does not
+// fit in the rest of the page, leaving more than floatBlank of it blank:
+// the text blocks bs[i+2:k] that follow the figure (paragraphs, equations,
+// tables and lists, up to the next heading, figure or the lead-in of the
+// next figure) are then set first, and the lead-in and its figure after
+// them, as a figure floats in typesetting. Otherwise it returns i.
+func (r *renderer) floatFigure(bs []doc.Block, i int) int {
+	if r.fresh || i+2 >= len(bs) {
+		return i
+	}
+	p, ok := bs[i].(doc.Paragraph)
+	if !ok {
+		return i
+	}
+	f, ok := bs[i+1].(doc.Figure)
+	if !ok {
+		return i
+	}
+	n := len(layoutSpans(p.Spans, styBody, r.w, r.w))
+	if n > leadInLines {
+		return i
+	}
+	room := r.room(0)
+	if float64(n)*leadBody+6.5+8+r.leastFigure(f) <= room || room < floatBlank*(bodyBottom-bodyTop) {
+		return i
+	}
+	k := i + 2
+	for ; k < len(bs); k++ {
+		switch bs[k].(type) {
+		case doc.Paragraph, doc.Equation, doc.Table, doc.List:
+			if _, fig := bs[k].(doc.Paragraph); fig && k+1 < len(bs) {
+				if _, next := bs[k+1].(doc.Figure); next {
+					return k
+				}
+			}
+			continue
+		}
+		break
+	}
+	return k
 }
 
 // kindOf names a block's kind in the placement records.

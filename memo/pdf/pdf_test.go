@@ -9,6 +9,8 @@ import (
 	"testing"
 
 	"coilmemo/doc"
+
+	"gonum.org/v1/plot/vg"
 )
 
 func TestDeterministic(t *testing.T) {
@@ -369,5 +371,27 @@ func TestHeadingChainKeptWithNext(t *testing.T) {
 		if a, b, c := pageOf["Section"], pageOf["Subsection"], pageOf["Body."]; a == 0 || a != b || b != c {
 			t.Errorf("fill %d: section heading on page %d, subsection on %d, its text on %d", fill, a, b, c)
 		}
+	}
+}
+
+// A lead-in and a tall figure that do not fit below half a page of text:
+// the text after the figure fills the page first, and the lead-in and its
+// figure start the next page together, rather than leave half a page
+// blank.
+func TestFigureFloatsPastText(t *testing.T) {
+	d := &doc.Document{Meta: doc.Meta{DocID: "F"}}
+	for i := 0; i < 22; i++ {
+		d.Blocks = append(d.Blocks, doc.Text(fmt.Sprintf("Line %d.", i)))
+	}
+	d.Blocks = append(d.Blocks, doc.Text("Figure 1 shows it."),
+		doc.Figure{Number: 1, Caption: "Tall.", Width: 440, Height: 600, Draw: func(vg.Canvas, vg.Length, vg.Length) {}},
+		doc.Text("After one."), doc.Text("After two."), doc.Heading{Level: 1, Text: "Next"}, doc.Text("End."))
+	pageOf := map[string]int{}
+	if _, err := render(d, options{compress: true, onText: func(page int, s string) { pageOf[s] = page }}); err != nil {
+		t.Fatal(err)
+	}
+	if pageOf["Line 21."] != 1 || pageOf["After one."] != 1 || pageOf["After two."] != 1 ||
+		pageOf["Figure 1 shows it."] != 2 || pageOf["Next"] < 2 {
+		t.Errorf("pages: %v", pageOf)
 	}
 }
