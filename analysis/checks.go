@@ -411,8 +411,11 @@ func ringMutual(a, u float64) float64 {
 // of its own temperature, with the same surface heat loss, against the
 // lumped model (one resistance at the winding's mean temperature and the
 // closed-form conduction rise). The two differ by the lumped model's
-// single resistance, of order α·(T_max − T_s) of the rise: the tolerance
-// is 2 % of the rise above ambient plus that (common practice for such a
+// single resistance: the rings' resistances spread by ±α(T_max − T_s)/2
+// about the mean's, and the heat they shift between the inner and outer
+// rings changes the rise by a fraction of that. The tolerance, fixed
+// before the comparison from the design's own figures, is 1 % of the rise
+// above ambient plus α(T_max − T_s)/4 (common practice for such a
 // comparison, no published bound).
 func heatBalanceCheck(c calc.Coil, cr calc.CoilResult) []Check {
 	st := cr.Heat.Steady
