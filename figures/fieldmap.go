@@ -5,6 +5,7 @@ import (
 	"image"
 	"image/color"
 	"math"
+	"slices"
 	"sort"
 	"strconv"
 
@@ -506,29 +507,60 @@ func drawColourBar(c vg.Canvas, r vg.Rectangle, sc MapScale) {
 	}
 	sty := style(TickSize, Muted)
 	sty.YAlign = draw.YCenter
-	// Label every level when they fit, else the decades and the ends.
-	labels := sc.Levels
-	minGap := sty.Height("0") * 1.15
-	fits := true
-	for i := 1; i < len(labels); i++ {
-		if yOf(labels[i])-yOf(labels[i-1]) < minGap {
-			fits = false
-		}
-	}
 	tick := draw.LineStyle{Color: Ink, Width: vg.Points(0.5)}
-	var lastY vg.Length = -1e9
-	for _, v := range sc.Levels {
-		y := yOf(v)
-		dc.StrokeLine2(tick, r.Min.X, y, r.Max.X+vg.Points(2), y)
-		isDecade := math.Abs(math.Log10(v)-math.Round(math.Log10(v))) < 1e-9
-		if (fits || isDecade) && y-lastY >= minGap {
-			dc.FillText(sty, vg.Point{X: r.Max.X + vg.Points(3.5), Y: y}, engLabel(v, "T"))
-			lastY = y
-		}
+	ys := make([]vg.Length, len(sc.Levels))
+	for i, v := range sc.Levels {
+		ys[i] = yOf(v)
+		dc.StrokeLine2(tick, r.Min.X, ys[i], r.Max.X+vg.Points(2), ys[i])
+	}
+	for _, i := range barLabels(sc.Levels, ys, sty.Height("0")*1.15) {
+		dc.FillText(sty, vg.Point{X: r.Max.X + vg.Points(3.5), Y: ys[i]}, engLabel(sc.Levels[i], "T"))
 	}
 	title := style(LabelSize, Ink)
 	title.XAlign = draw.XCenter
 	dc.FillText(title, vg.Point{X: (r.Min.X + r.Max.X) / 2, Y: r.Max.Y + vg.Points(4)}, "|B|")
+}
+
+// barLabels chooses which of a colour bar's levels (at heights ys) get a
+// label at least minGap from every other label: all of them when they fit;
+// else the decades first, then the two ends, then the rest from the
+// bottom, each where it still has room, so that a crowded bar keeps as
+// many labels as fit and always its decades and ends where they can be
+// set. It returns their indices in order.
+func barLabels(levels []float64, ys []vg.Length, minGap vg.Length) []int {
+	var order []int
+	decade := func(v float64) bool { return math.Abs(math.Log10(v)-math.Round(math.Log10(v))) < 1e-9 }
+	for i, v := range levels {
+		if decade(v) {
+			order = append(order, i)
+		}
+	}
+	if n := len(levels); n > 0 {
+		order = append(order, 0, n-1)
+	}
+	for i := range levels {
+		order = append(order, i)
+	}
+	var chosen []int
+	taken := make([]bool, len(levels))
+	for _, i := range order {
+		if taken[i] {
+			continue
+		}
+		ok := true
+		for _, j := range chosen {
+			if d := ys[i] - ys[j]; d < minGap && d > -minGap {
+				ok = false
+				break
+			}
+		}
+		if ok {
+			chosen = append(chosen, i)
+			taken[i] = true
+		}
+	}
+	slices.Sort(chosen)
+	return chosen
 }
 
 // engLabel formats v with the SI prefix under which it reads 1…999, to at
