@@ -336,7 +336,7 @@ func coreStudy(cs *CoilStudy, co calc.Coil, cr *calc.CoilResult, k *calc.CoreRes
 	zHalf := math.Max(old.ZHalf, co.Core.Length/2+0.9*e.R1)
 	nx, nz := mapNodes(xHalf, zHalf, grid)
 	m := &MapData{Z: SymmetricSpace(zHalf, nz), X: SymmetricSpace(xHalf, nx), XHalf: xHalf, ZHalf: zHalf}
-	g := calc.FieldMap(co, w, cr.Current, m.X, m.Z)
+	g := calc.NewCoilSource(co, w, cr.Current).ForMaps().Map(m.X, m.Z)
 	m.B = make([]float64, len(m.Z)*len(m.X))
 	var wg sync.WaitGroup
 	rows := make(chan int)

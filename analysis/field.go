@@ -229,7 +229,7 @@ func coilMap(co calc.Coil, cr calc.CoilResult, cs CoilStudy, grid int) *MapData 
 	if co.Form != calc.Rectangle {
 		skip = func(x, z float64) bool { return inWinding(cs, x, z) }
 	}
-	g := calc.NewCoilSource(co, cr.Winding, cr.Current).MapOutside(m.X, m.Z, skip)
+	g := calc.NewCoilSource(co, cr.Winding, cr.Current).ForMaps().MapOutside(m.X, m.Z, skip)
 	m.B = make([]float64, len(m.Z)*len(m.X))
 	for ix := range m.X {
 		for iz := range m.Z {
@@ -442,7 +442,7 @@ func allCoilsMap(d calc.Design, r calc.Results, grid int) *MapData {
 	}
 	xs := SymmetricSpace(half, grid|1)
 	step := 2 * half / float64(len(xs)-1)
-	fm := calc.NewFieldModel(d)
+	fm := calc.NewFieldModel(d).ForMaps()
 	envs := make([]calc.Envelope, len(hidden)) // once per map, not per node
 	for j, k := range hidden {
 		envs[j] = calc.WindingEnvelope(d.Coils[k], r.Coils[k].Winding)

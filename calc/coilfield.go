@@ -92,6 +92,18 @@ func NewFieldModel(d Design) *FieldModel {
 	return f
 }
 
+// ForMaps returns f with its coils summed to the maps' target
+// (CoilSource.ForMaps; a copy, f is unchanged). A model assembled by hand
+// is returned as it is.
+func (f *FieldModel) ForMaps() *FieldModel {
+	m := *f
+	m.sources = make([]*CoilSource, len(f.sources))
+	for i, s := range f.sources {
+		m.sources[i] = s.ForMaps()
+	}
+	return &m
+}
+
 // At returns the field, T, of all coils at the global point p (the
 // background field is not included). A model from NewFieldModel evaluates
 // each coil by quadrature over its winding (CoilSource, relative error
