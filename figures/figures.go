@@ -111,7 +111,12 @@ func Drawer(p *plot.Plot, curves ...plotter.XYs) DrawFunc {
 // The y-axis label is set here rather than by gonum/plot, which reserves
 // room for it at the arithmetic midpoint of the axis range — far off
 // centre on a log axis — and so squeezes the data area.
+//
+// The returned function may be called any number of times, at any sizes:
+// the plot's legend backdrop is added once, here, and set per call.
 func drawer(p *plot.Plot, top vg.Length, curves []plotter.XYs) DrawFunc {
+	backdrop := &legendBackdrop{}
+	p.Add(backdrop)
 	return func(c vg.Canvas, w, h vg.Length) {
 		dc := draw.Canvas{Canvas: c, Rectangle: vg.Rectangle{Max: vg.Point{X: w, Y: h}}}
 		// Keep a little room so the outermost tick labels are not clipped.
@@ -126,9 +131,7 @@ func drawer(p *plot.Plot, top vg.Length, curves []plotter.XYs) DrawFunc {
 			dc = draw.Crop(dc, lw, 0, 0, 0)
 		}
 		placeLegend(p, dc, curves)
-		if p.Legend.Rectangle(dc).Size().X > 0 {
-			p.Add(legendBackdrop{dc})
-		}
+		backdrop.on = p.Legend.Rectangle(dc).Size().X > 0
 		if label != "" {
 			da := p.DataCanvas(dc)
 			sty.Rotation = math.Pi / 2
@@ -142,10 +145,13 @@ func drawer(p *plot.Plot, top vg.Length, curves []plotter.XYs) DrawFunc {
 }
 
 // legendBackdrop clears the area behind the legend (grid lines) just
-// before the legend is drawn; it must be the last plotter added.
-type legendBackdrop struct{ outer draw.Canvas }
+// before the legend is drawn, when on; it must be the last plotter added.
+type legendBackdrop struct{ on bool }
 
-func (b legendBackdrop) Plot(c draw.Canvas, p *plot.Plot) {
+func (b *legendBackdrop) Plot(c draw.Canvas, p *plot.Plot) {
+	if !b.on {
+		return
+	}
 	// The legend is laid out in the data area without axis padding.
 	lc := c
 	lc.Min.X -= p.X.Padding

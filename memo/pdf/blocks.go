@@ -1000,24 +1000,29 @@ type figureLayout struct {
 const figureCaptionGap = 6
 
 func (r *renderer) layoutFigure(f doc.Figure) figureLayout {
-	w, h := f.Width.Points(), f.Height.Points()
-	if w <= 0 {
-		w = r.w
-	}
-	if h <= 0 {
-		h = w * 0.62
-	}
-	if w > r.w {
-		h *= r.w / w
-		w = r.w
-	}
-	fl := figureLayout{w: w, h: h}
 	num := f.Number
 	if num == 0 {
 		num = r.fig + 1
 	}
+	return layoutFigureIn(f, num, r.w)
+}
+
+// layoutFigureIn lays out figure f, numbered num, in a column colW wide.
+func layoutFigureIn(f doc.Figure, num int, colW float64) figureLayout {
+	w, h := f.Width.Points(), f.Height.Points()
+	if w <= 0 {
+		w = colW
+	}
+	if h <= 0 {
+		h = w * 0.62
+	}
+	if w > colW {
+		h *= colW / w
+		w = colW
+	}
+	fl := figureLayout{w: w, h: h}
 	if f.Caption != "" {
-		fl.cap = captionLines(fmt.Sprintf("Figure %d", num), f.Caption, min(r.w, max(w, 0.75*r.w)))
+		fl.cap = captionLines(fmt.Sprintf("Figure %d", num), f.Caption, min(colW, max(w, 0.75*colW)))
 	}
 	maxH := bodyBottom - bodyTop - float64(len(fl.cap))*leadCaption - figureCaptionGap
 	if fl.h > maxH {
@@ -1072,10 +1077,17 @@ func (r *renderer) figure(f doc.Figure) {
 	}
 	r.need(8, fl.total)
 	x := r.x + (r.w-fl.w)/2
+	if r.dry {
+		r.ahead.submit(f, fl.w, fl.h)
+	}
 	if !r.dry && f.Draw != nil {
 		c := newCanvas(r.pdf, r.fonts, pageH, x, r.y, vgLen(fl.w), vgLen(fl.h))
 		c.Begin()
-		f.Draw(c, vgLen(fl.w), vgLen(fl.h))
+		if t := r.ahead.take(f, fl.w, fl.h); t != nil {
+			t.replay(c)
+		} else {
+			f.Draw(c, vgLen(fl.w), vgLen(fl.h))
+		}
 		c.End()
 		// The figure's graphics state ended with its clip; bring fpdf's
 		// idea of the current state back in line with the page's.

@@ -374,22 +374,41 @@ var imageEncoder = png.Encoder{CompressionLevel: png.BestSpeed}
 // name derived from its content, so equal images are stored once and the
 // output does not depend on drawing order.
 func (c *Canvas) DrawImage(rect vg.Rectangle, img image.Image) {
+	enc, err := encodeImage(img)
+	c.placeImage(rect, enc, err)
+}
+
+// encodedImage is an image PNG-encoded for the PDF, with its name.
+type encodedImage struct {
+	name string
+	png  []byte
+}
+
+// encodeImage encodes img as DrawImage embeds it.
+func encodeImage(img image.Image) (encodedImage, error) {
 	var buf bytes.Buffer
 	if err := imageEncoder.Encode(&buf, img); err != nil {
+		return encodedImage{}, err
+	}
+	sum := sha256.Sum256(buf.Bytes())
+	return encodedImage{name: "img" + hex.EncodeToString(sum[:12]), png: buf.Bytes()}, nil
+}
+
+// placeImage draws an encoded image (or records the encoding's error).
+func (c *Canvas) placeImage(rect vg.Rectangle, im encodedImage, err error) {
+	if err != nil {
 		c.pdf.SetError(err)
 		return
 	}
-	sum := sha256.Sum256(buf.Bytes())
-	name := "img" + hex.EncodeToString(sum[:12])
 	opt := fpdf.ImageOptions{ImageType: "PNG"}
-	if c.pdf.GetImageInfo(name) == nil {
-		c.pdf.RegisterImageOptionsReader(name, opt, &buf)
+	if c.pdf.GetImageInfo(im.name) == nil {
+		c.pdf.RegisterImageOptionsReader(im.name, opt, bytes.NewReader(im.png))
 	}
 	sz := rect.Size()
 	m := c.st.m.then(affine{a: sz.X.Points(), d: sz.Y.Points(), e: rect.Min.X.Points(), f: rect.Min.Y.Points()})
 	c.pdf.TransformBegin()
 	c.pdf.Transform(fpdf.TransformMatrix{A: m.a, B: m.b, C: m.c, D: m.d, E: m.e, F: m.f})
-	c.pdf.ImageOptions(name, 0, c.pageH-1, 1, 1, false, opt, 0, "")
+	c.pdf.ImageOptions(im.name, 0, c.pageH-1, 1, 1, false, opt, 0, "")
 	c.pdf.TransformEnd()
 }
 

@@ -36,6 +36,8 @@ type options struct {
 	// onPlace, if set, sees every string set on a page with the left end
 	// of its baseline, points from the top-left corner (tests).
 	onPlace func(page int, x, y float64, s string)
+	// onSpot draws every figure where it is placed, none ahead (tests).
+	onSpot bool
 }
 
 func render(d *doc.Document, o options) (out []byte, err error) {
@@ -73,6 +75,10 @@ func layOutTwice(d *doc.Document, o options) (*renderer, error) {
 	}
 	done := make(chan result, 1)
 	eqs := &eqCache{m: map[eqKey]eqLayout{}} // shared by both passes
+	var figs *ahead                          // figures drawn ahead (tape.go)
+	if !o.onSpot {
+		figs = newAhead(countFigures(d.Blocks))
+	}
 	go func() {
 		var res result
 		defer func() {
@@ -81,13 +87,16 @@ func layOutTwice(d *doc.Document, o options) (*renderer, error) {
 			}
 			done <- res
 		}()
+		defer figs.close()
 		dry := newRenderer(d, options{}, 0, true)
 		dry.eqs = eqs
+		dry.ahead = figs // the dry pass submits the figures it places
 		res.err = dry.run()
 		res.pages, res.heads = dry.pdf.PageNo(), dry.headPages
 	}()
 	r := newRenderer(d, o, 0, false)
 	r.eqs = eqs
+	r.ahead = figs
 	var dry result
 	var got bool
 	wait := func() result {
@@ -135,6 +144,7 @@ type renderer struct {
 	headingPages func() []int
 	onText       func(page int, s string)
 	eqs          *eqCache // equation layouts, shared with the other pass
+	ahead        *ahead   // figures drawn ahead (tape.go); nil: on the spot
 	onPlace      func(page int, x, y float64, s string)
 
 	x, w  float64 // current column

@@ -29,7 +29,7 @@ func prepare() prepared {
 	p := prepared{pdf: fpdf.NewCustom(&fpdf.InitType{OrientationStr: "P", UnitStr: "pt", SizeStr: "A4"}), added: map[string]bool{}}
 	for _, f := range commonFaces {
 		s := fonts.Lookup(f[0], f[1])
-		p.pdf.AddUTF8FontFromBytes(s.Family, s.Style, s.TTF)
+		addFace(p.pdf, s)
 		p.added[f[0]+"/"+f[1]] = true
 	}
 	return p
