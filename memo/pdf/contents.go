@@ -8,8 +8,9 @@ import (
 
 // contents sets the table of contents: an unnumbered title set like a
 // level-1 heading, then one line per heading, indented by level, with a
-// dotted leader to its page number. The pages come from the layout pass
-// (tocPages); the entries are the headings in order, the same headings
+// dotted leader to its page number. The numbers are set when the whole
+// layout is known (lateNum, finishPages), each the page of the heading it
+// lists; the entries are the headings in order, the same headings
 // that become the bookmarks, so the contents and the outline agree. The
 // contents' own height does not depend on the page numbers, so both
 // passes lay it out alike.
@@ -37,9 +38,6 @@ func (r *renderer) contents(c doc.Contents) {
 	r.after(hs.after)
 
 	pageW := textWidthOf("sans", "", sizeBody, "000")
-	if r.tocPages == nil && r.headingPages != nil && !r.dry {
-		r.tocPages = r.headingPages()
-	}
 	for i, e := range c.Entries {
 		st := styBody
 		gap := 0.0
@@ -56,8 +54,8 @@ func (r *renderer) contents(c doc.Contents) {
 		}
 		x += 20
 		page := ""
-		if i < len(r.tocPages) {
-			page = fmt.Sprint(r.tocPages[i])
+		if !r.late && i < len(r.headPages) {
+			page = fmt.Sprint(r.headPages[i]) // a heading set before the contents
 		}
 		room := r.x + r.w - pageW - 8 - x
 		text := fit(e.Text, st, room)
@@ -77,11 +75,22 @@ func (r *renderer) contents(c doc.Contents) {
 				r.simpleText(leader, dots, r.x+r.w-pageW-4-lw, base)
 			}
 		}
-		if page != "" {
+		if r.late {
+			r.lateNums = append(r.lateNums, lateNum{index: i, page: r.pdf.PageNo(), st: st, right: r.x + r.w, base: base})
+		} else if page != "" {
 			pw := textWidthOf(fam, sty, st.size, page)
 			r.simpleText(page, st, r.x+r.w-pw, base)
 		}
 		r.y += leadBody
 	}
 	r.after(14)
+}
+
+// lateNum is a contents entry's page number left to finishPages: the
+// entry (index into the headings) and where its number goes, right-aligned
+// at right on the baseline base of page page.
+type lateNum struct {
+	index, page int
+	st          textStyle
+	right, base float64
 }

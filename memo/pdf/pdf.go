@@ -57,20 +57,22 @@ func render(d *doc.Document, o options) (out []byte, err error) {
 	return buf.Bytes(), nil
 }
 
-// layOutTwice runs the two layout passes. Pass 1 (dry) lays the document
-// out without setting any text, to learn the page count; pass 2 sets
-// everything, with "Page X of Y" known exactly (so it can be right-aligned
-// with the true width of Y). The passes run at the same time, each on its
-// own fpdf document: pass 2 needs the count only when it sets its first
-// footer, at the end of page 1 (pageCount waits for it there), and the dry
-// pass, which sets no text and draws no figures, is several times faster,
-// so on a machine with a free core its cost is hidden. The set pass does
-// not depend on when the count arrives, so the bytes are those of the
-// passes run one after the other.
+// layOutTwice runs the two layout passes at the same time, each on its
+// own fpdf document. The set pass sets everything; what depends on the
+// whole layout — "Page X of Y" in every footer (right-aligned with the
+// true width of Y) and the page numbers of the contents — it writes into
+// its pages when they are all laid out (finishPages), from its own page
+// count and heading pages. The dry pass lays the document out without
+// setting any text and, being several times faster, runs ahead: it hands
+// each figure it places, at its size on the page, to the worker that
+// draws the figures ahead (tape.go); at the end its page count and heading
+// pages must equal the set pass's. Nothing the set pass writes depends on
+// the timing, so the bytes are those of the passes run one after the
+// other.
 func layOutTwice(d *doc.Document, o options) (*renderer, error) {
 	type result struct {
 		pages int
-		heads []int // the page of every heading, for the contents
+		heads []int // the page of every heading
 		err   error
 	}
 	done := make(chan result, 1)
@@ -97,33 +99,65 @@ func layOutTwice(d *doc.Document, o options) (*renderer, error) {
 	r := newRenderer(d, o, 0, false)
 	r.eqs = eqs
 	r.ahead = figs
-	var dry result
-	var got bool
-	wait := func() result {
-		if !got {
-			dry, got = <-done, true
-		}
-		return dry
-	}
-	r.pageCount = func() int { return wait().pages }
-	r.headingPages = func() []int { return wait().heads }
+	r.late = true
 	err := func() (err error) {
 		defer func() { // a panic in the set pass: wait for the dry pass, then re-raise
 			if p := recover(); p != nil {
-				wait()
+				<-done
 				panic(p)
 			}
 		}()
-		return r.run()
+		if err := r.run(); err != nil {
+			return err
+		}
+		r.finishPages()
+		return r.pdf.Error()
 	}()
-	if dry := wait(); dry.err != nil {
+	if dry := <-done; dry.err != nil {
 		return nil, dry.err
 	} else if err != nil {
 		return nil, err
-	} else if r.pdf.PageNo() != dry.pages {
+	} else if r.pdf.PageNo() != dry.pages || !slices.Equal(r.headPages, dry.heads) {
 		return nil, fmt.Errorf("pdf: layout passes disagree: %d pages, then %d", dry.pages, r.pdf.PageNo())
 	}
 	return r, nil
+}
+
+// finishPages writes into every page of the set pass what needed the
+// whole layout: the footers with the page count and the contents' page
+// numbers. Each string is set with its font, size and colour sent to the
+// page again (lateText), as the page's own content may have left others
+// in force.
+func (r *renderer) finishPages() {
+	n := r.pdf.PageNo()
+	r.total = n
+	r.late = false
+	for p := 1; p <= n; p++ {
+		r.pdf.SetPage(p)
+		r.footerText()
+	}
+	for _, e := range r.lateNums {
+		if e.index >= len(r.headPages) {
+			continue
+		}
+		r.pdf.SetPage(e.page)
+		page := fmt.Sprint(r.headPages[e.index])
+		fam, sty := e.st.face()
+		pw := textWidthOf(fam, sty, e.st.size, page)
+		r.lateText(page, e.st, e.right-pw, e.base)
+	}
+	r.pdf.SetPage(n)
+	r.finished = true
+}
+
+// lateText is simpleText on a page set before: the font and colour are
+// sent to the page whatever fpdf last sent elsewhere.
+func (r *renderer) lateText(s string, st textStyle, x, y float64) {
+	f := makeFrag(st, s)
+	r.fonts.use(f.fam, f.sty, f.size)
+	r.pdf.SetFontSize(f.size) // sends Tf always
+	r.pdf.SetFillColor(f.color.r, f.color.g, f.color.b)
+	r.text(f, x, y)
 }
 
 // epoch stands in for a missing creation date so output stays reproducible.
@@ -136,16 +170,14 @@ type renderer struct {
 	blocks []doc.Block
 	total  int  // page count, 0 while unknown
 	dry    bool // lay out only
-	// pageCount, if set, gives the page count when total is 0 (it may
-	// wait for the dry pass; see layOutTwice).
-	pageCount func() int
-	// headingPages, if set, gives the dry pass's heading pages (tocPages)
-	// when the contents are set; it may wait for the dry pass.
-	headingPages func() []int
-	onText       func(page int, s string)
-	eqs          *eqCache // equation layouts, shared with the other pass
-	ahead        *ahead   // figures drawn ahead (tape.go); nil: on the spot
-	onPlace      func(page int, x, y float64, s string)
+	// late: the footers and the contents' page numbers are left to
+	// finishPages (the set pass of layOutTwice); finished once it has run.
+	late, finished bool
+	lateNums       []lateNum
+	onText         func(page int, s string)
+	eqs            *eqCache // equation layouts, shared with the other pass
+	ahead          *ahead   // figures drawn ahead (tape.go); nil: on the spot
+	onPlace        func(page int, x, y float64, s string)
 
 	x, w  float64 // current column
 	y     float64 // cursor, points from the top edge
@@ -158,7 +190,6 @@ type renderer struct {
 	outline      int     // level of the last bookmark, -1 before the first
 
 	headPages []int // the page of every heading, in order
-	tocPages  []int // headPages of the layout pass, for the contents
 	boxes     []Box // placement records
 	kind      string
 	index     int         // the top-level block being set
@@ -486,10 +517,19 @@ func (r *renderer) header() {
 	r.rule(marginLeft, mm(14.2), pageW-marginRight, 0.6, colAccent)
 }
 
+// footer is fpdf's footer callback: the footer is set here only by a
+// renderer told its page count beforehand (newRenderer's total); the set
+// pass of layOutTwice sets every footer in finishPages.
 func (r *renderer) footer() {
-	if r.dry {
+	if r.dry || r.late || r.finished {
 		return
 	}
+	r.footerText()
+}
+
+// footerText sets the current page's footer: the document id, revision
+// and date, and "Page X of Y".
+func (r *renderer) footerText() {
 	r.rule(marginLeft, pageH-mm(14.5), pageW-marginRight, 0.35, colRule)
 	base := pageH - mm(10.8)
 	var left []string
@@ -502,17 +542,14 @@ func (r *renderer) footer() {
 	if !r.meta.Created.IsZero() {
 		left = append(left, r.meta.Created.UTC().Format("2006-01-02"))
 	}
-	if r.total == 0 && r.pageCount != nil {
-		r.total = r.pageCount()
-	}
 	page := fmt.Sprintf("Page %d of %d", r.pdf.PageNo(), r.total)
 	w := textWidthOf("sans", "", styHeader.size, page)
 	if len(left) > 0 {
 		if s := fit(strings.Join(left, "  ·  "), styHeader, textWidth-w-mm(8)); s != "" {
-			r.simpleText(s, styHeader, marginLeft, base)
+			r.lateText(s, styHeader, marginLeft, base)
 		}
 	}
-	r.simpleText(page, styHeader, pageW-marginRight-w, base)
+	r.lateText(page, styHeader, pageW-marginRight-w, base)
 }
 
 // fit shortens s with an ellipsis until it is at most w wide: one cut,
