@@ -2,7 +2,6 @@ package figures
 
 import (
 	"image/color"
-	"math"
 )
 
 // Viridis is the perceptually uniform sequential colour map "viridis" by
@@ -24,17 +23,23 @@ func Viridis(t float64) color.NRGBA {
 		t = 1
 	}
 	x := t * float64(len(viridis)-1)
-	i := int(math.Floor(x))
-	if i >= len(viridis)-1 {
-		i = len(viridis) - 2
-	}
+	i := min(int(x), len(viridis)-2) // x ≥ 0: int truncates as Floor
 	f := x - float64(i)
-	a, b := viridis[i], viridis[i+1]
-	ch := func(k int) uint8 {
-		v := a[k] + f*(b[k]-a[k])
-		return uint8(math.Round(255 * math.Max(0, math.Min(1, v))))
+	a, b := &viridis[i], &viridis[i+1]
+	return color.NRGBA{R: channel(a[0] + f*(b[0]-a[0])), G: channel(a[1] + f*(b[1]-a[1])), B: channel(a[2] + f*(b[2]-a[2])), A: 0xff}
+}
+
+// channel is the 8-bit value of a component in [0, 1], rounded to nearest
+// (halves up), clamped.
+func channel(v float64) uint8 {
+	v = 255*v + 0.5
+	if !(v > 0) {
+		return 0
 	}
-	return color.NRGBA{R: ch(0), G: ch(1), B: ch(2), A: 0xff}
+	if v >= 255 {
+		return 255
+	}
+	return uint8(v)
 }
 
 // viridis is the published table: sRGB components in [0, 1], entry k at

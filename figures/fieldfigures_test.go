@@ -369,3 +369,23 @@ func sketchCrossings(d SketchData, w, h vg.Length) []string {
 	}
 	return out
 }
+
+// TestViridisInterpolation: on a dense grid of t, Viridis is the linear
+// interpolation of the table rounded to nearest, as the defining formula
+// 255·(a + f(b − a)) with math.Round gives it.
+func TestViridisInterpolation(t *testing.T) {
+	for k := 0; k <= 200000; k++ {
+		tt := float64(k) / 200000
+		x := tt * 255
+		i := min(int(math.Floor(x)), 254)
+		f := x - float64(i)
+		var want [3]uint8
+		for c := range 3 {
+			v := viridis[i][c] + f*(viridis[i+1][c]-viridis[i][c])
+			want[c] = uint8(math.Round(255 * math.Max(0, math.Min(1, v))))
+		}
+		if got := Viridis(tt); [3]uint8{got.R, got.G, got.B} != want {
+			t.Fatalf("Viridis(%g) = %v, want %v", tt, got, want)
+		}
+	}
+}

@@ -7,12 +7,15 @@ import (
 	"testing"
 
 	"gonum.org/v1/plot/vg/recorder"
+
+	"coilmemo/memo/pdf"
 )
 
 // BenchmarkMapImagePNG encodes the field-map images of the examples (the
 // raster of each |B| map figure, captured from a recording canvas) at the
-// PNG encoder's compression levels, reporting the encoded size: the
-// measurement behind the level memo/pdf's Canvas.DrawImage uses.
+// PNG encoder's compression levels and with the memo's own encoder
+// (pdf.EncodePNG: RGB, Up filter, fastest level), reporting the encoded
+// size: the measurement behind memo/pdf's choice.
 //
 //	go test -run '^$' -bench MapImagePNG ./memo
 func BenchmarkMapImagePNG(b *testing.B) {
@@ -61,5 +64,20 @@ func BenchmarkMapImagePNG(b *testing.B) {
 			b.ReportMetric(float64(len(imgs)), "images")
 		})
 	}
+	b.Run("memo", func(b *testing.B) { // what the memo embeds (pdf.EncodePNG: RGB, Up filter)
+		var total int
+		for range b.N {
+			total = 0
+			for _, img := range imgs {
+				out, err := pdf.EncodePNG(img)
+				if err != nil {
+					b.Fatal(err)
+				}
+				total += len(out)
+			}
+		}
+		b.ReportMetric(float64(total)/1e3, "kB")
+		b.ReportMetric(float64(len(imgs)), "images")
+	})
 	_ = which
 }

@@ -386,12 +386,12 @@ type encodedImage struct {
 
 // encodeImage encodes img as DrawImage embeds it.
 func encodeImage(img image.Image) (encodedImage, error) {
-	var buf bytes.Buffer
-	if err := imageEncoder.Encode(&buf, img); err != nil {
+	b, err := encodePNG(img)
+	if err != nil {
 		return encodedImage{}, err
 	}
-	sum := sha256.Sum256(buf.Bytes())
-	return encodedImage{name: "img" + hex.EncodeToString(sum[:12]), png: buf.Bytes()}, nil
+	sum := sha256.Sum256(b)
+	return encodedImage{name: "img" + hex.EncodeToString(sum[:12]), png: b}, nil
 }
 
 // placeImage draws an encoded image (or records the encoding's error).
