@@ -306,6 +306,7 @@ var unitTable = map[string]unitDef{
 	"g":      {1, -3, eMass, true, 0},
 	"s":      {1, 0, eTime, true, 0},
 	"min":    {60, 0, eTime, false, 0},
+	"h":      {3600, 0, eTime, false, 0}, // hour (SI Brochure, 9th ed., Table 8)
 	"A":      {1, 0, eCur, true, 0},
 	"V":      {1, 0, eVolt, true, 0},
 	"W":      {1, 0, eWatt, true, 0},
@@ -379,6 +380,10 @@ func unknownUnit(name string) error {
 	case "AWG", "awg":
 		return fmt.Errorf("unknown unit %q (a wire gauge is written AWG 24, not as a unit)", name)
 	}
+	if alt, ok := spelledUnits[strings.ToLower(name)]; ok {
+		d, _ := lookupAtom(alt)
+		return &unknownUnitError{name: name, alt: alt, altDim: d.dim}
+	}
 	for _, alt := range []string{strings.ToLower(name), strings.ToUpper(name)} {
 		if alt != name {
 			if d, ok := lookupAtom(alt); ok {
@@ -387,6 +392,16 @@ func unknownUnit(name string) error {
 		}
 	}
 	return &unknownUnitError{name: name}
+}
+
+// spelledUnits are names and abbreviations written for a unit symbol,
+// with the symbol suggested for them.
+var spelledUnits = map[string]string{
+	"sec": "s", "secs": "s", "second": "s", "seconds": "s",
+	"mins": "min", "minute": "min", "minutes": "min",
+	"hr": "h", "hrs": "h", "hour": "h", "hours": "h",
+	"ohms": "ohm", "amp": "A", "amps": "A", "volt": "V", "volts": "V", "watt": "W", "watts": "W",
+	"tesla": "T", "henry": "H", "hertz": "Hz", "metre": "m", "meter": "m", "metres": "m", "meters": "m",
 }
 
 // unknownUnitError is a unit symbol the table lacks, with the symbol of

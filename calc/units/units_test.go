@@ -354,8 +354,9 @@ func FuzzParse(f *testing.F) {
 	})
 }
 
-// A suggestion of the other letter case is made only when it gives the
-// wanted dimension: a time written "2 h" is not told about the henry.
+// A suggestion of the other letter case, or of the symbol of a spelled-out
+// name, is made only when it gives the wanted dimension: a time written
+// "2 v" is not told about the volt, nor an inductance "2 hrs" about the hour.
 func TestSuggestionWithinDimension(t *testing.T) {
 	for _, c := range []struct {
 		s      string
@@ -363,8 +364,12 @@ func TestSuggestionWithinDimension(t *testing.T) {
 		has    string
 		hasNot string
 	}{
-		{"2 h", Time, "want a time (s)", `"H"`},
-		{"2 h", Inductance, `did you mean "H"?`, ""},
+		{"2 v", Time, "want a time (s)", `"V"`},
+		{"2 h", Inductance, "is a time", `"H"`}, // the hour
+		{"2 hrs", Time, `did you mean "h"?`, ""},
+		{"2 hrs", Inductance, "want an inductance", `"h"`},
+		{"5 secs", Time, `did you mean "s"?`, ""},
+		{"5 minutes", Time, `did you mean "min"?`, ""},
 		{"3 Hz", Time, "is a frequency", ""}, // known unit, wrong dimension
 		{"5 v", Voltage, `did you mean "V"?`, ""},
 		{"5 v", Length, "want a length (m), e.g. mm", `"V"`},
