@@ -504,13 +504,15 @@ func TestCLIHabits(t *testing.T) {
 		t.Errorf("a flag error printed the help:\n%s", r.stdout)
 	}
 
-	// unit suggestions stay within the wanted dimension
+	// unit suggestions stay within the wanted dimension; the hour is a time
 	spec := strings.Replace(small, "current = 0.2 A\n", "current = 0.2 A\nduty = 50 %\non-time = 2 h\n", 1)
 	write(t, filepath.Join(dir, "h.md"), spec)
-	r = cli(t, dir, "calc", "h.md")
-	r.expect(t, 2, `h.md:10: on-time: unknown unit "h"; want a time (s)`)
-	if strings.Contains(r.stderr, `"H"`) {
-		t.Errorf("a time was told about the henry: %s", r.stderr)
+	cli(t, dir, "calc", "h.md").expect(t, 0, "")
+	write(t, filepath.Join(dir, "v.md"), strings.Replace(spec, "on-time = 2 h", "on-time = 2 v", 1))
+	r = cli(t, dir, "calc", "v.md")
+	r.expect(t, 2, `v.md:10: on-time: unknown unit "v"; want a time (s)`)
+	if strings.Contains(r.stderr, `"V"`) {
+		t.Errorf("a time was told about the volt: %s", r.stderr)
 	}
 
 	// watch on a missing file is a usage error, at once
