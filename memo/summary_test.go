@@ -6,6 +6,8 @@ import (
 	"strings"
 	"testing"
 
+	"coilmemo/doc"
+
 	"github.com/yuin/goldmark"
 	"github.com/yuin/goldmark/extension"
 )
@@ -80,5 +82,29 @@ func TestAboveMeltingOnPageOne(t *testing.T) {
 		if strings.Contains(spanText(co.Spans), Eng(Celsius(cr.Temperature), "°C", 3)) {
 			t.Errorf("caution %q quotes the extrapolated %s", co.Title, Eng(Celsius(cr.Temperature), "°C", 3))
 		}
+	}
+}
+
+// TestSweepMarksBeyondClass: a sweep row whose winding settles above its
+// insulation class carries a mark and the table a note saying the value is
+// extrapolated; one above the conductor's melting point quotes no number.
+func TestSweepMarksBeyondClass(t *testing.T) {
+	j := mustEvaluate(t, "```coil\nname = c1\nform = solenoid\nmean-diameter = 20 mm\nlength = 20 mm\nradial-build = 4 mm\nturns = 400\nwire = AWG 30\ninsulation-class = B\nvoltage = 2 V\n```\n\n```sweep\nvoltage = 2 V .. 62 V step 30 V\n```\n")
+	c := &composer{j: j, cautions: Cautions(j)}
+	c.sweep()
+	var cells []string
+	var note bool
+	for _, b := range c.blocks {
+		switch b := b.(type) {
+		case doc.Table:
+			for _, r := range b.Rows {
+				cells = append(cells, r[len(r)-2].Text) // the hottest winding column
+			}
+		case doc.Paragraph:
+			note = note || strings.HasPrefix(spanText(b.Spans), "† Above the insulation class")
+		}
+	}
+	if len(cells) != 3 || strings.Contains(cells[0], "†") || !strings.HasSuffix(cells[1], "°C †") || cells[2] != "above melting" || !note {
+		t.Errorf("hottest winding cells %q, note %v", cells, note)
 	}
 }

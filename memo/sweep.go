@@ -176,6 +176,7 @@ func (c *composer) sweep() {
 	extraHead, extra, plotValue := v.extraHead, v.extra, v.plotValue
 	var rows [][]doc.Cell
 	var x, first, temp []float64
+	marked := false // a temperature above a coil's insulation class
 	for _, st := range c.j.Sweep {
 		cells := []doc.Cell{{Text: num(st.Value * scale)}}
 		if !st.Feasible {
@@ -198,6 +199,11 @@ func (c *composer) sweep() {
 		tText := Eng(Celsius(hot), "°C", 3)
 		if math.IsNaN(hot) {
 			tText = "runaway"
+		} else if aboveMelting(r) {
+			tText = "above melting"
+		} else if beyondClass(r) {
+			tText += " †"
+			marked = true
 		}
 		cells = append(cells,
 			doc.Cell{Text: Eng(r.Moment.Norm(), "A·m²", 3)},
@@ -237,6 +243,9 @@ func (c *composer) sweep() {
 		Header: header,
 		Rows:   rows,
 		Align:  align, Widths: widths})
+	if marked {
+		c.para("† Above the insulation class of a coil: its insulation would fail before the winding got there, so the temperature is the steady heat balance carried past the point where the model (and the coil) stops holding, not a temperature the coil would run at.")
+	}
 	if len(x) >= 2 {
 		c.sweepFigures(label, x, first, temp, v)
 	}
@@ -281,4 +290,26 @@ func (c *composer) sweepMet(q, label string, x, vals []float64) string {
 		}
 	}
 	return ""
+}
+
+// aboveMelting reports whether a coil of r has no steady state below the
+// melting point of its conductor (the number would be meaningless).
+func aboveMelting(r calc.Results) bool {
+	for _, cr := range r.Coils {
+		if cr.Verdict.AboveMelting {
+			return true
+		}
+	}
+	return false
+}
+
+// beyondClass reports whether a coil of r settles above its insulation
+// class (a negative insulation margin).
+func beyondClass(r calc.Results) bool {
+	for _, cr := range r.Coils {
+		if cr.InsulationMargin < 0 {
+			return true
+		}
+	}
+	return false
 }
