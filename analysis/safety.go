@@ -78,7 +78,14 @@ type ImplantReach struct {
 	Searched      bool    // false for a design without extent
 	Origin        float64 // T, |B| at the origin
 	Axial, Radial float64 // m
-	Probes        []int   // indices of probes at or above the level
+	// Farthest is the largest distance from the origin, beyond the sphere
+	// that holds every winding, at which |B| still reaches the level along
+	// any direction searched (±x, ±y, ±z, ± the
+	// design's net moment, ± each coil's axis and ± the direction of each
+	// coil's centre), Toward that direction; 0 when it is not reached.
+	Farthest float64  // m
+	Toward   calc.Vec // unit vector
+	Probes   []int    // indices of probes at or above the level
 	Windings      []WindingReach
 }
 
@@ -95,7 +102,7 @@ type WindingReach struct {
 
 // Any reports whether the level is reached anywhere searched.
 func (ir ImplantReach) Any() bool {
-	if ir.Origin >= ImplantField || ir.Axial > 0 || ir.Radial > 0 || len(ir.Probes) > 0 {
+	if ir.Origin >= ImplantField || ir.Axial > 0 || ir.Radial > 0 || ir.Farthest > 0 || len(ir.Probes) > 0 {
 		return true
 	}
 	for _, w := range ir.Windings {
@@ -249,6 +256,7 @@ func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach
 		reach(fm, calc.Vec{}, calc.Vec{0, 0, -1}, ImplantField, ext*0.01, ext*1e3))
 	ir.Radial = math.Max(reach(fm, calc.Vec{}, calc.Vec{1, 0, 0}, ImplantField, ext, ext*1e3),
 		reach(fm, calc.Vec{}, calc.Vec{0, 1, 0}, ImplantField, ext, ext*1e3))
+	ir.Farthest, ir.Toward = farthestReach(fm, d, r, ext)
 	for i, p := range r.Probes {
 		if p.B.Norm() >= ImplantField {
 			ir.Probes = append(ir.Probes, i)
@@ -259,6 +267,51 @@ func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach
 	ir.Windings = make([]WindingReach, len(d.Coils))
 	eachIndex(len(d.Coils), func(i int) { ir.Windings[i] = windingReach(fm, d.Coils[i], coils[i], ext) })
 	return ir
+}
+
+// farthestReach is the largest distance from the origin at which fm
+// reaches ImplantField along the directions ImplantReach.Farthest names,
+// each searched inward from 1000 design extents to the sphere of one
+// extent that holds every winding (reach), on every core.
+// Far from the coils the field is a dipole's, strongest along the moment;
+// nearer, along the coils' axes and toward their centres.
+func farthestReach(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, ext float64) (float64, calc.Vec) {
+	var dirs []calc.Vec
+	add := func(v calc.Vec) {
+		n := v.Norm()
+		if !(n > 0) || math.IsInf(n, 0) {
+			return
+		}
+		for _, u := range []calc.Vec{v.Scale(1 / n), v.Scale(-1 / n)} {
+			dup := false
+			for _, w := range dirs {
+				if u.Sub(w).Norm() < 1e-9 {
+					dup = true
+					break
+				}
+			}
+			if !dup {
+				dirs = append(dirs, u)
+			}
+		}
+	}
+	add(calc.Vec{0, 0, 1})
+	add(calc.Vec{1, 0, 0})
+	add(calc.Vec{0, 1, 0})
+	add(r.Moment)
+	for _, co := range d.Coils {
+		add(calc.CoilFrame(co.Axis).U)
+		add(co.Centre)
+	}
+	dist := make([]float64, len(dirs))
+	eachIndex(len(dirs), func(i int) { dist[i] = reach(fm, calc.Vec{}, dirs[i], ImplantField, ext, ext*1e3) })
+	best, toward := 0.0, calc.Vec{}
+	for i, v := range dist {
+		if v > best {
+			best, toward = v, dirs[i]
+		}
+	}
+	return best, toward
 }
 
 // windingReach searches the field of all coils outward from the surface

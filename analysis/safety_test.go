@@ -46,3 +46,29 @@ func TestCoredImplantReach(t *testing.T) {
 		t.Errorf("reach from the surface %g m, short of the axial reach %g m less the rod's half-length %g m", ci.Windings[0].Distance, ci.Axial, end)
 	}
 }
+
+// A coil off the origin with its axis along the diagonal of the xy plane:
+// the axial and in-plane searches from the origin along x, y and z miss
+// its axis, and the farthest reach lies along (1, 1, 0)/√2. At the reported
+// distance the winding summed turn by turn (calc.CoilField, not the
+// quadrature the search uses) gives 0.5 mT to within 10⁻⁶, and 0.1 %
+// further out less.
+func TestFarthestImplantReachOffTheAxes(t *testing.T) {
+	st := studyOf(t, "```coil\nname = diag\nform = solenoid\nmean-diameter = 150 mm\nlength = 60 mm\nradial-build = 10 mm\nturns = 800\nwire = AWG 22\ncurrent = 2 A\ncentre = (200, 200, 0) mm\naxis = (1, 1, 0)\n```\n")
+	ir := st.Safety.Implant
+	u := calc.Vec{1, 1, 0}.Scale(1 / math.Sqrt2)
+	if ir.Toward.Sub(u).Norm() > 1e-9 {
+		t.Fatalf("farthest reach %g m toward %v, want toward %v", ir.Farthest, ir.Toward, u)
+	}
+	if !(ir.Farthest > 1.2*math.Max(ir.Axial, ir.Radial)) || !(ir.Farthest > 0.2*math.Sqrt2+0.03) {
+		t.Errorf("farthest %g m against axial %g m and radial %g m", ir.Farthest, ir.Axial, ir.Radial)
+	}
+	c, cr := st.Spec.Design.Coils[0], st.Results.Coils[0]
+	model := func(r float64) float64 { return calc.CoilField(c, cr.Winding, cr.Current, u.Scale(r)).Norm() }
+	if b := model(ir.Farthest); math.Abs(b/ImplantField-1) > 1e-6 {
+		t.Errorf("|B| at the reported reach %g m: %g T, want %g T", ir.Farthest, b, ImplantField)
+	}
+	if b := model(1.001 * ir.Farthest); !(b < ImplantField) {
+		t.Errorf("|B| 0.1 %% beyond the reach: %g T, not below %g T", b, ImplantField)
+	}
+}
