@@ -86,7 +86,7 @@ type ImplantReach struct {
 	Farthest float64  // m
 	Toward   calc.Vec // unit vector
 	Probes   []int    // indices of probes at or above the level
-	Windings      []WindingReach
+	Windings []WindingReach
 }
 
 // WindingReach is the field of all coils next to one coil block's winding:
