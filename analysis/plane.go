@@ -8,8 +8,9 @@ import (
 
 // PlaneMap is the normal flux density Bn (the component along the coil's
 // axis) of one rectangular coil block alone over a plane parallel to its
-// own, the plane of interest of a panel coil: the plane in which every
-// probe lies, or else the plane through the first probe (PlaneOfInterest).
+// own, the plane of interest of a panel coil: the test plane the spec
+// names, else the plane in which every probe lies, or else the plane
+// through the first probe (PlaneOfInterest).
 // The map covers 1.5 times the coil's sides, widened to hold the probes in
 // the plane that lie within planeReach of the axis.
 //
@@ -73,18 +74,24 @@ const planeReach = 2.0
 // planeSame is how near a probe must lie to a plane to be in it, m.
 const planeSame = 1e-6
 
-// PlaneOfInterest finds the plane of interest of coil block co among the
-// probes: its distance from the coil's centre along the axis, whether
-// every probe lies in it (else it is the plane through the first probe),
-// ok false without probes or for a coil that is not a rectangle.
+// PlaneOfInterest finds the plane of interest of coil block co: the
+// spec's test plane (Coil.TestPlane) when it names one, else the plane
+// among the probes. It returns the plane's distance from the coil's
+// centre along the axis, whether every probe lies in it (else, without a
+// test plane, it is the plane through the first probe), and ok false for
+// a coil that is not a rectangle or has neither test plane nor probes.
 func PlaneOfInterest(co calc.Coil, probes []calc.Probe) (dist float64, all, ok bool) {
-	if co.Form != calc.Rectangle || len(probes) == 0 {
+	if co.Form != calc.Rectangle || (len(probes) == 0 && !co.HasTestPlane) {
 		return 0, false, false
 	}
 	fr := calc.CoilFrame(co.Axis)
-	dist = fr.ToLocal(probes[0].At.Sub(co.Centre))[2]
+	if co.HasTestPlane {
+		dist = co.TestPlane
+	} else {
+		dist = fr.ToLocal(probes[0].At.Sub(co.Centre))[2]
+	}
 	all = true
-	for _, p := range probes[1:] {
+	for _, p := range probes {
 		if math.Abs(fr.ToLocal(p.At.Sub(co.Centre))[2]-dist) > planeSame {
 			all = false
 		}

@@ -150,6 +150,31 @@ func TestPlaneOfInterestRules(t *testing.T) {
 	if j.Design.Planes[0] != nil {
 		t.Error("a plane map without probes")
 	}
+	// A test plane named in the spec is the plane, with or without probes;
+	// probes elsewhere do not move it.
+	tp := rect
+	tp.TestPlane, tp.HasTestPlane = 0.08, true
+	if d, all, ok := PlaneOfInterest(tp, nil); !ok || !all || d != 0.08 {
+		t.Errorf("test plane without probes: %g, %v, %v", d, all, ok)
+	}
+	if d, all, ok := PlaneOfInterest(tp, p(0.03, 0.08)); !ok || all || d != 0.08 {
+		t.Errorf("test plane with a probe off it: %g, %v, %v; want 0.08, not all", d, all, ok)
+	}
+	j = evaluateSpec(t, "```coil\nname = r\nform = rectangle\nwidth = 300 mm\nheight = 200 mm\nturns = 40\nwire = AWG 22\ncurrent = 1 A\ntest-plane = -60 mm\n```\n")
+	pm := j.Design.Planes[0]
+	if pm == nil || pm.Dist != -0.06 || pm.InPlane != 0 {
+		t.Fatalf("map over the named test plane: %+v", pm)
+	}
+	// The centre value against the closed form of a rectangular filament of
+	// half-sides a, b at distance d on its axis (the Biot–Savart law summed
+	// over the four straight sides):
+	//	Bz = μ0 N I a b / (π √(a² + b² + d²)) · (1/(a² + d²) + 1/(b² + d²))
+	// within 10⁻³ (the winding's bundle, which the filament ignores).
+	a, b, d := 0.15, 0.1, 0.06
+	want := calc.Mu0 * 40 * 1 * a * b / (math.Pi * math.Sqrt(a*a+b*b+d*d)) * (1/(a*a+d*d) + 1/(b*b+d*d))
+	if math.Abs(pm.Centre/want-1) > 1e-3 {
+		t.Errorf("Bn at the axis of the test plane %g T, want %g T", pm.Centre, want)
+	}
 }
 
 // A probe in the plane far off the coil is counted but not mapped: the map

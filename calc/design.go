@@ -71,6 +71,13 @@ type Coil struct {
 	Axis   Vec // unit vector, default (0,0,1)
 	Centre Vec // m
 
+	// TestPlane is the distance, m, from the centre along the axis of the
+	// plane over which a rectangle's field matters (a panel's test
+	// surface), when HasTestPlane; otherwise the plane is found from the
+	// probes.
+	TestPlane    float64
+	HasTestPlane bool
+
 	// Switching and a.c. drive; zero means not given.
 	SwitchOff    float64 // s, time in which the driver opens the circuit
 	DriverRating float64 // V, voltage the driver's switch withstands

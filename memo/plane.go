@@ -33,17 +33,22 @@ func (c *composer) planeFigure(co calc.Coil, pm *analysis.PlaneMap) {
 	if pm.Dist == 0 {
 		where = "its own plane"
 	}
-	first := c.j.Spec.Design.Probes[0].Name // the plane is through it
-	probes := fmt.Sprintf("the probe %q", first)
-	if pm.InPlane > 1 {
-		probes = fmt.Sprintf("the %d probes", pm.InPlane)
-	}
-	which := "in which " + probes + " lie"
-	if pm.InPlane == 1 {
-		which = "in which " + probes + " lies"
-	}
-	if !pm.AllInIt {
-		which = fmt.Sprintf("through the first probe, %q (%s of the design's probes lie in it)", first, countWord(pm.InPlane))
+	var which string
+	switch ps := c.j.Spec.Design.Probes; {
+	case co.HasTestPlane:
+		which = "the test plane of the spec"
+		switch {
+		case pm.InPlane == 1 && len(pm.Probes) == 1:
+			which += fmt.Sprintf(", in which the probe %q lies", pm.Probes[0].Name)
+		case pm.InPlane > 0:
+			which += fmt.Sprintf(", in which %s of the design's probes %s", countWord(pm.InPlane), map[bool]string{true: "lies", false: "lie"}[pm.InPlane == 1])
+		}
+	case !pm.AllInIt:
+		which = fmt.Sprintf("through the first probe, %q (%s of the design's probes lie in it)", ps[0].Name, countWord(pm.InPlane))
+	case pm.InPlane == 1:
+		which = fmt.Sprintf("in which the probe %q lies", ps[0].Name)
+	default:
+		which = fmt.Sprintf("in which the %d probes lie", pm.InPlane)
 	}
 	levels := stepsText(d.PlaneLevels(), pm.Centre)
 	// First what the plane shows, then the lead-in (kept short, so that

@@ -25,7 +25,7 @@ var (
 	coilKeys = []string{"name", "form", "mean-diameter", "inner-diameter", "outer-diameter", "length",
 		"radial-build", "width", "height", "turns", "wire", "wire-outer-diameter", "conductor",
 		"insulation-class", "current", "voltage", "duty", "spacing", "sense", "axis", "centre",
-		"switch-off", "driver-rating", "frequency", "on-time", "former-mass", "former-material",
+		"test-plane", "switch-off", "driver-rating", "frequency", "on-time", "former-mass", "former-material",
 		"former-heat-capacity", "winding-conductivity"}
 	conditionKeys = []string{"ambient", "background-field", "design-angle", "cooling", "h", "emissivity",
 		"field-gradient", "mount-resistance", "orientation"}
@@ -516,6 +516,19 @@ func (p *parser) coilValue(ci *coilIn, e kv) (string, bool) {
 		}
 		c.Centre = v
 		return formatVec(v, units.Length), true
+	case "test-plane":
+		q, err := units.ParseAs(e.value, units.Length)
+		if err != nil {
+			p.errf(e.line, "test-plane: %v", err)
+			return "", false
+		}
+		v := q.Value
+		if top := upperBounds[units.Length]; !(math.Abs(v) <= top) {
+			p.errf(e.line, "test-plane = %s: want a distance along the axis within %s of the coil", e.value, units.Format(top, units.Length))
+			return "", false
+		}
+		c.TestPlane, c.HasTestPlane = v, true
+		return units.Format(v, units.Length), true
 	}
 	if si, ok, mine := p.coreValue(ci, e); mine {
 		return si, ok
@@ -576,6 +589,9 @@ func (p *parser) checkCoil(ci *coilIn) {
 		p.errf(ci.fence, "%s: a solenoid needs length (axial winding length)", where)
 	}
 
+	if circular && has("test-plane") {
+		p.errf(ci.lines["test-plane"], "test-plane applies only to form = rectangle (this coil is a %s); give probes to have a circular coil's field reported at points", formName)
+	}
 	if !circular {
 		for _, k := range []string{"mean-diameter", "inner-diameter", "outer-diameter"} {
 			if has(k) {
