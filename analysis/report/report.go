@@ -54,6 +54,8 @@ type Report struct {
 	WorstCase map[string]WorstReport `json:"worst_case,omitempty"`
 	// Sizing is the size block's choice (sizing.go); absent without one.
 	Sizing *SizingReport `json:"size,omitempty"`
+	// AxisSet is the set of coils on several axes; absent otherwise.
+	AxisSet *AxisSetReport `json:"axis_set,omitempty"`
 }
 
 // SweepReport is the design re-evaluated over one parameter's range.
@@ -108,6 +110,9 @@ type CoilReport struct {
 	DipoleAny1    Num         `json:"dipole_distance_any_1pct_m"`
 	DipoleAny01   Num         `json:"dipole_distance_any_0p1pct_m"`
 	Pair          *PairReport `json:"pair,omitempty"`
+	// Plane is a rectangle's field over its plane of interest (the
+	// test-plane key, else the probes' plane); absent for other coils.
+	Plane *PlaneReport `json:"plane,omitempty"`
 	CoilHeatSwitch
 	CoilKindsReport
 }
@@ -126,6 +131,42 @@ type PairReport struct {
 	Gradient            Num  `json:"gradient_center_T_per_m"`
 	LinearAxial         Num  `json:"gradient_linear_axial_1pct_m"`
 	LinearRadial        Num  `json:"gradient_linear_radial_1pct_m"`
+}
+
+// PlaneReport is the normal field Bn of a rectangle alone over its plane
+// of interest: the plane's distance from the coil's centre along its axis,
+// Bn where the axis crosses it and its extremes over the mapped area, and
+// for each band (±1 %, ±5 % of the centre value) the half-sides of the
+// largest centred rectangle, in the coil's proportions, within it.
+type PlaneReport struct {
+	Distance   Num                 `json:"distance_m"`
+	Named      bool                `json:"test_plane"`
+	Centre     Num                 `json:"bn_center_T"`
+	Min        Num                 `json:"bn_min_T"`
+	Max        Num                 `json:"bn_max_T"`
+	HalfWidth  Num                 `json:"map_half_width_m"`
+	HalfHeight Num                 `json:"map_half_height_m"`
+	Uniform    []PlaneRegionReport `json:"uniform"`
+}
+
+// PlaneRegionReport is one band of a PlaneReport: whole_map when the band
+// holds over the whole mapped area (the half-sides are then the map's).
+type PlaneRegionReport struct {
+	Tolerance  Num  `json:"tolerance"`
+	HalfWidth  Num  `json:"half_width_m"`
+	HalfHeight Num  `json:"half_height_m"`
+	WholeMap   bool `json:"whole_map"`
+}
+
+// AxisSetReport is a set of driven coils whose axes are not all parallel:
+// the coils (names, in spec order), each one's moment vector alone at its
+// operating current, the coupling coefficients k = M/√(L_a L_b) between
+// them (null where none is computed) and the largest |k| off the diagonal.
+type AxisSetReport struct {
+	Coils    []string `json:"coils"`
+	Moments  [][3]Num `json:"moment_vectors_A_m2"`
+	Coupling [][]Num  `json:"coupling_coefficients"`
+	CrossMax Num      `json:"cross_coupling_max"`
 }
 
 // ProbeReport is the field at one probe.
@@ -206,6 +247,30 @@ func Build(j *analysis.Study) Report {
 				HomogeneousAxial01: Num(p.Axial01), HomogeneousRadial01: Num(p.Radial01),
 				Gradient: Num(p.Gradient), LinearAxial: Num(p.LinearAxial), LinearRadial: Num(p.LinearRadial)}
 		}
+	}
+	for i := range rep.Coils {
+		if i < len(j.Design.Planes) && j.Design.Planes[i] != nil {
+			pm := j.Design.Planes[i]
+			pr := &PlaneReport{Distance: Num(pm.Dist), Named: d.Coils[i].HasTestPlane, Centre: Num(pm.Centre),
+				Min: Num(pm.Min), Max: Num(pm.Max), HalfWidth: Num(pm.UHalf), HalfHeight: Num(pm.VHalf), Uniform: []PlaneRegionReport{}}
+			for _, w := range pm.Within {
+				pr.Uniform = append(pr.Uniform, PlaneRegionReport{Tolerance: Num(w.Tol), HalfWidth: Num(w.U), HalfHeight: Num(w.V), WholeMap: w.Full})
+			}
+			rep.Coils[i].Plane = pr
+		}
+	}
+	if a := j.Design.Axes; a != nil {
+		ar := &AxisSetReport{CrossMax: Num(a.Cross)}
+		for k, i := range a.Coils {
+			ar.Coils = append(ar.Coils, d.Coils[i].Name)
+			ar.Moments = append(ar.Moments, vec(a.Moments[k]))
+			row := make([]Num, len(a.K[k]))
+			for l, v := range a.K[k] {
+				row[l] = Num(v)
+			}
+			ar.Coupling = append(ar.Coupling, row)
+		}
+		rep.AxisSet = ar
 	}
 	rep.Interactions = interactions(d, r)
 	for _, p := range r.Probes {
