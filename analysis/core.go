@@ -338,6 +338,10 @@ func coreStudy(cs *CoilStudy, co calc.Coil, cr *calc.CoilResult, k *calc.CoreRes
 	m := &MapData{Z: SymmetricSpace(zHalf, nz), X: SymmetricSpace(xHalf, nx), XHalf: xHalf, ZHalf: zHalf}
 	g := calc.NewCoilSource(co, w, cr.Current).ForMaps().Map(m.X, m.Z)
 	m.B = make([]float64, len(m.Z)*len(m.X))
+	// The rod is a body of revolution about the axis: its field at −x is
+	// that at x with the E1 component reversed, so each column at x ≥ 0 is
+	// computed once and serves its mirror image (SymmetricSpace mirrors
+	// exactly).
 	var wg sync.WaitGroup
 	rows := make(chan int)
 	for range runtime.GOMAXPROCS(0) {
@@ -345,17 +349,24 @@ func coreStudy(cs *CoilStudy, co calc.Coil, cr *calc.CoilResult, k *calc.CoreRes
 		go func() {
 			defer wg.Done()
 			for ix := range rows {
+				jx := nx - 1 - ix // the mirror column
 				for iz, z := range m.Z {
-					gk := iz*len(m.X) + ix
 					pt := co.Centre.Add(fr.E1.Scale(m.X[ix])).Add(fr.U.Scale(z))
 					bc := fr.ToLocal(calc.CorePoleField(co, *k, pt)) // (E1, E2, U) components
+					gk := iz*nx + ix
 					m.B[ix*len(m.Z)+iz] = math.Hypot(g.BX[gk]+bc[0], g.BZ[gk]+bc[2])
+					if jx != ix {
+						gj := iz*nx + jx
+						m.B[jx*len(m.Z)+iz] = math.Hypot(g.BX[gj]-bc[0], g.BZ[gj]+bc[2])
+					}
 				}
 			}
 		}()
 	}
 	for ix := range m.X {
-		rows <- ix
+		if m.X[ix] >= 0 {
+			rows <- ix
+		}
 	}
 	close(rows)
 	wg.Wait()

@@ -19,6 +19,10 @@ func Document(st *analysis.Study) *doc.Document { return Compose(st) }
 // PDF renders the memo of a study.
 func PDF(st *analysis.Study) ([]byte, error) { return pdf.Render(Compose(st)) }
 
+// PDFOnePass is PDF in one layout pass (pdf.RenderOnePass), the same
+// bytes: for a batch that keeps every core busy with other memos.
+func PDFOnePass(st *analysis.Study) ([]byte, error) { return pdf.RenderOnePass(Compose(st)) }
+
 // WarmPDF starts preparing the PDF writer for a PDF that will follow
 // (its embedded faces registered on another core; see pdf.Warm).
 func WarmPDF() { pdf.Warm() }

@@ -13,6 +13,7 @@ import (
 	"strings"
 	"syscall"
 
+	"coilmemo/analysis"
 	"coilmemo/format"
 	"coilmemo/memo"
 )
@@ -55,9 +56,15 @@ const (
 	builtBug    // an internal failure: exit status 1
 )
 
-// renderPDF renders a memo; a variable so that tests can stand in a
+// renderPDF renders a memo, in one layout pass when onePass (the same
+// bytes; see memo.PDFOnePass); a variable so that tests can stand in a
 // failing renderer.
-var renderPDF = memo.PDF
+var renderPDF = func(st *analysis.Study, onePass bool) ([]byte, error) {
+	if onePass {
+		return memo.PDFOnePass(st)
+	}
+	return memo.PDF(st)
+}
 
 // buildJob is one spec of a batch: its target and, once built, its
 // messages and outcome.
@@ -68,6 +75,10 @@ type buildJob struct {
 	stderr       bytes.Buffer
 	outcome      int
 	done         chan struct{}
+	// onePass: render without the layout pass that lets figures be drawn
+	// ahead on another core — when other specs of the batch, or a single
+	// core, leave no core free for it.
+	onePass bool
 }
 
 func build(args []string, stdout, stderr io.Writer) error {
@@ -113,6 +124,9 @@ func build(args []string, stdout, stderr io.Writer) error {
 // runJobs builds the jobs on at most n goroutines at once, starting them in
 // order; each job's done channel is closed when it has finished.
 func runJobs(jobs []*buildJob, n int) {
+	for _, j := range jobs {
+		j.onePass = len(jobs) > 1 || n < 2
+	}
 	sem := make(chan struct{}, max(1, n))
 	go func() {
 		for _, j := range jobs {
@@ -149,7 +163,7 @@ func buildOne(j *buildJob) {
 		j.outcome = builtBug
 		return
 	}
-	b, err := renderPDF(job)
+	b, err := renderPDF(job, j.onePass)
 	if err != nil {
 		fmt.Fprintf(&j.stderr, "coilmemo: %s: internal error rendering the memo: %v; nothing written\n", j.spec, err)
 		j.outcome = builtBug

@@ -268,16 +268,16 @@ func TestBuildRenderFailureOfOne(t *testing.T) {
 	write(t, filepath.Join(dir, "boom.md"), small)
 	write(t, filepath.Join(dir, "panic.md"), small)
 	write(t, filepath.Join(dir, "z.md"), small)
-	defer func(f func(*analysis.Study) ([]byte, error)) { renderPDF = f }(renderPDF)
+	defer func(f func(*analysis.Study, bool) ([]byte, error)) { renderPDF = f }(renderPDF)
 	real := renderPDF
-	renderPDF = func(st *analysis.Study) ([]byte, error) {
+	renderPDF = func(st *analysis.Study, onePass bool) ([]byte, error) {
 		switch st.Name {
 		case "boom.md":
 			return nil, errors.New("injected failure")
 		case "panic.md":
 			panic("injected panic")
 		}
-		return real(st)
+		return real(st, onePass)
 	}
 	var o, e bytes.Buffer
 	err := run([]string{"build", filepath.Join(dir, "a.md"), filepath.Join(dir, "boom.md"), filepath.Join(dir, "panic.md"), filepath.Join(dir, "z.md")}, &o, &e)

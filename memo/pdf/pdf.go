@@ -29,6 +29,14 @@ func Render(d *doc.Document) ([]byte, error) {
 	return render(d, options{compress: true})
 }
 
+// RenderOnePass is Render in one layout pass: the same bytes, without the
+// dry pass that lets the figures be drawn ahead on another core. It is
+// for builds that already keep every core busy with other documents,
+// where drawing ahead gains nothing and the dry pass only costs.
+func RenderOnePass(d *doc.Document) ([]byte, error) {
+	return render(d, options{compress: true, onePass: true})
+}
+
 type options struct {
 	compress bool
 	// onText, if set, sees every string set on a page (tests).
@@ -38,6 +46,9 @@ type options struct {
 	onPlace func(page int, x, y float64, s string)
 	// onSpot draws every figure where it is placed, none ahead (tests).
 	onSpot bool
+	// onePass lays the document out once, without the dry pass and so
+	// without figures drawn ahead (RenderOnePass).
+	onePass bool
 }
 
 func render(d *doc.Document, o options) (out []byte, err error) {
@@ -70,6 +81,15 @@ func render(d *doc.Document, o options) (out []byte, err error) {
 // the timing, so the bytes are those of the passes run one after the
 // other.
 func layOutTwice(d *doc.Document, o options) (*renderer, error) {
+	if o.onePass {
+		r := newRenderer(d, o, 0, false)
+		r.late = true
+		if err := r.run(); err != nil {
+			return nil, err
+		}
+		r.finishPages()
+		return r, r.pdf.Error()
+	}
 	type result struct {
 		pages int
 		heads []int // the page of every heading

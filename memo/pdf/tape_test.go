@@ -10,7 +10,8 @@ import (
 )
 
 // TestFiguresDrawnAheadSameBytes: replaying the figures drawn ahead gives
-// the memo drawing each figure on the spot gives, byte for byte.
+// the memo drawing each figure on the spot gives, byte for byte, and so
+// does one layout pass (RenderOnePass).
 func TestFiguresDrawnAheadSameBytes(t *testing.T) {
 	for _, pages := range []int{1, 2, 5} {
 		d := exampleDocument(pages)
@@ -27,6 +28,13 @@ func TestFiguresDrawnAheadSameBytes(t *testing.T) {
 		}
 		if !bytes.Equal(ahead, spot) {
 			t.Errorf("%d-page document: drawn ahead %d bytes, on the spot %d bytes, not the same", pages, len(ahead), len(spot))
+		}
+		one, err := RenderOnePass(exampleDocument(pages))
+		if err != nil {
+			t.Fatal(err)
+		}
+		if !bytes.Equal(ahead, one) {
+			t.Errorf("%d-page document: two passes %d bytes, one pass %d bytes, not the same", pages, len(ahead), len(one))
 		}
 	}
 }

@@ -2,6 +2,7 @@ package pdf
 
 import (
 	"github.com/go-pdf/fpdf"
+	"sync/atomic"
 
 	"coilmemo/fonts"
 )
@@ -35,31 +36,40 @@ func prepare() prepared {
 	return p
 }
 
-// ready holds documents prepared by Warm, at most two.
-var ready = make(chan prepared, 2)
+// ready holds documents prepared by Warm; pending counts the Warm calls
+// whose document is being prepared or waits in ready.
+var (
+	ready   = make(chan prepared, maxWarm)
+	pending atomic.Int32
+)
+
+// maxWarm bounds the documents prepared ahead.
+const maxWarm = 4
 
 // Warm starts preparing a document for the next Render on another
 // goroutine, to be called when a Render will follow (before the analysis
 // it waits on). A prepared document nobody takes is kept for a later
-// Render; beyond two, Warm does nothing.
+// Render; beyond maxWarm pending, Warm does nothing.
 func Warm() {
-	if len(ready) == cap(ready) {
+	if pending.Add(1) > maxWarm {
+		pending.Add(-1)
 		return
 	}
-	go func() {
-		select {
-		case ready <- prepare():
-		default:
-		}
-	}()
+	go func() { ready <- prepare() }()
 }
 
-// takePrepared returns a document prepared by Warm, or prepares one.
+// takePrepared returns a document prepared by Warm — waiting for one
+// being prepared rather than parsing the faces a second time (on a busy
+// machine the Render can overtake its Warm) — or, with none pending,
+// prepares one.
 func takePrepared() prepared {
-	select {
-	case p := <-ready:
-		return p
-	default:
-		return prepare()
+	for {
+		n := pending.Load()
+		if n <= 0 {
+			return prepare()
+		}
+		if pending.CompareAndSwap(n, n-1) {
+			return <-ready
+		}
 	}
 }
