@@ -4,6 +4,7 @@
 package report
 
 import (
+	"bytes"
 	"encoding/json"
 	"math"
 	"strconv"
@@ -319,9 +320,15 @@ func Build(j *analysis.Study) Report {
 }
 
 // JSON is the indented JSON report of a study.
+// Relations and names are written as they are, not HTML-escaped ("<="
+// rather than "\u003c=").
 func JSON(j *analysis.Study) ([]byte, error) {
-	b, err := json.MarshalIndent(Build(j), "", "  ")
-	return append(b, '\n'), err
+	var buf bytes.Buffer
+	enc := json.NewEncoder(&buf)
+	enc.SetEscapeHTML(false)
+	enc.SetIndent("", "  ")
+	err := enc.Encode(Build(j))
+	return buf.Bytes(), err
 }
 
 // CoilHeatSwitch holds a coil's heating, switching and a.c. keys of the

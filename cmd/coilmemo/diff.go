@@ -208,12 +208,11 @@ func writeDiffJSON(w io.Writer, oldName, newName string, ch analysis.Changes) er
 		}
 		out.Groups = append(out.Groups, gj)
 	}
-	b, err := json.MarshalIndent(out, "", "  ")
-	if err != nil {
-		return err
-	}
-	_, err = w.Write(append(b, '\n'))
-	return err
+	// ≥ and ≤ as they are: no HTML escaping of <, > and & (\u003e).
+	enc := json.NewEncoder(w)
+	enc.SetEscapeHTML(false)
+	enc.SetIndent("", "  ")
+	return enc.Encode(out)
 }
 
 // previousReader reads the previous revision a spec at path names in its
