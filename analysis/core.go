@@ -20,6 +20,7 @@ type CoilKinds struct {
 	// moment, inductance and mass before the core's share is added;
 	// AirMass is the conductor's mass (the results' Mass adds the core's).
 	AirMoment     calc.Vec
+	AirField      calc.Vec // T, the winding's own field at its centre
 	AirInductance float64
 	AirMass       float64
 	// Receiver is set for a pick-up coil (no drive, a frequency or band).
@@ -65,7 +66,7 @@ func kindsOf(d calc.Design, r calc.Results, cored bool) []CoilKinds {
 		}
 		cr := r.Coils[i]
 		w := cr.Winding
-		k := CoilKinds{AirMoment: cr.Moment, AirInductance: cr.Inductance, AirMass: cr.Mass, ACPower: math.NaN(), SelfResonance: math.NaN(), SelfCapacitance: math.NaN(), EndField: math.NaN()}
+		k := CoilKinds{AirMoment: cr.Moment, AirField: cr.FieldCentre, AirInductance: cr.Inductance, AirMass: cr.Mass, ACPower: math.NaN(), SelfResonance: math.NaN(), SelfCapacitance: math.NaN(), EndField: math.NaN()}
 		L := cr.Inductance
 		aEff := w.AreaSum
 		if c.Core.Present() {

@@ -1,6 +1,7 @@
 package memo
 
 import (
+	"strings"
 	"fmt"
 	"math"
 
@@ -97,7 +98,7 @@ func coilSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []Step 
 	}
 	add(Step{What: "Current density in the conductor", Symbolic: `J = \frac{I}{A}`,
 		Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(cr.Current, "A", 4), Q(A, "m²", 4)), Result: Q(cr.Density, "A/m²", 3)})
-	add(momentSteps(co, cr)...)
+	add(momentSteps(co, cr, cs)...)
 	// The inductance is derived in the Inductance and switching section.
 	return steps
 }
@@ -217,10 +218,18 @@ func thermalSteps(co calc.Coil, cr calc.CoilResult) []Step {
 }
 
 // momentSteps derive the magnetic moment and the field at the centre.
-func momentSteps(co calc.Coil, cr calc.CoilResult) []Step {
+//
+// For a cored coil the sums are the winding's own (the air values of
+// cs.Kinds), and a step each adds the core's share, derived in the core's
+// section, to give the results.
+func momentSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []Step {
 	w := cr.Winding
 	I := Q(cr.Current, "A", 4)
 	m := Q(cr.Moment.Norm(), "A·m²", 4)
+	core := cs.Kinds.Core
+	if core != nil {
+		m = Q(cs.Kinds.AirMoment.Norm(), "A·m²", 4) // the winding's
+	}
 	R := co.MeanDiameter / 2
 	switch {
 	case co.Form == calc.Rectangle:
@@ -241,11 +250,24 @@ func momentSteps(co calc.Coil, cr calc.CoilResult) []Step {
 		mom.What = fmt.Sprintf("Magnetic moment: current times the area of every turn, Σπrᵢ² = %s over the %d turns", Eng(w.AreaSum, "m²", 5), co.Turns)
 		mom.Numbers = fmt.Sprintf(`%s%s \cdot %s`, pair, I, Q(w.AreaSum, "m²", 5))
 	}
+	if core != nil {
+		mom.What = strings.Replace(mom.What, "Magnetic moment:", "Magnetic moment of the winding alone:", 1)
+		mom.Symbolic = strings.Replace(mom.Symbolic, "m = ", "m_w = ", 1)
+	}
 	steps = append(steps, mom)
+	if core != nil {
+		mw := cs.Kinds.AirMoment.Norm()
+		steps = append(steps, Step{What: "Magnetic moment of winding and core, the core's own moment at this current derived in the core's section",
+			Symbolic: `m = m_w + m_c`, Numbers: fmt.Sprintf(`%s + %s`, Q(mw, "A·m²", 4), Q(cr.Moment.Norm()-mw, "A·m²", 4)),
+			Result: Q(cr.Moment.Norm(), "A·m²", 4)})
+	}
 	if co.Centre.Norm() != 0 {
 		return steps
 	}
 	B := Q(cr.FieldCentre.Norm(), "T", 4)
+	if core != nil {
+		B = Q(cs.Kinds.AirField.Norm(), "T", 4) // the winding's; the core's is added below
+	}
 	switch {
 	case w.Thin && co.Form == calc.Pair:
 		z := co.Spacing / 2
@@ -258,6 +280,15 @@ func momentSteps(co calc.Coil, cr calc.CoilResult) []Step {
 	default:
 		steps = append(steps, Step{What: "Field at the centre: the on-axis field of every turn (radius rᵢ, axial distance zᵢ from the centre), summed",
 			Symbolic: `B_0 = \sum_{i} \frac{\mu_0 I r_i^2}{2 \left( r_i^2 + z_i^2 \right)^{3/2}}`, Result: B})
+	}
+	if core != nil {
+		last := &steps[len(steps)-1] // the winding's own field at the centre
+		last.Symbolic = strings.Replace(last.Symbolic, "B_0 = ", "B_w = ", 1)
+		last.What = strings.Replace(last.What, "Field at the centre", "Field of the winding alone at the centre", 1)
+		bw := cs.Kinds.AirField.Norm()
+		steps = append(steps, Step{What: "Field at the centre with the core: the winding's (above) plus the core's by the rod's pole model (core section)",
+			Symbolic: `B_0 = B_w + B_c`, Numbers: fmt.Sprintf(`%s + %s`, Q(bw, "T", 4), Q(cr.FieldCentre.Norm()-bw, "T", 4)),
+			Result: Q(cr.FieldCentre.Norm(), "T", 4)})
 	}
 	return steps
 }
