@@ -1,9 +1,9 @@
 package memo
 
 import (
-	"strings"
 	"fmt"
 	"math"
+	"strings"
 
 	"coilmemo/analysis"
 	"coilmemo/calc"
