@@ -68,13 +68,19 @@ func Cautions(j *analysis.Study) []doc.Callout {
 			where = append(where, fmt.Sprintf("as far as %s from the origin in the direction (%s, %s, %s), the farthest of the directions searched (the axes, the net moment, each coil's axis and centre)",
 				Eng(ir.Farthest, "m", 2), dirComponent(u[0]), dirComponent(u[1]), dirComponent(u[2])))
 		}
-		type near struct{ name, surface, dist string }
+		type near struct{ name, surface, dist, phrase string }
 		var nears []near
 		cored := false
 		for i, w := range ir.Windings {
 			if w.Surface >= analysis.ImplantField {
 				cored = cored || (i < len(j.Coils) && j.Coils[i].Kinds.Core != nil)
-				nears = append(nears, near{fmt.Sprintf("%q", d.Coils[i].Name), Eng(w.Surface, "T", 3), Eng(w.Distance, "m", 2)})
+				dist := Eng(w.Distance, "m", 2)
+				phrase := "as far as " + dist + " from"
+				if w.Distance < 1e-3 {
+					// a figure in µm reads as false precision
+					dist, phrase = "less than 1 mm", "only within 1 mm of"
+				}
+				nears = append(nears, near{fmt.Sprintf("%q", d.Coils[i].Name), Eng(w.Surface, "T", 3), dist, phrase})
 			}
 		}
 		// The search runs out from each winding's surface along the coil's
@@ -87,8 +93,8 @@ func Cautions(j *analysis.Study) []doc.Callout {
 				// The search starts from the rod's end faces too.
 				what, its = "the winding and core", "their surfaces (the rod's end faces included)"
 			}
-			where = append(where, fmt.Sprintf("next to %s of coil %s, where |B| reaches %s at %s, and 0.5 mT is exceeded as far as %s from it along its axis or in its plane (the field of every winding counted)",
-				what, nears[0].name, nears[0].surface, its, nears[0].dist))
+			where = append(where, fmt.Sprintf("next to %s of coil %s, where |B| reaches %s at %s, and 0.5 mT is exceeded %s it along its axis or in its plane (the field of every winding counted)",
+				what, nears[0].name, nears[0].surface, its, nears[0].phrase))
 		case len(nears) > 1:
 			var at, far []string
 			for _, n := range nears {
