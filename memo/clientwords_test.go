@@ -59,3 +59,42 @@ func TestTorqueVectorOnlyForAStatedDirection(t *testing.T) {
 		t.Error("a vector field got no torque vector")
 	}
 }
+
+// A memo whose coils are all energised continuously speaks of no duty
+// cycle: no "duty-averaged" steady state, no power "averaged over the
+// duty cycle". Checked over every example and figure-test design.
+func TestNoDutyWordsAtFullDuty(t *testing.T) {
+	files, _ := filepath.Glob("../examples/*.md")
+	more, _ := filepath.Glob("../testdata/figures/*.md")
+	checked := 0
+	for _, f := range append(files, more...) {
+		src, err := os.ReadFile(f)
+		if err != nil {
+			t.Fatal(err)
+		}
+		j, diags := evaluate(filepath.Base(f), src)
+		if len(diags) > 0 {
+			continue
+		}
+		full := true
+		for _, cr := range j.Results.Coils {
+			full = full && cr.Duty >= 1
+		}
+		if !full {
+			continue
+		}
+		checked++
+		var buf bytes.Buffer
+		if err := doc.WriteText(&buf, Document(j)); err != nil {
+			t.Fatal(err)
+		}
+		for _, p := range []string{"duty-averaged", "averaged over the duty cycle"} {
+			if i := strings.Index(buf.String(), p); i >= 0 {
+				t.Errorf("%s: %q at 100 %% duty: …%s…", filepath.Base(f), p, buf.String()[max(0, i-60):min(buf.Len(), i+60)])
+			}
+		}
+	}
+	if checked == 0 {
+		t.Fatal("no design at 100 % duty among the examples")
+	}
+}

@@ -375,12 +375,20 @@ func (c *composer) summaryTable() doc.Table {
 // powerLabel names the power row: averaged over the duty cycle only where
 // some coil has one.
 func powerLabel(r calc.Results) string {
-	for _, cr := range r.Coils {
-		if cr.Duty < 1 {
-			return "Power (averaged over the duty cycle)"
-		}
+	if anyDuty(r) {
+		return "Power (averaged over the duty cycle)"
 	}
 	return "Power"
+}
+
+// anyDuty reports whether some coil of r runs on a duty cycle below 100 %.
+func anyDuty(r calc.Results) bool {
+	for _, cr := range r.Coils {
+		if cr.Duty < 1 {
+			return true
+		}
+	}
+	return false
 }
 
 // perCoilColumns lays out a table of a quantity column (relative width
@@ -491,12 +499,18 @@ func testedOn(st *analysis.Study, l analysis.LimitResult, q spec.LimitQuantity) 
 			"time-constant": "time constant L/R", "switch-off-voltage": "voltage across the switch at switch-off, unsuppressed",
 			"torque": "largest torque of its moment in the background field",
 		}[l.Limit.Quantity]
+		if l.Limit.Quantity == "power" && st.Results.Coils[l.Coil].Duty >= 1 {
+			what = "power" // energised continuously: no duty cycle to average over
+		}
 		return fmt.Sprintf("%s of coil %q alone", what, co.Name)
 	case analysis.OnProbe:
 		return fmt.Sprintf("|B| of all coils at probe %q", st.Spec.Design.Probes[l.Probe].Name)
 	}
 	if l.Limit.Quantity == "moment" && len(st.Spec.Design.Coils) > 1 {
 		return "magnitude of the vector sum of all coils' moments, all energised"
+	}
+	if l.Limit.Quantity == "power" && !anyDuty(st.Results) {
+		return "total electrical power" // every coil energised continuously
 	}
 	return q.Description
 }

@@ -209,7 +209,10 @@ func heatShedSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, coo
 			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(Ts-Ta, "K", 4), Q(float64(series)/tp.Mount, "K/W", 3)), Result: Q(st.Mounted, "W", 4)})
 		parts, nums = append(parts, "Q_m"), append(nums, Q(st.Mounted, "W", 4))
 	}
-	what := "Steady state: the surface temperature Tₛ at which the heat shed equals the duty-averaged heat generated (solved numerically, with the resistance at the winding's mean temperature)"
+	what := "Steady state: the surface temperature Tₛ at which the heat shed equals the heat generated (solved numerically, with the resistance at the winding's mean temperature)"
+	if cr.Duty < 1 {
+		what = "Steady state: the surface temperature Tₛ at which the heat shed equals the duty-averaged heat generated (solved numerically, with the resistance at the winding's mean temperature)"
+	}
 	add(Step{What: what, Symbolic: `\bar{P} = ` + strings.Join(parts, " + "),
 		Numbers: strings.Join(nums, " + "), Result: Q(st.Power, "W", 4)})
 	add(Step{What: "Surface temperature at the steady state", Symbolic: `T_s`, Result: Q(Celsius(Ts), "°C", 4)})
@@ -532,7 +535,7 @@ func (c *composer) thermalTable() doc.Table {
 		}),
 		row("Surface temperature", func(co calc.Coil, cr calc.CoilResult) string { return temp(cr.Heat.Steady.Surface) }),
 		row("Mean winding temperature", func(co calc.Coil, cr calc.CoilResult) string { return temp(cr.Heat.Steady.Mean) }),
-		row("Hottest point, duty-averaged steady state", func(co calc.Coil, cr calc.CoilResult) string { return temp(cr.Heat.Steady.HotSpot) }),
+		row(hotSpotLabel(r), func(co calc.Coil, cr calc.CoilResult) string { return temp(cr.Heat.Steady.HotSpot) }),
 	}
 	anyCycle := false
 	for _, cr := range r.Coils {
@@ -632,4 +635,13 @@ func leftOnText(co calc.Coil, cr calc.CoilResult, on calc.ThermalState) string {
 	}
 	return templates.Text("caution-left-on", map[string]string{"Duty": strconv.FormatFloat(100*cr.Duty, 'g', 3, 64) + " %",
 		"Class": Eng(Celsius(co.InsulationClass), "°C", 3), "Time": duration(h.TimeToLimit), "Settle": settle})
+}
+
+// hotSpotLabel names the steady hottest-point row: duty-averaged only
+// where some coil has a duty cycle.
+func hotSpotLabel(r calc.Results) string {
+	if anyDuty(r) {
+		return "Hottest point, duty-averaged steady state"
+	}
+	return "Hottest point, steady state"
 }
