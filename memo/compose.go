@@ -210,7 +210,7 @@ func (c *composer) verdict() doc.Paragraph {
 	var s []doc.Span
 	switch {
 	case len(limits) == 0:
-		s = append(s, doc.Span{Text: "No requirements were stated in the spec. "})
+		s = append(s, doc.Span{Text: "The design is not held to stated requirements; the results below are its calculated performance. "})
 	default:
 		s = append(s, doc.Span{Text: requirementsVerdict(len(limits), failedLimits), Strong: true}, doc.Span{Text: " "})
 	}

@@ -394,7 +394,7 @@ func warmUpText(co calc.Coil, cr calc.CoilResult) string {
 		}
 	}
 	if co.Former.Capacity() <= 0 {
-		b.WriteString("No former is stated, so the warm-up counts the conductor alone and runs somewhat faster than the coil as built will. ")
+		b.WriteString("The warm-up counts the conductor alone, without a former or bobbin, so it runs somewhat faster than a coil on a former will. ")
 	}
 	if cy := h.Cycle; cy.On > 0 {
 		if cy.Settled {
