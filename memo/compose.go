@@ -5,6 +5,7 @@ import (
 	"coilmemo/spec"
 	"fmt"
 	"math"
+	"slices"
 	"strings"
 	"time"
 
@@ -383,12 +384,7 @@ func powerLabel(r calc.Results) string {
 
 // anyDuty reports whether some coil of r runs on a duty cycle below 100 %.
 func anyDuty(r calc.Results) bool {
-	for _, cr := range r.Coils {
-		if cr.Duty < 1 {
-			return true
-		}
-	}
-	return false
+	return slices.ContainsFunc(r.Coils, func(cr calc.CoilResult) bool { return cr.Duty < 1 })
 }
 
 // perCoilColumns lays out a table of a quantity column (relative width

@@ -5,7 +5,6 @@ import (
 	"math"
 	"slices"
 	"sort"
-	"strconv"
 	"strings"
 
 	"coilmemo/analysis"
@@ -64,9 +63,8 @@ func Cautions(j *analysis.Study) []doc.Callout {
 			where = append(where, "as far as "+Eng(ir.Radial, "m", 2)+" from the origin in the xy plane")
 		}
 		if ir.Farthest > 1.005*math.Max(ir.Axial, ir.Radial) {
-			u := ir.Toward
-			where = append(where, fmt.Sprintf("as far as %s from the origin in the direction (%s, %s, %s), the farthest of the directions searched (the axes, the net moment, each coil's axis and centre)",
-				Eng(ir.Farthest, "m", 2), dirComponent(u[0]), dirComponent(u[1]), dirComponent(u[2])))
+			where = append(where, fmt.Sprintf("as far as %s from the origin in the direction %s, the farthest of the directions searched (the axes, the net moment, each coil's axis and centre)",
+				Eng(ir.Farthest, "m", 2), axisName(calc.Coil{Axis: ir.Toward})))
 		}
 		type near struct{ name, surface, dist, phrase string }
 		var nears []near
@@ -279,14 +277,4 @@ func hotText(cr calc.CoilResult, T float64) string {
 		return "more than " + Eng(Celsius(cr.Verdict.Melting), "°C", 4) + " (the melting point of its conductor)"
 	}
 	return Eng(Celsius(T), "°C", 3)
-}
-
-// dirComponent writes a component of a unit vector to two decimals,
-// trailing zeros dropped, a negative zero or a residue below 0.005 as 0.
-func dirComponent(v float64) string {
-	if math.Abs(v) < 0.005 {
-		return "0"
-	}
-	t := strings.TrimRight(strconv.FormatFloat(v, 'f', 2, 64), "0")
-	return strings.TrimSuffix(t, ".")
 }

@@ -3,6 +3,7 @@ package memo
 import (
 	"fmt"
 	"math"
+	"slices"
 	"strconv"
 	"strings"
 
@@ -199,9 +200,9 @@ func (c *composer) sweep() {
 		tText := Eng(Celsius(hot), "°C", 3)
 		if math.IsNaN(hot) {
 			tText = "runaway"
-		} else if aboveMelting(r) {
-			tText = "above melting"
-		} else if beyondClass(r) {
+		} else if slices.ContainsFunc(r.Coils, func(cr calc.CoilResult) bool { return cr.Verdict.AboveMelting }) {
+			tText = "above melting" // no steady state below the conductor's melting point
+		} else if slices.ContainsFunc(r.Coils, func(cr calc.CoilResult) bool { return cr.InsulationMargin < 0 }) {
 			tText += " †"
 			marked = true
 		}
@@ -290,26 +291,4 @@ func (c *composer) sweepMet(q, label string, x, vals []float64) string {
 		}
 	}
 	return ""
-}
-
-// aboveMelting reports whether a coil of r has no steady state below the
-// melting point of its conductor (the number would be meaningless).
-func aboveMelting(r calc.Results) bool {
-	for _, cr := range r.Coils {
-		if cr.Verdict.AboveMelting {
-			return true
-		}
-	}
-	return false
-}
-
-// beyondClass reports whether a coil of r settles above its insulation
-// class (a negative insulation margin).
-func beyondClass(r calc.Results) bool {
-	for _, cr := range r.Coils {
-		if cr.InsulationMargin < 0 {
-			return true
-		}
-	}
-	return false
 }

@@ -209,10 +209,11 @@ func heatShedSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, coo
 			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(Ts-Ta, "K", 4), Q(float64(series)/tp.Mount, "K/W", 3)), Result: Q(st.Mounted, "W", 4)})
 		parts, nums = append(parts, "Q_m"), append(nums, Q(st.Mounted, "W", 4))
 	}
-	what := "Steady state: the surface temperature Tₛ at which the heat shed equals the heat generated (solved numerically, with the resistance at the winding's mean temperature)"
+	generated := "heat generated"
 	if cr.Duty < 1 {
-		what = "Steady state: the surface temperature Tₛ at which the heat shed equals the duty-averaged heat generated (solved numerically, with the resistance at the winding's mean temperature)"
+		generated = "duty-averaged heat generated"
 	}
+	what := "Steady state: the surface temperature Tₛ at which the heat shed equals the " + generated + " (solved numerically, with the resistance at the winding's mean temperature)"
 	add(Step{What: what, Symbolic: `\bar{P} = ` + strings.Join(parts, " + "),
 		Numbers: strings.Join(nums, " + "), Result: Q(st.Power, "W", 4)})
 	add(Step{What: "Surface temperature at the steady state", Symbolic: `T_s`, Result: Q(Celsius(Ts), "°C", 4)})

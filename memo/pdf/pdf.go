@@ -83,12 +83,10 @@ func render(d *doc.Document, o options) (out []byte, err error) {
 func layOutTwice(d *doc.Document, o options) (*renderer, error) {
 	if o.onePass {
 		r := newRenderer(d, o, 0, false)
-		r.late = true
-		if err := r.run(); err != nil {
+		if err := r.setAll(); err != nil {
 			return nil, err
 		}
-		r.finishPages()
-		return r, r.pdf.Error()
+		return r, nil
 	}
 	type result struct {
 		pages int
@@ -119,7 +117,6 @@ func layOutTwice(d *doc.Document, o options) (*renderer, error) {
 	r := newRenderer(d, o, 0, false)
 	r.eqs = eqs
 	r.ahead = figs
-	r.late = true
 	err := func() (err error) {
 		defer func() { // a panic in the set pass: wait for the dry pass, then re-raise
 			if p := recover(); p != nil {
@@ -127,20 +124,27 @@ func layOutTwice(d *doc.Document, o options) (*renderer, error) {
 				panic(p)
 			}
 		}()
-		if err := r.run(); err != nil {
-			return err
-		}
-		r.finishPages()
-		return r.pdf.Error()
+		return r.setAll()
 	}()
 	if dry := <-done; dry.err != nil {
 		return nil, dry.err
 	} else if err != nil {
 		return nil, err
 	} else if r.pdf.PageNo() != dry.pages || !slices.Equal(r.headPages, dry.heads) {
-		return nil, fmt.Errorf("pdf: layout passes disagree: %d pages, then %d", dry.pages, r.pdf.PageNo())
+		return nil, fmt.Errorf("pdf: layout passes disagree: %d pages with headings on %v, then %d with %v", dry.pages, dry.heads, r.pdf.PageNo(), r.headPages)
 	}
 	return r, nil
+}
+
+// setAll is the set pass: it sets the document, leaving the footers and
+// the contents' page numbers to finishPages, which follows.
+func (r *renderer) setAll() error {
+	r.late = true
+	if err := r.run(); err != nil {
+		return err
+	}
+	r.finishPages()
+	return r.pdf.Error()
 }
 
 // finishPages writes into every page of the set pass what needed the
