@@ -98,3 +98,18 @@ func TestNoDutyWordsAtFullDuty(t *testing.T) {
 		t.Fatal("no design at 100 % duty among the examples")
 	}
 }
+
+// A gradient pair names its gradient along its own axis everywhere in the
+// memo (page 1, the field section, its table and figure): ∂By/∂y for a
+// pair along y, never ∂Bz/∂z.
+func TestGradientSymbolFollowsTheAxis(t *testing.T) {
+	j := mustEvaluate(t, "```coil\nname = g\nform = pair\nsense = opposing\nmean-diameter = 50 mm\nspacing = 40 mm\nturns = 60\nwire = AWG 24\ncurrent = 1 A\naxis = y\n```\n")
+	var buf bytes.Buffer
+	if err := doc.WriteText(&buf, Document(j)); err != nil {
+		t.Fatal(err)
+	}
+	text := buf.String()
+	if n := strings.Count(text, "∂By/∂y"); n < 3 || strings.Contains(text, "∂Bz/∂z") || !strings.Contains(text, "G·(y ŷ") {
+		t.Errorf("∂By/∂y %d times, ∂Bz/∂z %v, G·(y ŷ %v", n, strings.Contains(text, "∂Bz/∂z"), strings.Contains(text, "G·(y ŷ"))
+	}
+}

@@ -338,8 +338,15 @@ func (c *composer) summaryTable() doc.Table {
 	for _, i := range idx {
 		if co := d.Coils[i]; co.Form == calc.Pair && co.Opposing {
 			// A gradient pair's purpose is its gradient: its moment and
-			// centre field are zero by design.
-			rows = append(rows[:1], append([][]doc.Cell{row("Axial gradient at centre ∂Bz/∂z", func(k int, cr calc.CoilResult) string {
+			// centre field are zero by design. The symbol is the pairs'
+			// axis's when they share one.
+			label := "Axial gradient at centre " + gradientSymbol(co)
+			for _, k := range idx {
+				if o := d.Coils[k]; o.Form == calc.Pair && o.Opposing && gradientSymbol(o) != gradientSymbol(co) {
+					label = "Axial gradient at centre, along each pair's axis"
+				}
+			}
+			rows = append(rows[:1], append([][]doc.Cell{row(label, func(k int, cr calc.CoilResult) string {
 				if c := d.Coils[k]; c.Form != calc.Pair || !c.Opposing {
 					return "—"
 				}

@@ -531,12 +531,13 @@ func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult, cs *analysis.Coi
 	}
 	c.para(rel + ". The currents oppose: the field vanishes at the centre and grows linearly away from it, which makes the pair a gradient coil." + maxwell)
 	G := pr.Gradient
-	c.para(fmt.Sprintf("The axial gradient at the centre is ∂Bz/∂z = %s (the radial gradient is −½ of it, since ∇·B = 0). The local gradient stays within ±%s %% of the centre value up to %s from the centre along the axis and %s radially in the mid-plane: inside that region B ≈ G·(z ẑ − ρ/2 ρ̂) with G the centre gradient.",
-		Eng(G, "T/m", 4), Sig(100*calc.GradientTolerance, 2), Eng(pr.LinearAxial, "m", 3), Eng(pr.LinearRadial, "m", 3)))
+	_, as := axialSymbol(co)
+	c.para(fmt.Sprintf("The axial gradient at the centre is %s = %s (the radial gradient is −½ of it, since ∇·B = 0). The local gradient stays within ±%s %% of the centre value up to %s from the centre along the axis and %s radially in the mid-plane: inside that region B ≈ G·(%s %s − ρ/2 ρ̂) with G the centre gradient and ρ the distance from the axis.",
+		gradientSymbol(co), Eng(G, "T/m", 4), Sig(100*calc.GradientTolerance, 2), Eng(pr.LinearAxial, "m", 3), Eng(pr.LinearRadial, "m", 3), as, unitVector[as]))
 	c.add(doc.Table{Caption: fmt.Sprintf("Gradient of pair %q and its linear region", co.Name),
 		Header: []string{"Quantity", "Value"},
 		Rows: [][]doc.Cell{
-			{{Text: "Axial gradient at the centre, ∂Bz/∂z"}, {Text: Eng(G, "T/m", 4), Strong: true}},
+			{{Text: "Axial gradient at the centre, " + gradientSymbol(co)}, {Text: Eng(G, "T/m", 4), Strong: true}},
 			{{Text: "Gradient within ±1 %: along the axis (±)"}, {Text: fmt.Sprintf("%s (%s R)", Eng(pr.LinearAxial, "m", 3), Sig(pr.LinearAxial/R, 3))}},
 			{{Text: "Gradient within ±1 %: radially in the mid-plane"}, {Text: fmt.Sprintf("%s (%s R)", Eng(pr.LinearRadial, "m", 3), Sig(pr.LinearRadial/R, 3))}},
 		},
@@ -551,8 +552,7 @@ func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult, cs *analysis.Coi
 	for k := 0; k+1 < len(bp.Ends); k += 2 {
 		spans = append(spans, [2]float64{bp.Ends[k], bp.Ends[k+1]})
 	}
-	bs, as := axialSymbol(co)
-	grad := "∂" + bs + "/∂" + as
+	grad := gradientSymbol(co)
 	d := figures.ProfileData{Axis: axisName(co), Z: bp.Z, Y: bp.Gz, YName: "Axial gradient " + grad, Unit: "T/m",
 		Windings: spans, WindingLabel: "coil",
 		Marks: []figures.Mark{{X: -pr.LinearAxial, Label: "±1 %"}, {X: pr.LinearAxial, Label: "±1 %"}}}

@@ -197,6 +197,16 @@ func axialSymbol(co calc.Coil) (b, a string) {
 	return "Ba", "a"
 }
 
+// unitVector is the unit vector along each coordinate axialSymbol names.
+var unitVector = map[string]string{"x": "x̂", "y": "ŷ", "z": "ẑ", "a": "â"}
+
+// gradientSymbol is the symbol of the axial gradient along a coil's axis,
+// ∂Bz/∂z for a coil along z (axialSymbol).
+func gradientSymbol(co calc.Coil) string {
+	bs, as := axialSymbol(co)
+	return "∂" + bs + "/∂" + as
+}
+
 // axialNote explains the symbol Ba where axialSymbol uses it.
 func axialNote(co calc.Coil) string {
 	if b, _ := axialSymbol(co); b == "Ba" {
