@@ -23,6 +23,17 @@ func WriteText(w io.Writer, d *Document) error {
 	return b.Flush()
 }
 
+// BlockText is one block's plain-text rendering, as WriteText gives it
+// (a level-1 heading unnumbered).
+func BlockText(blk Block) string {
+	var s strings.Builder
+	b := bufio.NewWriter(&s)
+	section := -1
+	writeBlock(b, blk, "", &section)
+	b.Flush()
+	return s.String()
+}
+
 func writeBlock(b *bufio.Writer, blk Block, indent string, section *int) {
 	switch v := blk.(type) {
 	case Heading:

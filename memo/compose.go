@@ -29,6 +29,9 @@ type composer struct {
 	// figure number: a coil whose winding and current repeat an earlier
 	// one's shares its map (analysis), and the memo refers back to it.
 	mapped map[*analysis.MapData]drawnMap
+	// parts are the coils' parts of the section being written, for
+	// coilPart to find repeats (memo/twins.go).
+	parts []coilPart
 }
 
 type drawnMap struct {
@@ -123,6 +126,7 @@ func compose(j *analysis.Study) (*doc.Document, *composer) {
 	c := &composer{j: j, title: title, cautions: Cautions(j)}
 	for _, sec := range Sections {
 		c.starts = append(c.starts, len(c.blocks))
+		c.parts = nil
 		sec.write(c)
 	}
 	fillContents(c.blocks)

@@ -40,7 +40,17 @@ func (c *composer) electrical() {
 		if c.pickUp(i) {
 			continue // no current: no switching or drive figures (the note above)
 		}
-		c.heading(2, fmt.Sprintf("Coil %q", co.Name))
+		c.coilPart(co.Name, capital, func() { c.coilSwitching(i) })
+	}
+	c.couplings()
+	c.gradientForce()
+}
+
+// coilSwitching is coil block i's part of the section: its
+// self-inductance, switching and drive figures.
+func (c *composer) coilSwitching(i int) {
+	co, cr := c.j.Spec.Design.Coils[i], c.j.Results.Coils[i]
+	{
 		c.derive(selfInductanceSteps(co, cr, &c.j.Coils[i])...)
 		if co.Form == calc.Pair && !math.IsNaN(cr.PairForce) && cr.PairForce != 0 {
 			how := "they attract"
@@ -57,8 +67,6 @@ func (c *composer) electrical() {
 			c.para(acText(co, cr, c.j.Coils[i].Kinds))
 		}
 	}
-	c.couplings()
-	c.gradientForce()
 }
 
 // selfInductanceSteps derive the self-inductance by the method used for

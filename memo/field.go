@@ -49,8 +49,56 @@ func (c *composer) field() {
 			Align:  []doc.Align{doc.Left, doc.Left, doc.Right, doc.Right, doc.Right, doc.Right}})
 	}
 	for _, i := range c.drivenCoils() {
+		if k := c.fieldTwin(i); k >= 0 {
+			c.joinPart(k, strconv.Quote(d.Coils[i].Name), func(first, others string) string {
+				return fmt.Sprintf("What follows is written for coil %s, in its own frame: positions along and across its own axis. It holds unchanged for %s, the same winding at the same current, each in its own frame.", first, others)
+			})
+			continue
+		}
+		c.coilPart(d.Coils[i].Name, func(names string) string { return "Field of " + names }, func() { c.coilField(i) })
+	}
+	c.axisSetFigure() // memo/axisset.go
+	c.allCoilsMap()
+}
+
+// fieldTwin is the part of the field section that coil block i repeats
+// in its own frame, -1 for none: an earlier coil's whose map it shares
+// (the same winding at the same current, analysis), with the same
+// figures chosen and nothing drawn on them that belongs to one coil
+// alone (a plane of interest, a requirement line). A pair is never
+// taken for another's twin.
+func (c *composer) fieldTwin(i int) int {
+	d := c.j.Spec.Design
+	m := c.j.Coils[i].Map
+	if m == nil || d.Coils[i].Form == calc.Pair || planeShown(c.j, i) != nil {
+		return -1
+	}
+	if _, ok := c.centreRequirement(i); ok {
+		return -1
+	}
+	for _, j := range c.drivenCoils() {
+		if j >= i {
+			break
+		}
+		if c.j.Coils[j].Map != m || figuresFor(c.j, j) != figuresFor(c.j, i) || planeShown(c.j, j) != nil {
+			continue
+		}
+		if _, ok := c.centreRequirement(j); ok {
+			continue
+		}
+		if k := c.partOf(d.Coils[j].Name); k >= 0 {
+			return k
+		}
+	}
+	return -1
+}
+
+// coilField is coil block i's part of the field section.
+func (c *composer) coilField(i int) {
+	d := c.j.Spec.Design
+	r := c.j.Results
+	{
 		co, cr := d.Coils[i], r.Coils[i]
-		c.heading(2, fmt.Sprintf("Field of coil %q", co.Name))
 		cs := &c.j.Coils[i]
 		f := figuresFor(c.j, i) // which figures: memo/figsel.go
 		c.crossSection(co, cr, cs, f)
@@ -74,8 +122,6 @@ func (c *composer) field() {
 		c.fieldMap(co, cr, cs, pm != nil)
 		c.dipoleDistances(co, cr)
 	}
-	c.axisSetFigure() // memo/axisset.go
-	c.allCoilsMap()
 }
 
 // mmNum is a length in millimetres to 0.01 mm without trailing zeros or

@@ -87,7 +87,11 @@ func (c *composer) allCoilsMap() {
 		XLabel: "Position z", YLabel: "Position x"})
 	c.heading(2, "Field of all coils together")
 	n := c.figure + 1
-	text := fmt.Sprintf("Figure %d maps |B| of all %d coil blocks energised together over the xz-plane through the origin, on a logarithmic colour scale with contour lines as in the maps above.", n, len(d.Coils))
+	all := fmt.Sprintf("all %d coil blocks", len(d.Coils))
+	if len(d.Coils) == 2 {
+		all = "both coil blocks"
+	}
+	text := fmt.Sprintf("Figure %d maps |B| of %s energised together over the xz-plane through the origin, on a logarithmic colour scale with contour lines as in the maps above.", n, all)
 	if c.anyReceiver() {
 		text = fmt.Sprintf("Figure %d maps |B| over the xz-plane through the origin with the driven coils energised together and the pick-up coils' windings drawn in, on a logarithmic colour scale with contour lines as in the maps above.", n)
 	}

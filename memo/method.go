@@ -41,12 +41,16 @@ func (c *composer) method() {
 		if c.pickUp(i) {
 			what += ", pick-up"
 		}
-		c.heading(2, fmt.Sprintf("Coil %q (%s, %d turns, %s)", co.Name, what, co.Turns, wireName(co.Wire)))
-		if c.pickUp(i) {
-			c.derive(c.pickUpSteps(i)...) // memo/receiver.go
-			continue
+		title := func(names string) string {
+			return fmt.Sprintf("%s (%s, %d turns, %s)", capital(names), what, co.Turns, wireName(co.Wire))
 		}
-		c.derive(coilSteps(co, r.Coils[i], &c.j.Coils[i])...)
+		c.coilPart(co.Name, title, func() {
+			if c.pickUp(i) {
+				c.derive(c.pickUpSteps(i)...) // memo/receiver.go
+				return
+			}
+			c.derive(coilSteps(co, r.Coils[i], &c.j.Coils[i])...)
+		})
 	}
 }
 

@@ -59,13 +59,14 @@ func (c *composer) heating() {
 		if !(cr.R20 > 0) || math.IsInf(cr.R20, 0) || analysis.IsReceiver(co) {
 			continue
 		}
-		c.heading(2, fmt.Sprintf("Coil %q", co.Name))
 		cs := &c.j.Coils[i]
-		c.derive(heatSteps(co, cr, cs, c.j.Cooling)...)
-		if p := warmUpText(co, cr); p != "" {
-			c.para(p)
-		}
-		c.warmUpFigure(co, cr, cs)
+		c.coilPart(co.Name, capital, func() {
+			c.derive(heatSteps(co, cr, cs, c.j.Cooling)...)
+			if p := warmUpText(co, cr); p != "" {
+				c.para(p)
+			}
+			c.warmUpFigure(co, cr, cs)
+		})
 	}
 	c.add(c.thermalTable())
 }
