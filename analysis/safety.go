@@ -78,6 +78,10 @@ type ImplantReach struct {
 	Searched      bool    // false for a design without extent
 	Origin        float64 // T, |B| at the origin
 	Axial, Radial float64 // m
+	// Axis is the direction Axial is measured along and Radial across:
+	// the z axis, unless every coil's axis lies on one line through the
+	// origin, which is then the axis (reachAxis).
+	Axis calc.Vec
 	// Farthest is the largest distance from the origin, beyond the sphere
 	// that holds every winding, at which |B| still reaches the level along
 	// any direction searched (±x, ±y, ±z, ± the
@@ -252,10 +256,12 @@ func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach
 	fm := implantField(d, coils)
 	// Along the axis the search may come close to the origin (a bore holds
 	// no conductor); in the plane it stops outside the windings.
-	ir.Axial = math.Max(reach(fm, calc.Vec{}, calc.Vec{0, 0, 1}, ImplantField, ext*0.01, ext*1e3),
-		reach(fm, calc.Vec{}, calc.Vec{0, 0, -1}, ImplantField, ext*0.01, ext*1e3))
-	ir.Radial = math.Max(reach(fm, calc.Vec{}, calc.Vec{1, 0, 0}, ImplantField, ext, ext*1e3),
-		reach(fm, calc.Vec{}, calc.Vec{0, 1, 0}, ImplantField, ext, ext*1e3))
+	f := calc.CoilFrame(reachAxis(d))
+	ir.Axis = f.U
+	ir.Axial = math.Max(reach(fm, calc.Vec{}, f.U, ImplantField, ext*0.01, ext*1e3),
+		reach(fm, calc.Vec{}, f.U.Scale(-1), ImplantField, ext*0.01, ext*1e3))
+	ir.Radial = math.Max(reach(fm, calc.Vec{}, f.E1, ImplantField, ext, ext*1e3),
+		reach(fm, calc.Vec{}, f.E2, ImplantField, ext, ext*1e3))
 	ir.Farthest, ir.Toward = farthestReach(fm, d, r, ext)
 	for i, p := range r.Probes {
 		if p.B.Norm() >= ImplantField {
@@ -267,6 +273,29 @@ func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach
 	ir.Windings = make([]WindingReach, len(d.Coils))
 	eachIndex(len(d.Coils), func(i int) { ir.Windings[i] = windingReach(fm, d.Coils[i], coils[i], ext) })
 	return ir
+}
+
+// reachAxis is the line through the origin the implant reach is
+// measured along: the coils' common axis where every coil's axis lies on
+// one line through the origin (a single coil at the origin on any axis, a
+// coaxial stack), else the z axis.
+func reachAxis(d calc.Design) calc.Vec {
+	z := calc.Vec{0, 0, 1}
+	if len(d.Coils) == 0 {
+		return z
+	}
+	u := calc.CoilFrame(d.Coils[0].Axis).U
+	for _, co := range d.Coils {
+		v := calc.CoilFrame(co.Axis).U
+		off := co.Centre.Sub(u.Scale(co.Centre.Dot(u))).Norm()
+		if math.Abs(math.Abs(v.Dot(u))-1) > 1e-12 || off > 1e-9 {
+			return z
+		}
+	}
+	if u.Dot(z) < 0 {
+		u = u.Scale(-1)
+	}
+	return u
 }
 
 // farthestReach is the largest distance from the origin at which fm

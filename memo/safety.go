@@ -56,11 +56,12 @@ func Cautions(j *analysis.Study) []doc.Callout {
 		if ir.Origin >= analysis.ImplantField {
 			where = append(where, "at the origin, where |B| = "+Eng(ir.Origin, "T", 3))
 		}
+		along, across := reachWords(ir.Axis, len(d.Coils))
 		if ir.Axial > 0 {
-			where = append(where, "as far as "+Eng(ir.Axial, "m", 2)+" from the origin along the z axis")
+			where = append(where, "as far as "+Eng(ir.Axial, "m", 2)+" from the origin "+along)
 		}
 		if ir.Radial > 0 {
-			where = append(where, "as far as "+Eng(ir.Radial, "m", 2)+" from the origin in the xy plane")
+			where = append(where, "as far as "+Eng(ir.Radial, "m", 2)+" from the origin "+across)
 		}
 		if ir.Farthest > 1.005*math.Max(ir.Axial, ir.Radial) {
 			where = append(where, fmt.Sprintf("as far as %s from the origin in the direction %s, the farthest of the directions searched (the axes, the net moment, each coil's axis and centre)",
@@ -277,4 +278,22 @@ func hotText(cr calc.CoilResult, T float64) string {
 		return "more than " + Eng(Celsius(cr.Verdict.Melting), "°C", 4) + " (the melting point of its conductor)"
 	}
 	return Eng(Celsius(T), "°C", 3)
+}
+
+// reachWords name the line the implant reach is measured along and the
+// plane across it: "along the z axis", "in the xy plane" for a principal
+// axis; for an oblique one, the coils' axis by its direction.
+func reachWords(u calc.Vec, coils int) (along, across string) {
+	switch axisName(calc.Coil{Axis: u}) {
+	case "x", "−x":
+		return "along the x axis", "in the yz plane"
+	case "y", "−y":
+		return "along the y axis", "in the zx plane"
+	case "z", "−z":
+		return "along the z axis", "in the xy plane"
+	}
+	if coils == 1 {
+		return "along the coil's axis " + axisName(calc.Coil{Axis: u}), "in the coil's plane through the origin"
+	}
+	return "along the coils' common axis " + axisName(calc.Coil{Axis: u}), "in the plane through the origin across it"
 }
