@@ -4,9 +4,12 @@ import (
 	"bytes"
 	"os"
 	"path/filepath"
+	"regexp"
+	"slices"
 	"strings"
 	"testing"
 
+	"coilmemo/calc"
 	"coilmemo/doc"
 )
 
@@ -111,5 +114,44 @@ func TestGradientSymbolFollowsTheAxis(t *testing.T) {
 	text := buf.String()
 	if n := strings.Count(text, "∂By/∂y"); n < 3 || strings.Contains(text, "∂Bz/∂z") || !strings.Contains(text, "G·(y ŷ") {
 		t.Errorf("∂By/∂y %d times, ∂Bz/∂z %v, G·(y ŷ %v", n, strings.Contains(text, "∂Bz/∂z"), strings.Contains(text, "G·(y ŷ"))
+	}
+}
+
+// A warm-up said to have settled ends at the steady temperature the
+// figure draws as its level, to the figure the memo prints: not 44.8 °C
+// "settled" beside a 45.0 °C level. Checked over every example and
+// figure-test design.
+func TestSettledWarmUpEndsAtTheLevel(t *testing.T) {
+	files, _ := filepath.Glob("../examples/*.md")
+	more, _ := filepath.Glob("../testdata/figures/*.md")
+	files = append(files, more...)
+	lead := regexp.MustCompile(`warm-up of coil "([^"]*)": energised continuously, its hottest point climbs from [^ ]+ °C to ([^ ]+ °C) in [^,]*, where it has settled`)
+	seen := 0
+	for _, f := range files {
+		src, err := os.ReadFile(f)
+		if err != nil {
+			t.Fatal(err)
+		}
+		j, diags := evaluate(filepath.Base(f), src)
+		if len(diags) > 0 {
+			continue
+		}
+		var buf bytes.Buffer
+		if err := doc.WriteText(&buf, Document(j)); err != nil {
+			t.Fatal(err)
+		}
+		for _, m := range lead.FindAllStringSubmatch(buf.String(), -1) {
+			i := slices.IndexFunc(j.Spec.Design.Coils, func(co calc.Coil) bool { return co.Name == m[1] })
+			if i < 0 {
+				t.Fatalf("%s: no coil %q", f, m[1])
+			}
+			seen++
+			if want := Eng(Celsius(j.Coils[i].Heat.Continuous.HotSpot), "°C", 3); m[2] != want {
+				t.Errorf("%s, coil %q: settled at %s, steady level %s", filepath.Base(f), m[1], m[2], want)
+			}
+		}
+	}
+	if seen == 0 {
+		t.Error("no settled warm-up found: the test reads nothing")
 	}
 }

@@ -476,8 +476,12 @@ func (c *composer) warmUpFigure(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 	lead := fmt.Sprintf("Figure %d shows the warm-up of coil %q: energised continuously, its hottest point climbs from %s to %s in %s",
 		n, co.Name, Eng(Celsius(tp.Ambient), "°C", 3), Eng(Celsius(hot[len(hot)-1]), "°C", 3), duration(t[len(t)-1]))
 	switch {
-	case steady.Settled && math.Abs(steady.HotSpot-hot[len(hot)-1]) < 0.5:
+	case steady.Settled && Eng(Celsius(steady.HotSpot), "°C", 3) == Eng(Celsius(hot[len(hot)-1]), "°C", 3):
 		lead += ", where it has settled: the curve's plateau is the steady state"
+	case steady.Settled && math.Abs(steady.HotSpot-hot[len(hot)-1]) < 0.5:
+		// The same figures as the level drawn, not a rounded "settled".
+		lead += fmt.Sprintf(", close to its steady %s (the dotted level), which the curve's plateau approaches",
+			Eng(Celsius(steady.HotSpot), "°C", 3))
 	case steady.Settled:
 		lead += fmt.Sprintf(", on its way to the steady %s", Eng(Celsius(steady.HotSpot), "°C", 3))
 	}
