@@ -114,6 +114,13 @@ func pageRuleViolations(l *pdf.Layout, major map[int]bool) []string {
 			out = append(out, fmt.Sprintf("page %d: a heading starts %.0f %% down the text area", b.Page, 100*(b.Top-l.BodyTop)/body))
 		}
 	}
+	// A heading keeps more than a line or two of what it heads on its
+	// page ("11 Safety" and its one-line introduction at a page foot).
+	for _, b := range l.Boxes {
+		if b.Kind == "heading" && b.Page < l.Pages && bottom[b.Page]-b.Bottom < 0.03*body {
+			out = append(out, fmt.Sprintf("page %d: a heading with %.0f %% of the text area below it at the page foot", b.Page, 100*(bottom[b.Page]-b.Bottom)/body))
+		}
+	}
 	// A paragraph right before a figure (its lead-in) ends on the
 	// figure's page; a table split over pages has two rows or more on
 	// every page.
@@ -175,6 +182,7 @@ func TestPageRuleViolations(t *testing.T) {
 		{Page: 2, Block: 4, Kind: "table", Top: 980, Bottom: 1000},
 		{Page: 2, Block: 4, Kind: "table", Top: 1000, Bottom: 1090},
 		{Page: 3, Block: 4, Kind: "table", Top: 100, Bottom: 120},
+		{Page: 3, Block: 5, Kind: "heading", Top: 120, Bottom: 140},
 	}}
 	got := pageRuleViolations(l, nil)
 	for _, want := range []string{"page 1 of 3: 60 % blank", "page 2: a heading starts 86 %", "lead-in (block 1), its figure on page 2", "page 3: one row of table block 4 alone"} {
@@ -188,6 +196,16 @@ func TestPageRuleViolations(t *testing.T) {
 	}
 	if len(got) != 4 {
 		t.Errorf("%d findings, want 4: %q", len(got), got)
+	}
+	// A heading and one line at a page foot.
+	foot := &pdf.Layout{Pages: 2, BodyTop: 100, BodyBottom: 1100, Boxes: []pdf.Box{
+		{Page: 1, Block: 0, Kind: "paragraph", Top: 100, Bottom: 900},
+		{Page: 1, Block: 1, Kind: "heading", Top: 920, Bottom: 940},
+		{Page: 1, Block: 2, Kind: "paragraph", Top: 940, Bottom: 960},
+		{Page: 2, Block: 3, Kind: "paragraph", Top: 100, Bottom: 1000},
+	}}
+	if got := pageRuleViolations(foot, nil); len(got) != 1 || !strings.Contains(got[0], "a heading with 2 % of the text area below it") {
+		t.Errorf("a heading and one line at the foot: %q", got)
 	}
 	l.Boxes = l.Boxes[2:4]
 	l.Boxes[1].Top = 800

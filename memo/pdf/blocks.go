@@ -185,9 +185,10 @@ func (r *renderer) keepAfterHeading(next doc.Block, after []doc.Block) float64 {
 			switch b := after[0].(type) {
 			case doc.Figure:
 				return float64(n)*leadBody + 6.5 + 8 + r.leastFigure(b)
-			case doc.Table:
-				// A heading, its short introduction and the start of the
-				// table it introduces (a section such as Verification).
+			case doc.Table, doc.Callout, doc.List, doc.Equation:
+				// A heading, its short introduction and the start of what
+				// it introduces (the table of Verification, the first
+				// caution of Safety): not a heading and one line.
 				return float64(n)*leadBody + 6.5 + r.minHeight(b)
 			}
 		}
@@ -230,7 +231,12 @@ func (r *renderer) minHeight(b doc.Block) float64 {
 		fl := r.layoutFigure(b)
 		return fl.total
 	case doc.Callout:
-		return min(r.layoutCallout(b).h, 3*leadBody)
+		// A boxed caution is not split: the whole box follows, unless it
+		// is too long for a page and flows as paragraphs (callout).
+		if h := r.layoutCallout(b).h; h <= bodyBottom-bodyTop {
+			return h
+		}
+		return 3 * leadBody
 	case doc.Code:
 		return 3*leadCode + 2*codePad
 	case doc.TitleBlock:
