@@ -269,20 +269,6 @@ func sheetNagaoka(a, l float64) float64 {
 	return sum / (calc.Mu0 * math.Pi * a * a * l)
 }
 
-// meanTurnRadius is the turn-weighted mean radius of a laid-out winding,
-// 0 when it has no turns.
-func meanTurnRadius(w calc.Winding) float64 {
-	var n, sum float64
-	for _, l := range w.Layers {
-		n += float64(len(l.Z))
-		sum += float64(len(l.Z)) * l.Radius
-	}
-	if n == 0 {
-		return 0
-	}
-	return sum / n
-}
-
 // helmholtzCheck compares the centre field of an aiding pair at Helmholtz
 // spacing (spacing = radius, within 1 %) with the Helmholtz closed form
 // B = (4/5)^(3/2) μ0 N I / R. The tolerance allows for a spacing off R by
@@ -297,7 +283,7 @@ func helmholtzCheck(c calc.Coil, cr calc.CoilResult) []Check {
 	// R is the turns' mean radius as laid out: a winding that does not
 	// fill its stated radial build sits nearer the axis than its stated
 	// mean diameter says.
-	if r := meanTurnRadius(cr.Winding); r > 0 {
+	if r := cr.Winding.MeanTurnRadius(); r > 0 {
 		R = r
 	}
 	fr := calc.CoilFrame(c.Axis)

@@ -53,7 +53,7 @@ func studyCoil(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, maps mapC
 	w := cr.Winding
 	cs := CoilStudy{Outer: calc.WireOuter(co), Series: calc.SeriesCoils(co), ConductorArea: calc.ConductorArea(co.Wire.Bare)}
 	cs.Bundle = calc.BundleDiameter(cs.Outer, co.Turns)
-	cs.MeanRadius = meanTurnRadius(w)
+	cs.MeanRadius = w.MeanTurnRadius()
 	cs.Envelope = calc.WindingEnvelope(co, w)
 	cs.Placements = calc.Placements(co)
 	cs.Depth = co.RadialBuild

@@ -69,13 +69,22 @@ const HelmholtzTolerance = 0.01
 // stays within 1 % of the centre value, along the axis and radially in the
 // mid-plane. Distances are from the centre, m; NaN where they do not apply.
 type PairRegion struct {
-	SpacingRatio float64 // spacing / mean radius
+	SpacingRatio float64 // spacing / Radius
+	// Radius is the mean radius of the turns as laid (MeanTurnRadius),
+	// the stated mean radius for a winding without turns: the radius a
+	// Helmholtz or Maxwell spacing is judged against.
+	Radius float64
 	Helmholtz    bool    // aiding and |SpacingRatio − 1| ≤ HelmholtzTolerance
 	// Maxwell is set for an opposing pair at √3 times the mean radius
 	// (within HelmholtzTolerance), the spacing at which the cubic term of
 	// the axial field of two thin opposed coils vanishes, making the
 	// gradient most uniform.
 	Maxwell bool
+
+	// Dip is set for an aiding pair whose axial field is weaker at the
+	// centre than a tenth of the radius along the axis from it (spacing
+	// wider than the flat one); clear for a peak at the centre.
+	Dip bool
 
 	Axial1, Radial1   float64 // 1 % homogeneous region (aiding)
 	Axial01, Radial01 float64 // 0.1 % homogeneous region (aiding)
@@ -103,13 +112,21 @@ func AnalysePair(c Coil, w Winding, I float64) PairRegion {
 	if c.Form != Pair {
 		return p
 	}
-	R := c.MeanDiameter / 2
+	R := w.MeanTurnRadius()
+	if !(R > 0) {
+		R = c.MeanDiameter / 2
+	}
+	p.Radius = R
 	if R > 0 {
 		p.SpacingRatio = math.Abs(c.Spacing) / R
 	}
 	s := NewCoilSource(c, w, I)
 	if !c.Opposing {
 		p.Helmholtz = math.Abs(p.SpacingRatio-1) <= HelmholtzTolerance
+		if R > 0 {
+			fr := CoilFrame(c.Axis)
+			p.Dip = math.Abs(s.At(c.Centre.Add(fr.U.Scale(R/10))).Dot(fr.U)) > math.Abs(s.At(c.Centre).Dot(fr.U))
+		}
 		p.Axial1, p.Radial1 = homogeneity(s, w, 0.01)
 		p.Axial01, p.Radial01 = homogeneity(s, w, 0.001)
 		return p

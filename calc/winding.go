@@ -263,3 +263,19 @@ func (w Winding) TurnCount() int {
 	}
 	return n
 }
+
+// MeanTurnRadius is the turn-weighted mean radius of the turns as laid
+// out, Σ nₖ rₖ / Σ nₖ over the layers (nₖ turns at radius rₖ); 0 for no
+// turns. A winding that does not fill its stated radial build sits nearer
+// the bore than the stated mean diameter says.
+func (w Winding) MeanTurnRadius() float64 {
+	var n, sum float64
+	for _, l := range w.Layers {
+		n += float64(len(l.Z))
+		sum += float64(len(l.Z)) * l.Radius
+	}
+	if n == 0 {
+		return 0
+	}
+	return sum / n
+}

@@ -141,7 +141,7 @@ func radialBuildFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d
 		used := float64(w.LayerCount) * co.Wire.Outer
 		if used < 0.95*co.RadialBuild {
 			out = append(out, validity{what: "Radial build", flagged: true, text: fmt.Sprintf(
-				"the %d turns lie in %d layers %s deep, less than the stated radial build of %s; the turns' mean radius is %s against the stated %s. All results use the turns as laid out; a coil wound to fill the stated build would have more turns or a larger mean radius than these results assume.",
+				"the %d turns lie in %d layers %s deep, less than the stated radial build of %s; the turns' mean radius is %s against the stated %s. The resistance, field, moment and inductance are those of the turns as laid from the bore; the heat is taken to leave through the outside of the stated section (a former, potting or a loose outer layer filling it). A coil wound to fill the stated build would have more turns or a larger mean radius than these results assume.",
 				co.Turns, w.LayerCount, Eng(used, "m", 3), Eng(co.RadialBuild, "m", 3), Eng(cs.MeanRadius, "m", 4), Eng(R, "m", 4))})
 		}
 	}
@@ -263,10 +263,10 @@ func thermalFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d cal
 // pairFlag flags the Helmholtz condition and the pair's useful region.
 func pairFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.Design) []validity {
 	var out []validity
-	R := co.MeanDiameter / 2
-	// Helmholtz condition and the pair's useful region.
-	if co.Form == calc.Pair && R > 0 {
-		ratio := co.Spacing / R
+	// Helmholtz condition and the pair's useful region, judged against
+	// the turns' mean radius as laid.
+	if co.Form == calc.Pair && cr.Pair.Radius > 0 {
+		ratio := cr.Pair.SpacingRatio
 		v := validity{what: "Helmholtz condition"}
 		pr := cr.Pair
 		switch {
@@ -285,15 +285,15 @@ func pairFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.D
 			v.text += "."
 		default:
 			v.flagged = true
-			shape := "a dip at the centre (spacing wider than the radius)"
-			if ratio < 1 {
-				shape = "a peak at the centre (spacing narrower than the radius)"
+			shape := "a peak at the centre"
+			if pr.Dip {
+				shape = "a dip at the centre"
 			}
-			v.text = fmt.Sprintf("spacing / mean radius $s/R$ = %s, not 1: the field on the axis has %s", Sig(ratio, 3), shape)
+			v.text = fmt.Sprintf("spacing / mean radius of the turns $s/R$ = %s, not 1: the field on the axis has %s", Sig(ratio, 4), shape)
 			if !math.IsNaN(pr.Axial1) {
 				v.text += fmt.Sprintf("; it stays within 1 %% of its centre value for %s along the axis and %s radially", pmEng(pr.Axial1), pmEng(pr.Radial1))
 			}
-			v.text += fmt.Sprintf(". Spacing the coils at %s would make it a Helmholtz pair.", Eng(R, "m", 3))
+			v.text += fmt.Sprintf(". Spacing the coils at %s would make it a Helmholtz pair.", Eng(cr.Pair.Radius, "m", 4))
 		}
 		out = append(out, v)
 	}

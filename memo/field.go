@@ -205,6 +205,10 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 			figures.Dimension{Kind: figures.Radial, A: e.R0, B: e.R1, Label: mmText(co.RadialBuild)})
 		desc = fmt.Sprintf("%d turns in %d layers of up to %d turns, %s long with a radial build of %s",
 			co.Turns, w.LayerCount, w.TurnsPerLayer, mmText(e.Z1-e.Z0), mmText(co.RadialBuild))
+		if used := float64(w.LayerCount) * co.Wire.Outer; co.Wire.Outer > 0 && used < 0.95*co.RadialBuild {
+			// The same test as the Radial build assumption's flag.
+			desc += fmt.Sprintf(", of which the turns fill the inner %s", mmText(used))
+		}
 	}
 	sd.Dimensions = append(sd.Dimensions, coreDims...)
 	desc += coreDesc
@@ -513,21 +517,24 @@ func (c *composer) dipoleDistances(co calc.Coil, cr calc.CoilResult) {
 // gradient and linear region.
 func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, i int, f coilFigures) {
 	pr := cr.Pair
-	R := co.MeanDiameter / 2
+	R := pr.Radius // the turns' mean radius as laid
 	s := math.Abs(co.Spacing)
 	pc := cs.Pair
 	if pc == nil {
 		return
 	}
 	B0 := pc.B0
-	rel := fmt.Sprintf("The coil centres are %s apart, %s times the mean radius R = %s", Eng(s, "m", 3), Sig(pr.SpacingRatio, 4), Eng(R, "m", 3))
+	rel := fmt.Sprintf("The coil centres are %s apart, %s times the mean radius R = %s", Eng(s, "m", 4), Sig(pr.SpacingRatio, 4), Eng(R, "m", 4))
+	if math.Abs(R/(co.MeanDiameter/2)-1) > 1e-4 {
+		rel += fmt.Sprintf(" of the turns as laid (the stated mean radius is %s)", Eng(co.MeanDiameter/2, "m", 4))
+	}
 	pct := Sig(100*calc.HelmholtzTolerance, 2)
 	if !co.Opposing {
 		var cond string
 		if pr.Helmholtz {
 			cond = fmt.Sprintf("; the Helmholtz condition (spacing = radius, within ±%s %%) is met. For thin coils this spacing cancels the second derivative of the axial field at the centre, which makes the field there as flat as two coils can make it.", pct)
 		} else {
-			cond = fmt.Sprintf("; the Helmholtz condition (spacing = radius, within ±%s %%) is not met: the Helmholtz spacing for this radius would be %s.", pct, Eng(R, "m", 3))
+			cond = fmt.Sprintf("; the Helmholtz condition (spacing = radius, within ±%s %%) is not met: the Helmholtz spacing for this radius would be %s.", pct, Eng(R, "m", 4))
 		}
 		c.para(rel + cond)
 		c.para(fmt.Sprintf("At the centre of the pair the flux density is %s along the axis. The table gives how far from the centre the field stays within ±1 %% and ±0.1 %% of that value (|B − B0| ≤ tol · |B0|), along the axis and radially in the mid-plane.",
