@@ -73,8 +73,8 @@ type PairRegion struct {
 	// Radius is the mean radius of the turns as laid (MeanTurnRadius),
 	// the stated mean radius for a winding without turns: the radius a
 	// Helmholtz or Maxwell spacing is judged against.
-	Radius float64
-	Helmholtz    bool    // aiding and |SpacingRatio − 1| ≤ HelmholtzTolerance
+	Radius    float64
+	Helmholtz bool // aiding and |SpacingRatio − 1| ≤ HelmholtzTolerance
 	// Maxwell is set for an opposing pair at √3 times the mean radius
 	// (within HelmholtzTolerance), the spacing at which the cubic term of
 	// the axial field of two thin opposed coils vanishes, making the
