@@ -215,7 +215,7 @@ func coilMap(co calc.Coil, cr calc.CoilResult, cs CoilStudy, grid int) *MapData 
 			half += math.Abs(co.Spacing) / 2
 		}
 		xHalf = 1.6 * e.R1
-		zHalf = math.Max(half+0.9*e.R1, 0.75*xHalf)
+		zHalf = math.Max(half+0.9*e.R1, xHalf) // no narrower than tall: a short coil's map stays readable
 		// A long solenoid's map reaches out far enough to show the field
 		// returning round the winding, not a sliver along the bore.
 		xHalf = math.Max(xHalf, 0.35*zHalf)
