@@ -120,7 +120,7 @@ func (c *composer) coilField(i int) {
 			c.planeFigure(co, pm) // memo/plane.go
 		}
 		c.fieldMap(co, cr, cs, pm != nil)
-		c.dipoleDistances(co, cr)
+		c.dipoleDistances(co, cr, cs)
 	}
 }
 
@@ -466,7 +466,7 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 
 // dipoleDistances adds the table of distances beyond which the coil may be
 // taken as a point dipole.
-func (c *composer) dipoleDistances(co calc.Coil, cr calc.CoilResult) {
+func (c *composer) dipoleDistances(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) {
 	dr := cr.Dipole
 	if math.IsNaN(dr.Axis1) {
 		if co.Form == calc.Pair && co.Opposing {
@@ -493,6 +493,13 @@ func (c *composer) dipoleDistances(co calc.Coil, cr calc.CoilResult) {
 		plane += " (worst direction)"
 	}
 	good1, good01 := dr.Any1, dr.Any01
+	if !c.farFieldUsed(co, cs.Kinds.Core != nil, dr) {
+		// A bore or homogeneous-region design: the far field is a side
+		// note, one sentence, not a table.
+		c.para(fmt.Sprintf("Far from the winding the field of coil %q is that of a point dipole of moment |m| = %s at its centre, to within 1 %% beyond %s from its centre in any direction (0.1 %% beyond %s).",
+			co.Name, Eng(cr.Moment.Norm(), "A·m²", 3), Eng(good1, "m", 3), Eng(good01, "m", 3)))
+		return
+	}
 	refText := fmt.Sprintf("%s = %s is the mean radius", refName, Eng(R, "m", 3))
 	if co.Form == calc.Rectangle {
 		refText = fmt.Sprintf("%s = √(W·H/π) = %s is the radius of the circle of the same area", refName, Eng(ref, "m", 3))
@@ -511,6 +518,25 @@ func (c *composer) dipoleDistances(co calc.Coil, cr calc.CoilResult) {
 		},
 		Widths: []float64{2.2, 1.6, 1.6},
 		Align:  []doc.Align{doc.Left, doc.Right, doc.Right}})
+}
+
+// farFieldUsed reports whether a coil's far field serves the design, so
+// that the point-dipole distances get their table: a moment or torque
+// design (a requirement on either, a moment objective, a background
+// field to turn in, a cored rod), or a probe at least as far from the
+// coil's centre as the dipole holds to 1 % along its axis or plane.
+func (c *composer) farFieldUsed(co calc.Coil, cored bool, dr calc.DipoleReach) bool {
+	d := c.j.Spec.Design
+	if momentDesign(c.j) || d.Conditions.BackgroundField.Norm() > 0 || cored {
+		return true
+	}
+	near := math.Min(dr.Axis1, dr.Plane1)
+	for _, p := range d.Probes {
+		if p.At.Sub(co.Centre).Norm() >= near {
+			return true
+		}
+	}
+	return false
 }
 
 // pairRegion reports a pair's centre field and homogeneous region, or its

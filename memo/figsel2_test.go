@@ -1,6 +1,7 @@
 package memo
 
 import (
+	"bytes"
 	"math"
 	"os"
 	"path/filepath"
@@ -166,5 +167,34 @@ func TestAxisSetDirections(t *testing.T) {
 	}
 	if p := prose(d); !strings.Contains(p, `"big" 6.28 A·m² along z; "small" 707 µA·m² along x`) || !strings.Contains(p, "The largest cross-coupling is |k| < 0.0001,") {
 		t.Errorf("the magnitudes are not in the text: %q", p)
+	}
+}
+
+// The point-dipole distances get their table where the far field serves
+// the design (a torquer, a probe far out), and one sentence elsewhere (a
+// calibration solenoid's bore, a pair's homogeneous region).
+func TestDipoleTableWhereTheFarFieldServes(t *testing.T) {
+	for _, tc := range []struct {
+		file  string
+		table bool
+	}{{"../examples/bench-solenoid.md", false}, {"../examples/calibration-pair.md", false}, {"../examples/torque-coil.md", true}, {"../examples/torque-rod.md", true}, {"../testdata/figures/tilted-torquer.md", true}} {
+		src, err := os.ReadFile(tc.file)
+		if err != nil {
+			t.Fatal(err)
+		}
+		j, diags := evaluate(filepath.Base(tc.file), src)
+		if len(diags) > 0 {
+			t.Fatal(diags)
+		}
+		var buf bytes.Buffer
+		if err := doc.WriteText(&buf, Document(j)); err != nil {
+			t.Fatal(err)
+		}
+		text := buf.String()
+		table := strings.Contains(text, "Table: Distance beyond which the point-dipole field")
+		sentence := strings.Contains(text, "to within 1 % beyond")
+		if table != tc.table || sentence == tc.table {
+			t.Errorf("%s: dipole table %v, one sentence %v; want the table %v", tc.file, table, sentence, tc.table)
+		}
 	}
 }
