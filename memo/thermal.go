@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"math"
 	"strconv"
+	"slices"
 	"strings"
 
 	"coilmemo/calc"
@@ -43,8 +44,18 @@ func (c *composer) heating() {
 		if d.Conditions.AxisVertical {
 			orient = "vertical"
 		}
+		shapes, n := c.convectionShapes()
+		sits, axes := "The coils sit", "their axes"
+		if len(c.drivenCoils()) == 1 {
+			sits, axes = "The coil sits", "its axis"
+		}
+		plural, singular := "s", ""
+		if n == 1 {
+			plural, singular = "", "s"
+		}
 		env = templates.Text("heating-still-air", map[string]string{"Emissivity": Sig(cool.Emissivity, 2), "Orientation": orient,
-			"RaMax": "10¹²", "Table": calc.AirTableSource})
+			"RaMax": "10¹²", "Table": calc.AirTableSource, "Shapes": shapes,
+			"Sits": sits, "Axes": axes, "Plural": plural, "Singular": singular})
 	}
 	c.para(env)
 	if R := d.Conditions.MountResistance; R > 0 {
@@ -650,4 +661,34 @@ func hotSpotLabel(r calc.Results) string {
 		return "Hottest point, duty-averaged steady state"
 	}
 	return "Hottest point, steady state"
+}
+
+// convectionShapes names the free-convection correlations the design's
+// coils use, each once: only the shapes present, not every case the
+// model knows.
+func (c *composer) convectionShapes() (string, int) {
+	var shapes []string
+	for _, i := range c.drivenCoils() {
+		cr := c.j.Results.Coils[i]
+		nc := cr.Heat.Problem.Convection
+		if nc == nil {
+			continue
+		}
+		s := "the horizontal-cylinder correlation of Churchill and Chu (1975) on the winding's outer diameter"
+		switch {
+		case nc.Shape == calc.VerticalSurface:
+			s = "the vertical-surface correlation of Churchill and Chu (1975) on the winding's length, its axis being vertical"
+		case nc.Ring:
+			s = "the horizontal-cylinder correlation of Churchill and Chu (1975) for a ring-shaped winding, taken as a tube whose perimeter equals the winding section's"
+		case cr.Winding.Thin:
+			s = "the horizontal-cylinder correlation of Churchill and Chu (1975) for a thin coil's round bundle, taken as a tube of the bundle's diameter"
+		}
+		if !slices.Contains(shapes, s) {
+			shapes = append(shapes, s)
+		}
+	}
+	if len(shapes) == 0 {
+		return "the free-convection correlations of Churchill and Chu (1975)", 2
+	}
+	return joinAnd(shapes), len(shapes)
 }
