@@ -4,8 +4,8 @@ import (
 	"coilmemo/analysis"
 	"fmt"
 	"math"
-	"strconv"
 	"slices"
+	"strconv"
 	"strings"
 
 	"coilmemo/calc"
