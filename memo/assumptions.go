@@ -38,7 +38,11 @@ func (c *composer) assumptions() {
 		}
 		item(lead, false, text)
 	}
-	general("Filament model", templates.Text("assume-filament", nil))
+	forms := map[string]bool{"Rect": false, "Round": false}
+	for _, co := range d.Coils {
+		forms[map[bool]string{true: "Rect", false: "Round"}[co.Form == calc.Rectangle]] = true
+	}
+	general("Filament model", templates.Text("assume-filament", forms))
 	if !c.receiverOnly() { // a pick-up coil is not heated
 		general("Cooling", coolingAssumption(d, c.j.Cooling))
 		general("Thermal model", templates.Text("assume-thermal", nil))

@@ -155,3 +155,35 @@ func TestSettledWarmUpEndsAtTheLevel(t *testing.T) {
 		t.Error("no settled warm-up found: the test reads nothing")
 	}
 }
+
+// A rectangle is not described as circular filaments, nor a circular
+// coil as straight ones.
+func TestFilamentWordsFollowTheForms(t *testing.T) {
+	for _, tc := range []struct{ file, must, not string }{
+		{"../testdata/figures/rectangle.md", "Each rectangular turn is four straight filaments", "circular"},
+		{"../examples/bench-solenoid.md", "Each circular turn is a closed circular filament", "rectangular turn"},
+	} {
+		src, err := os.ReadFile(tc.file)
+		if err != nil {
+			t.Fatal(err)
+		}
+		j, diags := evaluate(filepath.Base(tc.file), src)
+		if len(diags) > 0 {
+			t.Fatal(diags)
+		}
+		var buf bytes.Buffer
+		if err := doc.WriteText(&buf, Document(j)); err != nil {
+			t.Fatal(err)
+		}
+		text := buf.String()
+		a := strings.Index(text, "## 4 Assumptions")
+		f := strings.Index(text, "superposed.")
+		if a < 0 || f < 0 {
+			t.Fatalf("%s: sections not found", tc.file)
+		}
+		model := text[a:strings.Index(text[a:], "Non-magnetic")+a] + text[strings.LastIndex(text[:f], "Fields are computed"):f]
+		if !strings.Contains(model, tc.must) || strings.Contains(model, tc.not) {
+			t.Errorf("%s: filament wording %q", tc.file, model)
+		}
+	}
+}

@@ -34,7 +34,19 @@ func (c *composer) field() {
 		"they make no field of their own and have no figures here; the field figures are the driven coils', and their response to a field is in the section Pick-up and a.c. figures"); p != "" {
 		c.para(p)
 	}
-	c.para("Fields are computed from the exact field of each circular turn (complete elliptic integrals) or of each straight side of a rectangle (closed-form Biot–Savart integral), superposed. For maps and profiles the turns of a thick winding are grouped by Gauss quadrature over the winding cross-section, which reproduces the turn-by-turn sum to better than one part in 10⁹ and falls back to the individual turns near the winding.")
+	round, rect := false, false
+	for _, co := range d.Coils {
+		rect = rect || co.Form == calc.Rectangle
+		round = round || co.Form != calc.Rectangle
+	}
+	from := "each circular turn (complete elliptic integrals) or of each straight side of a rectangle (closed-form Biot–Savart integral)"
+	switch {
+	case !rect:
+		from = "each circular turn (complete elliptic integrals)"
+	case !round:
+		from = "each straight side of every rectangular turn (closed-form Biot–Savart integral)"
+	}
+	c.para("Fields are computed from the exact field of " + from + ", superposed. For maps and profiles the turns of a thick winding are grouped by Gauss quadrature over the winding cross-section, which reproduces the turn-by-turn sum to better than one part in 10⁹ and falls back to the individual turns near the winding.")
 	if len(r.Probes) > 0 {
 		var rows [][]doc.Cell
 		for _, p := range r.Probes {
