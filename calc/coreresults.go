@@ -23,6 +23,10 @@ type CoreResult struct {
 
 	FluxDensityPeak   float64 // T, largest |B| in the core at the current
 	FluxDensityLinear float64 // T, the same for a core that never saturates
+	// PeakH and PeakM are the field and magnetisation, A/m, of the slice
+	// where that peak lies (FluxDensityPeak = μ0 |H + M|), signed so that
+	// their sum is positive.
+	PeakH, PeakM float64
 	// SaturationMargin is 1 − B_linear/B_sat (negative past saturation; NaN
 	// without a saturation flux density); SaturationCurrent is the current
 	// at which the linear peak reaches B_sat.
@@ -39,7 +43,8 @@ type CoreResult struct {
 	// m² (reception; ΣA for an air core).
 	EffectiveArea float64
 
-	Mass float64 // kg, the core (NaN without a density)
+	Mass   float64 // kg, the core (NaN without a density)
+	Volume float64 // m³, the core's, π D²/4 · ℓ
 
 	// ResidualMoment is the moment left after switch-off, A·m²;
 	// ResidualBound is set when only the remanence was given, so the figure

@@ -16,7 +16,7 @@ import (
 // Eng formats an SI value in engineering notation with sig significant
 // figures and an SI prefix on unit: Eng(0.00123, "T", 3) = "1.23 mT".
 // A few units are shown the way the trade reads them rather than with a
-// prefix: kg as g or kg, m² as mm² or m², A/m² as A/mm², and °C, %, ratios
+// prefix: kg as g or kg, m² as mm² or m², m³ as cm³ or m³, A/m² as A/mm², and °C, %, ratios
 // and material data (Ω·m, kg/m³, W/(m²·K)) plain.
 func Eng(v float64, unit string, sig int) string {
 	if math.IsNaN(v) {
@@ -39,6 +39,13 @@ func Eng(v float64, unit string, sig int) string {
 			return Sig(v*1e6, sig) + " mm²"
 		}
 		return Sig(v, sig) + " m²"
+	case "m³":
+		// a prefix on a cubed unit would cube too (1 mm³ = 10⁻⁹ m³): small
+		// volumes in cm³, as the trade reads them
+		if math.Abs(v) < 1e-3 {
+			return Sig(v*1e6, sig) + " cm³"
+		}
+		return Sig(v, sig) + " m³"
 	case "A/m²":
 		return Sig(v/1e6, sig) + " A/mm²"
 	case "Ω·m", "kg/m³", "W/(m²·K)", "J/(kg·K)", "W/(m·K)", "K/W":

@@ -58,3 +58,15 @@ func TestSIText(t *testing.T) {
 		}
 	}
 }
+
+// A cubed unit takes no prefix (10⁻⁶ m³ is 1 cm³, not 1 µm³).
+func TestVolume(t *testing.T) {
+	for _, c := range []struct {
+		v    float64
+		want string
+	}{{7.854e-6, "7.854 cm³"}, {2.5e-4, "250.0 cm³"}, {0.012, "0.01200 m³"}} {
+		if got := Eng(c.v, "m³", 4); got != c.want {
+			t.Errorf("Eng(%g, m³) = %q, want %q", c.v, got, c.want)
+		}
+	}
+}

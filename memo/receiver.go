@@ -198,8 +198,16 @@ func (c *composer) pickUpSteps(i int) []Step {
 		add(Step{What: "Effective area, the flux linkage per tesla of a uniform axial field, with the core (derived in the Core section)",
 			Symbolic: `A_{eff} = ` + Q(r.EffectiveArea, "m²", 4)})
 	} else {
-		add(Step{What: "Effective area, the flux linkage per tesla of a uniform axial field: the area of every turn, summed",
-			Symbolic: `A_{eff} = \sum_{i=1}^{N} \pi r_i^2`, Result: Q(r.EffectiveArea, "m²", 4)})
+		st := Step{What: "Effective area, the flux linkage per tesla of a uniform axial field: the area of every turn, summed",
+			Symbolic: `A_{eff} = \sum_{i=1}^{N} \pi r_i^2`, Result: Q(r.EffectiveArea, "m²", 4)}
+		if w := cr.Winding; w.Thin || w.LayerCount <= 1 {
+			st.Numbers = fmt.Sprintf(`%d \cdot \pi \cdot %s^2`, co.Turns, Paren(Q(co.MeanDiameter/2, "m", 4)))
+		} else {
+			st.What += fmt.Sprintf(": N turns of mean square radius ⟨r²⟩ = %s", Eng(cs.MeanSquareRadius, "m²", 4))
+			st.Symbolic += ` = N \pi \langle r^2 \rangle`
+			st.Numbers = fmt.Sprintf(`%d \cdot \pi \cdot %s`, co.Turns, Q(cs.MeanSquareRadius, "m²", 4))
+		}
+		add(st)
 	}
 	if r.Frequency > 0 {
 		add(Step{What: "Sensitivity by Faraday's law (Tumanski, Meas. Sci. Technol. 18 (2007) R31, eq. 1)",
@@ -216,7 +224,10 @@ func (c *composer) pickUpSteps(i int) []Step {
 	}
 	if !math.IsNaN(r.BandNoiseField) {
 		add(Step{What: fmt.Sprintf("Noise-equivalent field over the band %s to %s, with the resistance at each frequency (Gauss–Legendre quadrature in ln f)", Eng(co.BandLow, "Hz", 3), Eng(co.BandHigh, "Hz", 3)),
-			Symbolic: `B_{rms} = \sqrt{\int_{f_1}^{f_2} \left( \frac{\sqrt{4 k T R_{ac}(f)}}{2 \pi f A_{eff}} \right)^2 df}`, Result: Q(r.BandNoiseField, "T", 3)})
+			Symbolic: `B_{rms} = \sqrt{\int_{f_1}^{f_2} \left( \frac{\sqrt{4 k T R_{ac}(f)}}{2 \pi f A_{eff}} \right)^2 df}`,
+			Numbers: fmt.Sprintf(`\sqrt{\int_{%s}^{%s} \left( \frac{\sqrt{4 k \cdot %s \cdot R_{ac}(f)}}{2 \pi f \cdot %s} \right)^2 df}`,
+				Q(co.BandLow, "Hz", 3), Q(co.BandHigh, "Hz", 3), Q(k.Temperature, "K", 4), Q(r.EffectiveArea, "m²", 4)),
+			Result: Q(r.BandNoiseField, "T", 3)})
 	}
 	add(selfInductanceSteps(co, cr, cs)...) // memo/electrical.go
 	if k.Core != nil {
@@ -242,9 +253,11 @@ func capacitanceSteps(co calc.Coil, p calc.CapacitanceParts) []Step {
 		return []Step{{What: "Self-capacitance of the winding: not modelled for this form", Symbolic: `C_s = ` + Words("not computed")}}
 	case p.Layered:
 		return []Step{
-			{What: fmt.Sprintf("Capacitance between adjacent layers: the turn-to-turn capacitances of the turns facing the next layer, through the enamel (relative permittivity %s, common practice) and the air beside the contact, summed (Massarini & Kazimierczuk, IEEE Trans. Power Electron. 12 (1997) 671), the mean over the %d gaps",
+			{What: fmt.Sprintf("Capacitance between adjacent layers: the turn-to-turn capacitances of the turns facing the next layer, through the enamel (relative permittivity %s, common practice) and the air beside the contact, summed (Massarini & Kazimierczuk, IEEE Trans. Power Electron. 12 (1997) 671), the mean over the %d gaps: the capacitance per metre of two touching turns times the length of the turns of a layer that face the next",
 				Sig(calc.EnamelPermittivity, 2), p.Layers-1),
-				Symbolic: `C_l = \sum C_{tt}`, Result: Q(p.LayerCapacitance, "F", 3)},
+				Symbolic: `C_l = \sum C_{tt} = c_{tt}\, \ell_f`,
+				Numbers:  fmt.Sprintf(`%s \cdot %s`, Q(p.PerLength, "F/m", 4), Q(p.Facing, "m", 4)),
+				Result:   Q(p.LayerCapacitance, "F", 3)},
 			{What: fmt.Sprintf("Self-capacitance of %d layers wound back and forth, by the energy stored in the gaps (Dalessandro, Cavalcante & Kolar, IEEE Trans. Power Electron. 22 (2007) 2081)", p.Layers),
 				Symbolic: `C_s = \frac{4}{3} C_l \frac{p - 1}{p^2}`,
 				Numbers:  fmt.Sprintf(`\frac{4}{3} \cdot %s \cdot \frac{%d - 1}{%d^2}`, Q(p.LayerCapacitance, "F", 3), p.Layers, p.Layers),
