@@ -244,18 +244,26 @@ var (
 // Hz") in engineering units, keeping every digit it has (up to 6) and
 // any remark after it: "237.217 µm (heavy-build estimate)", "2 µs",
 // "(0, 30, 0) µT", "10 Hz .. 10 kHz". A vector's components share one
-// prefix. Anything else (kelvin, counts, dates) is returned as it is.
-func SIText(s string) string {
+// prefix; an angle in radians takes none. Anything else (kelvin, counts,
+// dates) is returned as it is.
+func SIText(s string) string { return SITextSig(s, 6) }
+
+// SITextSig is SIText to at most sig significant figures, trailing zeros
+// dropped: the inputs table writes a value the reader derived or a default
+// ("0.00109122 m (heavy-build estimate)") to 4, "1.091 mm (heavy-build
+// estimate)". Kelvin is left as it is: it is the exact conversion of a
+// temperature in °C ("293.15 K (20 °C)").
+func SITextSig(s string, sig int) string {
 	for _, rel := range []string{"<= ", ">= "} {
 		if rest, ok := strings.CutPrefix(s, rel); ok {
-			return rel + SIText(rest)
+			return rel + SITextSig(rest, sig)
 		}
 	}
 	if m := siRange.FindStringSubmatch(s); m != nil && engUnits[m[2]] && m[2] == m[4] {
 		a, errA := strconv.ParseFloat(m[1], 64)
 		b, errB := strconv.ParseFloat(m[3], 64)
 		if errA == nil && errB == nil {
-			return EngTrim(a, m[2], 6) + " .. " + EngTrim(b, m[4], 6) + m[5]
+			return EngTrim(a, m[2], sig) + " .. " + EngTrim(b, m[4], sig) + m[5]
 		}
 	}
 	if m := siVector.FindStringSubmatch(s); m != nil && engUnits[m[4]] {
@@ -272,13 +280,19 @@ func SIText(s string) string {
 		exp := engExp(big)
 		parts := make([]string, 3)
 		for i, x := range v {
-			parts[i] = trimmed(x, exp, 6)
+			parts[i] = trimmed(x, exp, sig)
 		}
 		return "(" + strings.Join(parts, ", ") + ") " + prefix(exp) + m[4] + m[5]
 	}
-	if m := siScalar.FindStringSubmatch(s); m != nil && engUnits[m[2]] {
+	if m := siScalar.FindStringSubmatch(s); m != nil && (engUnits[m[2]] || m[2] == "rad") {
 		if v, err := strconv.ParseFloat(m[1], 64); err == nil {
-			return EngTrim(v, m[2], 6) + m[3]
+			if m[2] == "rad" {
+				if v == 0 {
+					return "0 rad" + m[3]
+				}
+				return trimmed(v, 0, sig) + " rad" + m[3]
+			}
+			return EngTrim(v, m[2], sig) + m[3]
 		}
 	}
 	return s

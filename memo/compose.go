@@ -551,12 +551,14 @@ func (c *composer) inputs() {
 	c.para(templates.Text("inputs", map[string]string{"File": c.j.Name})) // the base name: the bytes do not depend on the path typed
 	var rows [][]doc.Cell
 	for _, e := range c.j.Spec.Entries {
-		raw, line := e.Raw, fmt.Sprint(e.Line)
+		raw, line, si := e.Raw, fmt.Sprint(e.Line), format.SIText(e.SI)
 		if e.Default {
-			raw, line = "(default)", ""
+			// a default or a value derived from others: no digits of the
+			// author's to keep, so engineering units to four figures
+			raw, line, si = "(default)", "", format.SITextSig(e.SI, 4)
 		}
 		rows = append(rows, []doc.Cell{
-			{Text: e.Block}, {Text: e.Key}, {Text: raw}, {Text: format.SIText(e.SI)}, {Text: line},
+			{Text: e.Block}, {Text: e.Key}, {Text: raw}, {Text: si}, {Text: line},
 		})
 	}
 	c.add(doc.Table{Caption: "Spec parameters as written and in SI units",

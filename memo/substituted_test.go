@@ -3,6 +3,7 @@ package memo
 import (
 	"os"
 	"path/filepath"
+	"regexp"
 	"strings"
 	"testing"
 
@@ -78,5 +79,58 @@ func TestDerivedEquationsShowTheirNumbers(t *testing.T) {
 		if !used[what] {
 			t.Errorf("the exception %q matches no equation of any design: drop it", what)
 		}
+	}
+}
+
+// The inputs table writes a default or derived value to at most four
+// significant figures ("1.091 mm (heavy-build estimate)", not "1.09122
+// mm"), and the author's own values as written.
+func TestInputsDefaultsToFourFigures(t *testing.T) {
+	digits := regexp.MustCompile(`^[−-]?([0-9]+(?:\.[0-9]+)?)`)
+	for name, src := range designsForTests(t) {
+		j, diags := evaluate(name, src)
+		if len(diags) > 0 {
+			continue
+		}
+		c := &composer{j: j}
+		c.inputs()
+		for _, b := range c.blocks {
+			tb, ok := b.(doc.Table)
+			if !ok {
+				continue
+			}
+			for _, row := range tb.Rows {
+				if row[2].Text != "(default)" {
+					continue
+				}
+				si := strings.TrimPrefix(strings.TrimPrefix(row[3].Text, "("), ">= ")
+				m := digits.FindStringSubmatch(si)
+				if m == nil || strings.Contains(si, " K") {
+					continue // words, or kelvin (an exact conversion of °C)
+				}
+				if n := len(strings.TrimLeft(strings.ReplaceAll(m[1], ".", ""), "0")); n > 4 {
+					t.Errorf("%s: %s %s default written to %d figures: %q", name, row[0].Text, row[1].Text, n, row[3].Text)
+				}
+			}
+		}
+	}
+	j := mustEvaluate(t, "```coil\nname = p\nform = rectangle\nwidth = 400 mm\nheight = 250 mm\nturns = 40\nwire = AWG 18\ncurrent = 2 A\n```\n")
+	c := &composer{j: j}
+	c.inputs()
+	found := false
+	for _, b := range c.blocks {
+		if tb, ok := b.(doc.Table); ok {
+			for _, row := range tb.Rows {
+				if row[1].Text == "wire-outer-diameter" {
+					found = true
+					if row[3].Text != "1.091 mm (heavy-build estimate)" {
+						t.Errorf("AWG 18's default outer diameter: %q", row[3].Text)
+					}
+				}
+			}
+		}
+	}
+	if !found {
+		t.Error("no default outer diameter in the inputs table")
 	}
 }
