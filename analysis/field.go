@@ -386,9 +386,6 @@ func pairCurves(co calc.Coil, cr calc.CoilResult) *PairCurves {
 
 // DesignStudy is what the memo shows of the design as a whole.
 type DesignStudy struct {
-	// TorqueAngle (degrees, 0…180) and Torque (N·m) are |τ| = m B sin θ of
-	// the total moment in the background field (nil without one).
-	TorqueAngle, Torque []float64
 	// Extent is the largest distance of any conductor from the origin, m.
 	Extent float64
 	// All is |B| of all coils together over the xz-plane through the
@@ -406,13 +403,6 @@ type DesignStudy struct {
 
 func analyseDesign(d calc.Design, r calc.Results, grid int) DesignStudy {
 	ds := DesignStudy{Extent: DesignExtent(d)}
-	if Bb := d.Conditions.BackgroundField; Bb.Norm() > 0 {
-		for i := 0; i <= 180; i += 2 {
-			a := float64(i)
-			ds.TorqueAngle = append(ds.TorqueAngle, a)
-			ds.Torque = append(ds.Torque, calc.TorqueAtAngle(r.Moment.Norm(), Bb.Norm(), a*math.Pi/180))
-		}
-	}
 	ds.All = allCoilsMap(d, r, grid)
 	for i := range d.Coils {
 		ds.Planes = append(ds.Planes, planeMap(d, r, i))
