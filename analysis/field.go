@@ -335,6 +335,10 @@ type PairCurves struct {
 	B0            float64 // T, axial field at the centre
 	Pos           []float64
 	Axial, Radial []float64
+	// EdgeField is |B| on the axis at the edge of an opposing pair's
+	// ±1 % gradient region (LinearAxial from the centre), T: the largest
+	// field its linear region holds there (NaN otherwise).
+	EdgeField float64
 }
 
 // pairPoints is the number of points of a pair's profile.
@@ -352,7 +356,7 @@ func pairCurves(co calc.Coil, cr calc.CoilResult) *PairCurves {
 	if !(R > 0) || math.IsNaN(B0) || (!co.Opposing && B0 == 0) {
 		return nil
 	}
-	pc := &PairCurves{B0: B0}
+	pc := &PairCurves{B0: B0, EdgeField: math.NaN()}
 	axial := func(p calc.Vec) float64 { return src.At(p).Dot(fr.U) }
 	if !co.Opposing {
 		ext := 1.6 * math.Max(pr.Axial1, pr.Radial1)
@@ -368,6 +372,9 @@ func pairCurves(co calc.Coil, cr calc.CoilResult) *PairCurves {
 		return pc
 	}
 	G := pr.Gradient
+	if pr.LinearAxial > 0 {
+		pc.EdgeField = src.At(co.Centre.Add(fr.U.Scale(pr.LinearAxial))).Norm()
+	}
 	ext := math.Min(1.6*math.Max(pr.LinearAxial, pr.LinearRadial), 1.2*R)
 	if !(ext > 0) {
 		ext = 0.6 * R

@@ -335,26 +335,7 @@ func (c *composer) summaryTable() doc.Table {
 			return Eng(k.Mass, "kg", 3) + " / " + Eng(cr.Mass, "kg", 3)
 		}))
 	}
-	for _, i := range idx {
-		if co := d.Coils[i]; co.Form == calc.Pair && co.Opposing {
-			// A gradient pair's purpose is its gradient: its moment and
-			// centre field are zero by design. The symbol is the pairs'
-			// axis's when they share one.
-			label := "Axial gradient at centre " + gradientSymbol(co)
-			for _, k := range idx {
-				if o := d.Coils[k]; o.Form == calc.Pair && o.Opposing && gradientSymbol(o) != gradientSymbol(co) {
-					label = "Axial gradient at centre, along each pair's axis"
-				}
-			}
-			rows = append(rows[:1], append([][]doc.Cell{row(label, func(k int, cr calc.CoilResult) string {
-				if c := d.Coils[k]; c.Form != calc.Pair || !c.Opposing {
-					return "—"
-				}
-				return Eng(cr.Pair.Gradient, "T/m", 3)
-			})}, rows[1:]...)...)
-			break
-		}
-	}
+	rows = c.gradientRows(idx, rows, row)
 	blank := func(cells []doc.Cell) []doc.Cell {
 		for range max(len(idx)-1, 0) {
 			cells = append(cells, doc.Cell{})
@@ -378,6 +359,79 @@ func (c *composer) summaryTable() doc.Table {
 		caption += " (driven coils; the pick-up coils in the next table)"
 	}
 	return doc.Table{Caption: caption, Header: head, Rows: rows, Align: align, Widths: widths}
+}
+
+// opposingPair reports whether coil block co is a gradient pair.
+func opposingPair(co calc.Coil) bool { return co.Form == calc.Pair && co.Opposing }
+
+// gradientRows puts a gradient pair's rows into page 1's table rows
+// (moment first, centre field second, as summaryTable builds them). A
+// gradient pair's purpose is its gradient: its moment and centre field
+// are zero by design. When every column is such a pair, those two rows
+// say nothing and give way to the gradient at the centre, its ±1 %
+// linear region and the field at that region's edge on the axis; beside
+// other coils the two rows stay and the pair's cells say why they are
+// zero. The gradient's symbol is the pairs' axis's when they share one.
+func (c *composer) gradientRows(idx []int, rows [][]doc.Cell, row func(string, func(int, calc.CoilResult) string) []doc.Cell) [][]doc.Cell {
+	d := c.j.Spec.Design
+	var label string
+	all := len(idx) > 0
+	for _, i := range idx {
+		co := d.Coils[i]
+		if !opposingPair(co) {
+			all = false
+			continue
+		}
+		switch {
+		case label == "":
+			label = "Axial gradient at centre " + gradientSymbol(co)
+		case label != "Axial gradient at centre "+gradientSymbol(co):
+			label = "Axial gradient at centre, along each pair's axis"
+		}
+	}
+	if label == "" {
+		return rows
+	}
+	pair := func(f func(k int, cr calc.CoilResult) string) func(int, calc.CoilResult) string {
+		return func(k int, cr calc.CoilResult) string {
+			if !opposingPair(d.Coils[k]) {
+				return "—"
+			}
+			return f(k, cr)
+		}
+	}
+	add := [][]doc.Cell{
+		row(label, pair(func(_ int, cr calc.CoilResult) string { return Eng(cr.Pair.Gradient, "T/m", 3) })),
+		row("Gradient within ±1 %: along the axis / radially", pair(func(_ int, cr calc.CoilResult) string {
+			pm := func(v float64) string {
+				if math.IsNaN(v) {
+					return "n/a"
+				}
+				return "±" + Eng(v, "m", 3)
+			}
+			return pm(cr.Pair.LinearAxial) + " / " + pm(cr.Pair.LinearRadial)
+		})),
+		row("Field |B| on the axis at the edge of that region", pair(func(k int, _ calc.CoilResult) string {
+			if pc := c.j.Coils[k].Pair; pc != nil {
+				return Eng(pc.EdgeField, "T", 3)
+			}
+			return "n/a"
+		})),
+	}
+	if all {
+		return append(add, rows[2:]...)
+	}
+	zero := func(f func(int, calc.CoilResult) string) func(int, calc.CoilResult) string {
+		return func(k int, cr calc.CoilResult) string {
+			if opposingPair(d.Coils[k]) {
+				return "0 (by design)"
+			}
+			return f(k, cr)
+		}
+	}
+	moment := row(rows[0][0].Text, zero(func(_ int, cr calc.CoilResult) string { return Eng(cr.Moment.Norm(), "A·m²", 3) }))
+	field := row(rows[1][0].Text, zero(func(_ int, cr calc.CoilResult) string { return Eng(cr.FieldCentre.Norm(), "T", 3) }))
+	return append(append([][]doc.Cell{moment, field}, add...), rows[2:]...)
 }
 
 // powerLabel names the power row: averaged over the duty cycle only where
