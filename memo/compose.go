@@ -221,7 +221,7 @@ func (c *composer) verdict() doc.Paragraph {
 	if failedChecks > 0 {
 		s = append(s, doc.Span{Text: format.Count(failedChecks, "verification check", "verification checks") + " failed: see the Verification section before relying on these results.", Strong: true}, doc.Span{Text: " "})
 	} else if n := len(c.j.Checks); n > 0 {
-		s = append(s, doc.Span{Text: checksVerdict(n)})
+		s = append(s, doc.Span{Text: checksVerdict(c.j.Checks)})
 	}
 	for _, cr := range r.Coils {
 		switch {
@@ -240,16 +240,64 @@ func (c *composer) verdict() doc.Paragraph {
 	return doc.Paragraph{Spans: s}
 }
 
-// checksVerdict is page 1's sentence on n verification checks that all
-// agree, in plain grammar for any count.
-func checksVerdict(n int) string {
+// checksVerdict is page 1's sentence on verification checks that all
+// agree, in plain grammar for any count. With a core it says what they
+// cover: the windings in air and the core's model (what of it), not the
+// figures with the core at the operating point, which no check
+// recomputes.
+func checksVerdict(ks []analysis.Check) string {
+	n := len(ks)
+	var all string
 	switch n {
 	case 1:
-		return "The verification check agrees within tolerance. "
+		all = "The verification check agrees within tolerance"
 	case 2:
-		return "Both verification checks agree within tolerance. "
+		all = "Both verification checks agree within tolerance"
+	default:
+		all = fmt.Sprintf("All %d verification checks agree within tolerance", n)
 	}
-	return fmt.Sprintf("All %d verification checks agree within tolerance. ", n)
+	core := coreChecks(ks)
+	if core == 0 {
+		return all + ". "
+	}
+	var what []string
+	for _, part := range []string{"demagnetising factor", "reciprocity"} {
+		if slices.ContainsFunc(ks, func(k analysis.Check) bool { return k.Core && strings.Contains(k.Name, part) }) {
+			what = append(what, part)
+		}
+	}
+	model := "the core's model (" + strings.Join(what, ", ") + ")"
+	var parts []string
+	if w := n - core; w > 0 {
+		coils := map[string]bool{}
+		for _, k := range ks {
+			if !k.Core {
+				coils[k.Coil] = true
+			}
+		}
+		windings := "winding"
+		if len(coils) > 1 {
+			windings = "windings"
+		}
+		parts = append(parts, format.Digits(w)+" of the "+windings+" in air")
+	}
+	parts = append(parts, format.Digits(core)+" of "+model)
+	cover := strings.Join(parts, " and ")
+	if n == 1 {
+		cover = "it is of " + model
+	}
+	return all + ": " + cover + ". The figures with the core rest on that model; no check recomputes them by an independent method. "
+}
+
+// coreChecks counts the checks of a core's model.
+func coreChecks(ks []analysis.Check) int {
+	n := 0
+	for _, k := range ks {
+		if k.Core {
+			n++
+		}
+	}
+	return n
 }
 
 // requirementsVerdict is page 1's sentence on n requirements of which

@@ -2,11 +2,13 @@ package memo
 
 import (
 	"bytes"
+	"fmt"
 	"math"
 	"os"
 	"strings"
 	"testing"
 
+	"coilmemo/analysis"
 	"coilmemo/doc"
 
 	"github.com/yuin/goldmark"
@@ -168,5 +170,46 @@ func TestGradientPairHeadline(t *testing.T) {
 	}
 	if got := rows["Axial gradient at centre ∂Bz/∂z"]; len(got) != 2 || got[1] != "—" {
 		t.Errorf("beside a loop: gradient row %q", got)
+	}
+}
+
+// Page 1 says what the verification checks cover: for a cored coil the
+// winding in air and the core's model, with their counts from the study,
+// not a bare "all checks agree" that would vouch for the figures with the
+// core too; an air coil's sentence is unchanged.
+func TestChecksVerdictSaysWhatIsChecked(t *testing.T) {
+	verdict := func(file string) (string, []analysis.Check) {
+		src, err := os.ReadFile(file)
+		if err != nil {
+			t.Fatal(err)
+		}
+		j, diags := evaluate(file, src)
+		if len(diags) > 0 {
+			t.Fatal(diags)
+		}
+		var b strings.Builder
+		for _, s := range (&composer{j: j}).verdict().Spans {
+			b.WriteString(s.Text)
+		}
+		return b.String(), j.Checks
+	}
+	text, ks := verdict("../examples/torque-rod.md")
+	core := 0
+	for _, k := range ks {
+		if strings.HasPrefix(k.Name, "core ") {
+			core++
+		}
+	}
+	if core == 0 || core == len(ks) {
+		t.Fatalf("torque rod: %d core checks of %d", core, len(ks))
+	}
+	want := fmt.Sprintf("All %d verification checks agree within tolerance: %d of the winding in air and %d of the core's model (demagnetising factor, reciprocity). The figures with the core rest on that model; no check recomputes them by an independent method.",
+		len(ks), len(ks)-core, core)
+	if !strings.Contains(text, want) {
+		t.Errorf("torque rod: page 1 says\n%s\nwant\n%s", text, want)
+	}
+	text, ks = verdict("../examples/panel-coil.md")
+	if want := fmt.Sprintf("All %d verification checks agree within tolerance. ", len(ks)); !strings.Contains(text, want) || strings.Contains(text, "core") {
+		t.Errorf("air coil: page 1 says %q", text)
 	}
 }
