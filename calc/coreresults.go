@@ -87,7 +87,14 @@ type ReceiverResult struct {
 	Capacitance     float64 // F, with the load across the terminals
 	SelfResonance   float64 // Hz, 1/(2π√(L C))
 	AboveResonance  bool    // Frequency ≥ SelfResonance: the lumped model does not hold
-	Response        []ResponsePoint
+	// WorkingBandTop is the frequency, Hz, up to which the terminal
+	// sensitivity stays within WorkingBandTolerance of the induction law
+	// 2π f A_eff, from the low end of Response up: the top of the coil's
+	// working band. 0 when the response departs already at its lowest
+	// frequency, +Inf when it stays within over all of Response, NaN
+	// without a response.
+	WorkingBandTop float64
+	Response       []ResponsePoint
 }
 
 // ResponsePoint is one point of a pick-up coil's response.

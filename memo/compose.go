@@ -223,6 +223,9 @@ func (c *composer) verdict() doc.Paragraph {
 	} else if n := len(c.j.Checks); n > 0 {
 		s = append(s, doc.Span{Text: checksVerdict(c.j.Checks)})
 	}
+	for _, t := range c.bandShortfalls() { // pick-up coils: receiver.go
+		s = append(s, doc.Span{Text: t, Strong: true}, doc.Span{Text: " "})
+	}
 	for _, cr := range r.Coils {
 		switch {
 		case cr.Verdict.AboveMelting:

@@ -86,24 +86,19 @@ func responseLeadIn(n int, r *calc.ReceiverResult, f, s []float64) (reading, lea
 	var b strings.Builder
 	// ratio is the terminal sensitivity over the induction law's.
 	ratio := func(k int) float64 { return s[k] / (2 * math.Pi * f[k] * a) }
-	edge := -1
-	for k := range f {
-		if math.Abs(ratio(k)-1) > 0.1 {
-			edge = k
-			break
-		}
-	}
+	top := r.WorkingBandTop
 	law := fmt.Sprintf("in proportion to frequency, as the induction law 2π f A_eff gives (2π A_eff = %s per hertz)", Eng(2*math.Pi*a, "V/T", 3))
 	switch {
-	case edge < 0:
+	case math.IsNaN(top):
+	case math.IsInf(top, 1):
 		fmt.Fprintf(&b, "Over the whole range plotted the terminal sensitivity rises %s, within 10 %%: that is the coil's working band.", law)
-	case edge == 0:
+	case top == 0:
 		fmt.Fprintf(&b, "Already at %s the terminal sensitivity departs from the induction law 2π f A_eff by more than 10 %%.", Eng(f[0], "Hz", 3))
 	default:
-		fmt.Fprintf(&b, "Up to about %s the terminal sensitivity rises %s, within 10 %%: that is the coil's working band.", Eng(f[edge-1], "Hz", 2), law)
+		fmt.Fprintf(&b, "Up to about %s the terminal sensitivity rises %s, within 10 %%: that is the coil's working band.", Eng(top, "Hz", 2), law)
 	}
-	if r.Frequency > 0 {
-		if edge < 0 || r.Frequency < f[max(edge-1, 0)] {
+	if r.Frequency > 0 && !math.IsNaN(top) {
+		if r.Frequency < top {
 			b.WriteString(" The design frequency lies in it.")
 		} else {
 			b.WriteString(" The design frequency lies beyond it, where the capacitance already shapes the response.")
@@ -372,6 +367,32 @@ func driven(fn func(*composer)) func(*composer) {
 	}
 }
 
+// bandShortfalls are page 1's sentences on the pick-up coils whose
+// working band ends below the top of their stated band: there the
+// sensitivity is no longer the induction law's, so the coil does not
+// serve the whole band it is stated for.
+func (c *composer) bandShortfalls() []string {
+	var out []string
+	for i, co := range c.j.Spec.Design.Coils {
+		if i >= len(c.j.Coils) || c.j.Coils[i].Kinds.Receiver == nil {
+			continue
+		}
+		r := c.j.Coils[i].Kinds.Receiver
+		top := r.WorkingBandTop
+		if !(co.BandHigh > 0) || math.IsNaN(top) || math.IsInf(top, 1) || top >= co.BandHigh {
+			continue
+		}
+		if top == 0 {
+			out = append(out, fmt.Sprintf("Coil %q does not cover its stated band of %s to %s: its sensitivity departs from the induction law 2π f A_eff by more than 10 %% already at %s, the lowest frequency computed.",
+				co.Name, Eng(co.BandLow, "Hz", 3), Eng(co.BandHigh, "Hz", 3), Eng(r.Response[0].Frequency, "Hz", 3)))
+			continue
+		}
+		out = append(out, fmt.Sprintf("Coil %q does not cover its stated band of %s to %s: its sensitivity follows the induction law 2π f A_eff within 10 %% only up to about %s, so from there to %s it is shaped by the winding's capacitance (self-resonance %s with the load) and cannot be taken as 2π f A_eff.",
+			co.Name, Eng(co.BandLow, "Hz", 3), Eng(co.BandHigh, "Hz", 3), Eng(top, "Hz", 2), Eng(co.BandHigh, "Hz", 3), Eng(r.SelfResonance, "Hz", 3)))
+	}
+	return out
+}
+
 // receiverSummary is page 1's table of the pick-up coils: sensitivity,
 // noise-equivalent field at the design frequency and over the band,
 // self-resonance with the load, resistance, inductance and capacitance.
@@ -411,6 +432,18 @@ func (c *composer) receiverSummary() doc.Table {
 			return fmt.Sprintf("%s (%s to %s)", Eng(rec(i).BandNoiseField, "T", 3), Eng(co.BandLow, "Hz", 3), Eng(co.BandHigh, "Hz", 3))
 		}),
 		row("Self-resonance, with the load", func(i int) string { return orDash(rec(i).SelfResonance, "Hz", 3) }),
+		row("Working band: sensitivity within 10 % of 2π f A_eff", func(i int) string {
+			switch top := rec(i).WorkingBandTop; {
+			case math.IsNaN(top):
+				return "—"
+			case math.IsInf(top, 1):
+				return "over the whole response"
+			case top == 0:
+				return "none"
+			default:
+				return "up to " + Eng(top, "Hz", 2)
+			}
+		}),
 		row("Resistance, a.c. at the design frequency", func(i int) string { return orDash(rec(i).Resistance, "Ω", 3) }),
 		row("Inductance (small signal; with the core where there is one)", func(i int) string { return orDash(c.j.Results.Coils[i].Inductance, "H", 3) }),
 		row("Capacitance across the terminals (winding + load)", func(i int) string { return orDash(rec(i).Capacitance, "F", 3) }),
