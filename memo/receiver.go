@@ -9,6 +9,7 @@ import (
 	"coilmemo/calc"
 	"coilmemo/doc"
 	"coilmemo/figures"
+	"coilmemo/format"
 )
 
 // receiver writes up the pick-up coils (sensitivity, noise, capacitance,
@@ -151,7 +152,7 @@ func pickUpText(co calc.Coil, r *calc.ReceiverResult, k analysis.CoilKinds) stri
 // Dowell's method, at the hot resistance of cr.
 func acLossSteps(co calc.Coil, cr calc.CoilResult, a calc.ACLoss) []Step {
 	return []Step{
-		{What: fmt.Sprintf("Equivalent foil thickness over the skin depth for %d layer(s) of round wire (Dowell, Proc. IEE 113 (1966) 1387, §4)", a.Layers),
+		{What: fmt.Sprintf("Equivalent foil thickness over the skin depth for %s of round wire (Dowell, Proc. IEE 113 (1966) 1387, §4)", format.Count(a.Layers, "layer", "layers")),
 			Symbolic: `\Delta = \frac{\sqrt{\pi}}{2} \frac{d}{\delta} \sqrt{\eta}`,
 			Numbers:  fmt.Sprintf(`\frac{\sqrt{\pi}}{2} \cdot \frac{%s}{%s} \cdot \sqrt{%s}`, Q(co.Wire.Bare, "m", 4), Q(a.SkinDepth, "m", 4), N(a.Porosity, 4)),
 			Result:   N(a.Delta, 4)},
