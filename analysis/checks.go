@@ -24,6 +24,9 @@ type Check struct {
 	RelDiff   float64 // |Value − Expected| / |Expected|
 	Tolerance float64 // relative
 	Pass      bool
+	// Core is set for a check of a core's model (kindChecks); the others
+	// check the windings, a cored coil's in air.
+	Core bool
 }
 
 func newCheck(coil, name, method, ref string, v, e float64, unit string, tol float64) Check {

@@ -30,6 +30,14 @@ type CoilStudy struct {
 	// MeanRadius is the turn-weighted mean radius of the winding as laid
 	// out, m (0 without turns).
 	MeanRadius float64
+	// MeanSquareRadius is the turn-weighted mean of the squared radius,
+	// m²: Σπrᵢ² = N π ⟨r²⟩ (NaN without turns).
+	MeanSquareRadius float64
+	// CentreSum is Σ rᵢ²/(2 (rᵢ² + zᵢ²)^{3/2}) over every turn filament of
+	// the block (both coils of a pair) at the block's own centre, m⁻¹: the
+	// on-axis field there per μ0 I, with the senses of the currents (0
+	// for a rectangle, whose turns are not circles).
+	CentreSum float64
 
 	Axis       AxisProfile
 	Map        *MapData    // nil when the coil has no extent to map
@@ -54,6 +62,11 @@ func studyCoil(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, maps mapC
 	cs := CoilStudy{Outer: calc.WireOuter(co), Series: calc.SeriesCoils(co), ConductorArea: calc.ConductorArea(co.Wire.Bare)}
 	cs.Bundle = calc.BundleDiameter(cs.Outer, co.Turns)
 	cs.MeanRadius = w.MeanTurnRadius()
+	cs.MeanSquareRadius = math.NaN()
+	if n := w.TurnCount(); n > 0 {
+		cs.MeanSquareRadius = w.AreaSum / (math.Pi * float64(n))
+	}
+	cs.CentreSum = centreSum(co, w)
 	cs.Envelope = calc.WindingEnvelope(co, w)
 	cs.Placements = calc.Placements(co)
 	cs.Depth = co.RadialBuild
@@ -78,8 +91,19 @@ func studyCoil(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, maps mapC
 // single-layer solenoid and NaN otherwise; BundleRadius for a thin coil.
 type InductanceParts struct {
 	L1, M float64
-	// Thin coil: the bundle's radius, m.
+	// Thin coil and rectangle: the bundle's radius, m.
 	BundleRadius float64
+	// Rectangle: the inductance of a single turn on the bundle's radius,
+	// H (L = N² Turn).
+	Turn float64
+	// Multilayer: the turns' own inductances summed (the i = j terms of
+	// the double sum), H; the pairs of distinct turns give L1 − SelfTerms.
+	SelfTerms float64
+	// Pair: the mutual inductance of a turn of one coil and a turn of the
+	// other, the mean over the N² pairs of turns (M = N² MeanMutual), H;
+	// and the rate of change of M with the spacing, ∂M/∂s, H/m, from the
+	// force between the coils (F = I₁ I₂ ∂M/∂s).
+	MeanMutual, Slope float64
 	// Single layer: the elliptic parameter m = k² of the current sheet,
 	// Nagaoka's coefficient, the sheet's inductance, Rosa's corrections A
 	// and B, and Wheeler's formula as the cross-check.
@@ -93,7 +117,7 @@ type InductanceParts struct {
 func inductanceParts(co calc.Coil, cr calc.CoilResult, outer float64) InductanceParts {
 	n := math.NaN()
 	ip := InductanceParts{L1: cr.Inductance, K2: n, Nagaoka: n, Sheet: n, RosaA: n, RosaB: n, Wheeler: n,
-		BundleRadius: n, WheelerMultilayer: n}
+		BundleRadius: n, WheelerMultilayer: n, Turn: n, SelfTerms: n, MeanMutual: n, Slope: n}
 	w := cr.Winding
 	if math.IsNaN(cr.Inductance) || w.TurnCount() == 0 {
 		return ip
@@ -109,10 +133,22 @@ func inductanceParts(co calc.Coil, cr calc.CoilResult, outer float64) Inductance
 		if co.Opposing {
 			ip.M = -ip.M
 		}
+		if n := w.TurnCount(); n > 0 {
+			ip.MeanMutual = ip.M / (float64(n) * float64(n))
+		}
+		if I := cr.Current; I != 0 && !math.IsNaN(cr.PairForce) {
+			I2 := I
+			if co.Opposing {
+				I2 = -I
+			}
+			ip.Slope = cr.PairForce / (I * I2)
+		}
 	}
 	a, l, N := co.MeanDiameter/2, co.Length, co.Turns
 	switch {
 	case co.Form == calc.Rectangle:
+		ip.BundleRadius = calc.BundleDiameter(outer, w.TurnCount()) / 2
+		ip.Turn = calc.RectangleInductance(co.Width, co.Height, ip.BundleRadius, 1)
 	case w.Thin:
 		ip.BundleRadius = calc.BundleDiameter(outer, N) / 2
 	case w.LayerCount <= 1 && co.RadialBuild <= 0:
@@ -124,9 +160,33 @@ func inductanceParts(co calc.Coil, cr calc.CoilResult, outer float64) Inductance
 		ip.Wheeler = calc.WheelerInductance(a, l, N)
 	default:
 		ip.ByCells = calc.MultilayerByCells(w)
+		ip.SelfTerms = 0
+		for _, ly := range w.Layers {
+			ip.SelfTerms += float64(len(ly.Z)) * calc.TurnSelfInductance(ly.Radius, co.Wire.Bare/2)
+		}
 		ip.WheelerMultilayer = calc.WheelerMultilayerInductance(a, l, co.RadialBuild, N)
 	}
 	return ip
+}
+
+// centreSum is CoilStudy.CentreSum of coil block co with winding w.
+func centreSum(co calc.Coil, w calc.Winding) float64 {
+	if co.Form == calc.Rectangle {
+		return 0
+	}
+	sum := 0.0
+	for k, z0 := range calc.Placements(co) {
+		sense := 1.0
+		if k == 1 && co.Opposing {
+			sense = -1
+		}
+		for _, ly := range w.Layers {
+			for _, z := range ly.Z {
+				sum += sense * calc.LoopFieldOnAxis(ly.Radius, 1, z0+z) / calc.Mu0
+			}
+		}
+	}
+	return sum
 }
 
 // HeatParts are the intermediate values of a coil block's heat balance
@@ -150,6 +210,10 @@ type HeatParts struct {
 	// ContinuousTau is the thermal time constant at that state, s (NaN
 	// when it does not settle).
 	ContinuousTau float64
+	// LossSlope is d(Q_out − P̄)/dT at the steady state, the slope of the
+	// linearised heat balance that gives the thermal time constant
+	// (τ = C/LossSlope), W/K (NaN without a time constant).
+	LossSlope float64
 	// SurfaceMax is the hottest surface temperature: the steady one or at
 	// the end of an on period of the duty cycle, K.
 	SurfaceMax float64
@@ -176,7 +240,7 @@ func heatParts(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, outer flo
 	h := cr.Heat
 	tp := h.Problem
 	st := h.Steady
-	hp := HeatParts{AirViscosity: n, AirConductivity: n, AirPrandtl: n, H: n, ContinuousTau: n}
+	hp := HeatParts{AirViscosity: n, AirConductivity: n, AirPrandtl: n, H: n, ContinuousTau: n, LossSlope: n}
 	w := cr.Winding
 	hp.RiseInner, hp.RiseOuter, hp.RiseLength = calc.RiseGeometry(co, w)
 	if w.Thin {
@@ -195,6 +259,9 @@ func heatParts(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, outer flo
 		hp.Continuous = on.Steady()
 	}
 	C := h.HeatCapacity
+	if tau := cr.ThermalTau; tau > 0 && C > 0 {
+		hp.LossSlope = C / tau // calc.ThermalProblem.ThermalTimeConstant: τ = C / slope
+	}
 	if hp.Continuous.Settled && C > 0 {
 		hp.ContinuousTau = on.ThermalTimeConstant(C, hp.Continuous.Mean)
 	}

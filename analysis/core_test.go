@@ -249,4 +249,16 @@ func TestSelfCapacitanceParts(t *testing.T) {
 		q.Capacitance != many.Coils[0].Kinds.Receiver.SelfCapacitance {
 		t.Errorf("layered: parts %+v (%d layers), receiver C_s %g", q, w.LayerCount, many.Coils[0].Kinds.Receiver.SelfCapacitance)
 	}
+	// C_l is the capacitance per metre of two touching turns times the
+	// facing turns' length: each gap's facing turns at the radius between
+	// its two layers.
+	facing := 0.0
+	for k := 0; k+1 < len(w.Layers); k++ {
+		n := min(len(w.Layers[k].Z), len(w.Layers[k+1].Z))
+		facing += float64(n) * math.Pi * (w.Layers[k].Radius + w.Layers[k+1].Radius)
+	}
+	facing /= float64(len(w.Layers) - 1)
+	if math.Abs(q.Facing-facing) > 1e-12*facing || math.Abs(q.PerLength*q.Facing-q.LayerCapacitance) > 1e-12*q.LayerCapacitance {
+		t.Errorf("layered: C_l %g F, per metre %g F/m × facing %g m (want %g m)", q.LayerCapacitance, q.PerLength, q.Facing, facing)
+	}
 }

@@ -80,6 +80,14 @@ func kindFindings(d calc.Design, r calc.Results, kinds []CoilKinds, in []Finding
 // moment per ampere of winding current equals the core's share of the
 // effective area (flux linkage per tesla of a uniform field).
 func kindChecks(d calc.Design, r calc.Results, kinds []CoilKinds) []Check {
+	out := coreChecks(d, r, kinds)
+	for i := range out {
+		out[i].Core = true
+	}
+	return out
+}
+
+func coreChecks(d calc.Design, r calc.Results, kinds []CoilKinds) []Check {
 	var out []Check
 	for i, k := range kinds {
 		if k.Core == nil || math.IsNaN(k.Core.AspectRatio) {

@@ -335,6 +335,10 @@ type PairCurves struct {
 	B0            float64 // T, axial field at the centre
 	Pos           []float64
 	Axial, Radial []float64
+	// EdgeField is |B| on the axis at the edge of an opposing pair's
+	// ±1 % gradient region (LinearAxial from the centre), T: the largest
+	// field its linear region holds there (NaN otherwise).
+	EdgeField float64
 }
 
 // pairPoints is the number of points of a pair's profile.
@@ -352,7 +356,7 @@ func pairCurves(co calc.Coil, cr calc.CoilResult) *PairCurves {
 	if !(R > 0) || math.IsNaN(B0) || (!co.Opposing && B0 == 0) {
 		return nil
 	}
-	pc := &PairCurves{B0: B0}
+	pc := &PairCurves{B0: B0, EdgeField: math.NaN()}
 	axial := func(p calc.Vec) float64 { return src.At(p).Dot(fr.U) }
 	if !co.Opposing {
 		ext := 1.6 * math.Max(pr.Axial1, pr.Radial1)
@@ -368,6 +372,9 @@ func pairCurves(co calc.Coil, cr calc.CoilResult) *PairCurves {
 		return pc
 	}
 	G := pr.Gradient
+	if pr.LinearAxial > 0 {
+		pc.EdgeField = src.At(co.Centre.Add(fr.U.Scale(pr.LinearAxial))).Norm()
+	}
 	ext := math.Min(1.6*math.Max(pr.LinearAxial, pr.LinearRadial), 1.2*R)
 	if !(ext > 0) {
 		ext = 0.6 * R
@@ -386,9 +393,6 @@ func pairCurves(co calc.Coil, cr calc.CoilResult) *PairCurves {
 
 // DesignStudy is what the memo shows of the design as a whole.
 type DesignStudy struct {
-	// TorqueAngle (degrees, 0…180) and Torque (N·m) are |τ| = m B sin θ of
-	// the total moment in the background field (nil without one).
-	TorqueAngle, Torque []float64
 	// Extent is the largest distance of any conductor from the origin, m.
 	Extent float64
 	// All is |B| of all coils together over the xz-plane through the
@@ -406,13 +410,6 @@ type DesignStudy struct {
 
 func analyseDesign(d calc.Design, r calc.Results, grid int) DesignStudy {
 	ds := DesignStudy{Extent: DesignExtent(d)}
-	if Bb := d.Conditions.BackgroundField; Bb.Norm() > 0 {
-		for i := 0; i <= 180; i += 2 {
-			a := float64(i)
-			ds.TorqueAngle = append(ds.TorqueAngle, a)
-			ds.Torque = append(ds.Torque, calc.TorqueAtAngle(r.Moment.Norm(), Bb.Norm(), a*math.Pi/180))
-		}
-	}
 	ds.All = allCoilsMap(d, r, grid)
 	for i := range d.Coils {
 		ds.Planes = append(ds.Planes, planeMap(d, r, i))

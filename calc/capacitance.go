@@ -93,13 +93,17 @@ type CapacitanceParts struct {
 	Diameter, Length float64 // m, Medhurst's D and ℓ
 	Layers           int
 	LayerCapacitance float64 // F
-	Capacitance      float64 // F
+	// A layered winding's C_l is PerLength × Facing: the turn-to-turn
+	// capacitance per metre of two touching turns, F/m, and the length of
+	// the turns of a layer facing the next, m, the mean over the gaps.
+	PerLength, Facing float64
+	Capacitance       float64 // F
 }
 
 // SelfCapacitanceParts is SelfCapacitance with the figures it went through.
 func SelfCapacitanceParts(c Coil, w Winding) CapacitanceParts {
 	n := math.NaN()
-	out := CapacitanceParts{Diameter: n, Length: n, LayerCapacitance: n, Capacitance: n}
+	out := CapacitanceParts{Diameter: n, Length: n, LayerCapacitance: n, PerLength: n, Facing: n, Capacitance: n}
 	if c.Form == Rectangle || c.Form == Pair || w.TurnCount() == 0 {
 		return out
 	}
@@ -122,16 +126,22 @@ func SelfCapacitanceParts(c Coil, w Winding) CapacitanceParts {
 	if layers < 2 {
 		return medhurst(c.MeanDiameter, math.Max(c.Length, c.Wire.Outer))
 	}
-	var cl float64
+	var cl, facing float64
 	for k := 0; k < layers-1; k++ {
 		n := perLayer
 		if !w.Thin {
 			n = min(len(w.Layers[k].Z), len(w.Layers[k+1].Z))
 		}
 		cl += float64(n) * TurnToTurnCapacitance(r, ro, 2*math.Pi*radius(k), EnamelPermittivity)
+		facing += float64(n) * 2 * math.Pi * radius(k)
 	}
 	cl /= float64(layers - 1) // the mean gap's capacitance
+	facing /= float64(layers - 1)
 	out.Layered, out.Layers, out.LayerCapacitance = true, layers, cl
+	// TurnToTurnCapacitance is proportional to the turns' length, so C_l
+	// is its value per metre times the facing turns' length.
+	perLength := TurnToTurnCapacitance(r, ro, 1, EnamelPermittivity)
+	out.PerLength, out.Facing = perLength, facing
 	out.Capacitance = LayeredCapacitance(cl, layers)
 	return out
 }

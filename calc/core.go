@@ -54,7 +54,7 @@ func EvaluateCore(c Coil, w Winding, I float64) CoreResult {
 		ApparentPermeability: n, ApparentPermeabilityMid: n, CoreMoment: n, Moment: n, MomentLinear: n,
 		FluxDensityPeak: n, FluxDensityLinear: n, SaturationMargin: n, SaturationCurrent: n,
 		InductanceAdded: n, InductanceAddedInitial: n, EffectiveArea: n, Mass: n, ResidualMoment: n,
-		PoleStrength: n, PoleSeparation: n,
+		PoleStrength: n, PoleSeparation: n, PeakH: n, PeakM: n, Volume: n,
 	}
 	k := c.Core
 	switch {
@@ -73,6 +73,7 @@ func EvaluateCore(c Coil, w Winding, I float64) CoreResult {
 	vol := rod.volumes()
 	V := math.Pi * k.Diameter * k.Diameter / 4 * k.Length
 	r.AspectRatio = k.Length / k.Diameter
+	r.Volume = V
 	chi0 := k.Permeability - 1
 	r.DemagEllipsoid = SpheroidDemagFactor(r.AspectRatio)
 	if k.Density > 0 {
@@ -92,6 +93,7 @@ func EvaluateCore(c Coil, w Winding, I float64) CoreResult {
 		r.ApparentPermeability, r.ApparentPermeabilityMid = 1, 1
 		r.CoreMoment, r.Moment, r.MomentLinear = 0, air, air
 		r.FluxDensityPeak, r.FluxDensityLinear = 0, 0
+		r.PeakH, r.PeakM = 0, 0
 		r.InductanceAdded, r.InductanceAddedInitial = 0, 0
 		r.EffectiveArea = w.AreaSum
 		r.Z, r.Charge = append([]float64(nil), rod.z...), make([]float64, K+1)
@@ -159,10 +161,15 @@ func EvaluateCore(c Coil, w Winding, I float64) CoreResult {
 		}
 	}
 	var coreM, dL, bPeak float64
+	r.PeakH, r.PeakM = 0, 0
 	for j := range M {
 		coreM += M[j] * vol[j]
 		dL += Mu0 * M[j] * vol[j] * h0[j]
-		bPeak = math.Max(bPeak, math.Abs(Mu0*(H[j]+M[j])))
+		if b := math.Abs(Mu0 * (H[j] + M[j])); b > bPeak {
+			bPeak = b
+			sign := math.Copysign(1, H[j]+M[j])
+			r.PeakH, r.PeakM = sign*H[j], sign*M[j]
+		}
 	}
 	r.CoreMoment = coreM
 	r.Moment = air + coreM

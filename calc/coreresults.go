@@ -23,6 +23,10 @@ type CoreResult struct {
 
 	FluxDensityPeak   float64 // T, largest |B| in the core at the current
 	FluxDensityLinear float64 // T, the same for a core that never saturates
+	// PeakH and PeakM are the field and magnetisation, A/m, of the slice
+	// where that peak lies (FluxDensityPeak = μ0 |H + M|), signed so that
+	// their sum is positive.
+	PeakH, PeakM float64
 	// SaturationMargin is 1 − B_linear/B_sat (negative past saturation; NaN
 	// without a saturation flux density); SaturationCurrent is the current
 	// at which the linear peak reaches B_sat.
@@ -39,7 +43,8 @@ type CoreResult struct {
 	// m² (reception; ΣA for an air core).
 	EffectiveArea float64
 
-	Mass float64 // kg, the core (NaN without a density)
+	Mass   float64 // kg, the core (NaN without a density)
+	Volume float64 // m³, the core's, π D²/4 · ℓ
 
 	// ResidualMoment is the moment left after switch-off, A·m²;
 	// ResidualBound is set when only the remanence was given, so the figure
@@ -82,7 +87,14 @@ type ReceiverResult struct {
 	Capacitance     float64 // F, with the load across the terminals
 	SelfResonance   float64 // Hz, 1/(2π√(L C))
 	AboveResonance  bool    // Frequency ≥ SelfResonance: the lumped model does not hold
-	Response        []ResponsePoint
+	// WorkingBandTop is the frequency, Hz, up to which the terminal
+	// sensitivity stays within WorkingBandTolerance of the induction law
+	// 2π f A_eff, from the low end of Response up: the top of the coil's
+	// working band. 0 when the response departs already at its lowest
+	// frequency, +Inf when it stays within over all of Response, NaN
+	// without a response.
+	WorkingBandTop float64
+	Response       []ResponsePoint
 }
 
 // ResponsePoint is one point of a pick-up coil's response.

@@ -105,5 +105,43 @@ func EvaluateReceiver(c Coil, w Winding, aEff, rdc, L, T float64) ReceiverResult
 			}
 		}
 	}
+	r.WorkingBandTop = workingBandTop(r.Response, func(f float64) float64 {
+		return TerminalResponse(aEff, rac(f), L, r.Capacitance, f) / InductionSensitivity(aEff, f)
+	})
 	return r
+}
+
+// WorkingBandTolerance is the departure of a pick-up coil's terminal
+// sensitivity from the induction law 2π f A_eff that ends its working
+// band: 10 %.
+const WorkingBandTolerance = 0.1
+
+// workingBandTop is ReceiverResult.WorkingBandTop of response pts, ratio
+// the terminal sensitivity over the induction law's at a frequency: the
+// first sampled departure beyond WorkingBandTolerance is bracketed by the
+// sample below it and bisected in ln f to 10⁻⁶ of the frequency.
+func workingBandTop(pts []ResponsePoint, ratio func(f float64) float64) float64 {
+	if len(pts) == 0 {
+		return math.NaN()
+	}
+	off := func(f float64) bool { return math.Abs(ratio(f)-1) > WorkingBandTolerance }
+	for k, p := range pts {
+		if !off(p.Frequency) {
+			continue
+		}
+		if k == 0 {
+			return 0
+		}
+		lo, hi := math.Log(pts[k-1].Frequency), math.Log(p.Frequency)
+		for hi-lo > 1e-6 {
+			mid := (lo + hi) / 2
+			if off(math.Exp(mid)) {
+				hi = mid
+			} else {
+				lo = mid
+			}
+		}
+		return math.Exp(lo)
+	}
+	return math.Inf(1)
 }

@@ -118,3 +118,27 @@ func TestReceiverCoredShortCoil(t *testing.T) {
 	want := 20 * (ac*r.ApparentPermeabilityMid + (math.Pi*3e-3*3e-3 - ac))
 	checkRel(t, "short coil A_eff", r.EffectiveArea, want, 0.03)
 }
+
+// The working band of the lumped model ends where |1 − ω²LC| departs from
+// 1 by the tolerance: for a lossless winding 1/(1 − ω²LC) = 1.1 at
+// ω²LC = 1/11, f = f_sr/√11 (the divider of TerminalResponse, Tumanski
+// 2007, eq. 20, with R = 0).
+func TestWorkingBandTop(t *testing.T) {
+	const a, L, C = 0.01, 0.2, 470e-12
+	fsr := SelfResonance(L, C)
+	ratio := func(f float64) float64 { return TerminalResponse(a, 0, L, C, f) / InductionSensitivity(a, f) }
+	var pts []ResponsePoint
+	for i := 0; i <= 120; i++ {
+		pts = append(pts, ResponsePoint{Frequency: 10 * math.Pow(3*fsr/10, float64(i)/120)})
+	}
+	want := fsr / math.Sqrt(11)
+	if got := workingBandTop(pts, ratio); math.Abs(got/want-1) > 1e-5 {
+		t.Errorf("working band top %g Hz, want f_sr/√11 = %g Hz", got, want)
+	}
+	if got := workingBandTop(pts[:10], ratio); !math.IsInf(got, 1) {
+		t.Errorf("a response within the band throughout: %g, want +Inf", got)
+	}
+	if got := workingBandTop(pts[100:], ratio); got != 0 {
+		t.Errorf("a response already off at its lowest frequency: %g, want 0", got)
+	}
+}

@@ -115,34 +115,6 @@ func onAxisPlot(axis string, z, exact, dipole []float64, marks []Mark) (*plot.Pl
 	return p, top, avoid
 }
 
-// TorqueAngle plots torque (N·m) against angle (degrees).
-func TorqueAngle(angleDeg, torque []float64) DrawFunc {
-	tp := EngPrefix(torque...)
-	unit := tp.Symbol + "N·m"
-	p := NewPlot("Angle θ (°)", "Torque τ ("+unit+")")
-	segs := segments(angleDeg, torque, 1, tp.Factor, false)
-	if lo, hi, ok := finiteRange(torque); ok && lo < 0 && hi > 0 {
-		p.Add(zeroLine{})
-	}
-	addCurve(p, segs, lineStyle(Accent, LineWidth, nil))
-	if lo, hi, ok := finiteRange(angleDeg); ok {
-		p.X.Min, p.X.Max = lo, hi
-		p.X.Tick.Marker = angleTicks{}
-	}
-	if lo, hi, ok := finiteRange(torque); ok {
-		lo, hi = lo/tp.Factor, hi/tp.Factor
-		pad := 0.06 * (hi - lo)
-		if pad == 0 {
-			pad = 1
-		}
-		p.Y.Min, p.Y.Max = math.Min(lo-pad, 0), hi+pad
-		if lo < 0 {
-			p.Y.Min = lo - pad
-		}
-	}
-	return Drawer(p, segs...)
-}
-
 func positiveRange(a, b []float64) (lo, hi float64, ok bool) {
 	lo, hi = math.Inf(1), 0
 	for _, v := range [][]float64{a, b} {
@@ -244,39 +216,6 @@ func decadeLabel(e int) string {
 		b.WriteRune(digits[c-'0'])
 	}
 	return b.String()
-}
-
-// angleTicks puts ticks on round angles.
-type angleTicks struct{}
-
-func (angleTicks) Ticks(min, max float64) []plot.Tick {
-	span := max - min
-	step := 15.0
-	switch {
-	case span > 400:
-		step = 90
-	case span > 200:
-		step = 45
-	case span > 100:
-		step = 30
-	case span > 50:
-		step = 15
-	case span > 20:
-		step = 5
-	default:
-		return plot.DefaultTicks{}.Ticks(min, max)
-	}
-	var ticks []plot.Tick
-	for v := math.Ceil(min/step) * step; v <= max+1e-9; v += step {
-		ticks = append(ticks, plot.Tick{Value: v, Label: strconv.FormatFloat(v, 'f', -1, 64)})
-		for k := 1; k < 3; k++ {
-			m := v + float64(k)*step/3
-			if m <= max {
-				ticks = append(ticks, plot.Tick{Value: m})
-			}
-		}
-	}
-	return ticks
 }
 
 // zeroLine draws the y = 0 line of a plot whose data change sign.

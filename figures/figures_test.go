@@ -117,28 +117,6 @@ func TestOnAxisScale(t *testing.T) {
 	}
 }
 
-func TestTorqueAngle(t *testing.T) {
-	var ang, tq []float64
-	for a := -180.0; a <= 180; a += 5 {
-		ang = append(ang, a)
-		tq = append(tq, 2e-3*math.Sin(a*math.Pi/180))
-	}
-	var c recorder.Canvas
-	TorqueAngle(ang, tq)(&c, 300, 200)
-	var all []string
-	for _, a := range c.Actions {
-		if fs, ok := a.(*recorder.FillString); ok {
-			all = append(all, fs.String)
-		}
-	}
-	s := strings.Join(all, "|")
-	for _, want := range []string{"Torque τ (mN·m)", "Angle θ (°)", "|-180|", "|90|"} {
-		if !strings.Contains(s, want) {
-			t.Errorf("torque figure lacks %q: %s", want, s)
-		}
-	}
-}
-
 // The legend goes to a corner the curve leaves free.
 func TestLegendCorner(t *testing.T) {
 	// A curve rising to the right leaves the top left free.

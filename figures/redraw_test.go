@@ -16,15 +16,10 @@ import (
 func TestDrawAgainSame(t *testing.T) {
 	z := make([]float64, 41)
 	ex, di := make([]float64, 41), make([]float64, 41)
-	ang, tq := make([]float64, 37), make([]float64, 37)
 	for i := range z {
 		z[i] = -0.2 + 0.01*float64(i)
 		ex[i] = 1e-3 / math.Pow(1+(z[i]/0.05)*(z[i]/0.05), 1.5)
 		di[i] = 1e-3 * math.Pow(0.05/math.Max(math.Abs(z[i]), 0.02), 3)
-	}
-	for i := range ang {
-		ang[i] = 5 * float64(i)
-		tq[i] = 2e-3 * math.Sin(ang[i]*math.Pi/180)
 	}
 	record := func(f DrawFunc, w, h vg.Length) string {
 		var c recorder.Canvas
@@ -37,7 +32,6 @@ func TestDrawAgainSame(t *testing.T) {
 	}
 	for name, f := range map[string]DrawFunc{
 		"on-axis": OnAxis("z", z, ex, di),
-		"torque":  TorqueAngle(ang, tq),
 		"map":     FieldMap(sampleMap()),
 	} {
 		first := record(f, 400, 260)

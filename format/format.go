@@ -16,7 +16,7 @@ import (
 // Eng formats an SI value in engineering notation with sig significant
 // figures and an SI prefix on unit: Eng(0.00123, "T", 3) = "1.23 mT".
 // A few units are shown the way the trade reads them rather than with a
-// prefix: kg as g or kg, m² as mm² or m², A/m² as A/mm², and °C, %, ratios
+// prefix: kg as g or kg, m² as mm² or m², m³ as cm³ or m³, A/m² as A/mm², and °C, %, ratios
 // and material data (Ω·m, kg/m³, W/(m²·K)) plain.
 func Eng(v float64, unit string, sig int) string {
 	if math.IsNaN(v) {
@@ -39,6 +39,13 @@ func Eng(v float64, unit string, sig int) string {
 			return Sig(v*1e6, sig) + " mm²"
 		}
 		return Sig(v, sig) + " m²"
+	case "m³":
+		// a prefix on a cubed unit would cube too (1 mm³ = 10⁻⁹ m³): small
+		// volumes in cm³, as the trade reads them
+		if math.Abs(v) < 1e-3 {
+			return Sig(v*1e6, sig) + " cm³"
+		}
+		return Sig(v, sig) + " m³"
 	case "A/m²":
 		return Sig(v/1e6, sig) + " A/mm²"
 	case "Ω·m", "kg/m³", "W/(m²·K)", "J/(kg·K)", "W/(m·K)", "K/W":
@@ -237,18 +244,26 @@ var (
 // Hz") in engineering units, keeping every digit it has (up to 6) and
 // any remark after it: "237.217 µm (heavy-build estimate)", "2 µs",
 // "(0, 30, 0) µT", "10 Hz .. 10 kHz". A vector's components share one
-// prefix. Anything else (kelvin, counts, dates) is returned as it is.
-func SIText(s string) string {
+// prefix; an angle in radians takes none. Anything else (kelvin, counts,
+// dates) is returned as it is.
+func SIText(s string) string { return SITextSig(s, 6) }
+
+// SITextSig is SIText to at most sig significant figures, trailing zeros
+// dropped: the inputs table writes a value the reader derived or a default
+// ("0.00109122 m (heavy-build estimate)") to 4, "1.091 mm (heavy-build
+// estimate)". Kelvin is left as it is: it is the exact conversion of a
+// temperature in °C ("293.15 K (20 °C)").
+func SITextSig(s string, sig int) string {
 	for _, rel := range []string{"<= ", ">= "} {
 		if rest, ok := strings.CutPrefix(s, rel); ok {
-			return rel + SIText(rest)
+			return rel + SITextSig(rest, sig)
 		}
 	}
 	if m := siRange.FindStringSubmatch(s); m != nil && engUnits[m[2]] && m[2] == m[4] {
 		a, errA := strconv.ParseFloat(m[1], 64)
 		b, errB := strconv.ParseFloat(m[3], 64)
 		if errA == nil && errB == nil {
-			return EngTrim(a, m[2], 6) + " .. " + EngTrim(b, m[4], 6) + m[5]
+			return EngTrim(a, m[2], sig) + " .. " + EngTrim(b, m[4], sig) + m[5]
 		}
 	}
 	if m := siVector.FindStringSubmatch(s); m != nil && engUnits[m[4]] {
@@ -265,13 +280,19 @@ func SIText(s string) string {
 		exp := engExp(big)
 		parts := make([]string, 3)
 		for i, x := range v {
-			parts[i] = trimmed(x, exp, 6)
+			parts[i] = trimmed(x, exp, sig)
 		}
 		return "(" + strings.Join(parts, ", ") + ") " + prefix(exp) + m[4] + m[5]
 	}
-	if m := siScalar.FindStringSubmatch(s); m != nil && engUnits[m[2]] {
+	if m := siScalar.FindStringSubmatch(s); m != nil && (engUnits[m[2]] || m[2] == "rad") {
 		if v, err := strconv.ParseFloat(m[1], 64); err == nil {
-			return EngTrim(v, m[2], 6) + m[3]
+			if m[2] == "rad" {
+				if v == 0 {
+					return "0 rad" + m[3]
+				}
+				return trimmed(v, 0, sig) + " rad" + m[3]
+			}
+			return EngTrim(v, m[2], sig) + m[3]
 		}
 	}
 	return s

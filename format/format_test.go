@@ -58,3 +58,38 @@ func TestSIText(t *testing.T) {
 		}
 	}
 }
+
+// A derived or default value is written to four significant figures;
+// kelvin, counts and words are left alone.
+func TestSITextSig(t *testing.T) {
+	for in, want := range map[string]string{
+		"0.00109122 m (heavy-build estimate)":           "1.091 mm (heavy-build estimate)",
+		"0.000127425 m (heavy-build estimate)":          "127.4 µm (heavy-build estimate)",
+		"0.087099 m = outer-diameter − radial-build":    "87.1 mm = outer-diameter − radial-build",
+		"0.02125 m = (inner-diameter + radial-build)":   "21.25 mm = (inner-diameter + radial-build)",
+		"1.5708 rad (90°)":                              "1.571 rad (90°)",
+		"(0, 0, 0) T":                                   "(0, 0, 0) T",
+		"(0.0123456, 0, 0) m":                           "(12.35, 0, 0) mm",
+		"10 Hz .. 12345.6 Hz":                           "10 Hz .. 12.35 kHz",
+		">= 0.000123456 T":                              ">= 123.5 µT",
+		"293.15 K (20 °C)":                              "293.15 K (20 °C)",
+		"0.85":                                          "0.85",
+		"still-air (natural convection, Churchill–Chu)": "still-air (natural convection, Churchill–Chu)",
+	} {
+		if got := SITextSig(in, 4); got != want {
+			t.Errorf("SITextSig(%q, 4) = %q, want %q", in, got, want)
+		}
+	}
+}
+
+// A cubed unit takes no prefix (10⁻⁶ m³ is 1 cm³, not 1 µm³).
+func TestVolume(t *testing.T) {
+	for _, c := range []struct {
+		v    float64
+		want string
+	}{{7.854e-6, "7.854 cm³"}, {2.5e-4, "250.0 cm³"}, {0.012, "0.01200 m³"}} {
+		if got := Eng(c.v, "m³", 4); got != c.want {
+			t.Errorf("Eng(%g, m³) = %q, want %q", c.v, got, c.want)
+		}
+	}
+}

@@ -225,7 +225,10 @@ func (c *composer) verdict() doc.Paragraph {
 	if failedChecks > 0 {
 		s = append(s, doc.Span{Text: format.Count(failedChecks, "verification check", "verification checks") + " failed: see the Verification section before relying on these results.", Strong: true}, doc.Span{Text: " "})
 	} else if n := len(c.j.Checks); n > 0 {
-		s = append(s, doc.Span{Text: checksVerdict(n)})
+		s = append(s, doc.Span{Text: checksVerdict(c.j.Checks)})
+	}
+	for _, t := range c.bandShortfalls() { // pick-up coils: receiver.go
+		s = append(s, doc.Span{Text: t, Strong: true}, doc.Span{Text: " "})
 	}
 	for _, cr := range r.Coils {
 		switch {
@@ -244,16 +247,64 @@ func (c *composer) verdict() doc.Paragraph {
 	return doc.Paragraph{Spans: s}
 }
 
-// checksVerdict is page 1's sentence on n verification checks that all
-// agree, in plain grammar for any count.
-func checksVerdict(n int) string {
+// checksVerdict is page 1's sentence on verification checks that all
+// agree, in plain grammar for any count. With a core it says what they
+// cover: the windings in air and the core's model (what of it), not the
+// figures with the core at the operating point, which no check
+// recomputes.
+func checksVerdict(ks []analysis.Check) string {
+	n := len(ks)
+	var all string
 	switch n {
 	case 1:
-		return "The verification check agrees within tolerance. "
+		all = "The verification check agrees within tolerance"
 	case 2:
-		return "Both verification checks agree within tolerance. "
+		all = "Both verification checks agree within tolerance"
+	default:
+		all = fmt.Sprintf("All %d verification checks agree within tolerance", n)
 	}
-	return fmt.Sprintf("All %d verification checks agree within tolerance. ", n)
+	core := coreChecks(ks)
+	if core == 0 {
+		return all + ". "
+	}
+	var what []string
+	for _, part := range []string{"demagnetising factor", "reciprocity"} {
+		if slices.ContainsFunc(ks, func(k analysis.Check) bool { return k.Core && strings.Contains(k.Name, part) }) {
+			what = append(what, part)
+		}
+	}
+	model := "the core's model (" + strings.Join(what, ", ") + ")"
+	var parts []string
+	if w := n - core; w > 0 {
+		coils := map[string]bool{}
+		for _, k := range ks {
+			if !k.Core {
+				coils[k.Coil] = true
+			}
+		}
+		windings := "winding"
+		if len(coils) > 1 {
+			windings = "windings"
+		}
+		parts = append(parts, format.Digits(w)+" of the "+windings+" in air")
+	}
+	parts = append(parts, format.Digits(core)+" of "+model)
+	cover := strings.Join(parts, " and ")
+	if n == 1 {
+		cover = "it is of " + model
+	}
+	return all + ": " + cover + ". The figures with the core rest on that model; no check recomputes them by an independent method. "
+}
+
+// coreChecks counts the checks of a core's model.
+func coreChecks(ks []analysis.Check) int {
+	n := 0
+	for _, k := range ks {
+		if k.Core {
+			n++
+		}
+	}
+	return n
 }
 
 // requirementsVerdict is page 1's sentence on n requirements of which
@@ -339,26 +390,7 @@ func (c *composer) summaryTable() doc.Table {
 			return Eng(k.Mass, "kg", 3) + " / " + Eng(cr.Mass, "kg", 3)
 		}))
 	}
-	for _, i := range idx {
-		if co := d.Coils[i]; co.Form == calc.Pair && co.Opposing {
-			// A gradient pair's purpose is its gradient: its moment and
-			// centre field are zero by design. The symbol is the pairs'
-			// axis's when they share one.
-			label := "Axial gradient at centre " + gradientSymbol(co)
-			for _, k := range idx {
-				if o := d.Coils[k]; o.Form == calc.Pair && o.Opposing && gradientSymbol(o) != gradientSymbol(co) {
-					label = "Axial gradient at centre, along each pair's axis"
-				}
-			}
-			rows = append(rows[:1], append([][]doc.Cell{row(label, func(k int, cr calc.CoilResult) string {
-				if c := d.Coils[k]; c.Form != calc.Pair || !c.Opposing {
-					return "—"
-				}
-				return Eng(cr.Pair.Gradient, "T/m", 3)
-			})}, rows[1:]...)...)
-			break
-		}
-	}
+	rows = c.gradientRows(idx, rows, row)
 	blank := func(cells []doc.Cell) []doc.Cell {
 		for range max(len(idx)-1, 0) {
 			cells = append(cells, doc.Cell{})
@@ -382,6 +414,79 @@ func (c *composer) summaryTable() doc.Table {
 		caption += " (driven coils; the pick-up coils in the next table)"
 	}
 	return doc.Table{Caption: caption, Header: head, Rows: rows, Align: align, Widths: widths}
+}
+
+// opposingPair reports whether coil block co is a gradient pair.
+func opposingPair(co calc.Coil) bool { return co.Form == calc.Pair && co.Opposing }
+
+// gradientRows puts a gradient pair's rows into page 1's table rows
+// (moment first, centre field second, as summaryTable builds them). A
+// gradient pair's purpose is its gradient: its moment and centre field
+// are zero by design. When every column is such a pair, those two rows
+// say nothing and give way to the gradient at the centre, its ±1 %
+// linear region and the field at that region's edge on the axis; beside
+// other coils the two rows stay and the pair's cells say why they are
+// zero. The gradient's symbol is the pairs' axis's when they share one.
+func (c *composer) gradientRows(idx []int, rows [][]doc.Cell, row func(string, func(int, calc.CoilResult) string) []doc.Cell) [][]doc.Cell {
+	d := c.j.Spec.Design
+	var label string
+	all := len(idx) > 0
+	for _, i := range idx {
+		co := d.Coils[i]
+		if !opposingPair(co) {
+			all = false
+			continue
+		}
+		switch {
+		case label == "":
+			label = "Axial gradient at centre " + gradientSymbol(co)
+		case label != "Axial gradient at centre "+gradientSymbol(co):
+			label = "Axial gradient at centre, along each pair's axis"
+		}
+	}
+	if label == "" {
+		return rows
+	}
+	pair := func(f func(k int, cr calc.CoilResult) string) func(int, calc.CoilResult) string {
+		return func(k int, cr calc.CoilResult) string {
+			if !opposingPair(d.Coils[k]) {
+				return "—"
+			}
+			return f(k, cr)
+		}
+	}
+	add := [][]doc.Cell{
+		row(label, pair(func(_ int, cr calc.CoilResult) string { return Eng(cr.Pair.Gradient, "T/m", 3) })),
+		row("Gradient within ±1 %: along the axis / radially", pair(func(_ int, cr calc.CoilResult) string {
+			pm := func(v float64) string {
+				if math.IsNaN(v) {
+					return "n/a"
+				}
+				return "±" + Eng(v, "m", 3)
+			}
+			return pm(cr.Pair.LinearAxial) + " / " + pm(cr.Pair.LinearRadial)
+		})),
+		row("Field |B| on the axis at the edge of that region", pair(func(k int, _ calc.CoilResult) string {
+			if pc := c.j.Coils[k].Pair; pc != nil {
+				return Eng(pc.EdgeField, "T", 3)
+			}
+			return "n/a"
+		})),
+	}
+	if all {
+		return append(add, rows[2:]...)
+	}
+	zero := func(f func(int, calc.CoilResult) string) func(int, calc.CoilResult) string {
+		return func(k int, cr calc.CoilResult) string {
+			if opposingPair(d.Coils[k]) {
+				return "0 (by design)"
+			}
+			return f(k, cr)
+		}
+	}
+	moment := row(rows[0][0].Text, zero(func(_ int, cr calc.CoilResult) string { return Eng(cr.Moment.Norm(), "A·m²", 3) }))
+	field := row(rows[1][0].Text, zero(func(_ int, cr calc.CoilResult) string { return Eng(cr.FieldCentre.Norm(), "T", 3) }))
+	return append(append([][]doc.Cell{moment, field}, add...), rows[2:]...)
 }
 
 // powerLabel names the power row: averaged over the duty cycle only where
@@ -555,12 +660,14 @@ func (c *composer) inputs() {
 	c.para(templates.Text("inputs", map[string]string{"File": c.j.Name})) // the base name: the bytes do not depend on the path typed
 	var rows [][]doc.Cell
 	for _, e := range c.j.Spec.Entries {
-		raw, line := e.Raw, fmt.Sprint(e.Line)
+		raw, line, si := e.Raw, fmt.Sprint(e.Line), format.SIText(e.SI)
 		if e.Default {
-			raw, line = "(default)", ""
+			// a default or a value derived from others: no digits of the
+			// author's to keep, so engineering units to four figures
+			raw, line, si = "(default)", "", format.SITextSig(e.SI, 4)
 		}
 		rows = append(rows, []doc.Cell{
-			{Text: e.Block}, {Text: e.Key}, {Text: raw}, {Text: format.SIText(e.SI)}, {Text: line},
+			{Text: e.Block}, {Text: e.Key}, {Text: raw}, {Text: si}, {Text: line},
 		})
 	}
 	c.add(doc.Table{Caption: "Spec parameters as written and in SI units",

@@ -40,6 +40,7 @@ func (c *composer) core() {
 				Symbolic: `N_m = N_m(\gamma, \mu_r)`, Numbers: fmt.Sprintf(`N_m(%s, %s)`, N(r.AspectRatio, 4), N(kc.Permeability, 4)), Result: N(r.DemagMagnetometric, 4)},
 			{What: "Cross-check: the prolate spheroid of the same ratio (Osborn, Phys. Rev. 67 (1945) 351)",
 				Symbolic: `N_e = \frac{1}{\gamma^2 - 1} \left( \frac{\gamma}{\sqrt{\gamma^2 - 1}} \ln\left(\gamma + \sqrt{\gamma^2 - 1}\right) - 1 \right)`,
+				Numbers:  fmt.Sprintf(`\frac{1}{%[1]s^2 - 1} \left( \frac{%[1]s}{\sqrt{%[1]s^2 - 1}} \ln\left(%[1]s + \sqrt{%[1]s^2 - 1}\right) - 1 \right)`, N(r.AspectRatio, 4)),
 				Result:   N(r.DemagEllipsoid, 4)},
 			{What: "Apparent permeability of the core", Symbolic: `\mu_{app} = \frac{\mu_r}{1 + N_m (\mu_r - 1)}`,
 				Numbers: fmt.Sprintf(`\frac{%s}{1 + %s \cdot (%s - 1)}`, N(kc.Permeability, 4), N(r.DemagMagnetometric, 4), N(kc.Permeability, 4)),
@@ -50,12 +51,16 @@ func (c *composer) core() {
 				Step{What: "Moment of winding and core (the core's moment is the sum of its slices' magnetisation times volume)",
 					Symbolic: `m = I \sum A + \sum_j M_j V_j`,
 					Numbers:  fmt.Sprintf(`%s + %s`, Q(k.AirMoment.Norm(), "A·m²", 4), Q(r.CoreMoment, "A·m²", 4)), Result: Q(r.Moment, "A·m²", 4)},
-				Step{What: "Peak flux density in the core", Symbolic: `B_{pk} = \mu_0 \max_j (H_j + M_j)`, Result: Q(r.FluxDensityPeak, "T", 4)})
+				Step{What: "Peak flux density in the core, at the slice j where the field Hⱼ and the magnetisation Mⱼ sum to the most",
+					Symbolic: `B_{pk} = \mu_0 \max_j (H_j + M_j)`,
+					Numbers:  fmt.Sprintf(`\mu_0 \left(%s + %s\right)`, Q(r.PeakH, "A/m", 4), Q(r.PeakM, "A/m", 4)), Result: Q(r.FluxDensityPeak, "T", 4)})
 			if kc.Saturation > 0 {
 				steps = append(steps, Step{What: "Margin to saturation (of the core taken as never saturating)",
 					Symbolic: `1 - \frac{B_{lin}}{B_s}`, Numbers: fmt.Sprintf(`1 - \frac{%s}{%s}`, Q(r.FluxDensityLinear, "T", 4), Q(kc.Saturation, "T", 3)),
 					Result: N(r.SaturationMargin, 3)},
-					Step{What: "Current at which the core reaches saturation", Symbolic: `I_s = I \frac{B_s}{B_{lin}}`, Result: Q(r.SaturationCurrent, "A", 3)})
+					Step{What: "Current at which the core reaches saturation", Symbolic: `I_s = I \frac{B_s}{B_{lin}}`,
+						Numbers: fmt.Sprintf(`%s \cdot \frac{%s}{%s}`, Q(math.Abs(cr.Current), "A", 4), Q(kc.Saturation, "T", 3), Q(r.FluxDensityLinear, "T", 4)),
+						Result:  Q(r.SaturationCurrent, "A", 3)})
 			}
 			steps = append(steps, Step{What: "Inductance with the core: the air-core value plus the core's flux linkage per ampere",
 				Symbolic: `L = L_{air} + \Delta L`, Numbers: fmt.Sprintf(`%s + %s`, Q(k.AirInductance, "H", 4), Q(r.InductanceAdded, "H", 4)),
@@ -79,10 +84,14 @@ func (c *composer) core() {
 		if !math.IsNaN(r.ResidualMoment) {
 			if r.ResidualBound {
 				steps = append(steps, Step{What: "Residual moment after switch-off, upper bound from the remanence alone (no coercivity given)",
-					Symbolic: `m_r \le \frac{B_r V}{\mu_0}`, Result: Q(r.ResidualMoment, "A·m²", 3)})
+					Symbolic: `m_r \le \frac{B_r V}{\mu_0}`,
+					Numbers:  fmt.Sprintf(`\frac{%s \cdot %s}{\mu_0}`, Q(kc.Remanence, "T", 4), Q(r.Volume, "m³", 4)), Result: Q(r.ResidualMoment, "A·m²", 3)})
 			} else {
 				steps = append(steps, Step{What: "Residual moment after switch-off: the remanence on the rod's own load line",
-					Symbolic: `m_r = \frac{B_r V}{\mu_0 (1 - N_m) + B_r N_m / H_c}`, Result: Q(r.ResidualMoment, "A·m²", 3)})
+					Symbolic: `m_r = \frac{B_r V}{\mu_0 (1 - N_m) + B_r N_m / H_c}`,
+					Numbers: fmt.Sprintf(`\frac{%[1]s \cdot %[2]s}{\mu_0 (1 - %[3]s) + %[1]s \cdot %[3]s / %[4]s}`,
+						Q(kc.Remanence, "T", 4), Q(r.Volume, "m³", 4), N(r.DemagMagnetometric, 4), Q(kc.Coercivity, "A/m", 4)),
+					Result: Q(r.ResidualMoment, "A·m²", 3)})
 			}
 		}
 		c.derive(steps...)

@@ -57,8 +57,11 @@ func (c *composer) coilSwitching(i int) {
 			if cr.PairForce > 0 {
 				how = "they repel"
 			}
-			c.derive(Step{What: fmt.Sprintf("Axial force between the two coils of the pair (%s): the derivative of their mutual inductance with the spacing s", how),
-				Symbolic: `F = I^2 \frac{\partial M}{\partial s}`, Result: Q(math.Abs(cr.PairForce), "N", 3)})
+			ip := c.j.Coils[i].Inductance
+			c.derive(Step{What: fmt.Sprintf("Axial force between the two coils of the pair (%s): the current squared times the rate of change of their mutual inductance with the spacing s, ∂M/∂s = %s", how, Eng(ip.Slope, "H/m", 4)),
+				Symbolic: `|F| = I^2 \left| \frac{\partial M}{\partial s} \right|`,
+				Numbers:  fmt.Sprintf(`%s^2 \cdot %s`, Paren(Q(math.Abs(cr.Current), "A", 4)), Q(math.Abs(ip.Slope), "H/m", 4)),
+				Result:   Q(math.Abs(cr.PairForce), "N", 3)})
 		}
 		c.derive(switchingSteps(co, cr)...)
 		c.para(suppressionText(co, cr))
@@ -86,8 +89,13 @@ func selfInductanceSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStud
 	outer := cs.Outer
 	switch {
 	case co.Form == calc.Rectangle:
+		rb := ip.BundleRadius
+		add(Step{What: "Radius of the round bundle of N wires, hexagonally packed",
+			Symbolic: `r_b = \frac{d_o}{2} \sqrt{\frac{N}{0.9069}}`,
+			Numbers:  fmt.Sprintf(`\frac{%s}{2} \sqrt{\frac{%d}{0.9069}}`, Q(outer, "m", 4), n), Result: Q(rb, "m", 4)})
 		add(Step{What: "Self-inductance of N rectangular turns of round wire bundled to a round section: N² times the single turn's, from the partial inductances of its four sides (Grover, Inductance Calculations, 1946)",
-			Symbolic: `L = N^2 L_{\mathrm{rect}}(W, H, r_b)`, Result: Q(cr.Inductance, "H", 4)})
+			Symbolic: `L = N^2 L_{\mathrm{rect}}(W, H, r_b)`,
+			Numbers:  fmt.Sprintf(`%d^2 \cdot %s`, n, Q(ip.Turn, "H", 4)), Result: Q(cr.Inductance, "H", 4)})
 		return steps
 	case w.Thin:
 		rb := ip.BundleRadius
@@ -135,9 +143,14 @@ func selfInductanceSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStud
 		if ip.ByCells {
 			method = "so many turns that they are grouped into cells of g × g turns, each cell a filament at its centroid with the self-inductance of a square section of its size (accurate to about 10⁻³)"
 		}
-		add(Step{What: fmt.Sprintf("Self-inductance of the multilayer winding (%d layers of up to %d turns): Maxwell's mutual inductance of every pair of turn filaments i ≠ j, and each turn's own round-wire inductance μ0 r (ln(8r/ρ) − 7/4) for i = j (Maxwell 1873; Grover 1946, ch. 1); %s%s",
-			w.LayerCount, w.TurnsPerLayer, method, one),
-			Symbolic: `L_1 = \sum_{i=1}^{N} \sum_{j=1}^{N} M_{ij}`, Result: Q(L1, "H", 4)})
+		pairs := "the pairs of distinct turns give the rest"
+		if ip.ByCells {
+			pairs = "the pairs of distinct turns, summed by cells, give the rest"
+		}
+		add(Step{What: fmt.Sprintf("Self-inductance of the multilayer winding (%d layers of up to %d turns): Maxwell's mutual inductance of every pair of turn filaments i ≠ j, and each turn's own round-wire inductance μ0 r (ln(8r/ρ) − 7/4) for i = j (Maxwell 1873; Grover 1946, ch. 1); %s%s. The N turns' own inductances come to %s; %s",
+			w.LayerCount, w.TurnsPerLayer, method, one, Eng(ip.SelfTerms, "H", 4), pairs),
+			Symbolic: `L_1 = \sum_{i=1}^{N} \sum_{j=1}^{N} M_{ij} = \sum_{i} M_{ii} + \sum_{i \ne j} M_{ij}`,
+			Numbers:  fmt.Sprintf(`%s + %s`, Q(ip.SelfTerms, "H", 4), Q(L1-ip.SelfTerms, "H", 4)), Result: Q(L1, "H", 4)})
 		b := co.Length
 		cb := co.RadialBuild
 		if lw := ip.WheelerMultilayer; !math.IsNaN(lw) {
@@ -159,8 +172,9 @@ func selfInductanceSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStud
 		if co.Opposing {
 			sign, word = "-", "opposing"
 		}
-		add(Step{What: fmt.Sprintf("Mutual inductance of the two coils %s apart, every pair of turns by Maxwell's formula", Eng(co.Spacing, "m", 3)),
-			Symbolic: `M = \sum_{i} \sum_{j} M(r_i, r_j, s + z_j - z_i)`, Result: Q(M, "H", 4)})
+		add(Step{What: fmt.Sprintf("Mutual inductance of the two coils %s apart, every pair of turns by Maxwell's formula: N² pairs of a turn of one coil and a turn of the other, whose mutual inductance is %s on average", Eng(co.Spacing, "m", 3), Eng(ip.MeanMutual, "H", 4)),
+			Symbolic: `M = \sum_{i} \sum_{j} M(r_i, r_j, s + z_j - z_i) = N^2 \bar{M}_{ij}`,
+			Numbers:  fmt.Sprintf(`%d^2 \cdot %s`, n, Q(ip.MeanMutual, "H", 4)), Result: Q(M, "H", 4)})
 		add(Step{What: fmt.Sprintf("Self-inductance of the pair, its two coils in series, %s", word),
 			Symbolic: `L = 2 L_1 ` + sign + ` 2 M`,
 			Numbers:  fmt.Sprintf(`2 \cdot %s %s 2 \cdot %s`, Q(L1, "H", 4), sign, Q(M, "H", 4)), Result: Q(cr.Inductance, "H", 4)})

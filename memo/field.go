@@ -722,19 +722,9 @@ func (c *composer) torque() {
 		"Design":     Eng(r.TorqueDesign, "N·m", 4),
 		"AsDesigned": asDesigned(d.Conditions, r.Torque),
 	}))
-	if !torqueFigure(c.j) {
-		// Not a moment design: the sine is the same for every coil, so the
-		// peak and the design angle above say all it would (memo/figsel.go).
-		c.para("At other angles θ between moment and field the torque is |τ| = m B sin θ, between zero along the field and the largest value above at right angles to it.")
-		return
-	}
-	ang, tq := c.j.Design.TorqueAngle, c.j.Design.Torque
-	n := c.figure + 1
-	c.para(fmt.Sprintf("Figure %d shows the torque magnitude against the angle between moment and field: a sine, zero with the moment along the field or against it and largest at right angles, so a tilt of 30° from square still leaves %s %% of the peak.",
-		n, Sig(100*math.Cos(math.Pi/6), 2)))
-	c.fig(doc.Figure{Caption: "Torque magnitude |τ| = m B sin θ against the angle θ between moment and background field",
-		Width: figWidth, Height: figHeight * 0.8, Draw: figures.TorqueAngle(ang, tq),
-		Summary: fmt.Sprintf("Peak %s at 90°.", Eng(r.TorqueMax, "N·m", 3))})
+	// No figure: |τ| against the angle is the sine m B sin θ for every
+	// design, its peak and design-angle value given above (memo/figsel.go).
+	c.para("At other angles θ between moment and field the torque is |τ| = m B sin θ, between zero along the field and the largest value above at right angles to it.")
 }
 
 // mapLevels reads a coil's map: |B| at its centre node and the largest

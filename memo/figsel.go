@@ -32,9 +32,9 @@ import (
 //     its gradient against position on the axis, with a gradient
 //     requirement drawn.
 //   - Field map: every coil with an extent to map.
-//   - Torque against angle: only a moment design in a background field;
-//     for any other coil the sine m·B·sin θ is the same curve whatever the
-//     design, and the text gives its peak.
+//   - Torque against angle: none. It is the sine m·B·sin θ whatever the
+//     design, so the text gives its peak m·B at 90° and its value at the
+//     design angle instead.
 //   - Warm-up (memo/thermal.go): not drawn when the winding warms by less
 //     than 1 K.
 //   - Plane of interest: a rectangle (a panel coil) with probes gets Bn,
@@ -120,12 +120,6 @@ func planeShown(j *analysis.Study, i int) *analysis.PlaneMap {
 func axisSetShown(j *analysis.Study) bool {
 	as := j.Design.Axes
 	return as != nil && len(as.Coils) >= 2
-}
-
-// torqueFigure reports whether the torque section draws |τ| against the
-// angle: only for a moment design (see the rules above).
-func torqueFigure(j *analysis.Study) bool {
-	return momentDesign(j) && len(j.Design.Torque) > 0
 }
 
 // axisName names a coil's axis for a figure's abscissa: "z", "x", "−y"

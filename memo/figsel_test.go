@@ -1,6 +1,7 @@
 package memo
 
 import (
+	"fmt"
 	"os"
 	"path/filepath"
 	"strings"
@@ -78,33 +79,35 @@ func TestFigureSelection(t *testing.T) {
 		design      string
 		want        coilFigures
 		moment      bool
-		torqueFig   bool
 		has, hasNot []string // caption parts
 		says        []string // lead-in parts
 	}{
-		{"aiding-pair", coilFigures{Sketch: true, Profile: pairProfile, Homogeneity: true}, false, false,
+		{"aiding-pair", coilFigures{Sketch: true, Profile: pairProfile, Homogeneity: true}, false,
 			[]string{"Homogeneity of pair", "required uniform radius", "Axial flux density Bz along the axis of pair"},
 			[]string{"point-dipole approximation", "Linearity"},
 			[]string{"the field stays within 1 % of its centre value out to", "so the requirement is met"}},
-		{"gradient-pair", coilFigures{Sketch: true, Profile: pairProfile, Gradient: true}, false, false,
+		{"gradient-pair", coilFigures{Sketch: true, Profile: pairProfile, Gradient: true}, false,
 			[]string{"Axial gradient ∂Bz/∂z along the axis", "the required gradient", "Axial flux density Bz along the axis of pair"},
 			[]string{"Homogeneity", "point-dipole approximation"},
 			[]string{"passes through zero at the centre", "is met at the centre"}},
-		{"long-solenoid", coilFigures{Sketch: true, Profile: boreProfile}, false, false,
+		{"long-solenoid", coilFigures{Sketch: true, Profile: boreProfile}, false,
 			[]string{"along the bore of coil", "the required centre field"},
 			[]string{"point-dipole approximation"},
 			[]string{"The field stays within 1 % of its centre value", "at the ends"}},
-		{"x-axis-coil", coilFigures{Sketch: true, Profile: boreProfile}, false, false,
+		{"x-axis-coil", coilFigures{Sketch: true, Profile: boreProfile}, false,
 			[]string{"Axial flux density Bx along the bore"}, []string{"Torque magnitude"},
 			[]string{"At other angles θ between moment and field the torque is"}},
-		{"thin-loop", coilFigures{Sketch: false, Profile: nearProfile}, false, false,
+		{"thin-loop", coilFigures{Sketch: false, Profile: nearProfile}, false,
 			[]string{"Axial flux density Bz along the axis of coil"}, []string{"Cross-section", "Torque magnitude", "Warm-up", "point-dipole approximation"},
 			[]string{"too small against the coil to be worth a sketch", "so no warm-up curve is drawn", "half of that at ±"}},
-		{"rectangle", coilFigures{Sketch: true, Profile: nearProfile}, false, false,
+		{"rectangle", coilFigures{Sketch: true, Profile: nearProfile}, false,
 			[]string{"in plan", "dotted: the coil's plane"}, []string{"along the bore", "point-dipole approximation"}, nil},
-		{"tilted-torquer", coilFigures{Sketch: true, Profile: farProfile}, true, true,
-			[]string{"point-dipole approximation", "Torque magnitude"}, []string{"along the bore"},
-			[]string{"a sine, zero with the moment along the field", "the two curves merge beyond"}},
+		// A moment design too gets no torque figure: |τ| against the angle
+		// is the same sine for every design; the text gives m B and the
+		// torque at the design angle.
+		{"tilted-torquer", coilFigures{Sketch: true, Profile: farProfile}, true,
+			[]string{"point-dipole approximation"}, []string{"along the bore", "Torque magnitude"},
+			[]string{"largest with the moment at right angles to the field, m B = ", "At other angles θ between moment and field the torque is", "the two curves merge beyond"}},
 	} {
 		t.Run(c.design, func(t *testing.T) {
 			j, d := figureDesign(t, c.design)
@@ -113,9 +116,6 @@ func TestFigureSelection(t *testing.T) {
 			}
 			if got := momentDesign(j); got != c.moment {
 				t.Errorf("moment design %v, want %v", got, c.moment)
-			}
-			if got := torqueFigure(j); got != c.torqueFig {
-				t.Errorf("torque figure %v, want %v", got, c.torqueFig)
 			}
 			caps, _ := captions(d)
 			for _, h := range c.has {
@@ -158,5 +158,45 @@ func TestAxisLabels(t *testing.T) {
 		if strings.Contains(texts, c.wantNot) {
 			t.Errorf("%s: figures say %q", c.design, c.wantNot)
 		}
+	}
+}
+
+// The torque section draws no figure of the sine |τ| = m B sin θ and
+// says instead, with the study's numbers, the peak m B at right angles
+// and the torque at the design angle; over every example and figure-test
+// design in a background field.
+func TestTorqueInWords(t *testing.T) {
+	n := 0
+	for name, src := range designsForTests(t) {
+		j, diags := evaluate(name, src)
+		if len(diags) > 0 || j.Spec.Design.Conditions.BackgroundField.Norm() == 0 {
+			continue
+		}
+		n++
+		c := &composer{j: j}
+		c.torque()
+		var text strings.Builder
+		for _, b := range c.blocks {
+			switch b := b.(type) {
+			case doc.Figure:
+				t.Errorf("%s: a torque figure %q", name, b.Caption)
+			case doc.Paragraph:
+				for _, s := range b.Spans {
+					text.WriteString(s.Text)
+				}
+				text.WriteString("\n")
+			}
+		}
+		r := j.Results
+		peak := fmt.Sprintf("m B = %s × %s = %s", Eng(r.Moment.Norm(), "A·m²", 4), Eng(j.Spec.Design.Conditions.BackgroundField.Norm(), "T", 3), Eng(r.TorqueMax, "N·m", 4))
+		design := "it is " + Eng(r.TorqueDesign, "N·m", 4)
+		for _, want := range []string{peak, design, "at right angles"} {
+			if !strings.Contains(text.String(), want) {
+				t.Errorf("%s: torque section lacks %q:\n%s", name, want, text.String())
+			}
+		}
+	}
+	if n == 0 {
+		t.Fatal("no design in a background field")
 	}
 }

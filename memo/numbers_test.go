@@ -1,8 +1,6 @@
 package memo
 
 import (
-	"os"
-	"path/filepath"
 	"regexp"
 	"strings"
 	"testing"
@@ -10,30 +8,22 @@ import (
 	"coilmemo/doc"
 )
 
-// The memo's numbers, over every example and golden case: no power of
-// ten on a percentage, no signed zero, no raw SI in exponent form or in
-// ten-thousandths of a metre, no "All 2" or "All 1" counts, and probe
+// The memo's numbers and counts, over every example and figure-test
+// design: no power of ten on a percentage, no signed zero, no raw SI in
+// exponent form or in ten-thousandths of a metre, no "All 2" or "All 1"
+// counts, no plural after a count of one nor a hedged "(s)", and probe
 // positions written alike.
 func TestNumberForms(t *testing.T) {
 	bad := map[string]*regexp.Regexp{
-		"power of ten on a percentage": regexp.MustCompile(`×10[⁻⁰¹²³⁴⁵⁶⁷⁸⁹]+ %`),
-		"signed zero":                  regexp.MustCompile(`[−-]0\.0+ (%|K|°C)`),
+		"power of ten on a percentage": regexp.MustCompile(`×10[⁻⁰¹²³⁴⁵⁶⁷⁸⁹]+ ?%`),
+		"signed zero":                  regexp.MustCompile(`[−+-]0(\.0+)? (%|K|°C)`),
 		"raw SI exponent":              regexp.MustCompile(`\b\d(\.\d+)?e-?\d+ [a-zA-Z]`),
 		"raw SI small metres":          regexp.MustCompile(`\b0\.000\d+ m\b`),
-		"count grammar":                regexp.MustCompile(`All [12] `),
+		"count grammar":                regexp.MustCompile(`All [12] |(^|[^0-9.,×])1 (requirements|checks|turns|layers|coils|corners|samples|cautions|warnings|tolerances|gaps|probes|choices|wires)\b|[a-z]\(s\)`),
 		"position with trailing zeros": regexp.MustCompile(`\(\S*\.\d*0, .*\) mm`),
 	}
-	var specs []string
-	ex, _ := filepath.Glob("../examples/*.md")
-	specs = append(specs, ex...)
-	if len(specs) == 0 {
-		t.Fatal("no examples")
-	}
-	for _, f := range specs {
-		src, err := os.ReadFile(f)
-		if err != nil {
-			t.Fatal(err)
-		}
+	designs := designsForTests(t)
+	for f, src := range designs {
 		j, diags := evaluate(f, src)
 		if len(diags) > 0 {
 			t.Fatal(f, diags)
@@ -48,7 +38,7 @@ func TestNumberForms(t *testing.T) {
 			}
 			for what, re := range bad {
 				if m := re.FindString(line); m != "" {
-					t.Errorf("%s: %s %q in %q", filepath.Base(f), what, m, line)
+					t.Errorf("%s: %s %q in %q", f, what, m, line)
 				}
 			}
 		}

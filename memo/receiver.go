@@ -9,6 +9,7 @@ import (
 	"coilmemo/calc"
 	"coilmemo/doc"
 	"coilmemo/figures"
+	"coilmemo/format"
 )
 
 // receiver writes up the pick-up coils (sensitivity, noise, capacitance,
@@ -86,24 +87,19 @@ func responseLeadIn(n int, r *calc.ReceiverResult, f, s []float64) (reading, lea
 	var b strings.Builder
 	// ratio is the terminal sensitivity over the induction law's.
 	ratio := func(k int) float64 { return s[k] / (2 * math.Pi * f[k] * a) }
-	edge := -1
-	for k := range f {
-		if math.Abs(ratio(k)-1) > 0.1 {
-			edge = k
-			break
-		}
-	}
+	top := r.WorkingBandTop
 	law := fmt.Sprintf("in proportion to frequency, as the induction law 2π f A_eff gives (2π A_eff = %s per hertz)", Eng(2*math.Pi*a, "V/T", 3))
 	switch {
-	case edge < 0:
+	case math.IsNaN(top):
+	case math.IsInf(top, 1):
 		fmt.Fprintf(&b, "Over the whole range plotted the terminal sensitivity rises %s, within 10 %%: that is the coil's working band.", law)
-	case edge == 0:
+	case top == 0:
 		fmt.Fprintf(&b, "Already at %s the terminal sensitivity departs from the induction law 2π f A_eff by more than 10 %%.", Eng(f[0], "Hz", 3))
 	default:
-		fmt.Fprintf(&b, "Up to about %s the terminal sensitivity rises %s, within 10 %%: that is the coil's working band.", Eng(f[edge-1], "Hz", 2), law)
+		fmt.Fprintf(&b, "Up to about %s the terminal sensitivity rises %s, within 10 %%: that is the coil's working band.", Eng(top, "Hz", 2), law)
 	}
-	if r.Frequency > 0 {
-		if edge < 0 || r.Frequency < f[max(edge-1, 0)] {
+	if r.Frequency > 0 && !math.IsNaN(top) {
+		if r.Frequency < top {
 			b.WriteString(" The design frequency lies in it.")
 		} else {
 			b.WriteString(" The design frequency lies beyond it, where the capacitance already shapes the response.")
@@ -156,7 +152,7 @@ func pickUpText(co calc.Coil, r *calc.ReceiverResult, k analysis.CoilKinds) stri
 // Dowell's method, at the hot resistance of cr.
 func acLossSteps(co calc.Coil, cr calc.CoilResult, a calc.ACLoss) []Step {
 	return []Step{
-		{What: fmt.Sprintf("Equivalent foil thickness over the skin depth for %d layer(s) of round wire (Dowell, Proc. IEE 113 (1966) 1387, §4)", a.Layers),
+		{What: fmt.Sprintf("Equivalent foil thickness over the skin depth for %s of round wire (Dowell, Proc. IEE 113 (1966) 1387, §4)", format.Count(a.Layers, "layer", "layers")),
 			Symbolic: `\Delta = \frac{\sqrt{\pi}}{2} \frac{d}{\delta} \sqrt{\eta}`,
 			Numbers:  fmt.Sprintf(`\frac{\sqrt{\pi}}{2} \cdot \frac{%s}{%s} \cdot \sqrt{%s}`, Q(co.Wire.Bare, "m", 4), Q(a.SkinDepth, "m", 4), N(a.Porosity, 4)),
 			Result:   N(a.Delta, 4)},
@@ -198,8 +194,16 @@ func (c *composer) pickUpSteps(i int) []Step {
 		add(Step{What: "Effective area, the flux linkage per tesla of a uniform axial field, with the core (derived in the Core section)",
 			Symbolic: `A_{eff} = ` + Q(r.EffectiveArea, "m²", 4)})
 	} else {
-		add(Step{What: "Effective area, the flux linkage per tesla of a uniform axial field: the area of every turn, summed",
-			Symbolic: `A_{eff} = \sum_{i=1}^{N} \pi r_i^2`, Result: Q(r.EffectiveArea, "m²", 4)})
+		st := Step{What: "Effective area, the flux linkage per tesla of a uniform axial field: the area of every turn, summed",
+			Symbolic: `A_{eff} = \sum_{i=1}^{N} \pi r_i^2`, Result: Q(r.EffectiveArea, "m²", 4)}
+		if w := cr.Winding; w.Thin || w.LayerCount <= 1 {
+			st.Numbers = fmt.Sprintf(`%d \cdot \pi \cdot %s^2`, co.Turns, Paren(Q(co.MeanDiameter/2, "m", 4)))
+		} else {
+			st.What += fmt.Sprintf(": N turns of mean square radius ⟨r²⟩ = %s", Eng(cs.MeanSquareRadius, "m²", 4))
+			st.Symbolic += ` = N \pi \langle r^2 \rangle`
+			st.Numbers = fmt.Sprintf(`%d \cdot \pi \cdot %s`, co.Turns, Q(cs.MeanSquareRadius, "m²", 4))
+		}
+		add(st)
 	}
 	if r.Frequency > 0 {
 		add(Step{What: "Sensitivity by Faraday's law (Tumanski, Meas. Sci. Technol. 18 (2007) R31, eq. 1)",
@@ -216,7 +220,10 @@ func (c *composer) pickUpSteps(i int) []Step {
 	}
 	if !math.IsNaN(r.BandNoiseField) {
 		add(Step{What: fmt.Sprintf("Noise-equivalent field over the band %s to %s, with the resistance at each frequency (Gauss–Legendre quadrature in ln f)", Eng(co.BandLow, "Hz", 3), Eng(co.BandHigh, "Hz", 3)),
-			Symbolic: `B_{rms} = \sqrt{\int_{f_1}^{f_2} \left( \frac{\sqrt{4 k T R_{ac}(f)}}{2 \pi f A_{eff}} \right)^2 df}`, Result: Q(r.BandNoiseField, "T", 3)})
+			Symbolic: `B_{rms} = \sqrt{\int_{f_1}^{f_2} \left( \frac{\sqrt{4 k T R_{ac}(f)}}{2 \pi f A_{eff}} \right)^2 df}`,
+			Numbers: fmt.Sprintf(`\sqrt{\int_{%s}^{%s} \left( \frac{\sqrt{4 k \cdot %s \cdot R_{ac}(f)}}{2 \pi f \cdot %s} \right)^2 df}`,
+				Q(co.BandLow, "Hz", 3), Q(co.BandHigh, "Hz", 3), Q(k.Temperature, "K", 4), Q(r.EffectiveArea, "m²", 4)),
+			Result: Q(r.BandNoiseField, "T", 3)})
 	}
 	add(selfInductanceSteps(co, cr, cs)...) // memo/electrical.go
 	if k.Core != nil {
@@ -242,9 +249,11 @@ func capacitanceSteps(co calc.Coil, p calc.CapacitanceParts) []Step {
 		return []Step{{What: "Self-capacitance of the winding: not modelled for this form", Symbolic: `C_s = ` + Words("not computed")}}
 	case p.Layered:
 		return []Step{
-			{What: fmt.Sprintf("Capacitance between adjacent layers: the turn-to-turn capacitances of the turns facing the next layer, through the enamel (relative permittivity %s, common practice) and the air beside the contact, summed (Massarini & Kazimierczuk, IEEE Trans. Power Electron. 12 (1997) 671), the mean over the %d gaps",
+			{What: fmt.Sprintf("Capacitance between adjacent layers: the turn-to-turn capacitances of the turns facing the next layer, through the enamel (relative permittivity %s, common practice) and the air beside the contact, summed (Massarini & Kazimierczuk, IEEE Trans. Power Electron. 12 (1997) 671), the mean over the %d gaps: the capacitance per metre of two touching turns times the length of the turns of a layer that face the next",
 				Sig(calc.EnamelPermittivity, 2), p.Layers-1),
-				Symbolic: `C_l = \sum C_{tt}`, Result: Q(p.LayerCapacitance, "F", 3)},
+				Symbolic: `C_l = \sum C_{tt} = c_{tt}\, \ell_f`,
+				Numbers:  fmt.Sprintf(`%s \cdot %s`, Q(p.PerLength, "F/m", 4), Q(p.Facing, "m", 4)),
+				Result:   Q(p.LayerCapacitance, "F", 3)},
 			{What: fmt.Sprintf("Self-capacitance of %d layers wound back and forth, by the energy stored in the gaps (Dalessandro, Cavalcante & Kolar, IEEE Trans. Power Electron. 22 (2007) 2081)", p.Layers),
 				Symbolic: `C_s = \frac{4}{3} C_l \frac{p - 1}{p^2}`,
 				Numbers:  fmt.Sprintf(`\frac{4}{3} \cdot %s \cdot \frac{%d - 1}{%d^2}`, Q(p.LayerCapacitance, "F", 3), p.Layers, p.Layers),
@@ -359,6 +368,32 @@ func driven(fn func(*composer)) func(*composer) {
 	}
 }
 
+// bandShortfalls are page 1's sentences on the pick-up coils whose
+// working band ends below the top of their stated band: there the
+// sensitivity is no longer the induction law's, so the coil does not
+// serve the whole band it is stated for.
+func (c *composer) bandShortfalls() []string {
+	var out []string
+	for i, co := range c.j.Spec.Design.Coils {
+		if i >= len(c.j.Coils) || c.j.Coils[i].Kinds.Receiver == nil {
+			continue
+		}
+		r := c.j.Coils[i].Kinds.Receiver
+		top := r.WorkingBandTop
+		if !(co.BandHigh > 0) || math.IsNaN(top) || math.IsInf(top, 1) || top >= co.BandHigh {
+			continue
+		}
+		if top == 0 {
+			out = append(out, fmt.Sprintf("Coil %q does not cover its stated band of %s to %s: its sensitivity departs from the induction law 2π f A_eff by more than 10 %% already at %s, the lowest frequency computed.",
+				co.Name, Eng(co.BandLow, "Hz", 3), Eng(co.BandHigh, "Hz", 3), Eng(r.Response[0].Frequency, "Hz", 3)))
+			continue
+		}
+		out = append(out, fmt.Sprintf("Coil %q does not cover its stated band of %s to %s: its sensitivity follows the induction law 2π f A_eff within 10 %% only up to about %s, so from there to %s it is shaped by the winding's capacitance (self-resonance %s with the load) and cannot be taken as 2π f A_eff.",
+			co.Name, Eng(co.BandLow, "Hz", 3), Eng(co.BandHigh, "Hz", 3), Eng(top, "Hz", 2), Eng(co.BandHigh, "Hz", 3), Eng(r.SelfResonance, "Hz", 3)))
+	}
+	return out
+}
+
 // receiverSummary is page 1's table of the pick-up coils: sensitivity,
 // noise-equivalent field at the design frequency and over the band,
 // self-resonance with the load, resistance, inductance and capacitance.
@@ -398,6 +433,18 @@ func (c *composer) receiverSummary() doc.Table {
 			return fmt.Sprintf("%s (%s to %s)", Eng(rec(i).BandNoiseField, "T", 3), Eng(co.BandLow, "Hz", 3), Eng(co.BandHigh, "Hz", 3))
 		}),
 		row("Self-resonance, with the load", func(i int) string { return orDash(rec(i).SelfResonance, "Hz", 3) }),
+		row("Working band: sensitivity within 10 % of 2π f A_eff", func(i int) string {
+			switch top := rec(i).WorkingBandTop; {
+			case math.IsNaN(top):
+				return "—"
+			case math.IsInf(top, 1):
+				return "over the whole response"
+			case top == 0:
+				return "none"
+			default:
+				return "up to " + Eng(top, "Hz", 2)
+			}
+		}),
 		row("Resistance, a.c. at the design frequency", func(i int) string { return orDash(rec(i).Resistance, "Ω", 3) }),
 		row("Inductance (small signal; with the core where there is one)", func(i int) string { return orDash(c.j.Results.Coils[i].Inductance, "H", 3) }),
 		row("Capacitance across the terminals (winding + load)", func(i int) string { return orDash(rec(i).Capacitance, "F", 3) }),

@@ -2,6 +2,7 @@ package memo
 
 import (
 	"bytes"
+	"os"
 	"strings"
 	"testing"
 
@@ -215,5 +216,45 @@ func TestCoredMassOnPageOne(t *testing.T) {
 	// The method's conductor mass is the conductor's too.
 	if m := sectionsByName(t, j)["method"]; !strings.Contains(m, "= "+Q(k.AirMass, "kg", 3)) || strings.Contains(m, "= "+Q(cr.Mass, "kg", 3)) {
 		t.Errorf("the method's conductor mass is not %s (total %s)", Q(k.AirMass, "kg", 3), Q(cr.Mass, "kg", 3))
+	}
+}
+
+// A pick-up coil whose working band ends below the top of its stated band
+// says so on page 1, with both frequencies from the study; one whose band
+// lies inside its working band says nothing of it. The limits are judged
+// as before.
+func TestBandShortfallOnPageOne(t *testing.T) {
+	src, err := os.ReadFile("../examples/search-coil.md")
+	if err != nil {
+		t.Fatal(err)
+	}
+	page1 := func(src string) (string, *analysis.Study) {
+		j := mustEvaluate(t, src)
+		var b strings.Builder
+		for _, s := range (&composer{j: j}).verdict().Spans {
+			b.WriteString(s.Text)
+		}
+		return b.String(), j
+	}
+	text, j := page1(string(src))
+	co, r := j.Spec.Design.Coils[0], j.Coils[0].Kinds.Receiver
+	if !(r.WorkingBandTop > 0 && r.WorkingBandTop < co.BandHigh) {
+		t.Fatalf("search coil: working band to %g Hz, band to %g Hz", r.WorkingBandTop, co.BandHigh)
+	}
+	for _, want := range []string{"does not cover its stated band", "only up to about " + Eng(r.WorkingBandTop, "Hz", 2), "from there to " + Eng(co.BandHigh, "Hz", 3)} {
+		if !strings.Contains(text, want) {
+			t.Errorf("page 1 lacks %q:\n%s", want, text)
+		}
+	}
+	narrow := strings.Replace(string(src), "band              = 10 Hz .. 10 kHz", "band              = 10 Hz .. 2 kHz", 1)
+	if narrow == string(src) {
+		t.Fatal("the band line was not found")
+	}
+	text, j2 := page1(narrow)
+	if strings.Contains(text, "does not cover") {
+		t.Errorf("a band inside the working band: %s", text)
+	}
+	if len(j2.Limits) != len(j.Limits) {
+		t.Errorf("limits %d, want %d", len(j2.Limits), len(j.Limits))
 	}
 }

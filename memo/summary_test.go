@@ -2,10 +2,13 @@ package memo
 
 import (
 	"bytes"
+	"fmt"
+	"math"
 	"os"
 	"strings"
 	"testing"
 
+	"coilmemo/analysis"
 	"coilmemo/doc"
 
 	"github.com/yuin/goldmark"
@@ -106,5 +109,107 @@ func TestSweepMarksBeyondClass(t *testing.T) {
 	}
 	if len(cells) != 3 || strings.Contains(cells[0], "†") || !strings.HasSuffix(cells[1], "°C †") || cells[2] != "above melting" || !note {
 		t.Errorf("hottest winding cells %q, note %v", cells, note)
+	}
+}
+
+// A gradient pair's moment and centre field cancel by design: page 1 gives
+// them no rows of their own and gives instead the gradient at the centre,
+// its ±1 % linear region and the field at that region's edge, from the
+// study. Beside another coil the rows stay, the pair's cells saying why
+// they are zero.
+func TestGradientPairHeadline(t *testing.T) {
+	cells := func(tb doc.Table) map[string][]string {
+		m := map[string][]string{}
+		for _, r := range tb.Rows {
+			var v []string
+			for _, c := range r[1:] {
+				v = append(v, c.Text)
+			}
+			m[r[0].Text] = v
+		}
+		return m
+	}
+	src, err := os.ReadFile("../testdata/figures/gradient-pair.md")
+	if err != nil {
+		t.Fatal(err)
+	}
+	j, diags := evaluate("gradient-pair.md", src)
+	if len(diags) > 0 {
+		t.Fatal(diags)
+	}
+	rows := cells((&composer{j: j}).summaryTable())
+	for label := range rows {
+		if strings.HasPrefix(label, "Magnetic moment") || strings.HasPrefix(label, "Field at own centre") {
+			t.Errorf("gradient pair alone: row %q %q", label, rows[label])
+		}
+	}
+	cr, pc := j.Results.Coils[0], j.Coils[0].Pair
+	if pc == nil || !(pc.EdgeField > 0) {
+		t.Fatalf("no field at the edge of the linear region: %+v", pc)
+	}
+	for label, want := range map[string]string{
+		"Axial gradient at centre ∂Bz/∂z":                  Eng(cr.Pair.Gradient, "T/m", 3),
+		"Gradient within ±1 %: along the axis / radially":  "±" + Eng(cr.Pair.LinearAxial, "m", 3) + " / ±" + Eng(cr.Pair.LinearRadial, "m", 3),
+		"Field |B| on the axis at the edge of that region": Eng(pc.EdgeField, "T", 3),
+	} {
+		if got := rows[label]; len(got) != 1 || got[0] != want {
+			t.Errorf("row %q = %q, want %q", label, got, want)
+		}
+	}
+	// Inside the linear region B ≈ G z on the axis: the edge field is the
+	// gradient times the distance to within the region's 1 %.
+	if lin := math.Abs(cr.Pair.Gradient) * cr.Pair.LinearAxial; math.Abs(pc.EdgeField-lin) > 0.01*lin {
+		t.Errorf("edge field %g T, G·z = %g T", pc.EdgeField, lin)
+	}
+
+	mixed := mustEvaluate(t, "```coil\nname = g\nform = pair\nsense = opposing\nmean-diameter = 50 mm\nspacing = 40 mm\nturns = 60\nwire = AWG 24\ncurrent = 1 A\n```\n"+
+		"```coil\nname = m\nform = loop\nmean-diameter = 80 mm\nturns = 20\nwire = AWG 24\ncurrent = 1 A\ncentre = (0.3, 0, 0) m\n```\n")
+	rows = cells((&composer{j: mixed}).summaryTable())
+	if got := rows["Magnetic moment |m|"]; len(got) != 2 || got[0] != "0 (by design)" || got[1] != Eng(mixed.Results.Coils[1].Moment.Norm(), "A·m²", 3) {
+		t.Errorf("beside a loop: moment row %q", got)
+	}
+	if got := rows["Axial gradient at centre ∂Bz/∂z"]; len(got) != 2 || got[1] != "—" {
+		t.Errorf("beside a loop: gradient row %q", got)
+	}
+}
+
+// Page 1 says what the verification checks cover: for a cored coil the
+// winding in air and the core's model, with their counts from the study,
+// not a bare "all checks agree" that would vouch for the figures with the
+// core too; an air coil's sentence is unchanged.
+func TestChecksVerdictSaysWhatIsChecked(t *testing.T) {
+	verdict := func(file string) (string, []analysis.Check) {
+		src, err := os.ReadFile(file)
+		if err != nil {
+			t.Fatal(err)
+		}
+		j, diags := evaluate(file, src)
+		if len(diags) > 0 {
+			t.Fatal(diags)
+		}
+		var b strings.Builder
+		for _, s := range (&composer{j: j}).verdict().Spans {
+			b.WriteString(s.Text)
+		}
+		return b.String(), j.Checks
+	}
+	text, ks := verdict("../examples/torque-rod.md")
+	core := 0
+	for _, k := range ks {
+		if strings.HasPrefix(k.Name, "core ") {
+			core++
+		}
+	}
+	if core == 0 || core == len(ks) {
+		t.Fatalf("torque rod: %d core checks of %d", core, len(ks))
+	}
+	want := fmt.Sprintf("All %d verification checks agree within tolerance: %d of the winding in air and %d of the core's model (demagnetising factor, reciprocity). The figures with the core rest on that model; no check recomputes them by an independent method.",
+		len(ks), len(ks)-core, core)
+	if !strings.Contains(text, want) {
+		t.Errorf("torque rod: page 1 says\n%s\nwant\n%s", text, want)
+	}
+	text, ks = verdict("../examples/panel-coil.md")
+	if want := fmt.Sprintf("All %d verification checks agree within tolerance. ", len(ks)); !strings.Contains(text, want) || strings.Contains(text, "core") {
+		t.Errorf("air coil: page 1 says %q", text)
 	}
 }

@@ -327,7 +327,8 @@ func heatCapacitySteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy,
 		Numbers:  fmt.Sprintf(`%s \cdot %s%s`, conductor, Q(mat.SpecificHeat, "J/(kg·K)", 3), fnum), Result: Q(h.HeatCapacity, "J/K", 3)})
 	if !math.IsNaN(cr.ThermalTau) {
 		add(Step{What: "Thermal time constant of the approach to the steady state (the heat balance linearised there)",
-			Symbolic: `\tau_{th} = \frac{C}{d(Q_{\mathrm{out}} - \bar{P})/dT}`, Result: durationQ(cr.ThermalTau)})
+			Symbolic: `\tau_{th} = \frac{C}{d(Q_{\mathrm{out}} - \bar{P})/dT}`,
+			Numbers:  fmt.Sprintf(`\frac{%s}{%s}`, Q(h.HeatCapacity, "J/K", 3), Q(cs.Heat.LossSlope, "W/K", 4)), Result: durationQ(cr.ThermalTau)})
 	}
 	return steps
 }

@@ -1,6 +1,10 @@
 package memo
 
 import (
+	"slices"
+	"strings"
+
+	"coilmemo/analysis"
 	"coilmemo/doc"
 	"coilmemo/templates"
 )
@@ -10,6 +14,14 @@ import (
 func (c *composer) verification() {
 	c.heading(1, "Verification")
 	c.para(templates.Text("verification", nil))
+	if coreChecks(c.j.Checks) > 0 {
+		recip := ""
+		if slices.ContainsFunc(c.j.Checks, func(k analysis.Check) bool { return k.Core && strings.Contains(k.Name, "reciprocity") }) {
+			recip = " and its reciprocity (the core's moment per ampere against its share of the effective area)"
+		}
+		c.para("A cored coil's rows of its winding are those of the winding in air. The rows of its core check the core's model: its demagnetising factor against closed forms (the uniform cylinder in the limit of a vanishing susceptibility and, for a long rod, the prolate spheroid of the same ratio)" + recip +
+			". The figures with the core at the operating point rest on that model; no row recomputes them by an independent method.")
+	}
 	if len(c.j.Checks) == 0 {
 		c.para("No independent check applies to this design's forms.")
 		return

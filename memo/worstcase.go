@@ -197,7 +197,17 @@ func (c *composer) sensitivity(wc *analysis.WorstCase) {
 	}
 }
 
+// signed writes a swing in the sensitivity table to three significant
+// figures with its sign: none on a zero ("0 %", a result the tolerance
+// does not move), and "< 0.001" for a swing smaller than that, never a
+// power of ten.
 func signed(v float64, unit string) string {
+	switch {
+	case v == 0:
+		return "0 " + unit
+	case math.Abs(v) < 1e-3:
+		return "< 0.001 " + unit
+	}
 	s := Sig(math.Abs(v), 3)
 	if v < 0 {
 		s = "−" + s

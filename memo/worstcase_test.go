@@ -80,3 +80,17 @@ func BenchmarkTorqueCoilMemo(b *testing.B) {
 }
 
 func readExampleB(name string) ([]byte, error) { return os.ReadFile("../examples/" + name) }
+
+// A swing of the sensitivity table has a sign unless it is none, and a
+// tiny one reads "< 0.001", never a power of ten.
+func TestSignedSwing(t *testing.T) {
+	for _, c := range []struct {
+		v    float64
+		unit string
+		want string
+	}{{0, "%", "0 %"}, {9.02, "%", "+9.02 %"}, {-26.8, "%", "−26.8 %"}, {4e-9, "%", "< 0.001 %"}, {-0.328, "K", "−0.328 K"}} {
+		if got := signed(c.v, c.unit); got != c.want {
+			t.Errorf("signed(%g, %q) = %q, want %q", c.v, c.unit, got, c.want)
+		}
+	}
+}

@@ -38,19 +38,15 @@ func sampleField() (z, exact, dipole []float64) {
 	return
 }
 
-func sampleTorque() (ang, tq []float64) {
-	for a := 0.0; a <= 180; a += 2 {
-		ang = append(ang, a)
-		tq = append(tq, 0.0123*math.Sin(a*math.Pi/180))
-	}
-	return
+func sampleMoments() figures.BarGroups {
+	return figures.BarGroups{Groups: []string{"X coil", "Y coil", "Z coil"}, Series: []string{"mx", "my", "mz"},
+		Values: [][]float64{{0.21, 0.004, 0}, {-0.003, 0.2, 0.01}, {0, 0, 0.19}}, YName: "Moment component", Unit: "A·m²"}
 }
 
 // exampleDocument builds a memo using every block type. extra adds that
 // many further sections of filler so the document grows by pages.
 func exampleDocument(extra int) *doc.Document {
 	z, ex, di := sampleField()
-	ang, tq := sampleTorque()
 	d := &doc.Document{
 		Meta: doc.Meta{
 			Title:    "Calibration solenoid CS-40 — field and thermal check",
@@ -150,9 +146,9 @@ func exampleDocument(extra int) *doc.Document {
 		Width: 440, Height: 250, Draw: figures.OnAxis("z", z, ex, di,
 			figures.Mark{X: -0.03, Label: "winding end"}, figures.Mark{X: 0.03, Label: "winding end"}, figures.Mark{X: 0.092, Label: "0.5 mT"}),
 		Summary: "on-axis field"})
-	add(doc.Heading{Level: 2, Text: "Torque on a tilted probe"})
-	add(doc.Figure{Number: 2, Caption: "Torque on a 10 mA·m² test dipole against tilt angle.", Width: 360, Height: 200,
-		Draw: figures.TorqueAngle(ang, tq)})
+	add(doc.Heading{Level: 2, Text: "Moments of a coil set"})
+	add(doc.Figure{Number: 2, Caption: "Moment of each coil of a three-axis set by its components.", Width: 360, Height: 200,
+		Draw: figures.GroupedBars(sampleMoments())})
 	add(doc.Heading{Level: 1, Text: "Verification"})
 	rows := [][]doc.Cell{}
 	for i := 0; i < 48; i++ {
