@@ -282,7 +282,7 @@ func pairFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.D
 			}
 			v.text += "."
 		case math.Abs(ratio-1) <= calc.HelmholtzTolerance:
-			v.text = fmt.Sprintf("spacing / mean radius $s/R$ = %s: a Helmholtz pair, whose centre field is flat to the fourth order", Sig(ratio, 4))
+			v.text = fmt.Sprintf("spacing / mean radius $s/a$ = %s: a Helmholtz pair, whose centre field is flat to the fourth order", Sig(ratio, 4))
 			if !math.IsNaN(pr.Axial1) {
 				v.text += fmt.Sprintf("; the field stays within 1 %% of its centre value for %s along the axis and %s radially", pmEng(pr.Axial1), pmEng(pr.Radial1))
 			}
@@ -293,7 +293,7 @@ func pairFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.D
 			if pr.Dip {
 				shape = "a dip at the centre"
 			}
-			v.text = fmt.Sprintf("spacing / mean radius of the turns $s/R$ = %s, not 1: the field on the axis has %s", Sig(ratio, 4), shape)
+			v.text = fmt.Sprintf("spacing / mean radius of the turns $s/a$ = %s, not 1: the field on the axis has %s", Sig(ratio, 4), shape)
 			if !math.IsNaN(pr.Axial1) {
 				v.text += fmt.Sprintf("; it stays within 1 %% of its centre value for %s along the axis and %s radially", pmEng(pr.Axial1), pmEng(pr.Radial1))
 			}

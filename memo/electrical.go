@@ -120,13 +120,13 @@ func selfInductanceSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStud
 			Symbolic: `L_s = \frac{\mu_0 \pi a^2 N^2 k_N}{\ell}`,
 			Numbers:  fmt.Sprintf(`\frac{\mu_0 \pi \cdot %s^2 \cdot %d^2 \cdot %s}{%s}`, Paren(Q(a, "m", 4)), n, N(kN, 5), Q(l, "m", 4)),
 			Result:   Q(Ls, "H", 4)})
-		add(Step{What: "Rosa's correction A: a round wire of bare diameter d against a strip of the sheet one pitch p wide (Rosa 1906; Grover 1946, ch. 16)",
-			Symbolic: `A = \frac{5}{4} - \ln\frac{2p}{d}`,
+		add(Step{What: "Rosa's first correction: a round wire of bare diameter d against a strip of the sheet one pitch p wide (Rosa 1906; Grover 1946, ch. 16)",
+			Symbolic: `A_{\mathrm{R}} = \frac{5}{4} - \ln\frac{2p}{d}`,
 			Numbers:  fmt.Sprintf(`\frac{5}{4} - \ln\frac{2 \cdot %s}{%s}`, Q(p, "m", 4), Q(co.Wire.Bare, "m", 4)), Result: N(A, 4)})
-		add(Step{What: fmt.Sprintf("Rosa's correction B for the mutual inductances of %d round turns against the sheet's strips (Rosa 1906; tabulated by Grover 1946)", n),
-			Symbolic: `B = \frac{2}{N} \sum_{k=1}^{N-1} (N - k)\, f(k)`, Result: N(B, 4)})
+		add(Step{What: fmt.Sprintf("Rosa's second correction, for the mutual inductances of %d round turns against the sheet's strips (Rosa 1906; tabulated by Grover 1946)", n),
+			Symbolic: `B_{\mathrm{R}} = \frac{2}{N} \sum_{k=1}^{N-1} (N - k)\, f(k)`, Result: N(B, 4)})
 		add(Step{What: "Self-inductance of the single-layer winding" + one,
-			Symbolic: `L_1 = L_s - \mu_0 a N (A + B)`,
+			Symbolic: `L_1 = L_s - \mu_0 a N (A_{\mathrm{R}} + B_{\mathrm{R}})`,
 			Numbers:  fmt.Sprintf(`%s - \mu_0 \cdot %s \cdot %d \cdot \left(%s + %s\right)`, Q(Ls, "H", 4), Q(a, "m", 4), n, N(A, 4), N(B, 4)),
 			Result:   Q(L1, "H", 4)})
 		wh := ip.Wheeler

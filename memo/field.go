@@ -487,7 +487,7 @@ func (c *composer) dipoleDistances(co calc.Coil, cr calc.CoilResult, cs *analysi
 		return
 	}
 	R := co.MeanDiameter / 2
-	ref, refName := R, "R"
+	ref, refName := R, "a" // a: the mean radius, as in the inductance steps (R is a resistance)
 	if co.Form == calc.Rectangle {
 		ref, refName = math.Sqrt(co.Width*co.Height/math.Pi), "a"
 	}
@@ -562,7 +562,7 @@ func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult, cs *analysis.Coi
 		return
 	}
 	B0 := pc.B0
-	rel := fmt.Sprintf("The coil centres are %s apart, %s times the mean radius R = %s", Eng(s, "m", 4), Sig(pr.SpacingRatio, 4), Eng(R, "m", 4))
+	rel := fmt.Sprintf("The coil centres are %s apart, %s times the mean radius a = %s", Eng(s, "m", 4), Sig(pr.SpacingRatio, 4), Eng(R, "m", 4))
 	if math.Abs(R/(co.MeanDiameter/2)-1) > 1e-4 {
 		rel += fmt.Sprintf(" of the turns as laid (the stated mean radius is %s)", Eng(co.MeanDiameter/2, "m", 4))
 	}
@@ -580,8 +580,8 @@ func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult, cs *analysis.Coi
 		c.add(doc.Table{Caption: fmt.Sprintf("Homogeneous region of pair %q, distances from its centre", co.Name),
 			Header: []string{"Tolerance", "Along the axis (±)", "Radially in the mid-plane"},
 			Rows: [][]doc.Cell{
-				{{Text: "±1 %"}, {Text: fmt.Sprintf("%s (%s R)", Eng(pr.Axial1, "m", 3), Sig(pr.Axial1/R, 3)), Strong: true}, {Text: fmt.Sprintf("%s (%s R)", Eng(pr.Radial1, "m", 3), Sig(pr.Radial1/R, 3)), Strong: true}},
-				{{Text: "±0.1 %"}, {Text: fmt.Sprintf("%s (%s R)", Eng(pr.Axial01, "m", 3), Sig(pr.Axial01/R, 3))}, {Text: fmt.Sprintf("%s (%s R)", Eng(pr.Radial01, "m", 3), Sig(pr.Radial01/R, 3))}},
+				{{Text: "±1 %"}, {Text: fmt.Sprintf("%s (%s a)", Eng(pr.Axial1, "m", 3), Sig(pr.Axial1/R, 3)), Strong: true}, {Text: fmt.Sprintf("%s (%s a)", Eng(pr.Radial1, "m", 3), Sig(pr.Radial1/R, 3)), Strong: true}},
+				{{Text: "±0.1 %"}, {Text: fmt.Sprintf("%s (%s a)", Eng(pr.Axial01, "m", 3), Sig(pr.Axial01/R, 3))}, {Text: fmt.Sprintf("%s (%s a)", Eng(pr.Radial01, "m", 3), Sig(pr.Radial01/R, 3))}},
 			},
 			Widths: []float64{1.2, 2, 2},
 			Align:  []doc.Align{doc.Left, doc.Right, doc.Right}})
@@ -629,8 +629,8 @@ func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult, cs *analysis.Coi
 		Header: []string{"Quantity", "Value"},
 		Rows: [][]doc.Cell{
 			{{Text: "Axial gradient at the centre, " + gradientSymbol(co)}, {Text: Eng(G, "T/m", 4), Strong: true}},
-			{{Text: "Gradient within ±1 %: along the axis (±)"}, {Text: fmt.Sprintf("%s (%s R)", Eng(pr.LinearAxial, "m", 3), Sig(pr.LinearAxial/R, 3))}},
-			{{Text: "Gradient within ±1 %: radially in the mid-plane"}, {Text: fmt.Sprintf("%s (%s R)", Eng(pr.LinearRadial, "m", 3), Sig(pr.LinearRadial/R, 3))}},
+			{{Text: "Gradient within ±1 %: along the axis (±)"}, {Text: fmt.Sprintf("%s (%s a)", Eng(pr.LinearAxial, "m", 3), Sig(pr.LinearAxial/R, 3))}},
+			{{Text: "Gradient within ±1 %: radially in the mid-plane"}, {Text: fmt.Sprintf("%s (%s a)", Eng(pr.LinearRadial, "m", 3), Sig(pr.LinearRadial/R, 3))}},
 		},
 		Widths: []float64{3, 1.6},
 		Align:  []doc.Align{doc.Left, doc.Right}})

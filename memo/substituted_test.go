@@ -42,7 +42,7 @@ var unsubstituted = map[string]string{
 	"Nagaoka's coefficient": "tabulated coefficient of the k² above",
 	// A sum of N−1 terms of a tabulated function f(k): the result is the
 	// coefficient of the table.
-	"Rosa's correction B": "tabulated correction, a sum over a table",
+	"Rosa's second correction": "tabulated correction, a sum over a table",
 	// The root of the heat balance derived just before it, whose numbers
 	// are put in there (the heat shed at this surface temperature).
 	"Surface temperature at the steady state": "root of the balance above",
