@@ -84,7 +84,7 @@ func TestReceiverStudy(t *testing.T) {
 // The limits of cored and pick-up coils go through LimitValue, so the
 // worst case over the tolerance corners sees them: a linear core's peak
 // flux density is proportional to the current, so at supply +10 % it is
-// 1.1 times the nominal; a pick-up coil's sensitivity S = 2π f A_eff is
+// 1.1 times the nominal; a pick-up coil's sensitivity S = 2π f A is
 // proportional to its frequency, so at frequency −5 % it is 0.95 times the
 // nominal. Both worst values are finite, at the right corner, and agree
 // with the verdicts; the cored inductance's time constant is judged at the

@@ -102,7 +102,7 @@ func TestAxisSetRule(t *testing.T) {
 // TestResponseLeadIn: the pick-up response figure's text names the
 // working band's edge, the peak and where the model stops. The edge is
 // checked against the lumped model's own closed form: with ωRC small,
-// |V/B| / (2π f A_eff) = 1/(1 − ω²LC) reaches 1.1 at f = f_sr/√11.
+// |V/B| / (2π f A) = 1/(1 − ω²LC) reaches 1.1 at f = f_sr/√11.
 func TestResponseLeadIn(t *testing.T) {
 	f := filepath.Join("..", "examples", "search-coil.md")
 	src, err := os.ReadFile(f)

@@ -75,7 +75,7 @@ func (c *composer) receiver() {
 
 // responseLeadIn says what to read from the response figure n of
 // pick-up coil r (frequencies f, terminal sensitivities s): reading, the
-// band where the coil follows the induction law 2π f A_eff (within
+// band where the coil follows the induction law 2π f A (within
 // 10 %), and lead, the figure's short lead-in naming the straight rise,
 // the resonance peak and where the lumped model stops.
 func responseLeadIn(n int, r *calc.ReceiverResult, f, s []float64) (reading, lead string) {
@@ -88,13 +88,13 @@ func responseLeadIn(n int, r *calc.ReceiverResult, f, s []float64) (reading, lea
 	// ratio is the terminal sensitivity over the induction law's.
 	ratio := func(k int) float64 { return s[k] / (2 * math.Pi * f[k] * a) }
 	top := r.WorkingBandTop
-	law := fmt.Sprintf("in proportion to frequency, as the induction law 2π f A_eff gives (2π A_eff = %s per hertz)", Eng(2*math.Pi*a, "V/T", 3))
+	law := fmt.Sprintf("in proportion to frequency, as the induction law 2π f A gives for its effective area A (2π A = %s per hertz)", Eng(2*math.Pi*a, "V/T", 3))
 	switch {
 	case math.IsNaN(top):
 	case math.IsInf(top, 1):
 		fmt.Fprintf(&b, "Over the whole range plotted the terminal sensitivity rises %s, within 10 %%: that is the coil's working band.", law)
 	case top == 0:
-		fmt.Fprintf(&b, "Already at %s the terminal sensitivity departs from the induction law 2π f A_eff by more than 10 %%.", Eng(f[0], "Hz", 3))
+		fmt.Fprintf(&b, "Already at %s the terminal sensitivity departs from the induction law 2π f A by more than 10 %%.", Eng(f[0], "Hz", 3))
 	default:
 		fmt.Fprintf(&b, "Up to about %s the terminal sensitivity rises %s, within 10 %%: that is the coil's working band.", Eng(top, "Hz", 2), law)
 	}
@@ -384,11 +384,11 @@ func (c *composer) bandShortfalls() []string {
 			continue
 		}
 		if top == 0 {
-			out = append(out, fmt.Sprintf("Coil %q does not cover its stated band of %s to %s: its sensitivity departs from the induction law 2π f A_eff by more than 10 %% already at %s, the lowest frequency computed.",
+			out = append(out, fmt.Sprintf("Coil %q does not cover its stated band of %s to %s: its sensitivity departs from the induction law 2π f A (A its effective area) by more than 10 %% already at %s, the lowest frequency computed.",
 				co.Name, Eng(co.BandLow, "Hz", 3), Eng(co.BandHigh, "Hz", 3), Eng(r.Response[0].Frequency, "Hz", 3)))
 			continue
 		}
-		out = append(out, fmt.Sprintf("Coil %q does not cover its stated band of %s to %s: its sensitivity follows the induction law 2π f A_eff within 10 %% only up to about %s, so from there to %s it is shaped by the winding's capacitance (self-resonance %s with the load) and cannot be taken as 2π f A_eff.",
+		out = append(out, fmt.Sprintf("Coil %q does not cover its stated band of %s to %s: its sensitivity follows the induction law 2π f A (A its effective area) within 10 %% only up to about %s, so from there to %s it is shaped by the winding's capacitance (self-resonance %s with the load) and cannot be taken as 2π f A.",
 			co.Name, Eng(co.BandLow, "Hz", 3), Eng(co.BandHigh, "Hz", 3), Eng(top, "Hz", 2), Eng(co.BandHigh, "Hz", 3), Eng(r.SelfResonance, "Hz", 3)))
 	}
 	return out
@@ -433,7 +433,7 @@ func (c *composer) receiverSummary() doc.Table {
 			return fmt.Sprintf("%s (%s to %s)", Eng(rec(i).BandNoiseField, "T", 3), Eng(co.BandLow, "Hz", 3), Eng(co.BandHigh, "Hz", 3))
 		}),
 		row("Self-resonance, with the load", func(i int) string { return orDash(rec(i).SelfResonance, "Hz", 3) }),
-		row("Working band: sensitivity within 10 % of 2π f A_eff", func(i int) string {
+		row("Working band: sensitivity within 10 % of 2π f A (A the effective area)", func(i int) string {
 			switch top := rec(i).WorkingBandTop; {
 			case math.IsNaN(top):
 				return "—"
