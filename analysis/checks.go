@@ -243,7 +243,7 @@ func inductanceChecks(c calc.Coil, cr calc.CoilResult) []Check {
 	// Wheeler states 1 % for ℓ > 0.8 a.
 	if l > 0.8*a {
 		sheet := calc.SolenoidInductance(a, l, c.Turns)
-		out = append(out, newCheck(c.Name, "current-sheet inductance", "μ0·π·a²·N²·k_N/ℓ (Lorenz–Nagaoka)",
+		out = append(out, newCheck(c.Name, "current-sheet inductance", "μ0·π·a²·N²·k/ℓ (Lorenz–Nagaoka; k Nagaoka's coefficient)",
 			"Wheeler (1928): μ0·π·a²·N²/(ℓ + 0.9·a)", sheet, calc.WheelerInductance(a, l, c.Turns), "H", 0.01))
 	}
 	return out

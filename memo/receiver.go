@@ -116,7 +116,7 @@ func responseLeadIn(n int, r *calc.ReceiverResult, f, s []float64) (reading, lea
 	case pk < len(s)-1 && pk > 0:
 		fr := ""
 		if fsr > 0 {
-			fr = fmt.Sprintf(" (f_sr = %s, dotted)", Eng(fsr, "Hz", 3))
+			fr = fmt.Sprintf(" (%s, dotted)", Eng(fsr, "Hz", 3))
 		}
 		lead += fmt.Sprintf(" The straight rise is the working band; the peak, %s times the induction law near %s, is the self-resonance%s. Above it the lumped R–L–C model no longer describes the winding: the curve there is a trend, not values to use.",
 			Sig(ratio(pk), 2), Eng(f[pk], "Hz", 3), fr)
