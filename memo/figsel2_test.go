@@ -131,7 +131,7 @@ func TestResponseLeadIn(t *testing.T) {
 	if !(edge <= want*1.01 && edge >= want*0.9) {
 		t.Errorf("band edge %g kHz, the closed form gives %g kHz", edge, want)
 	}
-	for _, s := range []string{"The straight rise is the working band", "is the self-resonance (f_sr = 16.5 kHz, dotted)",
+	for _, s := range []string{"The straight rise is the working band", "is the self-resonance (16.5 kHz, dotted)",
 		"Above it the lumped R–L–C model no longer describes the winding"} {
 		if !strings.Contains(p, s) {
 			t.Errorf("prose lacks %q", s)
