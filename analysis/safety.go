@@ -133,8 +133,13 @@ func assessSafety(d calc.Design, r calc.Results, coils []CoilStudy) Safety {
 			add(ClassExceeded, Warning, cr.Temperature)
 		}
 		h := cr.Heat
+		// Within the class on its duty cycle but not energised continuously
+		// (a stuck driver): the time to the class is finite only where the
+		// continuous steady state settles at or above the class, or not at
+		// all (calc.ThermalProblem.TimeToReach), and a winding held past its
+		// class is damaged and a fire risk — a warning, as ClassExceeded.
 		if !(cr.Runaway || calc.Duty(co) >= 1 || math.IsNaN(h.TimeToLimit) || !(cr.Temperature <= co.InsulationClass)) {
-			add(ClassIfLeftOn, Caution, coils[i].Heat.Continuous.HotSpot)
+			add(ClassIfLeftOn, Warning, coils[i].Heat.Continuous.HotSpot)
 		}
 		if ts := coils[i].Heat.SurfaceMax; ts > HotSurface {
 			add(HotSurfaceFound, Caution, ts)

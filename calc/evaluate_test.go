@@ -87,7 +87,7 @@ func TestEvaluateSample(t *testing.T) {
 			"Heat.Cycle.AveragePow", "Switch.Spike", "Switch.SpikeWorst", "AC.Reactance", "AC.Impedance", "AC.Phase", "AC.Current",
 			"AC.Voltage", "AC.SkinDepth", "GradientForce", "Heat.TimeToLimit",
 			// current drive without a driver rating: no clamp to size a resistor for
-			"Switch.Clamp", "Switch.Resistor", "Switch.ResistorDecay", "Switch.ResistorTime10", "Switch.ResistorEnergy", "Switch.ResistorDecayCold", "Switch.ResistorEnergyWorst",
+			"Switch.Clamp", "Switch.ResistorMax", "Switch.Resistor", "Switch.ResistorDecay", "Switch.ResistorTime10", "Switch.ResistorEnergy", "Switch.ResistorDecayCold", "Switch.ResistorEnergyWorst",
 			// no driver rating: no margin to it
 			"Switch.RatingMargin"} {
 			allowed[n+"."+f] = true

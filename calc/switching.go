@@ -15,7 +15,9 @@ import "math"
 //     (plus a diode drop) and the current decays through the coil's own
 //     resistance with τ = L/R, to 10 % in τ ln 10;
 //   - a diode with a series resistor R_s: the switch sees the supply plus
-//     I·R_s, so R_s = (V_max − V_supply)/I keeps it at a permitted V_max,
+//     I·R_s, so R_s ≤ (V_max − V_supply)/I keeps it within a permitted
+//     V_max; the standard value fitted is the E12 value at or below that
+//     maximum (E12AtOrBelow), which leaves the switch a margin below V_max,
 //     and the current decays with τ = L/(R + R_s), the resistor taking the
 //     share R_s/(R + R_s) of the stored energy ½ L I².
 //
@@ -51,11 +53,15 @@ type SwitchResult struct {
 	ClampFromRating bool
 	// Freewheel diode: decay time constant L/R and time to 10 %.
 	DiodeDecay, DiodeTime10 float64
-	// Resistor–diode: series resistor R_s (NaN when the clamp is not above
-	// the supply), sized at WorstCurrent; its decay time constant and time
-	// to 10 % and the energy it absorbs when opened at the operating point
+	// Resistor–diode: ResistorMax is the largest series resistor that
+	// keeps the switch within the clamp at WorstCurrent, (Clamp −
+	// Supply)/WorstCurrent (NaN when the clamp is not above the supply),
+	// and Resistor the standard one fitted, the E12 value at or below it
+	// (E12AtOrBelow); with Resistor: its decay time constant and time to
+	// 10 % and the energy it absorbs when opened at the operating point
 	// (R, I); and, opened cold at the worst current, the (slower) decay
 	// L/(R_w + R_s) and the energy ½ L I_w² R_s/(R_w + R_s).
+	ResistorMax                                             float64
 	Resistor, ResistorDecay, ResistorTime10, ResistorEnergy float64
 	ResistorDecayCold, ResistorEnergyWorst                  float64
 
@@ -66,7 +72,8 @@ type SwitchResult struct {
 	WorstCurrent, SpikeWorst, EnergyWorst float64
 	// SwitchVoltage is the voltage, V, across the opening switch at
 	// WorstCurrent with the suggested suppression: Supply + I·R_s with the
-	// resistor–diode path (the clamp, by construction), the supply alone
+	// resistor–diode path and the E12 resistor (at most the clamp, by
+	// construction), the supply alone
 	// with a bare freewheeling diode when no clamp above the supply is
 	// known; NaN when nothing is known.
 	SwitchVoltage float64
@@ -92,16 +99,16 @@ func Switching(L, R, I, V, tOff, rating float64, stated bool) SwitchResult {
 // SwitchingWorst is Switching with the suppression sized at the worst
 // current Iw (A) the switch may open, the winding then at resistance Rw
 // (Ω, the cold one): the unsuppressed spike L·Iw/t_off + V (SpikeWorst;
-// Spike stays at the operating current I), the resistor
-// R_s = (V_max − V)/Iw, its cold decay L/(Rw + R_s) and energy ½ L Iw² ·
-// R_s/(Rw + R_s), and the switch voltage V + Iw·R_s compared with the
-// rating. The time constant, rise time, freewheeling decay and the
+// Spike stays at the operating current I), the largest resistor
+// (V_max − V)/Iw and the E12 resistor R_s at or below it, its cold decay
+// L/(Rw + R_s) and energy ½ L Iw² · R_s/(Rw + R_s), and the switch
+// voltage V + Iw·R_s compared with the rating. The time constant, rise time, freewheeling decay and the
 // resistor's decay and energy at the operating point are those of (R, I). A worst current below I, or not a number, is
 // replaced by I.
 func SwitchingWorst(L, R, Rw, I, Iw, V, tOff, rating float64, stated bool) SwitchResult {
 	n := math.NaN()
 	s := SwitchResult{TimeConstant: n, RiseTime: n, Energy: n, Supply: math.Abs(V), Spike: n, Clamp: n,
-		DiodeDecay: n, DiodeTime10: n, Resistor: n, ResistorDecay: n, ResistorTime10: n, ResistorEnergy: n,
+		DiodeDecay: n, DiodeTime10: n, ResistorMax: n, Resistor: n, ResistorDecay: n, ResistorTime10: n, ResistorEnergy: n,
 		SwitchVoltage: n, RatingMargin: n, SpikeWorst: n, ResistorDecayCold: n, ResistorEnergyWorst: n}
 	I = math.Abs(I)
 	Iw = math.Abs(Iw)
@@ -130,15 +137,17 @@ func SwitchingWorst(L, R, Rw, I, Iw, V, tOff, rating float64, stated bool) Switc
 	case stated:
 		s.Clamp = 2 * s.Supply
 	}
-	if s.Clamp > s.Supply && Iw > 0 && Rw >= 0 {
-		s.Resistor = (s.Clamp - s.Supply) / Iw
+	if s.Clamp > s.Supply && Iw > 0 && Rw >= 0 && !math.IsNaN(E12AtOrBelow((s.Clamp-s.Supply)/Iw)) {
+		s.ResistorMax = (s.Clamp - s.Supply) / Iw
+		s.Resistor = E12AtOrBelow(s.ResistorMax)
 		s.ResistorDecay = L / (R + s.Resistor)
 		s.ResistorTime10 = math.Ln10 * s.ResistorDecay
 		s.ResistorEnergy = s.Energy * s.Resistor / (R + s.Resistor)
 		s.ResistorEnergyWorst = L * Iw * Iw / 2 * s.Resistor / (Rw + s.Resistor)
 		s.ResistorDecayCold = L / (Rw + s.Resistor)
-		// Supply + Iw·(Clamp − Supply)/Iw is the clamp; kept so against the
-		// last bit of rounding.
+		// At most Supply + Iw·(Clamp − Supply)/Iw, the clamp; kept so
+		// against the last bit of rounding when the maximum is itself an
+		// E12 value.
 		s.SwitchVoltage = math.Min(s.Supply+Iw*s.Resistor, s.Clamp)
 	} else if !math.IsNaN(s.Supply) && !math.IsInf(s.Supply, 0) && (Iw > 0 || I == 0) {
 		// A freewheeling diode alone: the switch sees the supply.

@@ -13,8 +13,14 @@ func TestSwitching(t *testing.T) {
 	checkRel(t, "90 % at t₉₀", 1-math.Exp(-s.RiseTime/s.TimeConstant), 0.9, 1e-15)
 	checkRel(t, "energy", s.Energy, 0.5*20e-3*1.5*1.5, 1e-15)
 	checkRel(t, "unsuppressed spike", s.Spike, 20e-3*1.5/10e-6+12, 1e-15)
-	// The resistor keeps the switch at the rating: supply + I R_s = 40 V.
-	checkRel(t, "clamped switch voltage", s.Supply+1.5*s.Resistor, 40, 1e-15)
+	// The largest resistor holds the switch at the rating: supply +
+	// I R_max = 40 V; the E12 resistor fitted at or below it, 18 Ω of
+	// 18.7 Ω (IEC 60063:2015, Table 1, E12 column; recalled from memory),
+	// holds it at 12 V + 1.5 A · 18 Ω = 39 V, 1 V within the rating.
+	checkRel(t, "clamped switch voltage at R_max", s.Supply+1.5*s.ResistorMax, 40, 1e-15)
+	checkRel(t, "E12 resistor", s.Resistor, 18, 0)
+	checkRel(t, "switch voltage with the E12 resistor", s.SwitchVoltage, 39, 1e-15)
+	checkRel(t, "margin to the rating", s.RatingMargin, 1, 1e-13)
 	if !s.ClampFromRating {
 		t.Error("the rating was given")
 	}
@@ -82,7 +88,16 @@ func TestValveSwitchingAtColdCurrent(t *testing.T) {
 	if !(s.SwitchVoltage <= 60) || !s.WithinRating || !(s.RatingMargin >= 0) {
 		t.Errorf("switch voltage %g V at %g A, rating 60 V (within %v)", s.SwitchVoltage, s.WorstCurrent, s.WithinRating)
 	}
-	checkRel(t, "R_s = (60 − 24) V / I_cold", s.Resistor, 36/s.WorstCurrent, 1e-12)
+	checkRel(t, "R_max = (60 − 24) V / I_cold", s.ResistorMax, 36/s.WorstCurrent, 1e-12)
+	// 80.8 Ω at most: the E12 value at or below it is 68 Ω (IEC 60063:2015,
+	// Table 1, E12 column; recalled from memory), and the switch then sees
+	// 24 V + 0.4457 A · 68 Ω = 54.3 V, 5.7 V within the rating.
+	checkRel(t, "E12 resistor", s.Resistor, 68, 0)
+	checkRel(t, "switch voltage with 68 Ω", s.SwitchVoltage, 24+s.WorstCurrent*68, 1e-15)
+	checkRel(t, "switch voltage, 54.3 V", s.SwitchVoltage, 54.3, 1e-3)
+	checkRel(t, "margin, 5.7 V", s.RatingMargin, 5.7, 1e-2)
+	checkRel(t, "decay with 68 Ω", s.ResistorDecay, cr.Inductance/(cr.RHot+68), 1e-15)
+	checkRel(t, "energy in 68 Ω", s.ResistorEnergy, s.Energy*68/(cr.RHot+68), 1e-15)
 	// The old sizing, at the hot current, would have exceeded the rating.
 	hotSized := 24 + s.WorstCurrent*36/cr.Current
 	if !(hotSized > 60) {
@@ -98,6 +113,7 @@ func TestValveSwitchingAtColdCurrent(t *testing.T) {
 	}
 	// Current drive: the imposed current is the worst.
 	i := SwitchingWorst(0.01, 10, 10, 0.5, 0.5, 5, 1e-5, 30, false)
-	checkRel(t, "current drive R_s", i.Resistor, 25/0.5, 1e-15)
-	checkRel(t, "current drive switch voltage", i.SwitchVoltage, 30, 1e-15)
+	checkRel(t, "current drive R_max", i.ResistorMax, 25/0.5, 1e-15)
+	checkRel(t, "current drive E12 resistor, 47 Ω of 50 Ω", i.Resistor, 47, 0)
+	checkRel(t, "current drive switch voltage", i.SwitchVoltage, 5+0.5*47, 1e-15)
 }

@@ -220,20 +220,23 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult) []Step {
 	steps = append(steps, Step{What: "Freewheeling diode across the coil: the switch sees about the supply; the current decays through the coil's own resistance to 10 %",
 		Symbolic: `t_{10} = \frac{L}{R} \ln 10`, Numbers: fmt.Sprintf(`%s \cdot \ln 10`, Q(s.DiodeDecay, "s", 3)), Result: Q(s.DiodeTime10, "s", 3)})
 	if !math.IsNaN(s.Resistor) {
-		vmax := "twice the supply, as no driver rating is stated"
+		vmax := "twice the supply, taken as the driver's limit"
 		if s.ClampFromRating {
 			vmax = "the stated driver rating"
 		}
+		rs := Q(s.Resistor, "Ω", 2) // an E12 value: two figures are exact
 		steps = append(steps,
-			Step{What: fmt.Sprintf("Diode with a series resistor Rₛ: the resistor that holds the switch at %s (%s) when it opens the largest current, the cold switch-on current I_c", Eng(s.Clamp, "V", 3), vmax),
-				Symbolic: `R_s = \frac{V_{\mathrm{max}} - V_s}{I_c}`,
-				Numbers:  fmt.Sprintf(`\frac{%s - %s}{%s}`, Q(s.Clamp, "V", 3), Q(s.Supply, "V", 3), Q(math.Abs(s.WorstCurrent), "A", 4)), Result: Q(s.Resistor, "Ω", 3)},
+			Step{What: fmt.Sprintf("Diode with a series resistor Rₛ: the largest resistor, the one that would hold the switch at %s (%s) when it opens the largest current, the cold switch-on current I_c", Eng(s.Clamp, "V", 3), vmax),
+				Symbolic: `R_{s,\max} = \frac{V_{\mathrm{max}} - V_s}{I_c}`,
+				Numbers:  fmt.Sprintf(`\frac{%s - %s}{%s}`, Q(s.Clamp, "V", 3), Q(s.Supply, "V", 3), Q(math.Abs(s.WorstCurrent), "A", 4)), Result: Q(s.ResistorMax, "Ω", 3)},
+			Step{What: "Resistor fitted: the standard value of the E12 series (IEC 60063) at or below the largest, so that the switch keeps a margin below its limit",
+				Symbolic: `R_s`, Numbers: Words("E12 value at or below") + `\ ` + Q(s.ResistorMax, "Ω", 3), Result: rs},
 			Step{What: switchRatingWords(s), Symbolic: `V_{sw} = V_s + I_c R_s`,
-				Numbers: fmt.Sprintf(`%s + %s \cdot %s`, Q(s.Supply, "V", 3), Q(math.Abs(s.WorstCurrent), "A", 4), Q(s.Resistor, "Ω", 3)), Result: Q(s.SwitchVoltage, "V", 3)},
+				Numbers: fmt.Sprintf(`%s + %s \cdot %s`, Q(s.Supply, "V", 3), Q(math.Abs(s.WorstCurrent), "A", 4), rs), Result: Q(s.SwitchVoltage, "V", 3)},
 			Step{What: "Decay to 10 % through the resistor and diode", Symbolic: `t_{10} = \frac{L}{R + R_s} \ln 10`,
-				Numbers: fmt.Sprintf(`\frac{%s}{%s + %s} \ln 10`, L, R, Q(s.Resistor, "Ω", 3)), Result: Q(s.ResistorTime10, "s", 3)},
+				Numbers: fmt.Sprintf(`\frac{%s}{%s + %s} \ln 10`, L, R, rs), Result: Q(s.ResistorTime10, "s", 3)},
 			Step{What: "Energy the resistor absorbs at each switch-off (the rest is spent in the coil's own resistance)", Symbolic: `W_{R_s} = W \frac{R_s}{R + R_s}`,
-				Numbers: fmt.Sprintf(`%s \cdot \frac{%s}{%s + %s}`, Q(s.Energy, "J", 3), Q(s.Resistor, "Ω", 3), R, Q(s.Resistor, "Ω", 3)), Result: Q(s.ResistorEnergy, "J", 3)})
+				Numbers: fmt.Sprintf(`%s \cdot \frac{%s}{%s + %s}`, Q(s.Energy, "J", 3), rs, R, rs), Result: Q(s.ResistorEnergy, "J", 3)})
 	}
 	return steps
 }
@@ -260,8 +263,8 @@ func suppressionText(co calc.Coil, cr calc.CoilResult) string {
 		Eng(math.Max(math.Abs(cr.Current), math.Abs(s.WorstCurrent)), "A", 3), Eng(s.Supply, "V", 3), Eng(s.DiodeTime10, "s", 3))
 	switch {
 	case !math.IsNaN(s.Resistor):
-		fmt.Fprintf(&b, "; where a faster release matters, a resistor of at most %s in series with the diode shortens the decay to %s while keeping the switch within %s (the diode drop of about 0.7 V is neglected).",
-			Eng(s.Resistor, "Ω", 3), Eng(s.ResistorTime10, "s", 3), Eng(s.Clamp, "V", 3))
+		fmt.Fprintf(&b, "; where a faster release matters, a resistor in series with the diode — at most %s; the E12 value %s is chosen — shortens the decay to %s and holds the switch at %s, within %s (the diode drop of about 0.7 V is neglected).",
+			Eng(s.ResistorMax, "Ω", 3), Eng(s.Resistor, "Ω", 2), Eng(s.ResistorTime10, "s", 3), Eng(s.SwitchVoltage, "V", 3), Eng(s.Clamp, "V", 3))
 	case math.IsNaN(s.Clamp):
 		b.WriteString(". A resistor in series with the diode would speed the decay; it is sized from the voltage the driver withstands, which is not given, so it is not sized here.")
 	default:
@@ -473,8 +476,8 @@ func switchOffCaution(f analysis.Finding, cr calc.CoilResult, name string) doc.C
 		resistor = "A resistor in series with the diode speeds the decay; it is sized from the voltage the driver withstands, which is not given."
 	}
 	if !math.IsNaN(s.Resistor) {
-		resistor = fmt.Sprintf("For a faster release, a resistor of at most %s in series with the diode keeps the switch within %s and shortens the decay to %s.",
-			Eng(s.Resistor, "Ω", 3), Eng(s.Clamp, "V", 3), Eng(s.ResistorTime10, "s", 3))
+		resistor = fmt.Sprintf("For a faster release, a resistor in series with the diode — at most %s; the E12 value %s is chosen — holds the switch at %s, within %s, and shortens the decay to %s.",
+			Eng(s.ResistorMax, "Ω", 3), Eng(s.Resistor, "Ω", 2), Eng(s.SwitchVoltage, "V", 3), Eng(s.Clamp, "V", 3), Eng(s.ResistorTime10, "s", 3))
 	}
 	return doc.Callout{Severity: doc.Caution, Title: "Switch-off voltage, " + name,
 		Spans: []doc.Span{{Text: templates.Text("caution-inductive", map[string]string{

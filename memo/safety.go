@@ -33,7 +33,7 @@ func Cautions(j *analysis.Study) []doc.Callout {
 					"Temperature": hotText(cr, f.Value), "Class": Eng(Celsius(co.InsulationClass), "°C", 3),
 					"Time": classTimeText(cr)})}}})
 		case analysis.ClassIfLeftOn:
-			out = append(out, doc.Callout{Severity: doc.Caution, Title: "Insulation class if left energised, " + name,
+			out = append(out, doc.Callout{Severity: severity(f.Severity), Title: "Insulation class if left energised, " + name,
 				Spans: []doc.Span{{Text: leftOnText(co, cr, j.Coils[f.Coil].Heat.Continuous)}}})
 		case analysis.HotSurfaceFound:
 			out = append(out, doc.Callout{Severity: doc.Caution, Title: "Hot surface, " + name,
@@ -129,6 +129,17 @@ func Cautions(j *analysis.Study) []doc.Callout {
 		out = append(out, doc.Callout{Severity: doc.Note, Title: t, Spans: []doc.Span{{Text: p}}})
 	}
 	return out
+}
+
+// severity is the callout severity of a finding's.
+func severity(s analysis.Severity) doc.Severity {
+	switch s {
+	case analysis.Warning:
+		return doc.Warning
+	case analysis.Caution:
+		return doc.Caution
+	}
+	return doc.Note
 }
 
 // mergeCautions gives one caution per hazard: the cautions of several

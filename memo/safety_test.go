@@ -1,6 +1,8 @@
 package memo
 
 import (
+	"bytes"
+	"os"
 	"strings"
 	"testing"
 
@@ -142,5 +144,32 @@ func TestSentences(t *testing.T) {
 	want := []string{"At 50 kHz the a.c. resistance is 2.5 times the d.c. one.", "3 V is e.g. Low.", "Done."}
 	if strings.Join(got, "|") != strings.Join(want, "|") {
 		t.Errorf("got %q, want %q", got, want)
+	}
+}
+
+// The valve actuator is within its class on its 25 % duty cycle, but left
+// energised its hottest point settles above the class (155 °C): a winding
+// held past its class is damaged and a fire risk, so the fault is a
+// WARNING — in the Safety section and in page 1's list — not a caution.
+func TestLeftEnergisedPastTheClassIsAWarning(t *testing.T) {
+	src, err := os.ReadFile("../examples/valve-actuator.md")
+	if err != nil {
+		t.Fatal(err)
+	}
+	j := mustEvaluate(t, string(src))
+	co, on := j.Spec.Design.Coils[0], j.Coils[0].Heat.Continuous
+	if !(j.Results.Coils[0].Temperature <= co.InsulationClass) || !(on.HotSpot > co.InsulationClass) {
+		t.Fatalf("the example no longer shows the case: %g K on the duty cycle, %g K continuously, class %g K",
+			j.Results.Coils[0].Temperature, on.HotSpot, co.InsulationClass)
+	}
+	if cs := Cautions(j); !hasCaution(cs, doc.Warning, "if left energised") || hasCaution(cs, doc.Caution, "if left energised") {
+		t.Errorf("left energised: %v", titles(cs))
+	}
+	var buf bytes.Buffer
+	if err := doc.WriteText(&buf, Document(j)); err != nil {
+		t.Fatal(err)
+	}
+	if !strings.Contains(buf.String(), "**WARNING **Insulation class if left energised") {
+		t.Error("page 1 does not list the left-energised fault as a WARNING")
 	}
 }

@@ -353,12 +353,17 @@ type CoilHeatSwitch struct {
 	// SwitchOffVoltageWorst is the spike at the largest current the switch
 	// may open (a voltage drive's cold switch-on current), V.
 	SwitchOffVoltageWorst Num `json:"switch_off_voltage_worst_V"`
-	SuppressionR          Num `json:"suppression_resistor_ohm"`
-	SkinDepth             Num `json:"skin_depth_m"`
-	Impedance             Num `json:"impedance_ohm"`
-	CurrentAC             Num `json:"current_ac_A"`
-	Force                 Num `json:"force_N"`
-	PairForce             Num `json:"pair_force_N"`
+	// SuppressionR is the largest resistor in series with the freewheeling
+	// diode that keeps the switch within its limit, Ω, and SuppressionE12
+	// the standard (E12) value at or below it that the memo sizes the
+	// suppression with.
+	SuppressionR   Num `json:"suppression_resistor_ohm"`
+	SuppressionE12 Num `json:"suppression_resistor_e12_ohm"`
+	SkinDepth      Num `json:"skin_depth_m"`
+	Impedance      Num `json:"impedance_ohm"`
+	CurrentAC      Num `json:"current_ac_A"`
+	Force          Num `json:"force_N"`
+	PairForce      Num `json:"pair_force_N"`
 }
 
 func coilHeatSwitch(co calc.Coil, cr calc.CoilResult) CoilHeatSwitch {
@@ -372,7 +377,7 @@ func coilHeatSwitch(co calc.Coil, cr calc.CoilResult) CoilHeatSwitch {
 		TimeToLimit: Num(h.TimeToLimit), CyclePeak: Num(format.Celsius(h.Cycle.PeakHot)), CycleTrough: Num(format.Celsius(h.Cycle.Trough)),
 		MomentCold: Num(h.ColdMoment), HeatCapacity: Num(h.HeatCapacity),
 		TimeConstant: Num(s.TimeConstant), RiseTime: Num(s.RiseTime), Energy: Num(s.Energy),
-		SwitchOffVoltage: Num(s.Spike), SwitchOffVoltageWorst: Num(s.SpikeWorst), SuppressionR: Num(s.Resistor),
+		SwitchOffVoltage: Num(s.Spike), SwitchOffVoltageWorst: Num(s.SpikeWorst), SuppressionR: Num(s.ResistorMax), SuppressionE12: Num(s.Resistor),
 		SkinDepth: Num(a.SkinDepth), Impedance: Num(a.Impedance), CurrentAC: Num(a.Current),
 		Force: Num(cr.GradientForce), PairForce: Num(pair),
 	}
