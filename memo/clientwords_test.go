@@ -187,3 +187,62 @@ func TestFilamentWordsFollowTheForms(t *testing.T) {
 		}
 	}
 }
+// Prose carries no notation source: no "A_eff" or "x_{1}" outside the
+// mathematics (paragraphs, cautions, table cells, captions and equation
+// descriptions). Checked over every example and figure-test design.
+func TestNoNotationInProse(t *testing.T) {
+	files, _ := filepath.Glob("../examples/*.md")
+	more, _ := filepath.Glob("../testdata/figures/*.md")
+	files = append(files, more...)
+	raw := regexp.MustCompile(`[A-Za-zα-ω]_[{A-Za-z0-9]|\\[a-z]+\{`)
+	for _, f := range files {
+		src, err := os.ReadFile(f)
+		if err != nil {
+			t.Fatal(err)
+		}
+		j, diags := evaluate(filepath.Base(f), src)
+		if len(diags) > 0 {
+			continue
+		}
+		var texts []string
+		spans := func(ss []doc.Span) {
+			for _, s := range ss {
+				if !s.Math && !s.Code {
+					texts = append(texts, s.Text)
+				}
+			}
+		}
+		var walk func(bs []doc.Block)
+		walk = func(bs []doc.Block) {
+			for _, b := range bs {
+				switch v := b.(type) {
+				case doc.Paragraph:
+					spans(v.Spans)
+				case doc.Callout:
+					spans(v.Spans)
+				case doc.List:
+					for _, it := range v.Items {
+						walk(it)
+					}
+				case doc.Table:
+					texts = append(texts, v.Caption)
+					for _, r := range v.Rows {
+						for _, c := range r {
+							texts = append(texts, c.Text)
+						}
+					}
+				case doc.Figure:
+					texts = append(texts, v.Caption)
+				case doc.Equation:
+					texts = append(texts, v.Description)
+				}
+			}
+		}
+		walk(Document(j).Blocks)
+		for _, s := range texts {
+			if m := raw.FindStringIndex(s); m != nil {
+				t.Errorf("%s: notation in prose: …%s…", filepath.Base(f), s[max(0, m[0]-40):min(len(s), m[1]+40)])
+			}
+		}
+	}
+}

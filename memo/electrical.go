@@ -206,7 +206,7 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult) []Step {
 		if cold := math.Abs(s.WorstCurrent); cold > math.Abs(cr.Current) {
 			// A voltage-driven coil switched off while still cold opens its
 			// larger switch-on current: the worst spike.
-			steps = append(steps, Step{What: fmt.Sprintf("Voltage across a switch that opens in %s with no suppression, at the cold switch-on current I_c (the worst case; at the hot current it is %s): the coil's L·di/dt on top of the supply Vₛ (%s)", Eng(s.SwitchOff, "s", 3), Eng(s.Spike, "V", 3), supply),
+			steps = append(steps, Step{What: fmt.Sprintf("Voltage across a switch that opens in %s with no suppression, at the cold switch-on current (the worst case; at the hot current it is %s): the coil's L·di/dt on top of the supply Vₛ (%s)", Eng(s.SwitchOff, "s", 3), Eng(s.Spike, "V", 3), supply),
 				Symbolic: `V_{sw} = \frac{L I_c}{t_{\mathrm{off}}} + V_s`,
 				Numbers:  fmt.Sprintf(`\frac{%s \cdot %s}{%s} + %s`, L, Q(cold, "A", 4), Q(s.SwitchOff, "s", 3), Q(s.Supply, "V", 3)),
 				Result:   Q(s.SpikeWorst, "V", 3)})
@@ -226,7 +226,7 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult) []Step {
 		}
 		rs := Q(s.Resistor, "Ω", 2) // an E12 value: two figures are exact
 		steps = append(steps,
-			Step{What: fmt.Sprintf("Diode with a series resistor Rₛ: the largest resistor, the one that would hold the switch at %s (%s) when it opens the largest current, the cold switch-on current I_c", Eng(s.Clamp, "V", 3), vmax),
+			Step{What: fmt.Sprintf("Diode with a series resistor Rₛ: the largest resistor, the one that would hold the switch at %s (%s) when it opens the largest current, the cold switch-on current", Eng(s.Clamp, "V", 3), vmax),
 				Symbolic: `R_{s,\max} = \frac{V_{\mathrm{max}} - V_s}{I_c}`,
 				Numbers:  fmt.Sprintf(`\frac{%s - %s}{%s}`, Q(s.Clamp, "V", 3), Q(s.Supply, "V", 3), Q(math.Abs(s.WorstCurrent), "A", 4)), Result: Q(s.ResistorMax, "Ω", 3)},
 			Step{What: "Resistor fitted: the standard value of the E12 series (IEC 60063) at or below the largest, so that the switch keeps a margin below its limit",
