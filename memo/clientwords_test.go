@@ -187,6 +187,7 @@ func TestFilamentWordsFollowTheForms(t *testing.T) {
 		}
 	}
 }
+
 // Prose carries no notation source: no "A_eff" or "x_{1}" outside the
 // mathematics (paragraphs, cautions, table cells, captions and equation
 // descriptions). Checked over every example and figure-test design.
