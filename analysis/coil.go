@@ -45,6 +45,10 @@ type CoilStudy struct {
 	Inductance InductanceParts
 	Heat       HeatParts
 	Kinds      CoilKinds // core, pick-up and a.c. figures (analysis/core.go)
+	// SwitchOff is the unsuppressed switch-off spike of a driven coil
+	// block, bounded by the switch's speed and by the winding's
+	// self-capacitance (analysis/switchoff.go).
+	SwitchOff SwitchOffParts
 }
 
 // StudyCoil is the CoilStudy of coil block co with results cr in the

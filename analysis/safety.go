@@ -126,7 +126,7 @@ func assessSafety(d calc.Design, r calc.Results, coils []CoilStudy) Safety {
 		}
 		if cr.Verdict.NoSolution || (cr.Runaway && !cr.Verdict.SettledAboveLimit) {
 			add(Runaway, Warning, cr.Temperature)
-			s.Findings = append(s.Findings, electricalFindings(i, co, cr)...)
+			s.Findings = append(s.Findings, electricalFindings(i, cr, coils[i].SwitchOff)...)
 			continue
 		}
 		if cr.Temperature > co.InsulationClass {
@@ -153,23 +153,22 @@ func assessSafety(d calc.Design, r calc.Results, coils []CoilStudy) Safety {
 		if math.Abs(cr.Voltage) > ELV {
 			add(HazardousVoltage, Warning, cr.Voltage)
 		}
-		s.Findings = append(s.Findings, electricalFindings(i, co, cr)...)
+		s.Findings = append(s.Findings, electricalFindings(i, cr, coils[i].SwitchOff)...)
 	}
 	s.Implant = implantReach(d, r, coils)
 	return s
 }
 
 // electricalFindings are the switch-off spike, at the stated switch-off
-// time or AssumedSwitchOff, when it passes ELV or the driver's rating (an
-// a.c. drive beyond the d.c. model is a validity flag, not a hazard).
-func electricalFindings(i int, co calc.Coil, cr calc.CoilResult) []Finding {
+// time or AssumedSwitchOff and held to the winding's capacitance-limited
+// peak where that is lower (SwitchOffParts.Peak), when it passes ELV or the
+// driver's rating (an a.c. drive beyond the d.c. model is a validity flag,
+// not a hazard).
+func electricalFindings(i int, cr calc.CoilResult, p SwitchOffParts) []Finding {
 	var out []Finding
 	s := cr.Switch
-	tOff, assumed := s.SwitchOff, false
-	if !(tOff > 0) {
-		tOff, assumed = AssumedSwitchOff, true
-	}
-	spike := switchVoltage(cr)
+	tOff, assumed := p.SwitchOff, p.Assumed
+	spike := p.Peak
 	bound := ELV
 	if s.ClampFromRating {
 		bound = math.Min(bound, s.Clamp)

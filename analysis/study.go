@@ -117,6 +117,7 @@ func Analyse(s *spec.Spec, o Options) *Study {
 	for i, c := range s.Design.Coils {
 		st.Coils = append(st.Coils, studyCoil(c, air.Coils[i], s.Design.Conditions, maps, o.MapNodes)) // the winding alone; the core in Kinds
 		st.Coils[i].Kinds = kinds[i]
+		st.Coils[i].SwitchOff = switchOffParts(c, st.Results.Coils[i], kinds[i].SelfCapacitance)
 		coreStudy(&st.Coils[i], c, &st.Results.Coils[i], kinds[i].Core, o.MapNodes) // the core in the field figures: analysis/core.go
 	}
 	st.Design = analyseDesign(s.Design, st.Results, o.MapNodes)

@@ -63,8 +63,8 @@ func (c *composer) coilSwitching(i int) {
 				Numbers:  fmt.Sprintf(`%s^2 \cdot %s`, Paren(Q(math.Abs(cr.Current), "A", 4)), Q(math.Abs(ip.Slope), "H/m", 4)),
 				Result:   Q(math.Abs(cr.PairForce), "N", 3)})
 		}
-		c.derive(switchingSteps(co, cr)...)
-		c.para(suppressionText(co, cr))
+		c.derive(switchingSteps(co, cr, &c.j.Coils[i])...)
+		c.para(suppressionText(co, cr, c.j.Coils[i].SwitchOff))
 		if cr.AC.Frequency > 0 {
 			c.derive(acSteps(co, cr)...)
 			c.para(acText(co, cr, c.j.Coils[i].Kinds))
@@ -183,8 +183,10 @@ func selfInductanceSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStud
 }
 
 // switchingSteps derive the time constant, rise time, energy, the
-// unsuppressed switch-off voltage and the suppression figures.
-func switchingSteps(co calc.Coil, cr calc.CoilResult) []Step {
+// unsuppressed switch-off voltage and the suppression figures; with the
+// coil's study cs (nil: not derived) also the winding's self-capacitance
+// and the bound it sets on the unsuppressed spike (ringingSteps).
+func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []Step {
 	s := cr.Switch
 	L, R, I := Q(cr.Inductance, "H", 4), Q(cr.RHot, "Ω", 4), Q(math.Abs(cr.Current), "A", 4)
 	var steps []Step
@@ -217,6 +219,9 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult) []Step {
 				Result:   Q(s.Spike, "V", 3)})
 		}
 	}
+	if cs != nil {
+		steps = append(steps, ringingSteps(co, cr, cs)...)
+	}
 	steps = append(steps, Step{What: "Freewheeling diode across the coil: the switch sees about the supply; the current decays through the coil's own resistance to 10 %",
 		Symbolic: `t_{10} = \frac{L}{R} \ln 10`, Numbers: fmt.Sprintf(`%s \cdot \ln 10`, Q(s.DiodeDecay, "s", 3)), Result: Q(s.DiodeTime10, "s", 3)})
 	if !math.IsNaN(s.Resistor) {
@@ -241,23 +246,60 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult) []Step {
 	return steps
 }
 
-// worstSpike is the unsuppressed switch-off spike at the largest current
-// the switch may open (the cold switch-on current of a voltage drive).
-func worstSpike(s calc.SwitchResult) float64 {
-	if !math.IsNaN(s.SpikeWorst) {
-		return s.SpikeWorst
+// ringingSteps derive the winding's self-capacitance and the most an
+// unsuppressed switch can see however fast it opens, the energy stored at
+// the current it opens passing into that capacitance
+// (analysis.SwitchOffParts), and say whether that bound or the switch's
+// speed governs; none where the self-capacitance is not modelled.
+func ringingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []Step {
+	p := cs.SwitchOff
+	if math.IsNaN(p.Ringing) {
+		return nil
 	}
-	return s.Spike
+	s := cr.Switch
+	Ic, at := `I`, "½ L I² at full current"
+	if math.Abs(s.WorstCurrent) > math.Abs(cr.Current) {
+		Ic, at = `I_c`, "½ L I² at the cold switch-on current"
+	}
+	steps := capacitanceSteps(co, cs.Kinds.Capacitance) // memo/receiver.go
+	steps = append(steps, Step{What: fmt.Sprintf("Peak across the winding however fast the switch opens: with the circuit open the current can only charge the winding's own capacitance, so the stored %s passes into ½ Cₛ V² (energy conservation; the winding's resistance damps the ringing, keeping the first peak a little below this)", at),
+		Symbolic: `V_{pk} = ` + Ic + ` \sqrt{\frac{L}{C_s}}`,
+		Numbers:  fmt.Sprintf(`%s \cdot \sqrt{\frac{%s}{%s}}`, Q(p.Current, "A", 4), Q(cr.Inductance, "H", 4), Q(p.Capacitance, "F", 3)),
+		Result:   Q(p.Ringing, "V", 3)})
+	tx := Eng(p.Crossover, "s", 3)
+	var what string
+	switch {
+	case p.Assumed:
+		what = fmt.Sprintf("The most an unsuppressed switch can see, however fast it opens; a switch opening in a time t longer than √(L Cₛ) = %s sees less, about L·I/t above the supply", tx)
+	case p.Bounded:
+		what = fmt.Sprintf("The most an unsuppressed switch can see: below the estimate for a switch that opens in %s, which is faster than √(L Cₛ) = %s, so this bound governs the spike", Eng(p.SwitchOff, "s", 3), tx)
+	default:
+		what = fmt.Sprintf("The most an unsuppressed switch can see, however fast it opens: above the estimate for a switch that opens in %s, slower than √(L Cₛ) = %s, so the switch's speed governs the spike", Eng(p.SwitchOff, "s", 3), tx)
+	}
+	return append(steps, Step{What: what, Symbolic: `V_{sw,\max} = V_s + V_{pk}`,
+		Numbers: fmt.Sprintf(`%s + %s`, Q(s.Supply, "V", 3), Q(p.Ringing, "V", 3)), Result: Q(p.RingingSwitch, "V", 3)})
 }
 
 // suppressionText is the suggested suppression in words.
-func suppressionText(co calc.Coil, cr calc.CoilResult) string {
+func suppressionText(co calc.Coil, cr calc.CoilResult, p analysis.SwitchOffParts) string {
 	s := cr.Switch
 	var b strings.Builder
-	if s.SwitchOff > 0 {
-		fmt.Fprintf(&b, "Unsuppressed, a switch opening in %s would see about %s. ", Eng(s.SwitchOff, "s", 3), Eng(worstSpike(s), "V", 3))
-	} else {
-		b.WriteString("No switch-off time is stated, so the unsuppressed spike is not estimated; it is L·I/t for a switch opening in t. ")
+	ring := !math.IsNaN(p.RingingSwitch)
+	switch {
+	case !p.Assumed && p.Bounded:
+		fmt.Fprintf(&b, "Unsuppressed, a switch opening in %s would see about %s: the winding's own capacitance holds the spike to that, below the %s that L·I/t alone would give. ",
+			Eng(p.SwitchOff, "s", 3), Eng(p.Peak, "V", 3), Eng(p.Ramp, "V", 3))
+	case !p.Assumed && ring:
+		fmt.Fprintf(&b, "Unsuppressed, a switch opening in %s would see about %s; however fast it opened, the winding's own capacitance would hold it to %s. ",
+			Eng(p.SwitchOff, "s", 3), Eng(p.Peak, "V", 3), Eng(p.RingingSwitch, "V", 3))
+	case !p.Assumed:
+		fmt.Fprintf(&b, "Unsuppressed, a switch opening in %s would see about %s. ", Eng(p.SwitchOff, "s", 3), Eng(p.Peak, "V", 3))
+	case ring:
+		fmt.Fprintf(&b, "The unsuppressed spike depends on how fast the switch opens: about L·I/t above the supply for a switch opening in t, and never more than about %s, where the winding's own capacitance takes up the stored energy (reached by a switch opening faster than %s). ",
+			Eng(p.RingingSwitch, "V", 3), Eng(p.Crossover, "s", 3))
+	default:
+		fmt.Fprintf(&b, "The unsuppressed spike depends on how fast the switch opens: about L·I/t above the supply for a switch opening in t, some %s for a fast semiconductor switch opening in %s. ",
+			Eng(p.Ramp, "V", 3), Eng(p.SwitchOff, "s", 1))
 	}
 	fmt.Fprintf(&b, "Suggested suppression: a freewheeling diode across the coil rated for at least %s continuous, which keeps the switch near the %s supply and lets the current decay to 10 %% in %s",
 		Eng(math.Max(math.Abs(cr.Current), math.Abs(s.WorstCurrent)), "A", 3), Eng(s.Supply, "V", 3), Eng(s.DiodeTime10, "s", 3))
@@ -266,7 +308,7 @@ func suppressionText(co calc.Coil, cr calc.CoilResult) string {
 		fmt.Fprintf(&b, "; where a faster release matters, a resistor in series with the diode — at most %s; the E12 value %s is chosen — shortens the decay to %s and holds the switch at %s, within %s (the diode drop of about 0.7 V is neglected).",
 			Eng(s.ResistorMax, "Ω", 3), Eng(s.Resistor, "Ω", 2), Eng(s.ResistorTime10, "s", 3), Eng(s.SwitchVoltage, "V", 3), Eng(s.Clamp, "V", 3))
 	case math.IsNaN(s.Clamp):
-		b.WriteString(". A resistor in series with the diode would speed the decay; it is sized from the voltage the driver withstands, which is not given, so it is not sized here.")
+		b.WriteString(". A resistor Rₛ in series with the diode would speed the decay; the switch then sees the supply plus I·Rₛ, so Rₛ is at most (Vₘₐₓ − Vₛ)/I for a driver that withstands Vₘₐₓ, and the E12 value at or below that is fitted.")
 	default:
 		b.WriteString(".")
 	}
@@ -463,17 +505,21 @@ func switchRatingWords(s calc.SwitchResult) string {
 
 // switchOffCaution words the finding of an unsuppressed switch-off spike
 // with the remedies the analysis sized.
-func switchOffCaution(f analysis.Finding, cr calc.CoilResult, name string) doc.Callout {
+func switchOffCaution(f analysis.Finding, cr calc.CoilResult, p analysis.SwitchOffParts, name string) doc.Callout {
 	s := cr.Switch
-	spike := fmt.Sprintf("No switch-off time is stated; a semiconductor switch opening in about %s with no suppression would see about %s.", Eng(f.SwitchOff, "s", 1), Eng(f.Value, "V", 3))
+	spike := fmt.Sprintf("A fast semiconductor switch, opening in about %s with no suppression, would see about %s", Eng(f.SwitchOff, "s", 1), Eng(f.Value, "V", 3))
 	if !f.Assumed {
-		spike = fmt.Sprintf("A switch that opens in %s with no suppression would see about %s.", Eng(f.SwitchOff, "s", 3), Eng(f.Value, "V", 3))
+		spike = fmt.Sprintf("A switch that opens in %s with no suppression would see about %s", Eng(f.SwitchOff, "s", 3), Eng(f.Value, "V", 3))
 	}
+	if p.Bounded {
+		spike += fmt.Sprintf(", the most the winding's own capacitance allows as it takes up the stored energy (L·I/t alone would give %s)", Eng(p.Ramp, "V", 3))
+	}
+	spike += "."
 	diode := fmt.Sprintf("A freewheeling diode across the coil, rated for at least %s, keeps the switch near the %s supply; the current then decays to 10 %% in %s.",
 		Eng(math.Max(math.Abs(cr.Current), math.Abs(s.WorstCurrent)), "A", 3), Eng(s.Supply, "V", 3), Eng(s.DiodeTime10, "s", 3))
 	resistor := ""
 	if math.IsNaN(s.Clamp) {
-		resistor = "A resistor in series with the diode speeds the decay; it is sized from the voltage the driver withstands, which is not given."
+		resistor = "A resistor Rₛ in series with the diode speeds the decay; the switch then sees the supply plus the current times Rₛ, so Rₛ is at most the driver's rating less the supply, divided by the current."
 	}
 	if !math.IsNaN(s.Resistor) {
 		resistor = fmt.Sprintf("For a faster release, a resistor in series with the diode — at most %s; the E12 value %s is chosen — holds the switch at %s, within %s, and shortens the decay to %s.",

@@ -700,7 +700,7 @@ func torqueAngleText(cond calc.Conditions, theta float64) string {
 	case cond.DesignAngleStated:
 		return "at the stated design angle of " + deg
 	case cond.BackgroundMagnitudeOnly:
-		return "at the design angle of " + deg + " (taken, as the field's direction is not given)"
+		return "at the design angle of " + deg + ", taken for a field of unknown direction,"
 	}
 	return "at the angle between moment and field as designed, " + deg + ","
 }

@@ -289,7 +289,7 @@ func (c *composer) worstDerivation(wc *analysis.WorstCase) {
 	c.derive(steps...)
 	c.derive(coilSteps(co, cr, &cs)...) // resistance, temperature, current, power, moment, field
 	if cr.Switch.SwitchOff > 0 {
-		c.derive(switchingSteps(co, cr)...)
+		c.derive(switchingSteps(co, cr, nil)...) // the corner's L·I/t_off, as its limit is judged
 	}
 }
 

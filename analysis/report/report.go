@@ -240,6 +240,9 @@ func Build(j *analysis.Study) Report {
 			DipoleAny1: Num(cr.Dipole.Any1), DipoleAny01: Num(cr.Dipole.Any01),
 			CoilHeatSwitch: coilHeatSwitch(co, cr),
 		})
+		if i < len(j.Coils) {
+			rep.Coils[len(rep.Coils)-1].SwitchOffCapacitanceLimit = Num(j.Coils[i].SwitchOff.RingingSwitch)
+		}
 		coilKinds(j, i, &rep.Coils[len(rep.Coils)-1])
 		if co.Form == calc.Pair {
 			p := cr.Pair
@@ -353,6 +356,12 @@ type CoilHeatSwitch struct {
 	// SwitchOffVoltageWorst is the spike at the largest current the switch
 	// may open (a voltage drive's cold switch-on current), V.
 	SwitchOffVoltageWorst Num `json:"switch_off_voltage_worst_V"`
+	// SwitchOffCapacitanceLimit is the most the unsuppressed switch can
+	// see however fast it opens, the supply plus the winding's
+	// capacitance-limited peak I √(L/C_s) at that largest current, V
+	// (analysis.SwitchOffParts.RingingSwitch; null where the
+	// self-capacitance is not modelled or no current flows).
+	SwitchOffCapacitanceLimit Num `json:"switch_off_voltage_capacitance_limit_V"`
 	// SuppressionR is the largest resistor in series with the freewheeling
 	// diode that keeps the switch within its limit, Ω, and SuppressionE12
 	// the standard (E12) value at or below it that the memo sizes the
@@ -377,7 +386,7 @@ func coilHeatSwitch(co calc.Coil, cr calc.CoilResult) CoilHeatSwitch {
 		TimeToLimit: Num(h.TimeToLimit), CyclePeak: Num(format.Celsius(h.Cycle.PeakHot)), CycleTrough: Num(format.Celsius(h.Cycle.Trough)),
 		MomentCold: Num(h.ColdMoment), HeatCapacity: Num(h.HeatCapacity),
 		TimeConstant: Num(s.TimeConstant), RiseTime: Num(s.RiseTime), Energy: Num(s.Energy),
-		SwitchOffVoltage: Num(s.Spike), SwitchOffVoltageWorst: Num(s.SpikeWorst), SuppressionR: Num(s.ResistorMax), SuppressionE12: Num(s.Resistor),
+		SwitchOffVoltage: Num(s.Spike), SwitchOffVoltageWorst: Num(s.SpikeWorst), SwitchOffCapacitanceLimit: Num(math.NaN()), SuppressionR: Num(s.ResistorMax), SuppressionE12: Num(s.Resistor),
 		SkinDepth: Num(a.SkinDepth), Impedance: Num(a.Impedance), CurrentAC: Num(a.Current),
 		Force: Num(cr.GradientForce), PairForce: Num(pair),
 	}
