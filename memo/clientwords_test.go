@@ -123,25 +123,15 @@ func TestGradientSymbolFollowsTheAxis(t *testing.T) {
 // "settled" beside a 45.0 °C level. Checked over every example and
 // figure-test design.
 func TestSettledWarmUpEndsAtTheLevel(t *testing.T) {
-	files, _ := filepath.Glob("../examples/*.md")
-	more, _ := filepath.Glob("../testdata/figures/*.md")
-	files = append(files, more...)
+	files := designFiles(t)
 	lead := regexp.MustCompile(`warm-up of coil "([^"]*)": energised continuously, its hottest point climbs from [^ ]+ °C to ([^ ]+ °C) in [^,]*, where it has settled`)
 	seen := 0
 	for _, f := range files {
-		src, err := os.ReadFile(f)
-		if err != nil {
-			t.Fatal(err)
-		}
-		j, diags := evaluate(filepath.Base(f), src)
-		if len(diags) > 0 {
+		j, text := memoOf(t, f, false)
+		if j == nil {
 			continue
 		}
-		var buf bytes.Buffer
-		if err := doc.WriteText(&buf, Document(j)); err != nil {
-			t.Fatal(err)
-		}
-		for _, m := range lead.FindAllStringSubmatch(buf.String(), -1) {
+		for _, m := range lead.FindAllStringSubmatch(text, -1) {
 			i := slices.IndexFunc(j.Spec.Design.Coils, func(co calc.Coil) bool { return co.Name == m[1] })
 			if i < 0 {
 				t.Fatalf("%s: no coil %q", f, m[1])
@@ -164,19 +154,7 @@ func TestFilamentWordsFollowTheForms(t *testing.T) {
 		{"../testdata/figures/rectangle.md", "Each rectangular turn is four straight filaments", "circular"},
 		{"../examples/bench-solenoid.md", "Each circular turn is a closed circular filament", "rectangular turn"},
 	} {
-		src, err := os.ReadFile(tc.file)
-		if err != nil {
-			t.Fatal(err)
-		}
-		j, diags := evaluate(filepath.Base(tc.file), src)
-		if len(diags) > 0 {
-			t.Fatal(diags)
-		}
-		var buf bytes.Buffer
-		if err := doc.WriteText(&buf, Document(j)); err != nil {
-			t.Fatal(err)
-		}
-		text := buf.String()
+		_, text := memoOf(t, tc.file, true)
 		a := strings.Index(text, "## 4 Assumptions")
 		f := strings.Index(text, "superposed.")
 		if a < 0 || f < 0 {
@@ -193,17 +171,11 @@ func TestFilamentWordsFollowTheForms(t *testing.T) {
 // mathematics (paragraphs, cautions, table cells, captions and equation
 // descriptions). Checked over every example and figure-test design.
 func TestNoNotationInProse(t *testing.T) {
-	files, _ := filepath.Glob("../examples/*.md")
-	more, _ := filepath.Glob("../testdata/figures/*.md")
-	files = append(files, more...)
+	files := designFiles(t)
 	raw := regexp.MustCompile(`[A-Za-zα-ω]_[{A-Za-z0-9]|\\[a-z]+\{`)
 	for _, f := range files {
-		src, err := os.ReadFile(f)
-		if err != nil {
-			t.Fatal(err)
-		}
-		j, diags := evaluate(filepath.Base(f), src)
-		if len(diags) > 0 {
+		j, _ := memoOf(t, f, false)
+		if j == nil {
 			continue
 		}
 		var texts []string

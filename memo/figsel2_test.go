@@ -1,7 +1,6 @@
 package memo
 
 import (
-	"bytes"
 	"math"
 	"os"
 	"path/filepath"
@@ -178,19 +177,7 @@ func TestDipoleTableWhereTheFarFieldServes(t *testing.T) {
 		file  string
 		table bool
 	}{{"../examples/bench-solenoid.md", false}, {"../examples/calibration-pair.md", false}, {"../examples/torque-coil.md", true}, {"../examples/torque-rod.md", true}, {"../testdata/figures/tilted-torquer.md", true}} {
-		src, err := os.ReadFile(tc.file)
-		if err != nil {
-			t.Fatal(err)
-		}
-		j, diags := evaluate(filepath.Base(tc.file), src)
-		if len(diags) > 0 {
-			t.Fatal(diags)
-		}
-		var buf bytes.Buffer
-		if err := doc.WriteText(&buf, Document(j)); err != nil {
-			t.Fatal(err)
-		}
-		text := buf.String()
+		_, text := memoOf(t, tc.file, true)
 		table := strings.Contains(text, "Table: Distance beyond which the point-dipole field")
 		sentence := strings.Contains(text, "to within 1 % beyond")
 		if table != tc.table || sentence == tc.table {

@@ -1,10 +1,14 @@
 package memo
 
 import (
+	"bytes"
+	"os"
+	"path/filepath"
 	"strings"
 	"testing"
 
 	"coilmemo/analysis"
+	"coilmemo/doc"
 	"coilmemo/spec"
 )
 
@@ -53,4 +57,38 @@ func TestRequirementsVerdict(t *testing.T) {
 			t.Errorf("%d, %d failed: %q, want %q", c.n, c.failed, got, c.want)
 		}
 	}
+}
+
+// designFiles are every example and figure-test design.
+func designFiles(t *testing.T) []string {
+	t.Helper()
+	files, _ := filepath.Glob("../examples/*.md")
+	more, _ := filepath.Glob("../testdata/figures/*.md")
+	if len(files) == 0 || len(more) == 0 {
+		t.Fatal("no example or figure-test designs")
+	}
+	return append(files, more...)
+}
+
+// memoOf is the study of the spec in file and its memo's text; nil and ""
+// for a spec that does not evaluate alone (one that needs its previous
+// revision's file), or a fatal error when must is set.
+func memoOf(t *testing.T, file string, must bool) (*analysis.Study, string) {
+	t.Helper()
+	src, err := os.ReadFile(file)
+	if err != nil {
+		t.Fatal(err)
+	}
+	j, diags := evaluate(filepath.Base(file), src)
+	if len(diags) > 0 {
+		if must {
+			t.Fatal(diags)
+		}
+		return nil, ""
+	}
+	var buf bytes.Buffer
+	if err := doc.WriteText(&buf, Document(j)); err != nil {
+		t.Fatal(err)
+	}
+	return j, buf.String()
 }
