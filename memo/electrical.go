@@ -50,26 +50,25 @@ func (c *composer) electrical() {
 // self-inductance, switching and drive figures.
 func (c *composer) coilSwitching(i int) {
 	co, cr := c.j.Spec.Design.Coils[i], c.j.Results.Coils[i]
-	{
-		c.derive(selfInductanceSteps(co, cr, &c.j.Coils[i])...)
-		if co.Form == calc.Pair && !math.IsNaN(cr.PairForce) && cr.PairForce != 0 {
-			how := "they attract"
-			if cr.PairForce > 0 {
-				how = "they repel"
-			}
-			ip := c.j.Coils[i].Inductance
-			c.derive(Step{What: fmt.Sprintf("Axial force between the two coils of the pair (%s): the current squared times the rate of change of their mutual inductance with the spacing s, ∂M/∂s = %s", how, Eng(ip.Slope, "H/m", 4)),
-				Symbolic: `|F| = I^2 \left| \frac{\partial M}{\partial s} \right|`,
-				Numbers:  fmt.Sprintf(`%s^2 \cdot %s`, Paren(Q(math.Abs(cr.Current), "A", 4)), Q(math.Abs(ip.Slope), "H/m", 4)),
-				Result:   Q(math.Abs(cr.PairForce), "N", 3)})
+	c.derive(selfInductanceSteps(co, cr, &c.j.Coils[i])...)
+	if co.Form == calc.Pair && !math.IsNaN(cr.PairForce) && cr.PairForce != 0 {
+		how := "they attract"
+		if cr.PairForce > 0 {
+			how = "they repel"
 		}
-		c.derive(switchingSteps(co, cr, &c.j.Coils[i])...)
-		c.para(suppressionText(co, cr, c.j.Coils[i].SwitchOff))
-		if cr.AC.Frequency > 0 {
-			c.derive(acSteps(co, cr)...)
-			c.para(acText(co, cr, c.j.Coils[i].Kinds))
-		}
+		ip := c.j.Coils[i].Inductance
+		c.derive(Step{What: fmt.Sprintf("Axial force between the two coils of the pair (%s): the current squared times the rate of change of their mutual inductance with the spacing s, ∂M/∂s = %s", how, Eng(ip.Slope, "H/m", 4)),
+			Symbolic: `|F| = I^2 \left| \frac{\partial M}{\partial s} \right|`,
+			Numbers:  fmt.Sprintf(`%s^2 \cdot %s`, Paren(Q(math.Abs(cr.Current), "A", 4)), Q(math.Abs(ip.Slope), "H/m", 4)),
+			Result:   Q(math.Abs(cr.PairForce), "N", 3)})
 	}
+	c.derive(switchingSteps(co, cr, &c.j.Coils[i])...)
+	c.para(suppressionText(co, cr, c.j.Coils[i].SwitchOff))
+	if cr.AC.Frequency > 0 {
+		c.derive(acSteps(co, cr)...)
+		c.para(acText(co, cr, c.j.Coils[i].Kinds))
+	}
+
 }
 
 // selfInductanceSteps derive the self-inductance by the method used for

@@ -109,31 +109,30 @@ func (c *composer) fieldTwin(i int) int {
 func (c *composer) coilField(i int) {
 	d := c.j.Spec.Design
 	r := c.j.Results
-	{
-		co, cr := d.Coils[i], r.Coils[i]
-		cs := &c.j.Coils[i]
-		f := figuresFor(c.j, i) // which figures: memo/figsel.go
-		c.crossSection(co, cr, cs, f)
-		if co.Form == calc.Pair {
-			c.pairRegion(co, cr, cs, i, f) // the pair's purpose first
-		}
-		switch f.Profile {
-		case boreProfile:
-			c.boreFigure(co, cs, i)
-		case pairProfile:
-			c.pairProfileFigure(co, cs)
-		case nearProfile:
-			c.nearFigure(co, cs, i)
-		default:
-			c.axisFigure(co, cr, cs)
-		}
-		pm := planeShown(c.j, i)
-		if pm != nil {
-			c.planeFigure(co, pm) // memo/plane.go
-		}
-		c.fieldMap(co, cr, cs, pm != nil)
-		c.dipoleDistances(co, cr, cs)
+	co, cr := d.Coils[i], r.Coils[i]
+	cs := &c.j.Coils[i]
+	f := figuresFor(c.j, i) // which figures: memo/figsel.go
+	c.crossSection(co, cr, cs, f)
+	if co.Form == calc.Pair {
+		c.pairRegion(co, cr, cs, i, f) // the pair's purpose first
 	}
+	switch f.Profile {
+	case boreProfile:
+		c.boreFigure(co, cs, i)
+	case pairProfile:
+		c.pairProfileFigure(co, cs)
+	case nearProfile:
+		c.nearFigure(co, cs, i)
+	default:
+		c.axisFigure(co, cr, cs)
+	}
+	pm := planeShown(c.j, i)
+	if pm != nil {
+		c.planeFigure(co, pm) // memo/plane.go
+	}
+	c.fieldMap(co, cr, cs, pm != nil)
+	c.dipoleDistances(co, cr, cs)
+
 }
 
 // mmNum is a length in millimetres to 0.01 mm without trailing zeros or
