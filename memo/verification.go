@@ -26,25 +26,90 @@ func (c *composer) verification() {
 		c.para("No independent check applies to this design's forms.")
 		return
 	}
+	groups := checkGroups(c.j.Checks)
 	var rows [][]doc.Cell
-	for _, k := range c.j.Checks {
-		st := doc.Pass
-		if !k.Pass {
-			st = doc.Fail
+	var shared []string
+	for _, g := range groups {
+		if len(g.coils) > 1 {
+			shared = append(shared, joinAnd(g.coils))
 		}
-		name := k.Name
-		if k.Coil != "" {
-			name = k.Coil + ": " + name
+		for _, r := range g.rows {
+			name := r[0].Text
+			if len(g.coils) > 0 {
+				name = joinAnd(g.coils) + ": " + name
+			}
+			rows = append(rows, append([]doc.Cell{{Text: name}}, r[1:]...))
 		}
-		rows = append(rows, []doc.Cell{
-			{Text: name}, {Text: k.Method + " → " + Eng(k.Value, k.Unit, 6)},
-			{Text: k.Reference + " → " + Eng(k.Expected, k.Unit, 6)},
-			{Text: Percent(k.RelDiff)}, {Text: Percent(k.Tolerance)},
-			{Text: st.String(), Status: st, Strong: true},
-		})
 	}
 	c.add(doc.Table{Caption: "Independent checks of this design's results (relative difference against tolerance)",
 		Header: []string{"Check", "This memo", "Independent", "Rel. diff.", "Tol.", "Status"}, Rows: rows,
 		Widths: []float64{1.5, 1.95, 1.95, 1.15, 1.15, 0.75},
 		Align:  []doc.Align{doc.Left, doc.Left, doc.Left, doc.Right, doc.Right, doc.Center}})
+	for _, names := range shared {
+		c.para(names + " give the same figures in every check, so their rows are written once.")
+	}
+}
+
+// checkGroup is the rows of one coil's checks (without the coil's name)
+// and every coil whose rows read the same; coils is empty for the
+// design's own checks.
+type checkGroup struct {
+	coils []string
+	rows  [][]doc.Cell
+}
+
+// checkGroups gathers the checks by coil, in the order the coils first
+// appear, and merges a coil whose rows print exactly as an earlier
+// coil's into that coil's group: like coils (a three-axis set) give one
+// set of rows naming them all.
+func checkGroups(ks []analysis.Check) []checkGroup {
+	var groups []checkGroup
+	at := map[string]int{}
+	for _, k := range ks {
+		st := doc.Pass
+		if !k.Pass {
+			st = doc.Fail
+		}
+		row := []doc.Cell{
+			{Text: k.Name}, {Text: k.Method + " → " + Eng(k.Value, k.Unit, 6)},
+			{Text: k.Reference + " → " + Eng(k.Expected, k.Unit, 6)},
+			{Text: Percent(k.RelDiff)}, {Text: Percent(k.Tolerance)},
+			{Text: st.String(), Status: st, Strong: true},
+		}
+		key := "\x00design"
+		if k.Coil != "" {
+			key = k.Coil
+		}
+		i, ok := at[key]
+		if !ok {
+			i = len(groups)
+			at[key] = i
+			g := checkGroup{}
+			if k.Coil != "" {
+				g.coils = []string{k.Coil}
+			}
+			groups = append(groups, g)
+		}
+		groups[i].rows = append(groups[i].rows, row)
+	}
+	var out []checkGroup
+	for _, g := range groups {
+		j := slices.IndexFunc(out, func(o checkGroup) bool {
+			return len(o.coils) > 0 && len(g.coils) > 0 && sameRows(o.rows, g.rows)
+		})
+		if j < 0 {
+			out = append(out, g)
+			continue
+		}
+		out[j].coils = append(out[j].coils, g.coils...)
+	}
+	return out
+}
+
+// sameRows reports whether two coils' check rows print the same, cell by
+// cell and status by status.
+func sameRows(a, b [][]doc.Cell) bool {
+	return slices.EqualFunc(a, b, func(x, y []doc.Cell) bool {
+		return slices.EqualFunc(x, y, func(p, q doc.Cell) bool { return p.Text == q.Text && p.Status == q.Status })
+	})
 }
