@@ -3,6 +3,7 @@ package fonts
 import (
 	"math"
 	"sync"
+	"sync/atomic"
 
 	"golang.org/x/image/font"
 	"golang.org/x/image/font/sfnt"
@@ -21,39 +22,63 @@ type GlyphMetrics struct {
 	OK bool
 }
 
+// denseRunes is the range of characters whose measured metrics a face
+// keeps in an array read without a lock: Latin, Greek, punctuation,
+// super- and subscripts, letterlike symbols, arrows and the mathematical
+// operators — nearly every character a memo sets.
+const denseRunes = 0x2400
+
 // faceMetrics caches one face's parsed font and measured characters.
 type faceMetrics struct {
-	mu   sync.Mutex
-	f    *sfnt.Font
-	upem float64
-	buf  sfnt.Buffer
-	m    map[rune]GlyphMetrics
+	family, style string
+	mu            sync.Mutex // guards f, buf and m
+	f             *sfnt.Font
+	upem          float64
+	buf           sfnt.Buffer
+	m             map[rune]GlyphMetrics
+	dense         [denseRunes]atomic.Pointer[GlyphMetrics]
 }
 
 var (
 	metricsOnce sync.Once
-	metricsBy   map[[2]string]*faceMetrics
+	metricsBy   []*faceMetrics
 )
 
 func loadMetrics() {
-	metricsBy = map[[2]string]*faceMetrics{}
 	for _, s := range All() {
 		f, err := sfnt.Parse(s.TTF)
 		if err != nil {
 			panic("fonts: embedded font " + s.Family + s.Style + ": " + err.Error())
 		}
-		metricsBy[[2]string{s.Family, s.Style}] = &faceMetrics{f: f, upem: float64(f.UnitsPerEm()), m: map[rune]GlyphMetrics{}}
+		metricsBy = append(metricsBy, &faceMetrics{family: s.Family, style: s.Style, f: f, upem: float64(f.UnitsPerEm()), m: map[rune]GlyphMetrics{}})
 	}
+}
+
+// face is the metrics of the embedded face family/style, nil if there is
+// none.
+func face(family, style string) *faceMetrics {
+	metricsOnce.Do(loadMetrics)
+	for _, fm := range metricsBy {
+		if fm.family == family && fm.style == style {
+			return fm
+		}
+	}
+	return nil
 }
 
 // Glyph returns the metrics of r in the embedded face family/style (as
 // Lookup names them); ok is false when there is no such face. Safe for
 // concurrent use; results are cached.
 func Glyph(family, style string, r rune) (g GlyphMetrics, ok bool) {
-	metricsOnce.Do(loadMetrics)
-	fm := metricsBy[[2]string{family, style}]
+	fm := face(family, style)
 	if fm == nil {
 		return GlyphMetrics{Advance: 600}, false
+	}
+	dense := r >= 0 && r < denseRunes
+	if dense {
+		if p := fm.dense[r].Load(); p != nil {
+			return *p, true
+		}
 	}
 	fm.mu.Lock()
 	defer fm.mu.Unlock()
@@ -75,5 +100,9 @@ func Glyph(family, style string, r rune) (g GlyphMetrics, ok bool) {
 		}
 	}
 	fm.m[r] = g
+	if dense {
+		kept := g
+		fm.dense[r].Store(&kept)
+	}
 	return g, true
 }
