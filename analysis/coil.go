@@ -201,6 +201,10 @@ type HeatParts struct {
 	RiseInner, RiseOuter, RiseLength float64
 	// BundleDiameter is a thin coil's heat-shedding tube diameter, m.
 	BundleDiameter float64
+	// AxisVertical says the coil's axis counts as vertical for natural
+	// convection (calc.AxisIsVertical: its own axis against the stated
+	// upward direction, else the design-wide orientation).
+	AxisVertical bool
 	// AirViscosity (m²/s), AirConductivity (W/(m·K)) and AirPrandtl are
 	// the air's properties at the film temperature (NaN without
 	// convection).
@@ -247,6 +251,7 @@ func heatParts(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, outer flo
 	hp := HeatParts{AirViscosity: n, AirConductivity: n, AirPrandtl: n, H: n, ContinuousTau: n, LossSlope: n}
 	w := cr.Winding
 	hp.RiseInner, hp.RiseOuter, hp.RiseLength = calc.RiseGeometry(co, w)
+	hp.AxisVertical = calc.AxisIsVertical(co, cond)
 	if w.Thin {
 		hp.BundleDiameter = calc.BundleDiameter(outer, w.TurnCount())
 	}

@@ -38,9 +38,10 @@ func (c *composer) assumptions() {
 		}
 		item(lead, false, text)
 	}
-	forms := map[string]bool{"Rect": false, "Round": false}
-	for _, co := range d.Coils {
+	forms := map[string]bool{"Rect": false, "Round": false, "Cored": false}
+	for i, co := range d.Coils {
 		forms[map[bool]string{true: "Rect", false: "Round"}[co.Form == calc.Rectangle]] = true
+		forms["Cored"] = forms["Cored"] || (i < len(c.j.Coils) && c.j.Coils[i].Kinds.Core != nil)
 	}
 	general("Filament model", templates.Text("assume-filament", forms))
 	if !c.receiverOnly() { // a pick-up coil is not heated
