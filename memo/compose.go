@@ -227,6 +227,13 @@ func (c *composer) verdict() doc.Paragraph {
 	} else if n := len(c.j.Checks); n > 0 {
 		s = append(s, doc.Span{Text: checksVerdict(c.j.Checks)})
 	}
+	for i, co := range c.j.Spec.Design.Coils {
+		if i < len(r.Coils) && i < len(c.j.Coils) {
+			if t := underfillText(co, &c.j.Coils[i]); t != "" {
+				s = append(s, doc.Span{Text: t + " "})
+			}
+		}
+	}
 	for _, t := range c.bandShortfalls() { // pick-up coils: receiver.go
 		s = append(s, doc.Span{Text: t, Strong: true}, doc.Span{Text: " "})
 	}

@@ -139,3 +139,32 @@ func memoText(t *testing.T, j *analysis.Study) string {
 	}
 	return buf.String()
 }
+
+// Page 1 says when a winding's turns fill less of its stated radial
+// build than it states, with the fill, for every such coil and no other.
+func TestUnderfillOnPageOne(t *testing.T) {
+	seen := 0
+	for _, f := range designFiles(t) {
+		j, _ := memoOf(t, f, false)
+		if j == nil {
+			continue
+		}
+		var b strings.Builder
+		for _, s := range (&composer{j: j}).verdict().Spans {
+			b.WriteString(s.Text)
+		}
+		page1 := b.String()
+		for i, co := range j.Spec.Design.Coils {
+			says := strings.Contains(page1, `The turns of coil "`+co.Name+`" fill only the inner`) && strings.Contains(page1, "fill factor")
+			if says != j.Coils[i].Underfilled {
+				t.Errorf("%s, coil %q: underfilled %v, page 1 says so %v", f, co.Name, j.Coils[i].Underfilled, says)
+			}
+			if j.Coils[i].Underfilled {
+				seen++
+			}
+		}
+	}
+	if seen == 0 {
+		t.Error("no design with an underfilled winding to check")
+	}
+}
