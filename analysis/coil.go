@@ -20,6 +20,15 @@ type CoilStudy struct {
 	// Placements the axial positions of the block's coils (two for a pair).
 	Envelope   calc.Envelope
 	Placements []float64
+	// Laid is the cross-section the turns occupy as laid
+	// (calc.LaidEnvelope): the Envelope, or its inner part when the turns
+	// do not fill the stated radial build. Underfilled says they fill
+	// less than UnderfillShare of it; LaidFill is the fill factor over
+	// the laid section (the conductor's share of Laid's area; NaN for a
+	// thin coil).
+	Laid        calc.Envelope
+	Underfilled bool
+	LaidFill    float64
 	// Depth is the winding's radial depth as laid out: the radial build,
 	// the bundle of a thin coil, or one wire of a single layer, m.
 	Depth float64
@@ -72,6 +81,12 @@ func studyCoil(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, maps mapC
 	}
 	cs.CentreSum = centreSum(co, w)
 	cs.Envelope = calc.WindingEnvelope(co, w)
+	cs.Laid = calc.LaidEnvelope(co, w)
+	cs.LaidFill = math.NaN()
+	if a := (cs.Laid.R1 - cs.Laid.R0) * (cs.Laid.Z1 - cs.Laid.Z0); !w.Thin && a > 0 {
+		cs.LaidFill = float64(w.TurnCount()) * cs.ConductorArea / a
+	}
+	cs.Underfilled = co.RadialBuild > 0 && !w.Thin && cs.Laid.R1-cs.Laid.R0 < UnderfillShare*(cs.Envelope.R1-cs.Envelope.R0)
 	cs.Placements = calc.Placements(co)
 	cs.Depth = co.RadialBuild
 	if cs.Depth == 0 {
@@ -83,10 +98,14 @@ func studyCoil(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, maps mapC
 	cs.Axis = profileOnAxis(co, cr, axisPoints)
 	cs.Map = maps.coilMap(co, cr, cs, grid)
 	cs.Pair = pairCurves(co, cr)
-	cs.Inductance = inductanceParts(co, cr, cs.Outer)
+	cs.Inductance = inductanceParts(co, cr, cs.Outer, cs.MeanRadius, cs.Laid.R1-cs.Laid.R0)
 	cs.Heat = heatParts(co, cr, cond, cs.Outer)
 	return cs
 }
+
+// UnderfillShare is the share of the stated radial build below which a
+// multilayer winding's turns count as not filling it.
+const UnderfillShare = 0.95
 
 // InductanceParts are the intermediate values of a coil block's
 // self-inductance derivation. L1 is the self-inductance of one coil (the
@@ -113,15 +132,21 @@ type InductanceParts struct {
 	// and B, and Wheeler's formula as the cross-check.
 	K2, Nagaoka, Sheet, RosaA, RosaB, Wheeler float64
 	// Multilayer: whether the turns were grouped into cells, and
-	// Wheeler's multilayer formula (NaN outside its range).
-	ByCells           bool
-	WheelerMultilayer float64
+	// Wheeler's multilayer formula (NaN outside its range), on the
+	// winding as laid: the turns' mean radius WheelerRadius and the depth
+	// of their layers WheelerBuild, m (the stated ones when the turns fill
+	// the stated build).
+	WheelerRadius, WheelerBuild float64
+	ByCells                     bool
+	WheelerMultilayer           float64
 }
 
-func inductanceParts(co calc.Coil, cr calc.CoilResult, outer float64) InductanceParts {
+// inductanceParts takes the turns' mean radius and the depth of their
+// layers as laid, m, for the multilayer cross-check.
+func inductanceParts(co calc.Coil, cr calc.CoilResult, outer, laidRadius, laidBuild float64) InductanceParts {
 	n := math.NaN()
 	ip := InductanceParts{L1: cr.Inductance, K2: n, Nagaoka: n, Sheet: n, RosaA: n, RosaB: n, Wheeler: n,
-		BundleRadius: n, WheelerMultilayer: n, Turn: n, SelfTerms: n, MeanMutual: n, Slope: n}
+		BundleRadius: n, WheelerMultilayer: n, WheelerRadius: n, WheelerBuild: n, Turn: n, SelfTerms: n, MeanMutual: n, Slope: n}
 	w := cr.Winding
 	if math.IsNaN(cr.Inductance) || w.TurnCount() == 0 {
 		return ip
@@ -168,7 +193,13 @@ func inductanceParts(co calc.Coil, cr calc.CoilResult, outer float64) Inductance
 		for _, ly := range w.Layers {
 			ip.SelfTerms += float64(len(ly.Z)) * calc.TurnSelfInductance(ly.Radius, co.Wire.Bare/2)
 		}
-		ip.WheelerMultilayer = calc.WheelerMultilayerInductance(a, l, co.RadialBuild, N)
+		// on the turns as laid: a winding that does not fill its stated
+		// build sits nearer the bore and is shallower than stated
+		ip.WheelerRadius, ip.WheelerBuild = a, co.RadialBuild
+		if laidRadius > 0 && laidBuild > 0 {
+			ip.WheelerRadius, ip.WheelerBuild = laidRadius, laidBuild
+		}
+		ip.WheelerMultilayer = calc.WheelerMultilayerInductance(ip.WheelerRadius, l, ip.WheelerBuild, N)
 	}
 	return ip
 }
@@ -201,6 +232,10 @@ type HeatParts struct {
 	RiseInner, RiseOuter, RiseLength float64
 	// BundleDiameter is a thin coil's heat-shedding tube diameter, m.
 	BundleDiameter float64
+	// AxisVertical says the coil's axis counts as vertical for natural
+	// convection (calc.AxisIsVertical: its own axis against the stated
+	// upward direction, else the design-wide orientation).
+	AxisVertical bool
 	// AirViscosity (m²/s), AirConductivity (W/(m·K)) and AirPrandtl are
 	// the air's properties at the film temperature (NaN without
 	// convection).
@@ -247,6 +282,7 @@ func heatParts(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, outer flo
 	hp := HeatParts{AirViscosity: n, AirConductivity: n, AirPrandtl: n, H: n, ContinuousTau: n, LossSlope: n}
 	w := cr.Winding
 	hp.RiseInner, hp.RiseOuter, hp.RiseLength = calc.RiseGeometry(co, w)
+	hp.AxisVertical = calc.AxisIsVertical(co, cond)
 	if w.Thin {
 		hp.BundleDiameter = calc.BundleDiameter(outer, w.TurnCount())
 	}

@@ -146,8 +146,9 @@ func assessSafety(d calc.Design, r calc.Results, coils []CoilStudy) Safety {
 		}
 		// The density rule of thumb only where the coil also runs warm: a
 		// small coil sheds its heat easily and the rule is conservative
-		// for it.
-		if J := math.Abs(cr.Density); J > calc.PracticeDensity && calc.Duty(co) >= 1 && co.InsulationClass-cr.Temperature < 50 {
+		// for it. It is a still-air rule for continuous duty: not in
+		// vacuum, nor on a duty cycle.
+		if J := math.Abs(cr.Density); J > calc.PracticeDensity && calc.Duty(co) >= 1 && !d.Conditions.Cooling.Vacuum && co.InsulationClass-cr.Temperature < 50 {
 			add(HighDensity, Note, J)
 		}
 		if math.Abs(cr.Voltage) > ELV {

@@ -150,8 +150,13 @@ type Conditions struct {
 	// winding to a mount held at the ambient temperature (0: no mount).
 	MountResistance float64
 	// AxisVertical says the coil axes are vertical (for natural
-	// convection); false: horizontal.
+	// convection); false: horizontal. It is the design-wide statement,
+	// used for every coil when Up is not given.
 	AxisVertical bool
+	// Up is the upward direction (against gravity) as a unit vector in
+	// the design's axes, when given (zero: not given); each coil's own
+	// axis then decides its orientation (see AxisIsVertical).
+	Up Vec
 }
 
 // Probe is a named point where the field is reported.

@@ -49,6 +49,21 @@ func WindingEnvelope(c Coil, w Winding) Envelope {
 	return Envelope{R0: rin, R1: rin + c.RadialBuild, Z0: -L / 2, Z1: L / 2}
 }
 
+// LaidEnvelope is the cross-section the turns of w occupy as laid: for a
+// multilayer winding the stated length from the bore outward over its
+// layers, LayerCount × the wire's outer diameter — less than the stated
+// radial build when the turns do not fill it; otherwise WindingEnvelope.
+func LaidEnvelope(c Coil, w Winding) Envelope {
+	e := WindingEnvelope(c, w)
+	if c.Form == Rectangle || w.Thin || c.RadialBuild <= 0 || w.LayerCount <= 0 {
+		return e
+	}
+	if d := float64(w.LayerCount) * WireOuter(c); d > 0 && d < e.R1-e.R0 {
+		e.R1 = e.R0 + d
+	}
+	return e
+}
+
 // Placements are the axial positions of a coil block's coils in its own
 // frame: ±spacing/2 for a pair, the centre otherwise, m.
 func Placements(c Coil) []float64 {

@@ -119,7 +119,7 @@ func WindingConductivity(c Coil) float64 {
 // the diameter 2(ℓ + b)/π whose perimeter equals the section's; any other
 // single- or multilayer coil is a horizontal cylinder of its outer
 // diameter when its axis is horizontal, and a vertical surface as high as
-// its winding length when the axis is vertical (Conditions.AxisVertical).
+// its winding length when the axis is vertical (AxisIsVertical).
 // The one correlation is applied to the coil's whole heat-shedding
 // surface. Nil when the data are missing.
 func ConvectionFor(c Coil, w Winding, cond Conditions) *NaturalConvection {
@@ -138,13 +138,38 @@ func ConvectionFor(c Coil, w Winding, cond Conditions) *NaturalConvection {
 	if b := ro - ri; math.Max(l, b) < c.MeanDiameter/4 {
 		return &NaturalConvection{Shape: HorizontalCylinder, Length: 2 * (l + b) / math.Pi, Ring: true}
 	}
-	if cond.AxisVertical {
+	if AxisIsVertical(c, cond) {
 		return &NaturalConvection{Shape: VerticalSurface, Length: l}
 	}
 	if !(ro > 0) {
 		return nil
 	}
 	return &NaturalConvection{Shape: HorizontalCylinder, Length: 2 * ro}
+}
+
+// VerticalWithin is the largest angle between a coil's axis and the
+// vertical, rad, at which the axis counts as vertical for natural
+// convection (45°: the axis is nearer the vertical than the horizontal).
+const VerticalWithin = math.Pi / 4
+
+// AxisIsVertical says whether coil c's axis counts as vertical for natural
+// convection: with Conditions.Up given, when the angle between the axis
+// (either sense) and the upward direction is at most VerticalWithin, so
+// that |a·u| ≥ cos 45°; without it, the design-wide
+// Conditions.AxisVertical.
+func AxisIsVertical(c Coil, cond Conditions) bool {
+	u := cond.Up
+	nu := math.Sqrt(u[0]*u[0] + u[1]*u[1] + u[2]*u[2])
+	if !(nu > 0) {
+		return cond.AxisVertical
+	}
+	a := c.Axis
+	na := math.Sqrt(a[0]*a[0] + a[1]*a[1] + a[2]*a[2])
+	if !(na > 0) {
+		a, na = Vec{0, 0, 1}, 1
+	}
+	cosine := math.Abs(a[0]*u[0]+a[1]*u[1]+a[2]*u[2]) / (na * nu)
+	return cosine >= math.Cos(VerticalWithin)-1e-12
 }
 
 // ColdTemperature returns the winding temperature, K, at switch-on: the

@@ -25,6 +25,9 @@ type Section struct {
 	// Core marks a soft-magnetic core's section, drawn in steel grey
 	// (draw it before the windings, which then lie over it).
 	Core bool
+	// Outline marks a section drawn as a dashed outline only, unfilled:
+	// a stated winding section the turns do not fill.
+	Outline bool
 }
 
 // MapData is a scalar field over a rectangular grid, for FieldMap.
@@ -484,6 +487,14 @@ func drawSection(c vg.Canvas, x0, y0, x1, y1 vg.Length, s Section) {
 		path.Line(vg.Point{X: x1, Y: y1})
 		path.Line(vg.Point{X: x0, Y: y1})
 		path.Close()
+	}
+	if s.Outline {
+		c.SetColor(CopperEdge)
+		c.SetLineWidth(vg.Points(0.5))
+		c.SetLineDash([]vg.Length{vg.Points(3), vg.Points(2)}, 0)
+		c.Stroke(path)
+		c.SetLineDash(nil, 0)
+		return
 	}
 	fill, edge := Copper, CopperEdge
 	if s.Core {

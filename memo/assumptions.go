@@ -38,9 +38,10 @@ func (c *composer) assumptions() {
 		}
 		item(lead, false, text)
 	}
-	forms := map[string]bool{"Rect": false, "Round": false}
-	for _, co := range d.Coils {
+	forms := map[string]bool{"Rect": false, "Round": false, "Cored": false}
+	for i, co := range d.Coils {
 		forms[map[bool]string{true: "Rect", false: "Round"}[co.Form == calc.Rectangle]] = true
+		forms["Cored"] = forms["Cored"] || (i < len(c.j.Coils) && c.j.Coils[i].Kinds.Core != nil)
 	}
 	general("Filament model", templates.Text("assume-filament", forms))
 	if !c.receiverOnly() { // a pick-up coil is not heated
@@ -141,9 +142,9 @@ func radialBuildFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d
 	R := co.MeanDiameter / 2
 	// A multilayer winding whose turns do not fill the stated radial build
 	// sits nearer the bore than its stated mean diameter says.
-	if co.RadialBuild > 0 && !w.Thin && w.LayerCount > 0 && co.Wire.Outer > 0 {
-		used := float64(w.LayerCount) * co.Wire.Outer
-		if used < 0.95*co.RadialBuild {
+	if cs.Underfilled {
+		used := cs.Laid.R1 - cs.Laid.R0
+		{
 			out = append(out, validity{what: "Radial build", flagged: true, text: fmt.Sprintf(
 				"the %d turns lie in %d layers %s deep, less than the stated radial build of %s; the turns' mean radius is %s against the stated %s. The resistance, field, moment and inductance are those of the turns as laid from the bore; the heat is taken to leave through the outside of the stated section (a former, potting or a loose outer layer filling it). A coil wound to fill the stated build would have more turns or a larger mean radius than these results assume.",
 				co.Turns, w.LayerCount, Eng(used, "m", 3), Eng(co.RadialBuild, "m", 3), Eng(cs.MeanRadius, "m", 4), Eng(R, "m", 4))})

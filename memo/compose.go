@@ -227,6 +227,13 @@ func (c *composer) verdict() doc.Paragraph {
 	} else if n := len(c.j.Checks); n > 0 {
 		s = append(s, doc.Span{Text: checksVerdict(c.j.Checks)})
 	}
+	for i, co := range c.j.Spec.Design.Coils {
+		if i < len(r.Coils) && i < len(c.j.Coils) {
+			if t := underfillText(co, &c.j.Coils[i]); t != "" {
+				s = append(s, doc.Span{Text: t + " "})
+			}
+		}
+	}
 	for _, t := range c.bandShortfalls() { // pick-up coils: receiver.go
 		s = append(s, doc.Span{Text: t, Strong: true}, doc.Span{Text: " "})
 	}
@@ -642,7 +649,11 @@ func (c *composer) purpose() {
 		}
 	}
 	if !prose {
-		c.para(templates.Text("purpose-default", nil))
+		var coils []string
+		for _, co := range c.j.Spec.Design.Coils {
+			coils = append(coils, fmt.Sprintf("coil %q (%s, %d turns, %s)", co.Name, analysis.FormName(co), co.Turns, wireName(co.Wire)))
+		}
+		c.para(templates.Text("purpose-default", map[string]string{"Coils": joinAnd(coils)}))
 		return
 	}
 	for _, b := range narrative {
@@ -655,11 +666,40 @@ func (c *composer) purpose() {
 	}
 }
 
+// drivenOnlyDefaults are the keys whose defaults serve only a driven
+// (heated, torque-making) coil: the insulation class and duty of a coil,
+// the cooling of the design and the angle its torque is reported at.
+var drivenOnlyDefaults = map[string]map[string]bool{
+	"coil":       {"insulation-class": true, "duty": true},
+	"conditions": {"cooling": true, "emissivity": true, "orientation": true, "design-angle": true},
+}
+
+// drivenOnlyDefault says whether default entry e serves only driven coils
+// where none it concerns is driven: a pick-up coil's insulation class and
+// duty, and the cooling of a design of pick-up coils only.
+func (c *composer) drivenOnlyDefault(e spec.Entry) bool {
+	if !drivenOnlyDefaults[e.Block][e.Key] {
+		return false
+	}
+	if e.Block == "conditions" {
+		return c.receiverOnly()
+	}
+	for _, co := range c.j.Spec.Design.Coils {
+		if co.Name == e.Coil {
+			return analysis.IsReceiver(co)
+		}
+	}
+	return false
+}
+
 func (c *composer) inputs() {
 	c.heading(1, "Inputs")
 	c.para(templates.Text("inputs", map[string]string{"File": c.j.Name})) // the base name: the bytes do not depend on the path typed
 	var rows [][]doc.Cell
 	for _, e := range c.j.Spec.Entries {
+		if e.Default && c.drivenOnlyDefault(e) {
+			continue
+		}
 		raw, line, si := e.Raw, fmt.Sprint(e.Line), format.SIText(e.SI)
 		if e.Default {
 			// a default or a value derived from others: no digits of the

@@ -55,7 +55,7 @@ func (c *composer) core() {
 					Symbolic: `B_{pk} = \mu_0 \max_j (H_j + M_j)`,
 					Numbers:  fmt.Sprintf(`\mu_0 \left(%s + %s\right)`, Q(r.PeakH, "A/m", 4), Q(r.PeakM, "A/m", 4)), Result: Q(r.FluxDensityPeak, "T", 4)})
 			if kc.Saturation > 0 {
-				steps = append(steps, Step{What: "Margin to saturation (of the core taken as never saturating)",
+				steps = append(steps, Step{What: "Margin to saturation: the peak flux density the core would carry at this current if it stayed linear, against its saturation flux density",
 					Symbolic: `1 - \frac{B_{lin}}{B_s}`, Numbers: fmt.Sprintf(`1 - \frac{%s}{%s}`, Q(r.FluxDensityLinear, "T", 4), Q(kc.Saturation, "T", 3)),
 					Result: N(r.SaturationMargin, 3)},
 					Step{What: "Current at which the core reaches saturation", Symbolic: `I_s = I \frac{B_s}{B_{lin}}`,

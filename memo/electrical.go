@@ -151,16 +151,20 @@ func selfInductanceSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStud
 			Symbolic: `L_1 = \sum_{i=1}^{N} \sum_{j=1}^{N} M_{ij} = \sum_{i} M_{ii} + \sum_{i \ne j} M_{ij}`,
 			Numbers:  fmt.Sprintf(`%s + %s`, Q(ip.SelfTerms, "H", 4), Q(L1-ip.SelfTerms, "H", 4)), Result: Q(L1, "H", 4)})
 		b := co.Length
-		cb := co.RadialBuild
 		if lw := ip.WheelerMultilayer; !math.IsNaN(lw) {
+			a, cb := ip.WheelerRadius, ip.WheelerBuild // the turns as laid
 			terms := []float64{6 * a, 9 * b, 10 * cb}
 			lo, hi := math.Min(terms[0], math.Min(terms[1], terms[2])), math.Max(terms[0], math.Max(terms[1], terms[2]))
 			rng := "its three terms 6a, 9b and 10c are comparable, so about 1 % is expected"
 			if hi > 3*lo {
 				rng = "its three terms 6a, 9b and 10c differ by more than a factor of 3, so its 1 % need not hold"
 			}
-			add(Step{What: fmt.Sprintf("Cross-check by Wheeler's multilayer formula (Wheeler, Proc. IRE 16, 1928; 0.8 a²N²/(6a + 9b + 10c) µH in inches; recalled from memory) with mean radius a, length b, radial build c: %s; it differs by %s %%",
-				rng, Sig(100*(lw/L1-1), 2)),
+			if 9*b > 3*(6*a+10*cb) {
+				// b ≫ a, c: 0.8 a²N²/(9b) against the long solenoid's a²N²/(10b)
+				rng += "; for a winding far longer than it is deep it tends to 8/9 of the long solenoid's μ0πa²N²/b, some 11 % low"
+			}
+			add(Step{What: fmt.Sprintf("Cross-check by Wheeler's multilayer formula (Wheeler, Proc. IRE 16, 1928; 0.8 a²N²/(6a + 9b + 10c) µH in inches; recalled from memory) with mean radius a, length b, radial build c%s: %s; it differs by %s %%",
+				laidWords(cs), rng, Sig(100*(lw/L1-1), 2)),
 				Symbolic: `L_W = \frac{31.50\,\unit{µH/m} \cdot a^2 N^2}{6a + 9b + 10c}`,
 				Numbers:  fmt.Sprintf(`\frac{31.50\,\unit{µH/m} \cdot %s^2 \cdot %d^2}{6 \cdot %s + 9 \cdot %s + 10 \cdot %s}`, Paren(Q(a, "m", 4)), n, Q(a, "m", 4), Q(b, "m", 4), Q(cb, "m", 4)),
 				Result:   Q(lw, "H", 4)})

@@ -192,6 +192,11 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 	coreS, coreDims, coreDesc := coreSketch(co, cs, false) // the core, drawn under the winding: memo/core.go
 	sd.Sections = append(sd.Sections, coreS...)
 	for _, z := range cs.Placements {
+		if cs.Underfilled { // the stated section in outline, the turns as laid in copper: memo/underfill.go
+			sd.Sections = append(sd.Sections, figures.Section{X0: z + e.Z0, X1: z + e.Z1, Y0: e.R0, Y1: e.R1, Outline: true},
+				figures.Section{X0: z + e.Z0, X1: z + e.Z1, Y0: cs.Laid.R0, Y1: cs.Laid.R1})
+			continue
+		}
 		sd.Sections = append(sd.Sections, figures.Section{X0: z + e.Z0, X1: z + e.Z1, Y0: e.R0, Y1: e.R1, Round: e.Round})
 	}
 	rm := co.MeanDiameter / 2
@@ -216,9 +221,10 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 			figures.Dimension{Kind: figures.Radial, A: e.R0, B: e.R1, Label: mmText(co.RadialBuild)})
 		desc = fmt.Sprintf("%d turns in %d layers of up to %d turns, %s long with a radial build of %s",
 			co.Turns, w.LayerCount, w.TurnsPerLayer, mmText(e.Z1-e.Z0), mmText(co.RadialBuild))
-		if used := float64(w.LayerCount) * co.Wire.Outer; co.Wire.Outer > 0 && used < 0.95*co.RadialBuild {
-			// The same test as the Radial build assumption's flag.
-			desc += fmt.Sprintf(", of which the turns fill the inner %s", mmText(used))
+		if cs.Underfilled {
+			used := cs.Laid.R1 - cs.Laid.R0
+			sd.Dimensions[len(sd.Dimensions)-1].Label += ", turns " + mmText(used) // the radial build's
+			desc += fmt.Sprintf(", of which the turns fill the inner %s (drawn in copper; the rest of the stated section in dashed outline)", mmText(used))
 		}
 	}
 	sd.Dimensions = append(sd.Dimensions, coreDims...)

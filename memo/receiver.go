@@ -433,7 +433,7 @@ func (c *composer) receiverSummary() doc.Table {
 			return fmt.Sprintf("%s (%s to %s)", Eng(rec(i).BandNoiseField, "T", 3), Eng(co.BandLow, "Hz", 3), Eng(co.BandHigh, "Hz", 3))
 		}),
 		row("Self-resonance, with the load", func(i int) string { return orDash(rec(i).SelfResonance, "Hz", 3) }),
-		row("Working band: sensitivity within 10 % of 2π f A (A the effective area)", func(i int) string {
+		row("Working band: sensitivity within 10 % of 2π f A", func(i int) string {
 			switch top := rec(i).WorkingBandTop; {
 			case math.IsNaN(top):
 				return "—"

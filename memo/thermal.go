@@ -40,22 +40,13 @@ func (c *composer) heating() {
 	case cool.HGiven:
 		env = templates.Text("heating-given-h", map[string]string{"H": Eng(cool.H, "W/(m²·K)", 3), "Emissivity": Sig(cool.Emissivity, 2)})
 	default:
-		orient := "horizontal"
-		if d.Conditions.AxisVertical {
-			orient = "vertical"
-		}
 		shapes, n := c.convectionShapes()
-		sits, axes := "The coils sit", "their axes"
-		if len(c.drivenCoils()) == 1 {
-			sits, axes = "The coil sits", "its axis"
-		}
 		plural, singular := "s", ""
 		if n == 1 {
 			plural, singular = "", "s"
 		}
-		env = templates.Text("heating-still-air", map[string]string{"Emissivity": Sig(cool.Emissivity, 2), "Orientation": orient,
-			"RaMax": "10¹²", "Table": calc.AirTableSource, "Shapes": shapes,
-			"Sits": sits, "Axes": axes, "Plural": plural, "Singular": singular})
+		env = templates.Text("heating-still-air", map[string]string{"Emissivity": Sig(cool.Emissivity, 2), "Placement": c.stillAirPlacement(),
+			"RaMax": "10¹²", "Table": calc.AirTableSource, "Shapes": shapes, "Plural": plural, "Singular": singular})
 	}
 	c.para(env)
 	if R := d.Conditions.MountResistance; R > 0 {
@@ -155,15 +146,7 @@ func convectionSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, c
 	if nc := tp.Convection; nc != nil {
 		cs := st.Convection
 		nu, k, pr := hp.AirViscosity, hp.AirConductivity, hp.AirPrandtl
-		shape := "horizontal cylinder of diameter"
-		switch {
-		case nc.Shape == calc.VerticalSurface:
-			shape = "vertical surface of height"
-		case nc.Ring:
-			shape = "ring-shaped winding, a tube whose perimeter equals the winding section's, diameter"
-		case w.Thin:
-			shape = "round winding bundle, a tube of diameter"
-		}
+		shape := convectionWords[convectionShapeOf(nc, w)].rayleigh
 		add(Step{What: "Film temperature, at which the air's properties are taken", Symbolic: `T_f = \frac{T_s + T_a}{2}`,
 			Numbers: fmt.Sprintf(`\frac{%s + %s}{2}`, Q(Ts, "K", 5), Q(Ta, "K", 5)), Result: Q(cs.Film, "K", 5)})
 		add(Step{What: fmt.Sprintf("Air at the film temperature (%s, interpolated): kinematic viscosity ν = %s×10⁻⁵ m²/s, thermal conductivity kₐ = %s, Prandtl number Pr = %s; the expansion coefficient of an ideal gas and the thermal diffusivity",
@@ -591,7 +574,7 @@ func (c *composer) thermalTable() doc.Table {
 		row("Thermal time constant / heat capacity", func(co calc.Coil, cr calc.CoilResult) string {
 			return duration(cr.ThermalTau) + " / " + Eng(cr.Heat.HeatCapacity, "J/K", 3)
 		}),
-		row("Current density (common practice, still air, continuous: 2–4 A/mm²)", func(co calc.Coil, cr calc.CoilResult) string {
+		row(densityLabel(r, c.j.Cooling), func(co calc.Coil, cr calc.CoilResult) string {
 			return Eng(math.Abs(cr.Density), "A/m²", 3)
 		}),
 	)
@@ -609,6 +592,21 @@ func (c *composer) thermalTable() doc.Table {
 	}
 	align, widths := perCoilColumns(len(idx), 2.4, 1.6)
 	return doc.Table{Caption: "Thermal results at the steady operating point", Header: head, Rows: rows, Align: align, Widths: widths}
+}
+
+// densityLabel names the current-density row of the thermal table, with
+// the still-air rule of thumb only where it speaks to the design: a coil
+// energised continuously, not in vacuum.
+func densityLabel(r calc.Results, cool calc.Cooling) string {
+	if cool.Vacuum {
+		return "Current density"
+	}
+	for _, cr := range r.Coils {
+		if cr.Duty >= 1 {
+			return "Current density (common practice, still air, continuous: 2–4 A/mm²)"
+		}
+	}
+	return "Current density"
 }
 
 // runawayText is the runaway caution with this coil's numbers.
@@ -664,6 +662,44 @@ func hotSpotLabel(r calc.Results) string {
 	return "Hottest point, steady state"
 }
 
+// convectionShape is the key of a winding's outer shape for natural
+// convection, the one switch behind both the environment paragraph and
+// each coil's derivation.
+type convectionShape int
+
+const (
+	shapeCylinder convectionShape = iota // horizontal cylinder of the outer diameter
+	shapeVertical                        // vertical surface as high as the winding
+	shapeRing                            // ring-shaped winding, a tube of the section's perimeter
+	shapeBundle                          // thin coil's round bundle, a tube of its diameter
+)
+
+// convectionShapeOf is the shape key of convection model nc of winding w.
+func convectionShapeOf(nc *calc.NaturalConvection, w calc.Winding) convectionShape {
+	switch {
+	case nc.Shape == calc.VerticalSurface:
+		return shapeVertical
+	case nc.Ring:
+		return shapeRing
+	case w.Thin:
+		return shapeBundle
+	}
+	return shapeCylinder
+}
+
+// convectionWords names each shape: in the Rayleigh step (before its
+// length L) and in the environment paragraph's list of correlations.
+var convectionWords = map[convectionShape]struct{ rayleigh, correlation string }{
+	shapeCylinder: {"horizontal cylinder of diameter",
+		"the horizontal-cylinder correlation of Churchill and Chu (1975) on the winding's outer diameter"},
+	shapeVertical: {"vertical surface of height",
+		"the vertical-surface correlation of Churchill and Chu (1975) on the winding's length, its axis being vertical"},
+	shapeRing: {"ring-shaped winding, a tube whose perimeter equals the winding section's, diameter",
+		"the horizontal-cylinder correlation of Churchill and Chu (1975) for a ring-shaped winding, taken as a tube whose perimeter equals the winding section's"},
+	shapeBundle: {"round winding bundle, a tube of diameter",
+		"the horizontal-cylinder correlation of Churchill and Chu (1975) for a thin coil's round bundle, taken as a tube of the bundle's diameter"},
+}
+
 // convectionShapes names the free-convection correlations the design's
 // coils use, each once: only the shapes present, not every case the
 // model knows.
@@ -675,16 +711,7 @@ func (c *composer) convectionShapes() (string, int) {
 		if nc == nil {
 			continue
 		}
-		s := "the horizontal-cylinder correlation of Churchill and Chu (1975) on the winding's outer diameter"
-		switch {
-		case nc.Shape == calc.VerticalSurface:
-			s = "the vertical-surface correlation of Churchill and Chu (1975) on the winding's length, its axis being vertical"
-		case nc.Ring:
-			s = "the horizontal-cylinder correlation of Churchill and Chu (1975) for a ring-shaped winding, taken as a tube whose perimeter equals the winding section's"
-		case cr.Winding.Thin:
-			s = "the horizontal-cylinder correlation of Churchill and Chu (1975) for a thin coil's round bundle, taken as a tube of the bundle's diameter"
-		}
-		if !slices.Contains(shapes, s) {
+		if s := convectionWords[convectionShapeOf(nc, cr.Winding)].correlation; !slices.Contains(shapes, s) {
 			shapes = append(shapes, s)
 		}
 	}
@@ -692,4 +719,41 @@ func (c *composer) convectionShapes() (string, int) {
 		return "the free-convection correlations of Churchill and Chu (1975)", 2
 	}
 	return joinAnd(shapes), len(shapes)
+}
+
+// stillAirPlacement says where the driven coils sit and which way each
+// axis points, coil by coil where they differ: "The coil sits in still
+// air at the ambient temperature, its axis vertical".
+func (c *composer) stillAirPlacement() string {
+	idx := c.drivenCoils()
+	var names [2][]string // horizontal, vertical
+	for _, i := range idx {
+		v := 0
+		if c.j.Coils[i].Heat.AxisVertical {
+			v = 1
+		}
+		names[v] = append(names[v], c.j.Spec.Design.Coils[i].Name)
+	}
+	word := [2]string{"horizontal", "vertical"}
+	if len(idx) == 1 {
+		v := 0
+		if len(names[1]) == 1 {
+			v = 1
+		}
+		return "The coil sits in still air at the ambient temperature, its axis " + word[v]
+	}
+	for v := range names {
+		if len(names[v]) == len(idx) {
+			return "The coils sit in still air at the ambient temperature, their axes " + word[v]
+		}
+	}
+	var parts []string
+	for v, ns := range names {
+		axes := "their axes "
+		if len(ns) == 1 {
+			axes = "its axis "
+		}
+		parts = append(parts, joinAnd(ns)+" with "+axes+word[v])
+	}
+	return "The coils sit in still air at the ambient temperature: " + strings.Join(parts, ", ")
 }

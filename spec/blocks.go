@@ -109,9 +109,18 @@ func (p *parser) conditionsBlock(b *rawBlock) {
 			case "horizontal", "vertical":
 				cond.AxisVertical = v == "vertical"
 				si = "coil axes " + v
+				p.orientationLine = e.line
 			default:
 				p.errf(e.line, "orientation = %s: want horizontal or vertical (the coil axes, for natural convection)", e.value)
 			}
+		case "up":
+			a, err := parseAxis(e.value)
+			if err != nil {
+				p.errf(e.line, "up: %v (the upward direction, against gravity, in the design's axes)", err)
+				break
+			}
+			cond.Up, p.upLine = a, e.line
+			si = formatVec(a, units.Dimensionless) + " upward: each coil's axis within 45° of it is vertical"
 		case "emissivity":
 			q, err := units.ParseAs(e.value, units.Dimensionless)
 			switch {
@@ -154,7 +163,34 @@ func (p *parser) conditionsBlock(b *rawBlock) {
 		add("cooling", "still-air (natural convection, Churchill–Chu)")
 	}
 	add("emissivity", units.FormatNumber(defaultEmissivity))
-	add("orientation", "coil axes horizontal")
+	if !vacuum && hLine == 0 && !given["up"] {
+		// orientation enters only the natural-convection correlation
+		add("orientation", "coil axes horizontal")
+	}
+}
+
+// checkOrientation holds a design-wide orientation to each coil's axis
+// when the upward direction is given too: up decides each coil
+// (calc.AxisIsVertical), and a statement that contradicts it for some
+// coil is an error at the orientation line.
+func (p *parser) checkOrientation() {
+	cond := p.spec.Design.Conditions
+	if p.orientationLine == 0 || p.upLine == 0 {
+		return
+	}
+	for _, c := range p.spec.Design.Coils {
+		if v := calc.AxisIsVertical(c, cond); v != cond.AxisVertical {
+			state, is := "horizontal", "horizontal"
+			if cond.AxisVertical {
+				state = "vertical"
+			}
+			if v {
+				is = "vertical"
+			}
+			p.errf(p.orientationLine, "orientation = %s, but with up on line %d the axis of coil %q is %s (within 45° of up counts as vertical); drop orientation and let up decide each coil", state, p.upLine, c.Name, is)
+			return
+		}
+	}
 }
 
 func (p *parser) heatTransfer(e kv, cond *calc.Conditions) string {

@@ -28,7 +28,7 @@ var (
 		"test-plane", "switch-off", "driver-rating", "frequency", "on-time", "former-mass", "former-material",
 		"former-heat-capacity", "winding-conductivity"}
 	conditionKeys = []string{"ambient", "background-field", "design-angle", "cooling", "h", "emissivity",
-		"field-gradient", "mount-resistance", "orientation"}
+		"field-gradient", "mount-resistance", "orientation", "up"}
 )
 
 // Defaults.
@@ -126,6 +126,7 @@ func (p *parser) design() {
 		p.sweepBlock(sweepBlock, coils)
 	}
 	p.checkLimitSubjects()
+	p.checkOrientation()
 	if p.size != nil {
 		p.checkSize(coils)
 	}

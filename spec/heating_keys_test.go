@@ -54,6 +54,15 @@ func TestHeatingKeysBroken(t *testing.T) {
 			`mount-resistance: 0 K/W must be greater than zero`},
 		{"orientation", fenced("coil", coilBody) + fenced("conditions", "orientation = sideways\n"), 8,
 			`orientation = sideways: want horizontal or vertical`},
+		{"up as a word", fenced("coil", coilBody) + fenced("conditions", "up = skyward\n"), 8,
+			`up: "skyward": want x, y, z (optionally signed, e.g. -z) or a direction (x, y, z)`},
+		{"up of zeros", fenced("coil", coilBody) + fenced("conditions", "ambient = 20 degC\nup = (0, 0, 0)\n"), 9,
+			`up: (0, 0, 0) has no direction`},
+		{"orientation against up", fenced("coil", coilBody) + fenced("conditions", "orientation = horizontal\nup = z\n"), 8,
+			`orientation = horizontal, but with up on line 9 the axis of coil "coil 1" is vertical`},
+		{"orientation against up, second coil", fenced("coil", coilBody+"axis = x\n") + fenced("coil", coilBody+"name = z coil\ncentre = (0, 0, 50) mm\n") +
+			fenced("conditions", "up = (0, 0.2, 1)\norientation = horizontal\n"), 18,
+			`orientation = horizontal, but with up on line 17 the axis of coil "z coil" is vertical`},
 		{"gradient in coil block", fenced("coil", coilBody+"field-gradient = 2 mT/m\n"), 6,
 			`key "field-gradient" belongs in the conditions block, not the coil block`},
 		{"on-time in conditions", fenced("coil", coilBody) + fenced("conditions", "on-time = 2 s\n"), 8,
@@ -99,6 +108,14 @@ func TestHeatingKeysGood(t *testing.T) {
 		if w, ok := want[e.Key]; ok && e.SI != w {
 			t.Errorf("%s: SI %q, want %q", e.Key, e.SI, w)
 		}
+	}
+	// up with a design-wide orientation that agrees with every axis
+	s, ds = Parse("u.md", []byte(fenced("coil", coilBody+"axis = x\n")+fenced("conditions", "orientation = horizontal\nup = -y\n")))
+	if len(ds) > 0 {
+		t.Fatal(ds.Error())
+	}
+	if s.Design.Conditions.Up != (calc.Vec{0, -1, 0}) || calc.AxisIsVertical(s.Design.Coils[0], s.Design.Conditions) {
+		t.Errorf("up = -y: %+v", s.Design.Conditions)
 	}
 	if m, ok := calc.FormerMaterialByName("Aluminum"); !ok || m.Name != "aluminium" {
 		t.Error("aluminum spelling")

@@ -190,6 +190,9 @@ type parser struct {
 	firstH1    string
 	rereads    int   // HTML blocks read again as Markdown
 	size       *Size // the size block, read before the coil blocks
+	// lines of the conditions' orientation and up keys (0: not given),
+	// checked against each coil's axis once every block is read
+	orientationLine, upLine int
 }
 
 // maxRereads bounds the HTML blocks read again as Markdown for the

@@ -1,0 +1,30 @@
+package memo
+
+import (
+	"fmt"
+
+	"coilmemo/analysis"
+	"coilmemo/calc"
+)
+
+// laidWords qualifies a formula's dimensions as those of the turns as
+// laid, for a winding that does not fill its stated radial build; "" for
+// one that does.
+func laidWords(cs *analysis.CoilStudy) string {
+	if !cs.Underfilled {
+		return ""
+	}
+	return fmt.Sprintf(" of the turns as laid (they fill the inner %s of the stated %s radial build)",
+		Eng(cs.Laid.R1-cs.Laid.R0, "m", 3), Eng(cs.Envelope.R1-cs.Envelope.R0, "m", 3))
+}
+
+// underfillText is page 1's sentence on a coil whose turns fill less of
+// its stated radial build than it says, or "".
+func underfillText(co calc.Coil, cs *analysis.CoilStudy) string {
+	if !cs.Underfilled {
+		return ""
+	}
+	laid, stated := cs.Laid.R1-cs.Laid.R0, cs.Envelope.R1-cs.Envelope.R0
+	return fmt.Sprintf("The turns of coil %q fill only the inner %s (%s %%) of its %s radial build, fill factor %s as laid.",
+		co.Name, Eng(laid, "m", 3), Sig(100*laid/stated, 2), Eng(stated, "m", 3), Sig(cs.LaidFill, 2))
+}
