@@ -62,8 +62,9 @@ func (c *composer) coilSwitching(i int) {
 			Numbers:  fmt.Sprintf(`%s^2 \cdot %s`, Paren(Q(math.Abs(cr.Current), "A", 4)), Q(math.Abs(ip.Slope), "H/m", 4)),
 			Result:   Q(math.Abs(cr.PairForce), "N", 3)})
 	}
-	c.derive(switchingSteps(co, cr, &c.j.Coils[i])...)
-	c.para(suppressionText(co, cr, c.j.Coils[i].SwitchOff))
+	fo := fittedOverOf(c.j, i)
+	c.derive(switchingSteps(co, cr, &c.j.Coils[i], fo)...)
+	c.para(suppressionText(co, cr, c.j.Coils[i].SwitchOff, fo))
 	if cr.AC.Frequency > 0 {
 		c.derive(acSteps(co, cr)...)
 		c.para(acText(co, cr, c.j.Coils[i].Kinds))
@@ -181,11 +182,35 @@ func selfInductanceSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStud
 	return steps
 }
 
+// fittedOver is a coil block's series resistor sized over the
+// tolerances' corners, with the codes of the corners it names.
+type fittedOver struct {
+	*analysis.Suppression
+	corners        int    // how many corners
+	maxAt, worstAt string // MaxCorner and Corner as cornerCode writes them
+	// inCorner is set for a corner's derivation: the resistor is the one
+	// sized over every corner, given, not derived again.
+	inCorner bool
+}
+
+// fittedOver is coil block i's resistor sized over the corners; nil
+// without a tolerances block or where no resistor is sized.
+func fittedOverOf(j *analysis.Study, i int) *fittedOver {
+	wc := j.WorstCase
+	if wc == nil || i >= len(wc.Suppression) || wc.Suppression[i] == nil {
+		return nil
+	}
+	p := wc.Suppression[i]
+	return &fittedOver{Suppression: p, corners: len(wc.Corners), maxAt: cornerCode(wc, p.MaxCorner), worstAt: cornerCode(wc, p.Corner)}
+}
+
 // switchingSteps derive the time constant, rise time, energy, the
 // unsuppressed switch-off voltage and the suppression figures; with the
 // coil's study cs (nil: not derived) also the winding's self-capacitance
-// and the bound it sets on the unsuppressed spike (ringingSteps).
-func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []Step {
+// and the bound it sets on the unsuppressed spike (ringingSteps); with fo
+// (nil: no tolerances) the series resistor sized over the corners and the
+// switch voltage with it at the worst one.
+func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, fo *fittedOver) []Step {
 	s := cr.Switch
 	L, R, I := Q(cr.Inductance, "H", 4), Q(cr.RHot, "Ω", 4), Q(math.Abs(cr.Current), "A", 4)
 	var steps []Step
@@ -233,10 +258,29 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []
 			Step{What: fmt.Sprintf("Diode with a series resistor Rₛ: the largest resistor, the one that would hold the switch at %s (%s) when it opens the largest current, the cold switch-on current", Eng(s.Clamp, "V", 3), vmax),
 				Symbolic: `R_{s,\max} = \frac{V_{\mathrm{max}} - V_s}{I_c}`,
 				Numbers:  fmt.Sprintf(`\frac{%s - %s}{%s}`, Q(s.Clamp, "V", 3), Q(s.Supply, "V", 3), Q(math.Abs(s.WorstCurrent), "A", 4)), Result: Q(s.ResistorMax, "Ω", 3)},
-			Step{What: "Resistor fitted: the standard value of the E12 series (IEC 60063) at or below the largest, so that the switch keeps a margin below its limit",
-				Symbolic: `R_s`, Numbers: Words("E12 value at or below") + `\ ` + Q(s.ResistorMax, "Ω", 3), Result: rs},
+		)
+		switch {
+		case fo != nil && fo.inCorner:
+			steps = append(steps, Step{What: "Resistor fitted: the E12 value sized over every corner (above)", Symbolic: `R_s = ` + rs})
+		case fo == nil:
+			steps = append(steps, Step{What: "Resistor fitted: the standard value of the E12 series (IEC 60063) at or below the largest, so that the switch keeps a margin below its limit",
+				Symbolic: `R_s`, Numbers: Words("E12 value at or below") + `\ ` + Q(s.ResistorMax, "Ω", 3), Result: rs})
+		default:
+			a := fo.MaxAt
+			steps = append(steps,
+				Step{What: fmt.Sprintf("Largest resistor over the tolerances: the same quotient is smallest at corner %s of the %d (see Worst case), where the switch opens %s from %s", fo.maxAt, fo.corners, Eng(a.Current, "A", 4), Eng(a.Supply, "V", 3)),
+					Symbolic: `R_{s,\mathrm{tol}} = \min \frac{V_{\mathrm{max}} - V_s}{I_c}`,
+					Numbers:  fmt.Sprintf(`\frac{%s - %s}{%s}`, Q(fo.Clamp, "V", 3), Q(a.Supply, "V", 3), Q(a.Current, "A", 4)), Result: Q(fo.ResistorMax, "Ω", 3)},
+				Step{What: fittedWords(fo), Symbolic: `R_s`, Numbers: Words("E12 value at or below") + `\ ` + Q(fo.ResistorMax, "Ω", 3), Result: rs})
+		}
+		steps = append(steps,
 			Step{What: switchRatingWords(s), Symbolic: `V_{sw} = V_s + I_c R_s`,
-				Numbers: fmt.Sprintf(`%s + %s \cdot %s`, Q(s.Supply, "V", 3), Q(math.Abs(s.WorstCurrent), "A", 4), rs), Result: Q(s.SwitchVoltage, "V", 3)},
+				Numbers: fmt.Sprintf(`%s + %s \cdot %s`, Q(s.Supply, "V", 3), Q(math.Abs(s.WorstCurrent), "A", 4), rs), Result: Q(s.SwitchVoltage, "V", 3)})
+		if fo != nil && !fo.inCorner {
+			steps = append(steps, Step{What: cornerRatingWords(fo), Symbolic: `V_{sw} = V_s + I_c R_s`,
+				Numbers: fmt.Sprintf(`%s + %s \cdot %s`, Q(fo.Supply, "V", 3), Q(fo.Current, "A", 4), rs), Result: Q(fo.SwitchVoltage, "V", 3)})
+		}
+		steps = append(steps,
 			Step{What: "Decay to 10 % through the resistor and diode", Symbolic: `t_{10} = \frac{L}{R + R_s} \ln 10`,
 				Numbers: fmt.Sprintf(`\frac{%s}{%s + %s} \ln 10`, L, R, rs), Result: Q(s.ResistorTime10, "s", 3)},
 			Step{What: "Energy the resistor absorbs at each switch-off (the rest is spent in the coil's own resistance)", Symbolic: `W_{R_s} = W \frac{R_s}{R + R_s}`,
@@ -280,7 +324,7 @@ func ringingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []St
 }
 
 // suppressionText is the suggested suppression in words.
-func suppressionText(co calc.Coil, cr calc.CoilResult, p analysis.SwitchOffParts) string {
+func suppressionText(co calc.Coil, cr calc.CoilResult, p analysis.SwitchOffParts, fo *fittedOver) string {
 	s := cr.Switch
 	var b strings.Builder
 	ring := !math.IsNaN(p.RingingSwitch)
@@ -304,8 +348,8 @@ func suppressionText(co calc.Coil, cr calc.CoilResult, p analysis.SwitchOffParts
 		Eng(math.Max(math.Abs(cr.Current), math.Abs(s.WorstCurrent)), "A", 3), Eng(s.Supply, "V", 3), Eng(s.DiodeTime10, "s", 3))
 	switch {
 	case !math.IsNaN(s.Resistor):
-		fmt.Fprintf(&b, "; where a faster release matters, a resistor in series with the diode — at most %s; the E12 value %s is chosen — shortens the decay to %s and holds the switch at %s, within %s (the diode drop of about 0.7 V is neglected).",
-			Eng(s.ResistorMax, "Ω", 3), Eng(s.Resistor, "Ω", 2), Eng(s.ResistorTime10, "s", 3), Eng(s.SwitchVoltage, "V", 3), Eng(s.Clamp, "V", 3))
+		fmt.Fprintf(&b, "; where a faster release matters, a resistor in series with the diode — %s; the E12 value %s is chosen — shortens the decay to %s and holds the switch at %s, within %s (the diode drop of about 0.7 V is neglected).",
+			resistorBound(s, fo), Eng(s.Resistor, "Ω", 2), Eng(s.ResistorTime10, "s", 3), switchHeldAt(s, fo), Eng(s.Clamp, "V", 3))
 	case math.IsNaN(s.Clamp):
 		b.WriteString(". A resistor Rₛ in series with the diode would speed the decay; the switch then sees the supply plus I·Rₛ, so Rₛ is at most (Vₘₐₓ − Vₛ)/I for a driver that withstands Vₘₐₓ, and the E12 value at or below that is fitted.")
 	default:
@@ -492,6 +536,44 @@ func (c *composer) gradientForce() {
 
 // switchRatingWords says what the switch voltage with the suggested
 // resistor is compared with.
+// fittedWords says which resistor is fitted over the tolerances, and why
+// where the nominal design alone would fit a larger one.
+func fittedWords(fo *fittedOver) string {
+	w := "Resistor fitted: the standard value of the E12 series (IEC 60063) at or below the largest over the tolerances, so that the switch stays within its limit at every corner"
+	if fo.Nominal > fo.Resistor {
+		w += fmt.Sprintf("; the %s fitted for the nominal design alone would put the switch at %s at corner %s, above %s", Eng(fo.Nominal, "Ω", 2), Eng(fo.NominalWorst, "V", 3), cornerOf(fo, fo.NominalCorner), Eng(fo.Clamp, "V", 3))
+	}
+	return w
+}
+
+// cornerOf writes corner h of fo's study: its code, or "nominal".
+func cornerOf(fo *fittedOver, h int) string {
+	switch h {
+	case fo.MaxCorner:
+		return fo.maxAt
+	case fo.Corner:
+		return fo.worstAt
+	}
+	return "nominal"
+}
+
+// cornerRatingWords words the switch voltage with the fitted resistor at
+// the corner where it is largest.
+func cornerRatingWords(fo *fittedOver) string {
+	where := fmt.Sprintf("at corner %s, where it is largest", fo.worstAt)
+	if fo.Corner < 0 {
+		where = "largest at the nominal design, above every corner's"
+	}
+	limit := Eng(fo.Clamp, "V", 3) + ", twice the supply"
+	if fo.ClampFromRating {
+		limit = "the driver rating of " + Eng(fo.Clamp, "V", 3)
+	}
+	if fo.Within {
+		return fmt.Sprintf("Voltage across the switch with the diode and resistor, %s: within %s (margin %s)", where, limit, Eng(fo.Margin, "V", 2))
+	}
+	return fmt.Sprintf("Voltage across the switch with the diode and resistor, %s: ABOVE %s", where, limit)
+}
+
 func switchRatingWords(s calc.SwitchResult) string {
 	switch {
 	case !s.ClampFromRating:
@@ -504,7 +586,7 @@ func switchRatingWords(s calc.SwitchResult) string {
 
 // switchOffCaution words the finding of an unsuppressed switch-off spike
 // with the remedies the analysis sized.
-func switchOffCaution(f analysis.Finding, cr calc.CoilResult, p analysis.SwitchOffParts, name string) doc.Callout {
+func switchOffCaution(f analysis.Finding, cr calc.CoilResult, p analysis.SwitchOffParts, fo *fittedOver, name string) doc.Callout {
 	s := cr.Switch
 	spike := fmt.Sprintf("A fast semiconductor switch, opening in about %s with no suppression, would see about %s", Eng(f.SwitchOff, "s", 1), Eng(f.Value, "V", 3))
 	if !f.Assumed {
@@ -521,12 +603,30 @@ func switchOffCaution(f analysis.Finding, cr calc.CoilResult, p analysis.SwitchO
 		resistor = "A resistor Rₛ in series with the diode speeds the decay; the switch then sees the supply plus the current times Rₛ, so Rₛ is at most the driver's rating less the supply, divided by the current."
 	}
 	if !math.IsNaN(s.Resistor) {
-		resistor = fmt.Sprintf("For a faster release, a resistor in series with the diode — at most %s; the E12 value %s is chosen — holds the switch at %s, within %s, and shortens the decay to %s.",
-			Eng(s.ResistorMax, "Ω", 3), Eng(s.Resistor, "Ω", 2), Eng(s.SwitchVoltage, "V", 3), Eng(s.Clamp, "V", 3), Eng(s.ResistorTime10, "s", 3))
+		resistor = fmt.Sprintf("For a faster release, a resistor in series with the diode — %s; the E12 value %s is chosen — holds the switch at %s, within %s, and shortens the decay to %s.",
+			resistorBound(s, fo), Eng(s.Resistor, "Ω", 2), switchHeldAt(s, fo), Eng(s.Clamp, "V", 3), Eng(s.ResistorTime10, "s", 3))
 	}
 	return doc.Callout{Severity: doc.Caution, Title: "Switch-off voltage, " + name,
 		Spans: []doc.Span{{Text: templates.Text("caution-inductive", map[string]string{
 			"Energy": storedText(s), "Spike": spike, "Diode": diode, "Resistor": resistor})}}}
+}
+
+// resistorBound words the most the series resistor may be: the nominal
+// design's, and with tolerances the smaller that holds at every corner.
+func resistorBound(s calc.SwitchResult, fo *fittedOver) string {
+	if fo == nil {
+		return "at most " + Eng(s.ResistorMax, "Ω", 3)
+	}
+	return fmt.Sprintf("at most %s at nominal and %s at corner %s of the tolerances", Eng(s.ResistorMax, "Ω", 3), Eng(fo.ResistorMax, "Ω", 3), fo.maxAt)
+}
+
+// switchHeldAt words the switch voltage with the fitted resistor: at
+// nominal, and with tolerances at the worst corner.
+func switchHeldAt(s calc.SwitchResult, fo *fittedOver) string {
+	if fo == nil || fo.Corner < 0 {
+		return Eng(s.SwitchVoltage, "V", 3)
+	}
+	return fmt.Sprintf("%s (%s at corner %s)", Eng(s.SwitchVoltage, "V", 3), Eng(fo.SwitchVoltage, "V", 3), fo.worstAt)
 }
 
 // storedText is the energy the coil stores at full current, and at the

@@ -46,7 +46,7 @@ func Cautions(j *analysis.Study) []doc.Callout {
 			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Hazardous voltage, " + name,
 				Spans: []doc.Span{{Text: templates.Text("caution-voltage", map[string]string{"Voltage": Eng(f.Value, "V", 3)})}}})
 		case analysis.SwitchOffVoltage:
-			out = append(out, switchOffCaution(f, cr, j.Coils[f.Coil].SwitchOff, name))
+			out = append(out, switchOffCaution(f, cr, j.Coils[f.Coil].SwitchOff, fittedOverOf(j, f.Coil), name))
 		default:
 			out = append(out, kindCautions(j, f)...) // memo/core.go
 		}

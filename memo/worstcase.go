@@ -129,9 +129,57 @@ func (c *composer) worstCase() {
 			Header: []string{"Requirement", "Nominal", "Worst", "at corner", "Corners missed", "Status"},
 			Rows:   rows, Widths: []float64{1.8, 1.2, 1.2, 0.9, 1.1, 0.8}, Align: []doc.Align{doc.Left, doc.Right, doc.Right, doc.Center, doc.Right, doc.Center}})
 	}
+	c.worstSuppression()
 	c.sensitivity(wc)
 	c.monteCarlo(wc)
 	c.worstDerivation(wc)
+}
+
+// worstSuppression tabulates the switch voltage with the suggested
+// suppression over the corners, for every coil block whose series
+// resistor is sized over them (analysis.Suppression).
+func (c *composer) worstSuppression() {
+	d := c.j.Spec.Design
+	var rows [][]doc.Cell
+	var why []string
+	for i, co := range d.Coils {
+		fo := fittedOverOf(c.j, i)
+		if fo == nil || i >= len(c.j.Results.Coils) {
+			continue
+		}
+		s := c.j.Results.Coils[i].Switch
+		st := doc.Pass
+		if !fo.Within {
+			st = doc.Fail
+		}
+		rs := "none"
+		if !math.IsNaN(fo.Resistor) {
+			rs = Eng(fo.Resistor, "Ω", 2)
+		}
+		rows = append(rows, []doc.Cell{{Text: co.Name}, {Text: rs}, {Text: Eng(s.SwitchVoltage, "V", 4)},
+			{Text: Eng(fo.SwitchVoltage, "V", 4)}, {Text: fo.worstAt}, {Text: Eng(fo.Clamp, "V", 3)}, {Text: st.String(), Status: st, Strong: true}})
+		if fo.Nominal > fo.Resistor || math.IsNaN(fo.Resistor) {
+			w := fmt.Sprintf("for coil %q the %s the nominal design alone would take puts the switch at %s at corner %s, above %s", co.Name,
+				Eng(fo.Nominal, "Ω", 2), Eng(fo.NominalWorst, "V", 3), cornerOf(fo, fo.NominalCorner), Eng(fo.Clamp, "V", 3))
+			if math.IsNaN(fo.Resistor) {
+				w += ", and no resistor leaves room above the supply at every corner: a bare freewheeling diode is suggested"
+			} else {
+				w += fmt.Sprintf(", so the lower %s is fitted", Eng(fo.Resistor, "Ω", 2))
+			}
+			why = append(why, w)
+		}
+	}
+	if len(rows) == 0 {
+		return
+	}
+	text := "The series resistor of the suggested resistor–diode suppression (Inductance and switching) is sized over the corners: the switch sees the supply plus the current it opens times the resistor, and a cold corner's winding draws the most current, so the resistor fitted is the E12 value at or below the smallest (Vₘₐₓ − Vₛ)/I over the nominal design and every corner, and the switch voltage with it is judged at every corner (the diode drop of about 0.7 V is neglected)."
+	if len(why) > 0 {
+		text += " " + capital(strings.Join(why, "; ")) + "."
+	}
+	c.para(text)
+	c.add(doc.Table{Caption: "Switch voltage with the suggested suppression at every corner (PASS when within the limit at nominal and at every corner)",
+		Header: []string{"Coil", "Resistor fitted", "Nominal", "Worst", "at corner", "Limit", "Status"},
+		Rows:   rows, Widths: []float64{1.5, 1.0, 1.0, 1.0, 0.9, 0.8, 0.8}, Align: []doc.Align{doc.Left, doc.Right, doc.Right, doc.Right, doc.Center, doc.Right, doc.Center}})
 }
 
 // sensitivity tabulates and plots each tolerance's swing of each result,
@@ -289,7 +337,11 @@ func (c *composer) worstDerivation(wc *analysis.WorstCase) {
 	c.derive(steps...)
 	c.derive(coilSteps(co, cr, &cs)...) // resistance, temperature, current, power, moment, field
 	if cr.Switch.SwitchOff > 0 {
-		c.derive(switchingSteps(co, cr, nil)...) // the corner's L·I/t_off, as its limit is judged
+		fo := fittedOverOf(c.j, 0)
+		if fo != nil {
+			fo.inCorner = true
+		}
+		c.derive(switchingSteps(co, cr, nil, fo)...) // the corner's L·I/t_off, as its limit is judged
 	}
 }
 

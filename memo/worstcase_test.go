@@ -2,6 +2,7 @@ package memo
 
 import (
 	"bytes"
+	"fmt"
 	"os"
 	"strings"
 	"testing"
@@ -92,5 +93,31 @@ func TestSignedSwing(t *testing.T) {
 		if got := signed(c.v, c.unit); got != c.want {
 			t.Errorf("signed(%g, %q) = %q, want %q", c.v, c.unit, got, c.want)
 		}
+	}
+}
+
+// Where tolerances are stated, the memo fits the series resistor sized
+// over the corners and says so: the switching section and the caution
+// give the switch voltage at the worst corner, and the worst case
+// tabulates it against the limit.
+func TestSuppressionOverCornersWording(t *testing.T) {
+	j, text := memoOf(t, "../examples/torque-coil.md", true)
+	p := j.WorstCase.Suppression[0]
+	if p == nil || !(p.Resistor < p.Nominal) {
+		t.Fatalf("suppression %+v", p)
+	}
+	code := cornerCode(j.WorstCase, p.Corner)
+	for _, want := range []string{
+		"Switch voltage with the suggested suppression at every corner",
+		fmt.Sprintf("the E12 value %s is chosen", Eng(p.Resistor, "Ω", 2)),
+		fmt.Sprintf("(%s at corner %s)", Eng(p.SwitchVoltage, "V", 3), code),
+		fmt.Sprintf("the %s the nominal design alone would take puts the switch at %s at corner", Eng(p.Nominal, "Ω", 2), Eng(p.NominalWorst, "V", 3)),
+	} {
+		if !strings.Contains(text, want) {
+			t.Errorf("memo lacks %q", want)
+		}
+	}
+	if strings.Contains(text, fmt.Sprintf("the E12 value %s is chosen", Eng(p.Nominal, "Ω", 2))) {
+		t.Errorf("memo still fits the nominal %s", Eng(p.Nominal, "Ω", 2))
 	}
 }
