@@ -217,9 +217,9 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, fo
 	if math.IsNaN(s.TimeConstant) {
 		return nil
 	}
-	supply := "the stated supply voltage"
+	supply := "the supply Vₛ (the stated supply voltage)"
 	if co.Drive == calc.CurrentDrive {
-		supply = "I·R, the least compliance voltage of the current source"
+		supply = "the voltage Vₛ the current source must deliver across the coil (I·R, its least compliance voltage)"
 	}
 	steps = append(steps,
 		Step{What: "Electrical time constant at the hot resistance", Symbolic: `\tau = \frac{L}{R}`,
@@ -232,12 +232,12 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, fo
 		if cold := math.Abs(s.WorstCurrent); cold > math.Abs(cr.Current) {
 			// A voltage-driven coil switched off while still cold opens its
 			// larger switch-on current: the worst spike.
-			steps = append(steps, Step{What: fmt.Sprintf("Voltage across a switch that opens in %s with no suppression, at the cold switch-on current (the worst case; at the hot current it is %s): the coil's L·di/dt on top of the supply Vₛ (%s)", Eng(s.SwitchOff, "s", 3), Eng(s.Spike, "V", 3), supply),
+			steps = append(steps, Step{What: fmt.Sprintf("Voltage across a switch that opens in %s with no suppression, at the cold switch-on current (the worst case; at the hot current it is %s): the coil's L·di/dt on top of %s", Eng(s.SwitchOff, "s", 3), Eng(s.Spike, "V", 3), supply),
 				Symbolic: `V_{sw} = \frac{L I_c}{t_{\mathrm{off}}} + V_s`,
 				Numbers:  fmt.Sprintf(`\frac{%s \cdot %s}{%s} + %s`, L, Q(cold, "A", 4), Q(s.SwitchOff, "s", 3), Q(s.Supply, "V", 3)),
 				Result:   Q(s.SpikeWorst, "V", 3)})
 		} else {
-			steps = append(steps, Step{What: fmt.Sprintf("Voltage across a switch that opens in %s with no suppression: the coil's L·di/dt on top of the supply Vₛ (%s)", Eng(s.SwitchOff, "s", 3), supply),
+			steps = append(steps, Step{What: fmt.Sprintf("Voltage across a switch that opens in %s with no suppression: the coil's L·di/dt on top of %s", Eng(s.SwitchOff, "s", 3), supply),
 				Symbolic: `V_{sw} = \frac{L I}{t_{\mathrm{off}}} + V_s`,
 				Numbers:  fmt.Sprintf(`\frac{%s \cdot %s}{%s} + %s`, L, I, Q(s.SwitchOff, "s", 3), Q(s.Supply, "V", 3)),
 				Result:   Q(s.Spike, "V", 3)})
@@ -246,7 +246,7 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, fo
 	if cs != nil {
 		steps = append(steps, ringingSteps(co, cr, cs)...)
 	}
-	steps = append(steps, Step{What: "Freewheeling diode across the coil: the switch sees about the supply; the current decays through the coil's own resistance to 10 %",
+	steps = append(steps, Step{What: "Freewheeling diode across the coil: the switch sees about " + sourceOf(co) + "; the current decays through the coil's own resistance to 10 %",
 		Symbolic: `t_{10} = \frac{L}{R} \ln 10`, Numbers: fmt.Sprintf(`%s \cdot \ln 10`, Q(s.DiodeDecay, "s", 3)), Result: Q(s.DiodeTime10, "s", 3)})
 	if !math.IsNaN(s.Resistor) {
 		vmax := "twice the supply, taken as the driver's limit"
@@ -255,7 +255,7 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, fo
 		}
 		rs := Q(s.Resistor, "Ω", 2) // an E12 value: two figures are exact
 		steps = append(steps,
-			Step{What: fmt.Sprintf("Diode with a series resistor Rₛ: the largest resistor, the one that would hold the switch at %s (%s) when it opens the largest current, the cold switch-on current", Eng(s.Clamp, "V", 3), vmax),
+			Step{What: fmt.Sprintf("Diode with a series resistor Rₛ: the largest resistor, the one that would hold the switch at %s (%s) when it opens the largest current, %s", Eng(s.Clamp, "V", 3), vmax, largestCurrent(co)),
 				Symbolic: `R_{s,\max} = \frac{V_{\mathrm{max}} - V_s}{I_c}`,
 				Numbers:  fmt.Sprintf(`\frac{%s - %s}{%s}`, Q(s.Clamp, "V", 3), Q(s.Supply, "V", 3), Q(math.Abs(s.WorstCurrent), "A", 4)), Result: Q(s.ResistorMax, "Ω", 3)},
 		)
@@ -274,7 +274,7 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, fo
 				Step{What: fittedWords(fo), Symbolic: `R_s`, Numbers: Words("E12 value at or below") + `\ ` + Q(fo.ResistorMax, "Ω", 3), Result: rs})
 		}
 		steps = append(steps,
-			Step{What: switchRatingWords(s), Symbolic: `V_{sw} = V_s + I_c R_s`,
+			Step{What: switchRatingWords(s, largestCurrent(co)), Symbolic: `V_{sw} = V_s + I_c R_s`,
 				Numbers: fmt.Sprintf(`%s + %s \cdot %s`, Q(s.Supply, "V", 3), Q(math.Abs(s.WorstCurrent), "A", 4), rs), Result: Q(s.SwitchVoltage, "V", 3)})
 		if fo != nil && !fo.inCorner {
 			steps = append(steps, Step{What: cornerRatingWords(fo), Symbolic: `V_{sw} = V_s + I_c R_s`,
@@ -313,7 +313,7 @@ func ringingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []St
 	var what string
 	switch {
 	case p.Assumed:
-		what = fmt.Sprintf("The most an unsuppressed switch can see, however fast it opens; a switch opening in a time t longer than √(L Cₛ) = %s sees less, about L·I/t above the supply", tx)
+		what = fmt.Sprintf("The most an unsuppressed switch can see, however fast it opens; a switch opening in a time t longer than √(L Cₛ) = %s sees less, about L·I/t above %s", tx, sourceOf(co))
 	case p.Bounded:
 		what = fmt.Sprintf("The most an unsuppressed switch can see: below the estimate for a switch that opens in %s, which is faster than √(L Cₛ) = %s, so this bound governs the spike", Eng(p.SwitchOff, "s", 3), tx)
 	default:
@@ -338,20 +338,20 @@ func suppressionText(co calc.Coil, cr calc.CoilResult, p analysis.SwitchOffParts
 	case !p.Assumed:
 		fmt.Fprintf(&b, "Unsuppressed, a switch opening in %s would see about %s. ", Eng(p.SwitchOff, "s", 3), Eng(p.Peak, "V", 3))
 	case ring:
-		fmt.Fprintf(&b, "The unsuppressed spike depends on how fast the switch opens: about L·I/t above the supply for a switch opening in t, and never more than about %s, where the winding's own capacitance takes up the stored energy (reached by a switch opening faster than %s). ",
-			Eng(p.RingingSwitch, "V", 3), Eng(p.Crossover, "s", 3))
+		fmt.Fprintf(&b, "The unsuppressed spike depends on how fast the switch opens: about L·I/t above %s for a switch opening in t, and never more than about %s, where the winding's own capacitance takes up the stored energy (reached by a switch opening faster than %s). ",
+			sourceOf(co), Eng(p.RingingSwitch, "V", 3), Eng(p.Crossover, "s", 3))
 	default:
-		fmt.Fprintf(&b, "The unsuppressed spike depends on how fast the switch opens: about L·I/t above the supply for a switch opening in t, some %s for a fast semiconductor switch opening in %s. ",
-			Eng(p.Ramp, "V", 3), Eng(p.SwitchOff, "s", 1))
+		fmt.Fprintf(&b, "The unsuppressed spike depends on how fast the switch opens: about L·I/t above %s for a switch opening in t, some %s for a fast semiconductor switch opening in %s. ",
+			sourceOf(co), Eng(p.Ramp, "V", 3), Eng(p.SwitchOff, "s", 1))
 	}
-	fmt.Fprintf(&b, "Suggested suppression: a freewheeling diode across the coil rated for at least %s continuous, which keeps the switch near the %s supply and lets the current decay to 10 %% in %s",
-		Eng(math.Max(math.Abs(cr.Current), math.Abs(s.WorstCurrent)), "A", 3), Eng(s.Supply, "V", 3), Eng(s.DiodeTime10, "s", 3))
+	fmt.Fprintf(&b, "Suggested suppression: a freewheeling diode across the coil rated for at least %s continuous, which keeps the switch near %s and lets the current decay to 10 %% in %s",
+		Eng(math.Max(math.Abs(cr.Current), math.Abs(s.WorstCurrent)), "A", 3), sourceAt(co, s.Supply), Eng(s.DiodeTime10, "s", 3))
 	switch {
 	case !math.IsNaN(s.Resistor):
 		fmt.Fprintf(&b, "; where a faster release matters, a resistor in series with the diode — %s; the E12 value %s is chosen — shortens the decay to %s and holds the switch at %s, within %s (the diode drop of about 0.7 V is neglected).",
 			resistorBound(s, fo), Eng(s.Resistor, "Ω", 2), Eng(s.ResistorTime10, "s", 3), switchHeldAt(s, fo), Eng(s.Clamp, "V", 3))
 	case math.IsNaN(s.Clamp):
-		b.WriteString(". A resistor Rₛ in series with the diode would speed the decay; the switch then sees the supply plus I·Rₛ, so Rₛ is at most (Vₘₐₓ − Vₛ)/I for a driver that withstands Vₘₐₓ, and the E12 value at or below that is fitted.")
+		fmt.Fprintf(&b, ". A resistor Rₛ in series with the diode would speed the decay; the switch then sees %s plus I·Rₛ, so Rₛ is at most (Vₘₐₓ − Vₛ)/I for a driver that withstands Vₘₐₓ, and the E12 value at or below that is fitted.", sourceOf(co))
 	default:
 		b.WriteString(".")
 	}
@@ -574,19 +574,19 @@ func cornerRatingWords(fo *fittedOver) string {
 	return fmt.Sprintf("Voltage across the switch with the diode and resistor, %s: ABOVE %s", where, limit)
 }
 
-func switchRatingWords(s calc.SwitchResult) string {
+func switchRatingWords(s calc.SwitchResult, at string) string {
 	switch {
 	case !s.ClampFromRating:
-		return "Voltage across the switch with the diode and resistor, at the cold switch-on current"
+		return "Voltage across the switch with the diode and resistor, at " + at
 	case s.WithinRating:
-		return fmt.Sprintf("Voltage across the switch with the diode and resistor, at the cold switch-on current: within the driver rating of %s (margin %s)", Eng(s.Clamp, "V", 3), Eng(s.RatingMargin, "V", 2))
+		return fmt.Sprintf("Voltage across the switch with the diode and resistor, at %s: within the driver rating of %s (margin %s)", at, Eng(s.Clamp, "V", 3), Eng(s.RatingMargin, "V", 2))
 	}
-	return fmt.Sprintf("Voltage across the switch with the diode and resistor, at the cold switch-on current: ABOVE the driver rating of %s", Eng(s.Clamp, "V", 3))
+	return fmt.Sprintf("Voltage across the switch with the diode and resistor, at %s: ABOVE the driver rating of %s", at, Eng(s.Clamp, "V", 3))
 }
 
 // switchOffCaution words the finding of an unsuppressed switch-off spike
 // with the remedies the analysis sized.
-func switchOffCaution(f analysis.Finding, cr calc.CoilResult, p analysis.SwitchOffParts, fo *fittedOver, name string) doc.Callout {
+func switchOffCaution(f analysis.Finding, co calc.Coil, cr calc.CoilResult, p analysis.SwitchOffParts, fo *fittedOver, name string) doc.Callout {
 	s := cr.Switch
 	spike := fmt.Sprintf("A fast semiconductor switch, opening in about %s with no suppression, would see about %s", Eng(f.SwitchOff, "s", 1), Eng(f.Value, "V", 3))
 	if !f.Assumed {
@@ -596,11 +596,11 @@ func switchOffCaution(f analysis.Finding, cr calc.CoilResult, p analysis.SwitchO
 		spike += fmt.Sprintf(", the most the winding's own capacitance allows as it takes up the stored energy (L·I/t alone would give %s)", Eng(p.Ramp, "V", 3))
 	}
 	spike += "."
-	diode := fmt.Sprintf("A freewheeling diode across the coil, rated for at least %s, keeps the switch near the %s supply; the current then decays to 10 %% in %s.",
-		Eng(math.Max(math.Abs(cr.Current), math.Abs(s.WorstCurrent)), "A", 3), Eng(s.Supply, "V", 3), Eng(s.DiodeTime10, "s", 3))
+	diode := fmt.Sprintf("A freewheeling diode across the coil, rated for at least %s, keeps the switch near %s; the current then decays to 10 %% in %s.",
+		Eng(math.Max(math.Abs(cr.Current), math.Abs(s.WorstCurrent)), "A", 3), sourceAt(co, s.Supply), Eng(s.DiodeTime10, "s", 3))
 	resistor := ""
 	if math.IsNaN(s.Clamp) {
-		resistor = "A resistor Rₛ in series with the diode speeds the decay; the switch then sees the supply plus the current times Rₛ, so Rₛ is at most the driver's rating less the supply, divided by the current."
+		resistor = fmt.Sprintf("A resistor Rₛ in series with the diode speeds the decay; the switch then sees %s plus the current times Rₛ, so Rₛ is at most the driver's rating less that voltage, divided by the current.", sourceOf(co))
 	}
 	if !math.IsNaN(s.Resistor) {
 		resistor = fmt.Sprintf("For a faster release, a resistor in series with the diode — %s; the E12 value %s is chosen — holds the switch at %s, within %s, and shortens the decay to %s.",
@@ -627,6 +627,35 @@ func switchHeldAt(s calc.SwitchResult, fo *fittedOver) string {
 		return Eng(s.SwitchVoltage, "V", 3)
 	}
 	return fmt.Sprintf("%s (%s at corner %s)", Eng(s.SwitchVoltage, "V", 3), Eng(fo.SwitchVoltage, "V", 3), fo.worstAt)
+}
+
+// largestCurrent names the largest current the switch opens: the cold
+// switch-on current under voltage drive, the imposed one under current
+// drive.
+func largestCurrent(co calc.Coil) string {
+	if co.Drive == calc.CurrentDrive {
+		return "the imposed current"
+	}
+	return "the cold switch-on current"
+}
+
+// sourceOf names the voltage the switch sees beside the coil's own
+// L·di/dt: the supply under voltage drive; under current drive the
+// voltage the current source must deliver across the coil, its
+// compliance voltage.
+func sourceOf(co calc.Coil) string {
+	if co.Drive == calc.CurrentDrive {
+		return "the current source's compliance voltage"
+	}
+	return "the supply"
+}
+
+// sourceAt is sourceOf with its value v, V.
+func sourceAt(co calc.Coil, v float64) string {
+	if co.Drive == calc.CurrentDrive {
+		return fmt.Sprintf("the %s the current source must deliver across the coil (its compliance voltage)", Eng(v, "V", 3))
+	}
+	return fmt.Sprintf("the %s supply", Eng(v, "V", 3))
 }
 
 // storedText is the energy the coil stores at full current, and at the

@@ -162,7 +162,7 @@ func (c *composer) worstSuppression() {
 			w := fmt.Sprintf("for coil %q the %s the nominal design alone would take puts the switch at %s at corner %s, above %s", co.Name,
 				Eng(fo.Nominal, "Ω", 2), Eng(fo.NominalWorst, "V", 3), cornerOf(fo, fo.NominalCorner), Eng(fo.Clamp, "V", 3))
 			if math.IsNaN(fo.Resistor) {
-				w += ", and no resistor leaves room above the supply at every corner: a bare freewheeling diode is suggested"
+				w += ", and no resistor leaves room above that voltage at every corner: a bare freewheeling diode is suggested"
 			} else {
 				w += fmt.Sprintf(", so the lower %s is fitted", Eng(fo.Resistor, "Ω", 2))
 			}
@@ -172,7 +172,7 @@ func (c *composer) worstSuppression() {
 	if len(rows) == 0 {
 		return
 	}
-	text := "The series resistor of the suggested resistor–diode suppression (Inductance and switching) is sized over the corners: the switch sees the supply plus the current it opens times the resistor, and a cold corner's winding draws the most current, so the resistor fitted is the E12 value at or below the smallest (Vₘₐₓ − Vₛ)/I over the nominal design and every corner, and the switch voltage with it is judged at every corner (the diode drop of about 0.7 V is neglected)."
+	text := "The series resistor of the suggested resistor–diode suppression (Inductance and switching) is sized over the corners: the switch sees the supply (under current drive, the voltage the current source must deliver across the coil) plus the current it opens times the resistor, and a cold corner's winding draws the most current, so the resistor fitted is the E12 value at or below the smallest (Vₘₐₓ − Vₛ)/I over the nominal design and every corner, and the switch voltage with it is judged at every corner (the diode drop of about 0.7 V is neglected)."
 	if len(why) > 0 {
 		text += " " + capital(strings.Join(why, "; ")) + "."
 	}
