@@ -21,6 +21,16 @@ var worstNames = map[string]string{
 	"resistance": "Hot resistance", "switch-off-voltage": "Switch-off voltage",
 }
 
+// worstName is headline result q as the memo names it: the power, the
+// "power" limit quantity's, is averaged over the duty cycle, and says so
+// where some coil runs on one.
+func (c *composer) worstName(q string) string {
+	if q == "power" {
+		return powerLabel(c.j.Results)
+	}
+	return worstNames[q]
+}
+
 // worstValue formats an SI value of a limit quantity in its display unit.
 func worstValue(q string, v float64, sig int) string {
 	unit := displayUnit(spec.LimitQuantities[q].Unit)
@@ -104,7 +114,7 @@ func (c *composer) worstCase() {
 
 	rows = nil
 	for _, r := range wc.Results {
-		rows = append(rows, []doc.Cell{{Text: worstNames[r.Quantity]},
+		rows = append(rows, []doc.Cell{{Text: c.worstName(r.Quantity)},
 			{Text: worstValue(r.Quantity, r.Min, 4)}, {Text: cornerCode(wc, r.CornerMin)},
 			{Text: worstValue(r.Quantity, r.Nominal, 4)},
 			{Text: worstValue(r.Quantity, r.Max, 4)}, {Text: cornerCode(wc, r.CornerMax)}})
@@ -195,7 +205,7 @@ func (c *composer) sensitivity(wc *analysis.WorstCase) {
 	var labels []string
 	var swing [][]float64
 	for r, res := range wc.Results {
-		row := []doc.Cell{{Text: worstNames[res.Quantity]}}
+		row := []doc.Cell{{Text: c.worstName(res.Quantity)}}
 		var pct []float64
 		for i := range t.Items {
 			s := wc.Swing[r][i]
@@ -212,7 +222,7 @@ func (c *composer) sensitivity(wc *analysis.WorstCase) {
 		}
 		rows = append(rows, row)
 		if res.Quantity != "temperature" {
-			labels = append(labels, worstNames[res.Quantity])
+			labels = append(labels, c.worstName(res.Quantity))
 			swing = append(swing, pct)
 		}
 	}
@@ -277,7 +287,7 @@ func (c *composer) monteCarlo(wc *analysis.WorstCase) {
 	var rows [][]doc.Cell
 	for r, res := range wc.Results {
 		v := mc.Values[r]
-		row := []doc.Cell{{Text: worstNames[res.Quantity]}}
+		row := []doc.Cell{{Text: c.worstName(res.Quantity)}}
 		for _, p := range []float64{5, 50, 95} {
 			row = append(row, doc.Cell{Text: worstValue(res.Quantity, analysis.Percentile(v, p), 4)})
 		}
@@ -321,7 +331,7 @@ func (c *composer) worstDerivation(wc *analysis.WorstCase) {
 	}
 	why := fmt.Sprintf("the corner at which the %s requirement is missed", wk.Reason)
 	if !wk.Failing {
-		why = "the corner of the least " + strings.ToLower(worstNames[wk.Reason])
+		why = "the corner of the least " + strings.ToLower(c.worstName(wk.Reason))
 	}
 	c.heading(2, "Derivation at corner "+cornerCode(wc, wk.Corner))
 	c.para(fmt.Sprintf("The results at %s (%s), derived as at nominal in the Method section, with the corner's inputs:", why, wc.CornerName(wk.Corner)))

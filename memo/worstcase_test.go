@@ -3,6 +3,7 @@ package memo
 import (
 	"bytes"
 	"fmt"
+	"math"
 	"os"
 	"strings"
 	"testing"
@@ -119,5 +120,39 @@ func TestSuppressionOverCornersWording(t *testing.T) {
 	}
 	if strings.Contains(text, fmt.Sprintf("the E12 value %s is chosen", Eng(p.Nominal, "Ω", 2))) {
 		t.Errorf("memo still fits the nominal %s", Eng(p.Nominal, "Ω", 2))
+	}
+}
+
+// The torque coil's requirement is on the power "while on": it is judged
+// on the power while energised, V·I at the hot winding (not the
+// duty-averaged figure, half that on its 50 % duty), and the memo names
+// it so; the worst case's power row, the duty-averaged one, says it is
+// averaged.
+func TestTorqueCoilPowerWhileOn(t *testing.T) {
+	j, text := memoOf(t, "../examples/torque-coil.md", true)
+	cr := j.Results.Coils[0]
+	found := false
+	for _, l := range j.Limits {
+		if strings.HasPrefix(l.Limit.Quantity, "power") {
+			found = true
+			on := math.Abs(cr.Voltage * cr.Current)
+			if l.Limit.Quantity != "power-on" || math.Abs(l.Computed-on) > 1e-12*on || !(cr.Duty < 1) {
+				t.Errorf("power requirement %s judged on %g W, on-power V·I = %g W (duty %g)", l.Limit.Quantity, l.Computed, on, cr.Duty)
+			}
+		}
+	}
+	if !found {
+		t.Fatal("no power requirement")
+	}
+	row := ""
+	for _, r := range j.WorstCase.Results {
+		if r.Quantity == "power" {
+			row = "| Power (averaged over the duty cycle) | " + worstValue("power", r.Min, 4) + " |"
+		}
+	}
+	for _, want := range []string{"power-on: total electrical power while energised", row} {
+		if !strings.Contains(text, want) {
+			t.Errorf("memo lacks %q", want)
+		}
 	}
 }
