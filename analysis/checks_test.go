@@ -2,8 +2,12 @@ package analysis
 
 import (
 	"math"
+	"os"
+	"strconv"
 	"strings"
 	"testing"
+
+	"coilmemo/calc"
 )
 
 // 236 turns of AWG 30 with a 6 mm radial build and an 872 mm length fill
@@ -30,4 +34,61 @@ func TestCentreFieldCheckOfAPartLayer(t *testing.T) {
 		return
 	}
 	t.Fatal("no centre-field check")
+}
+
+// An opposing pair's centre gradient is verified by a central difference
+// of the numerical Biot–Savart field. For a thin Maxwell pair (spacing
+// √3 a) the gradient of two opposed loops, 3 μ0 N I a² d/(a² + d²)^(5/2)
+// at d = √3 a/2, is (48√3/(49√7)) μ0 N I/a² = 0.6413 μ0 N I/a² (the
+// Maxwell gradient coil's textbook figure, recalled from memory): both
+// the design's figure and the check's agree with it.
+func TestGradientCheck(t *testing.T) {
+	st := studyOf(t, "```coil\nname = m\nform = pair\nmean-diameter = 200 mm\nturns = 10\nwire = AWG 30\nspacing = 173.2051 mm\nsense = opposing\ncurrent = 1 A\n```\n")
+	c := checkNamed(st.Checks, "axial gradient at the centre of the pair")
+	if c == nil {
+		t.Fatal("no gradient check")
+	}
+	a := st.Results.Coils[0].Winding.MeanTurnRadius()
+	maxwell := 48 * math.Sqrt(3) / (49 * math.Sqrt(7)) * calc.Mu0 * 10 * 1 / (a * a)
+	if !c.Pass || math.Abs(math.Abs(c.Expected)/maxwell-1) > 1e-5 || math.Abs(math.Abs(c.Value)/maxwell-1) > 1e-5 {
+		t.Errorf("gradient %g, check %g, Maxwell pair %g T/m (pass %v)", c.Value, c.Expected, maxwell, c.Pass)
+	}
+	// The gradient pair of the figure tests is checked too, and an aiding
+	// pair has no gradient to check.
+	st = studyOf(t, readFigure(t, "gradient-pair.md"))
+	if c := checkNamed(st.Checks, "axial gradient at the centre of the pair"); c == nil || !c.Pass || c.Value != st.Results.Coils[0].Pair.Gradient {
+		t.Errorf("gradient pair: %+v", c)
+	}
+	if c := checkNamed(studyOf(t, readFigure(t, "aiding-pair.md")).Checks, "axial gradient"); c != nil {
+		t.Errorf("aiding pair: %+v", c)
+	}
+}
+
+// The Helmholtz closed form checks only a pair the study calls a
+// Helmholtz pair: the aiding pair of the figure tests, whose spacing is
+// 1.012 times its turns' mean radius as laid out, gets none, and a pair
+// spaced at that radius does.
+func TestHelmholtzCheckWhereItApplies(t *testing.T) {
+	src := readFigure(t, "aiding-pair.md")
+	st := studyOf(t, src)
+	if st.Results.Coils[0].Pair.Helmholtz {
+		t.Fatal("aiding pair taken as a Helmholtz pair")
+	}
+	if c := checkNamed(st.Checks, "field at the centre of the Helmholtz pair"); c != nil {
+		t.Errorf("aiding pair off the Helmholtz spacing checked against it: %+v", c)
+	}
+	a := st.Results.Coils[0].Pair.Radius
+	st = studyOf(t, strings.Replace(src, "spacing       = 100 mm", "spacing       = "+strconv.FormatFloat(a*1e3, 'f', 4, 64)+" mm", 1))
+	if c := checkNamed(st.Checks, "field at the centre of the Helmholtz pair"); !st.Results.Coils[0].Pair.Helmholtz || c == nil || !c.Pass {
+		t.Errorf("pair at the Helmholtz spacing %g m: %+v", a, c)
+	}
+}
+
+func readFigure(t *testing.T, name string) string {
+	t.Helper()
+	b, err := os.ReadFile("../testdata/figures/" + name)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return string(b)
 }

@@ -58,6 +58,10 @@ type CoilStudy struct {
 	// block, bounded by the switch's speed and by the winding's
 	// self-capacitance (analysis/switchoff.go).
 	SwitchOff SwitchOffParts
+	// Suppression is the series resistor of the suggested suppression
+	// sized over the tolerances' corners; nil without a tolerances block
+	// or where no resistor is sized (analysis/switchoff.go).
+	Suppression *Suppression
 }
 
 // StudyCoil is the CoilStudy of coil block co with results cr in the

@@ -63,3 +63,123 @@ func switchOffParts(c calc.Coil, cr calc.CoilResult, cs float64) SwitchOffParts 
 	}
 	return p
 }
+
+// SwitchOffAt is what the switch of one coil block opens at one corner of
+// the tolerances: the supply, V, and the largest current, A
+// (calc.SwitchResult's Supply and WorstCurrent there).
+type SwitchOffAt struct{ Supply, Current float64 }
+
+// Suppression is the series resistor of a coil block's resistor–diode
+// suppression sized over its tolerances. The switch sees V_s + I_w·R_s
+// when it opens the largest current I_w (calc.SwitchResult), and both V_s
+// and I_w move from corner to corner — a cold corner's winding draws more
+// current —, so the resistor fitted is the E12 value at or below the
+// smallest (V_max − V_s)/I_w over the nominal design and every corner,
+// V_max the nominal design's clamp (the driver rating, or twice the stated
+// supply). The switch voltage with it is then within V_max at every
+// corner (up to the monotonicity the corners assume).
+type Suppression struct {
+	// ResistorMax is that smallest largest resistor, Ω, reached at
+	// MaxCorner (an index into WorstCase.Corners, −1: the nominal design).
+	ResistorMax float64
+	MaxCorner   int
+	// MaxAt is what the switch opens at MaxCorner.
+	MaxAt SwitchOffAt
+	// Nominal is the E12 value the nominal design alone fits (at or below
+	// its own largest resistor), Ω, and NominalWorst the largest switch
+	// voltage it would give over the corners, V, at NominalCorner.
+	Nominal, NominalWorst float64
+	NominalCorner         int
+	// Resistor is the E12 value fitted, at or below ResistorMax, Ω; NaN
+	// when some corner leaves no room above its supply (a bare
+	// freewheeling diode then).
+	Resistor float64
+	// SwitchVoltage is the largest V_s + I_w·R_s with Resistor (V_s alone
+	// without one) over the nominal design and the corners, V, at Corner,
+	// where the switch opens Current, A, from Supply, V.
+	SwitchVoltage, Current, Supply float64
+	Corner                         int
+	// Clamp is V_max, V, ClampFromRating says it is the driver rating,
+	// and Margin is Clamp − SwitchVoltage, V; Within says SwitchVoltage ≤
+	// Clamp.
+	Clamp           float64
+	ClampFromRating bool
+	Margin          float64
+	Within          bool
+}
+
+// suppressionOver sizes coil block k's series resistor over the nominal
+// switching s and the corners' (Corner.SwitchOff); nil where the nominal
+// design sizes no resistor.
+func suppressionOver(k int, s calc.SwitchResult, corners []Corner) *Suppression {
+	if math.IsNaN(s.Resistor) || !(s.Clamp > 0) {
+		return nil
+	}
+	p := &Suppression{ResistorMax: s.ResistorMax, MaxCorner: -1, Nominal: s.Resistor, NominalCorner: -1, Corner: -1,
+		Clamp: s.Clamp, ClampFromRating: s.ClampFromRating}
+	at := func(h int) SwitchOffAt {
+		if h < 0 {
+			return SwitchOffAt{s.Supply, s.WorstCurrent}
+		}
+		return corners[h].SwitchOff[k]
+	}
+	for h := range corners {
+		a := at(h)
+		if m := (s.Clamp - a.Supply) / a.Current; m < p.ResistorMax || math.IsNaN(m) {
+			p.ResistorMax, p.MaxCorner = m, h
+		}
+	}
+	p.MaxAt = at(p.MaxCorner)
+	p.Resistor = calc.E12AtOrBelow(p.ResistorMax)
+	voltage := func(a SwitchOffAt, rs float64) float64 {
+		if math.IsNaN(rs) {
+			return a.Supply
+		}
+		return a.Supply + a.Current*rs
+	}
+	p.NominalWorst, p.SwitchVoltage = voltage(at(-1), p.Nominal), voltage(at(-1), p.Resistor)
+	for h := range corners {
+		if v := voltage(at(h), p.Nominal); v > p.NominalWorst {
+			p.NominalWorst, p.NominalCorner = v, h
+		}
+		if v := voltage(at(h), p.Resistor); v > p.SwitchVoltage {
+			p.SwitchVoltage, p.Corner = v, h
+		}
+	}
+	a := at(p.Corner)
+	p.Current, p.Supply = a.Current, a.Supply
+	p.Margin = p.Clamp - p.SwitchVoltage
+	p.Within = p.SwitchVoltage <= p.Clamp
+	return p
+}
+
+// fitSuppression sizes every coil block's series resistor over the
+// corners (Suppression, kept in the coil studies) and fits it in the
+// switching of the results coils — the nominal design's, and the derived
+// corner's —, so the memo and the report give the switch voltage, decay
+// and energy with the resistor that holds at every corner. Nothing
+// happens without a worst case.
+func (wc *WorstCase) fitSuppression(coils []calc.CoilResult, studies []CoilStudy) {
+	if wc == nil {
+		return
+	}
+	wc.Suppression = make([]*Suppression, len(coils))
+	for k := range coils {
+		wc.Suppression[k] = suppressionOver(k, coils[k].Switch, wc.Corners)
+		if k < len(studies) {
+			studies[k].Suppression = wc.Suppression[k]
+		}
+	}
+	wc.fitted(coils)
+}
+
+// fitted puts the resistors sized over the corners into the switching of
+// coils.
+func (wc *WorstCase) fitted(coils []calc.CoilResult) {
+	for k, p := range wc.Suppression {
+		if p != nil && k < len(coils) {
+			cr := &coils[k]
+			cr.Switch = cr.Switch.WithResistor(cr.Inductance, cr.RHot, p.Resistor)
+		}
+	}
+}

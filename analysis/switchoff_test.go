@@ -4,6 +4,8 @@ import (
 	"math"
 	"os"
 	"testing"
+
+	"coilmemo/calc"
 )
 
 func exampleStudy(t *testing.T, name string) *Study {
@@ -66,5 +68,70 @@ func TestSwitchOffSpikeBounds(t *testing.T) {
 	st = exampleStudy(t, "search-coil.md")
 	if p := st.Coils[0].SwitchOff; !math.IsNaN(p.Peak) || !math.IsNaN(p.Ringing) {
 		t.Errorf("pick-up coil: %+v", p)
+	}
+}
+
+// e12Decade are the E12 values of one decade, IEC 60063:2015, Table 1.
+var e12Decade = []float64{1.0, 1.2, 1.5, 1.8, 2.2, 2.7, 3.3, 3.9, 4.7, 5.6, 6.8, 8.2}
+
+// Where tolerances are stated, the series resistor of the suggested
+// suppression is the largest E12 value that keeps the switch, which sees
+// V_s + I·R_s as it opens the largest current I, within the driver rating
+// at the nominal design and at every corner — each corner evaluated here
+// in full by calc.Evaluate, the E12 values searched from the standard's
+// table — and the study's switching, its JSON resistor, is that one.
+func TestSuppressionOverCorners(t *testing.T) {
+	st := exampleStudy(t, "torque-coil.md")
+	d, tol := st.Spec.Design, st.Spec.Tolerances
+	rating := d.Coils[0].DriverRating
+	type opens struct{ V, I float64 }
+	var at []opens
+	for h := range 1 << len(tol.Items) {
+		s := calc.Evaluate(CornerDesign(d, tol, uint32(h))).Coils[0].Switch
+		at = append(at, opens{s.Supply, s.WorstCurrent})
+	}
+	nom := calc.Evaluate(d).Coils[0].Switch
+	at = append(at, opens{nom.Supply, nom.WorstCurrent})
+	holds := func(r float64) (bool, float64) {
+		worst := 0.0
+		for _, o := range at {
+			worst = math.Max(worst, o.V+o.I*r)
+		}
+		return worst <= rating, worst
+	}
+	best := math.NaN()
+	for _, dec := range []float64{1, 10, 100, 1000} {
+		for _, v := range e12Decade {
+			if ok, _ := holds(v * dec); ok {
+				best = v * dec
+			}
+		}
+	}
+	s := st.Results.Coils[0].Switch
+	p := st.WorstCase.Suppression[0]
+	if p == nil || s.Resistor != best || p.Resistor != best {
+		t.Fatalf("fitted %g Ω (suppression %+v), want %g Ω", s.Resistor, p, best)
+	}
+	_, worst := holds(best)
+	if math.Abs(p.SwitchVoltage-worst) > 1e-12*worst || !p.Within || math.Abs(p.Margin-(rating-worst)) > 1e-9 {
+		t.Errorf("switch voltage over the corners %g V, want %g V (%+v)", p.SwitchVoltage, worst, p)
+	}
+	// The value the nominal design alone allows fails at a cold corner.
+	if ok, v := holds(nom.Resistor); ok || p.Nominal != nom.Resistor || math.Abs(p.NominalWorst-v) > 1e-12*v {
+		t.Errorf("nominal resistor %g Ω at the corners: %g V, held %v (%+v)", nom.Resistor, v, ok, p)
+	}
+	cr := st.Results.Coils[0]
+	if t10 := math.Ln10 * cr.Inductance / (cr.RHot + best); s.SwitchVoltage != nom.Supply+nom.WorstCurrent*best ||
+		math.Abs(s.ResistorTime10-t10) > 1e-12*t10 || s.ResistorMax != nom.ResistorMax {
+		t.Errorf("nominal switching with %g Ω: %+v", best, s)
+	}
+	// The derived corner carries the same resistor.
+	if wk := st.WorstCase.Derived; wk == nil || wk.Results.Coils[0].Switch.Resistor != best {
+		t.Errorf("derived corner's resistor: %+v", wk)
+	}
+	// Without tolerances the nominal sizing stands.
+	st = exampleStudy(t, "valve-actuator.md")
+	if st.WorstCase != nil || st.Coils[0].Suppression != nil || st.Results.Coils[0].Switch.Resistor != calc.E12AtOrBelow(st.Results.Coils[0].Switch.ResistorMax) {
+		t.Errorf("valve actuator: %+v", st.Results.Coils[0].Switch)
 	}
 }

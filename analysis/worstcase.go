@@ -35,6 +35,9 @@ type WorstCase struct {
 	// Exact is set when every evaluation ran calc.Evaluate in full
 	// (a limit needed a result the quick evaluation leaves out).
 	Exact bool
+	// Suppression is each coil block's series resistor sized over the
+	// corners (nil for a block that sizes none), in spec order.
+	Suppression []*Suppression
 }
 
 // Corner is one combination of extremes: bit t of High set takes
@@ -44,6 +47,8 @@ type Corner struct {
 	Design calc.Design
 	Values []float64 // per headline result, SI
 	Limit  []float64 // per limit, the computed value, SI
+	// SwitchOff is what each coil block's switch opens there.
+	SwitchOff []SwitchOffAt
 }
 
 // WorstResult is one headline result over the corners. CornerMin and
@@ -251,6 +256,7 @@ func quickEvaluate(d calc.Design, excess []float64) calc.Results {
 type evaluation struct {
 	values, limits []float64
 	pass           bool
+	switchOff      []SwitchOffAt
 	// excess is each coil's cycle peak above its steady duty-averaged
 	// temperature, K (0 without an on/off cycle).
 	excess []float64
@@ -274,6 +280,9 @@ func evaluateFor(d calc.Design, quantities []string, exact bool, excess []float6
 	}
 	for _, q := range quantities {
 		ev.values = append(ev.values, LimitValue(calc.Limit{Quantity: q}, d, r))
+	}
+	for _, cr := range r.Coils {
+		ev.switchOff = append(ev.switchOff, SwitchOffAt{Supply: cr.Switch.Supply, Current: cr.Switch.WorstCurrent})
 	}
 	for _, l := range JudgeLimits(d, r) {
 		ev.limits = append(ev.limits, l.Computed)
@@ -375,7 +384,7 @@ func AnalyseWorstCase(s *spec.Spec, nominal calc.Results, limits []LimitResult) 
 
 	nomEv := evaluateFor(d, quantities, wc.Exact, nil)
 	for h := range nc {
-		wc.Corners = append(wc.Corners, Corner{High: uint32(h), Design: designs[h], Values: evs[h].values, Limit: evs[h].limits})
+		wc.Corners = append(wc.Corners, Corner{High: uint32(h), Design: designs[h], Values: evs[h].values, Limit: evs[h].limits, SwitchOff: evs[h].switchOff})
 	}
 	for r, q := range quantities {
 		wr := WorstResult{Quantity: q, Nominal: nomEv.values[r], Min: nomEv.values[r], Max: nomEv.values[r], CornerMin: -1, CornerMax: -1}
@@ -588,6 +597,7 @@ func (wc *WorstCase) Derivation(limits []LimitResult) *WorstCorner {
 	}
 	wk.Design = wc.Corners[wk.Corner].Design
 	wk.Results = calc.Evaluate(wk.Design)
+	wc.fitted(wk.Results.Coils) // the resistor sized over every corner
 	for i, c := range wk.Design.Coils {
 		wk.Coils = append(wk.Coils, StudyCoil(c, wk.Results.Coils[i], wk.Design.Conditions))
 	}

@@ -82,6 +82,10 @@ type SwitchResult struct {
 	// rating − SwitchVoltage, V (NaN without a rating).
 	WithinRating bool
 	RatingMargin float64
+	// ColdResistance is the winding's resistance when the switch opens
+	// WorstCurrent, Ω (the cold one under voltage drive): the resistance
+	// the cold decay and the worst energy split are taken at.
+	ColdResistance float64
 }
 
 // Switching returns the switching figures of a coil block of inductance L
@@ -137,25 +141,54 @@ func SwitchingWorst(L, R, Rw, I, Iw, V, tOff, rating float64, stated bool) Switc
 	case stated:
 		s.Clamp = 2 * s.Supply
 	}
+	s.ColdResistance = Rw
+	rs := n
 	if s.Clamp > s.Supply && Iw > 0 && Rw >= 0 && !math.IsNaN(E12AtOrBelow((s.Clamp-s.Supply)/Iw)) {
 		s.ResistorMax = (s.Clamp - s.Supply) / Iw
-		s.Resistor = E12AtOrBelow(s.ResistorMax)
-		s.ResistorDecay = L / (R + s.Resistor)
+		rs = E12AtOrBelow(s.ResistorMax)
+	}
+	return s.WithResistor(L, R, rs)
+}
+
+// WithResistor returns s with the series resistor of the resistor–diode
+// suppression fixed at Rs, Ω (NaN: none, a bare freewheeling diode), for a
+// coil of inductance L (H) and hot resistance R (Ω): the resistor's decay
+// L/(R + R_s), its time to 10 %, the energy it absorbs at the operating
+// point and, opened cold at WorstCurrent, L/(R_w + R_s) and
+// ½ L I_w² R_s/(R_w + R_s) (R_w = ColdResistance), the switch voltage
+// Supply + I_w·R_s and its margin to the rating. ResistorMax, the largest
+// resistor s itself allows, is kept: a resistor fitted for several
+// operating points (the corners of a tolerance study) may lie below the E12
+// value at or below it. With a resistor, the switch voltage is held to
+// the clamp only against the last bit of rounding (Rs within a part in 10⁹
+// of ResistorMax).
+func (s SwitchResult) WithResistor(L, R, Rs float64) SwitchResult {
+	n := math.NaN()
+	s.Resistor, s.ResistorDecay, s.ResistorTime10, s.ResistorEnergy = n, n, n, n
+	s.ResistorEnergyWorst, s.ResistorDecayCold = n, n
+	s.SwitchVoltage, s.WithinRating, s.RatingMargin = n, false, n
+	Iw, Rw := s.WorstCurrent, s.ColdResistance
+	if Rs >= 0 && !math.IsInf(Rs, 0) && Iw > 0 {
+		s.Resistor = Rs
+		s.ResistorDecay = L / (R + Rs)
 		s.ResistorTime10 = math.Ln10 * s.ResistorDecay
-		s.ResistorEnergy = s.Energy * s.Resistor / (R + s.Resistor)
-		s.ResistorEnergyWorst = L * Iw * Iw / 2 * s.Resistor / (Rw + s.Resistor)
-		s.ResistorDecayCold = L / (Rw + s.Resistor)
-		// At most Supply + Iw·(Clamp − Supply)/Iw, the clamp; kept so
-		// against the last bit of rounding when the maximum is itself an
-		// E12 value.
-		s.SwitchVoltage = math.Min(s.Supply+Iw*s.Resistor, s.Clamp)
-	} else if !math.IsNaN(s.Supply) && !math.IsInf(s.Supply, 0) && (Iw > 0 || I == 0) {
+		s.ResistorEnergy = s.Energy * Rs / (R + Rs)
+		s.ResistorEnergyWorst = L * Iw * Iw / 2 * Rs / (Rw + Rs)
+		s.ResistorDecayCold = L / (Rw + Rs)
+		s.SwitchVoltage = s.Supply + Iw*Rs
+		if Rs <= s.ResistorMax*(1+1e-9) {
+			// At most Supply + Iw·(Clamp − Supply)/Iw, the clamp; kept so
+			// against the last bit of rounding when the maximum is itself
+			// an E12 value.
+			s.SwitchVoltage = math.Min(s.SwitchVoltage, s.Clamp)
+		}
+	} else if !math.IsNaN(s.Supply) && !math.IsInf(s.Supply, 0) && Iw >= 0 {
 		// A freewheeling diode alone: the switch sees the supply.
 		s.SwitchVoltage = s.Supply
 	}
-	if rating > 0 {
-		s.RatingMargin = rating - s.SwitchVoltage
-		s.WithinRating = s.SwitchVoltage <= rating
+	if s.ClampFromRating {
+		s.RatingMargin = s.Clamp - s.SwitchVoltage
+		s.WithinRating = s.SwitchVoltage <= s.Clamp
 	}
 	return s
 }

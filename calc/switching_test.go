@@ -117,3 +117,32 @@ func TestValveSwitchingAtColdCurrent(t *testing.T) {
 	checkRel(t, "current drive E12 resistor, 47 Ω of 50 Ω", i.Resistor, 47, 0)
 	checkRel(t, "current drive switch voltage", i.SwitchVoltage, 5+0.5*47, 1e-15)
 }
+
+// A resistor fitted below the one a switching sizes for itself (one sized
+// for several operating points) changes the resistor's figures and the
+// switch voltage, V_s + I_w R_s, and keeps the largest resistor; no
+// resistor leaves a bare freewheeling diode, the switch at the supply.
+func TestWithResistor(t *testing.T) {
+	L, R, Rw := 0.05, 69.0, 53.8
+	s := SwitchingWorst(L, R, Rw, 0.348, 0.446, 24, 10e-6, 60, true)
+	if again := s.WithResistor(L, R, s.Resistor); again != s {
+		t.Errorf("refitting the sized resistor: %+v, want %+v", again, s)
+	}
+	f := s.WithResistor(L, R, 47)
+	checkRel(t, "R_max kept", f.ResistorMax, s.ResistorMax, 0)
+	checkRel(t, "switch voltage with 47 Ω", f.SwitchVoltage, 24+0.446*47, 1e-15)
+	checkRel(t, "margin with 47 Ω", f.RatingMargin, 60-24-0.446*47, 1e-14)
+	checkRel(t, "decay with 47 Ω", f.ResistorDecay, L/(R+47), 1e-15)
+	checkRel(t, "cold decay with 47 Ω", f.ResistorDecayCold, L/(Rw+47), 1e-15)
+	checkRel(t, "worst energy in 47 Ω", f.ResistorEnergyWorst, L*0.446*0.446/2*47/(Rw+47), 1e-15)
+	if !f.WithinRating {
+		t.Errorf("47 Ω: %+v", f)
+	}
+	// Above the largest resistor: over the rating, and said so.
+	if o := s.WithResistor(L, R, 100); o.WithinRating || o.SwitchVoltage != 24+0.446*100 {
+		t.Errorf("100 Ω: %+v", o)
+	}
+	if d := s.WithResistor(L, R, math.NaN()); !math.IsNaN(d.Resistor) || d.SwitchVoltage != 24 || !math.IsNaN(d.ResistorDecay) {
+		t.Errorf("no resistor: %+v", d)
+	}
+}

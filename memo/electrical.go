@@ -62,8 +62,9 @@ func (c *composer) coilSwitching(i int) {
 			Numbers:  fmt.Sprintf(`%s^2 \cdot %s`, Paren(Q(math.Abs(cr.Current), "A", 4)), Q(math.Abs(ip.Slope), "H/m", 4)),
 			Result:   Q(math.Abs(cr.PairForce), "N", 3)})
 	}
-	c.derive(switchingSteps(co, cr, &c.j.Coils[i])...)
-	c.para(suppressionText(co, cr, c.j.Coils[i].SwitchOff))
+	fo := fittedOverOf(c.j, i)
+	c.derive(switchingSteps(co, cr, &c.j.Coils[i], fo)...)
+	c.para(suppressionText(co, cr, c.j.Coils[i].SwitchOff, fo))
 	if cr.AC.Frequency > 0 {
 		c.derive(acSteps(co, cr)...)
 		c.para(acText(co, cr, c.j.Coils[i].Kinds))
@@ -185,20 +186,44 @@ func selfInductanceSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStud
 	return steps
 }
 
+// fittedOver is a coil block's series resistor sized over the
+// tolerances' corners, with the codes of the corners it names.
+type fittedOver struct {
+	*analysis.Suppression
+	corners        int    // how many corners
+	maxAt, worstAt string // MaxCorner and Corner as cornerCode writes them
+	// inCorner is set for a corner's derivation: the resistor is the one
+	// sized over every corner, given, not derived again.
+	inCorner bool
+}
+
+// fittedOver is coil block i's resistor sized over the corners; nil
+// without a tolerances block or where no resistor is sized.
+func fittedOverOf(j *analysis.Study, i int) *fittedOver {
+	wc := j.WorstCase
+	if wc == nil || i >= len(wc.Suppression) || wc.Suppression[i] == nil {
+		return nil
+	}
+	p := wc.Suppression[i]
+	return &fittedOver{Suppression: p, corners: len(wc.Corners), maxAt: cornerCode(wc, p.MaxCorner), worstAt: cornerCode(wc, p.Corner)}
+}
+
 // switchingSteps derive the time constant, rise time, energy, the
 // unsuppressed switch-off voltage and the suppression figures; with the
 // coil's study cs (nil: not derived) also the winding's self-capacitance
-// and the bound it sets on the unsuppressed spike (ringingSteps).
-func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []Step {
+// and the bound it sets on the unsuppressed spike (ringingSteps); with fo
+// (nil: no tolerances) the series resistor sized over the corners and the
+// switch voltage with it at the worst one.
+func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, fo *fittedOver) []Step {
 	s := cr.Switch
 	L, R, I := Q(cr.Inductance, "H", 4), Q(cr.RHot, "Ω", 4), Q(math.Abs(cr.Current), "A", 4)
 	var steps []Step
 	if math.IsNaN(s.TimeConstant) {
 		return nil
 	}
-	supply := "the stated supply voltage"
+	supply := "the supply Vₛ (the stated supply voltage)"
 	if co.Drive == calc.CurrentDrive {
-		supply = "I·R, the least compliance voltage of the current source"
+		supply = "the voltage Vₛ the current source must deliver across the coil (I·R, its least compliance voltage)"
 	}
 	steps = append(steps,
 		Step{What: "Electrical time constant at the hot resistance", Symbolic: `\tau = \frac{L}{R}`,
@@ -211,12 +236,12 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []
 		if cold := math.Abs(s.WorstCurrent); cold > math.Abs(cr.Current) {
 			// A voltage-driven coil switched off while still cold opens its
 			// larger switch-on current: the worst spike.
-			steps = append(steps, Step{What: fmt.Sprintf("Voltage across a switch that opens in %s with no suppression, at the cold switch-on current (the worst case; at the hot current it is %s): the coil's L·di/dt on top of the supply Vₛ (%s)", Eng(s.SwitchOff, "s", 3), Eng(s.Spike, "V", 3), supply),
+			steps = append(steps, Step{What: fmt.Sprintf("Voltage across a switch that opens in %s with no suppression, at the cold switch-on current (the worst case; at the hot current it is %s): the coil's L·di/dt on top of %s", Eng(s.SwitchOff, "s", 3), Eng(s.Spike, "V", 3), supply),
 				Symbolic: `V_{sw} = \frac{L I_c}{t_{\mathrm{off}}} + V_s`,
 				Numbers:  fmt.Sprintf(`\frac{%s \cdot %s}{%s} + %s`, L, Q(cold, "A", 4), Q(s.SwitchOff, "s", 3), Q(s.Supply, "V", 3)),
 				Result:   Q(s.SpikeWorst, "V", 3)})
 		} else {
-			steps = append(steps, Step{What: fmt.Sprintf("Voltage across a switch that opens in %s with no suppression: the coil's L·di/dt on top of the supply Vₛ (%s)", Eng(s.SwitchOff, "s", 3), supply),
+			steps = append(steps, Step{What: fmt.Sprintf("Voltage across a switch that opens in %s with no suppression: the coil's L·di/dt on top of %s", Eng(s.SwitchOff, "s", 3), supply),
 				Symbolic: `V_{sw} = \frac{L I}{t_{\mathrm{off}}} + V_s`,
 				Numbers:  fmt.Sprintf(`\frac{%s \cdot %s}{%s} + %s`, L, I, Q(s.SwitchOff, "s", 3), Q(s.Supply, "V", 3)),
 				Result:   Q(s.Spike, "V", 3)})
@@ -225,7 +250,7 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []
 	if cs != nil {
 		steps = append(steps, ringingSteps(co, cr, cs)...)
 	}
-	steps = append(steps, Step{What: "Freewheeling diode across the coil: the switch sees about the supply; the current decays through the coil's own resistance to 10 %",
+	steps = append(steps, Step{What: "Freewheeling diode across the coil: the switch sees about " + sourceOf(co) + "; the current decays through the coil's own resistance to 10 %",
 		Symbolic: `t_{10} = \frac{L}{R} \ln 10`, Numbers: fmt.Sprintf(`%s \cdot \ln 10`, Q(s.DiodeDecay, "s", 3)), Result: Q(s.DiodeTime10, "s", 3)})
 	if !math.IsNaN(s.Resistor) {
 		vmax := "twice the supply, taken as the driver's limit"
@@ -234,13 +259,32 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []
 		}
 		rs := Q(s.Resistor, "Ω", 2) // an E12 value: two figures are exact
 		steps = append(steps,
-			Step{What: fmt.Sprintf("Diode with a series resistor Rₛ: the largest resistor, the one that would hold the switch at %s (%s) when it opens the largest current, the cold switch-on current", Eng(s.Clamp, "V", 3), vmax),
+			Step{What: fmt.Sprintf("Diode with a series resistor Rₛ: the largest resistor, the one that would hold the switch at %s (%s) when it opens the largest current, %s", Eng(s.Clamp, "V", 3), vmax, largestCurrent(co)),
 				Symbolic: `R_{s,\max} = \frac{V_{\mathrm{max}} - V_s}{I_c}`,
 				Numbers:  fmt.Sprintf(`\frac{%s - %s}{%s}`, Q(s.Clamp, "V", 3), Q(s.Supply, "V", 3), Q(math.Abs(s.WorstCurrent), "A", 4)), Result: Q(s.ResistorMax, "Ω", 3)},
-			Step{What: "Resistor fitted: the standard value of the E12 series (IEC 60063) at or below the largest, so that the switch keeps a margin below its limit",
-				Symbolic: `R_s`, Numbers: Words("E12 value at or below") + `\ ` + Q(s.ResistorMax, "Ω", 3), Result: rs},
-			Step{What: switchRatingWords(s), Symbolic: `V_{sw} = V_s + I_c R_s`,
-				Numbers: fmt.Sprintf(`%s + %s \cdot %s`, Q(s.Supply, "V", 3), Q(math.Abs(s.WorstCurrent), "A", 4), rs), Result: Q(s.SwitchVoltage, "V", 3)},
+		)
+		switch {
+		case fo != nil && fo.inCorner:
+			steps = append(steps, Step{What: "Resistor fitted: the E12 value sized over every corner (above)", Symbolic: `R_s = ` + rs})
+		case fo == nil:
+			steps = append(steps, Step{What: "Resistor fitted: the standard value of the E12 series (IEC 60063) at or below the largest, so that the switch keeps a margin below its limit",
+				Symbolic: `R_s`, Numbers: Words("E12 value at or below") + `\ ` + Q(s.ResistorMax, "Ω", 3), Result: rs})
+		default:
+			a := fo.MaxAt
+			steps = append(steps,
+				Step{What: fmt.Sprintf("Largest resistor over the tolerances: the same quotient is smallest at corner %s of the %d (see Worst case), where the switch opens %s from %s", fo.maxAt, fo.corners, Eng(a.Current, "A", 4), Eng(a.Supply, "V", 3)),
+					Symbolic: `R_{s,\mathrm{tol}} = \min \frac{V_{\mathrm{max}} - V_s}{I_c}`,
+					Numbers:  fmt.Sprintf(`\frac{%s - %s}{%s}`, Q(fo.Clamp, "V", 3), Q(a.Supply, "V", 3), Q(a.Current, "A", 4)), Result: Q(fo.ResistorMax, "Ω", 3)},
+				Step{What: fittedWords(fo), Symbolic: `R_s`, Numbers: Words("E12 value at or below") + `\ ` + Q(fo.ResistorMax, "Ω", 3), Result: rs})
+		}
+		steps = append(steps,
+			Step{What: switchRatingWords(s, largestCurrent(co)), Symbolic: `V_{sw} = V_s + I_c R_s`,
+				Numbers: fmt.Sprintf(`%s + %s \cdot %s`, Q(s.Supply, "V", 3), Q(math.Abs(s.WorstCurrent), "A", 4), rs), Result: Q(s.SwitchVoltage, "V", 3)})
+		if fo != nil && !fo.inCorner {
+			steps = append(steps, Step{What: cornerRatingWords(fo), Symbolic: `V_{sw} = V_s + I_c R_s`,
+				Numbers: fmt.Sprintf(`%s + %s \cdot %s`, Q(fo.Supply, "V", 3), Q(fo.Current, "A", 4), rs), Result: Q(fo.SwitchVoltage, "V", 3)})
+		}
+		steps = append(steps,
 			Step{What: "Decay to 10 % through the resistor and diode", Symbolic: `t_{10} = \frac{L}{R + R_s} \ln 10`,
 				Numbers: fmt.Sprintf(`\frac{%s}{%s + %s} \ln 10`, L, R, rs), Result: Q(s.ResistorTime10, "s", 3)},
 			Step{What: "Energy the resistor absorbs at each switch-off (the rest is spent in the coil's own resistance)", Symbolic: `W_{R_s} = W \frac{R_s}{R + R_s}`,
@@ -273,7 +317,7 @@ func ringingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []St
 	var what string
 	switch {
 	case p.Assumed:
-		what = fmt.Sprintf("The most an unsuppressed switch can see, however fast it opens; a switch opening in a time t longer than √(L Cₛ) = %s sees less, about L·I/t above the supply", tx)
+		what = fmt.Sprintf("The most an unsuppressed switch can see, however fast it opens; a switch opening in a time t longer than √(L Cₛ) = %s sees less, about L·I/t above %s", tx, sourceOf(co))
 	case p.Bounded:
 		what = fmt.Sprintf("The most an unsuppressed switch can see: below the estimate for a switch that opens in %s, which is faster than √(L Cₛ) = %s, so this bound governs the spike", Eng(p.SwitchOff, "s", 3), tx)
 	default:
@@ -284,7 +328,7 @@ func ringingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []St
 }
 
 // suppressionText is the suggested suppression in words.
-func suppressionText(co calc.Coil, cr calc.CoilResult, p analysis.SwitchOffParts) string {
+func suppressionText(co calc.Coil, cr calc.CoilResult, p analysis.SwitchOffParts, fo *fittedOver) string {
 	s := cr.Switch
 	var b strings.Builder
 	ring := !math.IsNaN(p.RingingSwitch)
@@ -298,20 +342,20 @@ func suppressionText(co calc.Coil, cr calc.CoilResult, p analysis.SwitchOffParts
 	case !p.Assumed:
 		fmt.Fprintf(&b, "Unsuppressed, a switch opening in %s would see about %s. ", Eng(p.SwitchOff, "s", 3), Eng(p.Peak, "V", 3))
 	case ring:
-		fmt.Fprintf(&b, "The unsuppressed spike depends on how fast the switch opens: about L·I/t above the supply for a switch opening in t, and never more than about %s, where the winding's own capacitance takes up the stored energy (reached by a switch opening faster than %s). ",
-			Eng(p.RingingSwitch, "V", 3), Eng(p.Crossover, "s", 3))
+		fmt.Fprintf(&b, "The unsuppressed spike depends on how fast the switch opens: about L·I/t above %s for a switch opening in t, and never more than about %s, where the winding's own capacitance takes up the stored energy (reached by a switch opening faster than %s). ",
+			sourceOf(co), Eng(p.RingingSwitch, "V", 3), Eng(p.Crossover, "s", 3))
 	default:
-		fmt.Fprintf(&b, "The unsuppressed spike depends on how fast the switch opens: about L·I/t above the supply for a switch opening in t, some %s for a fast semiconductor switch opening in %s. ",
-			Eng(p.Ramp, "V", 3), Eng(p.SwitchOff, "s", 1))
+		fmt.Fprintf(&b, "The unsuppressed spike depends on how fast the switch opens: about L·I/t above %s for a switch opening in t, some %s for a fast semiconductor switch opening in %s. ",
+			sourceOf(co), Eng(p.Ramp, "V", 3), Eng(p.SwitchOff, "s", 1))
 	}
-	fmt.Fprintf(&b, "Suggested suppression: a freewheeling diode across the coil rated for at least %s continuous, which keeps the switch near the %s supply and lets the current decay to 10 %% in %s",
-		Eng(math.Max(math.Abs(cr.Current), math.Abs(s.WorstCurrent)), "A", 3), Eng(s.Supply, "V", 3), Eng(s.DiodeTime10, "s", 3))
+	fmt.Fprintf(&b, "Suggested suppression: a freewheeling diode across the coil rated for at least %s continuous, which keeps the switch near %s and lets the current decay to 10 %% in %s",
+		Eng(math.Max(math.Abs(cr.Current), math.Abs(s.WorstCurrent)), "A", 3), sourceAt(co, s.Supply), Eng(s.DiodeTime10, "s", 3))
 	switch {
 	case !math.IsNaN(s.Resistor):
-		fmt.Fprintf(&b, "; where a faster release matters, a resistor in series with the diode — at most %s; the E12 value %s is chosen — shortens the decay to %s and holds the switch at %s, within %s (the diode drop of about 0.7 V is neglected).",
-			Eng(s.ResistorMax, "Ω", 3), Eng(s.Resistor, "Ω", 2), Eng(s.ResistorTime10, "s", 3), Eng(s.SwitchVoltage, "V", 3), Eng(s.Clamp, "V", 3))
+		fmt.Fprintf(&b, "; where a faster release matters, a resistor in series with the diode — %s; the E12 value %s is chosen — shortens the decay to %s and holds the switch at %s, within %s (the diode drop of about 0.7 V is neglected).",
+			resistorBound(s, fo), Eng(s.Resistor, "Ω", 2), Eng(s.ResistorTime10, "s", 3), switchHeldAt(s, fo), Eng(s.Clamp, "V", 3))
 	case math.IsNaN(s.Clamp):
-		b.WriteString(". A resistor Rₛ in series with the diode would speed the decay; the switch then sees the supply plus I·Rₛ, so Rₛ is at most (Vₘₐₓ − Vₛ)/I for a driver that withstands Vₘₐₓ, and the E12 value at or below that is fitted.")
+		fmt.Fprintf(&b, ". A resistor Rₛ in series with the diode would speed the decay; the switch then sees %s plus I·Rₛ, so Rₛ is at most (Vₘₐₓ − Vₛ)/I for a driver that withstands Vₘₐₓ, and the E12 value at or below that is fitted.", sourceOf(co))
 	default:
 		b.WriteString(".")
 	}
@@ -496,19 +540,57 @@ func (c *composer) gradientForce() {
 
 // switchRatingWords says what the switch voltage with the suggested
 // resistor is compared with.
-func switchRatingWords(s calc.SwitchResult) string {
+// fittedWords says which resistor is fitted over the tolerances, and why
+// where the nominal design alone would fit a larger one.
+func fittedWords(fo *fittedOver) string {
+	w := "Resistor fitted: the standard value of the E12 series (IEC 60063) at or below the largest over the tolerances, so that the switch stays within its limit at every corner"
+	if fo.Nominal > fo.Resistor {
+		w += fmt.Sprintf("; the %s fitted for the nominal design alone would put the switch at %s at corner %s, above %s", Eng(fo.Nominal, "Ω", 2), Eng(fo.NominalWorst, "V", 3), cornerOf(fo, fo.NominalCorner), Eng(fo.Clamp, "V", 3))
+	}
+	return w
+}
+
+// cornerOf writes corner h of fo's study: its code, or "nominal".
+func cornerOf(fo *fittedOver, h int) string {
+	switch h {
+	case fo.MaxCorner:
+		return fo.maxAt
+	case fo.Corner:
+		return fo.worstAt
+	}
+	return "nominal"
+}
+
+// cornerRatingWords words the switch voltage with the fitted resistor at
+// the corner where it is largest.
+func cornerRatingWords(fo *fittedOver) string {
+	where := fmt.Sprintf("at corner %s, where it is largest", fo.worstAt)
+	if fo.Corner < 0 {
+		where = "largest at the nominal design, above every corner's"
+	}
+	limit := Eng(fo.Clamp, "V", 3) + ", twice the supply"
+	if fo.ClampFromRating {
+		limit = "the driver rating of " + Eng(fo.Clamp, "V", 3)
+	}
+	if fo.Within {
+		return fmt.Sprintf("Voltage across the switch with the diode and resistor, %s: within %s (margin %s)", where, limit, Eng(fo.Margin, "V", 2))
+	}
+	return fmt.Sprintf("Voltage across the switch with the diode and resistor, %s: ABOVE %s", where, limit)
+}
+
+func switchRatingWords(s calc.SwitchResult, at string) string {
 	switch {
 	case !s.ClampFromRating:
-		return "Voltage across the switch with the diode and resistor, at the cold switch-on current"
+		return "Voltage across the switch with the diode and resistor, at " + at
 	case s.WithinRating:
-		return fmt.Sprintf("Voltage across the switch with the diode and resistor, at the cold switch-on current: within the driver rating of %s (margin %s)", Eng(s.Clamp, "V", 3), Eng(s.RatingMargin, "V", 2))
+		return fmt.Sprintf("Voltage across the switch with the diode and resistor, at %s: within the driver rating of %s (margin %s)", at, Eng(s.Clamp, "V", 3), Eng(s.RatingMargin, "V", 2))
 	}
-	return fmt.Sprintf("Voltage across the switch with the diode and resistor, at the cold switch-on current: ABOVE the driver rating of %s", Eng(s.Clamp, "V", 3))
+	return fmt.Sprintf("Voltage across the switch with the diode and resistor, at %s: ABOVE the driver rating of %s", at, Eng(s.Clamp, "V", 3))
 }
 
 // switchOffCaution words the finding of an unsuppressed switch-off spike
 // with the remedies the analysis sized.
-func switchOffCaution(f analysis.Finding, cr calc.CoilResult, p analysis.SwitchOffParts, name string) doc.Callout {
+func switchOffCaution(f analysis.Finding, co calc.Coil, cr calc.CoilResult, p analysis.SwitchOffParts, fo *fittedOver, name string) doc.Callout {
 	s := cr.Switch
 	spike := fmt.Sprintf("A fast semiconductor switch, opening in about %s with no suppression, would see about %s", Eng(f.SwitchOff, "s", 1), Eng(f.Value, "V", 3))
 	if !f.Assumed {
@@ -518,19 +600,66 @@ func switchOffCaution(f analysis.Finding, cr calc.CoilResult, p analysis.SwitchO
 		spike += fmt.Sprintf(", the most the winding's own capacitance allows as it takes up the stored energy (L·I/t alone would give %s)", Eng(p.Ramp, "V", 3))
 	}
 	spike += "."
-	diode := fmt.Sprintf("A freewheeling diode across the coil, rated for at least %s, keeps the switch near the %s supply; the current then decays to 10 %% in %s.",
-		Eng(math.Max(math.Abs(cr.Current), math.Abs(s.WorstCurrent)), "A", 3), Eng(s.Supply, "V", 3), Eng(s.DiodeTime10, "s", 3))
+	diode := fmt.Sprintf("A freewheeling diode across the coil, rated for at least %s, keeps the switch near %s; the current then decays to 10 %% in %s.",
+		Eng(math.Max(math.Abs(cr.Current), math.Abs(s.WorstCurrent)), "A", 3), sourceAt(co, s.Supply), Eng(s.DiodeTime10, "s", 3))
 	resistor := ""
 	if math.IsNaN(s.Clamp) {
-		resistor = "A resistor Rₛ in series with the diode speeds the decay; the switch then sees the supply plus the current times Rₛ, so Rₛ is at most the driver's rating less the supply, divided by the current."
+		resistor = fmt.Sprintf("A resistor Rₛ in series with the diode speeds the decay; the switch then sees %s plus the current times Rₛ, so Rₛ is at most the driver's rating less that voltage, divided by the current.", sourceOf(co))
 	}
 	if !math.IsNaN(s.Resistor) {
-		resistor = fmt.Sprintf("For a faster release, a resistor in series with the diode — at most %s; the E12 value %s is chosen — holds the switch at %s, within %s, and shortens the decay to %s.",
-			Eng(s.ResistorMax, "Ω", 3), Eng(s.Resistor, "Ω", 2), Eng(s.SwitchVoltage, "V", 3), Eng(s.Clamp, "V", 3), Eng(s.ResistorTime10, "s", 3))
+		resistor = fmt.Sprintf("For a faster release, a resistor in series with the diode — %s; the E12 value %s is chosen — holds the switch at %s, within %s, and shortens the decay to %s.",
+			resistorBound(s, fo), Eng(s.Resistor, "Ω", 2), switchHeldAt(s, fo), Eng(s.Clamp, "V", 3), Eng(s.ResistorTime10, "s", 3))
 	}
 	return doc.Callout{Severity: doc.Caution, Title: "Switch-off voltage, " + name,
 		Spans: []doc.Span{{Text: templates.Text("caution-inductive", map[string]string{
 			"Energy": storedText(s), "Spike": spike, "Diode": diode, "Resistor": resistor})}}}
+}
+
+// resistorBound words the most the series resistor may be: the nominal
+// design's, and with tolerances the smaller that holds at every corner.
+func resistorBound(s calc.SwitchResult, fo *fittedOver) string {
+	if fo == nil {
+		return "at most " + Eng(s.ResistorMax, "Ω", 3)
+	}
+	return fmt.Sprintf("at most %s at nominal and %s at corner %s of the tolerances", Eng(s.ResistorMax, "Ω", 3), Eng(fo.ResistorMax, "Ω", 3), fo.maxAt)
+}
+
+// switchHeldAt words the switch voltage with the fitted resistor: at
+// nominal, and with tolerances at the worst corner.
+func switchHeldAt(s calc.SwitchResult, fo *fittedOver) string {
+	if fo == nil || fo.Corner < 0 {
+		return Eng(s.SwitchVoltage, "V", 3)
+	}
+	return fmt.Sprintf("%s (%s at corner %s)", Eng(s.SwitchVoltage, "V", 3), Eng(fo.SwitchVoltage, "V", 3), fo.worstAt)
+}
+
+// largestCurrent names the largest current the switch opens: the cold
+// switch-on current under voltage drive, the imposed one under current
+// drive.
+func largestCurrent(co calc.Coil) string {
+	if co.Drive == calc.CurrentDrive {
+		return "the imposed current"
+	}
+	return "the cold switch-on current"
+}
+
+// sourceOf names the voltage the switch sees beside the coil's own
+// L·di/dt: the supply under voltage drive; under current drive the
+// voltage the current source must deliver across the coil, its
+// compliance voltage.
+func sourceOf(co calc.Coil) string {
+	if co.Drive == calc.CurrentDrive {
+		return "the current source's compliance voltage"
+	}
+	return "the supply"
+}
+
+// sourceAt is sourceOf with its value v, V.
+func sourceAt(co calc.Coil, v float64) string {
+	if co.Drive == calc.CurrentDrive {
+		return fmt.Sprintf("the %s the current source must deliver across the coil (its compliance voltage)", Eng(v, "V", 3))
+	}
+	return fmt.Sprintf("the %s supply", Eng(v, "V", 3))
 }
 
 // storedText is the energy the coil stores at full current, and at the

@@ -44,9 +44,9 @@ func Cautions(j *analysis.Study) []doc.Callout {
 					"Temperature": hotText(cr, cr.Temperature)})}}})
 		case analysis.HazardousVoltage:
 			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Hazardous voltage, " + name,
-				Spans: []doc.Span{{Text: templates.Text("caution-voltage", map[string]string{"Voltage": Eng(f.Value, "V", 3)})}}})
+				Spans: []doc.Span{{Text: templates.Text("caution-voltage", map[string]string{"What": voltageWhat(co), "Voltage": Eng(f.Value, "V", 3)})}}})
 		case analysis.SwitchOffVoltage:
-			out = append(out, switchOffCaution(f, cr, j.Coils[f.Coil].SwitchOff, name))
+			out = append(out, switchOffCaution(f, co, cr, j.Coils[f.Coil].SwitchOff, fittedOverOf(j, f.Coil), name))
 		default:
 			out = append(out, kindCautions(j, f)...) // memo/core.go
 		}
@@ -307,4 +307,14 @@ func reachWords(u calc.Vec, coils int) (along, across string) {
 		return "along the coil's axis " + axisName(calc.Coil{Axis: u}), "in the coil's plane through the origin"
 	}
 	return "along the coils' common axis " + axisName(calc.Coil{Axis: u}), "in the plane through the origin across it"
+}
+
+// voltageWhat names the coil's terminal voltage in the hazardous-voltage
+// caution: the supply voltage under voltage drive, the voltage the current
+// source must deliver (its compliance voltage) under current drive.
+func voltageWhat(co calc.Coil) string {
+	if co.Drive == calc.CurrentDrive {
+		return "The voltage the current source must deliver across the coil (its compliance voltage)"
+	}
+	return "The supply voltage"
 }

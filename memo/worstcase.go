@@ -21,6 +21,16 @@ var worstNames = map[string]string{
 	"resistance": "Hot resistance", "switch-off-voltage": "Switch-off voltage",
 }
 
+// worstName is headline result q as the memo names it: the power, the
+// "power" limit quantity's, is averaged over the duty cycle, and says so
+// where some coil runs on one.
+func (c *composer) worstName(q string) string {
+	if q == "power" {
+		return powerLabel(c.j.Results)
+	}
+	return worstNames[q]
+}
+
 // worstValue formats an SI value of a limit quantity in its display unit.
 func worstValue(q string, v float64, sig int) string {
 	unit := displayUnit(spec.LimitQuantities[q].Unit)
@@ -104,7 +114,7 @@ func (c *composer) worstCase() {
 
 	rows = nil
 	for _, r := range wc.Results {
-		rows = append(rows, []doc.Cell{{Text: worstNames[r.Quantity]},
+		rows = append(rows, []doc.Cell{{Text: c.worstName(r.Quantity)},
 			{Text: worstValue(r.Quantity, r.Min, 4)}, {Text: cornerCode(wc, r.CornerMin)},
 			{Text: worstValue(r.Quantity, r.Nominal, 4)},
 			{Text: worstValue(r.Quantity, r.Max, 4)}, {Text: cornerCode(wc, r.CornerMax)}})
@@ -129,9 +139,57 @@ func (c *composer) worstCase() {
 			Header: []string{"Requirement", "Nominal", "Worst", "at corner", "Corners missed", "Status"},
 			Rows:   rows, Widths: []float64{1.8, 1.2, 1.2, 0.9, 1.1, 0.8}, Align: []doc.Align{doc.Left, doc.Right, doc.Right, doc.Center, doc.Right, doc.Center}})
 	}
+	c.worstSuppression()
 	c.sensitivity(wc)
 	c.monteCarlo(wc)
 	c.worstDerivation(wc)
+}
+
+// worstSuppression tabulates the switch voltage with the suggested
+// suppression over the corners, for every coil block whose series
+// resistor is sized over them (analysis.Suppression).
+func (c *composer) worstSuppression() {
+	d := c.j.Spec.Design
+	var rows [][]doc.Cell
+	var why []string
+	for i, co := range d.Coils {
+		fo := fittedOverOf(c.j, i)
+		if fo == nil || i >= len(c.j.Results.Coils) {
+			continue
+		}
+		s := c.j.Results.Coils[i].Switch
+		st := doc.Pass
+		if !fo.Within {
+			st = doc.Fail
+		}
+		rs := "none"
+		if !math.IsNaN(fo.Resistor) {
+			rs = Eng(fo.Resistor, "Ω", 2)
+		}
+		rows = append(rows, []doc.Cell{{Text: co.Name}, {Text: rs}, {Text: Eng(s.SwitchVoltage, "V", 4)},
+			{Text: Eng(fo.SwitchVoltage, "V", 4)}, {Text: fo.worstAt}, {Text: Eng(fo.Clamp, "V", 3)}, {Text: st.String(), Status: st, Strong: true}})
+		if fo.Nominal > fo.Resistor || math.IsNaN(fo.Resistor) {
+			w := fmt.Sprintf("for coil %q the %s the nominal design alone would take puts the switch at %s at corner %s, above %s", co.Name,
+				Eng(fo.Nominal, "Ω", 2), Eng(fo.NominalWorst, "V", 3), cornerOf(fo, fo.NominalCorner), Eng(fo.Clamp, "V", 3))
+			if math.IsNaN(fo.Resistor) {
+				w += ", and no resistor leaves room above that voltage at every corner: a bare freewheeling diode is suggested"
+			} else {
+				w += fmt.Sprintf(", so the lower %s is fitted", Eng(fo.Resistor, "Ω", 2))
+			}
+			why = append(why, w)
+		}
+	}
+	if len(rows) == 0 {
+		return
+	}
+	text := "The series resistor of the suggested resistor–diode suppression (Inductance and switching) is sized over the corners: the switch sees the supply (under current drive, the voltage the current source must deliver across the coil) plus the current it opens times the resistor, and a cold corner's winding draws the most current, so the resistor fitted is the E12 value at or below the smallest (Vₘₐₓ − Vₛ)/I over the nominal design and every corner, and the switch voltage with it is judged at every corner (the diode drop of about 0.7 V is neglected)."
+	if len(why) > 0 {
+		text += " " + capital(strings.Join(why, "; ")) + "."
+	}
+	c.para(text)
+	c.add(doc.Table{Caption: "Switch voltage with the suggested suppression at every corner (PASS when within the limit at nominal and at every corner)",
+		Header: []string{"Coil", "Resistor fitted", "Nominal", "Worst", "at corner", "Limit", "Status"},
+		Rows:   rows, Widths: []float64{1.5, 1.0, 1.0, 1.0, 0.9, 0.8, 0.8}, Align: []doc.Align{doc.Left, doc.Right, doc.Right, doc.Right, doc.Center, doc.Right, doc.Center}})
 }
 
 // sensitivity tabulates and plots each tolerance's swing of each result,
@@ -147,7 +205,7 @@ func (c *composer) sensitivity(wc *analysis.WorstCase) {
 	var labels []string
 	var swing [][]float64
 	for r, res := range wc.Results {
-		row := []doc.Cell{{Text: worstNames[res.Quantity]}}
+		row := []doc.Cell{{Text: c.worstName(res.Quantity)}}
 		var pct []float64
 		for i := range t.Items {
 			s := wc.Swing[r][i]
@@ -164,7 +222,7 @@ func (c *composer) sensitivity(wc *analysis.WorstCase) {
 		}
 		rows = append(rows, row)
 		if res.Quantity != "temperature" {
-			labels = append(labels, worstNames[res.Quantity])
+			labels = append(labels, c.worstName(res.Quantity))
 			swing = append(swing, pct)
 		}
 	}
@@ -229,7 +287,7 @@ func (c *composer) monteCarlo(wc *analysis.WorstCase) {
 	var rows [][]doc.Cell
 	for r, res := range wc.Results {
 		v := mc.Values[r]
-		row := []doc.Cell{{Text: worstNames[res.Quantity]}}
+		row := []doc.Cell{{Text: c.worstName(res.Quantity)}}
 		for _, p := range []float64{5, 50, 95} {
 			row = append(row, doc.Cell{Text: worstValue(res.Quantity, analysis.Percentile(v, p), 4)})
 		}
@@ -273,7 +331,7 @@ func (c *composer) worstDerivation(wc *analysis.WorstCase) {
 	}
 	why := fmt.Sprintf("the corner at which the %s requirement is missed", wk.Reason)
 	if !wk.Failing {
-		why = "the corner of the least " + strings.ToLower(worstNames[wk.Reason])
+		why = "the corner of the least " + strings.ToLower(c.worstName(wk.Reason))
 	}
 	c.heading(2, "Derivation at corner "+cornerCode(wc, wk.Corner))
 	c.para(fmt.Sprintf("The results at %s (%s), derived as at nominal in the Method section, with the corner's inputs:", why, wc.CornerName(wk.Corner)))
@@ -289,7 +347,11 @@ func (c *composer) worstDerivation(wc *analysis.WorstCase) {
 	c.derive(steps...)
 	c.derive(coilSteps(co, cr, &cs)...) // resistance, temperature, current, power, moment, field
 	if cr.Switch.SwitchOff > 0 {
-		c.derive(switchingSteps(co, cr, nil)...) // the corner's L·I/t_off, as its limit is judged
+		fo := fittedOverOf(c.j, 0)
+		if fo != nil {
+			fo.inCorner = true
+		}
+		c.derive(switchingSteps(co, cr, nil, fo)...) // the corner's L·I/t_off, as its limit is judged
 	}
 }
 

@@ -2,6 +2,8 @@ package memo
 
 import (
 	"bytes"
+	"fmt"
+	"math"
 	"os"
 	"strings"
 	"testing"
@@ -91,6 +93,66 @@ func TestSignedSwing(t *testing.T) {
 	}{{0, "%", "0 %"}, {9.02, "%", "+9.02 %"}, {-26.8, "%", "−26.8 %"}, {4e-9, "%", "< 0.001 %"}, {-0.328, "K", "−0.328 K"}} {
 		if got := signed(c.v, c.unit); got != c.want {
 			t.Errorf("signed(%g, %q) = %q, want %q", c.v, c.unit, got, c.want)
+		}
+	}
+}
+
+// Where tolerances are stated, the memo fits the series resistor sized
+// over the corners and says so: the switching section and the caution
+// give the switch voltage at the worst corner, and the worst case
+// tabulates it against the limit.
+func TestSuppressionOverCornersWording(t *testing.T) {
+	j, text := memoOf(t, "../examples/torque-coil.md", true)
+	p := j.WorstCase.Suppression[0]
+	if p == nil || !(p.Resistor < p.Nominal) {
+		t.Fatalf("suppression %+v", p)
+	}
+	code := cornerCode(j.WorstCase, p.Corner)
+	for _, want := range []string{
+		"Switch voltage with the suggested suppression at every corner",
+		fmt.Sprintf("the E12 value %s is chosen", Eng(p.Resistor, "Ω", 2)),
+		fmt.Sprintf("(%s at corner %s)", Eng(p.SwitchVoltage, "V", 3), code),
+		fmt.Sprintf("the %s the nominal design alone would take puts the switch at %s at corner", Eng(p.Nominal, "Ω", 2), Eng(p.NominalWorst, "V", 3)),
+	} {
+		if !strings.Contains(text, want) {
+			t.Errorf("memo lacks %q", want)
+		}
+	}
+	if strings.Contains(text, fmt.Sprintf("the E12 value %s is chosen", Eng(p.Nominal, "Ω", 2))) {
+		t.Errorf("memo still fits the nominal %s", Eng(p.Nominal, "Ω", 2))
+	}
+}
+
+// The torque coil's requirement is on the power "while on": it is judged
+// on the power while energised, V·I at the hot winding (not the
+// duty-averaged figure, half that on its 50 % duty), and the memo names
+// it so; the worst case's power row, the duty-averaged one, says it is
+// averaged.
+func TestTorqueCoilPowerWhileOn(t *testing.T) {
+	j, text := memoOf(t, "../examples/torque-coil.md", true)
+	cr := j.Results.Coils[0]
+	found := false
+	for _, l := range j.Limits {
+		if strings.HasPrefix(l.Limit.Quantity, "power") {
+			found = true
+			on := math.Abs(cr.Voltage * cr.Current)
+			if l.Limit.Quantity != "power-on" || math.Abs(l.Computed-on) > 1e-12*on || !(cr.Duty < 1) {
+				t.Errorf("power requirement %s judged on %g W, on-power V·I = %g W (duty %g)", l.Limit.Quantity, l.Computed, on, cr.Duty)
+			}
+		}
+	}
+	if !found {
+		t.Fatal("no power requirement")
+	}
+	row := ""
+	for _, r := range j.WorstCase.Results {
+		if r.Quantity == "power" {
+			row = "| Power (averaged over the duty cycle) | " + worstValue("power", r.Min, 4) + " |"
+		}
+	}
+	for _, want := range []string{"power-on: total electrical power while energised", row} {
+		if !strings.Contains(text, want) {
+			t.Errorf("memo lacks %q", want)
 		}
 	}
 }

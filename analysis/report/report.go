@@ -242,6 +242,11 @@ func Build(j *analysis.Study) Report {
 		})
 		if i < len(j.Coils) {
 			rep.Coils[len(rep.Coils)-1].SwitchOffCapacitanceLimit = Num(j.Coils[i].SwitchOff.RingingSwitch)
+			if p := j.Coils[i].Suppression; p != nil {
+				cr := &rep.Coils[len(rep.Coils)-1]
+				name := j.WorstCase.CornerName(p.Corner)
+				cr.SuppressionCorners, cr.SwitchVoltageSuppressedWorst, cr.SwitchVoltageSuppressedCorner = Num(p.ResistorMax), Num(p.SwitchVoltage), &name
+			}
 		}
 		coilKinds(j, i, &rep.Coils[len(rep.Coils)-1])
 		if co.Form == calc.Pair {
@@ -368,11 +373,24 @@ type CoilHeatSwitch struct {
 	// suppression with.
 	SuppressionR   Num `json:"suppression_resistor_ohm"`
 	SuppressionE12 Num `json:"suppression_resistor_e12_ohm"`
-	SkinDepth      Num `json:"skin_depth_m"`
-	Impedance      Num `json:"impedance_ohm"`
-	CurrentAC      Num `json:"current_ac_A"`
-	Force          Num `json:"force_N"`
-	PairForce      Num `json:"pair_force_N"`
+	// SwitchVoltageSuppressed is the switch voltage with the suggested
+	// suppression, the supply plus the largest current times the fitted
+	// resistor (the supply alone with a bare freewheeling diode), V.
+	SwitchVoltageSuppressed Num `json:"switch_voltage_suppressed_V"`
+	// With a tolerances block (null without one, or where no resistor is
+	// sized): SuppressionCorners is the smallest largest resistor over the
+	// nominal design and every corner, Ω, at or below which the fitted
+	// resistor lies, and SwitchVoltageSuppressedWorst the largest switch
+	// voltage with it over them, V, at the corner named by
+	// SwitchVoltageSuppressedCorner (analysis.Suppression).
+	SuppressionCorners            Num     `json:"suppression_resistor_corners_ohm"`
+	SwitchVoltageSuppressedWorst  Num     `json:"switch_voltage_suppressed_worst_V"`
+	SwitchVoltageSuppressedCorner *string `json:"switch_voltage_suppressed_worst_corner"`
+	SkinDepth                     Num     `json:"skin_depth_m"`
+	Impedance                     Num     `json:"impedance_ohm"`
+	CurrentAC                     Num     `json:"current_ac_A"`
+	Force                         Num     `json:"force_N"`
+	PairForce                     Num     `json:"pair_force_N"`
 }
 
 func coilHeatSwitch(co calc.Coil, cr calc.CoilResult) CoilHeatSwitch {
@@ -387,6 +405,7 @@ func coilHeatSwitch(co calc.Coil, cr calc.CoilResult) CoilHeatSwitch {
 		MomentCold: Num(h.ColdMoment), HeatCapacity: Num(h.HeatCapacity),
 		TimeConstant: Num(s.TimeConstant), RiseTime: Num(s.RiseTime), Energy: Num(s.Energy),
 		SwitchOffVoltage: Num(s.Spike), SwitchOffVoltageWorst: Num(s.SpikeWorst), SwitchOffCapacitanceLimit: Num(math.NaN()), SuppressionR: Num(s.ResistorMax), SuppressionE12: Num(s.Resistor),
+		SwitchVoltageSuppressed: Num(s.SwitchVoltage), SuppressionCorners: Num(math.NaN()), SwitchVoltageSuppressedWorst: Num(math.NaN()),
 		SkinDepth: Num(a.SkinDepth), Impedance: Num(a.Impedance), CurrentAC: Num(a.Current),
 		Force: Num(cr.GradientForce), PairForce: Num(pair),
 	}

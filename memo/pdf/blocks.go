@@ -1050,7 +1050,8 @@ func (r *renderer) leastFigure(f doc.Figure) float64 {
 // tableStart is the height of a table's start that stays together: the
 // caption, the header and the first row (or the first lines of a row too
 // tall for a page), and the second row too when both are short, so that
-// no table starts with a single row at a page foot.
+// no table starts with a single row at a page foot; a short table of three
+// rows, which cannot be split with two on each page, stays whole.
 func tableStart(tl *tableLayout) float64 {
 	first := tl.capH + tl.headH
 	if len(tl.rowH) > 0 {
@@ -1058,6 +1059,9 @@ func tableStart(tl *tableLayout) float64 {
 	}
 	if len(tl.rowH) > 1 && tl.rowH[0]+tl.rowH[1] < (bodyBottom-bodyTop)/4 {
 		first += tl.rowH[1]
+		if len(tl.rowH) == 3 && tl.rowH[0]+tl.rowH[1]+tl.rowH[2] < (bodyBottom-bodyTop)/4 {
+			first += tl.rowH[2]
+		}
 	}
 	return first
 }
