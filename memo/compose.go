@@ -548,7 +548,7 @@ func (c *composer) limitsTable() doc.Table {
 			if l.Limit.Relation == calc.AtMost {
 				mg = -mg
 			}
-			margin = format.Margin(100*mg, "%")
+			margin = format.RelMargin(mg)
 		}
 		st := doc.Pass
 		if !l.Pass {

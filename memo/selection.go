@@ -121,12 +121,7 @@ func marginText(l calc.Limit, m float64) string {
 	if math.IsNaN(m) {
 		return "—"
 	}
-	s := Sig(100*m, 3) + " %"
-	if math.Abs(m) < 0.0005 {
-		s = "< 0.05 %"
-	} else if m > 0 {
-		s = "+" + s
-	}
+	s := format.RelMargin(m)
 	if l.Quantity == "temperature" || l.Quantity == "surface-temperature" {
 		return s + " of the rise"
 	}
