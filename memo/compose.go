@@ -366,8 +366,8 @@ func (c *composer) summaryTable() doc.Table {
 			}
 			return Eng(Celsius(cr.Temperature), "°C", 3)
 		}),
-		row("Insulation class", func(i int, cr calc.CoilResult) string {
-			return Eng(Celsius(d.Coils[i].InsulationClass), "°C", 3)
+		row("Insulation", func(i int, cr calc.CoilResult) string {
+			return format.InsulationClass(d.Coils[i].InsulationClass)
 		}),
 		row("Inductance", func(_ int, cr calc.CoilResult) string { return Eng(cr.Inductance, "H", 3) }),
 		row("Wire length / conductor mass", func(i int, cr calc.CoilResult) string {

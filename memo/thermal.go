@@ -399,12 +399,12 @@ func warmUpText(co calc.Coil, cr calc.CoilResult) string {
 	h := cr.Heat
 	var b strings.Builder
 	if co.InsulationClass > 0 {
-		class := Eng(Celsius(co.InsulationClass), "°C", 3)
+		class := format.InsulationClass(co.InsulationClass)
 		if !math.IsNaN(h.TimeToLimit) {
-			fmt.Fprintf(&b, "Energised continuously from the ambient temperature, the hottest point of the winding reaches the insulation class of %s after %s (the lumped heat balance integrated in time). ",
+			fmt.Fprintf(&b, "Energised continuously from the ambient temperature, the hottest point of the winding reaches its insulation %s after %s (the lumped heat balance integrated in time). ",
 				class, duration(h.TimeToLimit))
 		} else {
-			fmt.Fprintf(&b, "Energised continuously, the winding never reaches its insulation class of %s: its steady hottest point stays below it. ", class)
+			fmt.Fprintf(&b, "Energised continuously, the winding never reaches its insulation %s: its steady hottest point stays below it. ", class)
 		}
 	}
 	if co.Former.Capacity() <= 0 {
@@ -456,7 +456,7 @@ func (c *composer) warmUpFigure(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 		// The class is drawn unless it lies so far above the curve that the
 		// curve would be squashed flat; the caption then says where it is.
 		if co.InsulationClass-tp.Ambient <= 3*(top-tp.Ambient) {
-			levels = append(levels, figures.Level{Y: Celsius(co.InsulationClass), Label: "insulation class " + Eng(Celsius(co.InsulationClass), "°C", 3)})
+			levels = append(levels, figures.Level{Y: Celsius(co.InsulationClass), Label: "insulation " + format.InsulationClass(co.InsulationClass)})
 		} else {
 			farBelow = true
 		}
@@ -480,7 +480,7 @@ func (c *composer) warmUpFigure(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 	}
 	switch {
 	case farBelow:
-		caption += fmt.Sprintf("; dotted: steady states (the insulation class, %s, lies far above)", Eng(Celsius(co.InsulationClass), "°C", 3))
+		caption += fmt.Sprintf("; dotted: steady states; the insulation %s lies far above", format.InsulationClass(co.InsulationClass))
 	case len(levels) > 0:
 		caption += "; dashed: insulation class, dotted: steady states"
 	}
@@ -580,7 +580,7 @@ func (c *composer) thermalTable() doc.Table {
 			if !math.IsNaN(cr.InsulationMargin) {
 				m = Eng(cr.InsulationMargin, "K", 3)
 			}
-			return temp(co.InsulationClass) + " / " + m
+			return format.InsulationClass(co.InsulationClass) + " / " + m
 		}),
 		row("Time to the class, energised continuously", func(co calc.Coil, cr calc.CoilResult) string {
 			if math.IsNaN(cr.Heat.TimeToLimit) {
@@ -617,7 +617,7 @@ func runawayText(co calc.Coil, cr calc.CoilResult) string {
 	cy := cr.Heat.Cycle
 	class := "its insulation class"
 	if co.InsulationClass > 0 {
-		class = "its insulation class of " + Eng(Celsius(co.InsulationClass), "°C", 3)
+		class = "its insulation " + format.InsulationClass(co.InsulationClass)
 	}
 	var where string
 	switch {
@@ -652,7 +652,7 @@ func leftOnText(co calc.Coil, cr calc.CoilResult, on calc.ThermalState) string {
 		settle = "would settle at " + Eng(Celsius(on.HotSpot), "°C", 3)
 	}
 	return templates.Text("caution-left-on", map[string]string{"Duty": strconv.FormatFloat(100*cr.Duty, 'g', 3, 64) + " %",
-		"Class": Eng(Celsius(co.InsulationClass), "°C", 3), "Time": duration(h.TimeToLimit), "Settle": settle})
+		"Class": format.InsulationClass(co.InsulationClass), "Time": duration(h.TimeToLimit), "Settle": settle})
 }
 
 // hotSpotLabel names the steady hottest-point row: duty-averaged only

@@ -9,6 +9,7 @@ import (
 
 	"coilmemo/calc"
 	"coilmemo/calc/units"
+	"coilmemo/format"
 )
 
 // kv is one "key = value" line of a parameter block.
@@ -815,7 +816,7 @@ func parseInsulation(s string) (float64, string, error) {
 		t = strings.TrimSpace(t[6:])
 	}
 	if c, ok := insulationClasses[strings.ToUpper(t)]; ok {
-		return c + zeroCelsius, fmt.Sprintf(" (class %s, %s °C)", strings.ToUpper(t), strconv.FormatFloat(c, 'f', -1, 64)), nil
+		return c + zeroCelsius, " = " + format.InsulationClass(c+zeroCelsius), nil
 	}
 	_, unit, err := units.Split(t)
 	if err != nil {
@@ -825,7 +826,7 @@ func parseInsulation(s string) (float64, string, error) {
 		v, _ := strconv.ParseFloat(t, 64)
 		for _, c := range thermalClasses {
 			if v == c {
-				return c + zeroCelsius, fmt.Sprintf(" (class %s)", t), nil
+				return c + zeroCelsius, " = " + format.InsulationClass(c+zeroCelsius), nil
 			}
 		}
 		return 0, "", fmt.Errorf("no unit given: %s (expected a temperature such as 155 degC, a thermal class 90, 105, 120, 130, 155, 180, 200, 220 or 250, or a class letter Y, A, E, B, F, H, N, R)", t)

@@ -6,6 +6,7 @@ import (
 
 	"coilmemo/calc"
 	"coilmemo/calc/units"
+	"coilmemo/format"
 )
 
 // LimitQuantity describes a quantity a requirement line may constrain.
@@ -167,6 +168,11 @@ func (p *parser) limitsBlock(b *rawBlock) {
 			lim.Required = q.Value
 			p.spec.Design.Limits = append(p.spec.Design.Limits, lim)
 			si = relString(rel) + " " + q.String()
+			if !want.Named() {
+				// a unit with no name of its own (V/T is m²·s⁻¹): in the
+				// unit the quantity is known in, not as base units
+				si = relString(rel) + " " + units.FormatNumber(q.Value) + " " + format.Unit(lq.Unit)
+			}
 		}
 		p.entry(blockLimits, e, si)
 	}
