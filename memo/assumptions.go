@@ -244,7 +244,7 @@ func thermalFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d cal
 	if st := cr.Heat.Steady; st.Settled && !cr.Verdict.NoSolution {
 		v := validity{what: "Thermal model"}
 		text := fmt.Sprintf("the resistance follows the winding's mean temperature %s linearly ($\\alpha_{20}$ of %s); heat crosses the turns with an effective conductivity of %s, so the hottest point is %s above the surface (%s); the insulation is judged at the hottest point",
-			Eng(Celsius(st.Mean), "°C", 3), co.Wire.Material.Name, Eng(cr.Heat.Conductivity, "W/(m·K)", 2), Eng(st.HotSpot-st.Surface, "K", 2), Eng(Celsius(st.Surface), "°C", 3))
+			Eng(Celsius(st.Mean), "°C", 3), co.Wire.Material.Name, Eng(cr.Heat.Conductivity, "W/(m·K)", 2), Eng(st.HotSpot-st.Surface, "K", 3), Eng(Celsius(st.Surface), "°C", 3))
 		if cv := st.Convection; cv.Ra > 0 {
 			if cv.InRange {
 				text += fmt.Sprintf("; the natural-convection correlation is used within its range (Rayleigh number %s)", Sci(cv.Ra, 2))
@@ -329,7 +329,7 @@ func pmEng(v float64) string {
 	if math.IsNaN(v) {
 		return "n/a"
 	}
-	return "±" + Eng(v, "m", 2)
+	return "±" + Eng(v, "m", 3)
 }
 
 // coolingAssumption states how the winding sheds heat.

@@ -281,7 +281,13 @@ func conductionSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, c
 		Numbers: fmt.Sprintf(`%s + %s`, Q(Celsius(Ts), "°C", 4), Q(rise, "K", 3)), Result: Q(Celsius(st.HotSpot), "°C", 4)})
 	if co.InsulationClass > 0 {
 		margin := co.InsulationClass - st.HotSpot
-		add(Step{What: "Margin to the insulation thermal class (IEC 60085)", Symbolic: `T_{\mathrm{class}} - T_{\mathrm{max}}`,
+		what := "Margin to the insulation thermal class (IEC 60085)"
+		if cr.Temperature > st.HotSpot {
+			// the duty cycle's peak is the temperature judged: this margin
+			// is the steady state's, not the one the tables give
+			what = "Margin of the duty-averaged steady state to the insulation thermal class (IEC 60085); the hotter peak of the duty cycle is compared with the class further on"
+		}
+		add(Step{What: what, Symbolic: `T_{\mathrm{class}} - T_{\mathrm{max}}`,
 			Numbers: fmt.Sprintf(`%s - %s`, Q(Celsius(co.InsulationClass), "°C", 4), Q(Celsius(st.HotSpot), "°C", 4)), Result: Q(margin, "K", 3)})
 	}
 	return steps
@@ -579,6 +585,9 @@ func (c *composer) thermalTable() doc.Table {
 			m := "runaway"
 			if !math.IsNaN(cr.InsulationMargin) {
 				m = Eng(cr.InsulationMargin, "K", 3)
+				if cr.Temperature > cr.Heat.Steady.HotSpot {
+					m += " at the cycle peak"
+				}
 			}
 			return format.InsulationClass(co.InsulationClass) + " / " + m
 		}),
