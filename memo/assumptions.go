@@ -158,7 +158,7 @@ func wireBuildFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d c
 
 	if co.Wire.OuterEstimated {
 		out = append(out, validity{what: "Wire build", flagged: true, text: fmt.Sprintf(
-			"the wire's overall diameter (%s over %s bare) is an estimate for heavy-build enamelled wire. The winding's length, layers, surface and so its temperature follow from it; the wire maker's data sheet value would replace the estimate.",
+			"the wire's overall diameter (%s over %s bare) is an estimate for heavy-build enamelled wire. The winding's length, layers, surface and so its temperature follow from it; the overall diameter of the wire bought, on its maker's data sheet, is to be checked against it.",
 			Eng(co.Wire.Outer, "m", 3), Eng(co.Wire.Bare, "m", 3))})
 	}
 	return out

@@ -609,7 +609,9 @@ func testedOn(st *analysis.Study, l analysis.LimitResult, q spec.LimitQuantity) 
 			"surface-temperature": "hottest surface temperature", "current": "current", "voltage": "voltage", "resistance": "hot resistance",
 			"mass": "conductor mass", "wire-length": "wire length", "current-density": "current density", "inductance": "self-inductance",
 			"time-constant": "time constant L/R", "switch-off-voltage": "voltage across the switch at switch-off, unsuppressed",
-			"torque": "largest torque of its moment in the background field",
+			"torque": "largest torque of its moment in the background field", "core-flux-density": "peak flux density in its core",
+			"sensitivity": "sensitivity at its frequency", "band-noise": "noise-equivalent field, rms over its band",
+			"self-resonance": "self-resonant frequency", "resistance-ac": "a.c. resistance at its frequency",
 		}[l.Limit.Quantity]
 		if l.Limit.Quantity == "power" && st.Results.Coils[l.Coil].Duty >= 1 {
 			what = "power" // energised continuously: no duty cycle to average over

@@ -170,3 +170,40 @@ func TestTwoMarginsNamedApart(t *testing.T) {
 		t.Fatal("no design whose duty-cycle peak is judged")
 	}
 }
+
+// TestNumberFormsEverywhere: numbers keep their forms over every example and figure-test design: no
+// bare "0.0 %" margin, no percentage in the thousands, no power of ten on
+// a short number ("1.0×10¹"), no Celsius temperature to four decimals, a
+// range with its unit once (not "0 m .. 12 mm"), no unit in base units
+// (m²·s⁻¹ for V/T), and the insulation class named one way.
+func TestNumberFormsEverywhere(t *testing.T) {
+	forms := []struct {
+		what string
+		re   *regexp.Regexp
+	}{
+		{"a bare zero margin", regexp.MustCompile(`(^|\s)[+−]?0\.0 %`)},
+		{"a percentage in the thousands", regexp.MustCompile(`(^|[^\d.])\d{4,}(\.\d+)? %`)},
+		{"a power of ten on a short number", regexp.MustCompile(`\d×10(⁰|¹|²|³|⁻¹)(\D|$)`)},
+		{"a Celsius temperature to four decimals", regexp.MustCompile(`\d\.\d{4,} °C`)},
+		{"a range with a zero in its own unit", regexp.MustCompile(`(^|\s)0 [a-zA-Zµ]+ (\.\.|…) `)},
+		{"a range of one unit written twice", regexp.MustCompile(`\d ([a-zA-Zµ]*[a-zA-ZΩ]) (…) [\d.]+ ([a-zA-Zµ]*[a-zA-ZΩ])\b`)},
+		{"a unit in base units", regexp.MustCompile(`m²·s⁻¹`)},
+		{"an insulation class in another form", regexp.MustCompile(`class [A-Z], |class of \d|class, \d|insulation class \d+ °C`)},
+	}
+	for _, f := range designFiles(t) {
+		j, text := memoOf(t, f, false)
+		if j == nil {
+			continue
+		}
+		for _, line := range strings.Split(text, "\n") {
+			for _, fm := range forms {
+				if m := fm.re.FindStringSubmatch(line); m != nil {
+					if fm.what == "a range of one unit written twice" && m[1] != m[3] {
+						continue // "10 Hz … 10 kHz": two prefixes
+					}
+					t.Errorf("%s: %s: %q in %q", filepath.Base(f), fm.what, m[0], line)
+				}
+			}
+		}
+	}
+}

@@ -45,7 +45,7 @@ var LimitQuantities = map[string]LimitQuantity{
 	"switch-off-voltage":  {"V", "largest voltage across the switch at switch-off", true, false, true},
 	"torque":              {"N m", "largest torque in the background field", true, false, true},
 	"core-flux-density":   {"T", "largest peak flux density in a core", true, false, true},
-	"sensitivity":         {"V/T", "smallest pick-up coil sensitivity at its frequency (a coil's own with a subject)", true, false, true},
+	"sensitivity":         {"V/T", "smallest pick-up coil sensitivity at its frequency", true, false, true},
 	"band-noise":          {"T", "largest noise-equivalent field of a pick-up coil, rms over its band", true, false, true},
 	"self-resonance":      {"Hz", "lowest self-resonant frequency of a winding", true, false, true},
 	"resistance-ac":       {"ohm", "largest a.c. resistance of a winding at its frequency", true, false, true},
