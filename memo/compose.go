@@ -154,6 +154,15 @@ func compose(j *analysis.Study) (*doc.Document, *composer) {
 	}, c
 }
 
+// approvedBy is the approver's name, "not named" on an issued memo that
+// names none.
+func approvedBy(m spec.Memo) string {
+	if m.IsIssued() && m.Approver == "" {
+		return "not named"
+	}
+	return m.Approver
+}
+
 // titlePage: identification, headline results, limits compliance.
 func (c *composer) titlePage() {
 	title := c.title
@@ -169,7 +178,7 @@ func (c *composer) titlePage() {
 		field("Document", m.DocumentID), field("Revision", m.Revision),
 		field("Date", m.Date), field("Status", m.Status),
 		field("Prepared by", m.Author), field("Checked by", m.Checker),
-		field("Approved by", m.Approver),
+		field("Approved by", approvedBy(m)),
 	}})
 	c.heading(1, "Results summary")
 	c.add(c.verdict())

@@ -9,6 +9,7 @@ import (
 	"testing"
 
 	"coilmemo/calc"
+	"coilmemo/doc"
 )
 
 // printed is a number with a unit as the memo prints it, read back in SI.
@@ -205,5 +206,31 @@ func TestNumberFormsEverywhere(t *testing.T) {
 				}
 			}
 		}
+	}
+}
+
+// The approval block and page 1 show an approval record's gaps as they
+// are: an issued memo with no approver says so ("not named") and a
+// checked date after the memo's date is marked; nothing is filled in.
+func TestApprovalGapsShown(t *testing.T) {
+	coil := "```coil\nname = s\nform = solenoid\nmean-diameter = 50 mm\nlength = 20 mm\nturns = 30\nwire = AWG 24\ncurrent = 1 A\n```\n"
+	text := func(memo string) string {
+		j := mustEvaluate(t, "```memo\n"+memo+"```\n"+coil)
+		var buf strings.Builder
+		if err := doc.WriteText(&buf, Document(j)); err != nil {
+			t.Fatal(err)
+		}
+		return buf.String()
+	}
+	s := text("date = 2026-11-30\nstatus = issued\nchecker = C. Checker\nchecked-date = 2026-12-02\n")
+	if n := strings.Count(s, "not named"); n < 2 {
+		t.Errorf("the missing approver is shown %d times, want on page 1 and in the approval block", n)
+	}
+	if !strings.Contains(s, "2026-12-02 (after the memo's date)") {
+		t.Error("the late checked date is not marked")
+	}
+	s = text("date = 2026-11-30\nstatus = draft\napprover = P. Approver\nchecked-date = 2026-11-29\n")
+	if strings.Contains(s, "not named") || strings.Contains(s, "after the memo's date") {
+		t.Error("a consistent draft is marked")
 	}
 }

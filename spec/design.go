@@ -210,7 +210,9 @@ func (p *parser) defaultEntry(block, key, si string, line int, coil string) {
 
 func (p *parser) memoBlock(b *rawBlock) {
 	m := &p.spec.Memo
+	lines := map[string]int{}
 	for _, e := range p.keyValues(b, false) {
+		lines[e.key] = e.line
 		si := e.value
 		switch e.key {
 		case "title":
@@ -273,6 +275,23 @@ func (p *parser) memoBlock(b *rawBlock) {
 		p.entry(blockMemo, e, si)
 	}
 	p.checkHistory()
+	p.checkApproval(lines)
+}
+
+// checkApproval warns of an approval record that does not hold together:
+// a memo issued with no approver named, and a role's date after the
+// memo's own date. The memo is still written and shows the gap (IsIssued,
+// AfterDate); nothing is filled in for the author.
+func (p *parser) checkApproval(lines map[string]int) {
+	m := p.spec.Memo
+	if m.IsIssued() && m.Approver == "" {
+		p.warnf(lines["status"], "status = %s but no approver is named: the approval block shows the approver as not named (add approver = NAME once the memo is approved)", m.Status)
+	}
+	for _, r := range []struct{ key, date string }{{"prepared-date", m.PreparedDate}, {"checked-date", m.CheckedDate}, {"approved-date", m.ApprovedDate}} {
+		if m.AfterDate(r.date) {
+			p.warnf(lines[r.key], "%s %s is later than the memo's date %s: the approval block marks it", r.key, r.date, m.DateValue.Format("2006-01-02"))
+		}
+	}
 }
 
 func parseDate(s string) (time.Time, error) {
