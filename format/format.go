@@ -221,7 +221,8 @@ func Margin(v float64, unit string) string {
 
 // RelMargin writes the margin of a requirement as a fraction m of the
 // required value (positive: met with room to spare), the one form every
-// table of margins uses: one decimal of a percent, "+12.5 %", "−3.1 %";
+// table of margins uses: a signed percent to three figures, "+12.5 %",
+// "−3.10 %", "+0.164 %";
 // a margin of less than 0.05 % in size "< 0.05 %" (met) or "> −0.05 %"
 // (missed), never a bare "0.0 %"; and a value that exceeds an at-least
 // requirement tenfold or more as the ratio of the two, "73× the limit",
@@ -239,7 +240,11 @@ func RelMargin(m float64) string {
 	case p < 0 && p > -0.05:
 		return "> −0.05 %"
 	}
-	return Margin(100*m, "%")
+	s := Sig(100*m, 3) + " %"
+	if m > 0 {
+		s = "+" + s
+	}
+	return s
 }
 
 // InsulationClass writes an insulation thermal class, given in kelvin,
