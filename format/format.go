@@ -225,7 +225,7 @@ func Margin(v float64, unit string) string {
 // "−3.10 %", "+0.164 %";
 // a margin of less than 0.05 % in size "< 0.05 %" (met) or "> −0.05 %"
 // (missed), never a bare "0.0 %"; and a value that exceeds an at-least
-// requirement tenfold or more as the ratio of the two, "73× the limit",
+// requirement tenfold or more as the ratio of the two, "73-fold",
 // since a percentage of thousands says nothing more.
 func RelMargin(m float64) string {
 	switch p := 100 * m; {
@@ -234,7 +234,7 @@ func RelMargin(m float64) string {
 	case math.IsInf(m, 1):
 		return "∞"
 	case m >= 9:
-		return Sig(1+m, 2) + "× the limit"
+		return Sig(1+m, 2) + "-fold"
 	case p >= 0 && p < 0.05:
 		return "< 0.05 %"
 	case p < 0 && p > -0.05:
