@@ -2,6 +2,7 @@ package figures
 
 import (
 	"math"
+	"slices"
 	"strings"
 	"testing"
 
@@ -159,5 +160,27 @@ func TestEngLabel(t *testing.T) {
 		if got := EngLabel(c.v, "T"); got != c.want {
 			t.Errorf("EngLabel(%g) = %q, want %q", c.v, got, c.want)
 		}
+	}
+}
+
+// The histogram's axis takes the prefix the text gives its samples: a
+// moment of 0.14–0.22 A·m² is read in mA·m², its ticks in the hundreds
+// and the requirement line at 150 on that scale.
+func TestHistogramPrefix(t *testing.T) {
+	samples := []float64{0.1445, 0.16, 0.175, 0.19, 0.2203}
+	var c recorder.Canvas
+	Histogram("Magnetic moment |m|", "A·m²", samples, []float64{0.15})(&c, 400, 260)
+	var texts []string
+	for _, a := range c.Actions {
+		if a, ok := a.(*recorder.FillString); ok {
+			texts = append(texts, a.String)
+		}
+	}
+	all := strings.Join(texts, " | ")
+	if !strings.Contains(all, "Magnetic moment |m| (mA·m²)") {
+		t.Errorf("axis label not in mA·m²: %s", all)
+	}
+	if !slices.Contains(texts, "200") {
+		t.Errorf("no tick at 200 mA·m²: %s", all)
 	}
 }

@@ -46,17 +46,24 @@ func Sensitivity(results, tolerances []string, swing [][]float64) DrawFunc {
 	return Drawer(pl, curves...)
 }
 
-// Histogram draws the distribution of samples (in the unit of xLabel)
-// as a histogram of counts, with each value in marks as a dashed vertical
-// line (a requirement).
-func Histogram(xLabel string, samples []float64, marks []float64) DrawFunc {
-	pl := NewPlot(xLabel, "Samples")
+// Histogram draws the distribution of samples of quantity, SI in unit, as
+// a histogram of counts, with each value in marks as a dashed vertical
+// line (a requirement). The axis takes the engineering prefix the memo's
+// text gives the largest sample ("Magnetic moment |m| (mA·m²)").
+func Histogram(quantity, unit string, samples []float64, marks []float64) DrawFunc {
+	px := EngPrefix(samples...)
+	pl := NewPlot(quantity+" ("+px.Symbol+unit+")", "Samples")
 	v := make(plotter.Values, 0, len(samples))
 	for _, s := range samples {
 		if !math.IsNaN(s) && !math.IsInf(s, 0) {
-			v = append(v, s)
+			v = append(v, s/px.Factor)
 		}
 	}
+	scaled := make([]float64, len(marks))
+	for i, m := range marks {
+		scaled[i] = m / px.Factor
+	}
+	marks = scaled
 	bins := int(math.Max(5, math.Min(40, math.Sqrt(float64(len(v))))))
 	var curves []plotter.XYs
 	if h, err := plotter.NewHist(v, bins); err == nil {

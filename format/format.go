@@ -53,6 +53,9 @@ func Eng(v float64, unit string, sig int) string {
 		return Sig(v, sig) + " " + unit
 	case "°C", "%", "", "K", "°":
 		s := Sig(v, sig)
+		if unit == "°C" {
+			s = celsius(v, sig)
+		}
 		if unit == "" {
 			return s
 		}
@@ -104,6 +107,39 @@ func prefix(exp int) string {
 		return "T"
 	}
 	return ""
+}
+
+// celsius writes a temperature on the Celsius scale to sig significant
+// figures but never finer than sig − 2 decimals: the scale's zero is
+// arbitrary, so a temperature near it has no more resolution than one of
+// 10 °C or 100 °C (0.5967 °C to four figures is "0.60 °C", as 37.72 °C).
+func celsius(v float64, sig int) string {
+	dec := max(sig-2, 0)
+	if v != 0 && !math.IsInf(v, 0) {
+		mag := int(math.Floor(math.Log10(math.Abs(v))))
+		dec = min(dec, max(sig-1-mag, 0))
+	}
+	if mag := math.Abs(v); mag >= 1e7 {
+		return Sig(v, sig)
+	}
+	s := strconv.FormatFloat(v, 'f', dec, 64)
+	if strings.Trim(s, "-0.") == "" {
+		s = strings.TrimPrefix(s, "-") // no signed zero
+	}
+	if dec > 0 {
+		// rounding up may add a digit (9.996 → 10.00): keep sig figures
+		if digits := strings.TrimLeft(strings.ReplaceAll(strings.TrimPrefix(s, "-"), ".", ""), "0"); len(digits) > sig {
+			s = strconv.FormatFloat(v, 'f', dec-1, 64)
+		}
+	} else if v != 0 {
+		// no decimals: round to the significant figures (1234.5 to 3 is 1230)
+		mag := int(math.Floor(math.Log10(math.Abs(v))))
+		if sig-1-mag < 0 {
+			p := math.Pow(10, float64(mag+1-sig))
+			s = strconv.FormatFloat(math.Round(v/p)*p, 'f', 0, 64)
+		}
+	}
+	return strings.Replace(s, "-", "−", 1)
 }
 
 // Sig formats v with sig significant figures in plain decimal notation
@@ -183,6 +219,59 @@ func Margin(v float64, unit string) string {
 	return strings.Replace(s, "-", "−", 1) + " " + unit
 }
 
+// RelMargin writes the margin of a requirement as a fraction m of the
+// required value (positive: met with room to spare), the one form every
+// table of margins uses: a signed percent to three figures, "+12.5 %",
+// "−3.10 %", "+0.164 %";
+// a margin of less than 0.05 % in size "< 0.05 %" (met) or "> −0.05 %"
+// (missed), never a bare "0.0 %"; and a value that exceeds an at-least
+// requirement tenfold or more as the ratio of the two, "73-fold",
+// since a percentage of thousands says nothing more.
+func RelMargin(m float64) string {
+	switch p := 100 * m; {
+	case math.IsNaN(m):
+		return "n/a"
+	case math.IsInf(m, 1):
+		return "∞"
+	case m >= 9:
+		return Sig(1+m, 2) + "-fold"
+	case p >= 0 && p < 0.05:
+		return "< 0.05 %"
+	case p < 0 && p > -0.05:
+		return "> −0.05 %"
+	}
+	s := Sig(100*m, 3) + " %"
+	if m > 0 {
+		s = "+" + s
+	}
+	return s
+}
+
+// InsulationClass writes an insulation thermal class, given in kelvin,
+// the one way the memo names it: "class F (155 °C)" for a class of IEC
+// 60085 with a letter, "class 250 (250 °C)" for one without, and a
+// temperature that is no class of the standard as "class 170 °C".
+func InsulationClass(k float64) string {
+	c := Celsius(k)
+	t := Eng(c, "°C", 3)
+	for _, cl := range IECClasses {
+		if math.Abs(c-cl.Celsius) < 0.005 {
+			if cl.Letter == "" {
+				return "class " + strconv.FormatFloat(cl.Celsius, 'f', -1, 64) + " (" + t + ")"
+			}
+			return "class " + cl.Letter + " (" + t + ")"
+		}
+	}
+	return "class " + t
+}
+
+// IECClasses are the thermal classes of IEC 60085:2007 (Table 1), °C,
+// with their letter designations where the standard gives one.
+var IECClasses = []struct {
+	Celsius float64
+	Letter  string
+}{{90, "Y"}, {105, "A"}, {120, "E"}, {130, "B"}, {155, "F"}, {180, "H"}, {200, "N"}, {220, "R"}, {250, ""}}
+
 // Count writes "n things" with the noun in the singular for one:
 // Count(1, "check", "checks") = "1 check".
 func Count(n int, one, many string) string {
@@ -259,11 +348,15 @@ func SITextSig(s string, sig int) string {
 			return rel + SITextSig(rest, sig)
 		}
 	}
-	if m := siRange.FindStringSubmatch(s); m != nil && engUnits[m[2]] && m[2] == m[4] {
+	if m := siRange.FindStringSubmatch(s); m != nil && m[2] == m[4] {
 		a, errA := strconv.ParseFloat(m[1], 64)
 		b, errB := strconv.ParseFloat(m[3], 64)
-		if errA == nil && errB == nil {
-			return EngTrim(a, m[2], sig) + " .. " + EngTrim(b, m[4], sig) + m[5]
+		switch {
+		case errA != nil || errB != nil:
+		case engUnits[m[2]]:
+			return rangeText(a, b, m[2], sig) + m[5]
+		default: // kelvin and the rest as they are, the unit once
+			return strings.Replace(m[1], "-", "−", 1) + " … " + strings.Replace(m[3], "-", "−", 1) + " " + m[2] + m[5]
 		}
 	}
 	if m := siVector.FindStringSubmatch(s); m != nil && engUnits[m[4]] {
@@ -298,14 +391,39 @@ func SITextSig(s string, sig int) string {
 	return s
 }
 
-// Sci formats v in scientific notation with sig significant figures,
-// "2.9×10⁶", for dimensionless numbers of any size (Rayleigh numbers).
+// rangeText writes a range from a to b in unit: with one prefix and the
+// unit once where both ends take the same prefix or one end is zero, "0 …
+// 12 mm"; each end with its own otherwise, "10 Hz …
+// 10 kHz".
+func rangeText(a, b float64, unit string, sig int) string {
+	ea, eb := engExp(a), engExp(b)
+	switch {
+	case a == 0:
+		ea = eb
+	case b == 0:
+		eb = ea
+	}
+	if ea == eb {
+		return trimmed(a, ea, sig) + " … " + trimmed(b, eb, sig) + " " + prefix(ea) + unit
+	}
+	return EngTrim(a, unit, sig) + " … " + EngTrim(b, unit, sig)
+}
+
+// Sci formats a dimensionless number of any size (a Rayleigh number) to
+// sig significant figures: in scientific notation from 10⁴ up and below
+// 0.01, "2.9×10⁶", "7.6×10⁻³"; plainly between, "14", "910", "0.076"
+// (never "1.4×10¹").
 func Sci(v float64, sig int) string {
 	if math.IsNaN(v) {
 		return "n/a"
 	}
 	if v == 0 {
 		return "0"
+	}
+	if a := math.Abs(v); a >= 0.01 && a < 1e4 {
+		if r, _ := strconv.ParseFloat(strings.Replace(Sig(v, sig), "−", "-", 1), 64); math.Abs(r) < 1e4 {
+			return Sig(v, sig)
+		}
 	}
 	s := strconv.FormatFloat(v, 'e', max(sig-1, 0), 64)
 	mant, exp, _ := strings.Cut(s, "e")

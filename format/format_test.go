@@ -43,7 +43,10 @@ func TestSIText(t *testing.T) {
 		"(0, 3e-05, 0) T":        "(0, 30, 0) µT",
 		"(0.01, 0, 0.01) m":      "(10, 0, 10) mm",
 		"(0, 0, 0) m":            "(0, 0, 0) m",
-		"10 Hz .. 10000 Hz":      "10 Hz .. 10 kHz",
+		"10 Hz .. 10000 Hz":      "10 Hz … 10 kHz",
+		"0 m .. 0.012 m":         "0 … 12 mm",
+		"0.002 m .. 0.012 m":     "2 … 12 mm",
+		"253.15 K .. 333.15 K":   "253.15 … 333.15 K",
 		"1.5e-10 F":              "150 pF",
 		"1 A":                    "1 A",
 		"293.15 K (20 °C)":       "293.15 K (20 °C)",
@@ -70,7 +73,7 @@ func TestSITextSig(t *testing.T) {
 		"1.5708 rad (90°)":                              "1.571 rad (90°)",
 		"(0, 0, 0) T":                                   "(0, 0, 0) T",
 		"(0.0123456, 0, 0) m":                           "(12.35, 0, 0) mm",
-		"10 Hz .. 12345.6 Hz":                           "10 Hz .. 12.35 kHz",
+		"10 Hz .. 12345.6 Hz":                           "10 Hz … 12.35 kHz",
 		">= 0.000123456 T":                              ">= 123.5 µT",
 		"293.15 K (20 °C)":                              "293.15 K (20 °C)",
 		"0.85":                                          "0.85",
@@ -90,6 +93,73 @@ func TestVolume(t *testing.T) {
 	}{{7.854e-6, "7.854 cm³"}, {2.5e-4, "250.0 cm³"}, {0.012, "0.01200 m³"}} {
 		if got := Eng(c.v, "m³", 4); got != c.want {
 			t.Errorf("Eng(%g, m³) = %q, want %q", c.v, got, c.want)
+		}
+	}
+}
+
+// A temperature on the Celsius scale has a resolution, not a count of
+// figures: near 0 °C it keeps the decimals of a temperature of tens of
+// degrees.
+func TestCelsiusResolution(t *testing.T) {
+	for _, c := range []struct {
+		v    float64
+		sig  int
+		want string
+	}{
+		{0.5967, 4, "0.60 °C"}, {37.72, 4, "37.72 °C"}, {75.69, 4, "75.69 °C"}, {155, 4, "155.0 °C"}, {155, 3, "155 °C"},
+		{34.49, 3, "34.5 °C"}, {0.5967, 3, "0.6 °C"}, {-20, 3, "−20.0 °C"}, {-0.001, 4, "0.00 °C"}, {9.996, 4, "10.00 °C"},
+		{1234.5, 3, "1230 °C"}, {0, 4, "0.00 °C"},
+	} {
+		if got := Eng(c.v, "°C", c.sig); got != c.want {
+			t.Errorf("Eng(%v, °C, %d) = %q, want %q", c.v, c.sig, got, c.want)
+		}
+	}
+}
+
+// A dimensionless number is written plainly where it is short, in powers
+// of ten only where it is large or small.
+func TestSciPlainWhereShort(t *testing.T) {
+	for _, c := range []struct {
+		v    float64
+		want string
+	}{
+		{10.4, "10"}, {14.2, "14"}, {913, "910"}, {1820, "1800"}, {0.076, "0.076"}, {9995, "1.0×10⁴"},
+		{2.7e4, "2.7×10⁴"}, {2.9e6, "2.9×10⁶"}, {0.0076, "7.6×10⁻³"}, {-14.2, "−14"},
+	} {
+		if got := Sci(c.v, 2); got != c.want {
+			t.Errorf("Sci(%v, 2) = %q, want %q", c.v, got, c.want)
+		}
+	}
+}
+
+// Every margin of a requirement is written one way: a percent to one
+// decimal, a margin of almost nothing without a bare zero, and a value
+// many times an at-least requirement as the ratio.
+func TestRelMargin(t *testing.T) {
+	for _, c := range []struct {
+		m    float64
+		want string
+	}{
+		{0.125, "+12.5 %"}, {-0.031, "−3.10 %"}, {0.00164, "+0.164 %"}, {0.0004, "< 0.05 %"}, {0, "< 0.05 %"}, {-0.0004, "> −0.05 %"},
+		{1.71, "+171 %"}, {8.99, "+899 %"}, {71.736, "73-fold"}, {9, "10-fold"}, {4.3e8, "4.3×10⁸-fold"},
+	} {
+		if got := RelMargin(c.m); got != c.want {
+			t.Errorf("RelMargin(%v) = %q, want %q", c.m, got, c.want)
+		}
+	}
+}
+
+// An insulation class is named one way: its IEC 60085 letter with its
+// temperature.
+func TestInsulationClass(t *testing.T) {
+	for _, c := range []struct {
+		k    float64
+		want string
+	}{
+		{428.15, "class F (155 °C)"}, {403.15, "class B (130 °C)"}, {453.15, "class H (180 °C)"}, {523.15, "class 250 (250 °C)"}, {443.15, "class 170 °C"},
+	} {
+		if got := InsulationClass(c.k); got != c.want {
+			t.Errorf("InsulationClass(%v) = %q, want %q", c.k, got, c.want)
 		}
 	}
 }

@@ -159,7 +159,7 @@ func wireBuildFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d c
 
 	if co.Wire.OuterEstimated {
 		out = append(out, validity{what: "Wire build", flagged: true, text: fmt.Sprintf(
-			"the wire's overall diameter (%s over %s bare) is an estimate for heavy-build enamelled wire. The winding's length, layers, surface and so its temperature follow from it; the wire maker's data sheet value would replace the estimate.",
+			"the wire's overall diameter (%s over %s bare) is an estimate for heavy-build enamelled wire. The winding's length, layers, surface and so its temperature follow from it; the overall diameter of the wire bought, on its maker's data sheet, is to be checked against it.",
 			Eng(co.Wire.Outer, "m", 3), Eng(co.Wire.Bare, "m", 3))})
 	}
 	return out
@@ -245,7 +245,7 @@ func thermalFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d cal
 	if st := cr.Heat.Steady; st.Settled && !cr.Verdict.NoSolution {
 		v := validity{what: "Thermal model"}
 		text := fmt.Sprintf("the resistance follows the winding's mean temperature %s linearly ($\\alpha_{20}$ of %s); heat crosses the turns with an effective conductivity of %s, so the hottest point is %s above the surface (%s); the insulation is judged at the hottest point",
-			Eng(Celsius(st.Mean), "°C", 3), co.Wire.Material.Name, Eng(cr.Heat.Conductivity, "W/(m·K)", 2), Eng(st.HotSpot-st.Surface, "K", 2), Eng(Celsius(st.Surface), "°C", 3))
+			Eng(Celsius(st.Mean), "°C", 3), co.Wire.Material.Name, Eng(cr.Heat.Conductivity, "W/(m·K)", 2), Eng(st.HotSpot-st.Surface, "K", 3), Eng(Celsius(st.Surface), "°C", 3))
 		if cv := st.Convection; cv.Ra > 0 {
 			if cv.InRange {
 				text += fmt.Sprintf("; the natural-convection correlation is used within its range (Rayleigh number %s)", Sci(cv.Ra, 2))
@@ -330,7 +330,7 @@ func pmEng(v float64) string {
 	if math.IsNaN(v) {
 		return "n/a"
 	}
-	return "±" + Eng(v, "m", 2)
+	return "±" + Eng(v, "m", 3)
 }
 
 // coolingAssumption states how the winding sheds heat.

@@ -13,6 +13,9 @@ import (
 	"coilmemo/doc"
 )
 
+// specKeyInProse is a hyphenated coil key followed by its value.
+var specKeyInProse = regexp.MustCompile(`\b(radial-build|mean-diameter|inner-diameter|outer-diameter|wire-outer-diameter|switch-off|on-time|driver-rating) [0-9]`)
+
 // The memo speaks to its client: no remark in it tells the spec's author
 // which key to add (those go to the terminal). Checked over every example
 // and figure-test design.
@@ -35,9 +38,20 @@ func TestNoRemarksToTheAuthor(t *testing.T) {
 		}
 		text := buf.String()
 		for _, p := range []string{"(give ", "state the ", "State the ", "(switch-off)", "(driver-rating)", "state wire-", "SOURCE_DATE_EPOCH", "stated in the spec", "The spec gives", "No former is stated",
-			"is not given", "which is not given", "No switch-off time is stated"} {
+			"is not given", "which is not given", "No switch-off time is stated",
+			"test plane of the spec", "(a coil's own with a subject)", "data sheet value would replace the estimate"} {
 			if i := strings.Index(text, p); i >= 0 {
 				t.Errorf("%s: %q in the memo: …%s…", filepath.Base(f), p, text[max(0, i-60):min(len(text), i+60)])
+			}
+		}
+		// a spec key with its value in prose ("radial-build 2.901 mm"),
+		// outside the inputs table that lists the keys as written
+		for _, line := range strings.Split(text, "\n") {
+			if strings.HasPrefix(line, "|") {
+				continue
+			}
+			if m := specKeyInProse.FindString(line); m != "" {
+				t.Errorf("%s: spec key %q in prose: %s", filepath.Base(f), m, line)
 			}
 		}
 	}

@@ -154,6 +154,15 @@ func compose(j *analysis.Study) (*doc.Document, *composer) {
 	}, c
 }
 
+// approvedBy is the approver's name, "not named" on an issued memo that
+// names none.
+func approvedBy(m spec.Memo) string {
+	if m.IsIssued() && m.Approver == "" {
+		return "not named"
+	}
+	return m.Approver
+}
+
 // titlePage: identification, headline results, limits compliance.
 func (c *composer) titlePage() {
 	title := c.title
@@ -169,7 +178,7 @@ func (c *composer) titlePage() {
 		field("Document", m.DocumentID), field("Revision", m.Revision),
 		field("Date", m.Date), field("Status", m.Status),
 		field("Prepared by", m.Author), field("Checked by", m.Checker),
-		field("Approved by", m.Approver),
+		field("Approved by", approvedBy(m)),
 	}})
 	c.heading(1, "Results summary")
 	c.add(c.verdict())
@@ -373,8 +382,8 @@ func (c *composer) summaryTable() doc.Table {
 			}
 			return Eng(Celsius(cr.Temperature), "°C", 3)
 		}),
-		row("Insulation class", func(i int, cr calc.CoilResult) string {
-			return Eng(Celsius(d.Coils[i].InsulationClass), "°C", 3)
+		row("Insulation", func(i int, cr calc.CoilResult) string {
+			return format.InsulationClass(d.Coils[i].InsulationClass)
 		}),
 		row("Inductance", func(_ int, cr calc.CoilResult) string { return Eng(cr.Inductance, "H", 3) }),
 		row("Wire length / conductor mass", func(i int, cr calc.CoilResult) string {
@@ -555,7 +564,7 @@ func (c *composer) limitsTable() doc.Table {
 			if l.Limit.Relation == calc.AtMost {
 				mg = -mg
 			}
-			margin = format.Margin(100*mg, "%")
+			margin = format.RelMargin(mg)
 		}
 		st := doc.Pass
 		if !l.Pass {
@@ -616,7 +625,9 @@ func testedOn(st *analysis.Study, l analysis.LimitResult, q spec.LimitQuantity) 
 			"surface-temperature": "hottest surface temperature", "current": "current", "voltage": "voltage", "resistance": "hot resistance",
 			"mass": "conductor mass", "wire-length": "wire length", "current-density": "current density", "inductance": "self-inductance",
 			"time-constant": "time constant L/R", "switch-off-voltage": "voltage across the switch at switch-off, unsuppressed",
-			"torque": "largest torque of its moment in the background field",
+			"torque": "largest torque of its moment in the background field", "core-flux-density": "peak flux density in its core",
+			"sensitivity": "sensitivity at its frequency", "band-noise": "noise-equivalent field, rms over its band",
+			"self-resonance": "self-resonant frequency", "resistance-ac": "a.c. resistance at its frequency",
 		}[l.Limit.Quantity]
 		if l.Limit.Quantity == "power" && st.Results.Coils[l.Coil].Duty >= 1 {
 			what = "power" // energised continuously: no duty cycle to average over

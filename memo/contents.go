@@ -17,13 +17,22 @@ func (c *composer) contents() {
 	if prepared == "" {
 		prepared = m.Date
 	}
+	// the gaps shown as they are: an issued memo whose approver is not
+	// named, a date after the memo's own
+	approver := dash(approvedBy(m))
+	date := func(d string) string {
+		if m.AfterDate(d) {
+			return d + " (after the memo's date)"
+		}
+		return dash(d)
+	}
 	c.add(doc.Paragraph{Spans: []doc.Span{{Text: "Approval", Strong: true}}})
 	c.add(doc.Table{
 		Header: []string{"Role", "Name", "Date", "Signature"},
 		Rows: [][]doc.Cell{
-			{{Text: "Prepared by"}, {Text: dash(m.Author)}, {Text: dash(prepared)}, {}},
-			{{Text: "Checked by"}, {Text: dash(m.Checker)}, {Text: dash(m.CheckedDate)}, {}},
-			{{Text: "Approved by"}, {Text: dash(m.Approver)}, {Text: dash(m.ApprovedDate)}, {}},
+			{{Text: "Prepared by"}, {Text: dash(m.Author)}, {Text: date(prepared)}, {}},
+			{{Text: "Checked by"}, {Text: dash(m.Checker)}, {Text: date(m.CheckedDate)}, {}},
+			{{Text: "Approved by"}, {Text: approver}, {Text: date(m.ApprovedDate)}, {}},
 		},
 		Widths: []float64{1.2, 2, 1.2, 2},
 		Align:  []doc.Align{doc.Left, doc.Left, doc.Left, doc.Left},

@@ -36,7 +36,7 @@ func (c *composer) planeFigure(co calc.Coil, pm *analysis.PlaneMap) {
 	var which string
 	switch ps := c.j.Spec.Design.Probes; {
 	case co.HasTestPlane:
-		which = "the test plane of the spec"
+		which = "the design's test plane"
 		switch {
 		case pm.InPlane == 1 && len(pm.Probes) == 1:
 			which += fmt.Sprintf(", in which the probe %q lies", pm.Probes[0].Name)

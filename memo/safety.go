@@ -10,6 +10,7 @@ import (
 	"coilmemo/analysis"
 	"coilmemo/calc"
 	"coilmemo/doc"
+	"coilmemo/format"
 	"coilmemo/templates"
 )
 
@@ -30,7 +31,7 @@ func Cautions(j *analysis.Study) []doc.Callout {
 		case analysis.ClassExceeded:
 			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Insulation class exceeded, " + name,
 				Spans: []doc.Span{{Text: templates.Text("caution-class", map[string]string{
-					"Temperature": hotText(cr, f.Value), "Class": Eng(Celsius(co.InsulationClass), "°C", 3),
+					"Temperature": hotText(cr, f.Value), "Class": format.InsulationClass(co.InsulationClass),
 					"Time": classTimeText(cr)})}}})
 		case analysis.ClassIfLeftOn:
 			out = append(out, doc.Callout{Severity: severity(f.Severity), Title: "Insulation class if left energised, " + name,

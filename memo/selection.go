@@ -121,12 +121,7 @@ func marginText(l calc.Limit, m float64) string {
 	if math.IsNaN(m) {
 		return "—"
 	}
-	s := Sig(100*m, 3) + " %"
-	if math.Abs(m) < 0.0005 {
-		s = "< 0.05 %"
-	} else if m > 0 {
-		s = "+" + s
-	}
+	s := format.RelMargin(m)
 	if l.Quantity == "temperature" || l.Quantity == "surface-temperature" {
 		return s + " of the rise"
 	}
@@ -346,6 +341,16 @@ func (c *composer) meritText(sz *analysis.Sizing) {
 		Eng(sz.Merit, "A²·m⁴/(W·kg)", 4)))
 }
 
+// keyPhrase names a coil key in words, with its article: "a radial
+// build" for radial-build, "an inner diameter" for inner-diameter.
+func keyPhrase(key string) string {
+	words := strings.ReplaceAll(key, "-", " ")
+	if strings.ContainsRune("aeiou", rune(words[0])) {
+		return "an " + words
+	}
+	return "a " + words
+}
+
 // sizingSummary is page 1's line on a sized design: what was chosen, for
 // what, out of how many choices.
 func (c *composer) sizingSummary() (doc.Paragraph, bool) {
@@ -356,7 +361,7 @@ func (c *composer) sizingSummary() (doc.Paragraph, bool) {
 	ch := sz.Chosen
 	var vals []string
 	for k, r := range sz.Size.Ranges {
-		vals = append(vals, r.Key+" "+rangeValueOf(r, ch.Values[k]))
+		vals = append(vals, keyPhrase(r.Key)+" of "+rangeValueOf(r, ch.Values[k]))
 	}
 	what := fmt.Sprintf("%s, %d turns", ch.Wire.Name(), ch.Turns)
 	if len(vals) > 0 {

@@ -264,7 +264,13 @@ func conductionSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, c
 		Numbers: fmt.Sprintf(`%s + %s`, Q(Celsius(Ts), "°C", 4), Q(rise, "K", 3)), Result: Q(Celsius(st.HotSpot), "°C", 4)})
 	if co.InsulationClass > 0 {
 		margin := co.InsulationClass - st.HotSpot
-		add(Step{What: "Margin to the insulation thermal class (IEC 60085)", Symbolic: `T_{\mathrm{class}} - T_{\mathrm{max}}`,
+		what := "Margin to the insulation thermal class (IEC 60085)"
+		if cr.Temperature > st.HotSpot {
+			// the duty cycle's peak is the temperature judged: this margin
+			// is the steady state's, not the one the tables give
+			what = "Margin of the duty-averaged steady state to the insulation thermal class (IEC 60085); the hotter peak of the duty cycle is compared with the class further on"
+		}
+		add(Step{What: what, Symbolic: `T_{\mathrm{class}} - T_{\mathrm{max}}`,
 			Numbers: fmt.Sprintf(`%s - %s`, Q(Celsius(co.InsulationClass), "°C", 4), Q(Celsius(st.HotSpot), "°C", 4)), Result: Q(margin, "K", 3)})
 	}
 	return steps
@@ -382,12 +388,12 @@ func warmUpText(co calc.Coil, cr calc.CoilResult) string {
 	h := cr.Heat
 	var b strings.Builder
 	if co.InsulationClass > 0 {
-		class := Eng(Celsius(co.InsulationClass), "°C", 3)
+		class := format.InsulationClass(co.InsulationClass)
 		if !math.IsNaN(h.TimeToLimit) {
-			fmt.Fprintf(&b, "Energised continuously from the ambient temperature, the hottest point of the winding reaches the insulation class of %s after %s (the lumped heat balance integrated in time). ",
+			fmt.Fprintf(&b, "Energised continuously from the ambient temperature, the hottest point of the winding reaches its insulation %s after %s (the lumped heat balance integrated in time). ",
 				class, duration(h.TimeToLimit))
 		} else {
-			fmt.Fprintf(&b, "Energised continuously, the winding never reaches its insulation class of %s: its steady hottest point stays below it. ", class)
+			fmt.Fprintf(&b, "Energised continuously, the winding never reaches its insulation %s: its steady hottest point stays below it. ", class)
 		}
 	}
 	if co.Former.Capacity() <= 0 {
@@ -439,7 +445,7 @@ func (c *composer) warmUpFigure(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 		// The class is drawn unless it lies so far above the curve that the
 		// curve would be squashed flat; the caption then says where it is.
 		if co.InsulationClass-tp.Ambient <= 3*(top-tp.Ambient) {
-			levels = append(levels, figures.Level{Y: Celsius(co.InsulationClass), Label: "insulation class " + Eng(Celsius(co.InsulationClass), "°C", 3)})
+			levels = append(levels, figures.Level{Y: Celsius(co.InsulationClass), Label: "insulation " + format.InsulationClass(co.InsulationClass)})
 		} else {
 			farBelow = true
 		}
@@ -463,7 +469,7 @@ func (c *composer) warmUpFigure(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 	}
 	switch {
 	case farBelow:
-		caption += fmt.Sprintf("; dotted: steady states (the insulation class, %s, lies far above)", Eng(Celsius(co.InsulationClass), "°C", 3))
+		caption += fmt.Sprintf("; dotted: steady states; the insulation %s lies far above", format.InsulationClass(co.InsulationClass))
 	case len(levels) > 0:
 		caption += "; dashed: insulation class, dotted: steady states"
 	}
@@ -562,8 +568,11 @@ func (c *composer) thermalTable() doc.Table {
 			m := "runaway"
 			if !math.IsNaN(cr.InsulationMargin) {
 				m = Eng(cr.InsulationMargin, "K", 3)
+				if cr.Temperature > cr.Heat.Steady.HotSpot {
+					m += " at the cycle peak"
+				}
 			}
-			return temp(co.InsulationClass) + " / " + m
+			return format.InsulationClass(co.InsulationClass) + " / " + m
 		}),
 		row("Time to the class, energised continuously", func(co calc.Coil, cr calc.CoilResult) string {
 			if math.IsNaN(cr.Heat.TimeToLimit) {
@@ -615,7 +624,7 @@ func runawayText(co calc.Coil, cr calc.CoilResult) string {
 	cy := cr.Heat.Cycle
 	class := "its insulation class"
 	if co.InsulationClass > 0 {
-		class = "its insulation class of " + Eng(Celsius(co.InsulationClass), "°C", 3)
+		class = "its insulation " + format.InsulationClass(co.InsulationClass)
 	}
 	var where string
 	switch {
@@ -650,7 +659,7 @@ func leftOnText(co calc.Coil, cr calc.CoilResult, on calc.ThermalState) string {
 		settle = "would settle at " + Eng(Celsius(on.HotSpot), "°C", 3)
 	}
 	return templates.Text("caution-left-on", map[string]string{"Duty": strconv.FormatFloat(100*cr.Duty, 'g', 3, 64) + " %",
-		"Class": Eng(Celsius(co.InsulationClass), "°C", 3), "Time": duration(h.TimeToLimit), "Settle": settle})
+		"Class": format.InsulationClass(co.InsulationClass), "Time": duration(h.TimeToLimit), "Settle": settle})
 }
 
 // hotSpotLabel names the steady hottest-point row: duty-averaged only

@@ -317,7 +317,7 @@ func (c *composer) monteCarlo(wc *analysis.WorstCase) {
 		}
 		c.para(text)
 		c.fig(doc.Figure{Caption: "Distribution of the magnetic moment over the Monte Carlo samples", Width: figWidth, Height: figHeight * 0.7,
-			Draw:    figures.Histogram("Magnetic moment |m| (A·m²)", mc.Values[0], req),
+			Draw:    figures.Histogram("Magnetic moment |m|", "A·m²", mc.Values[0], req),
 			Summary: fmt.Sprintf("Moment from %s to %s.", Eng(mc.Values[0][0], "A·m²", 3), Eng(mc.Values[0][len(mc.Values[0])-1], "A·m²", 3))})
 	}
 }

@@ -44,3 +44,34 @@ func TestApprovalKeysBroken(t *testing.T) {
 		}
 	}
 }
+
+// An approval record that does not hold together is accepted with a
+// positioned warning, not silently: an issued memo with no approver, and a
+// role's date after the memo's date. A consistent record warns of nothing.
+func TestApprovalWarnings(t *testing.T) {
+	for _, c := range []struct {
+		memo string
+		line int
+		msg  string
+	}{
+		{"date = 2026-11-30\nstatus = issued\n", 3, "status = issued but no approver is named"},
+		{"date = 2026-11-30\nchecked-date = 2026-12-02\nstatus = draft\n", 3, "checked-date 2026-12-02 is later than the memo's date 2026-11-30"},
+		{"date = 2026-11-30\napprover = P. Approver\napproved-date = 2026-12-01\nstatus = Issued\n", 4, "approved-date 2026-12-01 is later than the memo's date"},
+		{"date = 2026-11-30\napprover = P. Approver\nchecked-date = 2026-11-30\nstatus = issued\n", 0, ""},
+		{"status = draft\nchecked-date = 2026-12-02\n", 0, ""}, // no memo date to compare with
+	} {
+		s, ds := Parse("t.md", []byte(fenced("memo", c.memo)+fenced("coil", coilBody)))
+		if len(ds) > 0 {
+			t.Fatal(ds)
+		}
+		if c.msg == "" {
+			if len(s.Warnings) > 0 {
+				t.Errorf("%q: unexpected warnings %v", c.memo, s.Warnings)
+			}
+			continue
+		}
+		if len(s.Warnings) != 1 || s.Warnings[0].Line != c.line || !strings.Contains(s.Warnings[0].Msg, c.msg) {
+			t.Errorf("%q: want line %d: %q; got %v", c.memo, c.line, c.msg, s.Warnings)
+		}
+	}
+}

@@ -9,6 +9,7 @@ import (
 
 	"coilmemo/calc"
 	"coilmemo/calc/units"
+	"coilmemo/format"
 )
 
 // kv is one "key = value" line of a parameter block.
@@ -210,7 +211,9 @@ func (p *parser) defaultEntry(block, key, si string, line int, coil string) {
 
 func (p *parser) memoBlock(b *rawBlock) {
 	m := &p.spec.Memo
+	lines := map[string]int{}
 	for _, e := range p.keyValues(b, false) {
+		lines[e.key] = e.line
 		si := e.value
 		switch e.key {
 		case "title":
@@ -273,6 +276,23 @@ func (p *parser) memoBlock(b *rawBlock) {
 		p.entry(blockMemo, e, si)
 	}
 	p.checkHistory()
+	p.checkApproval(lines)
+}
+
+// checkApproval warns of an approval record that does not hold together:
+// a memo issued with no approver named, and a role's date after the
+// memo's own date. The memo is still written and shows the gap (IsIssued,
+// AfterDate); nothing is filled in for the author.
+func (p *parser) checkApproval(lines map[string]int) {
+	m := p.spec.Memo
+	if m.IsIssued() && m.Approver == "" {
+		p.warnf(lines["status"], "status = %s but no approver is named: the approval block shows the approver as not named (add approver = NAME once the memo is approved)", m.Status)
+	}
+	for _, r := range []struct{ key, date string }{{"prepared-date", m.PreparedDate}, {"checked-date", m.CheckedDate}, {"approved-date", m.ApprovedDate}} {
+		if m.AfterDate(r.date) {
+			p.warnf(lines[r.key], "%s %s is later than the memo's date %s: the approval block marks it", r.key, r.date, m.DateValue.Format("2006-01-02"))
+		}
+	}
 }
 
 func parseDate(s string) (time.Time, error) {
@@ -816,7 +836,7 @@ func parseInsulation(s string) (float64, string, error) {
 		t = strings.TrimSpace(t[6:])
 	}
 	if c, ok := insulationClasses[strings.ToUpper(t)]; ok {
-		return c + zeroCelsius, fmt.Sprintf(" (class %s, %s °C)", strings.ToUpper(t), strconv.FormatFloat(c, 'f', -1, 64)), nil
+		return c + zeroCelsius, " = " + format.InsulationClass(c+zeroCelsius), nil
 	}
 	_, unit, err := units.Split(t)
 	if err != nil {
@@ -826,7 +846,7 @@ func parseInsulation(s string) (float64, string, error) {
 		v, _ := strconv.ParseFloat(t, 64)
 		for _, c := range thermalClasses {
 			if v == c {
-				return c + zeroCelsius, fmt.Sprintf(" (class %s)", t), nil
+				return c + zeroCelsius, " = " + format.InsulationClass(c+zeroCelsius), nil
 			}
 		}
 		return 0, "", fmt.Errorf("no unit given: %s (expected a temperature such as 155 degC, a thermal class 90, 105, 120, 130, 155, 180, 200, 220 or 250, or a class letter Y, A, E, B, F, H, N, R)", t)

@@ -6,6 +6,7 @@ import (
 
 	"coilmemo/calc"
 	"coilmemo/calc/units"
+	"coilmemo/format"
 )
 
 // LimitQuantity describes a quantity a requirement line may constrain.
@@ -44,7 +45,7 @@ var LimitQuantities = map[string]LimitQuantity{
 	"switch-off-voltage":  {"V", "largest voltage across the switch at switch-off", true, false, true},
 	"torque":              {"N m", "largest torque in the background field", true, false, true},
 	"core-flux-density":   {"T", "largest peak flux density in a core", true, false, true},
-	"sensitivity":         {"V/T", "smallest pick-up coil sensitivity at its frequency (a coil's own with a subject)", true, false, true},
+	"sensitivity":         {"V/T", "smallest pick-up coil sensitivity at its frequency", true, false, true},
 	"band-noise":          {"T", "largest noise-equivalent field of a pick-up coil, rms over its band", true, false, true},
 	"self-resonance":      {"Hz", "lowest self-resonant frequency of a winding", true, false, true},
 	"resistance-ac":       {"ohm", "largest a.c. resistance of a winding at its frequency", true, false, true},
@@ -167,6 +168,11 @@ func (p *parser) limitsBlock(b *rawBlock) {
 			lim.Required = q.Value
 			p.spec.Design.Limits = append(p.spec.Design.Limits, lim)
 			si = relString(rel) + " " + q.String()
+			if !want.Named() {
+				// a unit with no name of its own (V/T is m²·s⁻¹): in the
+				// unit the quantity is known in, not as base units
+				si = relString(rel) + " " + units.FormatNumber(q.Value) + " " + format.Unit(lq.Unit)
+			}
 		}
 		p.entry(blockLimits, e, si)
 	}

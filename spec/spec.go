@@ -91,6 +91,23 @@ type Memo struct {
 	History []Revision
 }
 
+// IsIssued reports whether the memo block's status says the memo is
+// issued (released to its client), not a draft.
+func (m Memo) IsIssued() bool {
+	return strings.EqualFold(strings.TrimSpace(m.Status), "issued")
+}
+
+// AfterDate reports whether date (YYYY-MM-DD, as the memo block keeps a
+// role's date) lies after the memo's own date; false when either is
+// missing.
+func (m Memo) AfterDate(date string) bool {
+	if date == "" || m.DateValue.IsZero() {
+		return false
+	}
+	t, err := time.Parse("2006-01-02", date)
+	return err == nil && t.After(m.DateValue.Truncate(24*time.Hour))
+}
+
 // Revision is one line of the memo's revision history:
 //
 //	history = B | 2026-11-30 | R. Okonkwo | raised the moment to 0.15 A m2
@@ -142,6 +159,10 @@ type Spec struct {
 	// CoilFences are the lines of the coil blocks' opening fences, in
 	// order (the size command writes keys into them).
 	CoilFences []int
+	// Warnings are positioned remarks for the spec's author that do not
+	// stop the memo (an issued memo without an approver); the command
+	// line prints them, the memo shows the gap itself.
+	Warnings Diagnostics
 }
 
 // Block names of parameter blocks.
@@ -205,6 +226,11 @@ func (p *parser) errf(line int, format string, args ...any) {
 		line = 1
 	}
 	p.diags = append(p.diags, Diagnostic{File: p.file, Line: line, Msg: fmt.Sprintf(format, args...)})
+}
+
+// warnf records a warning at line: the memo is still written.
+func (p *parser) warnf(line int, format string, args ...any) {
+	p.spec.Warnings = append(p.spec.Warnings, Diagnostic{File: p.file, Line: max(line, 1), Msg: fmt.Sprintf(format, args...)})
 }
 
 // lineOf returns the 1-based line holding byte offset off.

@@ -101,6 +101,14 @@ var dimNames = map[Dim]dimInfo{
 	HeatCapacity:      {"heat capacity", "J/K", "J/K"},
 }
 
+// Named reports whether the dimension has a name and a unit of its own
+// ("T", "A·m²"), rather than only a product of base units (V/T, a
+// pick-up coil's sensitivity, is m²·s⁻¹ and has none).
+func (d Dim) Named() bool {
+	_, ok := dimNames[d]
+	return ok
+}
+
 // Name returns the dimension's everyday name ("length", "flux density"),
 // or its SI unit expression when it has none.
 func (d Dim) Name() string {

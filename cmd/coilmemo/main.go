@@ -262,6 +262,9 @@ func load(path string, stderr io.Writer) (*analysis.Study, error) {
 		}
 		return nil, &exitError{2, fmt.Sprintf("%s: %d problem%s; nothing written", path, n, s)}
 	}
+	for _, w := range job.Spec.Warnings {
+		fmt.Fprintf(stderr, "%s:%d: warning: %s\n", w.File, w.Line, w.Msg)
+	}
 	sizeWarnings(job, path, stderr)
 	return job, nil
 }
