@@ -49,6 +49,9 @@ type options struct {
 	// onePass lays the document out once, without the dry pass and so
 	// without figures drawn ahead (RenderOnePass).
 	onePass bool
+	// fpdfDeflate leaves the page contents' compression to fpdf instead of
+	// deflatePages (tests: the two must give the same bytes).
+	fpdfDeflate bool
 }
 
 func render(d *doc.Document, o options) (out []byte, err error) {
@@ -64,6 +67,9 @@ func render(d *doc.Document, o options) (out []byte, err error) {
 	var buf bytes.Buffer
 	if err := r.pdf.Output(&buf); err != nil {
 		return nil, fmt.Errorf("pdf: %w", err)
+	}
+	if o.compress && !o.fpdfDeflate {
+		return deflatePages(buf.Bytes())
 	}
 	return buf.Bytes(), nil
 }
@@ -300,7 +306,7 @@ func newRenderer(d *doc.Document, o options, total int, dry bool) *renderer {
 		created = epoch
 	}
 	created = created.UTC()
-	pdf.SetCompression(o.compress)
+	pdf.SetCompression(o.compress && o.fpdfDeflate) // else deflatePages compresses the pages
 	pdf.SetCatalogSort(true)
 	pdf.SetCreationDate(created)
 	pdf.SetModificationDate(created)
