@@ -180,7 +180,7 @@ func (r *renderer) keepFrom(k int) float64 {
 // lead-in, the lead-in and the figure (shrunk as far as figure allows).
 func (r *renderer) keepAfterHeading(next doc.Block, after []doc.Block) float64 {
 	if p, ok := next.(doc.Paragraph); ok && len(after) > 0 {
-		n := len(layoutSpans(p.Spans, styBody, r.w, r.w))
+		n := len(r.lines(p.Spans, styBody, r.w, r.w))
 		if n <= leadInLines {
 			switch b := after[0].(type) {
 			case doc.Figure:
@@ -221,7 +221,7 @@ func (r *renderer) minHeight(b doc.Block) float64 {
 	case doc.Equation:
 		return r.layoutEquation(b).h
 	case doc.Paragraph:
-		n := len(layoutSpans(b.Spans, styBody, r.w, r.w))
+		n := len(r.lines(b.Spans, styBody, r.w, r.w))
 		return float64(min(n, 2)) * leadBody
 	case doc.List:
 		return 2 * leadBody
@@ -250,7 +250,7 @@ func (r *renderer) minHeight(b doc.Block) float64 {
 // ---- paragraphs and lists ----
 
 func (r *renderer) paragraph(p doc.Paragraph) {
-	lines := layoutSpans(p.Spans, styBody, r.w, r.w)
+	lines := r.lines(p.Spans, styBody, r.w, r.w)
 	after := 6.5
 	if r.depth > 0 {
 		after = 2.5
@@ -298,7 +298,7 @@ func (r *renderer) listStart(l doc.List, n int) float64 {
 			continue
 		}
 		if p, ok := it[0].(doc.Paragraph); ok {
-			h += float64(min(len(layoutSpans(p.Spans, styBody, r.w-15, r.w-15)), 2))*leadBody + 2.5
+			h += float64(min(len(r.lines(p.Spans, styBody, r.w-15, r.w-15)), 2))*leadBody + 2.5
 			continue
 		}
 		h += 2 * leadBody
@@ -1158,7 +1158,7 @@ func (r *renderer) layoutCallout(c doc.Callout) calloutLayout {
 		runs = append(runs, styled{"  " + c.Title, tst})
 	}
 	cl.head = layoutStyled(runs, cl.inner, cl.inner)
-	cl.body = layoutSpans(c.Spans, styBody, cl.inner, cl.inner)
+	cl.body = r.lines(c.Spans, styBody, cl.inner, cl.inner)
 	if len(c.Spans) == 0 {
 		cl.body = nil
 	}

@@ -101,7 +101,8 @@ func layOutTwice(d *doc.Document, o options) (*renderer, error) {
 	}
 	done := make(chan result, 1)
 	eqs := &eqCache{m: map[eqKey]eqLayout{}} // shared by both passes
-	var figs *ahead                          // figures drawn ahead (tape.go)
+	texts := &textCache{m: map[textKey][]line{}}
+	var figs *ahead // figures drawn ahead (tape.go)
 	if !o.onSpot {
 		figs = newAhead(countFigures(d.Blocks))
 	}
@@ -115,13 +116,13 @@ func layOutTwice(d *doc.Document, o options) (*renderer, error) {
 		}()
 		defer figs.close()
 		dry := newRenderer(d, options{}, 0, true)
-		dry.eqs = eqs
+		dry.eqs, dry.texts = eqs, texts
 		dry.ahead = figs // the dry pass submits the figures it places
 		res.err = dry.run()
 		res.pages, res.heads = dry.pdf.PageNo(), dry.headPages
 	}()
 	r := newRenderer(d, o, 0, false)
-	r.eqs = eqs
+	r.eqs, r.texts = eqs, texts
 	r.ahead = figs
 	err := func() (err error) {
 		defer func() { // a panic in the set pass: wait for the dry pass, then re-raise
@@ -205,8 +206,9 @@ type renderer struct {
 	late, finished bool
 	lateNums       []lateNum
 	onText         func(page int, s string)
-	eqs            *eqCache // equation layouts, shared with the other pass
-	ahead          *ahead   // figures drawn ahead (tape.go); nil: on the spot
+	eqs            *eqCache   // equation layouts, shared with the other pass
+	texts          *textCache // lines of the document's text, likewise; nil: none kept
+	ahead          *ahead     // figures drawn ahead (tape.go); nil: on the spot
 	onPlace        func(page int, x, y float64, s string)
 
 	x, w  float64 // current column
@@ -423,7 +425,7 @@ func (r *renderer) floatFigure(bs []doc.Block, i int) int {
 	if !ok {
 		return i
 	}
-	n := len(layoutSpans(p.Spans, styBody, r.w, r.w))
+	n := len(r.lines(p.Spans, styBody, r.w, r.w))
 	if n > leadInLines {
 		return i
 	}

@@ -2,6 +2,7 @@ package pdf
 
 import (
 	"strings"
+	"sync"
 	"unicode"
 	"unicode/utf8"
 
@@ -157,6 +158,52 @@ func words(runs []styled) []word {
 	}
 	flush(frag{})
 	return out
+}
+
+// lines is layoutSpans for spans of the document, kept in the renderer's
+// text cache: a paragraph is measured for keeping with its neighbours and
+// then set, in both passes, from the same spans.
+func (r *renderer) lines(spans []doc.Span, base textStyle, first, width float64) []line {
+	if len(spans) == 0 || r.texts == nil {
+		return layoutSpans(spans, base, first, width)
+	}
+	k := textKey{at: &spans[0], n: len(spans), base: base, first: first, width: width}
+	if ls, ok := r.texts.get(k); ok {
+		return ls
+	}
+	ls := layoutSpans(spans, base, first, width)
+	r.texts.put(k, ls)
+	return ls
+}
+
+// textKey is what the lines of document spans depend on: the spans (the
+// document's, which do not change while it is set), the base style and
+// the widths.
+type textKey struct {
+	at           *doc.Span
+	n            int
+	base         textStyle
+	first, width float64
+}
+
+// textCache keeps the lines of the document's text laid out so far; the
+// lines are read only once made. Safe for the two passes' concurrent use.
+type textCache struct {
+	mu sync.Mutex
+	m  map[textKey][]line
+}
+
+func (c *textCache) get(k textKey) ([]line, bool) {
+	c.mu.Lock()
+	defer c.mu.Unlock()
+	ls, ok := c.m[k]
+	return ls, ok
+}
+
+func (c *textCache) put(k textKey, ls []line) {
+	c.mu.Lock()
+	defer c.mu.Unlock()
+	c.m[k] = ls
 }
 
 // layoutSpans breaks document spans into lines (see layoutStyled).
