@@ -431,8 +431,16 @@ func (o outline) distance(p calc.Vec) (d float64, bore bool) {
 func outlines(d calc.Design, coils []CoilStudy) []outline {
 	var out []outline
 	for i, co := range d.Coils {
+		out = append(out, coilOutlines(i, co, coils[i])...)
+	}
+	return out
+}
+
+// coilOutlines are the outlines of coil block i, co.
+func coilOutlines(i int, co calc.Coil, cs CoilStudy) []outline {
+	var out []outline
+	{
 		fr := calc.CoilFrame(co.Axis)
-		cs := coils[i]
 		if co.Form == calc.Rectangle {
 			b := cs.Bundle / 2
 			out = append(out, outline{coil: i, centre: co.Centre, fr: fr, rect: true, w: co.Width / 2, h: co.Height / 2, r: b})
