@@ -100,3 +100,28 @@ func TestMapPeakOfASolenoid(t *testing.T) {
 		}
 	}
 }
+
+// A circle of radius a centred on the origin with unit axis u meets the
+// xz-plane where the coil's plane does, along u × ŷ; its tangent there
+// lies along u × (u × ŷ), at asin(√(1 − u_y²)) to the plane (0 when u is
+// ŷ and the circle lies in the plane). Lifted off the plane by more than
+// its radius it does not meet it.
+func TestPlaneCrossing(t *testing.T) {
+	for _, u := range []calc.Vec{{1, 0, 1}, {1, 1, 0}, {1, 2, 3}, {0, 0, 1}, {0, 1, 0}} {
+		u = u.Unit()
+		co := calc.Coil{Form: calc.Loop, MeanDiameter: 0.08, Axis: u}
+		want := math.Asin(math.Sqrt(1 - u[1]*u[1]))
+		if got := planeCrossing(co); math.Abs(got-want) > 1e-3 {
+			t.Errorf("axis %v: crossing at %g rad, want %g rad", u, got, want)
+		}
+	}
+	lifted := calc.Coil{Form: calc.Loop, MeanDiameter: 0.08, Axis: calc.Vec{1, 0, 1}, Centre: calc.Vec{0, 0.05, 0}}
+	if got := planeCrossing(lifted); !math.IsNaN(got) {
+		t.Errorf("lifted circle crosses at %g rad", got)
+	}
+	// A rectangle on the z axis: its sides along y cross at right angles.
+	rect := calc.Coil{Form: calc.Rectangle, Width: 0.2, Height: 0.1, Axis: calc.Vec{0, 0, 1}}
+	if got := planeCrossing(rect); math.Abs(got-math.Pi/2) > 1e-3 {
+		t.Errorf("rectangle crosses at %g rad, want π/2", got)
+	}
+}

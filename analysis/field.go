@@ -495,6 +495,65 @@ type DesignStudy struct {
 	// Axes is the set of driven coils with axes not all parallel, their
 	// moments and couplings (axisset.go); nil for other designs.
 	Axes *AxisSet
+	// Crossing is, by coil block, the smallest angle, rad, at which the
+	// centre line of its winding (each turn's mean path) crosses the
+	// xz-plane through the origin, π/2 for a crossing at right angles;
+	// NaN where it does not cross it, 0 where it lies in it.
+	Crossing []float64
+}
+
+// planeCrossing is DesignStudy.Crossing of coil co: its mean turn (every
+// placement) sampled at 7200 points, the angle to the plane taken from the
+// path's tangent across each change of sign of y.
+func planeCrossing(co calc.Coil) float64 {
+	fr := calc.CoilFrame(co.Axis)
+	const n = 7200
+	var paths [][]calc.Vec
+	if co.Form == calc.Rectangle {
+		w, h := co.Width/2, co.Height/2
+		corners := []calc.Vec{{w, h}, {-w, h}, {-w, -h}, {w, -h}}
+		var path []calc.Vec
+		for k := range 4 {
+			a, b := corners[k], corners[(k+1)%4]
+			for j := range n / 4 {
+				l := a.Add(b.Sub(a).Scale(float64(j) / (n / 4)))
+				path = append(path, co.Centre.Add(fr.ToGlobal(l)))
+			}
+		}
+		paths = append(paths, path)
+	} else {
+		r := co.MeanDiameter / 2
+		for _, z := range calc.Placements(co) {
+			var path []calc.Vec
+			for j := range n {
+				phi := 2 * math.Pi * float64(j) / n
+				path = append(path, co.Centre.Add(fr.ToGlobal(calc.Vec{r * math.Cos(phi), r * math.Sin(phi), z})))
+			}
+			paths = append(paths, path)
+		}
+	}
+	angle := math.NaN()
+	scale := math.Max(co.MeanDiameter, math.Max(co.Width, co.Height))
+	for _, path := range paths {
+		inPlane := true
+		for k, p := range path {
+			q := path[(k+1)%len(path)]
+			if math.Abs(p[1]) > 1e-12*scale {
+				inPlane = false
+			}
+			if (p[1] <= 0) != (q[1] <= 0) {
+				t := q.Sub(p).Unit()
+				a := math.Asin(math.Min(math.Abs(t[1]), 1))
+				if math.IsNaN(angle) || a < angle {
+					angle = a
+				}
+			}
+		}
+		if inPlane {
+			return 0
+		}
+	}
+	return angle
 }
 
 func analyseDesign(d calc.Design, r calc.Results, grid int) DesignStudy {
@@ -504,6 +563,9 @@ func analyseDesign(d calc.Design, r calc.Results, grid int) DesignStudy {
 		ds.Planes = append(ds.Planes, planeMap(d, r, i))
 	}
 	ds.Axes = axisSet(d, r)
+	for _, co := range d.Coils {
+		ds.Crossing = append(ds.Crossing, planeCrossing(co))
+	}
 	return ds
 }
 
