@@ -325,6 +325,7 @@ func coreStudy(cs *CoilStudy, co calc.Coil, cr *calc.CoilResult, k *calc.CoreRes
 		}
 		p.Dipole = append(p.Dipole, dip)
 	}
+	p.DipoleNear = dipoleNear(p)
 	cs.Axis = p
 
 	// The map, over the winding and the rod's ends.
@@ -371,5 +372,8 @@ func coreStudy(cs *CoilStudy, co calc.Coil, cr *calc.CoilResult, k *calc.CoreRes
 	}
 	close(rows)
 	wg.Wait()
+	m.setPeak(ownNear(co, *cs), func(x, z float64) bool {
+		return math.Abs(x) < co.Core.Diameter/2 && math.Abs(z) < co.Core.Length/2
+	})
 	cs.Map = m
 }

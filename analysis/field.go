@@ -41,6 +41,11 @@ type AxisProfile struct {
 	Z, Exact, Dipole []float64
 	Dipole1pc        float64 // m, NaN when not found
 	Peak             float64 // T, largest |B| of the profile
+	// DipoleNear is how the point dipole compares with the exact field
+	// on the profile's points nearer the centre than Dipole1pc where the
+	// dipole is drawn: +1 above it at every such point, −1 below it at
+	// every one, 0 when it crosses it or there are none.
+	DipoleNear int
 	// Bore is the near profile of an air-core coil block (nil for a
 	// cored coil, whose profile is the core's).
 	Bore *BoreProfile
@@ -177,7 +182,29 @@ func profileOnAxis(co calc.Coil, cr calc.CoilResult, n int) AxisProfile {
 		p.Dipole = append(p.Dipole, dip)
 	}
 	p.Bore = boreProfile(co, cr, src, fr)
+	p.DipoleNear = dipoleNear(p)
 	return p
+}
+
+// dipoleNear is AxisProfile.DipoleNear of p.
+func dipoleNear(p AxisProfile) int {
+	above, below := 0, 0
+	for i, z := range p.Z {
+		if d := p.Dipole[i]; !math.IsNaN(d) && math.Abs(z) < p.Dipole1pc {
+			if d > p.Exact[i] {
+				above++
+			} else if d < p.Exact[i] {
+				below++
+			}
+		}
+	}
+	switch {
+	case above > 0 && below == 0:
+		return 1
+	case below > 0 && above == 0:
+		return -1
+	}
+	return 0
 }
 
 // AxialSize is the larger of a coil block's outer radius and its axial
@@ -201,6 +228,67 @@ type MapData struct {
 	X, Z         []float64
 	B            []float64
 	XHalf, ZHalf float64
+	// Peak is the largest |B| of the map's nodes, at the node (PeakX,
+	// PeakZ) — of two mirror images, the one at PeakX ≥ 0 and PeakZ ≥ 0,
+	// and PeakMirrored when the node at −PeakZ holds the same value to
+	// 10⁻⁹. For a coil block's own map, PeakNear reports that the node
+	// lies within two node spacings of the outline of its winding or rod
+	// (outline), and PeakBore that it lies in a winding's bore.
+	Peak, PeakX, PeakZ float64
+	PeakMirrored       bool
+	PeakNear, PeakBore bool
+	// PeakCore reports that the node lies in a cored coil's rod (PeakBore
+	// is then false).
+	PeakCore bool
+}
+
+// setPeak finds m's Peak and its node; near and bore, when given, say
+// where a node of the coil block's own frame lies (coilOutlines).
+func (m *MapData) setPeak(near func(x, z float64) (dist float64, bore bool), inCore func(x, z float64) bool) {
+	nz := len(m.Z)
+	m.Peak = math.Inf(-1)
+	best := -1
+	for k, v := range m.B {
+		ix, iz := k/nz, k%nz
+		if v > m.Peak || (v == m.Peak && best >= 0 && m.X[ix] >= 0 && m.Z[iz] >= 0 && (m.X[best/nz] < 0 || m.Z[best%nz] < 0)) {
+			m.Peak, best = v, k
+		}
+	}
+	if best < 0 {
+		m.Peak = math.NaN()
+		return
+	}
+	ix, iz := best/nz, best%nz
+	// Of mirror images in x (a body of revolution) and z, the one at
+	// x ≥ 0, z ≥ 0.
+	if jx := len(m.X) - 1 - ix; m.X[ix] < 0 && m.B[jx*nz+iz] == m.Peak {
+		ix = jx
+	}
+	if jz := nz - 1 - iz; m.Z[iz] < 0 && math.Abs(m.B[ix*nz+jz]/m.Peak-1) <= 1e-9 {
+		iz = jz
+	}
+	m.PeakX, m.PeakZ = m.X[ix], m.Z[iz]
+	jz := nz - 1 - iz
+	m.PeakMirrored = m.PeakZ != 0 && math.Abs(m.B[ix*nz+jz]/m.Peak-1) <= 1e-9
+	if near != nil {
+		step := math.Max(2*m.XHalf/float64(max(len(m.X)-1, 1)), 2*m.ZHalf/float64(max(nz-1, 1)))
+		d, bore := near(m.PeakX, m.PeakZ)
+		m.PeakNear, m.PeakBore = d <= 2*step, bore
+	}
+	if inCore != nil && inCore(m.PeakX, m.PeakZ) {
+		m.PeakCore, m.PeakBore = true, false
+	}
+}
+
+// ownNear is the distance of the node (x, z) of coil block co's own map
+// from its outlines, and whether it lies in its bore.
+func ownNear(co calc.Coil, cs CoilStudy) func(x, z float64) (float64, bool) {
+	os := coilOutlines(0, co, cs)
+	fr := calc.CoilFrame(co.Axis)
+	return func(x, z float64) (float64, bool) {
+		d, _, bore := nearestOutline(os, co.Centre.Add(fr.E1.Scale(x)).Add(fr.U.Scale(z)))
+		return d, bore
+	}
 }
 
 func coilMap(co calc.Coil, cr calc.CoilResult, cs CoilStudy, grid int) *MapData {
@@ -236,6 +324,7 @@ func coilMap(co calc.Coil, cr calc.CoilResult, cs CoilStudy, grid int) *MapData 
 			m.B[ix*len(m.Z)+iz] = g.Magnitude(ix, iz)
 		}
 	}
+	m.setPeak(ownNear(co, cs), nil)
 	return m
 }
 
@@ -406,6 +495,65 @@ type DesignStudy struct {
 	// Axes is the set of driven coils with axes not all parallel, their
 	// moments and couplings (axisset.go); nil for other designs.
 	Axes *AxisSet
+	// Crossing is, by coil block, the smallest angle, rad, at which the
+	// centre line of its winding (each turn's mean path) crosses the
+	// xz-plane through the origin, π/2 for a crossing at right angles;
+	// NaN where it does not cross it, 0 where it lies in it.
+	Crossing []float64
+}
+
+// planeCrossing is DesignStudy.Crossing of coil co: its mean turn (every
+// placement) sampled at 7200 points, the angle to the plane taken from the
+// path's tangent across each change of sign of y.
+func planeCrossing(co calc.Coil) float64 {
+	fr := calc.CoilFrame(co.Axis)
+	const n = 7200
+	var paths [][]calc.Vec
+	if co.Form == calc.Rectangle {
+		w, h := co.Width/2, co.Height/2
+		corners := []calc.Vec{{w, h}, {-w, h}, {-w, -h}, {w, -h}}
+		var path []calc.Vec
+		for k := range 4 {
+			a, b := corners[k], corners[(k+1)%4]
+			for j := range n / 4 {
+				l := a.Add(b.Sub(a).Scale(float64(j) / (n / 4)))
+				path = append(path, co.Centre.Add(fr.ToGlobal(l)))
+			}
+		}
+		paths = append(paths, path)
+	} else {
+		r := co.MeanDiameter / 2
+		for _, z := range calc.Placements(co) {
+			var path []calc.Vec
+			for j := range n {
+				phi := 2 * math.Pi * float64(j) / n
+				path = append(path, co.Centre.Add(fr.ToGlobal(calc.Vec{r * math.Cos(phi), r * math.Sin(phi), z})))
+			}
+			paths = append(paths, path)
+		}
+	}
+	angle := math.NaN()
+	scale := math.Max(co.MeanDiameter, math.Max(co.Width, co.Height))
+	for _, path := range paths {
+		inPlane := true
+		for k, p := range path {
+			q := path[(k+1)%len(path)]
+			if math.Abs(p[1]) > 1e-12*scale {
+				inPlane = false
+			}
+			if (p[1] <= 0) != (q[1] <= 0) {
+				t := q.Sub(p).Unit()
+				a := math.Asin(math.Min(math.Abs(t[1]), 1))
+				if math.IsNaN(angle) || a < angle {
+					angle = a
+				}
+			}
+		}
+		if inPlane {
+			return 0
+		}
+	}
+	return angle
 }
 
 func analyseDesign(d calc.Design, r calc.Results, grid int) DesignStudy {
@@ -415,6 +563,9 @@ func analyseDesign(d calc.Design, r calc.Results, grid int) DesignStudy {
 		ds.Planes = append(ds.Planes, planeMap(d, r, i))
 	}
 	ds.Axes = axisSet(d, r)
+	for _, co := range d.Coils {
+		ds.Crossing = append(ds.Crossing, planeCrossing(co))
+	}
 	return ds
 }
 

@@ -2,6 +2,7 @@ package analysis
 
 import (
 	"math"
+	"sort"
 
 	"coilmemo/calc"
 )
@@ -71,17 +72,29 @@ type Safety struct {
 }
 
 // ImplantReach is where the field of all coils together reaches
-// ImplantField: at the origin, along the z axis and in the xy plane
-// (largest distance from the origin, 0 when not reached), at probes, and
-// from every winding's surface outward (Windings, one per coil block).
+// ImplantField. Two figures describe the region: Distance, the largest
+// distance from the outer surface of a winding (or rod) at which |B| still
+// reaches the level — beyond it from every winding the field stays below
+// it — and Axial, how far from the origin along the axis the level
+// reaches. The others are the searches these come from: at the origin,
+// along the axis and in the plane across it from the origin, along the
+// directions of Farthest, at probes, and outward from every winding
+// (Windings, one per coil block).
 type ImplantReach struct {
 	Searched      bool    // false for a design without extent
 	Origin        float64 // T, |B| at the origin
-	Axial, Radial float64 // m
+	Axial, Radial float64 // m, from the origin
 	// Axis is the direction Axial is measured along and Radial across:
 	// the z axis, unless every coil's axis lies on one line through the
 	// origin, which is then the axis (reachAxis).
 	Axis calc.Vec
+	// AxialClear is the distance of the axial reach's far end from the
+	// outer surface of the nearest winding or rod, of coil block
+	// AxialCoil (0 when it lies within that outline: in its bore when
+	// AxialBore); AxialCoil is −1 when Axial is 0.
+	AxialClear float64
+	AxialCoil  int
+	AxialBore  bool
 	// Farthest is the largest distance from the origin, beyond the sphere
 	// that holds every winding, at which |B| still reaches the level along
 	// any direction searched (±x, ±y, ±z, ± the
@@ -91,14 +104,21 @@ type ImplantReach struct {
 	Toward   calc.Vec // unit vector
 	Probes   []int    // indices of probes at or above the level
 	Windings []WindingReach
+	// Distance is the largest of the Windings' distances, from the
+	// winding of coil block Nearest (−1 when the level is reached at no
+	// winding's surface nor beyond one).
+	Distance float64 // m
+	Nearest  int
 }
 
 // WindingReach is the field of all coils next to one coil block's winding:
 // Surface the largest |B| found at its outer surface (where a hand can
-// reach it), and Distance the largest distance from that surface, along
-// the coil's axis beyond its end faces and outward in its plane, at which
-// |B| still reaches ImplantField (0 when it does not). For a cored coil
-// the surface includes the rod's end faces, and the field the core's.
+// reach it), and Distance the largest distance from that outer surface —
+// of the outline the winding fills with its bore (outline), the rod's
+// included for a cored coil — of a point at which |B| still reaches
+// ImplantField and which lies nearer this block's outline than any
+// other's (0 when there is none). For a cored coil the field includes the
+// core's.
 type WindingReach struct {
 	Surface  float64 // T
 	Distance float64 // m
@@ -253,7 +273,7 @@ func reachExtent(d calc.Design) float64 {
 
 func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach {
 	ext := reachExtent(d)
-	ir := ImplantReach{Origin: r.FieldCentre.Norm()}
+	ir := ImplantReach{Origin: r.FieldCentre.Norm(), Nearest: -1, AxialCoil: -1}
 	if !(ext > 0) {
 		return ir
 	}
@@ -263,20 +283,40 @@ func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach
 	// no conductor); in the plane it stops outside the windings.
 	f := calc.CoilFrame(reachAxis(d))
 	ir.Axis = f.U
-	ir.Axial = math.Max(reach(fm, calc.Vec{}, f.U, ImplantField, ext*0.01, ext*1e3),
-		reach(fm, calc.Vec{}, f.U.Scale(-1), ImplantField, ext*0.01, ext*1e3))
-	ir.Radial = math.Max(reach(fm, calc.Vec{}, f.E1, ImplantField, ext, ext*1e3),
-		reach(fm, calc.Vec{}, f.E2, ImplantField, ext, ext*1e3))
+	up, down := reach(fm, calc.Vec{}, f.U, ImplantField, ext*0.01, ext*1e3),
+		reach(fm, calc.Vec{}, f.U.Scale(-1), ImplantField, ext*0.01, ext*1e3)
+	ir.Axial = math.Max(up, down)
+	e1, e2 := reach(fm, calc.Vec{}, f.E1, ImplantField, ext, ext*1e3), reach(fm, calc.Vec{}, f.E2, ImplantField, ext, ext*1e3)
+	ir.Radial = math.Max(e1, e2)
 	ir.Farthest, ir.Toward = farthestReach(fm, d, r, ext)
 	for i, p := range r.Probes {
 		if p.B.Norm() >= ImplantField {
 			ir.Probes = append(ir.Probes, i)
 		}
 	}
-	// Each coil's search is independent: on every core, each into its own
-	// slot.
-	ir.Windings = make([]WindingReach, len(d.Coils))
-	eachIndex(len(d.Coils), func(i int) { ir.Windings[i] = windingReach(fm, d.Coils[i], coils[i], ext) })
+	os := outlines(d, coils)
+	var extra []calc.Vec
+	if ir.Axial > 0 {
+		far := f.U.Scale(up)
+		if down > up {
+			far = f.U.Scale(-down)
+		}
+		ir.AxialClear, ir.AxialCoil, ir.AxialBore = nearestOutline(os, far)
+		extra = append(extra, f.U.Scale(up), f.U.Scale(-down))
+	}
+	extra = append(extra, f.E1.Scale(e1), f.E2.Scale(e2), ir.Toward.Scale(ir.Farthest))
+	var points []calc.Vec
+	for _, p := range extra {
+		if p.Norm() > 0 {
+			points = append(points, p)
+		}
+	}
+	ir.Windings = windingReaches(fm, d, coils, ext, points)
+	for i, w := range ir.Windings {
+		if w.Distance > ir.Distance || (ir.Nearest < 0 && w.Surface >= ImplantField) {
+			ir.Distance, ir.Nearest = w.Distance, i
+		}
+	}
 	return ir
 }
 
@@ -348,55 +388,277 @@ func farthestReach(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, ex
 	return best, toward
 }
 
-// windingReach searches the field of all coils outward from the surface
-// of one coil block's winding: from the middle of each end face along the
-// axis, and from the outer surface in the coil's plane (for a rectangle,
-// from the middle of each side across it), in both senses; for a cored
-// coil also from the middle of each end face of the rod along the axis.
-func windingReach(fm func(calc.Vec) calc.Vec, co calc.Coil, cs CoilStudy, ext float64) WindingReach {
-	fr := calc.CoilFrame(co.Axis)
-	e := cs.Envelope
-	type start struct {
+// outline is the solid a winding (one coil of a block) or a rod fills
+// with everything inside it, bore included, in the coil's frame about
+// centre: for a circular winding the cylinder of radius R1 from Z0 to Z1
+// (its rim rounded to the bundle's radius for a round bundle), for a
+// rectangle the filled rectangle W × H thickened by the bundle's radius,
+// for a rod the cylinder of its diameter and length. Its outer surface is
+// what the implant reach is measured from.
+type outline struct {
+	coil   int
+	centre calc.Vec
+	fr     calc.Frame
+	rect   bool
+	round  bool    // rim rounded: r is the bundle's radius about (rc, zc)
+	w, h   float64 // rectangle: half-width, half-height of the bundle's centre line
+	r0, r1 float64 // bore and outer radius
+	z0, z1 float64 // axial extent about centre
+	r      float64 // bundle radius (round rim, rectangle)
+}
+
+// distance is the distance, m, from p to the outline (0 inside it), and
+// whether p lies in the bore (inside the outline, within the inner radius,
+// for a circular winding).
+func (o outline) distance(p calc.Vec) (d float64, bore bool) {
+	l := o.fr.ToLocal(p.Sub(o.centre))
+	if o.rect {
+		q := calc.Vec{math.Max(math.Abs(l[0])-o.w, 0), math.Max(math.Abs(l[1])-o.h, 0), l[2]}
+		d = math.Max(q.Norm()-o.r, 0)
+		return d, d == 0 && math.Abs(l[0]) < o.w-o.r && math.Abs(l[1]) < o.h-o.r
+	}
+	rho := math.Hypot(l[0], l[1])
+	if o.round {
+		rc, zc := (o.r0+o.r1)/2, (o.z0+o.z1)/2
+		d = math.Max(math.Hypot(math.Max(rho-rc, 0), l[2]-zc)-o.r, 0)
+	} else {
+		d = math.Hypot(math.Max(rho-o.r1, 0), math.Max(math.Max(l[2]-o.z1, o.z0-l[2]), 0))
+	}
+	return d, d == 0 && rho < o.r0
+}
+
+// outlines are the outlines of every winding of every coil block (each
+// coil of a pair) and of every rod.
+func outlines(d calc.Design, coils []CoilStudy) []outline {
+	var out []outline
+	for i, co := range d.Coils {
+		out = append(out, coilOutlines(i, co, coils[i])...)
+	}
+	return out
+}
+
+// coilOutlines are the outlines of coil block i, co.
+func coilOutlines(i int, co calc.Coil, cs CoilStudy) []outline {
+	var out []outline
+	{
+		fr := calc.CoilFrame(co.Axis)
+		if co.Form == calc.Rectangle {
+			b := cs.Bundle / 2
+			out = append(out, outline{coil: i, centre: co.Centre, fr: fr, rect: true, w: co.Width / 2, h: co.Height / 2, r: b})
+		} else {
+			e := cs.Envelope
+			for _, z := range cs.Placements {
+				out = append(out, outline{coil: i, centre: co.Centre.Add(fr.U.Scale(z)), fr: fr, round: e.Round,
+					r0: e.R0, r1: e.R1, z0: e.Z0, z1: e.Z1, r: (e.Z1 - e.Z0) / 2})
+			}
+		}
+		if cs.Kinds.Core != nil && co.Core.Length > 0 && co.Core.Diameter > 0 {
+			out = append(out, outline{coil: i, centre: co.Centre, fr: fr, r1: co.Core.Diameter / 2,
+				z0: -co.Core.Length / 2, z1: co.Core.Length / 2})
+		}
+	}
+	return out
+}
+
+// nearestOutline is the distance from p to the nearest outline, the coil
+// block it belongs to and whether p lies in that winding's bore.
+func nearestOutline(os []outline, p calc.Vec) (d float64, coil int, bore bool) {
+	d, coil = math.Inf(1), -1
+	for _, o := range os {
+		if v, b := o.distance(p); v < d {
+			d, coil, bore = v, o.coil, b
+		}
+	}
+	return d, coil, bore
+}
+
+// reachDirections are the directions the implant level is searched along
+// from a winding's centre, in the coil's frame: every 10° in the planes
+// through the axis along E1 and along E2, and for a rectangle also in its
+// own plane and in the planes through the axis and each diagonal.
+func reachDirections(co calc.Coil, fr calc.Frame) []calc.Vec {
+	planes := [][2]calc.Vec{{fr.U, fr.E1}, {fr.U, fr.E2}}
+	if co.Form == calc.Rectangle {
+		d1 := fr.E1.Scale(co.Width).Add(fr.E2.Scale(co.Height)).Unit()
+		d2 := fr.E1.Scale(co.Width).Sub(fr.E2.Scale(co.Height)).Unit()
+		planes = append(planes, [2]calc.Vec{fr.E1, fr.E2}, [2]calc.Vec{fr.U, d1}, [2]calc.Vec{fr.U, d2})
+	}
+	var dirs []calc.Vec
+	for _, pl := range planes {
+		for k := range 36 {
+			a := float64(k) * math.Pi / 18
+			u := pl[0].Scale(math.Cos(a)).Add(pl[1].Scale(math.Sin(a)))
+			dup := false
+			for _, v := range dirs {
+				if u.Sub(v).Norm() < 1e-9 {
+					dup = true
+					break
+				}
+			}
+			if !dup {
+				dirs = append(dirs, u)
+			}
+		}
+	}
+	return dirs
+}
+
+// windingReaches searches the field of all coils outward from every
+// winding (and rod): along reachDirections from the centre of each of a
+// block's windings, each search starting where the line leaves the block's
+// own outlines and running inward from 1000 design extents; and, as
+// before, from the middle of each end face along the axis and from the
+// outer surface in the coil's plane. Surface is the largest |B| found
+// where a search leaves a block's outline; a point found at the level
+// counts, by its distance from the nearest outline, toward that
+// outline's block. extra are further points at the level (the searches
+// from the origin), counted the same way.
+func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, coils []CoilStudy, ext float64, extra []calc.Vec) []WindingReach {
+	os := outlines(d, coils)
+	gap := 1e-6 * math.Max(ext, 1e-3)
+	type ray struct {
+		coil    int
 		at, dir calc.Vec
 	}
-	var starts []start
-	// A hair outside the surface, so the search starts clear of the
-	// conductors whatever the rounding.
-	gap := 1e-6 * math.Max(ext, 1e-3)
-	if co.Form == calc.Rectangle {
-		b := cs.Bundle
-		for _, s := range []float64{1, -1} {
-			starts = append(starts,
-				start{co.Centre.Add(fr.E1.Scale(s * (co.Width/2 + b/2 + gap))), fr.E1.Scale(s)},
-				start{co.Centre.Add(fr.E2.Scale(s * (co.Height/2 + b/2 + gap))), fr.E2.Scale(s)},
-				start{co.Centre.Add(fr.E1.Scale(co.Width / 2)).Add(fr.U.Scale(s * (b/2 + gap))), fr.U.Scale(s)})
-		}
-	} else {
-		rm := (e.R0 + e.R1) / 2
-		for _, z := range cs.Placements {
-			for _, s := range []float64{1, -1} {
-				c := co.Centre.Add(fr.U.Scale(z))
-				starts = append(starts,
-					start{c.Add(fr.E1.Scale(s * (e.R1 + gap))), fr.E1.Scale(s)},
-					start{c.Add(fr.E2.Scale(s * (e.R1 + gap))), fr.E2.Scale(s)},
-					start{c.Add(fr.E1.Scale(rm)).Add(fr.U.Scale(s * (e.Z1 + gap))), fr.U.Scale(s)})
+	var rays []ray
+	for i, co := range d.Coils {
+		fr := calc.CoilFrame(co.Axis)
+		var own []outline
+		for _, o := range os {
+			if o.coil == i {
+				own = append(own, o)
 			}
 		}
-		if cs.Kinds.Core != nil && co.Core.Length > 0 {
+		outside := func(p calc.Vec) bool {
+			for _, o := range own {
+				if v, _ := o.distance(p); v == 0 {
+					return false
+				}
+			}
+			return true
+		}
+		// exit is where the line from c along u leaves the block's own
+		// outlines for good (they are convex and hold c, or lie clear of
+		// it on another placement, which the step outward skips).
+		exit := func(c, u calc.Vec) float64 {
+			hi := math.Max(ext, 1e-3)
+			for !outside(c.Add(u.Scale(hi))) {
+				hi *= 2
+			}
+			lo := 0.0
+			for range 60 {
+				mid := (lo + hi) / 2
+				if outside(c.Add(u.Scale(mid))) {
+					hi = mid
+				} else {
+					lo = mid
+				}
+			}
+			return hi
+		}
+		centres := []calc.Vec{co.Centre}
+		if co.Form != calc.Rectangle {
+			centres = centres[:0]
+			for _, z := range coils[i].Placements {
+				centres = append(centres, co.Centre.Add(fr.U.Scale(z)))
+			}
+		}
+		for _, c := range centres {
+			for _, u := range reachDirections(co, fr) {
+				t := exit(c, u)
+				rays = append(rays, ray{i, c.Add(u.Scale(t + gap)), u})
+			}
+		}
+		// From the middle of each end face, at the mean radius, along the
+		// axis: next to the conductors' ends.
+		if co.Form != calc.Rectangle {
+			e := coils[i].Envelope
+			rm := (e.R0 + e.R1) / 2
+			for _, c := range centres {
+				for _, s := range []float64{1, -1} {
+					rays = append(rays, ray{i, c.Add(fr.E1.Scale(rm)).Add(fr.U.Scale(s * (e.Z1 + gap))), fr.U.Scale(s)})
+				}
+			}
+		} else {
+			b := coils[i].Bundle
 			for _, s := range []float64{1, -1} {
-				starts = append(starts, start{co.Centre.Add(fr.U.Scale(s * (co.Core.Length/2 + gap))), fr.U.Scale(s)})
+				rays = append(rays, ray{i, co.Centre.Add(fr.E1.Scale(co.Width / 2)).Add(fr.U.Scale(s * (b/2 + gap))), fr.U.Scale(s)})
 			}
 		}
 	}
-	var wr WindingReach
-	for _, st := range starts {
-		b := fm(st.at).Norm()
+	type found struct {
+		surface float64
+		point   calc.Vec
+		ok      bool
+	}
+	res := make([]found, len(rays))
+	far := math.Max(ext, 1e-3) * 1e3
+	eachIndex(len(rays), func(k int) {
+		r := rays[k]
+		b := fm(r.at).Norm()
 		if math.IsNaN(b) {
+			return
+		}
+		res[k].surface = b
+		if t := reach(fm, r.at, r.dir, ImplantField, gap, far); t > 0 {
+			res[k].point, res[k].ok = r.at.Add(r.dir.Scale(t)), true
+		}
+	})
+	wr := make([]WindingReach, len(d.Coils))
+	count := func(p calc.Vec) {
+		if dd, k, _ := nearestOutline(os, p); k >= 0 && !math.IsInf(dd, 0) {
+			wr[k].Distance = math.Max(wr[k].Distance, dd)
+		}
+	}
+	for k, f := range res {
+		wr[rays[k].coil].Surface = math.Max(wr[rays[k].coil].Surface, f.surface)
+		if f.ok {
+			count(f.point)
+		}
+	}
+	for _, p := range extra {
+		count(p)
+	}
+	// The farthest point at the level along a line need not be the one
+	// farthest from every winding: between the coils of a pair the field
+	// at the centre may reach the level far from both. Each line is
+	// sampled from its start to its farthest point at the level, every
+	// 1/400 of the design's extent, and the samples are tried farthest
+	// from the windings first: for each block the first at the level (or
+	// no farther than its distance found so far) ends its search.
+	type sample struct {
+		at   calc.Vec
+		d    float64
+		coil int
+	}
+	var samples []sample
+	step := math.Max(ext, 1e-3) / 400
+	for k, f := range res {
+		if !f.ok {
 			continue
 		}
-		wr.Surface = math.Max(wr.Surface, b)
-		if b >= ImplantField {
-			wr.Distance = math.Max(wr.Distance, reach(fm, st.at, st.dir, ImplantField, gap, math.Max(ext, 1e-3)*1e3))
+		r := rays[k]
+		t := f.point.Sub(r.at).Norm()
+		for j := 1; float64(j)*step < t && j <= 4000; j++ {
+			p := r.at.Add(r.dir.Scale(float64(j) * step))
+			if dd, c, _ := nearestOutline(os, p); c >= 0 && dd > wr[c].Distance {
+				samples = append(samples, sample{p, dd, c})
+			}
+		}
+	}
+	sort.Slice(samples, func(a, b int) bool { return samples[a].d > samples[b].d })
+	done := make([]bool, len(d.Coils))
+	for _, s := range samples {
+		if done[s.coil] {
+			continue
+		}
+		if s.d <= wr[s.coil].Distance {
+			done[s.coil] = true
+			continue
+		}
+		if fm(s.at).Norm() >= ImplantField {
+			wr[s.coil].Distance = s.d
+			done[s.coil] = true
 		}
 	}
 	return wr

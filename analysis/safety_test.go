@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	"coilmemo/calc"
+	"coilmemo/calc/biotsavart"
 )
 
 // The 0.5 mT reach of a cored coil is searched in the field of winding and
@@ -110,5 +111,105 @@ func TestImplantReachAlongTheCoilsOwnAxis(t *testing.T) {
 	off := studyOf(t, "```coil\nname = tilted\nform = loop\nmean-diameter = 60 mm\nturns = 1\nwire = AWG 10\ncurrent = 40 A\naxis = (1, 1, 0)\ncentre = (0, 0, 50) mm\n```\n")
 	if z := off.Safety.Implant.Axis; z != (calc.Vec{0, 0, 1}) {
 		t.Errorf("off-origin coil: reach measured along %v, want z", z)
+	}
+}
+
+// The implant reach from the windings is the largest distance from a
+// winding's outer surface (the solid it fills with its bore) at which
+// |B| ≥ 0.5 mT. Checked for a one-turn loop and a pair of one-turn loops
+// against an independent computation: |B| by the numerical Biot–Savart
+// line integral of each filament (calc/biotsavart) on a 0.25 mm grid of
+// the meridian plane, and the distance of every node at the level from
+// the bundle's surface (the loop's wire, a torus of the bundle's radius
+// about the filament; the filled disc inside it is the bore). The search
+// along rays must agree with the grid's largest distance to within the
+// grid's diagonal. On the loop's axis the level is reached, by the
+// filament's closed form B = μ0 I a² / (2 (a² + z²)^{3/2}) (Jackson,
+// Classical Electrodynamics, 3rd ed., §5.5 — recalled from memory), out
+// to z* = a √((B0/B_L)^{2/3} − 1), so the axial reach's far end lies
+// z* − r from the bundle's face, r the bundle's radius.
+func TestImplantReachFromTheWindingsSurface(t *testing.T) {
+	for _, c := range []struct {
+		name, src string
+		a         float64
+		centres   []float64
+	}{
+		{"loop", "```coil\nname = loop\nform = loop\nmean-diameter = 60 mm\nturns = 1\nwire = AWG 10\ncurrent = 40 A\n```\n", 0.030, []float64{0}},
+		{"pair", "```coil\nname = pair\nform = pair\nmean-diameter = 60 mm\nspacing = 50 mm\nturns = 1\nwire = AWG 10\ncurrent = 30 A\n```\n", 0.030, []float64{-0.025, 0.025}},
+	} {
+		st := studyOf(t, c.src)
+		ir := st.Safety.Implant
+		cs := st.Coils[0]
+		r := (cs.Envelope.Z1 - cs.Envelope.Z0) / 2
+		I := st.Results.Coils[0].Current
+		B := func(rho, z float64) float64 {
+			var br, bz float64
+			for _, zc := range c.centres {
+				x, y := biotsavart.CircleLocal(c.a, I, rho, z-zc, 16, 16)
+				br, bz = br+x, bz+y
+			}
+			return math.Hypot(br, bz)
+		}
+		dist := func(rho, z float64) float64 {
+			d := math.Inf(1)
+			for _, zc := range c.centres {
+				d = math.Min(d, math.Hypot(math.Max(rho-c.a, 0), z-zc)-r)
+			}
+			return d
+		}
+		const h = 0.25e-3
+		grid := 0.0
+		for i := 0; i <= 600; i++ {
+			for k := 0; k <= 600; k++ {
+				rho, z := float64(i)*h, float64(k)*h
+				if d := dist(rho, z); d > 0 && d > grid && B(rho, z) >= ImplantField {
+					grid = d
+				}
+			}
+		}
+		if !(grid > 0.005) || math.Abs(ir.Distance-grid) > h*math.Sqrt2 {
+			t.Errorf("%s: reach from the windings' surface %g m, the grid's %g m", c.name, ir.Distance, grid)
+		}
+		if ir.Nearest != 0 || ir.Windings[0].Distance != ir.Distance {
+			t.Errorf("%s: nearest %d, windings %+v", c.name, ir.Nearest, ir.Windings)
+		}
+		if c.name == "loop" {
+			b0 := calc.Mu0 * I / (2 * c.a)
+			zs := c.a * math.Sqrt(math.Pow(b0/ImplantField, 2.0/3)-1)
+			if math.Abs(ir.AxialClear-(zs-r)) > 1e-6*zs || ir.AxialBore || ir.AxialCoil != 0 {
+				t.Errorf("loop: axial reach %g m lies %g m from the bundle (bore %v), want %g m", ir.Axial, ir.AxialClear, ir.AxialBore, zs-r)
+			}
+		}
+		if !(ir.AxialClear <= ir.Distance) {
+			t.Errorf("%s: axial reach's far end %g m from the winding, beyond the reach %g m", c.name, ir.AxialClear, ir.Distance)
+		}
+	}
+}
+
+// Inside a long solenoid the level is reached along the bore and not
+// beyond its ends: the axial reach then ends in the bore, where the
+// current sheet's closed form B(z) = μ0 n I/2 · [(z + L/2)/√((z + L/2)² +
+// a²) − (z − L/2)/√((z − L/2)² + a²)] (the finite solenoid, integrated
+// from the loop's axial field) falls to 0.5 mT.
+func TestImplantReachInsideTheBore(t *testing.T) {
+	st := studyOf(t, "```coil\nname = s\nform = solenoid\nmean-diameter = 60.5 mm\nlength = 300 mm\nturns = 500\nwire = 0.5 mm\nwire-outer-diameter = 0.56 mm\ncurrent = 250 mA\n```\n")
+	ir := st.Safety.Implant
+	a, L, n, I := 0.03025, 0.300, 500/0.300, 0.25
+	Bz := func(z float64) float64 {
+		return calc.Mu0 * n * I / 2 * ((z+L/2)/math.Hypot(z+L/2, a) - (z-L/2)/math.Hypot(z-L/2, a))
+	}
+	lo, hi := 0.0, L/2
+	for range 60 {
+		if mid := (lo + hi) / 2; Bz(mid) >= ImplantField {
+			lo = mid
+		} else {
+			hi = mid
+		}
+	}
+	if math.Abs(ir.Axial/lo-1) > 0.01 {
+		t.Errorf("axial reach %g m, the current sheet's %g m", ir.Axial, lo)
+	}
+	if !ir.AxialBore || ir.AxialClear != 0 || ir.AxialCoil != 0 {
+		t.Errorf("axial reach's far end: bore %v, %g m from the winding (coil %d); want in the bore", ir.AxialBore, ir.AxialClear, ir.AxialCoil)
 	}
 }

@@ -282,8 +282,20 @@ func (c *composer) axisFigure(co calc.Coil, cr calc.CoilResult, cs *analysis.Coi
 	text := fmt.Sprintf("Figure %d shows the flux density along the axis of coil %q", n, co.Name)
 	switch {
 	case cr.Moment.Norm() > 0 && !math.IsNaN(p.Dipole1pc):
-		text += fmt.Sprintf(", with the field of a point dipole of the coil's moment for comparison: the two curves merge beyond ±%s from the centre (dotted), where the dipole is within 1 %% of the exact field; nearer the winding the dipole overstates the field.",
-			Eng(p.Dipole1pc, "m", 3))
+		near := "nearer the winding"
+		if cs.Kinds.Core != nil {
+			near = "nearer the winding and core"
+		}
+		switch p.DipoleNear {
+		case 1:
+			near += " the dipole overstates the field"
+		case -1:
+			near += " the dipole understates the field"
+		default:
+			near += " the two differ by more than 1 %"
+		}
+		text += fmt.Sprintf(", with the field of a point dipole of the coil's moment for comparison: the two curves merge beyond ±%s from the centre (dotted), where the dipole is within 1 %% of the exact field; %s.",
+			Eng(p.Dipole1pc, "m", 3), near)
 	case cr.Moment.Norm() > 0:
 		text += ", with the field of a point dipole of the coil's moment for comparison; away from the winding the two curves merge."
 	default:
@@ -469,7 +481,7 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 	text := fmt.Sprintf("Figure %d maps the magnitude of the flux density of coil %q alone over %s, on a logarithmic colour scale with contour lines at 1–2–5 steps per decade; the winding cross-sections are drawn in.",
 		n, co.Name, plane)
 	if centre, edge, ok := mapLevels(m); ok {
-		text += fmt.Sprintf(" The field is strongest next to the winding; it is %s at the centre and at most %s on the map's edge.", Eng(centre, "T", 3), Eng(edge, "T", 3))
+		text += " " + mapPeakText(co, m, cs.Kinds.Core != nil) + fmt.Sprintf("; it is %s at the centre and at most %s on the map's edge.", Eng(centre, "T", 3), Eng(edge, "T", 3))
 	}
 	c.para(text)
 	c.fig(doc.Figure{
@@ -730,6 +742,44 @@ func (c *composer) torque() {
 	// No figure: |τ| against the angle is the sine m B sin θ for every
 	// design, its peak and design-angle value given above (memo/figsel.go).
 	c.para("At other angles θ between moment and field the torque is |τ| = m B sin θ, between zero along the field and the largest value above at right angles to it.")
+}
+
+// mapPeakText says where a coil's own map is strongest, as the analysis
+// found it (analysis.MapData.Peak and its node).
+func mapPeakText(co calc.Coil, m *analysis.MapData, cored bool) string {
+	winding := "the winding"
+	if cored {
+		winding = "the winding or core"
+	}
+	var where string
+	switch {
+	case m.PeakCore:
+		where = "inside the core"
+	case m.PeakBore && m.PeakNear:
+		where = "in the bore next to " + winding
+	case m.PeakBore:
+		where = "in the bore"
+	case m.PeakNear:
+		where = "next to " + winding
+	default:
+		where = "away from " + winding
+	}
+	z := "0"
+	if m.PeakZ != 0 {
+		z = Eng(m.PeakZ, "m", 2)
+	}
+	if m.PeakMirrored {
+		z = "±" + z
+	}
+	xText := "0"
+	if m.PeakX != 0 {
+		xText = Eng(m.PeakX, "m", 2)
+	}
+	across := "ρ"
+	if co.Form == calc.Rectangle {
+		across = "x"
+	}
+	return fmt.Sprintf("Of the map's points the field is strongest %s, %s at z = %s, %s = %s", where, Eng(m.Peak, "T", 3), z, across, xText)
 }
 
 // mapLevels reads a coil's map: |B| at its centre node and the largest

@@ -2,6 +2,8 @@ package memo
 
 import (
 	"bytes"
+	"fmt"
+	"math"
 	"strconv"
 	"strings"
 	"testing"
@@ -58,5 +60,67 @@ func TestFieldSectionForms(t *testing.T) {
 				t.Fatalf("PDF: %v", err)
 			}
 		})
+	}
+}
+
+// The axis figure's text says which way the point dipole departs from the
+// exact field nearer than its 1 % distance as the profile computed it
+// (analysis AxisProfile.DipoleNear), over every design.
+func TestDipoleNearWordedAsComputed(t *testing.T) {
+	for _, f := range designFiles(t) {
+		st, text := memoOf(t, f, false)
+		if st == nil {
+			continue
+		}
+		for i, co := range st.Spec.Design.Coils {
+			p := st.Coils[i].Axis
+			k := strings.Index(text, fmt.Sprintf("shows the flux density along the axis of coil %q, with the field of a point dipole", co.Name))
+			if k < 0 || math.IsNaN(p.Dipole1pc) {
+				continue
+			}
+			s := text[k:]
+			s = s[:strings.Index(s, ".\n")+1]
+			if e := strings.Index(s, "exact field; "); e >= 0 {
+				s = s[e:]
+			}
+			want := map[int]string{1: "overstates", -1: "understates", 0: "differ by more than 1 %"}[p.DipoleNear]
+			for _, w := range []string{"overstates", "understates", "differ by more than 1 %"} {
+				if strings.Contains(s, w) != (w == want) {
+					t.Errorf("%s, coil %q: dipole near the winding %d, but the text: %s", f, co.Name, p.DipoleNear, s)
+				}
+			}
+		}
+	}
+}
+
+// A coil's map is not said to be strongest next to the winding unless the
+// analysis found its strongest node there; the text gives that node's
+// value (analysis MapData.Peak). Over every design.
+func TestMapPeakWordedAsComputed(t *testing.T) {
+	for _, f := range designFiles(t) {
+		st, text := memoOf(t, f, false)
+		if st == nil {
+			continue
+		}
+		flat := strings.Join(strings.Fields(text), " ")
+		if strings.Contains(flat, "The field is strongest next to the winding;") {
+			t.Errorf("%s: the map's strongest point asserted, not computed", f)
+		}
+		for i, co := range st.Spec.Design.Coils {
+			m := st.Coils[i].Map
+			k := strings.Index(flat, fmt.Sprintf("maps the magnitude of the flux density of coil %q alone", co.Name))
+			if m == nil || k < 0 {
+				continue
+			}
+			s := flat[k:]
+			s = s[:strings.Index(s, "on the map's edge.")]
+			want := Eng(m.Peak, "T", 3)
+			if !strings.Contains(s, "strongest") || !strings.Contains(s, want) {
+				t.Errorf("%s, coil %q: the map's peak %s not given: %s", f, co.Name, want, s)
+			}
+			if strings.Contains(s, "strongest next to the winding") && !(m.PeakNear && !m.PeakBore && !m.PeakCore) {
+				t.Errorf("%s, coil %q: 'next to the winding', but the peak node (bore %v, near %v, core %v): %s", f, co.Name, m.PeakBore, m.PeakNear, m.PeakCore, s)
+			}
+		}
 	}
 }

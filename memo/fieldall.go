@@ -4,6 +4,7 @@ import (
 	"coilmemo/analysis"
 	"fmt"
 	"math"
+	"strings"
 
 	"gonum.org/v1/plot/vg"
 
@@ -76,10 +77,29 @@ func (c *composer) allCoilsMap() {
 	half := m.XHalf
 	var sections []figures.Section
 	var undrawn []string
+	// The undrawn windings by how they meet the plane.
+	kinds := map[string][]string{}
+	blank, rect := false, false
 	for i, co := range d.Coils {
 		s, ok := planeSections(co, &c.j.Coils[i])
 		if !ok {
 			undrawn = append(undrawn, fmt.Sprintf("%q", co.Name))
+			a := math.NaN()
+			if i < len(c.j.Design.Crossing) {
+				a = c.j.Design.Crossing[i]
+			}
+			k := "cross this plane obliquely"
+			switch {
+			case math.IsNaN(a):
+				k = "do not meet this plane"
+			case a == 0:
+				k = "lie in this plane"
+			case a > 89.5*math.Pi/180:
+				k = "cross this plane at right angles"
+			}
+			kinds[k] = append(kinds[k], fmt.Sprintf("%q", co.Name))
+			blank = blank || (co.Form != calc.Rectangle && !math.IsNaN(a))
+			rect = rect || co.Form == calc.Rectangle
 		}
 		sections = append(sections, s...)
 	}
@@ -97,7 +117,21 @@ func (c *composer) allCoilsMap() {
 	}
 	caption := "|B| of all coils together over the xz-plane through the origin (viridis, logarithmic; contours at the values marked on the colour bar)"
 	if len(undrawn) > 0 {
-		text += fmt.Sprintf(" The windings of %s cross this plane obliquely and are not drawn (the map is left blank where they pass); their field is included.", joinAnd(undrawn))
+		var parts []string
+		for _, k := range []string{"cross this plane obliquely", "cross this plane at right angles", "lie in this plane", "do not meet this plane"} {
+			if names := kinds[k]; len(names) > 0 {
+				parts = append(parts, "the windings of "+joinAnd(names)+" "+k)
+			}
+		}
+		s := strings.Join(parts, "; ")
+		text += " " + strings.ToUpper(s[:1]) + s[1:] + "; they are not drawn"
+		switch {
+		case blank && rect:
+			text += " (the map is left blank where the circular ones pass)"
+		case blank:
+			text += " (the map is left blank where they pass)"
+		}
+		text += ", and their field is included."
 		caption += "; windings drawn where their axis lies along x, y or z"
 	}
 	if centre, edge, ok := mapLevels(m); ok {

@@ -1,11 +1,15 @@
 package memo
 
 import (
+	"bytes"
 	"coilmemo/analysis"
+	"fmt"
 	"math"
+	"strings"
 	"testing"
 
 	"coilmemo/calc"
+	"coilmemo/doc"
 )
 
 // The plane sections of coils on the three axes sit where their windings
@@ -67,4 +71,111 @@ func studyOf(co calc.Coil) *analysis.CoilStudy {
 	r := calc.Evaluate(d)
 	cs := analysis.StudyCoil(co, r.Coils[0], d.Conditions)
 	return &cs
+}
+
+// The map of all coils says how each undrawn winding meets the xz-plane as
+// the analysis found it (DesignStudy.Crossing): a stack of loops on an
+// axis in that plane crosses it at right angles, not obliquely; on an
+// axis out of it, obliquely. Also over every design.
+func TestUndrawnWindingsCrossAsComputed(t *testing.T) {
+	stack := func(axis string) string {
+		var b strings.Builder
+		for i, c := range []string{"(-20, 0, -20)", "(0, 0, 0)", "(20, 0, 20)"} {
+			if axis == "(1, 1, 0)" {
+				c = []string{"(-20, -20, 0)", "(0, 0, 0)", "(20, 20, 0)"}[i]
+			}
+			fmt.Fprintf(&b, "```coil\nname = %c\nform = loop\nmean-diameter = 80 mm\nturns = 20\nwire = AWG 22\ncurrent = 1 A\naxis = %s\ncentre = %s mm\n```\n\n", 'A'+i, axis, c)
+		}
+		return b.String()
+	}
+	check := func(name string, st *analysis.Study, text string) {
+		flat := strings.Join(strings.Fields(text), " ")
+		for i, co := range st.Spec.Design.Coils {
+			a := st.Design.Crossing[i]
+			q := fmt.Sprintf("%q", co.Name)
+			for _, w := range []string{"cross this plane obliquely", "cross this plane at right angles"} {
+				k := strings.Index(flat, w)
+				if k < 0 {
+					continue
+				}
+				start := strings.LastIndex(flat[:k], "The windings of ")
+				if semi := strings.LastIndex(flat[:k], "; the windings of "); semi > start {
+					start = semi
+				}
+				if !strings.Contains(flat[start:k], q) {
+					continue
+				}
+				right := a > 89.5*math.Pi/180
+				if (w == "cross this plane obliquely") == right || math.IsNaN(a) {
+					t.Errorf("%s, coil %s: %q but it crosses at %.1f°", name, q, w, a*180/math.Pi)
+				}
+			}
+		}
+	}
+	for _, axis := range []string{"(1, 0, 1)", "(1, 1, 0)"} {
+		j := mustEvaluate(t, stack(axis))
+		var buf bytes.Buffer
+		if err := doc.WriteText(&buf, Document(j)); err != nil {
+			t.Fatal(err)
+		}
+		text := buf.String()
+		check("stack on "+axis, j, text)
+		want := map[string]string{"(1, 0, 1)": "cross this plane at right angles", "(1, 1, 0)": "cross this plane obliquely"}[axis]
+		if !strings.Contains(strings.Join(strings.Fields(text), " "), want) {
+			t.Errorf("stack on %s: %q not said", axis, want)
+		}
+	}
+	for _, f := range designFiles(t) {
+		if st, text := memoOf(t, f, false); st != nil {
+			check(f, st, text)
+		}
+	}
+}
+
+// A plane map's caption and text speak of probe dots only when probes are
+// drawn on it (analysis PlaneMap.Probes). Over every design, and a panel
+// with a test plane and no probes.
+func TestPlaneMapDotsOnlyWhenDrawn(t *testing.T) {
+	check := func(name string, st *analysis.Study, text string) int {
+		flat := strings.Join(strings.Fields(text), " ")
+		seen := 0
+		for i, co := range st.Spec.Design.Coils {
+			if i >= len(st.Design.Planes) || st.Design.Planes[i] == nil {
+				continue
+			}
+			k := strings.Index(flat, fmt.Sprintf("of coil %q alone over that plane", co.Name))
+			if k < 0 {
+				continue
+			}
+			seen++
+			s := flat[k:]
+			e := strings.Index(s, "dashed: the coil's mean turn")
+			if e < 0 {
+				t.Errorf("%s, coil %q: no plane map caption", name, co.Name)
+				continue
+			}
+			s = s[:e+len("dashed: the coil's mean turn")+20]
+			drawn := len(st.Design.Planes[i].Probes) > 0
+			said := strings.Contains(s, "probes are marked") || strings.Contains(s, "probe is marked")
+			dots := strings.Contains(s, "dots: probes") || strings.Contains(s, "dot: the probe")
+			if said != drawn || dots != drawn {
+				t.Errorf("%s, coil %q: %d probes drawn, but the text: %s", name, co.Name, len(st.Design.Planes[i].Probes), s)
+			}
+		}
+		return seen
+	}
+	for _, f := range designFiles(t) {
+		if st, text := memoOf(t, f, false); st != nil {
+			check(f, st, text)
+		}
+	}
+	// A panel with a test plane and no probes: its plane map has no dots.
+	st := mustEvaluate(t, "```coil\nname = panel\nform = rectangle\nwidth = 300 mm\nheight = 200 mm\nturns = 40\nwire = AWG 22\ncurrent = 1 A\ntest-plane = 50 mm\n```\n")
+	var buf bytes.Buffer
+	if err := doc.WriteText(&buf, Document(st)); err != nil {
+		t.Fatal(err)
+	}
+	if check("panel without probes", st, buf.String()) == 0 {
+		t.Error("panel with a test plane: no plane map")
+	}
 }

@@ -103,13 +103,20 @@ func (c *composer) planeFigure(co calc.Coil, pm *analysis.PlaneMap) {
 	if !math.IsInf(tight, 0) {
 		read = fmt.Sprintf(": inside the contours nearest the centre the field is within %s %% of its centre value", strconv.FormatFloat(math.Round(1000*tight)/10, 'f', -1, 64))
 	}
-	c.para(fmt.Sprintf("Figure %d maps %s of coil %q alone over that plane on a linear colour scale, with contour lines at %s of the centre value%s. The coil's mean turn is dashed and the probes are marked.",
-		n, bs, co.Name, levels, read))
+	marked, dots := "The coil's mean turn is dashed.", ""
+	if len(pts) > 0 {
+		marked, dots = "The coil's mean turn is dashed and the probes are marked.", "; dots: probes"
+		if len(pts) == 1 {
+			marked, dots = "The coil's mean turn is dashed and the probe is marked.", "; dot: the probe"
+		}
+	}
+	c.para(fmt.Sprintf("Figure %d maps %s of coil %q alone over that plane on a linear colour scale, with contour lines at %s of the centre value%s. %s",
+		n, bs, co.Name, levels, read, marked))
 	// The height follows the map's proportions, as the meridian map's.
 	fh := vg.Length(100*pm.VHalf/pm.UHalf)*vg.Millimeter + 22*vg.Millimeter
 	fh = max(min(fh, 110*vg.Millimeter), 55*vg.Millimeter)
 	c.fig(doc.Figure{
-		Caption: fmt.Sprintf("%s of coil %q over %s (colour scale: viridis, van der Walt & Smith 2015, linear; white contours at the departures from the centre value marked on the colour bar; dashed: the coil's mean turn; dots: probes)", bs, co.Name, where),
+		Caption: fmt.Sprintf("%s of coil %q over %s (colour scale: viridis, van der Walt & Smith 2015, linear; white contours at the departures from the centre value marked on the colour bar; dashed: the coil's mean turn%s)", bs, co.Name, where, dots),
 		Width:   figWidth, Height: fh, Draw: figures.PlaneMap(d),
 		Summary: fmt.Sprintf("Map of %s over %s: %s at the centre, from %s to %s over %s, %d × %d points.",
 			bs, where, Eng(pm.Centre, "T", 3), Eng(pm.Min, "T", 3), Eng(pm.Max, "T", 3), sizeText(2*pm.UHalf, 2*pm.VHalf), len(pm.U), len(pm.V)),

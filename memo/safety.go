@@ -53,68 +53,9 @@ func Cautions(j *analysis.Study) []doc.Callout {
 		}
 	}
 	if ir := j.Safety.Implant; ir.Searched {
-		var where []string
-		if ir.Origin >= analysis.ImplantField {
-			where = append(where, "at the origin, where |B| = "+Eng(ir.Origin, "T", 3))
-		}
-		along, across := reachWords(ir.Axis, len(d.Coils))
-		if ir.Axial > 0 {
-			where = append(where, "as far as "+Eng(ir.Axial, "m", 2)+" from the origin "+along)
-		}
-		if ir.Radial > 0 {
-			where = append(where, "as far as "+Eng(ir.Radial, "m", 2)+" from the origin "+across)
-		}
-		if ir.Farthest > 1.005*math.Max(ir.Axial, ir.Radial) {
-			where = append(where, fmt.Sprintf("as far as %s from the origin in the direction %s, the farthest of the directions searched (the axes, the net moment, each coil's axis and centre)",
-				Eng(ir.Farthest, "m", 2), axisName(calc.Coil{Axis: ir.Toward})))
-		}
-		type near struct{ name, surface, dist, phrase string }
-		var nears []near
-		cored := false
-		for i, w := range ir.Windings {
-			if w.Surface >= analysis.ImplantField {
-				cored = cored || (i < len(j.Coils) && j.Coils[i].Kinds.Core != nil)
-				dist := Eng(w.Distance, "m", 2)
-				phrase := "as far as " + dist + " from"
-				if w.Distance < 1e-3 {
-					// a figure in µm reads as false precision
-					dist, phrase = "less than 1 mm", "only within 1 mm of"
-				}
-				nears = append(nears, near{fmt.Sprintf("%q", d.Coils[i].Name), Eng(w.Surface, "T", 3), dist, phrase})
-			}
-		}
-		// The search runs out from each winding's surface along the coil's
-		// axis and plane with every coil's field, and reports the farthest
-		// point above the level: beyond it the level is not reached.
-		switch {
-		case len(nears) == 1:
-			what, its := "the winding", "its surface"
-			if cored {
-				// The search starts from the rod's end faces too.
-				what, its = "the winding and core", "their surfaces (the rod's end faces included)"
-			}
-			where = append(where, fmt.Sprintf("next to %s of coil %s, where |B| reaches %s at %s, and 0.5 mT is exceeded %s it along its axis or in its plane (the field of every winding counted)",
-				what, nears[0].name, nears[0].surface, its, nears[0].phrase))
-		case len(nears) > 1:
-			var at, far []string
-			for _, n := range nears {
-				at = append(at, n.surface+" (coil "+n.name+")")
-				far = append(far, n.dist+" ("+n.name+")")
-			}
-			what := "the windings"
-			if cored {
-				what = "the windings and cores (the rods' end faces included)"
-			}
-			where = append(where, fmt.Sprintf("next to %s, where |B| at the surface reaches %s, and 0.5 mT is exceeded as far as %s from them along their axes or in their planes (the field of every winding counted)",
-				what, joinAnd(at), joinAnd(far)))
-		}
-		for _, k := range ir.Probes {
-			p := r.Probes[k]
-			where = append(where, fmt.Sprintf("at probe %q (%s)", p.Name, Eng(p.B.Norm(), "T", 3)))
-		}
-		if len(where) > 0 {
+		if where, beyond := implantWhere(j); len(where) > 0 {
 			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Field above 0.5 mT: implanted medical devices",
-				Spans: []doc.Span{{Text: templates.Text("caution-implant", map[string]string{"Where": strings.Join(where, ", ")})}}})
+				Spans: []doc.Span{{Text: templates.Text("caution-implant", map[string]string{"Where": strings.Join(where, ", "), "Beyond": beyond})}}})
 		} else {
 			out = append(out, doc.Callout{Severity: doc.Note, Title: "Field near the winding",
 				Spans: []doc.Span{{Text: templates.Text("caution-implant-none", nil)}}})
@@ -130,6 +71,101 @@ func Cautions(j *analysis.Study) []doc.Callout {
 		out = append(out, doc.Callout{Severity: doc.Note, Title: t, Spans: []doc.Span{{Text: p}}})
 	}
 	return out
+}
+
+// implantWhere words where the field reaches 0.5 mT (analysis.ImplantReach):
+// at the origin; along the axis, as far from the origin as it reaches and
+// where that point lies against the nearest winding; outside the windings,
+// as far from their outer surfaces as it reaches; at probes. beyond is the
+// sentence that bounds the region by that distance ("" when the level is
+// reached at no winding).
+func implantWhere(j *analysis.Study) (where []string, beyond string) {
+	d, r, ir := j.Spec.Design, j.Results, j.Safety.Implant
+	name := func(i int) string { return fmt.Sprintf("coil %q", d.Coils[i].Name) }
+	cored := func(i int) bool { return i >= 0 && i < len(j.Coils) && j.Coils[i].Kinds.Core != nil }
+	if ir.Origin >= analysis.ImplantField {
+		where = append(where, "at the origin, where |B| = "+Eng(ir.Origin, "T", 3))
+	}
+	along, _ := reachWords(ir.Axis, len(d.Coils))
+	if ir.Axial > 0 {
+		s := along + " as far as " + Eng(ir.Axial, "m", 2) + " from the origin"
+		switch k := ir.AxialCoil; {
+		case k < 0:
+		case ir.AxialBore:
+			s += " (inside the bore of " + name(k) + ")"
+		case ir.AxialClear > 0:
+			s += " (there " + strings.TrimPrefix(surfaceDistance(ir.AxialClear), "as far as ") + " the outer surface of the " + windingWord(cored(k)) + " of " + name(k) + ")"
+		default:
+			s += " (within the " + windingWord(cored(k)) + " of " + name(k) + ")"
+		}
+		where = append(where, s)
+	}
+	type near struct {
+		coil           int
+		surface, words string
+	}
+	var nears []near
+	anyCored := false
+	for i, w := range ir.Windings {
+		if w.Surface >= analysis.ImplantField || w.Distance > 0 {
+			anyCored = anyCored || cored(i)
+			nears = append(nears, near{i, Eng(w.Surface, "T", 3), surfaceDistance(w.Distance)})
+		}
+	}
+	switch {
+	case len(nears) == 1:
+		n := nears[0]
+		what, its := "the winding of "+name(n.coil), "its outer surface"
+		if cored(n.coil) {
+			what, its = "the winding and core of "+name(n.coil), "their outer surfaces (the rod's end faces included)"
+		}
+		where = append(where, fmt.Sprintf("outside %s %s %s, where |B| reaches up to %s", what, n.words, its, n.surface))
+	case len(nears) > 1:
+		var far, at []string
+		for _, n := range nears {
+			v := "less than 1 mm"
+			if w := ir.Windings[n.coil].Distance; w >= 1e-3 {
+				v = Eng(w, "m", 2)
+			}
+			far = append(far, fmt.Sprintf("%s (%q)", v, d.Coils[n.coil].Name))
+			at = append(at, n.surface)
+		}
+		what := "the windings"
+		if anyCored {
+			what = "the windings and cores"
+		}
+		where = append(where, fmt.Sprintf("outside %s as far as %s from their outer surfaces, where |B| at the surface reaches up to %s", what, joinAnd(far), joinAnd(at)))
+	}
+	if ir.Nearest >= 0 && ir.Distance > 0 {
+		what := "every winding"
+		if anyCored {
+			what = "every winding and core"
+		}
+		beyond = fmt.Sprintf(" Farther than %s from the outer surface of %s the flux density stays below 0.5 mT (the field of all coils counted; searched every 10° outward from the centre of each winding).", Eng(math.Max(ir.Distance, 1e-3), "m", 2), what)
+	}
+	for _, k := range ir.Probes {
+		p := r.Probes[k]
+		where = append(where, fmt.Sprintf("at probe %q (%s)", p.Name, Eng(p.B.Norm(), "T", 3)))
+	}
+	return where, beyond
+}
+
+// surfaceDistance words a distance from a winding's outer surface: "as far
+// as 24 mm from", or "only within 1 mm of" below a millimetre, where a
+// figure in µm reads as false precision.
+func surfaceDistance(v float64) string {
+	if v < 1e-3 {
+		return "only within 1 mm of"
+	}
+	return "as far as " + Eng(v, "m", 2) + " from"
+}
+
+// windingWord names what a coil's outer surface bounds.
+func windingWord(cored bool) string {
+	if cored {
+		return "winding and core"
+	}
+	return "winding"
 }
 
 // severity is the callout severity of a finding's.

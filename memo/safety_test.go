@@ -2,7 +2,9 @@ package memo
 
 import (
 	"bytes"
+	"math"
 	"os"
+	"regexp"
 	"strings"
 	"testing"
 
@@ -171,5 +173,64 @@ func TestLeftEnergisedPastTheClassIsAWarning(t *testing.T) {
 	}
 	if !strings.Contains(buf.String(), "**WARNING **Insulation class if left energised") {
 		t.Error("page 1 does not list the left-energised fault as a WARNING")
+	}
+}
+
+// The 0.5 mT caution gives two figures, each in one form of words: the
+// reach along the axis "from the origin" (analysis Axial), and the reach
+// "from the outer surface" of the windings (each block's Distance, the
+// axial reach's far end's AxialClear, and the bound Distance beyond which
+// the field stays below the level). No other length is said to be "from"
+// anything, and the old "from it along its axis" wording, which measured
+// along a search line, is gone. Checked over every design.
+func TestImplantReachWordedOnce(t *testing.T) {
+	num := regexp.MustCompile(`([0-9][0-9.]*) (mm|m|µm) from (the origin|the outer surface|its outer surface|their outer surfaces)`)
+	any := regexp.MustCompile(`[0-9][0-9.]* (mm|m|µm) from `)
+	for _, f := range designFiles(t) {
+		st, text := memoOf(t, f, false)
+		if st == nil {
+			continue
+		}
+		ir := st.Safety.Implant
+		var caution string
+		for _, c := range Cautions(st) {
+			if strings.HasPrefix(c.Title, "Field above 0.5 mT") {
+				caution = spanText(c.Spans)
+			}
+		}
+		if caution == "" {
+			if ir.Any() {
+				t.Errorf("%s: the level is reached but no caution says so", f)
+			}
+			continue
+		}
+		if !strings.Contains(text, caution) {
+			t.Errorf("%s: caution not in the memo", f)
+		}
+		if strings.Contains(caution, "from it along") || strings.Contains(caution, "from the origin in") {
+			t.Errorf("%s: a reach measured along a search line: %s", f, caution)
+		}
+		surface := map[string]bool{Eng(ir.AxialClear, "m", 2): true, Eng(math.Max(ir.Distance, 1e-3), "m", 2): true}
+		for _, w := range ir.Windings {
+			surface[Eng(w.Distance, "m", 2)] = true
+		}
+		for _, m := range num.FindAllStringSubmatch(caution, -1) {
+			v := m[1] + " " + m[2]
+			if m[3] == "the origin" && v != Eng(ir.Axial, "m", 2) {
+				t.Errorf("%s: %q, but the axial reach is %s", f, m[0], Eng(ir.Axial, "m", 2))
+			}
+			if m[3] != "the origin" && !surface[v] {
+				t.Errorf("%s: %q is none of the reaches from the windings' surfaces %v", f, m[0], surface)
+			}
+		}
+		if n, k := len(any.FindAllString(caution, -1)), len(num.FindAllString(caution, -1)); n != k {
+			t.Errorf("%s: %d lengths said to be from something, %d of them in the two forms: %s", f, n, k, caution)
+		}
+		if ir.Distance >= 1e-3 && !strings.Contains(caution, "Farther than "+Eng(ir.Distance, "m", 2)+" from the outer surface of every winding") {
+			t.Errorf("%s: the bound %s is not stated: %s", f, Eng(ir.Distance, "m", 2), caution)
+		}
+		if ir.AxialBore && !strings.Contains(caution, "inside the bore") {
+			t.Errorf("%s: the axial reach ends in the bore, not said: %s", f, caution)
+		}
 	}
 }
