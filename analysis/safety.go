@@ -202,7 +202,7 @@ func electricalFindings(i int, cr calc.CoilResult, p SwitchOffParts) []Finding {
 
 // reach returns the largest distance from origin along the unit direction
 // u at which |B| ≥ level, searching inward from rmax in steps of 25 % and
-// refining by bisection to 10⁻⁹ of the distance; 0 when the level is not
+// refining the bracket (refineReach) to 10⁻⁹ of the distance; 0 when the level is not
 // reached at or beyond rmin, which must lie outside every winding. Valid
 // because the field outside the windings falls monotonically with
 // distance. field is the field of all coils (implantField).
@@ -214,22 +214,67 @@ func reach(field func(calc.Vec) calc.Vec, origin, u calc.Vec, level, rmin, rmax 
 	hi := rmax
 	for {
 		lo := math.Max(hi/1.25, rmin)
-		if at(lo) >= level {
-			for hi-lo > 1e-9*hi {
-				mid := 0.5 * (lo + hi)
-				if at(mid) >= level {
-					lo = mid
-				} else {
-					hi = mid
-				}
-			}
-			return lo
+		if blo := at(lo); blo >= level {
+			return refineReach(at, level, lo, hi, blo, at(hi))
 		}
 		if lo == rmin {
 			return 0
 		}
 		hi = lo
 	}
+}
+
+// refineReach narrows a bracket lo < hi of the level's crossing, with
+// f(lo) = blo ≥ level > f(hi) = bhi, until it is no wider than 10⁻⁹ of
+// hi, and returns its inner end (where f ≥ level). It is the ITP method
+// (interpolate, truncate, project) on ln(level/f), which rises through 0:
+// never more evaluations than bisection takes, and superlinear on a
+// smooth function — the field falls nearly as a power of the distance, so
+// a handful of evaluations do the work of the thirty a bisection takes.
+//
+// Reference: I. F. D. Oliveira and R. H. C. Takahashi, "An Enhancement of
+// the Bisection Method Average Performance Preserving Minmax Optimality",
+// ACM Trans. Math. Softw. 47(1), art. 5, 2020 (κ1 = 0.2/(b − a), κ2 = 2,
+// n0 = 1).
+func refineReach(f func(float64) float64, level, lo, hi, blo, bhi float64) float64 {
+	a, b := lo, hi
+	ya, yb := math.Log(level/blo), math.Log(level/bhi)
+	eps := 0.5e-9 * hi
+	if !(ya <= 0 && yb > 0) || math.IsInf(ya, 0) || math.IsInf(yb, 0) {
+		ya, yb = -1, 1 // not a finite bracket: bisect
+	}
+	k1 := 0.2 / (b - a)
+	nmax := math.Ceil(math.Log2((b-a)/(2*eps))) + 1
+	for j := 0.0; b-a > 2*eps; j++ {
+		half := 0.5 * (a + b)
+		r := eps*math.Exp2(nmax-j) - 0.5*(b-a)
+		delta := k1 * (b - a) * (b - a)
+		xf := (yb*a - ya*b) / (yb - ya)
+		sigma := math.Copysign(1, half-xf)
+		xt := half
+		if delta <= math.Abs(half-xf) {
+			xt = xf + sigma*delta
+		}
+		x := xt
+		if math.Abs(xt-half) > r {
+			x = half - sigma*r
+		}
+		if !(x > a && x < b) {
+			x = half
+		}
+		y := math.Log(level / f(x))
+		switch {
+		case math.IsNaN(y):
+			return a
+		case y > 0:
+			b, yb = x, y
+		case y < 0:
+			a, ya = x, y
+		default:
+			return x
+		}
+	}
+	return a
 }
 
 // implantField is the field, T, of all coils at their operating currents
@@ -513,6 +558,10 @@ func reachDirections(co calc.Coil, fr calc.Frame) []calc.Vec {
 // counts, by its distance from the nearest outline, toward that
 // outline's block. extra are further points at the level (the searches
 // from the origin), counted the same way.
+// sampleEveryLine makes windingReaches sample the lines even where one
+// convex outline makes it needless (tests).
+var sampleEveryLine = false
+
 func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, coils []CoilStudy, ext float64, extra []calc.Vec) []WindingReach {
 	os := outlines(d, coils)
 	gap := 1e-6 * math.Max(ext, 1e-3)
@@ -621,7 +670,16 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, coils []CoilStudy
 	}
 	// The farthest point at the level along a line need not be the one
 	// farthest from every winding: between the coils of a pair the field
-	// at the centre may reach the level far from both. Each line is
+	// at the centre may reach the level far from both. With one convex
+	// outline alone (a solid winding with its bore filled in, not a
+	// thin bundle's ring nor a rectangle's frame) it is: every line
+	// starts where it leaves the outline, and the distance from a convex
+	// solid does not fall along a line leaving it
+	// (TestOneConvexOutlineNeedsNoSamples).
+	if len(os) == 1 && !os[0].round && !os[0].rect && !sampleEveryLine {
+		return wr
+	}
+	// Each line is
 	// sampled from its start to its farthest point at the level, every
 	// 1/400 of the design's extent, and the samples are tried farthest
 	// from the windings first: for each block the first at the level (or
