@@ -100,7 +100,7 @@ func momentCheck(c calc.Coil, cr calc.CoilResult) []Check {
 	z := 40 * size
 	far := (4*fit(2*z) - fit(z)) / 3
 	return []Check{newCheck(c.Name, "magnetic moment",
-		"m = I·Σ π rᵢ² over every turn", "far field on the axis: 2π z³ B/μ0, extrapolated to z → ∞",
+		"m = I·Σ π rᵢ² over every turn", "far field on the axis: 2π z³ B/μ0, extrapolated to infinite distance",
 		m, far, "A·m²", 1e-5)}
 }
 
