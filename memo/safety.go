@@ -236,7 +236,7 @@ func mergedSpans(names, texts []string) []doc.Span {
 		same = same && t == texts[0]
 	}
 	if same {
-		return []doc.Span{{Text: texts[0]}}
+		return []doc.Span{{Text: eachCoil(texts[0])}}
 	}
 	split := make([][]string, len(texts))
 	for i, t := range texts {
@@ -269,12 +269,24 @@ func mergedSpans(names, texts []string) []doc.Span {
 		}
 	}
 	if len(common) > 0 {
-		spans = append(spans, doc.Span{Text: strings.Join(common, " ")})
+		spans = append(spans, doc.Span{Text: eachCoil(strings.Join(common, " "))})
 	}
 	if n := len(spans) - 1; n >= 0 {
 		spans[n].Text = strings.TrimRight(spans[n].Text, " ")
 	}
 	return spans
+}
+
+// eachCoil words a caution's text that several coils share for each of
+// them: "The coil stores" becomes "Each coil stores", "across the coil"
+// "across each coil".
+func eachCoil(text string) string {
+	text = strings.ReplaceAll(text, "The coil ", "Each coil ")
+	text = strings.ReplaceAll(text, "The coil's ", "Each coil's ")
+	for _, after := range []string{" ", ",", ".", "'s ", ";"} {
+		text = strings.ReplaceAll(text, " the coil"+after, " each coil"+after)
+	}
+	return text
 }
 
 // sentences splits text at a full stop followed by a space and a capital

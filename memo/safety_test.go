@@ -234,3 +234,25 @@ func TestImplantReachWordedOnce(t *testing.T) {
 		}
 	}
 }
+
+// A caution written once for several like coils speaks of each of them,
+// not of "the coil".
+func TestMergedCautionSpeaksOfEachCoil(t *testing.T) {
+	j, _ := memoOf(t, "../testdata/figures/three-axis-set.md", true)
+	found := false
+	for _, c := range Cautions(j) {
+		if !strings.Contains(c.Title, ", coils ") {
+			continue
+		}
+		found = true
+		text := spanText(c.Spans)
+		for _, bad := range []string{"The coil ", " the coil ", " the coil,", " the coil."} {
+			if strings.Contains(text, bad) {
+				t.Errorf("%s: %q in %q", c.Title, bad, text)
+			}
+		}
+	}
+	if !found {
+		t.Fatal("no caution of the three like coils is written once for all of them")
+	}
+}
