@@ -304,6 +304,35 @@ func implantField(d calc.Design, coils []CoilStudy) func(calc.Vec) calc.Vec {
 	}
 }
 
+// conductorBound is K, T·m², such that |B| ≤ K/d² at any point whose
+// distance from every conductor is at least d: by the Biot–Savart law
+// |B| ≤ μ0/(4π) Σ |I| ∫|dl|/d², so K = μ0/(4π) Σ |I|·(wire length) over
+// every coil block. 0 (no bound) when a core with current adds its
+// poles' field, which the sum leaves out.
+//
+// Reference: the Biot–Savart law, e.g. J. D. Jackson, Classical
+// Electrodynamics, 3rd ed., Wiley 1999, eq. 5.4, with |dl × r̂| ≤ |dl|.
+func conductorBound(d calc.Design, r calc.Results, coils []CoilStudy) float64 {
+	k := 0.0
+	for i := range d.Coils {
+		if i >= len(r.Coils) {
+			return 0
+		}
+		cr := r.Coils[i]
+		if cr.Current == 0 {
+			continue
+		}
+		if i < len(coils) && coils[i].Kinds.Core != nil {
+			return 0
+		}
+		if !(cr.Length > 0) || math.IsInf(cr.Length, 0) || math.IsNaN(cr.Current) {
+			return 0
+		}
+		k += calc.Mu0 / (4 * math.Pi) * math.Abs(cr.Current) * cr.Length
+	}
+	return k
+}
+
 // reachExtent is DesignExtent widened to take in every core: the radius
 // about the origin of a sphere that holds every winding and rod.
 func reachExtent(d calc.Design) float64 {
@@ -356,7 +385,7 @@ func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach
 			points = append(points, p)
 		}
 	}
-	ir.Windings = windingReaches(fm, d, coils, ext, points)
+	ir.Windings = windingReaches(fm, d, coils, ext, points, conductorBound(d, r, coils))
 	for i, w := range ir.Windings {
 		if w.Distance > ir.Distance || (ir.Nearest < 0 && w.Surface >= ImplantField) {
 			ir.Distance, ir.Nearest = w.Distance, i
@@ -562,7 +591,7 @@ func reachDirections(co calc.Coil, fr calc.Frame) []calc.Vec {
 // convex outline makes it needless (tests).
 var sampleEveryLine = false
 
-func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, coils []CoilStudy, ext float64, extra []calc.Vec) []WindingReach {
+func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, coils []CoilStudy, ext float64, extra []calc.Vec, bound float64) []WindingReach {
 	os := outlines(d, coils)
 	gap := 1e-6 * math.Max(ext, 1e-3)
 	type ray struct {
@@ -619,13 +648,18 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, coils []CoilStudy
 			}
 		}
 		// From the middle of each end face, at the mean radius, along the
-		// axis: next to the conductors' ends.
+		// axis: next to the conductors' ends, at eight places round the
+		// rim (another coil nearby breaks the symmetry about the axis).
 		if co.Form != calc.Rectangle {
 			e := coils[i].Envelope
 			rm := (e.R0 + e.R1) / 2
 			for _, c := range centres {
-				for _, s := range []float64{1, -1} {
-					rays = append(rays, ray{i, c.Add(fr.E1.Scale(rm)).Add(fr.U.Scale(s * (e.Z1 + gap))), fr.U.Scale(s)})
+				for k := range 8 {
+					a := float64(k) * math.Pi / 4
+					rim := fr.E1.Scale(rm * math.Cos(a)).Add(fr.E2.Scale(rm * math.Sin(a)))
+					for _, s := range []float64{1, -1} {
+						rays = append(rays, ray{i, c.Add(rim).Add(fr.U.Scale(s * (e.Z1 + gap))), fr.U.Scale(s)})
+					}
 				}
 			}
 		} else {
@@ -649,7 +683,13 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, coils []CoilStudy
 			return
 		}
 		res[k].surface = b
-		if t := reach(fm, r.at, r.dir, ImplantField, gap, far); t > 0 {
+		lim := far
+		if bound > 0 {
+			// beyond the sphere of radius ext about the origin by more than
+			// √(bound/level), no conductor is near enough to give the level
+			lim = math.Min(far, r.at.Norm()+ext+math.Sqrt(bound/ImplantField))
+		}
+		if t := reach(fm, r.at, r.dir, ImplantField, gap, lim); t > 0 {
 			res[k].point, res[k].ok = r.at.Add(r.dir.Scale(t)), true
 		}
 	})

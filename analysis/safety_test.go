@@ -1,6 +1,7 @@
 package analysis
 
 import (
+	"os"
 	"math"
 	"strings"
 	"testing"
@@ -267,5 +268,76 @@ func TestRefineReachFindsThePowerLawsCrossing(t *testing.T) {
 		if calls > 15 {
 			t.Errorf("B ∝ r^-%g (ripple %g): %d field evaluations", c.p, c.ripple, calls)
 		}
+	}
+}
+
+// The conductor bound K/d² is never below the field of the coils at a
+// point d from the nearest conductor (Biot–Savart with |dl × r̂| ≤ |dl|),
+// checked at points around a thick coil, a pair and a rectangle, from
+// just outside the windings to far away.
+func TestConductorBoundHoldsTheField(t *testing.T) {
+	for _, src := range []string{
+		"```coil\nname = thick\nform = solenoid\nmean-diameter = 60 mm\nlength = 18.5 mm\nradial-build = 18 mm\nturns = 1000\nwire = AWG 24\ncurrent = 1 A\n```\n",
+		"```coil\nname = pair\nform = pair\nmean-diameter = 60 mm\nspacing = 50 mm\nturns = 20\nwire = AWG 20\ncurrent = 3 A\n```\n",
+		"```coil\nname = panel\nform = rectangle\nwidth = 300 mm\nheight = 200 mm\nturns = 30\nwire = AWG 22\ncurrent = 2 A\n```\n",
+	} {
+		st := studyOf(t, src)
+		d := st.Spec.Design
+		k := conductorBound(d, st.Results, st.Coils)
+		if !(k > 0) {
+			t.Fatalf("%s: no bound", src[:30])
+		}
+		fm := implantField(d, st.Coils)
+		os := outlines(d, st.Coils)
+		worst := 0.0
+		for i := range 400 {
+			// points on a spiral from 1 mm to 2 m from the origin
+			r := 1e-3 * math.Pow(2000, float64(i)/399)
+			th, ph := float64(i)*2.39996, math.Acos(1-2*math.Mod(float64(i)*0.618034, 1))
+			p := calc.Vec{r * math.Sin(ph) * math.Cos(th), r * math.Sin(ph) * math.Sin(th), r * math.Cos(ph)}
+			dist, _, _ := nearestOutline(os, p)
+			if !(dist > 0) {
+				continue
+			}
+			// the outlines hold every conductor, so the conductors are at
+			// least dist away
+			worst = math.Max(worst, fm(p).Norm()*dist*dist/k)
+		}
+		if !(worst > 0) || worst > 1 {
+			t.Errorf("%s: |B|·d²/K reaches %g (must stay ≤ 1)", src[:30], worst)
+		}
+		t.Logf("%s: largest |B|·d²/K %.3g", src[:24], worst)
+	}
+}
+
+// Next to a loop whose neighbour breaks its symmetry (the three-axis set's
+// X coil, with the Z coil 40 mm below), the reach from the winding found
+// by the search equals a brute-force search of a 0.5 mm × 1 mm × 1 mm grid
+// round the loop's lower rim to within the grid's spacing.
+func TestImplantReachRoundAnAsymmetricRim(t *testing.T) {
+	src, err := os.ReadFile("../testdata/figures/three-axis-set.md")
+	if err != nil {
+		t.Fatal(err)
+	}
+	st, diags := Run("three-axis-set.md", src, Options{})
+	if len(diags) > 0 {
+		t.Fatal(diags)
+	}
+	fm := implantField(st.Spec.Design, st.Coils)
+	outs := outlines(st.Spec.Design, st.Coils)
+	grid := 0.0
+	for i := 0; i <= 40; i++ {
+		for j := 0; j <= 90; j++ {
+			for k := 0; k <= 90; k++ {
+				p := calc.Vec{0.035 + 0.0005*float64(i), -0.045 + 0.001*float64(j), -0.045 + 0.001*float64(k)}
+				if dd, c, _ := nearestOutline(outs, p); c == 0 && dd > grid && fm(p).Norm() >= ImplantField {
+					grid = dd
+				}
+			}
+		}
+	}
+	got := st.Safety.Implant.Windings[0].Distance
+	if !(grid > 0.002) || got < grid-0.5e-3 {
+		t.Errorf("X coil: reach from its winding %g m, the grid's %g m", got, grid)
 	}
 }

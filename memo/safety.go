@@ -141,7 +141,7 @@ func implantWhere(j *analysis.Study) (where []string, beyond string) {
 		if anyCored {
 			what = "every winding and core"
 		}
-		beyond = fmt.Sprintf(" Farther than %s from the outer surface of %s the flux density stays below 0.5 mT (the field of all coils counted; searched every 10° outward from the centre of each winding).", Eng(math.Max(ir.Distance, 1e-3), "m", 2), what)
+		beyond = fmt.Sprintf(" Farther than %s from the outer surface of %s the flux density stays below 0.5 mT (the field of all coils counted; searched every 10° outward from the centre of each winding and along the axis from points round the ends of the conductors).", Eng(math.Max(ir.Distance, 1e-3), "m", 2), what)
 	}
 	for _, k := range ir.Probes {
 		p := r.Probes[k]
