@@ -1,8 +1,8 @@
 package analysis
 
 import (
-	"os"
 	"math"
+	"os"
 	"strings"
 	"testing"
 
