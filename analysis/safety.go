@@ -304,33 +304,151 @@ func implantField(d calc.Design, coils []CoilStudy) func(calc.Vec) calc.Vec {
 	}
 }
 
-// conductorBound is K, T·m², such that |B| ≤ K/d² at any point whose
-// distance from every conductor is at least d: by the Biot–Savart law
-// |B| ≤ μ0/(4π) Σ |I| ∫|dl|/d², so K = μ0/(4π) Σ |I|·(wire length) over
-// every coil block. 0 (no bound) when a core with current adds its
-// poles' field, which the sum leaves out.
+// conductorBounds are K_i, T·m², one per coil block, such that the field
+// of block i is at most K_i/d² at any point whose distance from every one
+// of its conductors is at least d: by the Biot–Savart law
+// |B| ≤ μ0/(4π) Σ |I| ∫|dl|/d², so K_i = μ0/(4π)·|I_i|·(wire length of
+// block i). nil (no bound) when a core with current adds its poles'
+// field, which the sum leaves out.
 //
 // Reference: the Biot–Savart law, e.g. J. D. Jackson, Classical
 // Electrodynamics, 3rd ed., Wiley 1999, eq. 5.4, with |dl × r̂| ≤ |dl|.
-func conductorBound(d calc.Design, r calc.Results, coils []CoilStudy) float64 {
-	k := 0.0
+func conductorBounds(d calc.Design, r calc.Results, coils []CoilStudy) []float64 {
+	ks := make([]float64, len(d.Coils))
 	for i := range d.Coils {
 		if i >= len(r.Coils) {
-			return 0
+			return nil
 		}
 		cr := r.Coils[i]
 		if cr.Current == 0 {
 			continue
 		}
 		if i < len(coils) && coils[i].Kinds.Core != nil {
-			return 0
+			return nil
 		}
 		if !(cr.Length > 0) || math.IsInf(cr.Length, 0) || math.IsNaN(cr.Current) {
-			return 0
+			return nil
 		}
-		k += calc.Mu0 / (4 * math.Pi) * math.Abs(cr.Current) * cr.Length
+		ks[i] = calc.Mu0 / (4 * math.Pi) * math.Abs(cr.Current) * cr.Length
 	}
-	return k
+	return ks
+}
+
+// fieldBound bounds the field of every coil block from above at any
+// point, from each block's conductor bound K_i (conductorBounds):
+//
+//	|B_i(p)| ≤ min(K_i/d_i², 2 K_i R_i/(D_i − R_i)³),
+//
+// d_i the distance from p to the block's outlines, D_i its distance from
+// the block's centre and R_i the radius of a sphere about that centre
+// holding the block (the second form for D_i > R_i). The first is the
+// Biot–Savart law with |dl × r̂| ≤ |dl|; the second uses that each turn is
+// closed, so ∮ dl × g(c) = 0 for g(r') = (p − r')/|p − r'|³ and
+// B = μ0 I/(4π) ∮ dl × (g(r') − g(c)), with |g(r') − g(c)| ≤ 2R/(D − R)³
+// (the operator norm of g's gradient, 2/|x|³, along the segment from c to
+// r', which stays in the sphere). Far from a block it falls as the dipole
+// field does.
+type fieldBound struct {
+	ks, rs  []float64
+	centres []calc.Vec
+	os      []outline
+}
+
+func newFieldBound(d calc.Design, ks []float64, os []outline) *fieldBound {
+	if ks == nil {
+		return nil
+	}
+	fb := &fieldBound{ks: ks, rs: make([]float64, len(ks)), os: os}
+	for _, co := range d.Coils {
+		fb.centres = append(fb.centres, co.Centre)
+	}
+	for _, o := range os {
+		var r float64
+		if o.rect {
+			r = calc.Vec{o.w + o.r, o.h + o.r, o.r}.Norm()
+		} else {
+			rc, zc := (o.r0+o.r1)/2, (o.z0+o.z1)/2
+			r = math.Hypot(math.Max(o.r1, rc+o.r), math.Max(math.Max(math.Abs(o.z0), math.Abs(o.z1)), math.Abs(zc)+o.r))
+		}
+		fb.rs[o.coil] = math.Max(fb.rs[o.coil], o.centre.Sub(fb.centres[o.coil]).Norm()+r)
+	}
+	return fb
+}
+
+// at is the bound, T, on |B| of all blocks at p.
+func (fb *fieldBound) at(p calc.Vec) float64 {
+	dmin := make([]float64, len(fb.ks))
+	for i := range dmin {
+		dmin[i] = math.Inf(1)
+	}
+	for _, o := range fb.os {
+		if v, _ := o.distance(p); v < dmin[o.coil] {
+			dmin[o.coil] = v
+		}
+	}
+	b := 0.0
+	for i, k := range fb.ks {
+		if k == 0 {
+			continue
+		}
+		bi := k / (dmin[i] * dmin[i])
+		if D, r := p.Sub(fb.centres[i]).Norm(), fb.rs[i]; D > r {
+			bi = math.Min(bi, 2*k*r/math.Pow(D-r, 3))
+		}
+		b += bi
+	}
+	return b
+}
+
+// levelField is the field of all coils of d, as fm gives it, for a
+// search that only asks whether |B| reaches level: a block far from p
+// (farther than three times the radius R of its sphere) is taken as the
+// point dipole of its moment m at its centre, whose error the closed
+// turns bound,
+//
+//	|B_i − B_dip,i| ≤ 3 K_i R_i²/(D_i − R_i)⁴
+//
+// (the next term of g's expansion, |∇²g| ≤ 6/|x|⁴, as in fieldBound).
+// Where the sum of the dipole and near fields clears level by more than
+// the bounds' sum either way, it is returned; elsewhere every block is
+// evaluated in full. So the search decides the same at every point as
+// with fm, while a design of many coils evaluates in full only the few
+// blocks near the point. fm itself when no bound applies (fb nil).
+func levelField(fm func(calc.Vec) calc.Vec, model *calc.FieldModel, fb *fieldBound, moments []calc.Vec, level float64) func(calc.Vec) calc.Vec {
+	if fb == nil || model == nil || len(model.Coils) != len(fb.ks) || len(moments) != len(fb.ks) {
+		return fm
+	}
+	return func(p calc.Vec) calc.Vec {
+		var b calc.Vec
+		errSum := 0.0
+		far := make([]bool, len(fb.ks))
+		anyFar := false
+		for i, k := range fb.ks {
+			if k == 0 {
+				continue
+			}
+			r := p.Sub(fb.centres[i])
+			if D, R := r.Norm(), fb.rs[i]; D > 3*R {
+				far[i], anyFar = true, true
+				b = b.Add(calc.DipoleField(moments[i], r))
+				errSum += 3 * k * R * R / math.Pow(D-R, 4)
+				continue
+			}
+			b = b.Add(model.CoilAt(i, p))
+		}
+		if !anyFar {
+			return b
+		}
+		if n := b.Norm(); n-errSum >= level || n+errSum < level {
+			return b
+		}
+		for i, f := range far {
+			if f {
+				b = b.Sub(calc.DipoleField(moments[i], p.Sub(fb.centres[i]))).Add(model.CoilAt(i, p))
+			}
+		}
+		return b
+	}
 }
 
 // reachExtent is DesignExtent widened to take in every core: the radius
@@ -385,7 +503,7 @@ func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach
 			points = append(points, p)
 		}
 	}
-	ir.Windings = windingReaches(fm, d, coils, ext, points, conductorBound(d, r, coils))
+	ir.Windings = windingReaches(fm, d, r, coils, ext, points, conductorBounds(d, r, coils))
 	for i, w := range ir.Windings {
 		if w.Distance > ir.Distance || (ir.Nearest < 0 && w.Surface >= ImplantField) {
 			ir.Distance, ir.Nearest = w.Distance, i
@@ -591,8 +709,23 @@ func reachDirections(co calc.Coil, fr calc.Frame) []calc.Vec {
 // convex outline makes it needless (tests).
 var sampleEveryLine = false
 
-func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, coils []CoilStudy, ext float64, extra []calc.Vec, bound float64) []WindingReach {
+func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, coils []CoilStudy, ext float64, extra []calc.Vec, ks []float64) []WindingReach {
 	os := outlines(d, coils)
+	bound := 0.0
+	for _, k := range ks {
+		bound += k
+	}
+	var moments []calc.Vec
+	for i := range d.Coils {
+		if i < len(r.Coils) {
+			moments = append(moments, r.Coils[i].Moment)
+		}
+	}
+	var model *calc.FieldModel
+	if ks != nil {
+		model = calc.NewFieldModel(d)
+	}
+	fast := levelField(fm, model, newFieldBound(d, ks, os), moments, ImplantField)
 	gap := 1e-6 * math.Max(ext, 1e-3)
 	type ray struct {
 		coil    int
@@ -689,7 +822,7 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, coils []CoilStudy
 			// √(bound/level), no conductor is near enough to give the level
 			lim = math.Min(far, r.at.Norm()+ext+math.Sqrt(bound/ImplantField))
 		}
-		if t := reach(fm, r.at, r.dir, ImplantField, gap, lim); t > 0 {
+		if t := reach(fast, r.at, r.dir, ImplantField, gap, lim); t > 0 {
 			res[k].point, res[k].ok = r.at.Add(r.dir.Scale(t)), true
 		}
 	})
@@ -754,7 +887,7 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, coils []CoilStudy
 			done[s.coil] = true
 			continue
 		}
-		if fm(s.at).Norm() >= ImplantField {
+		if fast(s.at).Norm() >= ImplantField {
 			wr[s.coil].Distance = s.d
 			done[s.coil] = true
 		}

@@ -1,6 +1,7 @@
 package analysis
 
 import (
+	"fmt"
 	"math"
 	"os"
 	"strings"
@@ -271,42 +272,47 @@ func TestRefineReachFindsThePowerLawsCrossing(t *testing.T) {
 	}
 }
 
-// The conductor bound K/d² is never below the field of the coils at a
-// point d from the nearest conductor (Biot–Savart with |dl × r̂| ≤ |dl|),
-// checked at points around a thick coil, a pair and a rectangle, from
-// just outside the windings to far away.
+// The field bound (fieldBound: the conductors' K/d² and, away from a
+// block, the closed turns' 2KR/(D − R)³) is never below the field of the
+// coils, checked on a spiral of points from just outside the windings to
+// 2 m away round a thick coil, a pair, a rectangle and two coils apart;
+// and far from a coil it is within a small factor of the field, not a
+// loose 1/d².
 func TestConductorBoundHoldsTheField(t *testing.T) {
 	for _, src := range []string{
 		"```coil\nname = thick\nform = solenoid\nmean-diameter = 60 mm\nlength = 18.5 mm\nradial-build = 18 mm\nturns = 1000\nwire = AWG 24\ncurrent = 1 A\n```\n",
 		"```coil\nname = pair\nform = pair\nmean-diameter = 60 mm\nspacing = 50 mm\nturns = 20\nwire = AWG 20\ncurrent = 3 A\n```\n",
 		"```coil\nname = panel\nform = rectangle\nwidth = 300 mm\nheight = 200 mm\nturns = 30\nwire = AWG 22\ncurrent = 2 A\n```\n",
+		"```coil\nname = a\nform = solenoid\nmean-diameter = 40 mm\nlength = 20 mm\nradial-build = 5 mm\nturns = 200\nwire = AWG 26\ncurrent = 1 A\ncentre = (-60 mm, 0 mm, 0 mm)\n```\n\n```coil\nname = b\nform = solenoid\nmean-diameter = 40 mm\nlength = 20 mm\nradial-build = 5 mm\nturns = 200\nwire = AWG 26\ncurrent = 1 A\naxis = x\ncentre = (60 mm, 0 mm, 0 mm)\n```\n",
 	} {
 		st := studyOf(t, src)
 		d := st.Spec.Design
-		k := conductorBound(d, st.Results, st.Coils)
-		if !(k > 0) {
+		os := outlines(d, st.Coils)
+		fb := newFieldBound(d, conductorBounds(d, st.Results, st.Coils), os)
+		if fb == nil {
 			t.Fatalf("%s: no bound", src[:30])
 		}
 		fm := implantField(d, st.Coils)
-		os := outlines(d, st.Coils)
-		worst := 0.0
+		worst, farRatio := 0.0, math.Inf(1)
 		for i := range 400 {
-			// points on a spiral from 1 mm to 2 m from the origin
 			r := 1e-3 * math.Pow(2000, float64(i)/399)
 			th, ph := float64(i)*2.39996, math.Acos(1-2*math.Mod(float64(i)*0.618034, 1))
 			p := calc.Vec{r * math.Sin(ph) * math.Cos(th), r * math.Sin(ph) * math.Sin(th), r * math.Cos(ph)}
-			dist, _, _ := nearestOutline(os, p)
-			if !(dist > 0) {
+			if dist, _, _ := nearestOutline(os, p); !(dist > 0) {
 				continue
 			}
-			// the outlines hold every conductor, so the conductors are at
-			// least dist away
-			worst = math.Max(worst, fm(p).Norm()*dist*dist/k)
+			b, bound := fm(p).Norm(), fb.at(p)
+			worst = math.Max(worst, b/bound)
+			if r > 1.5 && b > 0 {
+				farRatio = math.Min(farRatio, b/bound)
+			}
 		}
 		if !(worst > 0) || worst > 1 {
-			t.Errorf("%s: |B|·d²/K reaches %g (must stay ≤ 1)", src[:30], worst)
+			t.Errorf("%s: |B| reaches %g of the bound (must stay ≤ 1)", src[:30], worst)
 		}
-		t.Logf("%s: largest |B|·d²/K %.3g", src[:24], worst)
+		if !(farRatio > 1e-2) {
+			t.Errorf("%s: beyond 1.5 m the field is as little as %g of the bound", src[:30], farRatio)
+		}
 	}
 }
 
@@ -339,5 +345,51 @@ func TestImplantReachRoundAnAsymmetricRim(t *testing.T) {
 	got := st.Safety.Implant.Windings[0].Distance
 	if !(grid > 0.002) || got < grid-0.5e-3 {
 		t.Errorf("X coil: reach from its winding %g m, the grid's %g m", got, grid)
+	}
+}
+
+// The search's field (levelField: far blocks as dipoles within their
+// bound) says "at or above 0.5 mT" exactly where the full field does, and
+// is within its bound of the full field, over points among a lattice of
+// coils (solenoids on both axes, a pair, a rectangle) from next to the
+// windings to far away.
+func TestLevelFieldDecidesAsTheFullField(t *testing.T) {
+	var b strings.Builder
+	for i := range 8 {
+		fmt.Fprintf(&b, "```coil\nname = c%d\nform = solenoid\ninner-diameter = 30 mm\nouter-diameter = 40 mm\nlength = 20 mm\nturns = 200\nwire = AWG 26\ncurrent = 0.5 A\naxis = %s\ncentre = (%d, 0, %d) mm\n```\n\n", i, []string{"z", "x"}[i%2], 120*(i%4-2), 120*(i/4))
+	}
+	b.WriteString("```coil\nname = p\nform = pair\nmean-diameter = 60 mm\nspacing = 30 mm\nturns = 20\nwire = AWG 20\ncurrent = 3 A\ncentre = (0, 200 mm, 0)\n```\n\n")
+	b.WriteString("```coil\nname = r\nform = rectangle\nwidth = 150 mm\nheight = 100 mm\nturns = 30\nwire = AWG 22\ncurrent = 2 A\ncentre = (0, -250 mm, 60 mm)\naxis = y\n```\n")
+	st := studyOf(t, b.String())
+	d := st.Spec.Design
+	ks := conductorBounds(d, st.Results, st.Coils)
+	os := outlines(d, st.Coils)
+	var moments []calc.Vec
+	for _, cr := range st.Results.Coils {
+		moments = append(moments, cr.Moment)
+	}
+	fm := implantField(d, st.Coils)
+	lf := levelField(fm, calc.NewFieldModel(d), newFieldBound(d, ks, os), moments, ImplantField)
+	above, shortcut := 0, 0
+	for i := range 3000 {
+		r := 15e-3 * math.Pow(100, float64(i%300)/299)
+		th, ph := float64(i)*2.39996, math.Acos(1-2*math.Mod(float64(i)*0.618034, 1))
+		p := calc.Vec{-0.12 + r*math.Sin(ph)*math.Cos(th), r * math.Sin(ph) * math.Sin(th), r * math.Cos(ph)}
+		if dist, _, _ := nearestOutline(os, p); !(dist > 0) {
+			continue
+		}
+		full, fast := fm(p).Norm(), lf(p).Norm()
+		if (full >= ImplantField) != (fast >= ImplantField) {
+			t.Errorf("at %v: full field %g T, the search's %g T: they decide differently", p, full, fast)
+		}
+		if full >= ImplantField {
+			above++
+		}
+		if math.Abs(full-fast) > 1e-12*full {
+			shortcut++
+		}
+	}
+	if above < 30 || shortcut < 300 {
+		t.Errorf("%d points at the level, %d taken by the dipoles: the test does not exercise both", above, shortcut)
 	}
 }

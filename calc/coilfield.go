@@ -122,6 +122,15 @@ func (f *FieldModel) At(p Vec) Vec {
 	return B
 }
 
+// CoilAt returns the field, T, of coil i alone at the global point p, as
+// At evaluates it.
+func (f *FieldModel) CoilAt(i int, p Vec) Vec {
+	if len(f.sources) == len(f.Coils) {
+		return f.sources[i].At(p)
+	}
+	return CoilField(f.Coils[i], f.Windings[i], f.Currents[i], p)
+}
+
 // FieldAt returns the field, T, of all coils of d at the global point p,
 // each at its steady operating current (see NewFieldModel), summed turn by
 // turn (CoilField) as Evaluate does for the probes. For many points build
