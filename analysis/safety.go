@@ -95,6 +95,14 @@ type ImplantReach struct {
 	AxialClear float64
 	AxialCoil  int
 	AxialBore  bool
+	// AxialEnd is set when that far end lies beyond an end face of the
+	// outline, within its outer radius of its axis: AxialClear is then
+	// its distance beyond that face.
+	AxialEnd bool
+	// OriginInside is set when the origin lies inside a winding or rod
+	// (not in a bore): |B| at the origin is then the field in the solid,
+	// where no one can be.
+	OriginInside bool
 	// Farthest is the largest distance from the origin, beyond the sphere
 	// that holds every winding, at which |B| still reaches the level along
 	// any direction searched (±x, ±y, ±z, ± the
@@ -487,6 +495,11 @@ func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach
 		}
 	}
 	os := outlines(d, coils)
+	for _, o := range os {
+		if dd, bore := o.distance(calc.Vec{}); dd == 0 && !bore {
+			ir.OriginInside = true
+		}
+	}
 	var extra []calc.Vec
 	if ir.Axial > 0 {
 		far := f.U.Scale(up)
@@ -494,6 +507,14 @@ func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach
 			far = f.U.Scale(-down)
 		}
 		ir.AxialClear, ir.AxialCoil, ir.AxialBore = nearestOutline(os, far)
+		if ir.AxialClear > 0 {
+			for _, o := range os {
+				if v, _ := o.distance(far); o.coil == ir.AxialCoil && v == ir.AxialClear && !o.rect {
+					l := o.fr.ToLocal(far.Sub(o.centre))
+					ir.AxialEnd = math.Hypot(l[0], l[1]) <= o.r1
+				}
+			}
+		}
 		extra = append(extra, f.U.Scale(up), f.U.Scale(-down))
 	}
 	extra = append(extra, f.E1.Scale(e1), f.E2.Scale(e2), ir.Toward.Scale(ir.Farthest))

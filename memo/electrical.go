@@ -228,7 +228,7 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, fo
 	steps = append(steps,
 		Step{What: "Electrical time constant at the hot resistance", Symbolic: `\tau = \frac{L}{R}`,
 			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, L, R), Result: Q(s.TimeConstant, "s", 3)},
-		Step{What: "Rise time to 90 % of the final current after a voltage step, i(t) = I (1 − e^(−t/τ))", Symbolic: `t_{90} = \tau \ln 10`,
+		Step{What: "Rise time to 90 % of the final current after a voltage step, i(t) = I (1 − exp(−t/τ))", Symbolic: `t_{90} = \tau \ln 10`,
 			Numbers: fmt.Sprintf(`%s \cdot \ln 10`, Q(s.TimeConstant, "s", 3)), Result: Q(s.RiseTime, "s", 3)},
 		Step{What: "Magnetic energy stored at full current", Symbolic: `W = \frac{1}{2} L I^2`,
 			Numbers: fmt.Sprintf(`\frac{1}{2} \cdot %s \cdot %s^2`, L, Paren(I)), Result: Q(s.Energy, "J", 3)})

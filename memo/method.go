@@ -286,7 +286,7 @@ func momentSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []Ste
 		if co.Form == calc.Pair {
 			turns = fmt.Sprintf("the %d turns of both coils", 2*co.Turns)
 		}
-		steps = append(steps, Step{What: fmt.Sprintf("Field at the centre: the on-axis field of every turn (radius rᵢ, axial distance zᵢ from the centre), summed; Σ rᵢ²/(2 (rᵢ² + zᵢ²)^(3/2)) = %s m⁻¹ over %s", Sig(cs.CentreSum, 5), turns),
+		steps = append(steps, Step{What: fmt.Sprintf("Field at the centre: the on-axis field of every turn (radius rᵢ, axial distance zᵢ from the centre), summed; Σ rᵢ²/(2 (rᵢ² + zᵢ²)·√(rᵢ² + zᵢ²)) = %s m⁻¹ over %s", Sig(cs.CentreSum, 5), turns),
 			Symbolic: `B_0 = \sum_{i} \frac{\mu_0 I r_i^2}{2 \left( r_i^2 + z_i^2 \right)^{3/2}}`,
 			Numbers:  fmt.Sprintf(`\mu_0 \cdot %s \cdot %s\,\unit{m⁻¹}`, I, N(cs.CentreSum, 5)), Result: B})
 	}

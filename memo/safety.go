@@ -52,7 +52,7 @@ func Cautions(j *analysis.Study) []doc.Callout {
 			out = append(out, kindCautions(j, f)...) // memo/core.go
 		}
 	}
-	if ir := j.Safety.Implant; ir.Searched {
+	if ir := j.Safety.Implant; ir.Searched && anyCurrent(r) {
 		if where, beyond := implantWhere(j); len(where) > 0 {
 			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Field above 0.5 mT: implanted medical devices",
 				Spans: []doc.Span{{Text: templates.Text("caution-implant", map[string]string{"Where": strings.Join(where, ", "), "Beyond": beyond})}}})
@@ -73,6 +73,17 @@ func Cautions(j *analysis.Study) []doc.Callout {
 	return out
 }
 
+// anyCurrent reports whether some coil carries current (a pick-up coil
+// carries none and makes no field to caution about).
+func anyCurrent(r calc.Results) bool {
+	for _, cr := range r.Coils {
+		if cr.Current != 0 && !math.IsNaN(cr.Current) {
+			return true
+		}
+	}
+	return false
+}
+
 // implantWhere words where the field reaches 0.5 mT (analysis.ImplantReach):
 // at the origin; along the axis, as far from the origin as it reaches and
 // where that point lies against the nearest winding; outside the windings,
@@ -83,7 +94,7 @@ func implantWhere(j *analysis.Study) (where []string, beyond string) {
 	d, r, ir := j.Spec.Design, j.Results, j.Safety.Implant
 	name := func(i int) string { return fmt.Sprintf("coil %q", d.Coils[i].Name) }
 	cored := func(i int) bool { return i >= 0 && i < len(j.Coils) && j.Coils[i].Kinds.Core != nil }
-	if ir.Origin >= analysis.ImplantField {
+	if ir.Origin >= analysis.ImplantField && !ir.OriginInside {
 		where = append(where, "at the origin, where |B| = "+Eng(ir.Origin, "T", 3))
 	}
 	along, _ := reachWords(ir.Axis, len(d.Coils))
@@ -93,6 +104,12 @@ func implantWhere(j *analysis.Study) (where []string, beyond string) {
 		case k < 0:
 		case ir.AxialBore:
 			s += " (inside the bore of " + name(k) + ")"
+		case ir.AxialClear > 0 && ir.AxialEnd:
+			beyond := Eng(ir.AxialClear, "m", 2) + " beyond"
+			if ir.AxialClear < 1e-3 {
+				beyond = "within 1 mm of"
+			}
+			s += " (there " + beyond + " the end of the " + windingWord(cored(k)) + " of " + name(k) + ", along its axis)"
 		case ir.AxialClear > 0:
 			s += " (there " + strings.TrimPrefix(surfaceDistance(ir.AxialClear), "as far as ") + " the outer surface of the " + windingWord(cored(k)) + " of " + name(k) + ")"
 		default:

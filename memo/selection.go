@@ -32,7 +32,7 @@ func (c *composer) selection() {
 	if len(names) > 1 {
 		coils = "coils " + strings.Join(names, ", ") + " (all alike)"
 	}
-	c.para(fmt.Sprintf("The spec leaves %s of %s to be chosen for %s. Every whole turn count with every wire was searched: %s, %s of them meeting every requirement that the winding's layout and heat balance decide; %s evaluated in full, best first, to confirm the choice. The rest of this memo is the chosen design's.",
+	c.para(fmt.Sprintf("The design fixes everything but %s of %s, which are chosen here for %s. Every whole turn count with every wire was searched: %s, %s of them meeting every requirement that the winding's layout and heat balance decide; %s evaluated in full, best first, to confirm the choice. The rest of this memo is the chosen design's.",
 		freeList(sz), coils, sz.Objective, format.Count(sz.Discrete, "choice", "choices"), format.Digits(sz.Feasible), format.Count(sz.Full, "was", "were")))
 	c.add(c.requirementTable(sz))
 	c.tradeFigure(sz)
@@ -59,7 +59,7 @@ func freeList(sz *analysis.Sizing) string {
 		parts = append(parts, fmt.Sprintf("the wire (%d wires, %s to %s)", len(s.Wires), s.Wires[0].Name(), s.Wires[len(s.Wires)-1].Name()))
 	}
 	for _, r := range s.Ranges {
-		parts = append(parts, fmt.Sprintf("the %s (%s to %s)", r.Key, rangeValueOf(r, r.Lo), rangeValueOf(r, r.Hi)))
+		parts = append(parts, fmt.Sprintf("the %s (%s to %s)", keyWords(r.Key), rangeValueOf(r, r.Lo), rangeValueOf(r, r.Hi)))
 	}
 	switch len(parts) {
 	case 1:
@@ -225,12 +225,12 @@ func (c *composer) choiceTable(sz *analysis.Sizing) doc.Table {
 	ls := c.j.Spec.Design.Limits
 	head := []string{"Choice", "Wire", "Turns"}
 	for _, r := range sz.Size.Ranges {
-		head = append(head, r.Key)
+		head = append(head, capital(keyWords(r.Key)))
 	}
 	oName, _ := objectiveAxis(sz.Objective)
 	head = append(head, oName)
 	for _, l := range ls {
-		head = append(head, l.Quantity+" margin")
+		head = append(head, capital(keyWords(l.Quantity))+" margin")
 	}
 	var rows [][]doc.Cell
 	all := append([]analysis.Candidate{sz.Chosen}, sz.RunnersUp...)
@@ -344,12 +344,15 @@ func (c *composer) meritText(sz *analysis.Sizing) {
 // keyPhrase names a coil key in words, with its article: "a radial
 // build" for radial-build, "an inner diameter" for inner-diameter.
 func keyPhrase(key string) string {
-	words := strings.ReplaceAll(key, "-", " ")
+	words := keyWords(key)
 	if strings.ContainsRune("aeiou", rune(words[0])) {
 		return "an " + words
 	}
 	return "a " + words
 }
+
+// keyWords is a spec key or limit quantity as words: "radial build".
+func keyWords(key string) string { return strings.ReplaceAll(key, "-", " ") }
 
 // sizingSummary is page 1's line on a sized design: what was chosen, for
 // what, out of how many choices.
@@ -418,9 +421,9 @@ func edgeText(sz *analysis.Sizing) string {
 		v, tol := ch.Values[k], 1e-3*(r.Hi-r.Lo)
 		switch {
 		case v >= r.Hi-tol:
-			ends = append(ends, fmt.Sprintf("the top of the %s range (%s)", r.Key, rangeValueOf(r, r.Hi)))
+			ends = append(ends, fmt.Sprintf("the top of the %s range (%s)", keyWords(r.Key), rangeValueOf(r, r.Hi)))
 		case v <= r.Lo+tol && r.Key != "radial-build":
-			ends = append(ends, fmt.Sprintf("the bottom of the %s range (%s)", r.Key, rangeValueOf(r, r.Lo)))
+			ends = append(ends, fmt.Sprintf("the bottom of the %s range (%s)", keyWords(r.Key), rangeValueOf(r, r.Lo)))
 		}
 	}
 	if len(ends) == 0 {

@@ -18,7 +18,7 @@ func TestEdgeText(t *testing.T) {
 		t.Errorf("at the top of the turns: %q", got)
 	}
 	sz.Chosen = analysis.Candidate{Turns: 200, WireIndex: 2, Wire: spec.WireChoice{Gauge: 30}, Values: []float64{0.01}}
-	if got := edgeText(sz); !strings.Contains(got, "the thinnest wire listed (AWG 30)") || !strings.Contains(got, "top of the radial-build range") {
+	if got := edgeText(sz); !strings.Contains(got, "the thinnest wire listed (AWG 30)") || !strings.Contains(got, "top of the radial build range") {
 		t.Errorf("thinnest wire, full depth: %q", got)
 	}
 	sz.Chosen = analysis.Candidate{Turns: 200, WireIndex: 1, Values: []float64{0.004}}
