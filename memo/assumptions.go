@@ -228,9 +228,13 @@ func driveFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.
 		v.text = strings.Join(parts, "; ") + "."
 		out = append(out, v)
 	case cr.TimeConstant > 0 && !math.IsInf(cr.TimeConstant, 0):
+		rise := "After switch-on the current rises with the time constant"
+		if co.Drive == calc.CurrentDrive {
+			rise = "After switch-on, if the current source applies no more than its compliance voltage I·R, the current rises with the time constant"
+		}
 		out = append(out, validity{what: "Direct current", text: fmt.Sprintf(
-			"the results are steady d.c. values. After switch-on the current rises with the time constant $\\tau = L/R$ = %s and is within 1 %% of its final value after $4.6\\,\\tau$ = %s; faster switching or an a.c. drive changes current, field and heating.",
-			Eng(cr.TimeConstant, "s", 3), Eng(4.6*cr.TimeConstant, "s", 3))})
+			"the results are steady d.c. values. %s $\\tau = L/R$ = %s and is within 1 %% of its final value after $4.6\\,\\tau$ = %s; faster switching or an a.c. drive changes current, field and heating.",
+			rise, Eng(cr.TimeConstant, "s", 3), Eng(4.6*cr.TimeConstant, "s", 3))})
 	default:
 		out = append(out, validity{what: "Direct current", text: templates.Text("assume-dc", nil)})
 	}

@@ -238,7 +238,7 @@ func (c *composer) verdict() doc.Paragraph {
 	}
 	for i, co := range c.j.Spec.Design.Coils {
 		if i < len(r.Coils) && i < len(c.j.Coils) {
-			if t := underfillText(co, &c.j.Coils[i]); t != "" {
+			if t := underfillText(co, &c.j.Coils[i], c.j.Results.Coils[i].Winding.FillFactor); t != "" {
 				s = append(s, doc.Span{Text: t + " "})
 			}
 		}

@@ -228,7 +228,7 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, fo
 	steps = append(steps,
 		Step{What: "Electrical time constant at the hot resistance", Symbolic: `\tau = \frac{L}{R}`,
 			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, L, R), Result: Q(s.TimeConstant, "s", 3)},
-		Step{What: "Rise time to 90 % of the final current after a voltage step, i(t) = I (1 − exp(−t/τ))", Symbolic: `t_{90} = \tau \ln 10`,
+		Step{What: riseWhat(co), Symbolic: `t_{90} = \tau \ln 10`,
 			Numbers: fmt.Sprintf(`%s \cdot \ln 10`, Q(s.TimeConstant, "s", 3)), Result: Q(s.RiseTime, "s", 3)},
 		Step{What: "Magnetic energy stored at full current", Symbolic: `W = \frac{1}{2} L I^2`,
 			Numbers: fmt.Sprintf(`\frac{1}{2} \cdot %s \cdot %s^2`, L, Paren(I)), Result: Q(s.Energy, "J", 3)})
@@ -641,6 +641,17 @@ func largestCurrent(co calc.Coil) string {
 		return "the imposed current"
 	}
 	return "the cold switch-on current"
+}
+
+// riseWhat describes the rise-time step: after a voltage step for voltage
+// drive; for a current source, the rise a step of its compliance voltage
+// gives, the slowest it can be (a source that forces the current faster
+// sets its own rise).
+func riseWhat(co calc.Coil) string {
+	if co.Drive == calc.CurrentDrive {
+		return "Rise time to 90 % of the final current if the current source applies a step of its compliance voltage I·R (the slowest rise; a source that drives harder sets its own), i(t) = I (1 − exp(−t/τ))"
+	}
+	return "Rise time to 90 % of the final current after a voltage step, i(t) = I (1 − exp(−t/τ))"
 }
 
 // sourceOf names the voltage the switch sees beside the coil's own

@@ -182,7 +182,7 @@ func windingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []St
 		add(Step{What: "Layers", Symbolic: `n_L = \left\lceil \frac{N}{n_l} \right\rceil`,
 			Numbers: fmt.Sprintf(`\left\lceil \frac{%d}{%d} \right\rceil`, co.Turns, w.TurnsPerLayer), Result: fmt.Sprint(w.LayerCount)})
 		if !math.IsNaN(w.FillFactor) && co.RadialBuild > 0 && co.Length > 0 {
-			add(Step{What: "Copper fill factor of the winding cross-section", Symbolic: `\lambda = \frac{N A}{\ell\, b}`,
+			add(Step{What: "Copper fill factor of the stated winding cross-section", Symbolic: `\lambda = \frac{N A}{\ell\, b}`,
 				Numbers: fmt.Sprintf(`\frac{%d \cdot %s}{%s \cdot %s}`, co.Turns, Q(A, "m²", 4), Q(co.Length, "m", 4), Q(co.RadialBuild, "m", 4)),
 				Result:  N(w.FillFactor, 3)})
 		}
