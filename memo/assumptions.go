@@ -146,8 +146,8 @@ func radialBuildFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d
 		used := cs.Laid.R1 - cs.Laid.R0
 		{
 			out = append(out, validity{what: "Radial build", flagged: true, text: fmt.Sprintf(
-				"the %d turns lie in %d layers %s deep, less than the stated radial build of %s; the turns' mean radius is %s against the stated %s. The resistance, field, moment and inductance are those of the turns as laid from the bore; the heat is taken to leave through the outside of the stated section (a former, potting or a loose outer layer filling it). A coil wound to fill the stated build would have more turns or a larger mean radius than these results assume.",
-				co.Turns, w.LayerCount, Eng(used, "m", 3), Eng(co.RadialBuild, "m", 3), Eng(cs.MeanRadius, "m", 4), Eng(R, "m", 4))})
+				"the %d turns lie in %d layers %s deep, less than the stated radial build of %s; the turns' mean radius is %s against the stated %s. The resistance, field, moment and inductance are those of the turns as laid from the bore%s. A coil wound to fill the stated build would have more turns or a larger mean radius than these results assume.",
+				co.Turns, w.LayerCount, Eng(used, "m", 3), Eng(co.RadialBuild, "m", 3), Eng(cs.MeanRadius, "m", 4), Eng(R, "m", 4), heatLeaves(co))})
 		}
 	}
 	return out
@@ -239,6 +239,15 @@ func driveFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.
 		out = append(out, validity{what: "Direct current", text: templates.Text("assume-dc", nil)})
 	}
 	return out
+}
+
+// heatLeaves is the underfill note's clause on where a driven coil's heat
+// leaves; "" for a pick-up coil, which carries no current to heat it.
+func heatLeaves(co calc.Coil) string {
+	if analysis.IsReceiver(co) {
+		return ""
+	}
+	return "; the heat is taken to leave through the outside of the stated section (a former, potting or a loose outer layer filling it)"
 }
 
 // thermalFlag flags the range of the thermal model.

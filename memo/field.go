@@ -764,22 +764,21 @@ func mapPeakText(co calc.Coil, m *analysis.MapData, cored bool) string {
 	default:
 		where = "away from " + winding
 	}
-	z := "0"
+	z := "at the centre plane"
 	if m.PeakZ != 0 {
-		z = Eng(m.PeakZ, "m", 2)
+		z = Eng(m.PeakZ, "m", 3) + " along the axis from the centre"
+		if m.PeakMirrored {
+			z = "±" + z
+		}
 	}
-	if m.PeakMirrored {
-		z = "±" + z
-	}
-	xText := "0"
+	across := "on the axis"
 	if m.PeakX != 0 {
-		xText = Eng(m.PeakX, "m", 2)
+		across = Eng(math.Abs(m.PeakX), "m", 3) + " from the axis"
+		if co.Form == calc.Rectangle {
+			across = Eng(math.Abs(m.PeakX), "m", 3) + " from the axis towards a side"
+		}
 	}
-	across := "ρ"
-	if co.Form == calc.Rectangle {
-		across = "x"
-	}
-	return fmt.Sprintf("Of the map's points the field is strongest %s, %s at z = %s, %s = %s", where, Eng(m.Peak, "T", 3), z, across, xText)
+	return fmt.Sprintf("Of the map's points the field is strongest %s, %s: %s, %s", where, Eng(m.Peak, "T", 3), z, across)
 }
 
 // mapLevels reads a coil's map: |B| at its centre node and the largest

@@ -246,7 +246,11 @@ func (c *composer) sensitivity(wc *analysis.WorstCase) {
 		text := fmt.Sprintf("Figure %d shows the same swings as bars, one group per result.", c.figure+1)
 		if bi >= 0 {
 			what := strings.ToLower(labels[bi][:1]) + labels[bi][1:]
-			text += fmt.Sprintf(" The longest bar is the swing of the %s over the %s tolerance, %s %%: that tolerance is the one to hold tightest.", what, names[bj], Sig(big, 2))
+			hold := "that tolerance is the one to hold tightest"
+			if names[bj] == "ambient" {
+				hold = "the ambient range, which the design cannot hold, is the one to design for"
+			}
+			text += fmt.Sprintf(" The longest bar is the swing of the %s over the %s tolerance, %s %%: %s.", what, names[bj], Sig(big, 2), hold)
 		}
 		c.para(text)
 		c.fig(doc.Figure{Caption: "Sensitivity of each result to each tolerance (swing from low to high end, % of nominal)",
