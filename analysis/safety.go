@@ -726,6 +726,36 @@ func reachDirections(co calc.Coil, fr calc.Frame) []calc.Vec {
 // counts, by its distance from the nearest outline, toward that
 // outline's block. extra are further points at the level (the searches
 // from the origin), counted the same way.
+// ownStretch is how far, up to lim, the line from at along u stays
+// nearer to block coil's outlines than to any other block's: the search
+// from a block looks for the level in the block's own region, and the
+// regions of the others are searched from them. Where the line leaves
+// the region within lim, the first crossing found by stepping every
+// 1/64 of lim and bisecting is taken.
+func ownStretch(os []outline, coil int, at, u calc.Vec, lo, lim float64) float64 {
+	own := func(t float64) bool {
+		_, c, _ := nearestOutline(os, at.Add(u.Scale(t)))
+		return c == coil
+	}
+	step := (lim - lo) / 64
+	for t := lo + step; t <= lim; t += step {
+		if own(t) {
+			continue
+		}
+		a, b := t-step, t
+		for b-a > 1e-9*b {
+			m := 0.5 * (a + b)
+			if own(m) {
+				a = m
+			} else {
+				b = m
+			}
+		}
+		return b
+	}
+	return lim
+}
+
 // sampleEveryLine makes windingReaches sample the lines even where one
 // convex outline makes it needless (tests).
 var sampleEveryLine = false
@@ -744,7 +774,7 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 	}
 	var model *calc.FieldModel
 	if ks != nil {
-		model = calc.NewFieldModel(d)
+		model = calc.NewFieldModel(d).ForMaps() // a level search needs no more than the maps' 10⁻⁹
 	}
 	fast := levelField(fm, model, newFieldBound(d, ks, os), moments, ImplantField)
 	gap := 1e-6 * math.Max(ext, 1e-3)
@@ -828,6 +858,24 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 		point   calc.Vec
 		ok      bool
 	}
+	// A block of one convex outline (see above) whose line ends nearest to
+	// it is taken to gain nothing from the line's samples either: a line
+	// that starts and ends nearer to that block than to any other is taken
+	// to stay so between (it would have to pass nearer to another solid
+	// and come back), and along it the distance from a convex block grows.
+	// TestLatticeReachWithoutOwnLineSamples compares both ways on a
+	// lattice of coils.
+	convexAlone := make([]bool, len(d.Coils))
+	for i := range d.Coils {
+		n, convex := 0, true
+		for _, o := range os {
+			if o.coil == i {
+				n++
+				convex = convex && !o.round && !o.rect
+			}
+		}
+		convexAlone[i] = n == 1 && convex
+	}
 	res := make([]found, len(rays))
 	far := math.Max(ext, 1e-3) * 1e3
 	eachIndex(len(rays), func(k int) {
@@ -842,6 +890,9 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 			// beyond the sphere of radius ext about the origin by more than
 			// √(bound/level), no conductor is near enough to give the level
 			lim = math.Min(far, r.at.Norm()+ext+math.Sqrt(bound/ImplantField))
+		}
+		if len(d.Coils) > 1 && convexAlone[r.coil] && !sampleEveryLine {
+			lim = ownStretch(os, r.coil, r.at, r.dir, gap, lim)
 		}
 		if t := reach(fast, r.at, r.dir, ImplantField, gap, lim); t > 0 {
 			res[k].point, res[k].ok = r.at.Add(r.dir.Scale(t)), true
@@ -883,34 +934,55 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 		d    float64
 		coil int
 	}
-	var samples []sample
 	step := math.Max(ext, 1e-3) / 400
-	for k, f := range res {
+	perRay := make([][]sample, len(res))
+	eachIndex(len(res), func(k int) {
+		f := res[k]
 		if !f.ok {
-			continue
+			return
 		}
 		r := rays[k]
+		if _, c, _ := nearestOutline(os, f.point); convexAlone[r.coil] && c == r.coil && !sampleEveryLine {
+			return
+		}
 		t := f.point.Sub(r.at).Norm()
 		for j := 1; float64(j)*step < t && j <= 4000; j++ {
 			p := r.at.Add(r.dir.Scale(float64(j) * step))
 			if dd, c, _ := nearestOutline(os, p); c >= 0 && dd > wr[c].Distance {
-				samples = append(samples, sample{p, dd, c})
+				perRay[k] = append(perRay[k], sample{p, dd, c})
 			}
 		}
+	})
+	var samples []sample
+	for _, ss := range perRay {
+		samples = append(samples, ss...)
 	}
 	sort.Slice(samples, func(a, b int) bool { return samples[a].d > samples[b].d })
+	// Tried in that order, farthest first, in batches whose fields are
+	// evaluated on every core: a batch evaluates every sample the state at
+	// its start leaves open (a superset of those the order reaches), then
+	// the order is followed through it, so the outcome is the serial one.
 	done := make([]bool, len(d.Coils))
-	for _, s := range samples {
-		if done[s.coil] {
-			continue
-		}
-		if s.d <= wr[s.coil].Distance {
-			done[s.coil] = true
-			continue
-		}
-		if fast(s.at).Norm() >= ImplantField {
-			wr[s.coil].Distance = s.d
-			done[s.coil] = true
+	const batch = 128
+	level := make([]bool, batch)
+	for from := 0; from < len(samples); from += batch {
+		part := samples[from:min(from+batch, len(samples))]
+		eachIndex(len(part), func(i int) {
+			s := part[i]
+			level[i] = !done[s.coil] && s.d > wr[s.coil].Distance && fast(s.at).Norm() >= ImplantField
+		})
+		for i, s := range part {
+			if done[s.coil] {
+				continue
+			}
+			if s.d <= wr[s.coil].Distance {
+				done[s.coil] = true
+				continue
+			}
+			if level[i] {
+				wr[s.coil].Distance = s.d
+				done[s.coil] = true
+			}
 		}
 	}
 	return wr
