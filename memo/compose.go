@@ -187,6 +187,9 @@ func (c *composer) titlePage() {
 	}
 	if !c.receiverOnly() {
 		c.add(c.summaryTable())
+		if t, ok := c.totalsTable(); ok {
+			c.add(t)
+		}
 	}
 	if c.anyReceiver() {
 		c.add(c.receiverSummary()) // pick-up coils: receiver.go
@@ -407,22 +410,8 @@ func (c *composer) summaryTable() doc.Table {
 		}))
 	}
 	rows = c.gradientRows(idx, rows, row)
-	blank := func(cells []doc.Cell) []doc.Cell {
-		for range max(len(idx)-1, 0) {
-			cells = append(cells, doc.Cell{})
-		}
-		return cells
-	}
-	if len(idx) > 1 {
-		total := func(name, v string) []doc.Cell {
-			return blank([]doc.Cell{{Text: name}, {Text: v, Strong: true}})
-		}
-		rows = append(rows,
-			total("All coils: moment |m|", Eng(r.Moment.Norm(), "A·m²", 3)),
-			total("All coils: |B| at origin", Eng(r.FieldCentre.Norm(), "T", 3)))
-	}
-	if d.Conditions.BackgroundField.Norm() > 0 {
-		rows = append(rows, blank([]doc.Cell{{Text: "Torque in background field (max / design angle)"}, {Text: Eng(r.TorqueMax, "N·m", 3) + " / " + Eng(r.TorqueDesign, "N·m", 3)}}))
+	if len(idx) == 1 && d.Conditions.BackgroundField.Norm() > 0 { // with several coils: totalsTable
+		rows = append(rows, []doc.Cell{{Text: "Torque in background field (max / design angle)"}, {Text: Eng(r.TorqueMax, "N·m", 3) + " / " + Eng(r.TorqueDesign, "N·m", 3)}})
 	}
 	align, widths := perCoilColumns(len(idx), 2.2, 1.5)
 	caption := "Headline results at the steady operating point"
@@ -430,6 +419,28 @@ func (c *composer) summaryTable() doc.Table {
 		caption += " (driven coils; the pick-up coils in the next table)"
 	}
 	return doc.Table{Caption: caption, Header: head, Rows: rows, Align: align, Widths: widths}
+}
+
+// totalsTable is page 1's results of a design of several coils as a
+// whole — the moment and the field at the origin of all coils together,
+// the torque in a stated background field — in a table of their own, so
+// that no value of the whole sits in one coil's column; ok is false for a
+// single coil, whose table holds them.
+func (c *composer) totalsTable() (doc.Table, bool) {
+	r := c.j.Results
+	d := c.j.Spec.Design
+	if len(c.drivenCoils()) < 2 {
+		return doc.Table{}, false // one coil's results are its own (summaryTable)
+	}
+	rows := [][]doc.Cell{
+		{{Text: "Moment |m| of all coils together"}, {Text: Eng(r.Moment.Norm(), "A·m²", 3), Strong: true}},
+		{{Text: "|B| at the origin, all coils energised"}, {Text: Eng(r.FieldCentre.Norm(), "T", 3), Strong: true}},
+	}
+	if d.Conditions.BackgroundField.Norm() > 0 {
+		rows = append(rows, []doc.Cell{{Text: "Torque in the background field (max / design angle)"}, {Text: Eng(r.TorqueMax, "N·m", 3) + " / " + Eng(r.TorqueDesign, "N·m", 3)}})
+	}
+	return doc.Table{Caption: "Results of the design as a whole", Header: []string{"Result", "Value"}, Rows: rows,
+		Align: []doc.Align{doc.Left, doc.Right}, Widths: []float64{3, 1.5}}, true
 }
 
 // opposingPair reports whether coil block co is a gradient pair.
