@@ -106,6 +106,10 @@ type Suppression struct {
 	ClampFromRating bool
 	Margin          float64
 	Within          bool
+	// CornerMax is each corner's largest resistor, (Clamp − V_s)/I_w, Ω,
+	// against the nominal design's Clamp (the driver's limit does not move
+	// with the supply's tolerance).
+	CornerMax []float64
 }
 
 // suppressionOver sizes coil block k's series resistor over the nominal
@@ -123,9 +127,12 @@ func suppressionOver(k int, s calc.SwitchResult, corners []Corner) *Suppression 
 		}
 		return corners[h].SwitchOff[k]
 	}
+	p.CornerMax = make([]float64, len(corners))
 	for h := range corners {
 		a := at(h)
-		if m := (s.Clamp - a.Supply) / a.Current; m < p.ResistorMax || math.IsNaN(m) {
+		m := (s.Clamp - a.Supply) / a.Current
+		p.CornerMax[h] = m
+		if m < p.ResistorMax || math.IsNaN(m) {
 			p.ResistorMax, p.MaxCorner = m, h
 		}
 	}
