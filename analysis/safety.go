@@ -570,16 +570,7 @@ func farthestReach(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, ex
 			return
 		}
 		for _, u := range []calc.Vec{v.Scale(1 / n), v.Scale(-1 / n)} {
-			dup := false
-			for _, w := range dirs {
-				if u.Sub(w).Norm() < 1e-9 {
-					dup = true
-					break
-				}
-			}
-			if !dup {
-				dirs = append(dirs, u)
-			}
+			dirs = appendDirection(dirs, u)
 		}
 	}
 	add(calc.Vec{0, 0, 1})
@@ -685,6 +676,17 @@ func nearestOutline(os []outline, p calc.Vec) (d float64, coil int, bore bool) {
 	return d, coil, bore
 }
 
+// appendDirection appends the unit direction u to dirs unless dirs holds
+// it already (to 10⁻⁹).
+func appendDirection(dirs []calc.Vec, u calc.Vec) []calc.Vec {
+	for _, v := range dirs {
+		if u.Sub(v).Norm() < 1e-9 {
+			return dirs
+		}
+	}
+	return append(dirs, u)
+}
+
 // reachDirections are the directions the implant level is searched along
 // from a winding's centre, in the coil's frame: every 10° in the planes
 // through the axis along E1 and along E2, and for a rectangle also in its
@@ -700,17 +702,7 @@ func reachDirections(co calc.Coil, fr calc.Frame) []calc.Vec {
 	for _, pl := range planes {
 		for k := range 36 {
 			a := float64(k) * math.Pi / 18
-			u := pl[0].Scale(math.Cos(a)).Add(pl[1].Scale(math.Sin(a)))
-			dup := false
-			for _, v := range dirs {
-				if u.Sub(v).Norm() < 1e-9 {
-					dup = true
-					break
-				}
-			}
-			if !dup {
-				dirs = append(dirs, u)
-			}
+			dirs = appendDirection(dirs, pl[0].Scale(math.Cos(a)).Add(pl[1].Scale(math.Sin(a))))
 		}
 	}
 	return dirs
