@@ -599,7 +599,7 @@ func (c *composer) limitsTable() doc.Table {
 	if wc != nil {
 		return doc.Table{Caption: "Requirements compliance over the tolerances (worst: the corner closest to failing, signs as in the Worst case section; margin at that corner)",
 			Header: []string{"Requirement", "Required", "Nominal", "Worst", "Corner", "Margin", "Status"},
-			Rows:   rows, Widths: []float64{2.6, 1.2, 1.1, 1.1, 0.9, 0.9, 0.8},
+			Rows:   rows, Widths: []float64{2.3, 1.3, 1.25, 1.25, 0.85, 0.85, 0.75},
 			Align: []doc.Align{doc.Left, doc.Right, doc.Right, doc.Right, doc.Center, doc.Right, doc.Center}}
 	}
 	return doc.Table{Caption: "Requirements compliance (margin: positive means met with room to spare)",
