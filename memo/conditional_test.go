@@ -168,3 +168,13 @@ func TestUnderfillOnPageOne(t *testing.T) {
 		t.Error("no design with an underfilled winding to check")
 	}
 }
+
+// Page 1's underfill sentence gives the stated section's copper fill
+// factor as the method's step (5.6) does.
+func TestUnderfillFillFactorsAgree(t *testing.T) {
+	j, text := memoOf(t, "../examples/search-coil.md", true)
+	want := "of the section they occupy, " + Sig(j.Results.Coils[0].Winding.FillFactor, 2) + " of the stated section"
+	if !strings.Contains(text, want) {
+		t.Errorf("page 1 does not say %q", want)
+	}
+}

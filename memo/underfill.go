@@ -20,12 +20,13 @@ func laidWords(cs *analysis.CoilStudy) string {
 
 // underfillText is page 1's sentence on a coil whose turns fill less of
 // its stated radial build than it says, with the copper fill factor of
-// the section the turns occupy and of the stated section (stated), or "".
-func underfillText(co calc.Coil, cs *analysis.CoilStudy, stated float64) string {
+// the section the turns occupy and of the stated section (statedFill), or
+// "".
+func underfillText(co calc.Coil, cs *analysis.CoilStudy, statedFill float64) string {
 	if !cs.Underfilled {
 		return ""
 	}
 	laid, stated := cs.Laid.R1-cs.Laid.R0, cs.Envelope.R1-cs.Envelope.R0
 	return fmt.Sprintf("The turns of coil %q fill only the inner %s (%s %%) of its %s radial build: copper fill factor %s of the section they occupy, %s of the stated section.",
-		co.Name, Eng(laid, "m", 3), Sig(100*laid/stated, 2), Eng(stated, "m", 3), Sig(cs.LaidFill, 2), Sig(stated, 2))
+		co.Name, Eng(laid, "m", 3), Sig(100*laid/stated, 2), Eng(stated, "m", 3), Sig(cs.LaidFill, 2), Sig(statedFill, 2))
 }
