@@ -158,7 +158,11 @@ func implantWhere(j *analysis.Study) (where []string, beyond string) {
 		if anyCored {
 			what = "every winding and core"
 		}
-		beyond = fmt.Sprintf(" Farther than %s from the outer surface of %s the flux density stays below 0.5 mT (the field of all coils counted; searched every 10° outward from the centre of each winding and along the axis from points round the ends of the conductors).", Eng(math.Max(ir.Distance, 1e-3), "m", 2), what)
+		far := Eng(ir.Distance, "m", 2)
+		if ir.Distance < 1e-3 {
+			far = "1 mm" // as surfaceDistance words it: "only within 1 mm of"
+		}
+		beyond = fmt.Sprintf(" Farther than %s from the outer surface of %s the flux density stays below 0.5 mT (the field of all coils counted; searched every 10° outward from the centre of each winding and along the axis from points round the ends of the conductors).", far, what)
 	}
 	for _, k := range ir.Probes {
 		p := r.Probes[k]
