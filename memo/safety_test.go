@@ -2,7 +2,6 @@ package memo
 
 import (
 	"bytes"
-	"math"
 	"os"
 	"regexp"
 	"strings"
