@@ -631,7 +631,7 @@ func testedOn(st *analysis.Study, l analysis.LimitResult, q spec.LimitQuantity) 
 		co := st.Spec.Design.Coils[l.Coil]
 		what := map[string]string{
 			"moment": "magnetic moment", "field-center": "|B| at its own centre", "field": "|B| at its own centre",
-			"gradient": "axial gradient at its centre", "uniform-radius": fmt.Sprintf("radius within ±%s %% of its centre field", Sig(100*l.Limit.Tolerance, 2)),
+			"gradient": "magnitude of the axial gradient |∂Bz/∂z| at its centre", "uniform-radius": fmt.Sprintf("radius within ±%s %% of its centre field", Sig(100*l.Limit.Tolerance, 2)),
 			"power": "power, averaged over the duty cycle", "power-on": "power while energised", "temperature": "hottest winding temperature",
 			"surface-temperature": "hottest surface temperature", "current": "current", "voltage": "voltage", "resistance": "hot resistance",
 			"mass": "conductor mass", "wire-length": "wire length", "current-density": "current density", "inductance": "self-inductance",
