@@ -317,7 +317,7 @@ func ringingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []St
 	if math.Abs(s.WorstCurrent) > math.Abs(cr.Current) {
 		Ic, at = `I_c`, "½ L I² at the cold switch-on current"
 	}
-	steps := capacitanceSteps(co, cs.Kinds.Capacitance) // memo/receiver.go
+	steps := capacitanceSteps(co, cs.Kinds.Capacitance, cs.Envelope.Round) // memo/receiver.go
 	steps = append(steps, Step{What: fmt.Sprintf("Peak across the winding however fast the switch opens: with the circuit open the current can only charge the winding's own capacitance, so the stored %s passes into ½ Cₛ V² (energy conservation; the winding's resistance damps the ringing, keeping the first peak a little below this)", at),
 		Symbolic: `V_{pk} = ` + Ic + ` \sqrt{\frac{L}{C_s}}`,
 		Numbers:  fmt.Sprintf(`%s \cdot \sqrt{\frac{%s}{%s}}`, Q(p.Current, "A", 4), Q(cr.Inductance, "H", 4), Q(p.Capacitance, "F", 3)),

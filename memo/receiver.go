@@ -229,7 +229,7 @@ func (c *composer) pickUpSteps(i int) []Step {
 	if k.Core != nil {
 		add(Step{What: "Small-signal inductance with the core (derived in the Core section)", Symbolic: `L = ` + Q(cr.Inductance, "H", 4)})
 	}
-	add(capacitanceSteps(co, k.Capacitance)...)
+	add(capacitanceSteps(co, k.Capacitance, cs.Envelope.Round)...)
 	add(Step{What: "Capacitance across the terminals: the winding's own plus the load", Symbolic: `C = C_s + C_{load}`,
 		Numbers: fmt.Sprintf(`%s + %s`, Q(r.SelfCapacitance, "F", 3), Q(co.LoadCapacitance, "F", 3)), Result: Q(r.Capacitance, "F", 3)})
 	if !math.IsNaN(r.SelfResonance) {
@@ -241,9 +241,18 @@ func (c *composer) pickUpSteps(i int) []Step {
 	return steps
 }
 
+// layersWords names the layers the capacitance model counts: a thin
+// coil's round bundle (round) is taken as that many layers of its turns.
+func layersWords(round bool, n int) string {
+	if round {
+		return fmt.Sprintf("the bundle taken as %d layers of its turns", n)
+	}
+	return fmt.Sprintf("%d layers", n)
+}
+
 // capacitanceSteps derive a winding's self-capacitance by the formula the
 // analysis chose (calc.SelfCapacitanceParts).
-func capacitanceSteps(co calc.Coil, p calc.CapacitanceParts) []Step {
+func capacitanceSteps(co calc.Coil, p calc.CapacitanceParts, round bool) []Step {
 	switch {
 	case math.IsNaN(p.Capacitance):
 		return []Step{{What: "Self-capacitance of the winding: not modelled for this form", Symbolic: `C_s = ` + Words("not computed")}}
@@ -254,7 +263,7 @@ func capacitanceSteps(co calc.Coil, p calc.CapacitanceParts) []Step {
 				Symbolic: `C_l = \sum C_{tt} = c_{tt}\, \ell_f`,
 				Numbers:  fmt.Sprintf(`%s \cdot %s`, Q(p.PerLength, "F/m", 4), Q(p.Facing, "m", 4)),
 				Result:   Q(p.LayerCapacitance, "F", 3)},
-			{What: fmt.Sprintf("Self-capacitance of %d layers wound back and forth, by the energy stored in the gaps (Dalessandro, Cavalcante & Kolar, IEEE Trans. Power Electron. 22 (2007) 2081)", p.Layers),
+			{What: fmt.Sprintf("Self-capacitance of %s wound back and forth, by the energy stored in the gaps (Dalessandro, Cavalcante & Kolar, IEEE Trans. Power Electron. 22 (2007) 2081)", layersWords(round, p.Layers)),
 				Symbolic: `C_s = \frac{4}{3} C_l \frac{p - 1}{p^2}`,
 				Numbers:  fmt.Sprintf(`\frac{4}{3} \cdot %s \cdot \frac{%d - 1}{%d^2}`, Q(p.LayerCapacitance, "F", 3), p.Layers, p.Layers),
 				Result:   Q(p.Capacitance, "F", 3)},
