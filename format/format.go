@@ -545,3 +545,24 @@ func Digits(n int) string {
 	}
 	return s
 }
+
+// Tolerance is a relative tolerance as it was set, to one significant
+// figure: "1 %", "0.2 %", "0.001 %"; one below 10⁻⁵ reads "1 part in
+// 10¹²" (a power of ten) or "3×10⁻⁸ relative", never a percentage with
+// an exponent, nor "< 0.001 %" as a difference below the printed
+// resolution is.
+func Tolerance(v float64) string {
+	switch {
+	case math.IsNaN(v):
+		return "n/a"
+	case !(v > 0):
+		return Percent(v)
+	case v >= 1e-5:
+		return Sig(100*v, 1) + " %"
+	}
+	n := -math.Log10(v)
+	if r := math.Round(n); math.Abs(n-r) < 1e-9 {
+		return "1 part in 10" + superscript(strconv.Itoa(int(r)))
+	}
+	return Sci(v, 1) + " relative"
+}

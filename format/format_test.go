@@ -163,3 +163,16 @@ func TestInsulationClass(t *testing.T) {
 		}
 	}
 }
+
+func TestTolerance(t *testing.T) {
+	for _, c := range []struct {
+		v    float64
+		want string
+	}{
+		{0.01, "1 %"}, {0.002, "0.2 %"}, {1e-5, "0.001 %"}, {1e-8, "1 part in 10⁸"}, {1e-12, "1 part in 10¹²"}, {3e-8, "3×10⁻⁸ relative"}, {0, "0 %"},
+	} {
+		if got := Tolerance(c.v); got != c.want {
+			t.Errorf("Tolerance(%g) = %q, want %q", c.v, got, c.want)
+		}
+	}
+}

@@ -6,6 +6,7 @@ import (
 
 	"coilmemo/analysis"
 	"coilmemo/doc"
+	"coilmemo/format"
 	"coilmemo/templates"
 )
 
@@ -73,7 +74,7 @@ func checkGroups(ks []analysis.Check) []checkGroup {
 		row := []doc.Cell{
 			{Text: k.Name}, {Text: k.Method + " → " + Eng(k.Value, k.Unit, 6)},
 			{Text: k.Reference + " → " + Eng(k.Expected, k.Unit, 6)},
-			{Text: Percent(k.RelDiff)}, {Text: Percent(k.Tolerance)},
+			{Text: Percent(k.RelDiff)}, {Text: format.Tolerance(k.Tolerance)},
 			{Text: st.String(), Status: st, Strong: true},
 		}
 		key := "\x00design"
