@@ -342,31 +342,31 @@ func conductorBounds(d calc.Design, r calc.Results, coils []CoilStudy) []float64
 	return ks
 }
 
-// fieldBound bounds the field of every coil block from above at any
-// point, from each block's conductor bound K_i (conductorBounds):
+// fieldBound holds, for every coil block, its conductor bound K_i
+// (conductorBounds) and the sphere about its centre, radius R_i, that
+// holds it. Two bounds on a block's field follow, both from the
+// Biot–Savart law B = μ0 I/(4π) ∮ dl × g(r'), g(r') = (p − r')/|p − r'|³:
 //
-//	|B_i(p)| ≤ min(K_i/d_i², 2 K_i R_i/(D_i − R_i)³),
+//	|B_i(p)| ≤ K_i/d_i²                          (|dl × r̂| ≤ |dl|; d_i the
+//	                                              distance from p to the
+//	                                              block's conductors)
+//	|B_i(p) − B_dip,i(p)| ≤ 3 K_i R_i²/(D_i − R_i)⁴ (D_i = |p − c_i| > R_i)
 //
-// d_i the distance from p to the block's outlines, D_i its distance from
-// the block's centre and R_i the radius of a sphere about that centre
-// holding the block (the second form for D_i > R_i). The first is the
-// Biot–Savart law with |dl × r̂| ≤ |dl|; the second uses that each turn is
-// closed, so ∮ dl × g(c) = 0 for g(r') = (p − r')/|p − r'|³ and
-// B = μ0 I/(4π) ∮ dl × (g(r') − g(c)), with |g(r') − g(c)| ≤ 2R/(D − R)³
-// (the operator norm of g's gradient, 2/|x|³, along the segment from c to
-// r', which stays in the sphere). Far from a block it falls as the dipole
-// field does.
+// The second expands g about the centre c_i: the constant term vanishes
+// on a closed turn, the linear one is the field of the block's moment at
+// c_i, and the rest is at most ½·|∇²g|·R² with |∇²g| ≤ 6/|x|⁴ (the third
+// derivative of 1/|x| along any direction is at most 3!/|x|⁴) on the
+// segment from c_i to r', which stays in the sphere.
 type fieldBound struct {
 	ks, rs  []float64
 	centres []calc.Vec
-	os      []outline
 }
 
 func newFieldBound(d calc.Design, ks []float64, os []outline) *fieldBound {
 	if ks == nil {
 		return nil
 	}
-	fb := &fieldBound{ks: ks, rs: make([]float64, len(ks)), os: os}
+	fb := &fieldBound{ks: ks, rs: make([]float64, len(ks))}
 	for _, co := range d.Coils {
 		fb.centres = append(fb.centres, co.Centre)
 	}
@@ -383,29 +383,11 @@ func newFieldBound(d calc.Design, ks []float64, os []outline) *fieldBound {
 	return fb
 }
 
-// at is the bound, T, on |B| of all blocks at p.
-func (fb *fieldBound) at(p calc.Vec) float64 {
-	dmin := make([]float64, len(fb.ks))
-	for i := range dmin {
-		dmin[i] = math.Inf(1)
-	}
-	for _, o := range fb.os {
-		if v, _ := o.distance(p); v < dmin[o.coil] {
-			dmin[o.coil] = v
-		}
-	}
-	b := 0.0
-	for i, k := range fb.ks {
-		if k == 0 {
-			continue
-		}
-		bi := k / (dmin[i] * dmin[i])
-		if D, r := p.Sub(fb.centres[i]).Norm(), fb.rs[i]; D > r {
-			bi = math.Min(bi, 2*k*r/math.Pow(D-r, 3))
-		}
-		b += bi
-	}
-	return b
+// dipoleRemainder is the second bound of fb for block i at distance D
+// from its centre, T (D > R_i).
+func (fb *fieldBound) dipoleRemainder(i int, D float64) float64 {
+	R := fb.rs[i]
+	return 3 * fb.ks[i] * R * R / math.Pow(D-R, 4)
 }
 
 // levelField is the field of all coils of d, as fm gives it, for a
@@ -416,7 +398,7 @@ func (fb *fieldBound) at(p calc.Vec) float64 {
 //
 //	|B_i − B_dip,i| ≤ 3 K_i R_i²/(D_i − R_i)⁴
 //
-// (the next term of g's expansion, |∇²g| ≤ 6/|x|⁴, as in fieldBound).
+// (fieldBound.dipoleRemainder).
 // Where the sum of the dipole and near fields clears level by more than
 // the bounds' sum either way, it is returned; elsewhere every block is
 // evaluated in full. So the search decides the same at every point as
@@ -426,36 +408,35 @@ func levelField(fm func(calc.Vec) calc.Vec, model *calc.FieldModel, fb *fieldBou
 	if fb == nil || model == nil || len(model.Coils) != len(fb.ks) || len(moments) != len(fb.ks) {
 		return fm
 	}
+	far := func(i int, p calc.Vec) (calc.Vec, float64, bool) {
+		r := p.Sub(fb.centres[i])
+		D := r.Norm()
+		return r, D, D > 3*fb.rs[i]
+	}
 	return func(p calc.Vec) calc.Vec {
-		var b calc.Vec
+		var near, dip calc.Vec
 		errSum := 0.0
-		far := make([]bool, len(fb.ks))
-		anyFar := false
 		for i, k := range fb.ks {
 			if k == 0 {
 				continue
 			}
-			r := p.Sub(fb.centres[i])
-			if D, R := r.Norm(), fb.rs[i]; D > 3*R {
-				far[i], anyFar = true, true
-				b = b.Add(calc.DipoleField(moments[i], r))
-				errSum += 3 * k * R * R / math.Pow(D-R, 4)
+			if r, D, ok := far(i, p); ok {
+				dip = dip.Add(calc.DipoleField(moments[i], r))
+				errSum += fb.dipoleRemainder(i, D)
 				continue
 			}
-			b = b.Add(model.CoilAt(i, p))
+			near = near.Add(model.CoilAt(i, p))
 		}
-		if !anyFar {
+		b := near.Add(dip)
+		if n := b.Norm(); errSum == 0 || n-errSum >= level || n+errSum < level {
 			return b
 		}
-		if n := b.Norm(); n-errSum >= level || n+errSum < level {
-			return b
-		}
-		for i, f := range far {
-			if f {
-				b = b.Sub(calc.DipoleField(moments[i], p.Sub(fb.centres[i]))).Add(model.CoilAt(i, p))
+		for i, k := range fb.ks {
+			if _, _, ok := far(i, p); k != 0 && ok {
+				near = near.Add(model.CoilAt(i, p))
 			}
 		}
-		return b
+		return near
 	}
 }
 
@@ -775,6 +756,18 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 		at, dir calc.Vec
 	}
 	var rays []ray
+	// convexAlone marks a block of one convex outline: a solid winding
+	// with its bore filled in, not a thin bundle's ring, a rectangle's
+	// frame, a pair's two coils or a winding beside its rod. The distance
+	// from such a block grows along every line leaving it, so a line that
+	// starts at it and ends at the level nearer to it than to any other
+	// block has its farthest point from the windings at its end; the line
+	// is taken to stay nearer to the block between (it would have to pass
+	// nearer to another solid and come back), so its samples are not
+	// needed, and the search along it need not go beyond the block's own
+	// region (TestOneConvexOutlineNeedsNoSamples,
+	// TestLatticeReachWithoutOwnLineSamples).
+	convexAlone := make([]bool, len(d.Coils))
 	for i, co := range d.Coils {
 		fr := calc.CoilFrame(co.Axis)
 		var own []outline
@@ -783,6 +776,7 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 				own = append(own, o)
 			}
 		}
+		convexAlone[i] = len(own) == 1 && !own[0].round && !own[0].rect
 		outside := func(p calc.Vec) bool {
 			for _, o := range own {
 				if v, _ := o.distance(p); v == 0 {
@@ -850,24 +844,6 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 		point   calc.Vec
 		ok      bool
 	}
-	// A block of one convex outline (see above) whose line ends nearest to
-	// it is taken to gain nothing from the line's samples either: a line
-	// that starts and ends nearer to that block than to any other is taken
-	// to stay so between (it would have to pass nearer to another solid
-	// and come back), and along it the distance from a convex block grows.
-	// TestLatticeReachWithoutOwnLineSamples compares both ways on a
-	// lattice of coils.
-	convexAlone := make([]bool, len(d.Coils))
-	for i := range d.Coils {
-		n, convex := 0, true
-		for _, o := range os {
-			if o.coil == i {
-				n++
-				convex = convex && !o.round && !o.rect
-			}
-		}
-		convexAlone[i] = n == 1 && convex
-	}
 	res := make([]found, len(rays))
 	far := math.Max(ext, 1e-3) * 1e3
 	eachIndex(len(rays), func(k int) {
@@ -907,16 +883,8 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 	}
 	// The farthest point at the level along a line need not be the one
 	// farthest from every winding: between the coils of a pair the field
-	// at the centre may reach the level far from both. With one convex
-	// outline alone (a solid winding with its bore filled in, not a
-	// thin bundle's ring nor a rectangle's frame) it is: every line
-	// starts where it leaves the outline, and the distance from a convex
-	// solid does not fall along a line leaving it
-	// (TestOneConvexOutlineNeedsNoSamples).
-	if len(os) == 1 && !os[0].round && !os[0].rect && !sampleEveryLine {
-		return wr
-	}
-	// Each line is
+	// at the centre may reach the level far from both. Each line
+	// (but those of a convexAlone block that end nearest to it) is
 	// sampled from its start to its farthest point at the level, every
 	// 1/400 of the design's extent, and the samples are tried farthest
 	// from the windings first: for each block the first at the level (or
