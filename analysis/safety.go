@@ -2,6 +2,7 @@ package analysis
 
 import (
 	"math"
+	"slices"
 	"sort"
 
 	"coilmemo/calc"
@@ -81,7 +82,7 @@ type Safety struct {
 // directions of Farthest, at probes, and outward from every winding
 // (Windings, one per coil block).
 type ImplantReach struct {
-	Searched      bool    // false for a design without extent
+	Searched      bool    // false for a design without extent, or whose coils carry no current (pick-up coils)
 	Origin        float64 // T, |B| at the origin
 	Axial, Radial float64 // m, from the origin
 	// Axis is the direction Axial is measured along and Radial across:
@@ -455,8 +456,8 @@ func reachExtent(d calc.Design) float64 {
 func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach {
 	ext := reachExtent(d)
 	ir := ImplantReach{Origin: r.FieldCentre.Norm(), Nearest: -1, AxialCoil: -1}
-	if !(ext > 0) {
-		return ir
+	if !(ext > 0) || !slices.ContainsFunc(r.Coils, func(cr calc.CoilResult) bool { return cr.Current != 0 && !math.IsNaN(cr.Current) }) {
+		return ir // nothing to search, or no current to make a field
 	}
 	ir.Searched = true
 	fm := implantField(d, coils)

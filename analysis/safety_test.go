@@ -436,3 +436,19 @@ func TestLatticeReachWithoutOwnLineSamples(t *testing.T) {
 		}
 	}
 }
+
+// A design of pick-up coils alone carries no current: no field is searched
+// for the implant level, and so no caution or note on it is raised.
+func TestNoImplantSearchWithoutCurrent(t *testing.T) {
+	src, err := os.ReadFile("../examples/search-coil.md")
+	if err != nil {
+		t.Fatal(err)
+	}
+	st, diags := Run("search-coil.md", src, Options{})
+	if len(diags) > 0 {
+		t.Fatal(diags)
+	}
+	if st.Safety.Implant.Searched {
+		t.Errorf("the implant level is searched for a pick-up coil: %+v", st.Safety.Implant)
+	}
+}

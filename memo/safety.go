@@ -2,7 +2,6 @@ package memo
 
 import (
 	"fmt"
-	"math"
 	"slices"
 	"sort"
 	"strings"
@@ -52,7 +51,7 @@ func Cautions(j *analysis.Study) []doc.Callout {
 			out = append(out, kindCautions(j, f)...) // memo/core.go
 		}
 	}
-	if ir := j.Safety.Implant; ir.Searched && anyCurrent(r) {
+	if ir := j.Safety.Implant; ir.Searched {
 		if where, beyond := implantWhere(j); len(where) > 0 {
 			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Field above 0.5 mT: implanted medical devices",
 				Spans: []doc.Span{{Text: templates.Text("caution-implant", map[string]string{"Where": strings.Join(where, ", "), "Beyond": beyond})}}})
@@ -71,17 +70,6 @@ func Cautions(j *analysis.Study) []doc.Callout {
 		out = append(out, doc.Callout{Severity: doc.Note, Title: t, Spans: []doc.Span{{Text: p}}})
 	}
 	return out
-}
-
-// anyCurrent reports whether some coil carries current (a pick-up coil
-// carries none and makes no field to caution about).
-func anyCurrent(r calc.Results) bool {
-	for _, cr := range r.Coils {
-		if cr.Current != 0 && !math.IsNaN(cr.Current) {
-			return true
-		}
-	}
-	return false
 }
 
 // implantWhere words where the field reaches 0.5 mT (analysis.ImplantReach):
