@@ -332,8 +332,11 @@ func mathSpans(text string) []doc.Span {
 	return out
 }
 
-// capitalise upper-cases the first letter of a sentence.
+// capitalise upper-cases the first letter of a sentence or heading.
 func capitalise(s string) string {
+	if s == "" {
+		return s
+	}
 	r, n := utf8.DecodeRuneInString(s)
 	return string(unicode.ToUpper(r)) + s[n:]
 }

@@ -40,7 +40,7 @@ func (c *composer) electrical() {
 		if c.pickUp(i) {
 			continue // no current: no switching or drive figures (the note above)
 		}
-		c.coilPart(co.Name, capital, func() { c.coilSwitching(i) })
+		c.coilPart(co.Name, capitalise, func() { c.coilSwitching(i) })
 	}
 	c.couplings()
 	c.gradientForce()

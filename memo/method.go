@@ -42,7 +42,7 @@ func (c *composer) method() {
 			what += ", pick-up"
 		}
 		title := func(names string) string {
-			return fmt.Sprintf("%s (%s, %d turns, %s)", capital(names), what, co.Turns, wireName(co.Wire))
+			return fmt.Sprintf("%s (%s, %d turns, %s)", capitalise(names), what, co.Turns, wireName(co.Wire))
 		}
 		c.coilPart(co.Name, title, func() {
 			if c.pickUp(i) {

@@ -225,12 +225,12 @@ func (c *composer) choiceTable(sz *analysis.Sizing) doc.Table {
 	ls := c.j.Spec.Design.Limits
 	head := []string{"Choice", "Wire", "Turns"}
 	for _, r := range sz.Size.Ranges {
-		head = append(head, capital(keyWords(r.Key)))
+		head = append(head, capitalise(keyWords(r.Key)))
 	}
 	oName, _ := objectiveAxis(sz.Objective)
 	head = append(head, oName)
 	for _, l := range ls {
-		head = append(head, capital(keyWords(l.Quantity))+" margin")
+		head = append(head, capitalise(keyWords(l.Quantity))+" margin")
 	}
 	var rows [][]doc.Cell
 	all := append([]analysis.Candidate{sz.Chosen}, sz.RunnersUp...)

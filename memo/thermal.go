@@ -62,7 +62,7 @@ func (c *composer) heating() {
 			continue
 		}
 		cs := &c.j.Coils[i]
-		c.coilPart(co.Name, capital, func() {
+		c.coilPart(co.Name, capitalise, func() {
 			c.derive(heatSteps(co, cr, cs, c.j.Cooling)...)
 			if p := warmUpText(co, cr); p != "" {
 				c.para(p)

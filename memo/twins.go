@@ -221,11 +221,3 @@ func (p printCanvas) DrawImage(r vg.Rectangle, img image.Image) {
 		}
 	}
 }
-
-// capital starts a heading's text with a capital letter.
-func capital(s string) string {
-	if s == "" {
-		return s
-	}
-	return strings.ToUpper(s[:1]) + s[1:]
-}

@@ -184,7 +184,7 @@ func (c *composer) worstSuppression() {
 	}
 	text := "The series resistor of the suggested resistor–diode suppression (Inductance and switching) is sized over the corners: the switch sees the supply (under current drive, the voltage the current source must deliver across the coil) plus the current it opens times the resistor, and a cold corner's winding draws the most current, so the resistor fitted is the E12 value at or below the smallest (Vₘₐₓ − Vₛ)/I over the nominal design and every corner, and the switch voltage with it is judged at every corner (the diode drop of about 0.7 V is neglected)."
 	if len(why) > 0 {
-		text += " " + capital(strings.Join(why, "; ")) + "."
+		text += " " + capitalise(strings.Join(why, "; ")) + "."
 	}
 	c.para(text)
 	c.add(doc.Table{Caption: "Switch voltage with the suggested suppression at every corner (PASS when within the limit at nominal and at every corner)",
