@@ -93,9 +93,9 @@ func implantWhere(j *analysis.Study) (where []string, beyond string) {
 		case ir.AxialBore:
 			s += " (inside the bore of " + name(k) + ")"
 		case ir.AxialClear > 0 && ir.AxialEnd:
-			beyond := Eng(ir.AxialClear, "m", 2) + " beyond"
-			if ir.AxialClear < 1e-3 {
-				beyond = "within 1 mm of"
+			beyond := "within 1 mm of"
+			if l, under := reachLength(ir.AxialClear); !under {
+				beyond = l + " beyond"
 			}
 			s += " (there " + beyond + " the end of the " + windingWord(cored(k)) + " of " + name(k) + ", along its axis)"
 		case ir.AxialClear > 0:
@@ -146,10 +146,7 @@ func implantWhere(j *analysis.Study) (where []string, beyond string) {
 		if anyCored {
 			what = "every winding and core"
 		}
-		far := Eng(ir.Distance, "m", 2)
-		if ir.Distance < 1e-3 {
-			far = "1 mm" // as surfaceDistance words it: "only within 1 mm of"
-		}
+		far, _ := reachLength(ir.Distance)
 		beyond = fmt.Sprintf(" Farther than %s from the outer surface of %s the flux density stays below 0.5 mT (the field of all coils counted; searched every 10° outward from the centre of each winding and along the axis from points round the ends of the conductors).", far, what)
 	}
 	for _, k := range ir.Probes {
@@ -163,10 +160,21 @@ func implantWhere(j *analysis.Study) (where []string, beyond string) {
 // as 24 mm from", or "only within 1 mm of" below a millimetre, where a
 // figure in µm reads as false precision.
 func surfaceDistance(v float64) string {
-	if v < 1e-3 {
+	l, under := reachLength(v)
+	if under {
 		return "only within 1 mm of"
 	}
-	return "as far as " + Eng(v, "m", 2) + " from"
+	return "as far as " + l + " from"
+}
+
+// reachLength is a reach from a winding's surface to two figures, or
+// "1 mm" (under set) below a millimetre, where a figure in µm reads as
+// false precision; every sentence of the caution words it so.
+func reachLength(v float64) (s string, under bool) {
+	if v < 1e-3 {
+		return "1 mm", true
+	}
+	return Eng(v, "m", 2), false
 }
 
 // windingWord names what a coil's outer surface bounds.
