@@ -128,9 +128,9 @@ func implantWhere(j *analysis.Study) (where []string, beyond string) {
 	case len(nears) > 1:
 		var far, at []string
 		for _, n := range nears {
-			v := "less than 1 mm"
-			if w := ir.Windings[n.coil].Distance; w >= 1e-3 {
-				v = Eng(w, "m", 2)
+			v, under := reachLength(ir.Windings[n.coil].Distance)
+			if under {
+				v = "less than 1 mm"
 			}
 			far = append(far, fmt.Sprintf("%s (%q)", v, d.Coils[n.coil].Name))
 			at = append(at, n.surface)
