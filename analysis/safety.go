@@ -392,52 +392,73 @@ func (fb *fieldBound) dipoleRemainder(i int, D float64) float64 {
 }
 
 // levelField is the field of all coils of d, as fm gives it, for a
-// search that only asks whether |B| reaches level: a block far from p
-// (farther than three times the radius R of its sphere) is taken as the
-// point dipole of its moment m at its centre, whose error the closed
-// turns bound,
+// search that only asks whether |B| reaches level. A circular block whose
+// exterior series (calc.Multipole) meets 10⁻¹² of the level at p is
+// taken from it, with its stated bound; a rectangle farther from p than
+// three times the radius R of its sphere is taken as the point dipole of
+// its moment m at its centre, whose error the closed turns bound,
 //
 //	|B_i − B_dip,i| ≤ 3 K_i R_i²/(D_i − R_i)⁴
 //
-// (fieldBound.dipoleRemainder).
-// Where the sum of the dipole and near fields clears level by more than
-// the bounds' sum either way, it is returned; elsewhere every block is
-// evaluated in full. So the search decides the same at every point as
-// with fm, while a design of many coils evaluates in full only the few
-// blocks near the point. fm itself when no bound applies (fb nil).
+// (fieldBound.dipoleRemainder); the other blocks are evaluated in full.
+// Where the sum clears level by more than the bounds' sum either way, it
+// is returned; elsewhere every block is evaluated in full. So the search
+// decides the same at every point as with fm, while a design of many
+// coils evaluates in full only the few blocks near the point. fm itself
+// when no bound applies (fb nil).
 func levelField(fm func(calc.Vec) calc.Vec, model *calc.FieldModel, fb *fieldBound, moments []calc.Vec, level float64) func(calc.Vec) calc.Vec {
 	if fb == nil || model == nil || len(model.Coils) != len(fb.ks) || len(moments) != len(fb.ks) {
 		return fm
 	}
-	far := func(i int, p calc.Vec) (calc.Vec, float64, bool) {
-		r := p.Sub(fb.centres[i])
-		D := r.Norm()
-		return r, D, D > 3*fb.rs[i]
+	mps := make([][]calc.Multipole, len(fb.ks))
+	for i, k := range fb.ks {
+		if k != 0 {
+			mps[i] = model.Multipoles(i)
+		}
+	}
+	tol := 1e-12 * level
+	series := func(i int, p calc.Vec) (calc.Vec, float64, bool) {
+		var b calc.Vec
+		e := 0.0
+		for k := range mps[i] {
+			v, ek, ok := mps[i][k].At(p, tol)
+			if !ok {
+				return calc.Vec{}, 0, false
+			}
+			b, e = b.Add(v), e+ek
+		}
+		return b, e, true
 	}
 	return func(p calc.Vec) calc.Vec {
-		var near, dip calc.Vec
+		var near, taken calc.Vec
 		errSum := 0.0
 		for i, k := range fb.ks {
 			if k == 0 {
 				continue
 			}
-			if r, D, ok := far(i, p); ok {
-				dip = dip.Add(calc.DipoleField(moments[i], r))
-				errSum += fb.dipoleRemainder(i, D)
+			if len(mps[i]) > 0 {
+				if b, e, ok := series(i, p); ok {
+					taken, errSum = taken.Add(b), errSum+e
+					continue
+				}
+			} else if r := p.Sub(fb.centres[i]); r.Norm() > 3*fb.rs[i] {
+				taken = taken.Add(calc.DipoleField(moments[i], r))
+				errSum += fb.dipoleRemainder(i, r.Norm())
 				continue
 			}
 			near = near.Add(model.CoilAt(i, p))
 		}
-		b := near.Add(dip)
+		b := near.Add(taken)
 		if n := b.Norm(); errSum == 0 || n-errSum >= level || n+errSum < level {
 			return b
 		}
+		var full calc.Vec
 		for i, k := range fb.ks {
-			if _, _, ok := far(i, p); k != 0 && ok {
-				near = near.Add(model.CoilAt(i, p))
+			if k != 0 {
+				full = full.Add(model.CoilAt(i, p))
 			}
 		}
-		return near
+		return full
 	}
 }
 

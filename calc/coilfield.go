@@ -131,6 +131,15 @@ func (f *FieldModel) CoilAt(i int, p Vec) Vec {
 	return CoilField(f.Coils[i], f.Windings[i], f.Currents[i], p)
 }
 
+// Multipoles returns the exterior series of coil i (CoilSource.Multipoles)
+// at its operating current; nil for a model built by hand.
+func (f *FieldModel) Multipoles(i int) []Multipole {
+	if len(f.sources) != len(f.Coils) {
+		return nil
+	}
+	return f.sources[i].Multipoles()
+}
+
 // FieldAt returns the field, T, of all coils of d at the global point p,
 // each at its steady operating current (see NewFieldModel), summed turn by
 // turn (CoilField) as Evaluate does for the probes. For many points build

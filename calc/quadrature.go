@@ -163,6 +163,7 @@ type lattice struct {
 	nz     int
 	mult   float64
 	root   *panel
+	unit   unitSeries // its multipole series at 1 A (Multipole), made on first use
 }
 
 // panel is a sub-block of a lattice: indices [i0, i0+nr) × [j0, j0+nz).
