@@ -612,6 +612,7 @@ type outline struct {
 	r0, r1 float64 // bore and outer radius
 	z0, z1 float64 // axial extent about centre
 	r      float64 // bundle radius (round rim, rectangle)
+	reach  float64 // radius of a sphere about centre that holds the outline
 }
 
 // distance is the distance, m, from p to the outline (0 inside it), and
@@ -624,12 +625,15 @@ func (o outline) distance(p calc.Vec) (d float64, bore bool) {
 		d = math.Max(q.Norm()-o.r, 0)
 		return d, d == 0 && math.Abs(l[0]) < o.w-o.r && math.Abs(l[1]) < o.h-o.r
 	}
-	rho := math.Hypot(l[0], l[1])
+	// lengths of a winding's size: no overflow for Hypot to guard against
+	rho := math.Sqrt(l[0]*l[0] + l[1]*l[1])
 	if o.round {
 		rc, zc := (o.r0+o.r1)/2, (o.z0+o.z1)/2
-		d = math.Max(math.Hypot(math.Max(rho-rc, 0), l[2]-zc)-o.r, 0)
+		a, b := math.Max(rho-rc, 0), l[2]-zc
+		d = math.Max(math.Sqrt(a*a+b*b)-o.r, 0)
 	} else {
-		d = math.Hypot(math.Max(rho-o.r1, 0), math.Max(math.Max(l[2]-o.z1, o.z0-l[2]), 0))
+		a, b := math.Max(rho-o.r1, 0), math.Max(math.Max(l[2]-o.z1, o.z0-l[2]), 0)
+		d = math.Sqrt(a*a + b*b)
 	}
 	return d, d == 0 && rho < o.r0
 }
@@ -664,16 +668,45 @@ func coilOutlines(i int, co calc.Coil, cs CoilStudy) []outline {
 				z0: -co.Core.Length / 2, z1: co.Core.Length / 2})
 		}
 	}
+	for k := range out {
+		o := &out[k]
+		if o.rect {
+			o.reach = calc.Vec{o.w + o.r, o.h + o.r, o.r}.Norm()
+		} else {
+			o.reach = math.Hypot(o.r1+o.r, math.Max(math.Abs(o.z0), math.Abs(o.z1))+o.r)
+		}
+	}
 	return out
 }
 
 // nearestOutline is the distance from p to the nearest outline, the coil
 // block it belongs to and whether p lies in that winding's bore.
 func nearestOutline(os []outline, p calc.Vec) (d float64, coil int, bore bool) {
+	return nearestOutlineFrom(os, p, 0)
+}
+
+// nearestOutlineFrom is nearestOutline trying os[first] before the
+// others, which are skipped where the sphere that holds them lies
+// farther than the nearest found so far (o.reach; the result is the
+// same).
+func nearestOutlineFrom(os []outline, p calc.Vec, first int) (d float64, coil int, bore bool) {
 	d, coil = math.Inf(1), -1
-	for _, o := range os {
-		if v, b := o.distance(p); v < d {
-			d, coil, bore = v, o.coil, b
+	best := -1
+	try := func(k int) {
+		o := &os[k]
+		if r := p.Sub(o.centre); best >= 0 && o.reach > 0 && r.Dot(r) > (d+o.reach)*(d+o.reach)*(1+1e-9) {
+			return
+		}
+		if v, b := o.distance(p); v < d || (v == d && k < best) {
+			d, coil, bore, best = v, o.coil, b, k
+		}
+	}
+	if first > 0 && first < len(os) {
+		try(first)
+	}
+	for k := range os {
+		if k != first || first == 0 {
+			try(k)
 		}
 	}
 	return d, coil, bore
@@ -728,8 +761,9 @@ func reachDirections(co calc.Coil, fr calc.Frame) []calc.Vec {
 // the region within lim, the first crossing found by stepping every
 // 1/64 of lim and bisecting is taken.
 func ownStretch(os []outline, coil int, at, u calc.Vec, lo, lim float64) float64 {
+	first := slices.IndexFunc(os, func(o outline) bool { return o.coil == coil })
 	own := func(t float64) bool {
-		_, c, _ := nearestOutline(os, at.Add(u.Scale(t)))
+		_, c, _ := nearestOutlineFrom(os, at.Add(u.Scale(t)), max(first, 0))
 		return c == coil
 	}
 	step := (lim - lo) / 64

@@ -219,6 +219,19 @@ func coupling(coils []Coil, ws []Winding, currents, selfL []float64, i, j int) C
 	}
 	cp.Dipole = DipoleForceBetween(a, ws[i], currents[i], b, ws[j], currents[j])
 	cp.Force = cp.Dipole
+	M, F, ok := seriesCoupling(a, ws[i], currents[i], b, ws[j], currents[j])
+	if !ok {
+		// the force on b from a is minus that on a from b (closed circuits)
+		M, F, ok = seriesCoupling(b, ws[j], currents[j], a, ws[i], currents[i])
+		F = F.Scale(-1)
+	}
+	if ok {
+		cp.Mutual, cp.Force, cp.Exact = M, F, true
+		if selfL[i] > 0 && selfL[j] > 0 {
+			cp.K = cp.Mutual / math.Sqrt(selfL[i]*selfL[j])
+		}
+		return cp
+	}
 	if M := NeumannMutual(a, ws[i], b, ws[j]); !math.IsNaN(M) {
 		cp.Mutual = M
 		cp.Force = LorentzForceBetween(a, ws[i], currents[i], b, ws[j], currents[j])

@@ -173,6 +173,26 @@ func (s *CoilSource) Multipoles() []Multipole {
 // bound. ok is false where the series cannot meet tol with
 // MultipoleOrder terms (p inside or too near the sphere of radius R).
 func (mp *Multipole) At(p Vec, tol float64) (B Vec, bound float64, ok bool) {
+	B, _, bound, ok = mp.sum(p, tol, false)
+	return B, bound, ok
+}
+
+// PotentialAt is At with the vector potential A, T·m, of the same series,
+//
+//	A_φ = Σ_{m≥2} A_{m−1} s P′_{m−1}(u) / ((m − 1) r^m)
+//
+// (the curl of A_φ φ̂ is the field of each term; for m = 2 the point
+// dipole's μ0 m sin θ/(4π r²)). A term of A is at most r times the bound
+// of the same term of B, so r·bound bounds A's error.
+//
+// Reference: Jackson, Classical Electrodynamics, 3rd ed., §5.5 (eq. 5.37
+// and the expansion of A_φ that follows it).
+func (mp *Multipole) PotentialAt(p Vec, tol float64) (A, B Vec, bound float64, ok bool) {
+	B, A, bound, ok = mp.sum(p, tol, true)
+	return A, B, bound, ok
+}
+
+func (mp *Multipole) sum(p Vec, tol float64, pot bool) (B, A Vec, bound float64, ok bool) {
 	r := p.Sub(mp.centre)
 	z := r.Dot(mp.fr.U)
 	radial := r.Sub(mp.fr.U.Scale(z))
@@ -180,7 +200,7 @@ func (mp *Multipole) At(p Vec, tol float64) (B Vec, bound float64, ok bool) {
 	rr := math.Hypot(rho, z)
 	q := mp.R / rr
 	if !(q < 1) {
-		return Vec{}, math.Inf(1), false
+		return Vec{}, Vec{}, math.Inf(1), false
 	}
 	u, s := z/rr, rho/rr
 	q2 := q * q
@@ -188,7 +208,7 @@ func (mp *Multipole) At(p Vec, tol float64) (B Vec, bound float64, ok bool) {
 	// P_m, P′_m at m = 2 from P_1 = u, P′_1 = 1, P_0 = 1, P′_0 = 0
 	p0, p1 := 1.0, u
 	d0, d1 := 0.0, 1.0
-	var bz, br, mag, coef float64
+	var bz, br, aphi, mag, coef float64
 	g := mp.g
 	for m := 2; m <= MultipoleOrder; m++ {
 		fm := float64(m)
@@ -197,6 +217,9 @@ func (mp *Multipole) At(p Vec, tol float64) (B Vec, bound float64, ok bool) {
 		t := mp.a[m] * qp
 		bz += fm * t * pm
 		br += t * s * dm
+		if pot {
+			aphi += t * s * d1 / (fm - 1)
+		}
 		mag += math.Abs(t) * 2 * fm
 		coef += fm * fm * (fm - 1) * qp
 		p0, p1, d0, d1 = p1, pm, d1, dm
@@ -214,11 +237,14 @@ func (mp *Multipole) At(p Vec, tol float64) (B Vec, bound float64, ok bool) {
 		qp *= q
 	}
 	if !ok {
-		return Vec{}, math.Inf(1), false
+		return Vec{}, Vec{}, math.Inf(1), false
 	}
 	B = mp.fr.U.Scale(bz)
 	if rho > 0 {
 		B = B.Add(radial.Scale(br / rho))
+		if pot {
+			A = mp.fr.U.Cross(radial).Scale(aphi * rr / rho)
+		}
 	}
-	return B, bound, true
+	return B, A, bound, true
 }

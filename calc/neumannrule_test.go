@@ -20,13 +20,16 @@ func turnFilaments(c Coil, w Winding) (fs []Filament, sign []float64) {
 	return fs, sign
 }
 
-// TestRuleCouplingMatchesTurnSum checks the quadrature rules of
-// neumannrule.go against the definition they shortcut: Neumann's mutual
-// inductance and the Lorentz force summed over every pair of turns
-// (FilamentMutual, FilamentForce on 256 points each), for separated
-// blocks side by side, inclined, nested one inside the other's hollow,
-// near (a 1.5 mm gap between the shells) and far, pairs of both senses.
-func TestRuleCouplingMatchesTurnSum(t *testing.T) {
+// separatedCase is a pair of coil blocks whose shells do not meet.
+type separatedCase struct {
+	name string
+	a, b Coil
+}
+
+// separatedCases are the separated arrangements the coupling rules and
+// series are checked on: side by side, inclined, nested, near and far,
+// pairs of both senses.
+func separatedCases() []separatedCase {
 	wire := WireFromGauge(30, Copper())
 	sol := func(d, l, rb float64, n int, axis, centre Vec) Coil {
 		return Coil{Name: "s", Form: Solenoid, MeanDiameter: d, Length: l, RadialBuild: rb,
@@ -36,10 +39,7 @@ func TestRuleCouplingMatchesTurnSum(t *testing.T) {
 		return Coil{Name: "p", Form: Pair, MeanDiameter: 0.05, Length: 0.004, RadialBuild: 0.002,
 			Turns: 20, Wire: wire, Spacing: 0.025, Opposing: opp, Axis: axis, Centre: centre}
 	}
-	cases := []struct {
-		name string
-		a, b Coil
-	}{
+	return []separatedCase{
 		{"side by side, inclined 60°", sol(0.03, 0.008, 0.002, 60, Vec{0, 0, 1}, Vec{}),
 			sol(0.025, 0.006, 0.001, 40, Vec{math.Sin(math.Pi / 3), 0, math.Cos(math.Pi / 3)}, Vec{0.045, 0.01, 0.01})},
 		{"near: parallel axes, offset", sol(0.03, 0.008, 0.002, 60, Vec{0, 0, 1}, Vec{}),
@@ -53,22 +53,36 @@ func TestRuleCouplingMatchesTurnSum(t *testing.T) {
 		{"opposing pair and a solenoid", pair(true, Vec{1, 0, 0}, Vec{}),
 			sol(0.02, 0.006, 0.001, 40, Vec{0.5, 0.2, 0.8}, Vec{0.01, 0.075, 0.02})},
 	}
-	for _, tc := range cases {
+}
+
+// turnSumCoupling is Neumann's mutual inductance and the Lorentz force on
+// b (currents 0.7 A in a, 0.3 A in b) summed over every pair of turns.
+func turnSumCoupling(a Coil, wa Winding, b Coil, wb Winding) (ref float64, refF Vec) {
+	fa, sa := turnFilaments(a, wa)
+	fb, sb := turnFilaments(b, wb)
+	for i, f := range fa {
+		for j, g := range fb {
+			ref += sa[i] * sb[j] * FilamentMutual(f, g)
+			refF = refF.Add(FilamentForce(f, 0.7*sa[i], g, 0.3*sb[j]))
+		}
+	}
+	return ref, refF
+}
+
+// TestRuleCouplingMatchesTurnSum checks the quadrature rules of
+// neumannrule.go against the definition they shortcut: Neumann's mutual
+// inductance and the Lorentz force summed over every pair of turns
+// (FilamentMutual, FilamentForce on 256 points each), for separated
+// blocks side by side, inclined, nested one inside the other's hollow,
+// near (a 1.5 mm gap between the shells) and far, pairs of both senses.
+func TestRuleCouplingMatchesTurnSum(t *testing.T) {
+	for _, tc := range separatedCases() {
 		t.Run(tc.name, func(t *testing.T) {
 			wa, wb := LayOut(tc.a), LayOut(tc.b)
 			if _, ok := rulePairs(tc.a, wa, tc.b, wb); !ok {
 				t.Fatal("the rules do not apply to this separated arrangement")
 			}
-			fa, sa := turnFilaments(tc.a, wa)
-			fb, sb := turnFilaments(tc.b, wb)
-			ref := 0.0
-			var refF Vec
-			for i, f := range fa {
-				for j, g := range fb {
-					ref += sa[i] * sb[j] * FilamentMutual(f, g)
-					refF = refF.Add(FilamentForce(f, 0.7*sa[i], g, 0.3*sb[j]))
-				}
-			}
+			ref, refF := turnSumCoupling(tc.a, wa, tc.b, wb)
 			M, _ := ruleMutual(tc.a, wa, tc.b, wb)
 			F, _ := ruleForce(tc.a, wa, 0.7, tc.b, wb, 0.3)
 			t.Logf("M rel %.2g F rel %.2g", math.Abs(M-ref)/math.Abs(ref), F.Sub(refF).Norm()/refF.Norm())
