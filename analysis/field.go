@@ -602,7 +602,9 @@ func allCoilsMap(d calc.Design, r calc.Results, grid int) *MapData {
 		x := xs[ix]
 		for iz, z := range xs {
 			p := calc.Vec{x, 0, z}
-			v := fm.At(p).Norm()
+			// far blocks from their series, to 10⁻⁹ of their own field
+			// (calc.FieldModel.SeriesAt), below the map's 2×10⁻⁷
+			v := fm.SeriesAt(p, 1e-9).Norm()
 			for j, k := range hidden {
 				if nearWinding(d.Coils[k], envs[j], p, step) {
 					v = math.NaN()

@@ -1,6 +1,9 @@
 package calc
 
-import "math"
+import (
+	"math"
+	"sync"
+)
 
 // CoilField returns the field, T, at the global point p of one coil block
 // (a Pair: both its coils) with its winding w laid out by LayOut and current
@@ -73,6 +76,11 @@ type FieldModel struct {
 	// sources are the coils prepared for quadrature (NewCoilSource), set
 	// by NewFieldModel; a model built by hand sums every turn instead.
 	sources []*CoilSource
+
+	// series are the sources' exterior series (Multipoles), made on the
+	// first call of SeriesAt.
+	seriesOnce *sync.Once
+	series     [][]Multipole
 }
 
 // NewFieldModel lays out every coil of d and finds its steady operating
@@ -80,7 +88,7 @@ type FieldModel struct {
 // voltage over the hot resistance). The field is that of the energised
 // coil; the duty cycle does not reduce it.
 func NewFieldModel(d Design) *FieldModel {
-	f := &FieldModel{}
+	f := &FieldModel{seriesOnce: new(sync.Once)}
 	for _, c := range d.Coils {
 		w := LayOut(c)
 		op := OperatingPoint(c, w, d.Conditions)
@@ -97,6 +105,7 @@ func NewFieldModel(d Design) *FieldModel {
 // is returned as it is.
 func (f *FieldModel) ForMaps() *FieldModel {
 	m := *f
+	m.seriesOnce, m.series = new(sync.Once), nil
 	m.sources = make([]*CoilSource, len(f.sources))
 	for i, s := range f.sources {
 		m.sources[i] = s.ForMaps()
@@ -129,6 +138,55 @@ func (f *FieldModel) CoilAt(i int, p Vec) Vec {
 		return f.sources[i].At(p)
 	}
 	return CoilField(f.Coils[i], f.Windings[i], f.Currents[i], p)
+}
+
+// SeriesAt is At with every circular coil block taken from its exterior
+// series (Multipole) where the series meets rel of the size of its leading
+// term there (G q³, about the block's own field at p), and from its
+// quadrature elsewhere (near and inside the winding, and for rectangles).
+// Each block's error is then at most rel of its own field's scale, on top
+// of the quadrature's where that is used.
+func (f *FieldModel) SeriesAt(p Vec, rel float64) Vec {
+	if len(f.sources) != len(f.Coils) {
+		return f.At(p)
+	}
+	f.seriesOnce.Do(func() {
+		f.series = make([][]Multipole, len(f.sources))
+		for i, s := range f.sources {
+			f.series[i] = s.Multipoles()
+		}
+	})
+	var B Vec
+	for i, s := range f.sources {
+		if b, ok := seriesSum(f.series[i], p, rel); ok {
+			B = B.Add(b)
+			continue
+		}
+		B = B.Add(s.At(p))
+	}
+	return B
+}
+
+// seriesSum is the sum of the series mps at p, each to rel of its leading
+// term's size; false when there are none or one does not meet it.
+func seriesSum(mps []Multipole, p Vec, rel float64) (Vec, bool) {
+	if len(mps) == 0 {
+		return Vec{}, false
+	}
+	var B Vec
+	for k := range mps {
+		mp := &mps[k]
+		q := mp.R / p.Sub(mp.centre).Norm()
+		if !(q < 1) {
+			return Vec{}, false
+		}
+		b, _, ok := mp.At(p, rel*mp.g*q*q*q)
+		if !ok {
+			return Vec{}, false
+		}
+		B = B.Add(b)
+	}
+	return B, true
 }
 
 // Multipoles returns the exterior series of coil i (CoilSource.Multipoles)

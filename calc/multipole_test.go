@@ -103,3 +103,46 @@ func TestMultipoleLeadingTermIsTheDipole(t *testing.T) {
 		}
 	}
 }
+
+// TestSeriesAtAsQuadrature: the field of a design of several blocks with
+// the far ones from their series (FieldModel.SeriesAt, to 10⁻⁹ of each
+// block's own field) against the same model by quadrature alone (At,
+// within 10⁻⁹ of the turn sum), at points between, beside and far from
+// the blocks: they agree to a few parts in 10⁹ of the sum of the blocks'
+// field magnitudes, and the series is used at most points.
+func TestSeriesAtAsQuadrature(t *testing.T) {
+	wire := Wire{Bare: 0.4e-3, Outer: 0.45e-3, Material: Copper()}
+	var d Design
+	for i := range 6 {
+		axis := Vec{0, 0, 1}
+		if i%2 == 1 {
+			axis = Vec{1, 0, 1}
+		}
+		d.Coils = append(d.Coils, Coil{Form: Solenoid, MeanDiameter: 0.03, Length: 0.02, RadialBuild: 0.004, Turns: 150,
+			Wire: wire, Axis: axis, Centre: Vec{0.1 * float64(i%3), 0.12 * float64(i/3), 0}, Current: 0.4, Drive: CurrentDrive})
+	}
+	d.Coils = append(d.Coils, Coil{Form: Pair, MeanDiameter: 0.08, Length: 0.005, RadialBuild: 0.003, Turns: 40, Wire: wire,
+		Spacing: 0.04, Opposing: true, Centre: Vec{0.3, 0, 0.1}, Current: 0.8, Drive: CurrentDrive})
+	fm := NewFieldModel(d)
+	rng := rand.New(rand.NewPCG(5, 6))
+	used := 0
+	for range 500 {
+		p := Vec{-0.1 + 0.5*rng.Float64(), -0.1 + 0.35*rng.Float64(), -0.15 + 0.3*rng.Float64()}
+		var scale float64
+		for i := range d.Coils {
+			scale += fm.CoilAt(i, p).Norm()
+		}
+		want, got := fm.At(p), fm.SeriesAt(p, 1e-9)
+		if e := got.Sub(want).Norm() / scale; e > 3e-9 {
+			t.Errorf("at %v: series %v, quadrature %v (%.2g of the blocks' fields)", p, got, want, e)
+		}
+		for i := range d.Coils {
+			if _, ok := seriesSum(fm.series[i], p, 1e-9); ok {
+				used++
+			}
+		}
+	}
+	if used < 500*len(d.Coils)/2 {
+		t.Errorf("the series was used for only %d of %d block evaluations", used, 500*len(d.Coils))
+	}
+}
