@@ -13,6 +13,8 @@
 //	loopfield.go      exact field of a circular filament
 //	segment.go        straight-segment Biot–Savart; rectangular filament
 //	coilfield.go      field of a coil block by superposition; FieldModel, FieldAt
+//	quadrature.go     the winding cut into quadrature panels; CoilSource
+//	multipole.go      exterior zonal multipole series of a circular winding, with its bound
 //	solenoid.go       current-sheet field on the axis
 //	dipole.go         dipole field; distance where it is within 1 % of exact
 //	winding.go        turn-by-turn layout, wire length, mass, fill, surface
@@ -31,6 +33,8 @@
 //	switching.go      L/R, rise time, switch-off spike, suppression
 //	skin.go           skin depth, a.c. figures
 //	coupling.go       mutual inductance and forces between coil blocks
+//	neumannrule.go    Neumann's integral between separated windings by quadrature rules
+//	seriescoupling.go the same through the first block's exterior series
 //	operating.go      a coil block's electrical operating point
 //	evaluate.go       Evaluate
 //	limits.go         requirement checks
