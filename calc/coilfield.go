@@ -175,12 +175,7 @@ func seriesSum(mps []Multipole, p Vec, rel float64) (Vec, bool) {
 	}
 	var B Vec
 	for k := range mps {
-		mp := &mps[k]
-		q := mp.R / p.Sub(mp.centre).Norm()
-		if !(q < 1) {
-			return Vec{}, false
-		}
-		b, _, ok := mp.At(p, rel*mp.g*q*q*q)
+		b, ok := mps[k].atRel(p, rel)
 		if !ok {
 			return Vec{}, false
 		}

@@ -173,11 +173,19 @@ func (s *CoilSource) Multipoles() []Multipole {
 // bound. ok is false where the series cannot meet tol with
 // MultipoleOrder terms (p inside or too near the sphere of radius R).
 func (mp *Multipole) At(p Vec, tol float64) (B Vec, bound float64, ok bool) {
-	B, _, bound, ok = mp.sum(p, tol, false)
+	B, _, bound, ok = mp.sum(p, tol, 0, false)
 	return B, bound, ok
 }
 
-// PotentialAt is At with the vector potential A, T·m, of the same series,
+// atRel is At with the tolerance rel·G·q³, rel of the size of the
+// series' leading term at p.
+func (mp *Multipole) atRel(p Vec, rel float64) (B Vec, ok bool) {
+	B, _, _, ok = mp.sum(p, 0, rel, false)
+	return B, ok
+}
+
+// sum is the series at p to the tolerance tol + rel·G·q³, and, when pot
+// is set, the vector potential A, T·m, of the same series,
 //
 //	A_φ = Σ_{m≥2} A_{m−1} s P′_{m−1}(u) / ((m − 1) r^m)
 //
@@ -187,21 +195,19 @@ func (mp *Multipole) At(p Vec, tol float64) (B Vec, bound float64, ok bool) {
 //
 // Reference: Jackson, Classical Electrodynamics, 3rd ed., §5.5 (eq. 5.37
 // and the expansion of A_φ that follows it).
-func (mp *Multipole) PotentialAt(p Vec, tol float64) (A, B Vec, bound float64, ok bool) {
-	B, A, bound, ok = mp.sum(p, tol, true)
-	return A, B, bound, ok
-}
-
-func (mp *Multipole) sum(p Vec, tol float64, pot bool) (B, A Vec, bound float64, ok bool) {
+func (mp *Multipole) sum(p Vec, tol, rel float64, pot bool) (B, A Vec, bound float64, ok bool) {
 	r := p.Sub(mp.centre)
 	z := r.Dot(mp.fr.U)
 	radial := r.Sub(mp.fr.U.Scale(z))
-	rho := radial.Norm()
-	rr := math.Hypot(rho, z)
+	// lengths of a design's size: √ of the sums of squares needs no
+	// guard against overflow (a non-finite one fails q < 1)
+	rho2 := radial.Dot(radial)
+	rho, rr := math.Sqrt(rho2), math.Sqrt(rho2+z*z)
 	q := mp.R / rr
 	if !(q < 1) {
 		return Vec{}, Vec{}, math.Inf(1), false
 	}
+	tol += rel * mp.g * q * q * q
 	u, s := z/rr, rho/rr
 	q2 := q * q
 	qp := q2 * q // q^{m+1} at m = 2

@@ -75,10 +75,7 @@ func seriesCoupling(a Coil, wa Winding, Ia float64, b Coil, wb Winding, Ib float
 				p, t := f.atTrig(ub, cs[0], cs[1])
 				var A, B Vec
 				for k := range mps {
-					mp := &mps[k]
-					d := p.Sub(mp.centre).Norm()
-					scale := mp.g * math.Pow(mp.R/d, 3)
-					Ak, Bk, _, good := mp.PotentialAt(p, 1e-13*scale)
+					Bk, Ak, _, good := mps[k].sum(p, 0, 1e-13, true)
 					if !good {
 						return 0, Vec{}, false
 					}
