@@ -392,21 +392,23 @@ func (fb *fieldBound) dipoleRemainder(i int, D float64) float64 {
 	return 3 * fb.ks[i] * R * R / math.Pow(D-R, 4)
 }
 
-// levelField is the field of all coils of d, as fm gives it, for a
-// search that only asks whether |B| reaches level. A circular block whose
-// exterior series (calc.Multipole) meets 10⁻¹² of the level at p is
-// taken from it, with its stated bound; a rectangle farther from p than
-// three times the radius R of its sphere is taken as the point dipole of
-// its moment m at its centre, whose error the closed turns bound,
+// levelField is the field of all coils of d for a search that only asks
+// whether |B| reaches level, as model gives it: a circular block whose
+// exterior series (calc.Multipole) meets 10⁻⁹ of the level at p is taken
+// from it (30 such blocks err by at most 3×10⁻⁸ of the level, below the
+// 2×10⁻⁷ of the maps' quadrature that model uses for the others); a
+// rectangle farther from p than three times the radius R of its sphere is
+// taken as the point dipole of its moment m at its centre, whose error
+// the closed turns bound,
 //
 //	|B_i − B_dip,i| ≤ 3 K_i R_i²/(D_i − R_i)⁴
 //
 // (fieldBound.dipoleRemainder); the other blocks are evaluated in full.
-// Where the sum clears level by more than the bounds' sum either way, it
-// is returned; elsewhere every block is evaluated in full. So the search
-// decides the same at every point as with fm, while a design of many
-// coils evaluates in full only the few blocks near the point. fm itself
-// when no bound applies (fb nil).
+// Where the dipoles' bounds leave the decision open, those rectangles are
+// evaluated in full too. So the search decides as model would at every
+// point not within 3×10⁻⁸ of the level, while a design of many coils
+// evaluates in full only the few blocks near the point. fm itself when no
+// bound applies (fb nil).
 func levelField(fm func(calc.Vec) calc.Vec, model *calc.FieldModel, fb *fieldBound, moments []calc.Vec, level float64) func(calc.Vec) calc.Vec {
 	if fb == nil || model == nil || len(model.Coils) != len(fb.ks) || len(moments) != len(fb.ks) {
 		return fm
@@ -417,49 +419,61 @@ func levelField(fm func(calc.Vec) calc.Vec, model *calc.FieldModel, fb *fieldBou
 			mps[i] = model.Multipoles(i)
 		}
 	}
-	tol := 1e-12 * level
-	series := func(i int, p calc.Vec) (calc.Vec, float64, bool) {
-		var b calc.Vec
-		e := 0.0
-		for k := range mps[i] {
-			v, ek, ok := mps[i][k].At(p, tol)
-			if !ok {
-				return calc.Vec{}, 0, false
-			}
-			b, e = b.Add(v), e+ek
+	tol := 1e-9 * level
+	series := func(i int, p calc.Vec) (calc.Vec, bool) {
+		if len(mps[i]) == 0 {
+			return calc.Vec{}, false
 		}
-		return b, e, true
+		var b calc.Vec
+		for k := range mps[i] {
+			v, _, ok := mps[i][k].At(p, tol)
+			if !ok {
+				return calc.Vec{}, false
+			}
+			b = b.Add(v)
+		}
+		return b, true
+	}
+	dipole := func(i int, p calc.Vec) (calc.Vec, float64) {
+		if len(mps[i]) > 0 {
+			return calc.Vec{}, -1
+		}
+		r := p.Sub(fb.centres[i])
+		if D := r.Norm(); D > 3*fb.rs[i] {
+			return r, D
+		}
+		return calc.Vec{}, -1
 	}
 	return func(p calc.Vec) calc.Vec {
-		var near, taken calc.Vec
+		var b, dip calc.Vec
 		errSum := 0.0
 		for i, k := range fb.ks {
 			if k == 0 {
 				continue
 			}
-			if len(mps[i]) > 0 {
-				if b, e, ok := series(i, p); ok {
-					taken, errSum = taken.Add(b), errSum+e
-					continue
-				}
-			} else if r := p.Sub(fb.centres[i]); r.Norm() > 3*fb.rs[i] {
-				taken = taken.Add(calc.DipoleField(moments[i], r))
-				errSum += fb.dipoleRemainder(i, r.Norm())
+			if v, ok := series(i, p); ok {
+				b = b.Add(v)
 				continue
 			}
-			near = near.Add(model.CoilAt(i, p))
+			if r, D := dipole(i, p); D > 0 {
+				dip = dip.Add(calc.DipoleField(moments[i], r))
+				errSum += fb.dipoleRemainder(i, D)
+				continue
+			}
+			b = b.Add(model.CoilAt(i, p))
 		}
-		b := near.Add(taken)
-		if n := b.Norm(); errSum == 0 || n-errSum >= level || n+errSum < level {
+		if errSum == 0 {
 			return b
 		}
-		var full calc.Vec
+		if n := b.Add(dip).Norm(); n-errSum >= level || n+errSum < level {
+			return b.Add(dip)
+		}
 		for i, k := range fb.ks {
-			if k != 0 {
-				full = full.Add(model.CoilAt(i, p))
+			if _, D := dipole(i, p); k != 0 && D > 0 {
+				b = b.Add(model.CoilAt(i, p))
 			}
 		}
-		return full
+		return b
 	}
 }
 

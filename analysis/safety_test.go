@@ -371,11 +371,11 @@ func TestImplantReachRoundAnAsymmetricRim(t *testing.T) {
 	}
 }
 
-// The search's field (levelField: far blocks as dipoles within their
-// bound) says "at or above 0.5 mT" exactly where the full field does, and
-// is within its bound of the full field, over points among a lattice of
-// coils (solenoids on both axes, a pair, a rectangle) from next to the
-// windings to far away.
+// The search's field (levelField: circular blocks from their exterior
+// series to 10⁻⁹ of the level, a far rectangle as a dipole within its
+// bound) says "at or above 0.5 mT" where the full field does, over points
+// among a lattice of coils (solenoids on both axes, a pair, a rectangle)
+// from next to the windings to far away.
 func TestLevelFieldDecidesAsTheFullField(t *testing.T) {
 	var b strings.Builder
 	for i := range 8 {
@@ -413,7 +413,7 @@ func TestLevelFieldDecidesAsTheFullField(t *testing.T) {
 		}
 	}
 	if above < 30 || shortcut < 300 {
-		t.Errorf("%d points at the level, %d taken by the dipoles: the test does not exercise both", above, shortcut)
+		t.Errorf("%d points at the level, %d taken by the series or dipoles: the test does not exercise both", above, shortcut)
 	}
 }
 
