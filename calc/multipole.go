@@ -36,22 +36,29 @@ import (
 // I·πa². The coefficients are stored scaled, Ã_m = A_{m−1}/R^{m+1}, so
 // that a term is Ã_m q^{m+1} with q = R/r < 1.
 //
-// Error bound: |C_n^{(3/2)}(x)| ≤ C_n^{(3/2)}(1) = (n+1)(n+2)/2 on
-// |x| ≤ 1 and R_t ≤ R give |Ã_m| ≤ G (m − 1) with
-// G = μ0 Σ |I| a² / (4 R³); |P_m| ≤ 1 and |s P′_m(cos θ)| =
-// |d P_m(cos θ)/dθ| ≤ m (Bernstein's inequality for the trigonometric
-// polynomial P_m(cos θ) of degree m) bound a term by 2m(m−1) G q^{m+1},
-// and the terms after the M-th, whose ratio is at most
-// ϱ = q (M + 2)/M, by
+// Error bound: |P_m| ≤ 1 and |s P′_m(cos θ)| = |d P_m(cos θ)/dθ| ≤ m
+// (Bernstein's inequality for the trigonometric polynomial P_m(cos θ) of
+// degree m) bound a term by 2m |Ã_m| q^{m+1}. With h_k = max |Ã_m| over
+// k ≤ m ≤ MultipoleOrder = N, the terms after the M-th up to N are at
+// most
 //
-//	2 G M (M + 1) q^{M+2} / (1 − ϱ).
+//	2 h_{M+1} Σ_{m>M} m q^{m+1} = 2 h_{M+1} q^{M+2} ((M+1) − M q)/(1 − q)²,
 //
-// At adds to it the rounding, bounded generously: of the sum, roundSum of
-// the sum of the terms' bounds (the Legendre recurrences are forward
-// stable on |u| ≤ 1, their error growing as m units of 10⁻¹⁶), and of the
-// coefficients, whose recurrence errs by about n units of 10⁻¹⁶ of the
-// envelope C_n(1) in every node's term, roundCoef·2m²(m−1)·G·q^{m+1} per
-// term.
+// and beyond N, where the coefficients are not kept, |C_n^{(3/2)}(x)| ≤
+// C_n^{(3/2)}(1) = (n+1)(n+2)/2 on |x| ≤ 1 and R_t ≤ R give
+// |Ã_m| ≤ G (m − 1), G = μ0 Σ |I| a² / (4 R³), so that the terms after
+// the N-th, whose ratio is at most ϱ = q (N + 2)/N, are at most
+//
+//	2 G N (N + 1) q^{N+2} / (1 − ϱ).
+//
+// At adds to these the rounding, bounded generously: of the sum, roundSum
+// of the sum of the terms' bounds, at most 2 h_2 q³ (2 − q)/(1 − q)² (the
+// Legendre recurrences are forward stable on |u| ≤ 1, their error growing
+// as m units of 10⁻¹⁶); and of the coefficients, whose recurrence errs by
+// about n units of 10⁻¹⁶ of the envelope G (m − 1), roundCoef·2m²(m−1)·G·
+// q^{m+1} a term, at most 2 roundCoef G q² ((1 + 4q + q²)/(1 − q)⁴ − 1)
+// in all (Σ_{m≥1} m³ xᵐ = x (1 + 4x + x²)/(1 − x)⁴, less its first term). TestMultipoleWithinItsBound
+// checks the whole bound against the turn sum.
 //
 // Reference: J. D. Jackson, Classical Electrodynamics, 3rd ed., Wiley
 // 1999, §5.5 (the loop's axial field and its expansion in Legendre
@@ -65,6 +72,7 @@ type Multipole struct {
 	fr     Frame
 	R      float64   // radius of the sphere about centre that holds every filament
 	a      []float64 // Ã_m at index m (a[0], a[1] unused)
+	h      []float64 // h_m = max |Ã_k| over m ≤ k ≤ MultipoleOrder (h[MultipoleOrder+1] = 0)
 	g      float64   // G of the bound, T
 }
 
@@ -163,6 +171,10 @@ func (s *CoilSource) Multipoles() []Multipole {
 			}
 			m.g += math.Abs(cp.I) * u.g * math.Pow(u.R/R, 3)
 		}
+		m.h = make([]float64, MultipoleOrder+2)
+		for mm := MultipoleOrder; mm >= 2; mm-- {
+			m.h[mm] = math.Max(m.h[mm+1], math.Abs(m.a[mm]))
+		}
 		out = append(out, m)
 	}
 	return out
@@ -208,15 +220,26 @@ func (mp *Multipole) sum(p Vec, tol, rel float64, pot bool) (B, A Vec, bound flo
 		return Vec{}, Vec{}, math.Inf(1), false
 	}
 	tol += rel * mp.g * q * q * q
+	const N = MultipoleOrder
+	g, w := mp.g, 1-q
+	rhoN := q * (N + 2) / N
+	if !(rhoN < 1) {
+		return Vec{}, Vec{}, math.Inf(1), false
+	}
+	// the bound's parts that do not depend on where the sum stops
+	fixed := 2*g*N*(N+1)*math.Pow(q, N+2)/(1-rhoN) +
+		roundSum*2*mp.h[2]*q*q*q*(2-q)/(w*w) +
+		2*roundCoef*g*q*q*((1+4*q+q*q)/(w*w*w*w)-1)
+	if fixed > tol {
+		return Vec{}, Vec{}, math.Inf(1), false
+	}
 	u, s := z/rr, rho/rr
-	q2 := q * q
-	qp := q2 * q // q^{m+1} at m = 2
+	qp := q * q * q // q^{m+1} at m = 2
 	// P_m, P′_m at m = 2 from P_1 = u, P′_1 = 1, P_0 = 1, P′_0 = 0
 	p0, p1 := 1.0, u
 	d0, d1 := 0.0, 1.0
-	var bz, br, aphi, mag, coef float64
-	g := mp.g
-	for m := 2; m <= MultipoleOrder; m++ {
+	var bz, br, aphi float64
+	for m := 2; m <= N; m++ {
 		fm := float64(m)
 		pm := ((2*fm-1)*u*p1 - (fm-1)*p0) / fm
 		dm := d0 + (2*fm-1)*p1
@@ -226,21 +249,20 @@ func (mp *Multipole) sum(p Vec, tol, rel float64, pot bool) (B, A Vec, bound flo
 		if pot {
 			aphi += t * s * d1 / (fm - 1)
 		}
-		mag += math.Abs(t) * 2 * fm
-		coef += fm * fm * (fm - 1) * qp
 		p0, p1, d0, d1 = p1, pm, d1, dm
-		if m%4 == 0 || m == MultipoleOrder {
-			rho := q * (fm + 2) / fm
-			if rho < 1 {
-				tail := 2*g*fm*(fm+1)*qp*q/(1-rho) + roundSum*mag + 2*roundCoef*g*coef
-				if tail <= tol {
-					bound = tail
-					ok = true
-					break
-				}
+		qp *= q
+		if m%4 == 0 || m == N {
+			// qp is now q^{m+2}
+			tail := fixed
+			if m < N {
+				tail += 2 * mp.h[m+1] * qp * ((fm + 1) - fm*q) / (w * w)
+			}
+			if tail <= tol {
+				bound = tail
+				ok = true
+				break
 			}
 		}
-		qp *= q
 	}
 	if !ok {
 		return Vec{}, Vec{}, math.Inf(1), false

@@ -19,7 +19,7 @@ import "math"
 // costs a few dozen terms a point where the rules sum every node of a's
 // rule, and M and F come from one evaluation.
 //
-// Accuracy: the series is summed at every point to 10⁻¹³ of the scale G·q³
+// Accuracy: the series is summed at every point to 10⁻¹² of the scale G·q³
 // of its leading term (its bound, Multipole.At), far below ruleEps;
 // against the turn-by-turn Neumann sum the relative error of M and F is
 // below 10⁻⁸ on the arrangements of TestSeriesCouplingMatchesTurnSum, as
@@ -75,7 +75,7 @@ func seriesCoupling(a Coil, wa Winding, Ia float64, b Coil, wb Winding, Ib float
 				p, t := f.atTrig(ub, cs[0], cs[1])
 				var A, B Vec
 				for k := range mps {
-					Bk, Ak, _, good := mps[k].sum(p, 0, 1e-13, true)
+					Bk, Ak, _, good := mps[k].sum(p, 0, 1e-12, true)
 					if !good {
 						return 0, Vec{}, false
 					}
