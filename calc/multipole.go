@@ -77,7 +77,7 @@ type Multipole struct {
 }
 
 // MultipoleOrder is the highest term m the series keeps.
-const MultipoleOrder = 96
+const MultipoleOrder = 96 // Multipole.sum's q^{N+2} is written out for it
 
 // roundSum and roundCoef are the rounding allowances of Multipole.At
 // (relative, per unit of the bounds they multiply).
@@ -227,14 +227,19 @@ func (mp *Multipole) sum(p Vec, tol, rel float64, pot bool) (B, A Vec, bound flo
 		return Vec{}, Vec{}, math.Inf(1), false
 	}
 	// the bound's parts that do not depend on where the sum stops
-	fixed := 2*g*N*(N+1)*math.Pow(q, N+2)/(1-rhoN) +
+	q2 := q * q
+	q4 := q2 * q2
+	q8 := q4 * q4
+	q32 := q8 * q8 * q8 * q8
+	qN2 := q32 * q32 * q32 * q2 // q^{N+2} = q^98
+	fixed := 2*g*N*(N+1)*qN2/(1-rhoN) +
 		roundSum*2*mp.h[2]*q*q*q*(2-q)/(w*w) +
 		2*roundCoef*g*q*q*((1+4*q+q*q)/(w*w*w*w)-1)
 	if fixed > tol {
 		return Vec{}, Vec{}, math.Inf(1), false
 	}
 	u, s := z/rr, rho/rr
-	qp := q * q * q // q^{m+1} at m = 2
+	qp := q2 * q // q^{m+1} at m = 2
 	// P_m, P′_m at m = 2 from P_1 = u, P′_1 = 1, P_0 = 1, P′_0 = 0
 	p0, p1 := 1.0, u
 	d0, d1 := 0.0, 1.0
