@@ -237,8 +237,8 @@ func TestOneConvexOutlineNeedsNoSamples(t *testing.T) {
 
 // refineReach finds the crossing of a field falling as a power of the
 // distance (the dipole's cube, a line current's first power, and a
-// rippled one) to 10⁻⁹ of the distance, from the bracket reach hands it,
-// in fewer evaluations than the 28 a bisection of that bracket takes.
+// rippled one) to 10⁻⁷ of the distance, from the bracket reach hands it,
+// in fewer evaluations than the 21 a bisection of that bracket takes.
 func TestRefineReachFindsThePowerLawsCrossing(t *testing.T) {
 	const level = 5e-4
 	for _, c := range []struct {
@@ -259,7 +259,7 @@ func TestRefineReachFindsThePowerLawsCrossing(t *testing.T) {
 		calls := n - 2
 		if c.ripple == 0 {
 			exact := 0.01 * math.Pow(1e-3/level, 1/c.p)
-			if math.Abs(r-exact) > 1e-9*exact || r > exact*(1+1e-15) {
+			if math.Abs(r-exact) > 1e-7*hi || r > exact*(1+1e-15) {
 				t.Errorf("B ∝ r^-%g: crossing %.15g m, exact %.15g m", c.p, r, exact)
 			}
 		}
@@ -431,7 +431,7 @@ func TestLatticeReachWithoutOwnLineSamples(t *testing.T) {
 	slow := studyOf(t, b.String()).Safety.Implant
 	sampleEveryLine = false
 	for i := range fast.Windings {
-		if f, s := fast.Windings[i].Distance, slow.Windings[i].Distance; !(f > 0) || f < s*(1-1e-9) || f > s*1.01 {
+		if f, s := fast.Windings[i].Distance, slow.Windings[i].Distance; !(f > 0) || f < s*(1-1e-7) || f > s*1.01 {
 			t.Errorf("coil %d: reach %g m without the own lines' samples, %g m with them", i, f, s)
 		}
 	}
