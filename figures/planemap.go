@@ -147,7 +147,7 @@ func drawPlaneMap(c vg.Canvas, w, h vg.Length, d PlaneData) {
 	levels := d.PlaneLevels()
 	p.Add(&planeOverlay{d: d, levels: levels, scale: lp.Factor})
 
-	dc, ylabel, ysty := mapCanvas(c, w, h, p)
+	dc, ylabel, ysty := mapCanvas(c, w, h, p, 0)
 	p.Draw(dc)
 	da := p.DataCanvas(dc)
 	ysty.Rotation = math.Pi / 2
