@@ -374,9 +374,11 @@ func (c *composer) drawCentreRequirement(i int, centre float64, d *figures.Profi
 	if !ok {
 		return caption, text
 	}
-	d.Levels = append(d.Levels, figures.Level{Y: math.Copysign(req.Limit.Required, centre), Label: "required |B| " + relText(req.Limit) + " " + Eng(req.Limit.Required, "T", 3)})
-	caption += "; dashed: the required centre field"
-	text += fmt.Sprintf(" The required centre field (dashed) is %s.", map[bool]string{true: "met", false: "not met"}[req.Pass])
+	// The requirement holds at the centre: a short bar there, not a line
+	// across the plot.
+	d.Levels = append(d.Levels, figures.Level{Y: math.Copysign(req.Limit.Required, centre), Label: "required |B| " + relText(req.Limit) + " " + Eng(req.Limit.Required, "T", 3) + " at the centre", Local: true})
+	caption += "; short bar at the centre: the required centre field"
+	text += fmt.Sprintf(" The required centre field (the short bar at the centre) is %s.", map[bool]string{true: "met", false: "not met"}[req.Pass])
 	return caption, text
 }
 
@@ -687,10 +689,10 @@ func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult, cs *analysis.Coi
 		l := calc.Limit{Relation: rel}
 		// The requirement is on the magnitude; the line is drawn on the
 		// side of the curve, and its label says so.
-		d.Levels = append(d.Levels, figures.Level{Y: math.Copysign(g, G), Label: "required |" + grad + "| " + relText(l) + " " + Eng(g, "T/m", 3)})
-		caption += "; dashed: the required gradient"
+		d.Levels = append(d.Levels, figures.Level{Y: math.Copysign(g, G), Label: "required |" + grad + "| " + relText(l) + " " + Eng(g, "T/m", 3) + " at the centre", Local: true})
+		caption += "; short bar at the centre: the required gradient"
 		met := (rel == calc.AtLeast && math.Abs(G) >= g) || (rel == calc.AtMost && math.Abs(G) <= g)
-		text += fmt.Sprintf(" The required gradient, %s %s (dashed), is %s at the centre.", relText(l), Eng(g, "T/m", 3), map[bool]string{true: "met", false: "not met"}[met])
+		text += fmt.Sprintf(" The required gradient, %s %s (the short bar at the centre), is %s at the centre.", relText(l), Eng(g, "T/m", 3), map[bool]string{true: "met", false: "not met"}[met])
 	}
 	c.para(text)
 	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight * 0.85, Draw: figures.Profile(d),
