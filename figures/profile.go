@@ -126,13 +126,18 @@ func profilePlot(d ProfileData) (*plot.Plot, vg.Length, []plotter.XYs) {
 type spanPlot struct {
 	spans [][2]float64
 	scale float64
+	fill  color.Color // spanFill when nil
 }
 
 var spanFill = color.NRGBA{R: 0xb0, G: 0x5a, B: 0x1c, A: 0x22}
 
 func (s *spanPlot) Plot(c draw.Canvas, p *plot.Plot) {
 	trX, _ := p.Transforms(&c)
-	c.SetColor(spanFill)
+	if s.fill != nil {
+		c.SetColor(s.fill)
+	} else {
+		c.SetColor(spanFill)
+	}
 	for _, sp := range s.spans {
 		a, b := math.Max(sp[0]/s.scale, p.X.Min), math.Min(sp[1]/s.scale, p.X.Max)
 		if !(b > a) {
