@@ -272,7 +272,10 @@ type HeatParts struct {
 type WarmUp struct {
 	T, Hot           []float64 // energised continuously
 	CycleT, CycleHot []float64 // on the duty cycle; nil when none or too many periods to draw
-	End              float64   // s, the time plotted
+	// CycleReached reports that the cycle drawn runs on past the time it
+	// takes to reach its periodic state (calc.Cycle.Periods).
+	CycleReached bool
+	End          float64 // s, the time plotted
 }
 
 // warmUpPeriodsMax is the most on/off periods a warm-up curve is drawn over.
@@ -318,8 +321,9 @@ func heatParts(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, outer flo
 }
 
 // warmUp integrates the warm-up from cold over a span that shows what
-// matters: five thermal time constants, and past the time the insulation
-// class is reached.
+// matters: five thermal time constants, past the time the insulation
+// class is reached, and for a duty cycle drawn one period past the time
+// it takes to reach its periodic state.
 func warmUp(co calc.Coil, h calc.HeatResult, on calc.ThermalProblem, steady calc.ThermalState, tau float64) *WarmUp {
 	C := h.HeatCapacity
 	if !(C > 0) {
@@ -334,13 +338,26 @@ func warmUp(co calc.Coil, h calc.HeatResult, on calc.ThermalProblem, steady calc
 			tEnd = math.Max(tEnd, math.Min(5*tau, 3*h.TimeToLimit))
 		}
 	}
+	// A duty cycle drawn runs on until its periodic state is reached
+	// (Periods, from cold) and one whole period beyond, so that the
+	// periodic peak the memo quotes is seen.
+	cy := h.Cycle
+	drawCycle := cy.On > 0 && cy.Settled
+	if drawCycle {
+		period := cy.On + cy.Off
+		if t := (math.Ceil(cy.Periods) + 1) * period; (math.IsNaN(tEnd) || t > tEnd) && t/period <= warmUpPeriodsMax {
+			tEnd = t
+		}
+		drawCycle = tEnd/period <= warmUpPeriodsMax
+	}
 	if !(tEnd > 0) || math.IsInf(tEnd, 0) {
 		return nil
 	}
 	wu := &WarmUp{End: tEnd}
 	wu.T, _, wu.Hot = on.WarmUpCurve(C, tEnd, 0)
-	if cy := h.Cycle; cy.On > 0 && cy.Settled && tEnd/(cy.On+cy.Off) <= warmUpPeriodsMax {
+	if drawCycle {
 		wu.CycleT, _, wu.CycleHot = h.Problem.WarmUpCurve(C, tEnd, cy.On)
+		wu.CycleReached = tEnd >= (math.Ceil(cy.Periods)+1)*(cy.On+cy.Off)
 	}
 	return wu
 }

@@ -268,6 +268,8 @@ func (m *markLines) Plot(c draw.Canvas, p *plot.Plot) {
 			continue
 		}
 		w := sty.Width(mk.Label)
+		// A label near an end of the axis is kept over the data area.
+		x = min(max(x, c.Min.X+w/2), c.Max.X-w/2)
 		row := 0
 		if x-w/2 < ends[0]+vg.Points(4) {
 			row = 1

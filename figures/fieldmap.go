@@ -42,6 +42,11 @@ type MapData struct {
 	// Decades is the span of the colour scale below its top (the largest
 	// |B| outside the sections); 3 when 0.
 	Decades float64
+	// CorePeak is the largest |B| inside the core (T; 0 when none is
+	// given). The core is drawn in grey over the map, so its field takes
+	// no colour; when CorePeak lies above the colour scale's top the
+	// colour bar ends in a grey arrowhead labelled "core" and the value.
+	CorePeak float64
 }
 
 // Winding fill and outline in maps and sketches.
@@ -204,7 +209,11 @@ func drawFieldMap(c vg.Canvas, w, h vg.Length, d MapData) {
 	p.Add(&contourPlot{d: d, logv: logv, levels: sc.Levels, scale: lp.Factor})
 	p.Add(&sectionPlot{sections: d.Sections, scale: lp.Factor})
 
-	dc, ylabel, ysty := mapCanvas(c, w, h, p)
+	var labelW vg.Length
+	if d.CorePeak > sc.Hi {
+		labelW = style(TickSize, Muted).Width(coreLabel(d.CorePeak))
+	}
+	dc, ylabel, ysty := mapCanvas(c, w, h, p, labelW)
 	p.Draw(dc)
 	da := p.DataCanvas(dc)
 	p.Y.Label.Text = ylabel
@@ -225,7 +234,13 @@ func drawFieldMap(c vg.Canvas, w, h vg.Length, d MapData) {
 	drawColourBar(c, vg.Rectangle{
 		Min: vg.Point{X: da.Max.X + vg.Points(10), Y: da.Min.Y},
 		Max: vg.Point{X: da.Max.X + vg.Points(10) + vg.Length(barW)*vg.Millimeter, Y: da.Max.Y},
-	}, sc)
+	}, sc, d.CorePeak)
+}
+
+// CoreAbove reports whether the core's field lies above the colour
+// scale's top, which the colour bar then marks (MapData.CorePeak).
+func (d MapData) CoreAbove() bool {
+	return d.CorePeak > d.Scale().Hi
 }
 
 // mapImage renders the grid as an image at about three pixels per node
@@ -509,8 +524,15 @@ func drawSection(c vg.Canvas, x0, y0, x1, y1 vg.Length, s Section) {
 }
 
 // drawColourBar draws the scale's gradient in r with log ticks and labels
-// on its right and the quantity above it.
-func drawColourBar(c vg.Canvas, r vg.Rectangle, sc MapScale) {
+// on its right and the quantity above it; a core field above the scale's
+// top (corePeak, T) ends the bar in an arrowhead in the core's grey,
+// labelled with it.
+func drawColourBar(c vg.Canvas, r vg.Rectangle, sc MapScale, corePeak float64) {
+	titleY := r.Max.Y + vg.Points(4)
+	over := corePeak > sc.Hi
+	if over {
+		r.Max.Y -= barArrowHeight(r) // the arrowhead takes its room from the bar
+	}
 	dc := drawBarGradient(c, r)
 	l0, l1 := math.Log10(sc.Lo), math.Log10(sc.Hi)
 	yOf := func(v float64) vg.Length {
@@ -524,13 +546,36 @@ func drawColourBar(c vg.Canvas, r vg.Rectangle, sc MapScale) {
 		ys[i] = yOf(v)
 		dc.StrokeLine2(tick, r.Min.X, ys[i], r.Max.X+vg.Points(2), ys[i])
 	}
-	for _, i := range barLabels(sc.Levels, ys, sty.Height("0")*1.15) {
+	minGap := sty.Height("0") * 1.15
+	capY := r.Max.Y + barArrowHeight(r)/2
+	for _, i := range barLabels(sc.Levels, ys, minGap) {
+		if over && capY-ys[i] < minGap {
+			continue // the core's label stands there
+		}
 		dc.FillText(sty, vg.Point{X: r.Max.X + vg.Points(3.5), Y: ys[i]}, engLabel(sc.Levels[i], "T"))
+	}
+	if over {
+		h := barArrowHeight(r)
+		var path vg.Path
+		path.Move(vg.Point{X: r.Min.X, Y: r.Max.Y})
+		path.Line(vg.Point{X: (r.Min.X + r.Max.X) / 2, Y: r.Max.Y + h})
+		path.Line(vg.Point{X: r.Max.X, Y: r.Max.Y})
+		path.Close()
+		c.SetColor(CoreSteel)
+		c.Fill(path)
+		c.SetColor(CoreEdge)
+		c.SetLineWidth(ThinWidth)
+		c.SetLineDash(nil, 0)
+		c.Stroke(path)
+		dc.FillText(sty, vg.Point{X: r.Max.X + vg.Points(3.5), Y: capY}, coreLabel(corePeak))
 	}
 	title := style(LabelSize, Ink)
 	title.XAlign = draw.XCenter
-	dc.FillText(title, vg.Point{X: (r.Min.X + r.Max.X) / 2, Y: r.Max.Y + vg.Points(4)}, "|B|")
+	dc.FillText(title, vg.Point{X: (r.Min.X + r.Max.X) / 2, Y: titleY}, "|B|")
 }
+
+// coreLabel is the colour bar's label of a core's field above its scale.
+func coreLabel(corePeak float64) string { return "core " + engLabel(corePeak, "T") }
 
 // barLabels chooses which of a colour bar's levels (at heights ys) get a
 // label at least minGap from every other label: all of them when they fit;
@@ -590,10 +635,11 @@ const barW = 4.5
 // gonum/plot keeps room for it about the axis's midpoint, which on a flat
 // map — a long solenoid's — would squeeze the data area to a sliver), and
 // equal horizontal and vertical scales, the canvas shrunk in the direction
-// with room to spare and kept centred. It returns the y label's text and
-// style, cleared from p.
-func mapCanvas(c vg.Canvas, w, h vg.Length, p *plot.Plot) (draw.Canvas, string, text.Style) {
-	barRoom := vg.Length(barW)*vg.Millimeter + vg.Points(44)
+// with room to spare and kept centred. labelW is the widest label the
+// colour bar needs room for beyond its usual ones (0 for none). It returns
+// the y label's text and style, cleared from p.
+func mapCanvas(c vg.Canvas, w, h vg.Length, p *plot.Plot, labelW vg.Length) (draw.Canvas, string, text.Style) {
+	barRoom := vg.Length(barW)*vg.Millimeter + max(vg.Points(44), labelW+vg.Points(12))
 	dc := draw.Canvas{Canvas: c, Rectangle: vg.Rectangle{Max: vg.Point{X: w, Y: h}}}
 	dc = draw.Crop(dc, vg.Points(1), -vg.Points(6)-barRoom, vg.Points(1), -vg.Points(14))
 	ylabel, ysty := p.Y.Label.Text, p.Y.Label.TextStyle

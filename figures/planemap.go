@@ -1,7 +1,6 @@
 package figures
 
 import (
-	"fmt"
 	"image"
 	"image/color"
 	"math"
@@ -47,8 +46,9 @@ var ContourSteps = []float64{-0.5, -0.2, -0.1, -0.05, -0.02, -0.01, 0.01, 0.02, 
 // linear between the smallest and largest value of the map, bilinear
 // between the nodes), white contour lines at the departures Steps from
 // Ref, the coil's outline dashed and the probes as white dots with their
-// names, with a colour bar on the right marked in the departures and
-// labelled in teslas at its ends. Both lengths are drawn to one scale.
+// names, with a colour bar on the right: round values in teslas
+// (BarTicks), the contour levels drawn across it in white, a clipped end
+// as an arrowhead. Both lengths are drawn to one scale.
 func PlaneMap(d PlaneData) DrawFunc {
 	return func(c vg.Canvas, w, h vg.Length) { drawPlaneMap(c, w, h, d) }
 }
@@ -68,7 +68,7 @@ func planeRange(v []float64) (lo, hi float64, ok bool) {
 // beside a conductor the field runs far beyond the centre value, so the
 // colours stop at ±ColourSpan of Ref and the region of interest keeps its
 // shades (values beyond take the end colours); clipLo and clipHi say
-// which end was cut.
+// which end was cut; a cut end is a round value of the colour bar's ticks.
 func (d PlaneData) colourRange(lo, hi float64) (a, b float64, clipLo, clipHi bool) {
 	a, b = lo, hi
 	if r := math.Abs(d.Ref); r > 0 {
@@ -79,7 +79,29 @@ func (d PlaneData) colourRange(lo, hi float64) (a, b float64, clipLo, clipHi boo
 			b, clipHi = v, true
 		}
 	}
+	// A clipped end is moved in to a round value of the bar's ticks, so
+	// that its "≥" label reads as one.
+	if (clipLo || clipHi) && b > a {
+		step := BarTicks(a, b).Step
+		if v := math.Floor(b/step+1e-9) * step; clipHi && v > a {
+			b = v
+		}
+		if v := math.Ceil(a/step-1e-9) * step; clipLo && v < b {
+			a = v
+		}
+	}
 	return a, b, clipLo, clipHi
+}
+
+// ColourScale is the range of d's colour scale (T), and which of its ends
+// is clipped: the values beyond take the end colour, and the colour bar
+// marks the end with an arrowhead.
+func (d PlaneData) ColourScale() (lo, hi float64, clipLo, clipHi bool) {
+	lo, hi, ok := planeRange(d.V)
+	if !ok {
+		return math.NaN(), math.NaN(), false, false
+	}
+	return d.colourRange(lo, hi)
 }
 
 // PlaneLevels returns the contour levels of d, T: Ref·(1 + s) for each
@@ -125,7 +147,7 @@ func drawPlaneMap(c vg.Canvas, w, h vg.Length, d PlaneData) {
 	levels := d.PlaneLevels()
 	p.Add(&planeOverlay{d: d, levels: levels, scale: lp.Factor})
 
-	dc, ylabel, ysty := mapCanvas(c, w, h, p)
+	dc, ylabel, ysty := mapCanvas(c, w, h, p, 0)
 	p.Draw(dc)
 	da := p.DataCanvas(dc)
 	ysty.Rotation = math.Pi / 2
@@ -247,57 +269,144 @@ func (o *planeOverlay) Plot(c draw.Canvas, p *plot.Plot) {
 }
 
 // drawLinearBar draws a plane map's colour bar in r: the gradient from lo
-// (bottom) to hi, the contour levels as ticks labelled in their
-// departure from Ref ("+5 %"), the ends labelled in teslas and the
-// quantity above.
+// (bottom) to hi, ticks at round values labelled in teslas (BarTicks), a
+// clipped end marked by an arrowhead in its colour and labelled "≥" or
+// "≤" its value, the contour levels as white lines across the bar (as
+// they are drawn over the map) and the quantity above.
 func drawLinearBar(c vg.Canvas, r vg.Rectangle, d PlaneData, lo, hi float64, levels []float64, clipLo, clipHi bool) {
+	// The arrowheads take their room from the bar's length.
+	top := r.Max.Y + vg.Points(4)
+	if clipHi {
+		r.Max.Y -= barArrowHeight(r)
+	}
+	if clipLo {
+		r.Min.Y += barArrowHeight(r)
+	}
 	dc := drawBarGradient(c, r)
 	yOf := func(v float64) vg.Length { return r.Min.Y + (r.Max.Y-r.Min.Y)*vg.Length((v-lo)/(hi-lo)) }
+	line := draw.LineStyle{Color: contourInk, Width: vg.Points(0.6)}
+	for _, v := range levels {
+		dc.StrokeLine2(line, r.Min.X, yOf(v), r.Max.X, yOf(v))
+	}
 	sty := style(TickSize, Muted)
 	sty.YAlign = draw.YCenter
 	minGap := sty.Height("0") * 1.15
 	tick := draw.LineStyle{Color: Ink, Width: vg.Points(0.5)}
-	// The ends first, in teslas; then the levels that keep clear of them
-	// and of each other, nearest the reference first.
-	used := []vg.Length{r.Min.Y, r.Max.Y}
-	end := func(v float64, clip bool, sign string) string {
-		if clip {
-			return sign + " " + engLabel(v, "T")
-		}
-		return engLabel(v, "T")
+	bt := BarTicks(lo, hi)
+	var ends []vg.Length
+	if clipHi {
+		barArrow(c, r, true)
+		dc.FillText(sty, vg.Point{X: r.Max.X + vg.Points(3.5), Y: r.Max.Y}, "≥ "+bt.Label(hi))
+		ends = append(ends, r.Max.Y)
 	}
-	dc.FillText(sty, vg.Point{X: r.Max.X + vg.Points(3.5), Y: r.Min.Y}, end(lo, clipLo, "≤"))
-	dc.FillText(sty, vg.Point{X: r.Max.X + vg.Points(3.5), Y: r.Max.Y}, end(hi, clipHi, "≥"))
-	order := append([]float64{}, levels...)
-	for i := 1; i < len(order); i++ { // by |departure|, smallest first
-		for k := i; k > 0 && math.Abs(order[k]/d.Ref-1) < math.Abs(order[k-1]/d.Ref-1); k-- {
-			order[k], order[k-1] = order[k-1], order[k]
-		}
+	if clipLo {
+		barArrow(c, r, false)
+		dc.FillText(sty, vg.Point{X: r.Max.X + vg.Points(3.5), Y: r.Min.Y}, "≤ "+bt.Label(lo))
+		ends = append(ends, r.Min.Y)
 	}
-	for _, v := range order {
+	for _, v := range bt.Values {
 		y := yOf(v)
-		dc.StrokeLine2(tick, r.Min.X, y, r.Max.X+vg.Points(2), y)
 		clear := true
-		for _, u := range used {
-			if math.Abs(float64(y-u)) < float64(minGap) {
-				clear = false
-			}
+		for _, u := range ends {
+			clear = clear && math.Abs(float64(y-u)) >= float64(minGap)
 		}
-		if clear {
-			dc.FillText(sty, vg.Point{X: r.Max.X + vg.Points(3.5), Y: y}, percentLabel(v/d.Ref-1))
-			used = append(used, y)
+		if !clear {
+			continue // the clipped end's label stands there
 		}
+		dc.StrokeLine2(tick, r.Max.X-vg.Points(1.5), y, r.Max.X+vg.Points(2), y)
+		dc.FillText(sty, vg.Point{X: r.Max.X + vg.Points(3.5), Y: y}, bt.Label(v))
 	}
 	title := style(LabelSize, Ink)
 	title.XAlign = draw.XCenter
-	dc.FillText(title, vg.Point{X: (r.Min.X + r.Max.X) / 2, Y: r.Max.Y + vg.Points(4)}, d.Quantity)
+	dc.FillText(title, vg.Point{X: (r.Min.X + r.Max.X) / 2, Y: top}, d.Quantity)
 }
 
-// percentLabel writes a departure as a signed percentage: "+5 %", "−1 %".
-func percentLabel(f float64) string {
-	s := strconv.FormatFloat(math.Round(f*1000)/10, 'f', -1, 64)
-	if f > 0 {
-		return fmt.Sprintf("+%s %%", s)
+// barArrowHeight is the height of a colour bar's end arrowhead.
+func barArrowHeight(r vg.Rectangle) vg.Length { return (r.Max.X - r.Min.X) * 0.8 }
+
+// barArrow draws an arrowhead on the top (or bottom) end of the colour
+// bar r, filled in the colour of that end: the values beyond the end take
+// it.
+func barArrow(c vg.Canvas, r vg.Rectangle, top bool) {
+	h := barArrowHeight(r)
+	y, tip, col := r.Max.Y, r.Max.Y+h, Viridis(1)
+	if !top {
+		y, tip, col = r.Min.Y, r.Min.Y-h, Viridis(0)
 	}
-	return fmt.Sprintf("−%s %%", s[1:])
+	var path vg.Path
+	path.Move(vg.Point{X: r.Min.X, Y: y})
+	path.Line(vg.Point{X: (r.Min.X + r.Max.X) / 2, Y: tip})
+	path.Line(vg.Point{X: r.Max.X, Y: y})
+	path.Close()
+	c.SetColor(col)
+	c.Fill(path)
+	c.SetColor(Muted)
+	c.SetLineWidth(ThinWidth)
+	c.SetLineDash(nil, 0)
+	c.Stroke(path)
+}
+
+// LinearTicks are the labelled ticks of a linear colour bar: round
+// values (multiples of Step, which is 1, 2, 2.5 or 5 times a power of
+// ten) written with one SI prefix for all of them.
+type LinearTicks struct {
+	Values []float64
+	Step   float64
+	Prefix Prefix
+	Unit   string
+	prec   int
+}
+
+// Label writes v as the ticks are written: "−100 µT", "0 µT", "2.5 mT".
+func (t LinearTicks) Label(v float64) string {
+	x := v / t.Prefix.Factor
+	if math.Abs(x) < 1e-9*t.Step/t.Prefix.Factor {
+		x = 0
+	}
+	s := strconv.FormatFloat(x, 'f', t.prec, 64)
+	if x < 0 {
+		s = "−" + s[1:]
+	}
+	return s + " " + t.Prefix.Symbol + t.Unit
+}
+
+// BarTicks chooses a linear colour bar's ticks over [lo, hi] (T): the
+// finest step of 1, 2, 2.5 or 5 times a power of ten that leaves at most
+// six ticks on the bar, which for any range leaves at least three.
+func BarTicks(lo, hi float64) LinearTicks {
+	t := LinearTicks{Unit: "T", Prefix: Prefix{"", 1}}
+	if !(hi > lo) || math.IsInf(hi-lo, 0) {
+		return t
+	}
+	count := func(step float64) int {
+		return int(math.Floor(hi/step+1e-9) - math.Ceil(lo/step-1e-9) + 1)
+	}
+	mag := math.Pow(10, math.Floor(math.Log10((hi-lo)/10)))
+	t.Step = 10 * mag
+search:
+	for e := 0; e < 4; e++ {
+		for _, f := range []float64{1, 2, 2.5, 5} {
+			if s := f * mag * math.Pow(10, float64(e)); count(s) <= 6 {
+				t.Step = s
+				break search
+			}
+		}
+	}
+	for k := math.Ceil(lo/t.Step - 1e-9); k <= math.Floor(hi/t.Step+1e-9); k++ {
+		t.Values = append(t.Values, k*t.Step)
+	}
+	m := 0.0
+	for _, v := range t.Values {
+		m = math.Max(m, math.Abs(v))
+	}
+	t.Prefix = EngPrefix(m)
+	if m == 0 {
+		t.Prefix = EngPrefix(t.Step)
+	}
+	st := t.Step / t.Prefix.Factor
+	t.prec = int(math.Max(0, -math.Floor(math.Log10(st)+1e-9)))
+	if p := math.Pow(10, float64(t.prec)); math.Abs(st*p-math.Round(st*p)) > 1e-6 {
+		t.prec++
+	}
+	return t
 }

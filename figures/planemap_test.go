@@ -2,6 +2,7 @@ package figures
 
 import (
 	"math"
+	"strings"
 	"testing"
 
 	"gonum.org/v1/plot/vg/recorder"
@@ -53,14 +54,6 @@ func TestPlaneContoursLinear(t *testing.T) {
 	}
 }
 
-func TestPercentLabel(t *testing.T) {
-	for f, want := range map[float64]string{0.05: "+5 %", -0.01: "−1 %", 0.005: "+0.5 %", -0.5: "−50 %"} {
-		if got := percentLabel(f); got != want {
-			t.Errorf("percentLabel(%g) = %q, want %q", f, got, want)
-		}
-	}
-}
-
 // Beside a conductor the value runs far beyond the reference: the colour
 // scale stops at ±ColourSpan of it, the bar says so, and no contour is
 // drawn beyond it.
@@ -83,5 +76,76 @@ func TestPlaneMapClipsColours(t *testing.T) {
 	}
 	if !top {
 		t.Error(`the clipped top is not labelled "≥ 2.5 T"`)
+	}
+}
+
+// A linear colour bar's ticks are round values, three to six of them,
+// inside the bar, each labelled with its unit; the labels are distinct.
+func TestBarTicks(t *testing.T) {
+	ranges := [][2]float64{
+		{-114e-6, 366e-6}, {-30.7e-6, 163e-6}, {0.9, 2.5}, {1.000e-4, 1.003e-4},
+		{-5e-3, -1e-3}, {0, 1e-9}, {-1, 1}, {3.3e-6, 9.9e-6}, {0.1, 0.12}, {17, 1e4},
+	}
+	for _, r := range ranges {
+		bt := BarTicks(r[0], r[1])
+		if n := len(bt.Values); n < 3 || n > 6 {
+			t.Errorf("[%g, %g]: %d ticks %v, want 3 to 6", r[0], r[1], n, bt.Values)
+		}
+		m := bt.Step / math.Pow(10, math.Floor(math.Log10(bt.Step)+1e-12))
+		if round := math.Abs(m-1) < 1e-9 || math.Abs(m-2) < 1e-9 || math.Abs(m-2.5) < 1e-9 || math.Abs(m-5) < 1e-9; !round {
+			t.Errorf("[%g, %g]: step %g is not 1, 2, 2.5 or 5 times a power of ten", r[0], r[1], bt.Step)
+		}
+		seen := map[string]bool{}
+		for _, v := range bt.Values {
+			if v < r[0]-1e-12*math.Abs(r[1]-r[0]) || v > r[1]+1e-12*math.Abs(r[1]-r[0]) {
+				t.Errorf("[%g, %g]: tick %g outside the bar", r[0], r[1], v)
+			}
+			if k := v / bt.Step; math.Abs(k-math.Round(k)) > 1e-6 {
+				t.Errorf("[%g, %g]: tick %g is not a multiple of the step %g", r[0], r[1], v, bt.Step)
+			}
+			l := bt.Label(v)
+			if !strings.HasSuffix(l, "T") || seen[l] {
+				t.Errorf("[%g, %g]: label %q (without unit, or repeated)", r[0], r[1], l)
+			}
+			seen[l] = true
+		}
+	}
+	bt := BarTicks(-114e-6, 366e-6)
+	var got []string
+	for _, v := range bt.Values {
+		got = append(got, bt.Label(v))
+	}
+	if want := "−100 µT,0 µT,100 µT,200 µT,300 µT"; strings.Join(got, ",") != want {
+		t.Errorf("labels %q, want %q", strings.Join(got, ","), want)
+	}
+}
+
+// The plane map's colour bar carries its round ticks and no label
+// without a unit.
+func TestPlaneMapBarLabels(t *testing.T) {
+	x := []float64{-1, -0.5, 0, 0.5, 1}
+	d := PlaneData{X: x, Y: x, Ref: 3e-4, Steps: ContourSteps, Quantity: "Bz"}
+	for _, yv := range x {
+		for _, xv := range x {
+			d.V = append(d.V, 3e-4*(1-0.3*(xv*xv+yv*yv))-1e-4*xv*xv*yv*yv)
+		}
+	}
+	var c recorder.Canvas
+	PlaneMap(d)(&c, 400, 300)
+	bar := map[string]bool{}
+	for _, a := range c.Actions {
+		if fs, ok := a.(*recorder.FillString); ok && strings.HasSuffix(fs.String, "T") && !strings.HasSuffix(fs.String, "m)") {
+			bar[fs.String] = true
+		}
+		if fs, ok := a.(*recorder.FillString); ok && strings.HasSuffix(fs.String, "%") {
+			t.Errorf("bar label %q: the ticks are in teslas", fs.String)
+		}
+	}
+	lo, hi, _ := planeRange(d.V)
+	bt := BarTicks(lo, hi)
+	for _, v := range bt.Values {
+		if !bar[bt.Label(v)] {
+			t.Errorf("tick %q not drawn (drawn: %v)", bt.Label(v), bar)
+		}
 	}
 }

@@ -85,6 +85,17 @@ func profilePlot(d ProfileData) (*plot.Plot, vg.Length, []plotter.XYs) {
 	}
 	for _, lv := range d.Levels {
 		y := lv.Y / yp.Factor
+		if lv.Local {
+			m := &localLevel{z0: lv.Z0 / zp.Factor, z1: lv.Z1 / zp.Factor, y: y}
+			p.Add(m)
+			p.Legend.Add(lv.Label, m)
+			// What the legend keeps clear of: the bar's stretch, at least
+			// a twentieth of the axis.
+			half := math.Max((m.z1-m.z0)/2, (xhi-xlo)/40)
+			mid := (m.z0 + m.z1) / 2
+			avoid = append(avoid, plotter.XYs{{X: mid - half, Y: y}, {X: mid + half, Y: y}})
+			continue
+		}
 		line := plotter.XYs{{X: xlo, Y: y}, {X: xhi, Y: y}}
 		if l := addCurve(p, []plotter.XYs{line}, lineStyle(Highlight, ThinWidth, Dashed)); l != nil {
 			p.Legend.Add(lv.Label, l)
@@ -115,13 +126,18 @@ func profilePlot(d ProfileData) (*plot.Plot, vg.Length, []plotter.XYs) {
 type spanPlot struct {
 	spans [][2]float64
 	scale float64
+	fill  color.Color // spanFill when nil
 }
 
 var spanFill = color.NRGBA{R: 0xb0, G: 0x5a, B: 0x1c, A: 0x22}
 
 func (s *spanPlot) Plot(c draw.Canvas, p *plot.Plot) {
 	trX, _ := p.Transforms(&c)
-	c.SetColor(spanFill)
+	if s.fill != nil {
+		c.SetColor(s.fill)
+	} else {
+		c.SetColor(spanFill)
+	}
 	for _, sp := range s.spans {
 		a, b := math.Max(sp[0]/s.scale, p.X.Min), math.Min(sp[1]/s.scale, p.X.Max)
 		if !(b > a) {
@@ -139,4 +155,49 @@ func (s *spanPlot) Plot(c draw.Canvas, p *plot.Plot) {
 		path.Close()
 		c.Fill(path)
 	}
+}
+
+// localLevel draws a level that applies at one axial position (z0 == z1)
+// as a short solid bar centred there, LocalBarWidth long, with end ticks;
+// or over a stretch as a solid line between end ticks. The axis units are
+// the plot's.
+type localLevel struct {
+	z0, z1, y float64
+}
+
+// LocalBarWidth is the length of the bar that marks a level applying at
+// one point of a profile.
+const LocalBarWidth = vg.Length(24)
+
+var localStyle = draw.LineStyle{Color: Highlight, Width: LineWidth}
+
+// span is the bar's ends in canvas coordinates.
+func (l *localLevel) span(c draw.Canvas, p *plot.Plot) (x0, x1, y vg.Length) {
+	trX, trY := p.Transforms(&c)
+	x0, x1, y = trX(l.z0), trX(l.z1), trY(l.y)
+	if x1-x0 < LocalBarWidth {
+		mid := (x0 + x1) / 2
+		x0, x1 = mid-LocalBarWidth/2, mid+LocalBarWidth/2
+	}
+	return x0, x1, y
+}
+
+func (l *localLevel) Plot(c draw.Canvas, p *plot.Plot) {
+	x0, x1, y := l.span(c, p)
+	tk := vg.Points(3)
+	c.StrokeLine2(localStyle, x0, y, x1, y)
+	thin := draw.LineStyle{Color: Highlight, Width: ThinWidth}
+	c.StrokeLine2(thin, x0, y-tk, x0, y+tk)
+	c.StrokeLine2(thin, x1, y-tk, x1, y+tk)
+}
+
+// Thumbnail draws the legend's sample: the bar with its end ticks.
+func (l *localLevel) Thumbnail(c *draw.Canvas) {
+	y := c.Center().Y
+	x0, x1 := c.Min.X+vg.Points(3), c.Max.X-vg.Points(3)
+	tk := vg.Points(3)
+	c.StrokeLine2(localStyle, x0, y, x1, y)
+	thin := draw.LineStyle{Color: Highlight, Width: ThinWidth}
+	c.StrokeLine2(thin, x0, y-tk, x0, y+tk)
+	c.StrokeLine2(thin, x1, y-tk, x1, y+tk)
 }

@@ -1,6 +1,7 @@
 package figures
 
 import (
+	"image/color"
 	"math"
 	"strings"
 	"testing"
@@ -95,5 +96,75 @@ func TestDeviationRequirement(t *testing.T) {
 	d.Bands = []float64{0.001, 0.0001}
 	if all := drawnTexts(DeviationPlot(d), 400, 220); !strings.Contains(all, "B/B(0) − 1 (ppm)") || !strings.Contains(all, "|1000|") {
 		t.Errorf("tight bands not in ppm: %s", all)
+	}
+}
+
+// A requirement that applies at the centre is drawn as a short bar there,
+// not across the plot; a level without a place still spans the whole
+// axis. Measured on the strokes drawn in the requirement's colour and
+// width (the legend's sample lies beyond the data's right half).
+func TestProfileLocalRequirement(t *testing.T) {
+	var z, bz []float64
+	for i := 0; i <= 100; i++ {
+		x := -0.2 + 0.4*float64(i)/100
+		z = append(z, x)
+		bz = append(bz, 1e-3/(1+math.Pow(x/0.1, 8)))
+	}
+	spans := func(lv Level) [][2]vg.Length {
+		d := ProfileData{Axis: "z", Z: z, Y: bz, YName: "Axial flux density Bz", Unit: "T", Levels: []Level{lv}}
+		var c recorder.Canvas
+		Profile(d)(&c, 400, 220)
+		var out [][2]vg.Length
+		var col color.Color
+		var width vg.Length
+		for _, a := range c.Actions {
+			switch a := a.(type) {
+			case *recorder.SetColor:
+				col = a.Color
+			case *recorder.SetLineWidth:
+				width = a.Width
+			case *recorder.Stroke:
+				if col != Highlight || (width != LineWidth && width != ThinWidth) {
+					continue
+				}
+				lo, hi := vg.Length(math.Inf(1)), vg.Length(math.Inf(-1))
+				ys := map[vg.Length]bool{}
+				for _, cp := range a.Path {
+					lo, hi = min(lo, cp.Pos.X), max(hi, cp.Pos.X)
+					ys[cp.Pos.Y] = true
+				}
+				if len(ys) == 1 && hi > lo { // horizontal strokes only
+					out = append(out, [2]vg.Length{lo, hi})
+				}
+			}
+		}
+		return out
+	}
+	full := spans(Level{Y: 0.8e-3, Label: "required"})
+	widest := vg.Length(0)
+	for _, s := range full {
+		widest = max(widest, s[1]-s[0])
+	}
+	if widest < 300 {
+		t.Errorf("a level without a place spans %v of a 400-wide figure", widest)
+	}
+	local := spans(Level{Y: 0.8e-3, Label: "required at the centre", Local: true})
+	if len(local) < 2 {
+		t.Fatalf("local level: %d horizontal strokes, want the bar and its legend sample", len(local))
+	}
+	for _, s := range local {
+		if w := s[1] - s[0]; w > LocalBarWidth+1e-9 {
+			t.Errorf("local level drawn %v wide, want at most %v", w, LocalBarWidth)
+		}
+	}
+	found := false
+	for _, s := range local {
+		mid := (s[0] + s[1]) / 2
+		if math.Abs(float64(s[1]-s[0]-LocalBarWidth)) < 1e-9 && mid > 150 && mid < 260 {
+			found = true
+		}
+	}
+	if !found {
+		t.Errorf("no bar of %v near the middle of the figure: %v", LocalBarWidth, local)
 	}
 }

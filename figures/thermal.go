@@ -12,6 +12,13 @@ import (
 type Level struct {
 	Y     float64
 	Label string
+	// Local marks a level that applies at one place or over one stretch
+	// of the abscissa only, from Z0 to Z1 (m, in a profile's axial
+	// position): a profile draws it as a short solid bar at Z0 when Z0 ==
+	// Z1 (a requirement at the centre), else as a band over the stretch,
+	// not across the whole plot.
+	Local  bool
+	Z0, Z1 float64
 }
 
 // Curve is one named temperature curve: times (s) and temperatures (°C).

@@ -19,7 +19,7 @@ func TestWarmUpFigure(t *testing.T) {
 	}
 	var c recorder.Canvas
 	WarmUp([]Curve{{"energised continuously", ts, ys}, {"on/off cycle", tc, yc}},
-		Level{155, "insulation class 155 °C"}, Level{140, "steady 140 °C"})(&c, 400, 220)
+		Level{Y: 155, Label: "insulation class 155 °C"}, Level{Y: 140, Label: "steady 140 °C"})(&c, 400, 220)
 	var all []string
 	for _, a := range c.Actions {
 		if fs, ok := a.(*recorder.FillString); ok {

@@ -6,6 +6,7 @@ import (
 
 	"gonum.org/v1/plot"
 	"gonum.org/v1/plot/plotter"
+	"gonum.org/v1/plot/text"
 	"gonum.org/v1/plot/vg"
 	"gonum.org/v1/plot/vg/draw"
 )
@@ -16,6 +17,9 @@ import (
 type TradeSeries struct {
 	X, Y     []float64
 	Feasible []bool
+	// Label names the series at its top end (its largest Y), e.g. the
+	// wire's gauge; "" for none.
+	Label string
 }
 
 // TradeData is a trade-off figure: choices as points of one result (X)
@@ -61,9 +65,14 @@ func Trade(d TradeData) DrawFunc {
 	scaled := func(x, y []float64) []plotter.XYs { return segments(x, y, xp.Factor, yp.Factor, logX || logY) }
 	var trace, mark *plotter.Scatter
 	var traceLine *plotter.Line
+	labels := &seriesLabels{}
 	for _, s := range d.Series {
 		segs := scaled(s.X, s.Y)
 		curves = append(curves, segs...)
+		if at, ok := topPoint(segs); ok && s.Label != "" {
+			labels.at = append(labels.at, at)
+			labels.text = append(labels.text, s.Label)
+		}
 		if d.Line {
 			if l := addCurve(p, segs, lineStyle(Accent, LineWidth, nil)); l != nil && traceLine == nil {
 				traceLine = l
@@ -115,6 +124,14 @@ func Trade(d TradeData) DrawFunc {
 			curves = append(curves, line)
 		}
 	}
+	if len(labels.text) > 0 {
+		p.Add(labels)
+		for _, at := range labels.at {
+			// The legend keeps clear of the labels too (a point above each
+			// anchor on a log axis is near enough).
+			curves = append(curves, plotter.XYs{at})
+		}
+	}
 	var chosen *plotter.Scatter
 	if !math.IsNaN(d.ChosenX) && !math.IsNaN(d.ChosenY) {
 		pt := plotter.XYs{{X: d.ChosenX / xp.Factor, Y: d.ChosenY / yp.Factor}}
@@ -145,6 +162,85 @@ func Trade(d TradeData) DrawFunc {
 		p.Legend.Add("chosen", chosen)
 	}
 	return Drawer(p, curves...)
+}
+
+// topPoint is the point of largest Y of segs.
+func topPoint(segs []plotter.XYs) (plotter.XY, bool) {
+	var best plotter.XY
+	ok := false
+	for _, s := range segs {
+		for _, q := range s {
+			if !ok || q.Y > best.Y {
+				best, ok = q, true
+			}
+		}
+	}
+	return best, ok
+}
+
+// seriesLabels names each series of a trade figure just above its top
+// point, centred on it; a label that would overlap one set before it is
+// moved up a row at a time (at most three rows), and one that would leave
+// the data area at the top is set below its point instead.
+type seriesLabels struct {
+	at   []plotter.XY
+	text []string
+}
+
+func (sl *seriesLabels) Plot(c draw.Canvas, p *plot.Plot) {
+	for _, r := range sl.boxes(c, p) {
+		sty := seriesLabelStyle()
+		c.FillText(sty, r.Min, r.text)
+	}
+}
+
+// seriesLabelBox is a placed label: its text and box (Min is where the
+// text is set, bottom left).
+type seriesLabelBox struct {
+	vg.Rectangle
+	text string
+}
+
+func seriesLabelStyle() text.Style {
+	sty := style(markLabelSize, Ink)
+	sty.XAlign, sty.YAlign = draw.XLeft, draw.YBottom
+	return sty
+}
+
+// boxes places the labels (seriesLabels' rule) in canvas coordinates.
+func (sl *seriesLabels) boxes(c draw.Canvas, p *plot.Plot) []seriesLabelBox {
+	trX, trY := p.Transforms(&c)
+	sty := seriesLabelStyle()
+	rowH := sty.Height("0")
+	var placed []seriesLabelBox
+	overlaps := func(r vg.Rectangle) bool {
+		for _, q := range placed {
+			if r.Min.X < q.Max.X+vg.Points(1) && q.Min.X < r.Max.X+vg.Points(1) && r.Min.Y < q.Max.Y && q.Min.Y < r.Max.Y {
+				return true
+			}
+		}
+		return false
+	}
+	for i, at := range sl.at {
+		x, y := trX(at.X), trY(at.Y)
+		w := sty.Width(sl.text[i])
+		x0 := min(max(x-w/2, c.Min.X), c.Max.X-w)
+		box := func(y0 vg.Length) vg.Rectangle {
+			return vg.Rectangle{Min: vg.Point{X: x0, Y: y0}, Max: vg.Point{X: x0 + w, Y: y0 + rowH}}
+		}
+		r := box(y + vg.Points(2))
+		for k := 0; k < 3 && overlaps(r); k++ {
+			r = box(r.Min.Y + rowH)
+		}
+		if r.Max.Y > c.Max.Y {
+			r = box(y - vg.Points(2) - rowH)
+			for k := 0; k < 3 && overlaps(r); k++ {
+				r = box(r.Min.Y - rowH)
+			}
+		}
+		placed = append(placed, seriesLabelBox{Rectangle: r, text: sl.text[i]})
+	}
+	return placed
 }
 
 // scatter adds the points of segs to p as dots of colour c; it returns

@@ -5,17 +5,20 @@ import (
 
 	"gonum.org/v1/plot/plotter"
 	"gonum.org/v1/plot/vg"
+	"gonum.org/v1/plot/vg/draw"
 )
 
 // Sensitivity draws a horizontal grouped bar chart: for each result (a
 // row, named in results) one bar per tolerance (named in tolerances, one
 // colour each from Viridis) of swing[r][t], in per cent. NaN bars are
-// left out.
+// left out. The swing axis reaches past the longest bar on either side
+// of zero, and the legend stands to the right of the bars, outside the
+// data area, so that no bar runs into the frame or under the legend.
 func Sensitivity(results, tolerances []string, swing [][]float64) DrawFunc {
 	pl := NewPlot("Change from the tolerance's low to its high end (% of nominal)", "")
 	n := len(tolerances)
 	width := vg.Points(math.Min(3, 11/float64(max(n, 1))))
-	var curves []plotter.XYs
+	lo, hi := 0.0, 0.0
 	for t := range n {
 		v := make(plotter.Values, len(results))
 		for r := range results {
@@ -24,7 +27,7 @@ func Sensitivity(results, tolerances []string, swing [][]float64) DrawFunc {
 				x = 0
 			}
 			v[len(results)-1-r] = x
-			curves = append(curves, plotter.XYs{{X: x, Y: float64(len(results) - 1 - r)}})
+			lo, hi = math.Min(lo, x), math.Max(hi, x)
 		}
 		b, err := plotter.NewBarChart(v, width)
 		if err != nil {
@@ -43,7 +46,44 @@ func Sensitivity(results, tolerances []string, swing [][]float64) DrawFunc {
 		rev[len(results)-1-i] = r
 	}
 	pl.NominalY(rev...)
-	return Drawer(pl, curves...)
+	pl.X.Min, pl.X.Max = SwingRange(lo, hi)
+	// Each row's group of bars within its own unit of height.
+	pl.Y.Min, pl.Y.Max = -0.5, float64(len(results))-0.5
+	return func(c vg.Canvas, w, h vg.Length) {
+		dc := draw.Canvas{Canvas: c, Rectangle: vg.Rectangle{Max: vg.Point{X: w, Y: h}}}
+		dc = draw.Crop(dc, vg.Points(1), -vg.Points(4), vg.Points(1), -vg.Points(4))
+		// The legend's room on the right, outside the data area: set just
+		// past the data area's right edge (the legend is laid out from the
+		// data area's left edge, less the axis padding).
+		const gap = 10
+		room := pl.Legend.Rectangle(dc).Size().X + vg.Points(gap)
+		pc := draw.Crop(dc, 0, -room, 0, 0)
+		da := pl.DataCanvas(pc)
+		pl.Legend.Top, pl.Legend.Left = true, true
+		pl.Legend.XOffs = da.Max.X - da.Min.X + 2*pl.X.Padding + vg.Points(gap)
+		pl.Legend.YOffs = 0
+		pl.Draw(pc)
+	}
+}
+
+// SwingRange is the swing axis of a Sensitivity figure for bars from lo
+// ≤ 0 to hi ≥ 0 (per cent): zero and both ends, each widened by a tenth
+// of the span, so that the longest bars end clear of the frame.
+func SwingRange(lo, hi float64) (min, max float64) {
+	lo, hi = math.Min(lo, 0), math.Max(hi, 0)
+	span := hi - lo
+	if !(span > 0) {
+		return -1, 1
+	}
+	pad := 0.1 * span
+	min, max = lo-pad, hi+pad
+	if lo == 0 {
+		min = -pad / 2 // bars one way: zero stays near the frame
+	}
+	if hi == 0 {
+		max = pad / 2
+	}
+	return min, max
 }
 
 // Histogram draws the distribution of samples of quantity, SI in unit, as

@@ -374,9 +374,11 @@ func (c *composer) drawCentreRequirement(i int, centre float64, d *figures.Profi
 	if !ok {
 		return caption, text
 	}
-	d.Levels = append(d.Levels, figures.Level{Y: math.Copysign(req.Limit.Required, centre), Label: "required |B| " + relText(req.Limit) + " " + Eng(req.Limit.Required, "T", 3)})
-	caption += "; dashed: the required centre field"
-	text += fmt.Sprintf(" The required centre field (dashed) is %s.", map[bool]string{true: "met", false: "not met"}[req.Pass])
+	// The requirement holds at the centre: a short bar there, not a line
+	// across the plot.
+	d.Levels = append(d.Levels, figures.Level{Y: math.Copysign(req.Limit.Required, centre), Label: "required |B| " + relText(req.Limit) + " " + Eng(req.Limit.Required, "T", 3) + " at the centre", Local: true})
+	caption += "; short bar at the centre: the required centre field"
+	text += fmt.Sprintf(" The required centre field (the short bar at the centre) is %s.", map[bool]string{true: "met", false: "not met"}[req.Pass])
 	return caption, text
 }
 
@@ -467,8 +469,13 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 	}
 	// The figure's horizontal axis is z, its vertical the radial
 	// coordinate.
-	drawMap := figures.FieldMap(figures.MapData{X: m.Z, Y: m.X, B: m.B, Sections: sections,
-		XLabel: xLabel, YLabel: yLabel})
+	md := figures.MapData{X: m.Z, Y: m.X, B: m.B, Sections: sections,
+		XLabel: xLabel, YLabel: yLabel}
+	cored := cs.Kinds.Core != nil
+	if cored && m.PeakCore {
+		md.CorePeak = m.Peak
+	}
+	drawMap := figures.FieldMap(md)
 	n := c.figure + 1
 	if c.mapped == nil {
 		c.mapped = map[*analysis.MapData]drawnMap{}
@@ -481,11 +488,22 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 	text := fmt.Sprintf("Figure %d maps the magnitude of the flux density of coil %q alone over %s, on a logarithmic colour scale with contour lines at 1–2–5 steps per decade; the winding cross-sections are drawn in.",
 		n, co.Name, plane)
 	if centre, edge, ok := mapLevels(m); ok {
-		text += " " + mapPeakText(co, m, cs.Kinds.Core != nil) + fmt.Sprintf("; it is %s at the centre and at most %s on the map's edge.", Eng(centre, "T", 3), Eng(edge, "T", 3))
+		text += " " + mapPeakText(co, m, cored) + fmt.Sprintf("; it is %s at the centre and at most %s on the map's edge.", Eng(centre, "T", 3), Eng(edge, "T", 3))
+	}
+	coreCap := ""
+	if cored {
+		text += " The core is drawn in grey, not in the colours of the scale"
+		coreCap = "; grey: the core"
+		if md.CoreAbove() {
+			top := md.Scale().Hi
+			text += fmt.Sprintf(": inside it |B| reaches %s, above the scale's top of %s, which the grey arrowhead atop the colour bar marks", Eng(m.Peak, "T", 3), Eng(top, "T", 3))
+			coreCap = fmt.Sprintf("; grey: the core, whose |B| of up to %s lies above the colour scale, as the grey arrowhead atop the colour bar marks", Eng(m.Peak, "T", 3))
+		}
+		text += "."
 	}
 	c.para(text)
 	c.fig(doc.Figure{
-		Caption: fmt.Sprintf("|B| of coil %q over %s (coil frame; colour scale: viridis, van der Walt & Smith 2015, logarithmic; contours at the values marked on the colour bar)", co.Name, plane),
+		Caption: fmt.Sprintf("|B| of coil %q over %s (coil frame; colour scale: viridis, van der Walt & Smith 2015, logarithmic; contours at the values marked on the colour bar%s)", co.Name, plane, coreCap),
 		Width:   figWidth, Height: h, Draw: drawMap,
 		Summary: fmt.Sprintf("Map of |B|: z from %s to %s, %s from %s to %s, %d × %d points.",
 			Eng(-zHalf, "m", 3), Eng(zHalf, "m", 3), map[bool]string{true: "x", false: "ρ"}[co.Form == calc.Rectangle],
@@ -671,10 +689,10 @@ func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult, cs *analysis.Coi
 		l := calc.Limit{Relation: rel}
 		// The requirement is on the magnitude; the line is drawn on the
 		// side of the curve, and its label says so.
-		d.Levels = append(d.Levels, figures.Level{Y: math.Copysign(g, G), Label: "required |" + grad + "| " + relText(l) + " " + Eng(g, "T/m", 3)})
-		caption += "; dashed: the required gradient"
+		d.Levels = append(d.Levels, figures.Level{Y: math.Copysign(g, G), Label: "required |" + grad + "| " + relText(l) + " " + Eng(g, "T/m", 3) + " at the centre", Local: true})
+		caption += "; short bar at the centre: the required gradient"
 		met := (rel == calc.AtLeast && math.Abs(G) >= g) || (rel == calc.AtMost && math.Abs(G) <= g)
-		text += fmt.Sprintf(" The required gradient, %s %s (dashed), is %s at the centre.", relText(l), Eng(g, "T/m", 3), map[bool]string{true: "met", false: "not met"}[met])
+		text += fmt.Sprintf(" The required gradient, %s %s (the short bar at the centre), is %s at the centre.", relText(l), Eng(g, "T/m", 3), map[bool]string{true: "met", false: "not met"}[met])
 	}
 	c.para(text)
 	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight * 0.85, Draw: figures.Profile(d),

@@ -110,13 +110,34 @@ func (c *composer) planeFigure(co calc.Coil, pm *analysis.PlaneMap) {
 			marked, dots = "The coil's mean turn is dashed and the probe is marked.", "; dot: the probe"
 		}
 	}
-	c.para(fmt.Sprintf("Figure %d maps %s of coil %q alone over that plane on a linear colour scale, with contour lines at %s of the centre value%s. %s",
-		n, bs, co.Name, levels, read, marked))
+	contours := fmt.Sprintf(", with contour lines at %s of the centre value%s", levels, read)
+	contoursCap := fmt.Sprintf("; white contours at %s of the centre value, drawn across the colour bar too", levels)
+	if len(d.PlaneLevels()) == 0 {
+		var all []float64
+		for _, st := range figures.ContourSteps {
+			all = append(all, 1+st)
+		}
+		contours = fmt.Sprintf(", without contour lines: none of the departures from the centre value they are drawn at (%s) falls inside the map's range", stepsText(all, 1))
+		contoursCap = ""
+	}
+	c.para(fmt.Sprintf("Figure %d maps %s of coil %q alone over that plane on a linear colour scale%s. %s",
+		n, bs, co.Name, contours, marked))
+	// A clipped end of the colour scale: the values beyond it take its
+	// colour (an arrowhead on the bar).
+	var clipped string
+	switch lo, hi, clipLo, clipHi := d.ColourScale(); {
+	case clipLo && clipHi:
+		clipped = fmt.Sprintf(", clipped at %s and %s, beyond which the end colours stand (arrowheads)", Eng(lo, "T", 3), Eng(hi, "T", 3))
+	case clipHi:
+		clipped = fmt.Sprintf(", clipped at %s: above it the top colour (arrowhead)", Eng(hi, "T", 3))
+	case clipLo:
+		clipped = fmt.Sprintf(", clipped at %s: below it the bottom colour (arrowhead)", Eng(lo, "T", 3))
+	}
 	// The height follows the map's proportions, as the meridian map's.
 	fh := vg.Length(100*pm.VHalf/pm.UHalf)*vg.Millimeter + 22*vg.Millimeter
 	fh = max(min(fh, 110*vg.Millimeter), 55*vg.Millimeter)
 	c.fig(doc.Figure{
-		Caption: fmt.Sprintf("%s of coil %q over %s (colour scale: viridis, van der Walt & Smith 2015, linear; white contours at the departures from the centre value marked on the colour bar; dashed: the coil's mean turn%s)", bs, co.Name, where, dots),
+		Caption: fmt.Sprintf("%s of coil %q over %s (colour scale: viridis, van der Walt & Smith 2015, linear%s%s; dashed: the coil's mean turn%s)", bs, co.Name, where, clipped, contoursCap, dots),
 		Width:   figWidth, Height: fh, Draw: figures.PlaneMap(d),
 		Summary: fmt.Sprintf("Map of %s over %s: %s at the centre, from %s to %s over %s, %d × %d points.",
 			bs, where, Eng(pm.Centre, "T", 3), Eng(pm.Min, "T", 3), Eng(pm.Max, "T", 3), sizeText(2*pm.UHalf, 2*pm.VHalf), len(pm.U), len(pm.V)),
@@ -186,9 +207,6 @@ func stepsText(levels []float64, ref float64) string {
 			sign = "−"
 		}
 		out = append(out, sign+strconv.FormatFloat(a, 'f', -1, 64)+" %")
-	}
-	if len(out) == 0 {
-		return "the departures marked on the colour bar"
 	}
 	return strings.Join(out, ", ")
 }

@@ -54,20 +54,41 @@ func (c *composer) receiver() {
 				f, s = append(f, p.Frequency), append(s, p.Sensitivity)
 			}
 			var marks []figures.Mark
+			var dotted []string
 			if r.Frequency > 0 {
-				marks = append(marks, figures.Mark{X: r.Frequency, Label: "f"})
+				marks = append(marks, figures.Mark{X: r.Frequency, Label: "f " + Eng(r.Frequency, "Hz", 3)})
+				dotted = append(dotted, "the design frequency f")
 			}
 			if fsr := r.SelfResonance; fsr > 0 && fsr <= f[len(f)-1] {
-				marks = append(marks, figures.Mark{X: fsr, Label: "f_sr"})
+				marks = append(marks, figures.Mark{X: fsr, Label: "self-resonance " + Eng(fsr, "Hz", 3)})
+				dotted = append(dotted, "the self-resonance")
+			}
+			// The stated band, shaded where it lies in the range plotted.
+			var band [2]float64
+			var bandLabel, shaded string
+			if lo, hi := co.BandLow, co.BandHigh; lo > 0 && hi > lo && hi > f[0] && lo < f[len(f)-1] {
+				band = [2]float64{lo, hi}
+				bandLabel = "stated band, " + Eng(lo, "Hz", 3) + " to " + Eng(hi, "Hz", 3)
+				shaded = fmt.Sprintf("; shaded: the stated band, %s to %s", Eng(lo, "Hz", 3), Eng(hi, "Hz", 3))
+				if lo < f[0] || hi > f[len(f)-1] {
+					shaded += ", as far as it lies in the range plotted"
+				}
 			}
 			n := c.figure + 1
 			reading, lead := responseLeadIn(n, r, f, s)
 			if reading != "" {
 				c.para(reading)
 			}
+			if band[0] > 0 {
+				lead += fmt.Sprintf(" The stated band, %s to %s, is shaded.", Eng(band[0], "Hz", 3), Eng(band[1], "Hz", 3))
+			}
 			c.para(lead)
-			c.fig(doc.Figure{Caption: fmt.Sprintf("Terminal sensitivity of coil %q against frequency (lumped R–L–C model)", co.Name),
-				Width: figWidth, Height: figHeight * 0.85, Draw: figures.Response(f, s, marks...),
+			caption := fmt.Sprintf("Terminal sensitivity of coil %q against frequency (lumped R–L–C model%s", co.Name, shaded)
+			if len(dotted) > 0 {
+				caption += "; dotted: " + joinAnd(dotted)
+			}
+			c.fig(doc.Figure{Caption: caption + ")",
+				Width: figWidth, Height: figHeight * 0.85, Draw: figures.Response(f, s, band, bandLabel, marks...),
 				Summary: fmt.Sprintf("Peak near %s.", Eng(r.SelfResonance, "Hz", 3))})
 		}
 	}

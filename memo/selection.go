@@ -3,6 +3,7 @@ package memo
 import (
 	"fmt"
 	"math"
+	"strconv"
 	"strings"
 
 	"coilmemo/analysis"
@@ -144,8 +145,17 @@ func (c *composer) tradeFigure(sz *analysis.Sizing) {
 		ChosenX: sz.Chosen.Moment, ChosenY: chosenY,
 		FeasibleLabel: "meets the layout and heat requirements", OtherLabel: "excluded"}
 	moment := false
+	// Each trace is labelled with its wire: the gauge number alone when
+	// every wire is a gauge (the caption says AWG), else the wire's name.
+	gauges := true
 	for _, s := range sz.Curves {
-		ts := figures.TradeSeries{Feasible: s.Feasible}
+		gauges = gauges && s.Wire.Gauge != calc.NoGauge
+	}
+	for _, s := range sz.Curves {
+		ts := figures.TradeSeries{Feasible: s.Feasible, Label: s.Wire.Name()}
+		if gauges {
+			ts.Label = strconv.Itoa(s.Wire.Gauge)
+		}
 		for i := range s.Turns {
 			ts.X = append(ts.X, s.Moment[i])
 			ts.Y = append(ts.Y, y(s, i))
@@ -167,9 +177,13 @@ func (c *composer) tradeFigure(sz *analysis.Sizing) {
 			td.YLimits = append(td.YLimits, l.Required)
 		}
 	}
-	c.para(fmt.Sprintf("Figure %d shows every choice searched, one trace per wire over its turn counts: its magnetic moment across and its %s up. With the drive fixed, the wire chiefly sets the moment and the turns the %s; the dots are the choices that meet every requirement the layout and heat balance decide, the dashed lines the requirements, and the ring the choice.",
+	c.para(fmt.Sprintf("Figure %d shows every choice searched, one trace per wire over its turn counts, labelled with the wire at its top: its magnetic moment across and its %s up. With the drive fixed, the wire chiefly sets the moment and the turns the %s; the dots are the choices that meet every requirement the layout and heat balance decide, the dashed lines the requirements, and the ring the choice.",
 		c.figure+1, strings.ToLower(yName), strings.ToLower(yName)))
-	c.fig(doc.Figure{Caption: fmt.Sprintf("The choices searched: moment against %s, per wire", strings.ToLower(yName)),
+	named := "each trace labelled with its wire at its top"
+	if gauges {
+		named = "each trace labelled with its wire gauge, AWG, at its top"
+	}
+	c.fig(doc.Figure{Caption: fmt.Sprintf("The choices searched: moment against %s, per wire (%s)", strings.ToLower(yName), named),
 		Width: figWidth, Height: figHeight * 0.8, Draw: figures.Trade(td)})
 }
 

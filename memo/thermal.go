@@ -460,7 +460,9 @@ func (c *composer) warmUpFigure(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 		if wu.CycleT != nil {
 			ct, chot := wu.CycleT, wu.CycleHot
 			curves = append(curves, figures.Curve{Name: "on/off cycle", T: ct, Y: celsiusAll(chot)})
-			caption += fmt.Sprintf(", and on the duty cycle (on %s, off %s)", duration(cy.On), duration(cy.Off))
+			// The periodic peak as a level too: the curve's peaks climb to it.
+			levels = append(levels, figures.Level{Y: Celsius(cy.PeakHot), Label: "steady, cycle peak: " + Eng(Celsius(cy.PeakHot), "°C", 3)})
+			caption += fmt.Sprintf(", and on the duty cycle (on %s, off %s), its periodic peak as a level", duration(cy.On), duration(cy.Off))
 		} else {
 			levels = append(levels, figures.Level{Y: Celsius(cy.PeakHot), Label: "steady, cycle peak: " + Eng(Celsius(cy.PeakHot), "°C", 3)})
 			caption += "; the periodic peak of the duty cycle, whose periods are too short to draw, as a level"
@@ -488,6 +490,12 @@ func (c *composer) warmUpFigure(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 	}
 	if cy.On > 0 && cy.Settled {
 		lead += fmt.Sprintf("; on the duty cycle it peaks at %s", Eng(Celsius(cy.PeakHot), "°C", 3))
+		switch {
+		case wu.CycleT != nil && wu.CycleReached:
+			lead += " (the dotted level of the cycle's peak, which the curve's peaks reach within the time plotted)"
+		case wu.CycleT != nil:
+			lead += " (the dotted level of the cycle's peak, which the curve's peaks approach)"
+		}
 	}
 	c.para(lead + ".")
 	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight * 0.85,
