@@ -725,10 +725,18 @@ func (r *renderer) table(t doc.Table) {
 	}
 	if tl.capH > (bodyBottom-bodyTop)/3 {
 		// a caption this long flows on its own above the table
+		kind := r.kind
+		r.kind = "table caption"
 		r.flowLines(tl.cap, styCaption, 8, 3)
+		r.kind = kind
 		tl.cap, tl.capH = nil, 0
 	}
+	// The start kept together (caption, header, first rows) is recorded
+	// as such, and every row as a "table" box of its own.
+	kind := r.kind
+	r.kind = "table start"
 	r.need(8, tableStart(tl))
+	r.kind = kind
 	y := r.y
 	for _, l := range tl.cap {
 		r.drawLine(l, r.x, y+baselineOffset(sizeCaption, leadCaption))
@@ -785,8 +793,11 @@ func (r *renderer) tableContinued(tl *tableLayout, y float64) float64 {
 	st.color = colMuted
 	st.italic = true
 	r.simpleText(cont, st, r.x, y+baselineOffset(sizeCaption, leadCaption))
+	top := y
 	y += leadCaption + 3
-	return r.tableHead(tl, y)
+	y = r.tableHead(tl, y)
+	r.place("table head", top, y)
+	return y
 }
 
 // splitRow sets a row too tall for a page in slices of its lines, each
@@ -817,6 +828,7 @@ func (r *renderer) splitRow(tl *tableLayout, cells []cellBox, y float64, onPage 
 		}
 		h := float64(k)*leadTable + 2*cellPadY
 		r.tableRow(tl, slice, y, h)
+		r.place("table", y, y+h)
 		y += h
 		onPage++
 		start += k
