@@ -17,7 +17,7 @@ import (
 // (testdata/figures), from the layout engine's own placement records: no
 // page before the last more than 40 % blank (page 1, which the memo ends
 // on purpose, the contents page and a page before a new section
-// included), no heading starting in the bottom 15 % of a page's text
+// included), a last page holding more than a few lines, no heading starting in the bottom 15 % of a page's text
 // area, a heading on the page its first block starts on with more than a
 // line of it, a figure's lead-in and a lead-in ending in a colon (page
 // 1's "Cautions raised") on the page of what it introduces, and a table
@@ -174,9 +174,20 @@ func pageRuleViolations(l *pdf.Layout) []string {
 			out = append(out, fmt.Sprintf("page %d of %d: %.0f %% blank%s", p, l.Pages, 100*blank, why))
 		}
 	}
+	// The last page holds more than a few lines: a closing section split
+	// with only its end on the last page is set whole there instead.
+	if p := l.Pages; p > 1 {
+		if fill := 1 - pageBlank(l, bottom[p]); fill < lastPageFill {
+			out = append(out, fmt.Sprintf("page %d of %d, the last: %.0f %% of the text area filled", p, l.Pages, 100*fill))
+		}
+	}
 	slices.Sort(out)
 	return out
 }
+
+// lastPageFill is the least part of the text area the last page of a memo
+// of several pages holds.
+const lastPageFill = 0.15
 
 // The rule checker finds what it is for: a page half blank (before a new
 // section too), a heading at the foot or parted from its first block, a
@@ -209,7 +220,7 @@ func TestPageRuleViolations(t *testing.T) {
 		{Page: 3, Block: 4, Kind: "table head", Top: 100, Bottom: 130},
 		{Page: 3, Block: 4, Kind: "table", Top: 130, Bottom: 150},
 		{Page: 3, Block: 5, Kind: "heading", Top: 150, Bottom: 170},
-		{Page: 3, Block: 6, Kind: "paragraph", Top: 170, Bottom: 200},
+		{Page: 3, Block: 6, Kind: "paragraph", Top: 170, Bottom: 400},
 	}}
 	has(pageRuleViolations(l), "page 1 of 3: 60 % blank", "page 2: a heading starts 86 %",
 		"lead-in (block 1), its figure on page 2", "page 3: 1 row of table block 4 alone")
@@ -249,7 +260,7 @@ func TestPageRuleViolations(t *testing.T) {
 		{Page: 3, Block: 3, Kind: "heading", Top: 100, Bottom: 120},
 		{Page: 3, Block: 4, Kind: "paragraph", Top: 120, Bottom: 140},
 	}}
-	has(pageRuleViolations(l), "page 1 of 3: 80 % blank", "page 2 of 3: 80 % blank")
+	has(pageRuleViolations(l), "page 1 of 3: 80 % blank", "page 2 of 3: 80 % blank", "page 3 of 3, the last: 4 % of the text area filled")
 	// A lead-in parted from its list is found; one kept with it is not.
 	blocks := []doc.Block{doc.Text("Cautions raised:"), doc.List{}, doc.Text("Then:"), doc.List{}}
 	l = &pdf.Layout{Pages: 2, Boxes: []pdf.Box{{Page: 1, Block: 0}, {Page: 2, Block: 1}, {Page: 2, Block: 2}, {Page: 2, Block: 3}}}

@@ -99,7 +99,7 @@ func (r *renderer) heading(h doc.Heading, next doc.Block) {
 		below += nl.hs.before + nl.h + nl.hs.after
 	}
 	if !r.fresh && (hl.h+hl.hs.after+keep > r.room(hl.hs.before) ||
-		r.y+max(r.space, hl.hs.before) > floor || math.IsInf(below, 1)) {
+		r.y+max(r.space, hl.hs.before) > floor || math.IsInf(below, 1) || r.closingWhole(h, hl)) {
 		r.newPage()
 	}
 	r.need(hl.hs.before, hl.h)
@@ -151,6 +151,51 @@ func (r *renderer) longHeading(h doc.Heading, hl headingLayout, number int) {
 	r.flowLines(hl.lines, hl.hs.st, 0, hl.hs.after)
 	r.x, r.w = ox, ow
 }
+
+// closingWhole reports whether heading h (laid out as hl) opens the
+// document's closing section — a level-1 heading with none after it —
+// that is to start the next page so as to be set whole: the section fits
+// on a page but not in the rest of this one, and split it would leave the
+// last page only its short end (under closingTail of the text area),
+// while ending this page here leaves it no more than closingBlank blank.
+// The section is measured by laying it out alone on a fresh page, in a
+// dry renderer continuing this one's numbering.
+func (r *renderer) closingWhole(h doc.Heading, hl headingLayout) bool {
+	if r.measuring || r.depth > 0 || h.Level > 1 {
+		return false
+	}
+	for _, b := range r.rest {
+		if n, ok := b.(doc.Heading); ok && n.Level <= 1 {
+			return false
+		}
+		if _, ok := b.(doc.PageBreak); ok {
+			return false
+		}
+	}
+	body := bodyBottom - bodyTop
+	if (bodyBottom-r.y)/body > closingBlank {
+		return false
+	}
+	m := newRenderer(&doc.Document{Meta: r.meta, Blocks: append([]doc.Block{h}, r.rest...)}, options{}, 0, true)
+	m.measuring = true
+	m.eqs, m.texts = r.eqs, r.texts
+	m.h1, m.fig, m.tab = r.h1, r.fig, r.tab
+	if err := m.run(); err != nil || m.pdf.PageNo() > 1 {
+		return false
+	}
+	tall := m.y - bodyTop
+	room := r.room(hl.hs.before)
+	return tall > room && tall-room < closingTail*body
+}
+
+// closingTail is the part of the text area below which the end of a
+// closing section split over two pages is too short to be a memo's last
+// page; closingBlank is how much of the page before it may be left blank
+// to set the section whole instead.
+const (
+	closingTail  = 0.25
+	closingBlank = 0.40
+)
 
 // headingFloor is the fraction of the text area below which no heading
 // starts.

@@ -201,6 +201,9 @@ type renderer struct {
 	blocks []doc.Block
 	total  int  // page count, 0 while unknown
 	dry    bool // lay out only
+	// measuring: a layout of part of the document to measure it
+	// (closingWhole), which measures nothing itself.
+	measuring bool
 	// late: the footers and the contents' page numbers are left to
 	// finishPages (the set pass of layOutTwice); finished once it has run.
 	late, finished bool
