@@ -302,31 +302,12 @@ func coreStudy(cs *CoilStudy, co calc.Coil, cr *calc.CoilResult, k *calc.CoreRes
 	cr.Dipole = calc.CoredDipoleDistances(co, w, cr.Current, *k)
 	src := calc.NewCoilSource(co, w, cr.Current)
 	fr := calc.CoilFrame(co.Axis)
-	field := func(x, z float64) calc.Vec {
-		p := co.Centre.Add(fr.E1.Scale(x)).Add(fr.U.Scale(z))
-		return src.At(p).Add(calc.CorePoleField(co, *k, p))
-	}
 
-	// On the axis.
-	size := math.Max(AxialSize(co), co.Core.Length/2)
-	p := AxisProfile{Dipole1pc: cr.Dipole.Axis1, Peak: math.Inf(-1)}
-	zmax := 6 * size
-	if !math.IsNaN(p.Dipole1pc) {
-		zmax = math.Max(zmax, 1.5*p.Dipole1pc)
-	}
-	for i := range axisPoints {
-		z := -zmax + 2*zmax*float64(i)/float64(axisPoints-1)
-		b := field(0, z).Norm()
-		p.Z, p.Exact = append(p.Z, z), append(p.Exact, b)
-		p.Peak = math.Max(p.Peak, b)
-		dip := math.NaN()
-		if math.Abs(z) > size {
-			dip = calc.DipoleField(cr.Moment, fr.U.Scale(z)).Norm()
-		}
-		p.Dipole = append(p.Dipole, dip)
-	}
-	p.DipoleNear = dipoleNear(p)
-	cs.Axis = p
+	// On the axis: the winding and the rod's poles, as at a probe
+	// (coredResults).
+	cs.Axis = sampleAxis(co, *cr, math.Max(AxialSize(co), co.Core.Length/2), axisPoints, func(p calc.Vec) calc.Vec {
+		return src.At(p).Add(calc.CorePoleField(co, *k, p))
+	})
 
 	// The map, over the winding and the rod's ends.
 	old := cs.Map

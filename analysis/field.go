@@ -159,20 +159,25 @@ func boreProfile(co calc.Coil, cr calc.CoilResult, src *calc.CoilSource, fr calc
 }
 
 func profileOnAxis(co calc.Coil, cr calc.CoilResult, n int) AxisProfile {
-	w := cr.Winding
+	src := calc.NewCoilSource(co, cr.Winding, cr.Current)
+	p := sampleAxis(co, cr, AxialSize(co), n, src.At)
+	p.Bore = boreProfile(co, cr, src, calc.CoilFrame(co.Axis))
+	return p
+}
+
+// sampleAxis is the on-axis profile of coil block co (results cr) with
+// field B, the block's own field at a point, n points over ±profileReach
+// (size the block's axial size): |B|, and the dipole field of cr's moment
+// at the points farther from the centre than size. The probes' field is
+// the same B at the same points (TestProbeAtProfilePoint).
+func sampleAxis(co calc.Coil, cr calc.CoilResult, size float64, n int, B func(calc.Vec) calc.Vec) AxisProfile {
 	fr := calc.CoilFrame(co.Axis)
-	src := calc.NewCoilSource(co, w, cr.Current)
-	size := AxialSize(co)
 	p := AxisProfile{Dipole1pc: cr.Dipole.Axis1, Peak: math.Inf(-1)}
-	zmax := 6 * size
-	if !math.IsNaN(p.Dipole1pc) {
-		zmax = math.Max(zmax, 1.5*p.Dipole1pc)
-	}
+	zmax := profileReach(size, p.Dipole1pc)
 	for i := 0; i < n; i++ {
 		z := -zmax + 2*zmax*float64(i)/float64(n-1)
-		pt := co.Centre.Add(fr.U.Scale(z))
 		p.Z = append(p.Z, z)
-		b := src.At(pt).Norm()
+		b := B(co.Centre.Add(fr.U.Scale(z))).Norm()
 		p.Exact = append(p.Exact, b)
 		p.Peak = math.Max(p.Peak, b)
 		dip := math.NaN()
@@ -181,9 +186,26 @@ func profileOnAxis(co calc.Coil, cr calc.CoilResult, n int) AxisProfile {
 		}
 		p.Dipole = append(p.Dipole, dip)
 	}
-	p.Bore = boreProfile(co, cr, src, fr)
 	p.DipoleNear = dipoleNear(p)
 	return p
+}
+
+// profileReach is how far the on-axis profile reaches either side of the
+// centre: six times the block's axial size, or 1.5 times the distance
+// beyond which the point dipole is within 1 % if that is farther, rounded
+// up to two significant figures, so that the memo, giving it to three,
+// names the very point whose field it quotes (a probe placed there reads
+// the profile's end value).
+func profileReach(size, dipole1pc float64) float64 {
+	z := 6 * size
+	if !math.IsNaN(dipole1pc) {
+		z = math.Max(z, 1.5*dipole1pc)
+	}
+	if !(z > 0) || math.IsInf(z, 0) {
+		return z
+	}
+	unit := math.Pow(10, math.Floor(math.Log10(z))-1)
+	return math.Ceil(z/unit*(1-1e-12)) * unit
 }
 
 // dipoleNear is AxisProfile.DipoleNear of p.

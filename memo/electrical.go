@@ -134,7 +134,7 @@ func selfInductanceSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStud
 		if l/D < calc.WheelerValidRatio {
 			rng = fmt.Sprintf("outside its range, so it is no check here (it differs by %s %%)", Sig(100*(wh/Ls-1), 2))
 		}
-		add(Step{What: fmt.Sprintf("Cross-check of the current sheet by Wheeler's formula (Wheeler, Proc. IRE 16, 1928), stated within about 1 %% for ℓ > 0.4 D: here ℓ/D = %s, %s", Sig(l/D, 3), rng),
+		add(Step{What: fmt.Sprintf("Cross-check of the current sheet by Wheeler's formula (Wheeler, Proc. IRE 16 (1928) 1398–1400), stated within about 1 %% for ℓ > 0.4 D: here ℓ/D = %s, %s", Sig(l/D, 3), rng),
 			Symbolic: `L_W = \frac{\mu_0 \pi a^2 N^2}{\ell + 0.9 a}`,
 			Numbers:  fmt.Sprintf(`\frac{\mu_0 \pi \cdot %s^2 \cdot %d^2}{%s + 0.9 \cdot %s}`, Paren(Q(a, "m", 4)), n, Q(l, "m", 4), Q(a, "m", 4)),
 			Result:   Q(wh, "H", 4)})
@@ -164,7 +164,7 @@ func selfInductanceSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStud
 				// b ≫ a, c: 0.8 a²N²/(9b) against the long solenoid's a²N²/(10b)
 				rng += "; for a winding far longer than it is deep it tends to 8/9 of the long solenoid's μ0πa²N²/b, some 11 % low"
 			}
-			add(Step{What: fmt.Sprintf("Cross-check by Wheeler's multilayer formula (Wheeler, Proc. IRE 16, 1928; 0.8 a²N²/(6a + 9b + 10c) µH in inches; recalled from memory) with mean radius a, length b, radial build c%s: %s; it differs by %s %%",
+			add(Step{What: fmt.Sprintf("Cross-check by Wheeler's multilayer formula, 0.8 a²N²/(6a + 9b + 10c) µH with the lengths in inches (Wheeler, Proc. IRE 16 (1928) 1398–1400), with mean radius a, length b, radial build c%s: %s; it differs by %s %%",
 				laidWords(cs), rng, Sig(100*(lw/L1-1), 2)),
 				Symbolic: `L_W = \frac{31.50\,\unit{µH/m} \cdot a^2 N^2}{6a + 9b + 10c}`,
 				Numbers:  fmt.Sprintf(`\frac{31.50\,\unit{µH/m} \cdot %s^2 \cdot %d^2}{6 \cdot %s + 9 \cdot %s + 10 \cdot %s}`, Paren(Q(a, "m", 4)), n, Q(a, "m", 4), Q(b, "m", 4), Q(cb, "m", 4)),

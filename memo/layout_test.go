@@ -15,11 +15,14 @@ import (
 
 // The page rules, over every example's memo and every figure-test design
 // (testdata/figures), from the layout engine's own placement records: no
-// page before the last more than 40 % blank (a page the memo ends on
-// purpose, page 1 and the contents page, included) unless the next page
-// opens a new major section, no heading starting in the bottom 15 % of a
-// page's text area, and a lead-in ending in a colon (page 1's "Cautions
-// raised") on the page of what it introduces.
+// page before the last more than 40 % blank (page 1, which the memo ends
+// on purpose, the contents page and a page before a new section
+// included), a last page holding more than a few lines, no heading starting in the bottom 15 % of a page's text
+// area, a heading on the page its first block starts on with more than a
+// line of it, a figure's lead-in and a lead-in ending in a colon (page
+// 1's "Cautions raised") on the page of what it introduces, and a table
+// split over pages with its header repeated on every page it continues
+// on and two rows or more on each.
 func TestExamplePages(t *testing.T) {
 	files, err := filepath.Glob("../examples/*.md")
 	if err != nil || len(files) == 0 {
@@ -48,7 +51,7 @@ func TestExamplePages(t *testing.T) {
 			if err != nil {
 				t.Fatal(err)
 			}
-			for _, p := range pageRuleViolations(l, majorStarts(d.Blocks)) {
+			for _, p := range pageRuleViolations(l) {
 				t.Error(p)
 			}
 			for _, p := range leadInViolations(d.Blocks, l) {
@@ -56,17 +59,6 @@ func TestExamplePages(t *testing.T) {
 			}
 		})
 	}
-}
-
-// majorStarts marks the top-level blocks that are level-1 headings.
-func majorStarts(blocks []doc.Block) map[int]bool {
-	out := map[int]bool{}
-	for i, b := range blocks {
-		if h, ok := b.(doc.Heading); ok && h.Level <= 1 {
-			out[i] = true
-		}
-	}
-	return out
 }
 
 // leadInViolations lists the lead-ins — paragraphs ending in a colon —
@@ -96,14 +88,21 @@ func leadInViolations(blocks []doc.Block, l *pdf.Layout) []string {
 	return out
 }
 
-// pageRuleViolations lists the pages that break the rules; major marks
-// the blocks that open a new major section (a page before one may end
-// short).
-func pageRuleViolations(l *pdf.Layout, major map[int]bool) []string {
+// pageBlank is the part of a page's text area below the last thing placed
+// on it.
+func pageBlank(l *pdf.Layout, bottom float64) float64 {
+	return 1 - (bottom-l.BodyTop)/(l.BodyBottom-l.BodyTop)
+}
+
+// pageRuleViolations lists the pages that break the rules.
+func pageRuleViolations(l *pdf.Layout) []string {
 	var out []string
 	body := l.BodyBottom - l.BodyTop
 	bottom := make([]float64, l.Pages+1)
 	low := map[int]bool{}
+	first, last := map[int]int{}, map[int]int{}
+	kind := map[int]string{}
+	table := map[int]int{} // the page each table starts on
 	for _, b := range l.Boxes {
 		if b.Page < 1 || b.Page > l.Pages {
 			continue
@@ -113,54 +112,61 @@ func pageRuleViolations(l *pdf.Layout, major map[int]bool) []string {
 			low[b.Block] = true
 			out = append(out, fmt.Sprintf("page %d: a heading starts %.0f %% down the text area", b.Page, 100*(b.Top-l.BodyTop)/body))
 		}
+		if _, ok := first[b.Block]; !ok {
+			first[b.Block] = b.Page
+			kind[b.Block] = b.Kind
+		}
+		last[b.Block] = b.Page
+		if _, ok := table[b.Block]; !ok && b.Kind == "table start" {
+			table[b.Block] = b.Page
+		}
 	}
-	// A heading keeps more than a line or two of what it heads on its
-	// page ("11 Safety" and its one-line introduction at a page foot).
+	// A heading starts the page of its first block, and keeps more than a
+	// line or two of what it heads on its page ("11 Safety" and its
+	// one-line introduction at a page foot).
 	for _, b := range l.Boxes {
-		if b.Kind == "heading" && b.Page < l.Pages && bottom[b.Page]-b.Bottom < 0.03*body {
+		if b.Kind != "heading" {
+			continue
+		}
+		if p, ok := first[b.Block+1]; ok && p != b.Page {
+			out = append(out, fmt.Sprintf("page %d: a heading (block %d), its first block on page %d", b.Page, b.Block, p))
+		} else if b.Page < l.Pages && bottom[b.Page]-b.Bottom < 0.03*body {
 			out = append(out, fmt.Sprintf("page %d: a heading with %.0f %% of the text area below it at the page foot", b.Page, 100*(bottom[b.Page]-b.Bottom)/body))
 		}
 	}
 	// A paragraph right before a figure (its lead-in) ends on the
-	// figure's page; a table split over pages has two rows or more on
-	// every page.
-	first, last := map[int]int{}, map[int]int{}
-	kind := map[int]string{}
+	// figure's page; a table split over pages has its header again and
+	// two rows or more on every page.
 	rows := map[[2]int]int{}
+	head := map[[2]int]bool{}
 	for _, b := range l.Boxes {
-		if _, ok := first[b.Block]; !ok {
-			first[b.Block] = b.Page
-		}
-		last[b.Block] = b.Page
-		kind[b.Block] = b.Kind
-		if b.Kind == "table" {
+		switch b.Kind {
+		case "table":
 			rows[[2]int{b.Block, b.Page}]++
+		case "table head":
+			head[[2]int{b.Block, b.Page}] = true
 		}
 	}
 	for i, k := range kind {
 		if k == "paragraph" && kind[i+1] == "figure" && last[i] != first[i+1] {
 			out = append(out, fmt.Sprintf("page %d: a figure's lead-in (block %d), its figure on page %d", last[i], i, first[i+1]))
 		}
-		if k == "table" && first[i] != last[i] {
-			for p := first[i]; p <= last[i]; p++ {
-				if n := rows[[2]int{i, p}]; n == 1 {
-					out = append(out, fmt.Sprintf("page %d: one row of table block %d alone", p, i))
-				}
+	}
+	for i, start := range table {
+		if start == last[i] {
+			continue
+		}
+		for p := start; p <= last[i]; p++ {
+			if n := rows[[2]int{i, p}]; n < 2 {
+				out = append(out, fmt.Sprintf("page %d: %d row of table block %d alone", p, n, i))
+			}
+			if p > start && !head[[2]int{i, p}] {
+				out = append(out, fmt.Sprintf("page %d: table block %d continued without its header", p, i))
 			}
 		}
 	}
-	opens := map[int]int{} // the first block of each page
-	for _, b := range l.Boxes {
-		if _, ok := opens[b.Page]; !ok {
-			opens[b.Page] = b.Block
-		}
-	}
 	for p := 1; p < l.Pages; p++ {
-		blank := 1 - (bottom[p]-l.BodyTop)/body
-		if next, ok := opens[p+1]; ok && major[next] {
-			continue
-		}
-		if blank > 0.40 {
+		if blank := pageBlank(l, bottom[p]); blank > 0.40 {
 			why := ""
 			if slices.Contains(l.Broken, p) {
 				why = " (ended by a page break)"
@@ -168,35 +174,69 @@ func pageRuleViolations(l *pdf.Layout, major map[int]bool) []string {
 			out = append(out, fmt.Sprintf("page %d of %d: %.0f %% blank%s", p, l.Pages, 100*blank, why))
 		}
 	}
+	// The last page holds more than a few lines: a closing section split
+	// with only its end on the last page is set whole there instead.
+	if p := l.Pages; p > 1 {
+		if fill := 1 - pageBlank(l, bottom[p]); fill < lastPageFill {
+			out = append(out, fmt.Sprintf("page %d of %d, the last: %.0f %% of the text area filled", p, l.Pages, 100*fill))
+		}
+	}
+	slices.Sort(out)
 	return out
 }
 
-// The rule checker finds what it is for: a page half blank, a heading at
-// the foot, a lead-in parted from its figure, a lone table row.
+// lastPageFill is the least part of the text area the last page of a memo
+// of several pages holds.
+const lastPageFill = 0.15
+
+// The rule checker finds what it is for: a page half blank (before a new
+// section too), a heading at the foot or parted from its first block, a
+// lead-in parted from its figure, a lone table row, a table continued
+// without its header.
 func TestPageRuleViolations(t *testing.T) {
+	has := func(got []string, want ...string) {
+		t.Helper()
+		for _, w := range want {
+			found := false
+			for _, g := range got {
+				found = found || strings.Contains(g, w)
+			}
+			if !found {
+				t.Errorf("missing %q in %q", w, got)
+			}
+		}
+		if len(got) != len(want) {
+			t.Errorf("%d findings, want %d: %q", len(got), len(want), got)
+		}
+	}
 	l := &pdf.Layout{Pages: 3, BodyTop: 100, BodyBottom: 1100, Boxes: []pdf.Box{
 		{Page: 1, Block: 0, Kind: "heading", Top: 100, Bottom: 120},
 		{Page: 1, Block: 1, Kind: "paragraph", Top: 120, Bottom: 500},
 		{Page: 2, Block: 2, Kind: "figure", Top: 100, Bottom: 900},
 		{Page: 2, Block: 3, Kind: "heading", Top: 960, Bottom: 980},
-		{Page: 2, Block: 4, Kind: "table", Top: 980, Bottom: 1000},
-		{Page: 2, Block: 4, Kind: "table", Top: 1000, Bottom: 1090},
-		{Page: 3, Block: 4, Kind: "table", Top: 100, Bottom: 120},
-		{Page: 3, Block: 5, Kind: "heading", Top: 120, Bottom: 140},
+		{Page: 2, Block: 4, Kind: "table start", Top: 980, Bottom: 1040},
+		{Page: 2, Block: 4, Kind: "table", Top: 1020, Bottom: 1040},
+		{Page: 2, Block: 4, Kind: "table", Top: 1040, Bottom: 1090},
+		{Page: 3, Block: 4, Kind: "table head", Top: 100, Bottom: 130},
+		{Page: 3, Block: 4, Kind: "table", Top: 130, Bottom: 150},
+		{Page: 3, Block: 5, Kind: "heading", Top: 150, Bottom: 170},
+		{Page: 3, Block: 6, Kind: "paragraph", Top: 170, Bottom: 400},
 	}}
-	got := pageRuleViolations(l, nil)
-	for _, want := range []string{"page 1 of 3: 60 % blank", "page 2: a heading starts 86 %", "lead-in (block 1), its figure on page 2", "page 3: one row of table block 4 alone"} {
-		found := false
-		for _, g := range got {
-			found = found || strings.Contains(g, want)
-		}
-		if !found {
-			t.Errorf("missing %q in %q", want, got)
-		}
-	}
-	if len(got) != 4 {
-		t.Errorf("%d findings, want 4: %q", len(got), got)
-	}
+	has(pageRuleViolations(l), "page 1 of 3: 60 % blank", "page 2: a heading starts 86 %",
+		"lead-in (block 1), its figure on page 2", "page 3: 1 row of table block 4 alone")
+	// A table continued without its header; a heading whose first block
+	// starts the next page.
+	l = &pdf.Layout{Pages: 3, BodyTop: 100, BodyBottom: 1100, Boxes: []pdf.Box{
+		{Page: 1, Block: 0, Kind: "table start", Top: 100, Bottom: 160},
+		{Page: 1, Block: 0, Kind: "table", Top: 140, Bottom: 160},
+		{Page: 1, Block: 0, Kind: "table", Top: 160, Bottom: 1090},
+		{Page: 2, Block: 0, Kind: "table", Top: 100, Bottom: 120},
+		{Page: 2, Block: 0, Kind: "table", Top: 120, Bottom: 140},
+		{Page: 2, Block: 1, Kind: "paragraph", Top: 140, Bottom: 700},
+		{Page: 2, Block: 2, Kind: "heading", Top: 700, Bottom: 720},
+		{Page: 3, Block: 3, Kind: "paragraph", Top: 100, Bottom: 300},
+	}}
+	has(pageRuleViolations(l), "page 2: table block 0 continued without its header", "page 2: a heading (block 2), its first block on page 3")
 	// A heading and one line at a page foot.
 	foot := &pdf.Layout{Pages: 2, BodyTop: 100, BodyBottom: 1100, Boxes: []pdf.Box{
 		{Page: 1, Block: 0, Kind: "paragraph", Top: 100, Bottom: 900},
@@ -204,25 +244,23 @@ func TestPageRuleViolations(t *testing.T) {
 		{Page: 1, Block: 2, Kind: "paragraph", Top: 940, Bottom: 960},
 		{Page: 2, Block: 3, Kind: "paragraph", Top: 100, Bottom: 1000},
 	}}
-	if got := pageRuleViolations(foot, nil); len(got) != 1 || !strings.Contains(got[0], "a heading with 2 % of the text area below it") {
-		t.Errorf("a heading and one line at the foot: %q", got)
-	}
-	l.Boxes = l.Boxes[2:4]
-	l.Boxes[1].Top = 800
-	l.Pages = 1
-	if got := pageRuleViolations(l, nil); len(got) != 0 {
-		t.Errorf("a clean page: %q", got)
-	}
-	// A short page before a new major section is no fault.
+	has(pageRuleViolations(foot), "a heading with 2 % of the text area below it")
+	// A clean page.
+	l = &pdf.Layout{Pages: 1, BodyTop: 100, BodyBottom: 1100, Boxes: []pdf.Box{
+		{Page: 1, Block: 2, Kind: "figure", Top: 100, Bottom: 900},
+		{Page: 1, Block: 3, Kind: "heading", Top: 800, Bottom: 820},
+	}}
+	has(pageRuleViolations(l))
+	// A short page before a new section is as much a fault as any other;
+	// the last page may be short.
 	l = &pdf.Layout{Pages: 3, BodyTop: 100, BodyBottom: 1100, Boxes: []pdf.Box{
 		{Page: 1, Block: 0, Kind: "paragraph", Top: 100, Bottom: 300},
 		{Page: 2, Block: 1, Kind: "heading", Top: 100, Bottom: 120},
 		{Page: 2, Block: 2, Kind: "paragraph", Top: 120, Bottom: 300},
 		{Page: 3, Block: 3, Kind: "heading", Top: 100, Bottom: 120},
+		{Page: 3, Block: 4, Kind: "paragraph", Top: 120, Bottom: 140},
 	}}
-	if got := pageRuleViolations(l, map[int]bool{1: true}); len(got) != 1 || !strings.Contains(got[0], "page 2 of 3") {
-		t.Errorf("short page before a major section: %q, want page 2 alone", got)
-	}
+	has(pageRuleViolations(l), "page 1 of 3: 80 % blank", "page 2 of 3: 80 % blank", "page 3 of 3, the last: 4 % of the text area filled")
 	// A lead-in parted from its list is found; one kept with it is not.
 	blocks := []doc.Block{doc.Text("Cautions raised:"), doc.List{}, doc.Text("Then:"), doc.List{}}
 	l = &pdf.Layout{Pages: 2, Boxes: []pdf.Box{{Page: 1, Block: 0}, {Page: 2, Block: 1}, {Page: 2, Block: 2}, {Page: 2, Block: 3}}}

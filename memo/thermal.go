@@ -323,7 +323,7 @@ func heatCapacitySteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy,
 }
 
 func specificHeatSource(m calc.Material) string {
-	return "CRC Handbook of Chemistry and Physics, recalled"
+	return m.SpecificHeatSource
 }
 
 func formerWords(co calc.Coil, source string) string {

@@ -99,7 +99,7 @@ func (r *renderer) heading(h doc.Heading, next doc.Block) {
 		below += nl.hs.before + nl.h + nl.hs.after
 	}
 	if !r.fresh && (hl.h+hl.hs.after+keep > r.room(hl.hs.before) ||
-		r.y+max(r.space, hl.hs.before) > floor || math.IsInf(below, 1)) {
+		r.y+max(r.space, hl.hs.before) > floor || math.IsInf(below, 1) || r.closingWhole(h, hl)) {
 		r.newPage()
 	}
 	r.need(hl.hs.before, hl.h)
@@ -151,6 +151,51 @@ func (r *renderer) longHeading(h doc.Heading, hl headingLayout, number int) {
 	r.flowLines(hl.lines, hl.hs.st, 0, hl.hs.after)
 	r.x, r.w = ox, ow
 }
+
+// closingWhole reports whether heading h (laid out as hl) opens the
+// document's closing section — a level-1 heading with none after it —
+// that is to start the next page so as to be set whole: the section fits
+// on a page but not in the rest of this one, and split it would leave the
+// last page only its short end (under closingTail of the text area),
+// while ending this page here leaves it no more than closingBlank blank.
+// The section is measured by laying it out alone on a fresh page, in a
+// dry renderer continuing this one's numbering.
+func (r *renderer) closingWhole(h doc.Heading, hl headingLayout) bool {
+	if r.measuring || r.depth > 0 || h.Level > 1 {
+		return false
+	}
+	for _, b := range r.rest {
+		if n, ok := b.(doc.Heading); ok && n.Level <= 1 {
+			return false
+		}
+		if _, ok := b.(doc.PageBreak); ok {
+			return false
+		}
+	}
+	body := bodyBottom - bodyTop
+	if (bodyBottom-r.y)/body > closingBlank {
+		return false
+	}
+	m := newRenderer(&doc.Document{Meta: r.meta, Blocks: append([]doc.Block{h}, r.rest...)}, options{}, 0, true)
+	m.measuring = true
+	m.eqs, m.texts = r.eqs, r.texts
+	m.h1, m.fig, m.tab = r.h1, r.fig, r.tab
+	if err := m.run(); err != nil || m.pdf.PageNo() > 1 {
+		return false
+	}
+	tall := m.y - bodyTop
+	room := r.room(hl.hs.before)
+	return tall > room && tall-room < closingTail*body
+}
+
+// closingTail is the part of the text area below which the end of a
+// closing section split over two pages is too short to be a memo's last
+// page; closingBlank is how much of the page before it may be left blank
+// to set the section whole instead.
+const (
+	closingTail  = 0.25
+	closingBlank = 0.40
+)
 
 // headingFloor is the fraction of the text area below which no heading
 // starts.
@@ -725,10 +770,18 @@ func (r *renderer) table(t doc.Table) {
 	}
 	if tl.capH > (bodyBottom-bodyTop)/3 {
 		// a caption this long flows on its own above the table
+		kind := r.kind
+		r.kind = "table caption"
 		r.flowLines(tl.cap, styCaption, 8, 3)
+		r.kind = kind
 		tl.cap, tl.capH = nil, 0
 	}
+	// The start kept together (caption, header, first rows) is recorded
+	// as such, and every row as a "table" box of its own.
+	kind := r.kind
+	r.kind = "table start"
 	r.need(8, tableStart(tl))
+	r.kind = kind
 	y := r.y
 	for _, l := range tl.cap {
 		r.drawLine(l, r.x, y+baselineOffset(sizeCaption, leadCaption))
@@ -785,8 +838,11 @@ func (r *renderer) tableContinued(tl *tableLayout, y float64) float64 {
 	st.color = colMuted
 	st.italic = true
 	r.simpleText(cont, st, r.x, y+baselineOffset(sizeCaption, leadCaption))
+	top := y
 	y += leadCaption + 3
-	return r.tableHead(tl, y)
+	y = r.tableHead(tl, y)
+	r.place("table head", top, y)
+	return y
 }
 
 // splitRow sets a row too tall for a page in slices of its lines, each
@@ -817,6 +873,7 @@ func (r *renderer) splitRow(tl *tableLayout, cells []cellBox, y float64, onPage 
 		}
 		h := float64(k)*leadTable + 2*cellPadY
 		r.tableRow(tl, slice, y, h)
+		r.place("table", y, y+h)
 		y += h
 		onPage++
 		start += k

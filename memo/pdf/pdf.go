@@ -201,6 +201,9 @@ type renderer struct {
 	blocks []doc.Block
 	total  int  // page count, 0 while unknown
 	dry    bool // lay out only
+	// measuring: a layout of part of the document to measure it
+	// (closingWhole), which measures nothing itself.
+	measuring bool
 	// late: the footers and the contents' page numbers are left to
 	// finishPages (the set pass of layOutTwice); finished once it has run.
 	late, finished bool
@@ -231,9 +234,13 @@ type renderer struct {
 // Box is one placement record of the layout: a block's kind and the
 // vertical extent it took on a page, points from the top edge.
 type Box struct {
-	Page        int
-	Block       int    // index of the top-level block it belongs to
-	Kind        string // "heading", "paragraph", "table", "figure", …
+	Page  int
+	Block int // index of the top-level block it belongs to
+	// Kind is "heading", "paragraph", "figure", … A table gives a "table
+	// start" box (its caption, header and first rows, kept together), a
+	// "table" box for every row (or slice of a row split over pages) and
+	// a "table head" box for its header repeated on a page it continues on.
+	Kind        string
 	Top, Bottom float64
 }
 
