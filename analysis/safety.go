@@ -85,6 +85,10 @@ type ImplantReach struct {
 	Searched      bool    // false for a design without extent, or whose coils carry no current (pick-up coils)
 	Origin        float64 // T, |B| at the origin
 	Axial, Radial float64 // m, from the origin
+	// AxialUp and AxialDown are the axial reach on each side of the
+	// origin, along Axis and against it (Axial is the larger); 0 where the
+	// level is not reached on that side.
+	AxialUp, AxialDown float64
 	// Axis is the direction Axial is measured along and Radial across:
 	// the z axis, unless every coil's axis lies on one line through the
 	// origin, which is then the axis (reachAxis).
@@ -545,7 +549,7 @@ func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach
 	ir.Axis = f.U
 	up, down := reach(fm, calc.Vec{}, f.U, ImplantField, ext*0.01, ext*1e3),
 		reach(fm, calc.Vec{}, f.U.Scale(-1), ImplantField, ext*0.01, ext*1e3)
-	ir.Axial = math.Max(up, down)
+	ir.Axial, ir.AxialUp, ir.AxialDown = math.Max(up, down), up, down
 	e1, e2 := reach(fm, calc.Vec{}, f.E1, ImplantField, ext, ext*1e3), reach(fm, calc.Vec{}, f.E2, ImplantField, ext, ext*1e3)
 	ir.Radial = math.Max(e1, e2)
 	ir.Farthest, ir.Toward = farthestReach(fm, d, r, ext)

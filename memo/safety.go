@@ -87,21 +87,27 @@ func implantWhere(j *analysis.Study) (where []string, beyond string) {
 	}
 	along, _ := reachWords(ir.Axis, len(d.Coils))
 	if ir.Axial > 0 {
-		s := along + " as far as " + Eng(ir.Axial, "m", 2) + " from the origin"
+		side, rest := axialSide(ir)
+		s := along + " as far as " + Eng(ir.Axial, "m", 2) + " from the origin" + side + rest
+		// the note on the far end: "there" when one distance is given
+		there, in := "there ", ""
+		if rest != "" {
+			there, in = "the farther point ", "the farther point "
+		}
 		switch k := ir.AxialCoil; {
 		case k < 0:
 		case ir.AxialBore:
-			s += " (inside the bore of " + name(k) + ")"
+			s += " (" + in + "inside the bore of " + name(k) + ")"
 		case ir.AxialClear > 0 && ir.AxialEnd:
 			beyond := "within 1 mm of"
 			if l, under := reachLength(ir.AxialClear); !under {
 				beyond = l + " beyond"
 			}
-			s += " (there " + beyond + " the end of the " + windingWord(cored(k)) + " of " + name(k) + ", along its axis)"
+			s += " (" + there + beyond + " the end of the " + windingWord(cored(k)) + " of " + name(k) + ", along its axis)"
 		case ir.AxialClear > 0:
-			s += " (there " + strings.TrimPrefix(surfaceDistance(ir.AxialClear), "as far as ") + " the outer surface of the " + windingWord(cored(k)) + " of " + name(k) + ")"
+			s += " (" + there + strings.TrimPrefix(surfaceDistance(ir.AxialClear), "as far as ") + " the outer surface of the " + windingWord(cored(k)) + " of " + name(k) + ")"
 		default:
-			s += " (within the " + windingWord(cored(k)) + " of " + name(k) + ")"
+			s += " (" + in + "within the " + windingWord(cored(k)) + " of " + name(k) + ")"
 		}
 		where = append(where, s)
 	}
@@ -360,6 +366,44 @@ func hotText(cr calc.CoilResult, T float64) string {
 // reachWords name the line the implant reach is measured along and the
 // plane across it: "along the z axis", "in the xy plane" for a principal
 // axis; for an oblique one, the coils' axis by its direction.
+// axialSide says on which side of the origin the axial reach of ir lies,
+// for a reach that differs between the two sides (as printed): far is
+// " on the +z side" (the side of ir.Axial) and rest " and 12 mm on the −z
+// side" when the level is reached on the other side too (else ""); far is
+// " on either side" when both read alike.
+func axialSide(ir analysis.ImplantReach) (far, rest string) {
+	up, down := Eng(ir.AxialUp, "m", 2), Eng(ir.AxialDown, "m", 2)
+	if ir.AxialUp > 0 && ir.AxialDown > 0 && up == down {
+		return " on either side", ""
+	}
+	far, near := sideNames(ir.Axis)
+	nearReach, nearWords := ir.AxialDown, down
+	if ir.AxialDown > ir.AxialUp {
+		far, near = near, far
+		nearReach, nearWords = ir.AxialUp, up
+	}
+	if nearReach > 0 {
+		rest = " and " + nearWords + " " + near
+	}
+	return " " + far, rest
+}
+
+// sideNames words the two sides of the origin along the axis u: "on the
+// +z side" and "on the −z side" for a coordinate axis, else "on the side
+// the axis points to" and "on the other side".
+func sideNames(u calc.Vec) (plus, minus string) {
+	n := axisName(calc.Coil{Axis: u})
+	for _, a := range []string{"x", "y", "z"} {
+		switch n {
+		case a:
+			return "on the +" + a + " side", "on the −" + a + " side"
+		case "−" + a:
+			return "on the −" + a + " side", "on the +" + a + " side"
+		}
+	}
+	return "on the side the axis points to", "on the other side"
+}
+
 func reachWords(u calc.Vec, coils int) (along, across string) {
 	switch axisName(calc.Coil{Axis: u}) {
 	case "x", "−x":

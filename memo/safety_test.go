@@ -255,3 +255,37 @@ func TestMergedCautionSpeaksOfEachCoil(t *testing.T) {
 		t.Fatal("no caution of the three like coils is written once for all of them")
 	}
 }
+
+// TestAxialReachNamesItsSides: a coil off the origin reaches 0.5 mT
+// farther on one side of the origin along its axis than on the other; the
+// caution names the side of the distance it gives and the other side's
+// own distance, and a symmetric design's says "on either side".
+func TestAxialReachNamesItsSides(t *testing.T) {
+	spec := func(z string) string {
+		return "# Reach sides\n\n```coil\nname = off loop\nform = loop\nmean-diameter = 60 mm\nradial-build = 8 mm\nlength = 8 mm\nturns = 180\nwire = AWG 24\ncurrent = 1 A\ncentre = (0, 0, " + z + ")\n```\n"
+	}
+	cases := []struct{ z, want, not string }{
+		{"20 mm", " on the +z side", " on either side"},
+		{"-20 mm", " on the −z side", " on either side"},
+		{"0 mm", " on either side", "the farther point"},
+	}
+	for _, c := range cases {
+		j, diags := evaluate("sides.md", []byte(spec(c.z)))
+		if len(diags) > 0 {
+			t.Fatal(diags)
+		}
+		ir := j.Safety.Implant
+		var text string
+		for _, k := range Cautions(j) {
+			if strings.Contains(k.Title, "implanted") {
+				text = spanText(k.Spans)
+			}
+		}
+		if !strings.Contains(text, c.want) || strings.Contains(text, c.not) {
+			t.Errorf("centre z = %s (reach %g m up, %g m down): want %q and not %q in %q", c.z, ir.AxialUp, ir.AxialDown, c.want, c.not, text)
+		}
+		if c.z != "0 mm" && ir.AxialUp > 0 && ir.AxialDown > 0 && !strings.Contains(text, " side and ") {
+			t.Errorf("centre z = %s: both sides reach the level (%g m, %g m) but the caution gives one: %q", c.z, ir.AxialUp, ir.AxialDown, text)
+		}
+	}
+}
