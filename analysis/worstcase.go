@@ -564,6 +564,26 @@ func (wc *WorstCase) judge(limits []LimitResult) {
 	wc.Derived = wc.Derivation(limits)
 }
 
+// fittedAt puts the resistors sized over the corners into the switching
+// of corner h's coils, judged against the nominal design's limit: the
+// driver's limit does not move with the supply's tolerance, so the clamp
+// is the nominal design's and the largest resistor the corner's own
+// quotient against it (Suppression.CornerMax); the switch voltage and
+// its margin follow with the fitted resistor.
+func (wc *WorstCase) fittedAt(coils []calc.CoilResult, h int) {
+	for k, p := range wc.Suppression {
+		if p == nil || k >= len(coils) {
+			continue
+		}
+		s := &coils[k].Switch
+		s.Clamp, s.ClampFromRating = p.Clamp, p.ClampFromRating
+		if h >= 0 && h < len(p.CornerMax) {
+			s.ResistorMax = p.CornerMax[h]
+		}
+		*s = s.WithResistor(coils[k].Inductance, coils[k].RHot, p.Resistor)
+	}
+}
+
 // WorstCorner is one corner evaluated in full for the memo's derivation:
 // the corner at which the first limit fails, or else the one giving the
 // least moment (the first headline result's minimum).
@@ -597,7 +617,7 @@ func (wc *WorstCase) Derivation(limits []LimitResult) *WorstCorner {
 	}
 	wk.Design = wc.Corners[wk.Corner].Design
 	wk.Results = calc.Evaluate(wk.Design)
-	wc.fitted(wk.Results.Coils) // the resistor sized over every corner
+	wc.fittedAt(wk.Results.Coils, wk.Corner) // the resistor sized over every corner
 	for i, c := range wk.Design.Coils {
 		wk.Coils = append(wk.Coils, StudyCoil(c, wk.Results.Coils[i], wk.Design.Conditions))
 	}
