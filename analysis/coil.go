@@ -232,8 +232,14 @@ func centreSum(co calc.Coil, w calc.Winding) float64 {
 // that the derivation shows, and the states the cautions need.
 type HeatParts struct {
 	// RiseInner, RiseOuter and RiseLength are the geometry of the
-	// conduction rise inside the winding (calc.RiseGeometry), m.
+	// conduction rise inside the winding (calc.RiseGeometry: the section
+	// the turns occupy), m.
 	RiseInner, RiseOuter, RiseLength float64
+	// ShedInner, ShedOuter and ShedLength are the winding's outline as
+	// stated (calc.WindingEnvelope), whose surface sheds the heat
+	// (calc.Winding.SurfaceArea), m; a winding that does not fill its
+	// stated build occupies less than this (RiseOuter < ShedOuter).
+	ShedInner, ShedOuter, ShedLength float64
 	// BundleDiameter is a thin coil's heat-shedding tube diameter, m.
 	BundleDiameter float64
 	// AxisVertical says the coil's axis counts as vertical for natural
@@ -286,6 +292,8 @@ func heatParts(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, outer flo
 	hp := HeatParts{AirViscosity: n, AirConductivity: n, AirPrandtl: n, H: n, ContinuousTau: n, LossSlope: n}
 	w := cr.Winding
 	hp.RiseInner, hp.RiseOuter, hp.RiseLength = calc.RiseGeometry(co, w)
+	e := calc.WindingEnvelope(co, w)
+	hp.ShedInner, hp.ShedOuter, hp.ShedLength = math.Max(e.R0, 0), e.R1, e.Z1-e.Z0
 	hp.AxisVertical = calc.AxisIsVertical(co, cond)
 	if w.Thin {
 		hp.BundleDiameter = calc.BundleDiameter(outer, w.TurnCount())

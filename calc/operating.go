@@ -134,7 +134,10 @@ func ConvectionFor(c Coil, w Winding, cond Conditions) *NaturalConvection {
 	if w.Thin {
 		return &NaturalConvection{Shape: HorizontalCylinder, Length: BundleDiameter(outer, n)}
 	}
-	ri, ro, l := RiseGeometry(c, w)
+	// The winding's outline as stated, whose surface sheds the heat
+	// (Winding.SurfaceArea), not the part its turns occupy.
+	e := WindingEnvelope(c, w)
+	ri, ro, l := math.Max(e.R0, 0), e.R1, e.Z1-e.Z0
 	if b := ro - ri; math.Max(l, b) < c.MeanDiameter/4 {
 		return &NaturalConvection{Shape: HorizontalCylinder, Length: 2 * (l + b) / math.Pi, Ring: true}
 	}

@@ -483,13 +483,14 @@ func WindingRise(c Coil, w Winding, k float64) (mean, max float64) {
 // through which the heat of one coil of c is taken to leave its winding: a
 // thin coil is a solid round bundle of the hexagonal-packing diameter along
 // its mean turn (ri = 0); a single-layer coil an annulus one overall wire
-// diameter deep over its length; a multilayer coil the annulus of its
-// radial build over its length. Zeros when the data are missing.
+// diameter deep over its length; a multilayer coil the annulus its turns
+// occupy as laid (LaidEnvelope), from the bore outward over its layers —
+// LayerCount overall wire diameters, or the stated radial build when the
+// layers fill it — over its length: the heat is generated in the copper,
+// and a winding that does not fill its stated build has no turns in the
+// part it leaves empty. Zeros when the data are missing.
 func RiseGeometry(c Coil, w Winding) (ri, ro, length float64) {
-	outer := c.Wire.Outer
-	if !(outer > 0) {
-		outer = c.Wire.Bare
-	}
+	outer := WireOuter(c)
 	n := w.TurnCount()
 	switch {
 	case n == 0 || !(outer > 0):
@@ -505,5 +506,9 @@ func RiseGeometry(c Coil, w Winding) (ri, ro, length float64) {
 	if !(length > 0) {
 		length = outer
 	}
-	return rin, rin + math.Max(c.RadialBuild, float64(w.LayerCount)*outer), length
+	depth := c.RadialBuild
+	if laid := float64(w.LayerCount) * outer; laid > 0 && !(laid >= depth) {
+		depth = laid
+	}
+	return rin, rin + depth, length
 }

@@ -109,9 +109,9 @@ func heatSurfaceSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, 
 	hp := cs.Heat
 	series := cs.Series
 	two := seriesFactor(series)
-	ri := hp.RiseInner
-	ro := hp.RiseOuter
-	length := hp.RiseLength
+	ri := hp.ShedInner
+	ro := hp.ShedOuter
+	length := hp.ShedLength
 	switch {
 	case w.Thin:
 		db := hp.BundleDiameter
@@ -234,12 +234,21 @@ func conductionSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, c
 	}
 	pc := st.Power / float64(series)
 	q := pc / (math.Pi * (ro*ro - ri*ri) * length)
-	each := ""
+	var notes []string
+	occupied := ""
+	if cs.Underfilled {
+		occupied = fmt.Sprintf(", over the inner %s of the stated %s radial build that its turns occupy", Eng(cs.Laid.R1-cs.Laid.R0, "m", 3), Eng(cs.Envelope.R1-cs.Envelope.R0, "m", 3))
+		notes = append(notes, "the empty outer part generates no heat; the heat leaves through the stated outline's surface")
+	}
 	if series == 2 {
-		each = " (each coil of the pair carries half the power)"
+		notes = append(notes, "each coil of the pair carries half the power")
+	}
+	each := ""
+	if len(notes) > 0 {
+		each = " (" + strings.Join(notes, "; ") + ")"
 	}
 	if ri > 0 {
-		add(Step{What: "Heat generated per unit volume of the winding" + each, Symbolic: `q = \frac{\bar{P}}{\pi \left( r_o^2 - r_i^2 \right) \ell}`,
+		add(Step{What: "Heat generated per unit volume of the winding" + occupied + each, Symbolic: `q = \frac{\bar{P}}{\pi \left( r_o^2 - r_i^2 \right) \ell}`,
 			Numbers: fmt.Sprintf(`\frac{%s}{\pi \left( %s^2 - %s^2 \right) \cdot %s}`, Q(pc, "W", 4), Paren(Q(ro, "m", 4)), Paren(Q(ri, "m", 4)), Q(length, "m", 4)),
 			Result:  Q(q, "W/m³", 3)})
 	} else {
