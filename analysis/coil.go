@@ -272,6 +272,15 @@ type HeatParts struct {
 	// FormerSource names where the former material's data come from ("" when
 	// none is used).
 	FormerSource string
+	// CoreMass (kg), CoreSpecificHeat (J/(kg·K)) and CoreHeatCapacity
+	// (J/K) are a cored coil's rod as lumped with the winding in the
+	// heat capacity (calc.CoreHeatCapacity; zeros without a core or a
+	// core density); CoreSpecificHeatSource names where the specific heat
+	// comes from ("" when stated). CoreLeftOut says a core is present but
+	// left out, its density not being given.
+	CoreMass, CoreSpecificHeat, CoreHeatCapacity float64
+	CoreSpecificHeatSource                       string
+	CoreLeftOut                                  bool
 }
 
 // WarmUp is the hottest winding temperature against time from cold, K.
@@ -320,6 +329,15 @@ func heatParts(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, outer flo
 	hp.SurfaceMax = surfaceMax(h)
 	if m, ok := calc.FormerMaterialByName(co.Former.Material); ok && co.Former.HeatCapacity <= 0 && co.Former.Mass > 0 {
 		hp.FormerSource = m.Source
+	}
+	if k := co.Core; k.Present() {
+		hp.CoreMass, hp.CoreHeatCapacity, hp.CoreLeftOut = k.Mass(), calc.CoreHeatCapacity(co), !(k.Mass() > 0)
+		if hp.CoreMass > 0 {
+			hp.CoreSpecificHeat = k.SpecificHeatUsed()
+			if !(k.SpecificHeat > 0) {
+				hp.CoreSpecificHeatSource = calc.CoreSpecificHeatSource
+			}
+		}
 	}
 	hp.WarmUp = warmUp(co, h, on, hp.Continuous, hp.ContinuousTau)
 	return hp

@@ -106,6 +106,7 @@ type Core struct {
 	Remanence    float64   // T, Br
 	Coercivity   float64   // A/m, Hc
 	Density      float64   // kg/m³
+	SpecificHeat float64   // J/(kg·K) (0: DefaultCoreSpecificHeat)
 	Length       float64   // m
 	Diameter     float64   // m
 }

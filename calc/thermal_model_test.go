@@ -61,6 +61,33 @@ func TestAdiabaticHeatingRate(t *testing.T) {
 	checkRel(t, "with former", HeatCapacity(c, w), w.Mass*385+9.03, 1e-15)
 }
 
+// TestCoreHeatCapacity: a cored coil warms its rod with it. A pure iron
+// rod, 6 mm × 70 mm, of 7870 kg/m³ and 447 J/(kg·K) (Incropera & DeWitt,
+// 6th ed., Table A.1, iron at 300 K, recalled from memory), holds
+// 7870 · π (3 mm)² · 70 mm · 447 = 6.96 J/K, which the lumped heat capacity
+// adds to the copper's; adiabatically the winding then climbs 100 K in
+// C·100/P of the integrated heat balance (the first law). A ferrite rod of
+// stated 750 J/(kg·K) uses its own figure, and a rod without a density
+// adds nothing (its mass is unknown).
+func TestCoreHeatCapacity(t *testing.T) {
+	c, w := copperCoil(0.5)
+	c.Core = Core{Permeability: 1000, Length: 0.07, Diameter: 0.006, Density: 7870}
+	rod := 7870 * math.Pi * 0.003 * 0.003 * 0.07 * 447
+	if math.Abs(rod-6.96) > 0.005 {
+		t.Fatalf("rod %g J/K", rod)
+	}
+	C := HeatCapacity(c, w)
+	checkRel(t, "cored heat capacity", C, w.Mass*385+rod, 1e-12)
+	tp := ThermalFor(c, w, Conditions{Ambient: T20, Cooling: Cooling{HGiven: true, H: 0}})
+	tp.Alpha20, tp.Emissivity, tp.RiseMean, tp.RiseMax = 0, 0, 0, 0
+	P := 0.25 * tp.R20
+	checkRel(t, "adiabatic time to +100 K with the core", tp.TimeToReach(C, T20+100, 1e6), (w.Mass*385+rod)*100/P, 1e-9)
+	c.Core.SpecificHeat = 750
+	checkRel(t, "ferrite rod", HeatCapacity(c, w), w.Mass*385+rod*750/447, 1e-12)
+	c.Core.Density = 0
+	checkRel(t, "rod without density", HeatCapacity(c, w), w.Mass*385, 1e-15)
+}
+
 func TestTransientTendsToSteady(t *testing.T) {
 	// Natural convection, radiation, R(T) and an internal rise: after ten
 	// time constants the warm-up has reached the steady state.

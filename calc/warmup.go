@@ -111,10 +111,52 @@ func FormerMaterialByName(name string) (FormerMaterial, bool) {
 
 // HeatCapacity returns the heat capacity, J/K, of coil block c with winding
 // w: conductor mass × the conductor's specific heat plus the former, per
-// coil, × SeriesCoils. Insulation and impregnation are left out (they add a
-// few per cent and make the warm-up a little slower than computed).
+// coil, × SeriesCoils, plus the core's (CoreHeatCapacity). Insulation and
+// impregnation are left out (they add a few per cent and make the warm-up
+// a little slower than computed).
 func HeatCapacity(c Coil, w Winding) float64 {
-	return float64(SeriesCoils(c)) * (w.Mass*c.Wire.Material.SpecificHeat + c.Former.Capacity())
+	return float64(SeriesCoils(c))*(w.Mass*c.Wire.Material.SpecificHeat+c.Former.Capacity()) + CoreHeatCapacity(c)
+}
+
+// DefaultCoreSpecificHeat is the specific heat taken for a core when none
+// is stated, J/(kg·K): pure iron at 300 K, 447 J/(kg·K) (Incropera &
+// DeWitt, Fundamentals of Heat and Mass Transfer, 6th ed., Table A.1,
+// recalled from memory; pure nickel 444 J/(kg·K) in the same table, and
+// the nickel–iron and silicon–iron alloys of soft-magnetic cores lie close
+// to these). Ferrites have more, about 700–800 J/(kg·K) (typical
+// data-sheet values): for them the default understates the heat capacity,
+// and the warm-up computed runs faster than the coil's, on the hot side.
+const DefaultCoreSpecificHeat = 447
+
+// CoreSpecificHeatSource names where DefaultCoreSpecificHeat comes from.
+const CoreSpecificHeatSource = "pure iron at 300 K, Incropera & DeWitt, 6th ed., Table A.1, recalled"
+
+// Mass returns the rod's mass, kg: density × π d²/4 × length; 0 without a
+// density or without a core.
+func (k Core) Mass() float64 {
+	if !k.Present() || !(k.Density > 0) {
+		return 0
+	}
+	return k.Density * math.Pi * k.Diameter * k.Diameter / 4 * k.Length
+}
+
+// SpecificHeatUsed returns the core's specific heat as used, J/(kg·K):
+// the stated one, else DefaultCoreSpecificHeat.
+func (k Core) SpecificHeatUsed() float64 {
+	if k.SpecificHeat > 0 {
+		return k.SpecificHeat
+	}
+	return DefaultCoreSpecificHeat
+}
+
+// CoreHeatCapacity returns the heat capacity, J/K, of coil c's core that
+// is lumped with the winding's: the rod's mass × its specific heat, the rod
+// taken to be in thermal contact with the winding's bore so that it warms
+// with the winding (a metal rod evens out its own temperature in seconds
+// against the winding's thermal time constant of minutes or more). 0
+// without a core, or without a core density (its mass is then unknown).
+func CoreHeatCapacity(c Coil) float64 {
+	return c.Core.Mass() * c.Core.SpecificHeatUsed()
 }
 
 // state is the lumped thermal state: the winding's mean temperature (K),

@@ -64,7 +64,7 @@ func (c *composer) heating() {
 		cs := &c.j.Coils[i]
 		c.coilPart(co.Name, capitalise, func() {
 			c.derive(heatSteps(co, cr, cs, c.j.Cooling)...)
-			if p := warmUpText(co, cr); p != "" {
+			if p := warmUpText(co, cr, cs); p != "" {
 				c.para(p)
 			}
 			c.warmUpFigure(co, cr, cs)
@@ -320,9 +320,15 @@ func heatCapacitySteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy,
 	if series == 2 {
 		conductor = `2 \cdot ` + conductor
 	}
-	add(Step{What: fmt.Sprintf("Heat capacity of the winding (specific heat of %s %s, %s)%s", mat.Name, Eng(mat.SpecificHeat, "J/(kg·K)", 3), specificHeatSource(mat), formerWords(co, cs.Heat.FormerSource)),
-		Symbolic: `C = m_c c_p` + former,
-		Numbers:  fmt.Sprintf(`%s \cdot %s%s`, conductor, Q(mat.SpecificHeat, "J/(kg·K)", 3), fnum), Result: Q(h.HeatCapacity, "J/K", 3)})
+	hp := cs.Heat
+	core, cnum := "", ""
+	if hp.CoreHeatCapacity > 0 {
+		core = ` + m_k c_k`
+		cnum = fmt.Sprintf(` + %s \cdot %s`, Q(hp.CoreMass, "kg", 3), Q(hp.CoreSpecificHeat, "J/(kg·K)", 3))
+	}
+	add(Step{What: fmt.Sprintf("Heat capacity of the winding (specific heat of %s %s, %s)%s%s", mat.Name, Eng(mat.SpecificHeat, "J/(kg·K)", 3), specificHeatSource(mat), formerWords(co, cs.Heat.FormerSource), coreHeatWords(hp)),
+		Symbolic: `C = m_c c_p` + former + core,
+		Numbers:  fmt.Sprintf(`%s \cdot %s%s%s`, conductor, Q(mat.SpecificHeat, "J/(kg·K)", 3), fnum, cnum), Result: Q(h.HeatCapacity, "J/K", 3)})
 	if !math.IsNaN(cr.ThermalTau) {
 		add(Step{What: "Thermal time constant of the approach to the steady state (the heat balance linearised there)",
 			Symbolic: `\tau_{th} = \frac{C}{d(Q_{\mathrm{out}} - \bar{P})/dT}`,
@@ -346,6 +352,24 @@ func formerWords(co calc.Coil, source string) string {
 			src = "; " + source
 		}
 		return fmt.Sprintf(", with the former: %s of %s at %s%s", Eng(f.Mass, "kg", 3), formerName(f.Material), Eng(f.SpecificHeat, "J/(kg·K)", 3), src)
+	}
+	return ""
+}
+
+// coreHeatWords says how a cored coil's rod enters the heat capacity: its
+// mass and specific heat, and the assumption that it warms with the
+// winding; or that it is left out for want of a density; "" without a core.
+func coreHeatWords(hp analysis.HeatParts) string {
+	switch {
+	case hp.CoreHeatCapacity > 0:
+		src := "as stated"
+		if hp.CoreSpecificHeatSource != "" {
+			src = hp.CoreSpecificHeatSource + "; nickel–iron and silicon–iron lie close to it, a ferrite has more"
+		}
+		return fmt.Sprintf(", with the core: %s of rod at %s (%s), taken to be in thermal contact with the bore so that it warms with the winding as one mass — a rod held apart from the winding warms later, and the winding then faster than computed",
+			Eng(hp.CoreMass, "kg", 3), Eng(hp.CoreSpecificHeat, "J/(kg·K)", 3), src)
+	case hp.CoreLeftOut:
+		return "; the core is left out, no core density being stated (its mass is unknown), which makes the warm-up faster than the coil's"
 	}
 	return ""
 }
@@ -393,7 +417,7 @@ func durationQ(t float64) string {
 // warmUpText says how the coil warms from cold: the time to reach its
 // insulation class when energised continuously, and the periodic state
 // of its on/off cycle.
-func warmUpText(co calc.Coil, cr calc.CoilResult) string {
+func warmUpText(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) string {
 	h := cr.Heat
 	var b strings.Builder
 	if co.InsulationClass > 0 {
@@ -406,7 +430,11 @@ func warmUpText(co calc.Coil, cr calc.CoilResult) string {
 		}
 	}
 	if co.Former.Capacity() <= 0 {
-		b.WriteString("The warm-up counts the conductor alone, without a former or bobbin, so it runs somewhat faster than a coil on a former will. ")
+		what := "the conductor alone"
+		if cs.Heat.CoreHeatCapacity > 0 {
+			what = "the conductor and the core"
+		}
+		b.WriteString("The warm-up counts " + what + ", without a former or bobbin, so it runs somewhat faster than a coil on a former will. ")
 	}
 	if cy := h.Cycle; cy.On > 0 {
 		if cy.Settled {
