@@ -478,7 +478,20 @@ type Cycle struct {
 	On, Off  float64 // s
 	PeakMean float64 // K, mean winding temperature at the end of the on period
 	PeakHot  float64 // K, hot spot at the end of the on period
-	Trough   float64 // K, winding temperature at the end of the off period
+	// PeakSurface is the hottest surface temperature of the periodic
+	// state over the whole period, K. The surface lies below the mean by
+	// the internal drop, which lags the power with the winding's internal
+	// time constant: it builds up after switch-on faster than the mean
+	// rises, and relaxes after switch-off faster than the mean falls, so
+	// the surface may peak at the start of an on period or in the off
+	// period as well as at the end of the on period. The lumped model
+	// places that swing only roughly (a conduction profile starts to
+	// warm at switch-on and to cool at switch-off everywhere); its
+	// periodic peak lies between the end of the on period's surface and
+	// the peak mean temperature, which bounds the surface of a section
+	// heated from within.
+	PeakSurface float64
+	Trough      float64 // K, winding temperature at the end of the off period
 	Periods  float64 // periods from cold until within 1 K of the periodic state (estimate: 5 τ / period)
 	Settled  bool    // a periodic state exists below TempSearchMax
 	// NoSolution is set when the search found no periodic state (the coil
@@ -504,7 +517,7 @@ type Cycle struct {
 // where mean and internal rise peak together.
 func (tp ThermalProblem) PeriodicCycle(C, onTime float64) Cycle {
 	n := math.NaN()
-	cy := Cycle{On: onTime, PeakMean: n, PeakHot: n, Trough: n, Periods: n, AveragePow: n}
+	cy := Cycle{On: onTime, PeakMean: n, PeakHot: n, PeakSurface: n, Trough: n, Periods: n, AveragePow: n}
 	if !(C > 0) || !(onTime > 0) || !(tp.Duty > 0 && tp.Duty < 1) || math.IsInf(onTime, 0) || math.IsInf(C, 0) {
 		return cy
 	}
@@ -554,14 +567,23 @@ func (tp ThermalProblem) PeriodicCycle(C, onTime float64) Cycle {
 		return cy
 	}
 	// Average power over the period: the energy of the on period by the
-	// trapezoidal rule over the integration's steps (at most onTime/64).
+	// trapezoidal rule over the integration's steps (at most onTime/64);
+	// and the hottest surface over those steps and the off period's (at
+	// most Off/64 apart, finer where the internal drop relaxes).
 	var e float64
 	prevT, prevY := 0.0, T0
-	tp.phase(C, true, start(T0), onTime, onTime/64, nil, func(s float64, y state) {
+	y0 := start(T0)
+	cy.PeakSurface = tp.surfaceOf(y0, tp.PowerOn(y0[0]))
+	_, top := tp.phase(C, true, y0, onTime, onTime/64, nil, func(s float64, y state) {
 		e += (s - prevT) * (tp.PowerOn(prevY) + tp.PowerOn(y[0])) / 2
 		prevT, prevY = s, y[0]
+		cy.PeakSurface = math.Max(cy.PeakSurface, tp.surfaceOf(y, tp.PowerOn(y[0])))
 	})
 	cy.AveragePow = e / (onTime + cy.Off)
+	cy.PeakSurface = math.Max(cy.PeakSurface, tp.surfaceOf(top, 0))
+	tp.phase(C, false, top, cy.Off, cy.Off/64, nil, func(_ float64, y state) {
+		cy.PeakSurface = math.Max(cy.PeakSurface, tp.surfaceOf(y, 0))
+	})
 	if tau := tp.ThermalTimeConstant(C, T0); tau > 0 {
 		cy.Periods = 5 * tau / (onTime + cy.Off)
 	}

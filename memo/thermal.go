@@ -577,7 +577,7 @@ func (c *composer) thermalTable() doc.Table {
 			s := cr.Heat.Steady
 			return Eng(s.Convected, "W", 3) + " / " + Eng(s.Radiated, "W", 3) + " / " + Eng(s.Mounted, "W", 3)
 		}),
-		row("Surface temperature", func(co calc.Coil, cr calc.CoilResult) string { return temp(cr.Heat.Steady.Surface) }),
+		row(surfaceLabel(r), func(co calc.Coil, cr calc.CoilResult) string { return temp(cr.Heat.Steady.Surface) }),
 		row("Mean winding temperature", func(co calc.Coil, cr calc.CoilResult) string { return temp(cr.Heat.Steady.Mean) }),
 		row(hotSpotLabel(r), func(co calc.Coil, cr calc.CoilResult) string { return temp(cr.Heat.Steady.HotSpot) }),
 	}
@@ -595,6 +595,12 @@ func (c *composer) thermalTable() doc.Table {
 				return "no periodic state"
 			}
 			return temp(cy.PeakHot) + " / " + temp(cy.Trough)
+		}))
+		rows = append(rows, row("Duty cycle: hottest surface", func(co calc.Coil, cr calc.CoilResult) string {
+			if cy := cr.Heat.Cycle; cy.On > 0 && cy.Settled {
+				return temp(cy.PeakSurface)
+			}
+			return "—"
 		}))
 	}
 	rows = append(rows,
@@ -697,6 +703,15 @@ func leftOnText(co calc.Coil, cr calc.CoilResult, on calc.ThermalState) string {
 	}
 	return templates.Text("caution-left-on", map[string]string{"Duty": strconv.FormatFloat(100*cr.Duty, 'g', 3, 64) + " %",
 		"Class": format.InsulationClass(co.InsulationClass), "Time": duration(h.TimeToLimit), "Settle": settle})
+}
+
+// surfaceLabel names the steady surface row: duty-averaged only where
+// some coil has a duty cycle.
+func surfaceLabel(r calc.Results) string {
+	if anyDuty(r) {
+		return "Surface temperature, duty-averaged steady state"
+	}
+	return "Surface temperature"
 }
 
 // hotSpotLabel names the steady hottest-point row: duty-averaged only
