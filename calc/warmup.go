@@ -492,8 +492,8 @@ type Cycle struct {
 	// heated from within.
 	PeakSurface float64
 	Trough      float64 // K, winding temperature at the end of the off period
-	Periods  float64 // periods from cold until within 1 K of the periodic state (estimate: 5 τ / period)
-	Settled  bool    // a periodic state exists below TempSearchMax
+	Periods     float64 // periods from cold until within 1 K of the periodic state (estimate: 5 τ / period)
+	Settled     bool    // a periodic state exists below TempSearchMax
 	// NoSolution is set when the search found no periodic state (the coil
 	// heats from period to period without end), as against data that do
 	// not allow one to be sought.
