@@ -85,12 +85,14 @@ func StillAir() Cooling { return Cooling{H: StillAirH, Emissivity: DefaultEmissi
 func VacuumCooling() Cooling { return Cooling{Vacuum: true, Emissivity: DefaultEmissivity} }
 
 // EffectiveCooling returns the cooling actually used: the zero Cooling
-// (nothing stated) means StillAir; in vacuum h is 0.
+// (nothing stated) means StillAir; in vacuum h is 0, and so it is for a
+// covered coil without a stated h (Cooling.Covered: the heat then leaves
+// by radiation and the mount only, which errs on the hot side).
 func EffectiveCooling(c Cooling) Cooling {
 	if c == (Cooling{}) {
 		return StillAir()
 	}
-	if c.Vacuum {
+	if c.Vacuum || (c.Covered && !c.HGiven) {
 		c.H = 0
 	}
 	return c

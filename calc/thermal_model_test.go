@@ -450,3 +450,34 @@ func TestUnderfilledRiseOverOccupiedSection(t *testing.T) {
 	fd := AnnulusConduction(tp, ri, ro, l, 0.3, 1, 400)
 	checkRel(t, "finite-volume hot-spot rise", fd.HotSpot-fd.Surface, 12*hot, 1e-5)
 }
+
+// TestCoveredCoolingRadiatesOnly: a coil under or behind a surface people
+// touch, without a stated h, sheds no heat by convection — the open-air
+// correlations hold for a surface in an extensive quiescent fluid
+// (Incropera & DeWitt, 6th ed., §9.1) — and its steady surface closes the
+// grey-body balance P = ε σ A (Ts⁴ − Ta⁴) (Stefan–Boltzmann law); in open
+// still air the same coil runs cooler. A stated h is the enclosure's and
+// is used as given.
+func TestCoveredCoolingRadiatesOnly(t *testing.T) {
+	c, w := copperCoil(0.5)
+	open := Conditions{Ambient: T20, Cooling: StillAir()}
+	covered := open
+	covered.Cooling.Covered = true
+	tp := ThermalFor(c, w, covered)
+	if tp.Convection != nil || tp.H != 0 {
+		t.Fatalf("covered coil convects: h %g, correlation %v", tp.H, tp.Convection)
+	}
+	st := tp.Steady()
+	ts, ta := st.Surface, tp.Ambient
+	checkRel(t, "radiated power", st.Power, DefaultEmissivity*StefanBoltzmann*tp.Area*(ts*ts*ts*ts-ta*ta*ta*ta), 1e-9)
+	if st.Convected != 0 {
+		t.Errorf("convected %g W", st.Convected)
+	}
+	if air := ThermalFor(c, w, open).Steady(); !(air.Surface < st.Surface-1) {
+		t.Errorf("open air %.2f °C, covered %.2f °C", KelvinToCelsius(air.Surface), KelvinToCelsius(st.Surface))
+	}
+	covered.Cooling.H, covered.Cooling.HGiven = 4, true
+	if tp := ThermalFor(c, w, covered); tp.H != 4 || tp.Convection != nil {
+		t.Errorf("covered with h = 4 W/(m²·K): h %g, correlation %v", tp.H, tp.Convection)
+	}
+}

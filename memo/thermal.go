@@ -39,6 +39,18 @@ func (c *composer) heating() {
 		env = templates.Text("heating-vacuum", map[string]string{"Emissivity": Sig(cool.Emissivity, 2), "Mount": mount})
 	case cool.HGiven:
 		env = templates.Text("heating-given-h", map[string]string{"H": Eng(cool.H, "W/(m²·K)", 3), "Emissivity": Sig(cool.Emissivity, 2)})
+		if cool.Covered {
+			env += " The coils lie under or behind a surface that people touch (enclosure = covered); the stated h is taken as that of the enclosure."
+		}
+	case cool.Covered:
+		lie, mount := "The coils lie", ""
+		if len(c.drivenCoils()) == 1 {
+			lie = "The coil lies"
+		}
+		if d.Conditions.MountResistance > 0 {
+			mount = ", and by conduction to its mount"
+		}
+		env = templates.Text("heating-covered", map[string]string{"Emissivity": Sig(cool.Emissivity, 2), "Lie": lie, "Mount": mount})
 	default:
 		shapes, n := c.convectionShapes()
 		plural, singular := "s", ""
@@ -188,7 +200,7 @@ func heatShedSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, coo
 	hval := hp.H
 	var parts []string
 	var nums []string
-	if !cool.Vacuum {
+	if !cool.Vacuum && (!cool.Covered || cool.HGiven) {
 		add(Step{What: "Heat carried away by convection", Symbolic: `Q_c = h A_s (T_s - T_a)`,
 			Numbers: fmt.Sprintf(`%s \cdot %s \cdot %s`, Q(hval, "W/(m²·K)", 3), Q(tp.Area, "m²", 4), Q(Ts-Ta, "K", 4)), Result: Q(st.Convected, "W", 4)})
 		parts, nums = append(parts, "Q_c"), append(nums, Q(st.Convected, "W", 4))
@@ -563,6 +575,8 @@ func (c *composer) thermalTable() doc.Table {
 			s := "radiation"
 			switch {
 			case cool.Vacuum:
+			case cool.Covered && !cool.HGiven:
+				s = "radiation only (covered: no convection counted)"
 			case tp.Convection != nil:
 				s = fmt.Sprintf("natural convection, h = %s; radiation", Eng(cr.Heat.Steady.Convection.H, "W/(m²·K)", 3))
 			default:
