@@ -152,8 +152,8 @@ func (k Core) SpecificHeatUsed() float64 {
 // CoreHeatCapacity returns the heat capacity, J/K, of coil c's core that
 // is lumped with the winding's: the rod's mass × its specific heat, the rod
 // taken to be in thermal contact with the winding's bore so that it warms
-// with the winding (a metal rod evens out its own temperature in seconds
-// against the winding's thermal time constant of minutes or more). 0
+// with the winding as one mass (the contact is not modelled; a rod held
+// apart from the winding warms later, and the winding then faster). 0
 // without a core, or without a core density (its mass is then unknown).
 func CoreHeatCapacity(c Coil) float64 {
 	return c.Core.Mass() * c.Core.SpecificHeatUsed()

@@ -376,9 +376,9 @@ func coreHeatWords(hp analysis.HeatParts) string {
 	case hp.CoreHeatCapacity > 0:
 		src := "as stated"
 		if hp.CoreSpecificHeatSource != "" {
-			src = hp.CoreSpecificHeatSource + "; nickel–iron and silicon–iron lie close to it, a ferrite has more"
+			src = hp.CoreSpecificHeatSource
 		}
-		return fmt.Sprintf(", with the core: %s of rod at %s (%s), taken to be in thermal contact with the bore so that it warms with the winding as one mass — a rod held apart from the winding warms later, and the winding then faster than computed",
+		return fmt.Sprintf(", with the core: %s of rod at %s (%s), warming with the winding as one mass",
 			Eng(hp.CoreMass, "kg", 3), Eng(hp.CoreSpecificHeat, "J/(kg·K)", 3), src)
 	case hp.CoreLeftOut:
 		return "; the core is left out, no core density being stated (its mass is unknown), which makes the warm-up faster than the coil's"
@@ -447,6 +447,13 @@ func warmUpText(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) string
 			what = "the conductor and the core"
 		}
 		b.WriteString("The warm-up counts " + what + ", without a former or bobbin, so it runs somewhat faster than a coil on a former will. ")
+	}
+	if cs.Heat.CoreHeatCapacity > 0 {
+		src := ""
+		if cs.Heat.CoreSpecificHeatSource != "" {
+			src = " The core's specific heat is that of pure iron; the nickel–iron and silicon–iron of soft-magnetic cores lie close to it, while a ferrite has more (about 700–800 J/(kg·K)), so for a ferrite rod the warm-up runs faster than computed — state core-specific-heat for it."
+		}
+		b.WriteString("The core is taken to be in thermal contact with the winding's bore and to warm with the winding as one mass (an assumption: the contact is not modelled). A rod held apart from the winding (by an air gap or a thick insulating former) warms later, and the winding then faster than computed." + src + " ")
 	}
 	if cy := h.Cycle; cy.On > 0 {
 		if cy.Settled {
