@@ -92,3 +92,53 @@ func readFigure(t *testing.T, name string) string {
 	}
 	return string(b)
 }
+
+// A thin loop's centre field is the closed form N μ0 I/(2R) term by
+// term: it has no centre row (its field is checked off the axis). A
+// rectangle's centre field is checked against the numerical Biot–Savart
+// integral along its sides, which reaches the textbook closed form
+// 2 μ0 N I √(W² + H²)/(π W H) (Griffiths, Introduction to
+// Electrodynamics, 4th ed., Example 5.5, each side a finite straight
+// wire).
+func TestCentreRowsOfThinCoils(t *testing.T) {
+	st := studyOf(t, readFigure(t, "thin-loop.md"))
+	if c := checkNamed(st.Checks, "field at coil centre"); c != nil {
+		t.Errorf("thin loop: centre row %+v", *c)
+	}
+	if c := checkNamed(st.Checks, "|B| at an off-axis test point"); c == nil || !c.Pass {
+		t.Errorf("thin loop: off-axis row %+v", c)
+	}
+	st = studyOf(t, readFigure(t, "rectangle.md"))
+	c := checkNamed(st.Checks, "field at coil centre")
+	if c == nil {
+		t.Fatal("rectangle: no centre row")
+	}
+	if !strings.Contains(c.Reference, "numerical Biot–Savart") || !c.Pass || c.Tolerance > 1e-8 {
+		t.Errorf("rectangle: centre row against %q (tolerance %g, pass %v)", c.Reference, c.Tolerance, c.Pass)
+	}
+	co := st.Spec.Design.Coils[0]
+	W, H := co.Width, co.Height
+	want := 2 * calc.Mu0 * float64(co.Turns) * st.Results.Coils[0].Current * math.Hypot(W, H) / (math.Pi * W * H)
+	if math.Abs(c.Expected/want-1) > 1e-8 {
+		t.Errorf("rectangle: numerical centre field %.12g T, closed form %.12g T", c.Expected, want)
+	}
+}
+
+// The hot-spot row compares the lumped closed forms with the
+// finite-volume profile under the same assumptions, to 10⁻⁴: it holds for
+// a coil driven far past its class (365 °C mean), and it fails when the
+// lumped hot spot is off by a tenth of a per cent of its rise, as a check
+// must be able to.
+func TestHeatBalanceCheckIsTight(t *testing.T) {
+	st := studyOf(t, "```coil\nname = hot\nform = solenoid\nmean-diameter = 30 mm\nlength = 30 mm\nradial-build = 8 mm\nturns = 1500\nwire = AWG 28\ninsulation-class = B\nvoltage = 48 V\n```\n")
+	c, cr := st.Spec.Design.Coils[0], st.Results.Coils[0]
+	row := checkNamed(st.Checks, "rise of the hottest point above ambient")
+	if row == nil || !row.Pass || row.Tolerance > 1e-4 || row.Value < 300 {
+		t.Fatalf("overdriven coil's hot-spot row: %+v", row)
+	}
+	rise := cr.Heat.Steady.HotSpot - cr.Heat.Problem.Ambient
+	cr.Heat.Steady.HotSpot += 1e-3 * rise
+	if off := heatBalanceCheck(c, cr); len(off) != 1 || off[0].Pass {
+		t.Errorf("a hot spot off by 0.1 %% of its rise passes: %+v", off)
+	}
+}

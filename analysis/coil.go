@@ -232,8 +232,14 @@ func centreSum(co calc.Coil, w calc.Winding) float64 {
 // that the derivation shows, and the states the cautions need.
 type HeatParts struct {
 	// RiseInner, RiseOuter and RiseLength are the geometry of the
-	// conduction rise inside the winding (calc.RiseGeometry), m.
+	// conduction rise inside the winding (calc.RiseGeometry: the section
+	// the turns occupy), m.
 	RiseInner, RiseOuter, RiseLength float64
+	// ShedInner, ShedOuter and ShedLength are the winding's outline as
+	// stated (calc.WindingEnvelope), whose surface sheds the heat
+	// (calc.Winding.SurfaceArea), m; a winding that does not fill its
+	// stated build occupies less than this (RiseOuter < ShedOuter).
+	ShedInner, ShedOuter, ShedLength float64
 	// BundleDiameter is a thin coil's heat-shedding tube diameter, m.
 	BundleDiameter float64
 	// AxisVertical says the coil's axis counts as vertical for natural
@@ -266,6 +272,15 @@ type HeatParts struct {
 	// FormerSource names where the former material's data come from ("" when
 	// none is used).
 	FormerSource string
+	// CoreMass (kg), CoreSpecificHeat (J/(kg·K)) and CoreHeatCapacity
+	// (J/K) are a cored coil's rod as lumped with the winding in the
+	// heat capacity (calc.CoreHeatCapacity; zeros without a core or a
+	// core density); CoreSpecificHeatSource names where the specific heat
+	// comes from ("" when stated). CoreLeftOut says a core is present but
+	// left out, its density not being given.
+	CoreMass, CoreSpecificHeat, CoreHeatCapacity float64
+	CoreSpecificHeatSource                       string
+	CoreLeftOut                                  bool
 }
 
 // WarmUp is the hottest winding temperature against time from cold, K.
@@ -289,6 +304,8 @@ func heatParts(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, outer flo
 	hp := HeatParts{AirViscosity: n, AirConductivity: n, AirPrandtl: n, H: n, ContinuousTau: n, LossSlope: n}
 	w := cr.Winding
 	hp.RiseInner, hp.RiseOuter, hp.RiseLength = calc.RiseGeometry(co, w)
+	e := calc.WindingEnvelope(co, w)
+	hp.ShedInner, hp.ShedOuter, hp.ShedLength = math.Max(e.R0, 0), e.R1, e.Z1-e.Z0
 	hp.AxisVertical = calc.AxisIsVertical(co, cond)
 	if w.Thin {
 		hp.BundleDiameter = calc.BundleDiameter(outer, w.TurnCount())
@@ -315,6 +332,15 @@ func heatParts(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, outer flo
 	hp.SurfaceMax = surfaceMax(h)
 	if m, ok := calc.FormerMaterialByName(co.Former.Material); ok && co.Former.HeatCapacity <= 0 && co.Former.Mass > 0 {
 		hp.FormerSource = m.Source
+	}
+	if k := co.Core; k.Present() {
+		hp.CoreMass, hp.CoreHeatCapacity, hp.CoreLeftOut = k.Mass(), calc.CoreHeatCapacity(co), !(k.Mass() > 0)
+		if hp.CoreMass > 0 {
+			hp.CoreSpecificHeat = k.SpecificHeatUsed()
+			if !(k.SpecificHeat > 0) {
+				hp.CoreSpecificHeatSource = calc.CoreSpecificHeatSource
+			}
+		}
 	}
 	hp.WarmUp = warmUp(co, h, on, hp.Continuous, hp.ContinuousTau)
 	return hp

@@ -92,17 +92,20 @@ func TestVerifyHandbookRows(t *testing.T) {
 		t.Error("Wheeler row outside Wheeler's range")
 	}
 
-	// A Helmholtz pair: the (4/5)^(3/2) closed form.
+	// A thin pair at the Helmholtz spacing: its loop sum at the centre is
+	// the (4/5)^(3/2) closed form term by term, so no row repeats it; its
+	// field is checked off the axis against the numerical integral.
 	pair := func(spacing string) *Study {
 		return evaluateSpec(t, "```coil\nname = p\nform = pair\nmean-diameter = 200 mm\nturns = 50\nwire = AWG 22\ncurrent = 0.5 A\nspacing = "+spacing+"\nsense = aiding\n```\n")
 	}
-	h := checkNamed(pair("100 mm").Checks, "field at the centre of the Helmholtz pair")
-	if h == nil || !h.Pass || h.RelDiff > 1e-9 {
-		t.Fatalf("Helmholtz row: %+v", h)
+	thin := pair("100 mm")
+	for _, name := range []string{"field at the centre of the Helmholtz pair", "field at coil centre"} {
+		if h := checkNamed(thin.Checks, name); h != nil {
+			t.Errorf("thin pair checked against the closed form its own sum is: %+v", *h)
+		}
 	}
-	want := math.Pow(0.8, 1.5) * calc.Mu0 * 50 * 0.5 / 0.1
-	if math.Abs(h.Expected/want-1) > 1e-12 {
-		t.Errorf("Helmholtz factor: %g, want %g", h.Expected, want)
+	if h := checkNamed(thin.Checks, "|B| at an off-axis test point"); h == nil || !h.Pass {
+		t.Errorf("thin pair's off-axis row: %+v", h)
 	}
 	if checkNamed(pair("150 mm").Checks, "field at the centre of the Helmholtz pair") != nil {
 		t.Error("Helmholtz row for a pair not at Helmholtz spacing")

@@ -185,14 +185,21 @@ func LimitValue(l calc.Limit, d calc.Design, r calc.Results) float64 {
 }
 
 // surfaceMax is the hottest surface temperature of a coil block: the
-// steady one, or at the end of an on period of its duty cycle, K.
+// steady one, or the hottest over the periodic state of its on/off cycle
+// (calc.Cycle.PeakSurface), K.
 func surfaceMax(h calc.HeatResult) float64 {
-	tp, st := h.Problem, h.Steady
-	ts := st.Surface
-	if cy := h.Cycle; cy.On > 0 && cy.Settled {
-		ts = math.Max(ts, tp.Surface(cy.PeakMean, tp.PowerOn(cy.PeakMean)))
-	}
+	ts, _ := surfaceMaxOf(h)
 	return ts
+}
+
+// surfaceMaxOf is surfaceMax, and whether the on/off cycle's periodic
+// state gives it.
+func surfaceMaxOf(h calc.HeatResult) (ts float64, cycle bool) {
+	ts = h.Steady.Surface
+	if cy := h.Cycle; cy.On > 0 && cy.Settled && cy.PeakSurface > ts {
+		return cy.PeakSurface, true
+	}
+	return ts, false
 }
 
 // switchVoltage is the voltage across the switch when the coil is switched

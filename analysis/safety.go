@@ -63,6 +63,16 @@ type Finding struct {
 	// Assumed says it was not stated (AssumedSwitchOff).
 	SwitchOff float64
 	Assumed   bool
+	// For HotSurfaceFound: Value is the hottest surface over the nominal
+	// design and the tolerances' corners; AtCorner says a corner gives it,
+	// Corner (an index into WorstCase.Corners), and Nominal is the
+	// nominal design's hottest surface, K. Cycle says the value is the
+	// hottest over the periodic state of the on/off cycle (rather than the
+	// steady surface).
+	AtCorner bool
+	Corner   int
+	Nominal  float64
+	Cycle    bool
 }
 
 // Safety holds the findings, most severe first within each coil, and the
@@ -150,7 +160,10 @@ func (ir ImplantReach) Any() bool {
 	return false
 }
 
-func assessSafety(d calc.Design, r calc.Results, coils []CoilStudy) Safety {
+// assessSafety finds the hazards of the design from its results: the
+// nominal design's, and for the hot surface the worst over the tolerances'
+// corners too (wc; nil without a tolerances block).
+func assessSafety(d calc.Design, r calc.Results, coils []CoilStudy, wc *WorstCase) Safety {
 	var s Safety
 	for i, co := range d.Coils {
 		cr := r.Coils[i]
@@ -174,8 +187,8 @@ func assessSafety(d calc.Design, r calc.Results, coils []CoilStudy) Safety {
 		if !(cr.Runaway || calc.Duty(co) >= 1 || math.IsNaN(h.TimeToLimit) || !(cr.Temperature <= co.InsulationClass)) {
 			add(ClassIfLeftOn, Warning, coils[i].Heat.Continuous.HotSpot)
 		}
-		if ts := coils[i].Heat.SurfaceMax; ts > HotSurface {
-			add(HotSurfaceFound, Caution, ts)
+		if f, ok := hotSurface(i, h, coils[i].Heat.SurfaceMax, wc); ok {
+			s.Findings = append(s.Findings, f)
 		}
 		// The density rule of thumb only where the coil also runs warm: a
 		// small coil sheds its heat easily and the rule is conservative
@@ -191,6 +204,36 @@ func assessSafety(d calc.Design, r calc.Results, coils []CoilStudy) Safety {
 	}
 	s.Implant = implantReach(d, r, coils)
 	return s
+}
+
+// hotSurface is coil block i's hot-surface finding, when its hottest
+// surface passes HotSurface: the nominal design's hottest surface nominal
+// (steady, or over its on/off cycle: surfaceMax of heat h), or a hotter one
+// at a corner of the tolerances (WorstCase.Surface).
+func hotSurface(i int, h calc.HeatResult, nominal float64, wc *WorstCase) (Finding, bool) {
+	_, cycle := surfaceMaxOf(h)
+	f := Finding{Kind: HotSurfaceFound, Severity: Caution, Coil: i, Value: nominal, Nominal: nominal, Cycle: cycle}
+	if wc != nil && i < len(wc.Surface) {
+		if ws := wc.Surface[i]; ws.Corner >= 0 && (ws.Max > nominal || math.IsNaN(nominal)) {
+			f.Value, f.AtCorner, f.Corner, f.Cycle = ws.Max, true, ws.Corner, ws.Cycle
+		}
+	}
+	return f, f.Value > HotSurface
+}
+
+// HottestSurface is coil block i's hottest surface, K, as the hot-surface
+// caution judges it (hotSurface): the nominal design's steady or cycle
+// surface, or a hotter one at corner `at` of the tolerances (−1: the
+// nominal design); NaN when the heat balance has no solution.
+func (st *Study) HottestSurface(i int) (ts float64, at int) {
+	if i >= len(st.Coils) || i >= len(st.Results.Coils) || st.Results.Coils[i].Verdict.NoSolution {
+		return math.NaN(), -1
+	}
+	f, _ := hotSurface(i, st.Results.Coils[i].Heat, st.Coils[i].Heat.SurfaceMax, st.WorstCase)
+	if f.AtCorner {
+		return f.Value, f.Corner
+	}
+	return f.Value, -1
 }
 
 // electricalFindings are the switch-off spike, at the stated switch-off

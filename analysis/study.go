@@ -123,9 +123,9 @@ func Analyse(s *spec.Spec, o Options) *Study {
 	st.Design = analyseDesign(s.Design, st.Results, o.MapNodes)
 	st.Checks = append(Verify(s.Design, air), kindChecks(s.Design, air, kinds)...)
 	st.Sweep = RunSweep(s)
-	st.Safety = assessSafety(s.Design, st.Results, st.Coils)
-	st.Safety.Findings = kindFindings(s.Design, st.Results, kinds, st.Safety.Findings)
 	st.WorstCase = AnalyseWorstCase(s, st.Results, st.Limits)
+	st.Safety = assessSafety(s.Design, st.Results, st.Coils, st.WorstCase) // the hot surface over the corners too
+	st.Safety.Findings = kindFindings(s.Design, st.Results, kinds, st.Safety.Findings)
 	st.WorstCase.fitSuppression(st.Results.Coils, st.Coils) // the series resistor that holds at every corner
 	st.WorstCase.judge(st.Limits)                           // with tolerances, a limit passes only if met at every corner
 	switch {

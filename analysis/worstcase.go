@@ -38,6 +38,20 @@ type WorstCase struct {
 	// Suppression is each coil block's series resistor sized over the
 	// corners (nil for a block that sizes none), in spec order.
 	Suppression []*Suppression
+	// Surface is each coil block's hottest surface over the nominal
+	// design and the corners, in spec order.
+	Surface []WorstSurface
+}
+
+// WorstSurface is one coil block's hottest surface temperature (surfaceMax:
+// steady, or the hottest over its on/off cycle) over the nominal design and
+// every corner: Max, K, at Corner (an index into Corners, −1: the nominal
+// design), Cycle set when the on/off cycle gives it there. A corner whose
+// heat balance has no solution is left out (it is a runaway, found as such).
+type WorstSurface struct {
+	Max    float64
+	Corner int
+	Cycle  bool
 }
 
 // Corner is one combination of extremes: bit t of High set takes
@@ -49,6 +63,11 @@ type Corner struct {
 	Limit  []float64 // per limit, the computed value, SI
 	// SwitchOff is what each coil block's switch opens there.
 	SwitchOff []SwitchOffAt
+	// Surface is each coil block's hottest surface there, K (NaN when its
+	// heat balance has no solution), and SurfaceCycle says its on/off
+	// cycle gives it.
+	Surface      []float64
+	SurfaceCycle []bool
 }
 
 // WorstResult is one headline result over the corners. CornerMin and
@@ -190,7 +209,8 @@ var quickQuantities = map[string]bool{
 // results that the headline results and the limits of quickQuantities
 // read: per coil the winding, operating point, density, mass, length,
 // inductance, moment, field at its centre, time constant, the peak of an
-// on/off cycle and the switching; then the total moment, field at the
+// on/off cycle, the heat result's problem, steady state and cycle (for the
+// hottest surface), and the switching; then the total moment, field at the
 // origin and at the probes and the torque. Everything else is left zero.
 func QuickEvaluate(d calc.Design) calc.Results { return quickEvaluate(d, nil) }
 
@@ -220,12 +240,16 @@ func quickEvaluate(d calc.Design, excess []float64) calc.Results {
 			cr.TimeConstant = cr.Inductance / op.RHot
 		}
 		tp := op.Thermal
+		nan := math.NaN()
+		cr.Heat = calc.HeatResult{Problem: tp, Steady: op.State,
+			Cycle: calc.Cycle{PeakMean: nan, PeakHot: nan, PeakSurface: nan, Trough: nan, Periods: nan, AveragePow: nan}}
 		if excess != nil {
 			cr.Temperature += excess[len(res.Coils)]
 		} else if c.OnTime > 0 && tp.Duty > 0 && tp.Duty < 1 && op.State.Settled && tp.R20 > 0 && !math.IsInf(tp.R20, 0) {
 			if hc := calc.HeatCapacity(c, w); hc > 0 {
 				// as calc.Evaluate: the cycle's peak when an on-time is stated
 				if cy := tp.PeriodicCycle(hc, c.OnTime); cy.On > 0 {
+					cr.Heat.Cycle = cy
 					cr.Temperature = math.Max(cy.PeakHot, op.Temperature)
 					if !cy.Settled {
 						cr.Temperature, cr.Runaway = math.NaN(), true
@@ -257,6 +281,8 @@ type evaluation struct {
 	values, limits []float64
 	pass           bool
 	switchOff      []SwitchOffAt
+	surface        []float64 // per coil, surfaceMax (NaN: no solution)
+	surfaceCycle   []bool
 	// excess is each coil's cycle peak above its steady duty-averaged
 	// temperature, K (0 without an on/off cycle).
 	excess []float64
@@ -283,6 +309,11 @@ func evaluateFor(d calc.Design, quantities []string, exact bool, excess []float6
 	}
 	for _, cr := range r.Coils {
 		ev.switchOff = append(ev.switchOff, SwitchOffAt{Supply: cr.Switch.Supply, Current: cr.Switch.WorstCurrent})
+		ts, cycle := math.NaN(), false
+		if cr.Heat.Steady.Settled && !cr.Verdict.NoSolution && !(cr.Heat.Cycle.On > 0 && !cr.Heat.Cycle.Settled) {
+			ts, cycle = surfaceMaxOf(cr.Heat)
+		}
+		ev.surface, ev.surfaceCycle = append(ev.surface, ts), append(ev.surfaceCycle, cycle)
 	}
 	for _, l := range JudgeLimits(d, r) {
 		ev.limits = append(ev.limits, l.Computed)
@@ -384,7 +415,17 @@ func AnalyseWorstCase(s *spec.Spec, nominal calc.Results, limits []LimitResult) 
 
 	nomEv := evaluateFor(d, quantities, wc.Exact, nil)
 	for h := range nc {
-		wc.Corners = append(wc.Corners, Corner{High: uint32(h), Design: designs[h], Values: evs[h].values, Limit: evs[h].limits, SwitchOff: evs[h].switchOff})
+		wc.Corners = append(wc.Corners, Corner{High: uint32(h), Design: designs[h], Values: evs[h].values, Limit: evs[h].limits, SwitchOff: evs[h].switchOff,
+			Surface: evs[h].surface, SurfaceCycle: evs[h].surfaceCycle})
+	}
+	for k := range d.Coils {
+		ws := WorstSurface{Max: nomEv.surface[k], Corner: -1, Cycle: nomEv.surfaceCycle[k]}
+		for h, c := range wc.Corners {
+			if v := c.Surface[k]; v > ws.Max || (math.IsNaN(ws.Max) && !math.IsNaN(v)) {
+				ws = WorstSurface{Max: v, Corner: h, Cycle: c.SurfaceCycle[k]}
+			}
+		}
+		wc.Surface = append(wc.Surface, ws)
 	}
 	for r, q := range quantities {
 		wr := WorstResult{Quantity: q, Nominal: nomEv.values[r], Min: nomEv.values[r], Max: nomEv.values[r], CornerMin: -1, CornerMax: -1}
@@ -564,6 +605,26 @@ func (wc *WorstCase) judge(limits []LimitResult) {
 	wc.Derived = wc.Derivation(limits)
 }
 
+// fittedAt puts the resistors sized over the corners into the switching
+// of corner h's coils, judged against the nominal design's limit: the
+// driver's limit does not move with the supply's tolerance, so the clamp
+// is the nominal design's and the largest resistor the corner's own
+// quotient against it (Suppression.CornerMax); the switch voltage and
+// its margin follow with the fitted resistor.
+func (wc *WorstCase) fittedAt(coils []calc.CoilResult, h int) {
+	for k, p := range wc.Suppression {
+		if p == nil || k >= len(coils) {
+			continue
+		}
+		s := &coils[k].Switch
+		s.Clamp, s.ClampFromRating = p.Clamp, p.ClampFromRating
+		if h >= 0 && h < len(p.CornerMax) {
+			s.ResistorMax = p.CornerMax[h]
+		}
+		*s = s.WithResistor(coils[k].Inductance, coils[k].RHot, p.Resistor)
+	}
+}
+
 // WorstCorner is one corner evaluated in full for the memo's derivation:
 // the corner at which the first limit fails, or else the one giving the
 // least moment (the first headline result's minimum).
@@ -597,7 +658,7 @@ func (wc *WorstCase) Derivation(limits []LimitResult) *WorstCorner {
 	}
 	wk.Design = wc.Corners[wk.Corner].Design
 	wk.Results = calc.Evaluate(wk.Design)
-	wc.fitted(wk.Results.Coils) // the resistor sized over every corner
+	wc.fittedAt(wk.Results.Coils, wk.Corner) // the resistor sized over every corner
 	for i, c := range wk.Design.Coils {
 		wk.Coils = append(wk.Coils, StudyCoil(c, wk.Results.Coils[i], wk.Design.Conditions))
 	}

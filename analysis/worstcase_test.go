@@ -6,6 +6,7 @@ import (
 	"os"
 	"reflect"
 	"runtime"
+	"strings"
 	"testing"
 
 	"coilmemo/calc"
@@ -194,5 +195,38 @@ func TestPercentile(t *testing.T) {
 		if g := Percentile(x, c.p); g != c.want {
 			t.Errorf("P%g = %g, want %g", c.p, g, c.want)
 		}
+	}
+}
+
+// The corner the memo derives in full carries its switching against the
+// nominal design's limit: without a driver rating that is twice the
+// nominal supply at every corner (the driver does not change with the
+// supply's tolerance), so the corner's largest resistor is
+// (2 V_nom − V_s)/I_c with the corner's own V_s and I_c, and the switch
+// voltage with the fitted resistor V_s + I_c R_s — held in the study, for
+// the memo only to write.
+func TestDerivedCornerSwitchingAgainstNominalLimit(t *testing.T) {
+	src, err := os.ReadFile("../examples/torque-coil.md")
+	if err != nil {
+		t.Fatal(err)
+	}
+	st := studyOf(t, strings.Replace(string(src), "driver-rating    = 16 V\n", "", 1))
+	wk := st.WorstCase.Derived
+	p := st.WorstCase.Suppression[0]
+	if wk == nil || p == nil {
+		t.Fatal("no derived corner or no resistor sized")
+	}
+	own := calc.Evaluate(wk.Design).Coils[0].Switch // the corner alone, its own limit
+	limit := 2 * st.Spec.Design.Coils[0].Voltage
+	if own.Clamp == limit {
+		t.Fatalf("the derived corner's supply is the nominal one (%g V): no test", own.Supply)
+	}
+	s := wk.Results.Coils[0].Switch
+	rmax := (limit - own.Supply) / own.WorstCurrent
+	if s.Clamp != limit || s.ClampFromRating || math.Abs(s.ResistorMax-rmax) > 1e-12*rmax {
+		t.Errorf("corner's limit %g V, largest resistor %g Ω; want %g V, %g Ω", s.Clamp, s.ResistorMax, limit, rmax)
+	}
+	if v := own.Supply + own.WorstCurrent*p.Resistor; s.Resistor != p.Resistor || math.Abs(s.SwitchVoltage-v) > 1e-12*v {
+		t.Errorf("corner's switch voltage with %g Ω: %g V, want %g V", s.Resistor, s.SwitchVoltage, v)
 	}
 }

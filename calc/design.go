@@ -106,6 +106,7 @@ type Core struct {
 	Remanence    float64   // T, Br
 	Coercivity   float64   // A/m, Hc
 	Density      float64   // kg/m³
+	SpecificHeat float64   // J/(kg·K) (0: DefaultCoreSpecificHeat)
 	Length       float64   // m
 	Diameter     float64   // m
 }
@@ -125,6 +126,13 @@ type Cooling struct {
 	H          float64 // convective coefficient W/(m²·K); 0 in vacuum
 	HGiven     bool    // true when the spec stated h; else still air by a natural-convection correlation
 	Emissivity float64 // surface emissivity for radiation
+	// Covered says the coils lie under or behind a surface that people
+	// touch (a work surface, a panel, a housing wall), in air that cannot
+	// rise freely past them: the free-convection correlations, which hold
+	// for a surface in an extensive quiescent fluid (Incropera & DeWitt,
+	// 6th ed., §9.1), do not apply, and without a stated h no convection
+	// is counted (EffectiveCooling).
+	Covered bool
 }
 
 // Conditions is the environment of the design.

@@ -83,7 +83,7 @@ func TestEvaluateSample(t *testing.T) {
 	// without frequency, a gradient force without gradient, a time to a
 	// limit that is never reached or not given.
 	for _, n := range []string{"torquer", "probe", "magnet", "helmholtz", "frame"} {
-		for _, f := range []string{"Heat.Cycle.PeakMean", "Heat.Cycle.PeakHot", "Heat.Cycle.Trough", "Heat.Cycle.Periods",
+		for _, f := range []string{"Heat.Cycle.PeakMean", "Heat.Cycle.PeakHot", "Heat.Cycle.PeakSurface", "Heat.Cycle.Trough", "Heat.Cycle.Periods",
 			"Heat.Cycle.AveragePow", "Switch.Spike", "Switch.SpikeWorst", "AC.Reactance", "AC.Impedance", "AC.Phase", "AC.Current",
 			"AC.Voltage", "AC.SkinDepth", "GradientForce", "Heat.TimeToLimit",
 			// current drive without a driver rating: no clamp to size a resistor for

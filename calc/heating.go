@@ -35,7 +35,7 @@ const PracticeDensity = 4e6
 func Heating(c Coil, w Winding, op Operating) HeatResult {
 	n := math.NaN()
 	h := HeatResult{Problem: op.Thermal, Steady: op.State, Conductivity: WindingConductivity(c),
-		TimeToLimit: n, Cycle: Cycle{PeakMean: n, PeakHot: n, Trough: n, Periods: n, AveragePow: n}, ColdMoment: n}
+		TimeToLimit: n, Cycle: Cycle{PeakMean: n, PeakHot: n, PeakSurface: n, Trough: n, Periods: n, AveragePow: n}, ColdMoment: n}
 	h.HeatCapacity = HeatCapacity(c, w)
 	h.ColdMoment = MagneticMoment(c, w, op.ColdCurrent).Norm()
 	tp := op.Thermal

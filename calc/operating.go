@@ -60,7 +60,8 @@ func Ambient(cond Conditions) float64 {
 // ThermalFor returns the heat-balance data of coil c with winding w in the
 // given conditions: R20 = R'20 × wire length of the block, area = surface
 // of one coil × SeriesCoils, cooling from EffectiveCooling — in still air
-// without a stated h the natural-convection correlation of ConvectionFor —,
+// without a stated h the natural-convection correlation of ConvectionFor,
+// and no convection under a cover (Cooling.Covered) —,
 // a mount conductance SeriesCoils / MountResistance when one is given, and
 // the internal rises of WindingRise with the coil's winding conductivity
 // (DefaultWindingConductivity when not given).
@@ -79,7 +80,7 @@ func ThermalFor(c Coil, w Winding, cond Conditions) ThermalProblem {
 		Emissivity: cool.Emissivity,
 		Ambient:    Ambient(cond),
 	}
-	if !cool.Vacuum && !cool.HGiven {
+	if !cool.Vacuum && !cool.HGiven && !cool.Covered {
 		tp.Convection = ConvectionFor(c, w, cond)
 	}
 	if cond.MountResistance > 0 && !math.IsInf(cond.MountResistance, 1) {
@@ -134,7 +135,10 @@ func ConvectionFor(c Coil, w Winding, cond Conditions) *NaturalConvection {
 	if w.Thin {
 		return &NaturalConvection{Shape: HorizontalCylinder, Length: BundleDiameter(outer, n)}
 	}
-	ri, ro, l := RiseGeometry(c, w)
+	// The winding's outline as stated, whose surface sheds the heat
+	// (Winding.SurfaceArea), not the part its turns occupy.
+	e := WindingEnvelope(c, w)
+	ri, ro, l := math.Max(e.R0, 0), e.R1, e.Z1-e.Z0
 	if b := ro - ri; math.Max(l, b) < c.MeanDiameter/4 {
 		return &NaturalConvection{Shape: HorizontalCylinder, Length: 2 * (l + b) / math.Pi, Ring: true}
 	}

@@ -259,3 +259,47 @@ func TestACVoltageDriveHeatsAtImpedance(t *testing.T) {
 		t.Error("d.c.: no a.c. bounds")
 	}
 }
+
+// TestCyclePeakSurfaceLimits: the hottest surface of the periodic on/off
+// state tends to the duty-averaged steady surface for on-times short
+// against every time constant, and for on-times long against the thermal
+// time constant (each on period then settles) to the continuously
+// energised steady surface — exactly so for a winding with no former, whose
+// internal drop relaxes after switch-off no faster than the mean falls,
+// and between that surface and the continuous mean for one on a former.
+// At every on-time it lies between the duty-averaged steady surface, about
+// which the cycle swings, and the peak mean temperature, which bounds the
+// surface of a section heated from within. The valve coil (on a nylon former), with and
+// without its former, on-times from 10⁻⁴ to 30 thermal time constants.
+func TestCyclePeakSurfaceLimits(t *testing.T) {
+	for _, former := range []bool{true, false} {
+		c, cond := valveCoil()
+		if !former {
+			c.Former = Former{}
+		}
+		w := LayOut(c)
+		tp := OperatingPoint(c, w, cond).Thermal
+		C := HeatCapacity(c, w)
+		cont := tp
+		cont.Duty = 1
+		full := cont.Steady()
+		tau := cont.ThermalTimeConstant(C, full.Mean)
+		avg := tp.Steady()
+		if fast := tp.PeriodicCycle(C, 1e-4*tau); math.Abs(fast.PeakSurface-avg.Surface) > 0.01 {
+			t.Errorf("former %v, fast cycle: surface peak %.4f °C, duty-averaged steady surface %.4f °C", former, KelvinToCelsius(fast.PeakSurface), KelvinToCelsius(avg.Surface))
+		}
+		slow := tp.PeriodicCycle(C, 30*tau)
+		if lo, hi := full.Surface-1e-6*(full.Surface-tp.Ambient), full.Mean; former && !(slow.PeakSurface >= lo && slow.PeakSurface <= hi) ||
+			!former && math.Abs(slow.PeakSurface-full.Surface) > 1e-6*(full.Surface-tp.Ambient) {
+			t.Errorf("former %v, slow cycle: surface peak %.6f °C, continuous steady surface %.6f °C, mean %.6f °C", former,
+				KelvinToCelsius(slow.PeakSurface), KelvinToCelsius(full.Surface), KelvinToCelsius(full.Mean))
+		}
+		for _, k := range []float64{1e-3, 1e-2, 0.1, 0.5, 1, 3, 10} {
+			cy := tp.PeriodicCycle(C, k*tau)
+			if !cy.Settled || cy.PeakSurface < avg.Surface-0.01 || cy.PeakSurface > cy.PeakMean {
+				t.Errorf("former %v, on %g τ: surface peak %.4f °C, duty-averaged steady surface %.4f °C, peak mean %.4f °C", former, k,
+					KelvinToCelsius(cy.PeakSurface), KelvinToCelsius(avg.Surface), KelvinToCelsius(cy.PeakMean))
+			}
+		}
+	}
+}

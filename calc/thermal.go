@@ -85,12 +85,14 @@ func StillAir() Cooling { return Cooling{H: StillAirH, Emissivity: DefaultEmissi
 func VacuumCooling() Cooling { return Cooling{Vacuum: true, Emissivity: DefaultEmissivity} }
 
 // EffectiveCooling returns the cooling actually used: the zero Cooling
-// (nothing stated) means StillAir; in vacuum h is 0.
+// (nothing stated) means StillAir; in vacuum h is 0, and so it is for a
+// covered coil without a stated h (Cooling.Covered: the heat then leaves
+// by radiation and the mount only, which errs on the hot side).
 func EffectiveCooling(c Cooling) Cooling {
 	if c == (Cooling{}) {
 		return StillAir()
 	}
-	if c.Vacuum {
+	if c.Vacuum || (c.Covered && !c.HGiven) {
 		c.H = 0
 	}
 	return c
@@ -483,13 +485,14 @@ func WindingRise(c Coil, w Winding, k float64) (mean, max float64) {
 // through which the heat of one coil of c is taken to leave its winding: a
 // thin coil is a solid round bundle of the hexagonal-packing diameter along
 // its mean turn (ri = 0); a single-layer coil an annulus one overall wire
-// diameter deep over its length; a multilayer coil the annulus of its
-// radial build over its length. Zeros when the data are missing.
+// diameter deep over its length; a multilayer coil the annulus its turns
+// occupy as laid (LaidEnvelope), from the bore outward over its layers —
+// LayerCount overall wire diameters, or the stated radial build when the
+// layers fill it — over its length: the heat is generated in the copper,
+// and a winding that does not fill its stated build has no turns in the
+// part it leaves empty. Zeros when the data are missing.
 func RiseGeometry(c Coil, w Winding) (ri, ro, length float64) {
-	outer := c.Wire.Outer
-	if !(outer > 0) {
-		outer = c.Wire.Bare
-	}
+	outer := WireOuter(c)
 	n := w.TurnCount()
 	switch {
 	case n == 0 || !(outer > 0):
@@ -505,5 +508,9 @@ func RiseGeometry(c Coil, w Winding) (ri, ro, length float64) {
 	if !(length > 0) {
 		length = outer
 	}
-	return rin, rin + math.Max(c.RadialBuild, float64(w.LayerCount)*outer), length
+	depth := c.RadialBuild
+	if laid := float64(w.LayerCount) * outer; laid > 0 && !(laid >= depth) {
+		depth = laid
+	}
+	return rin, rin + depth, length
 }

@@ -61,6 +61,33 @@ func TestAdiabaticHeatingRate(t *testing.T) {
 	checkRel(t, "with former", HeatCapacity(c, w), w.Mass*385+9.03, 1e-15)
 }
 
+// TestCoreHeatCapacity: a cored coil warms its rod with it. A pure iron
+// rod, 6 mm × 70 mm, of 7870 kg/m³ and 447 J/(kg·K) (Incropera & DeWitt,
+// 6th ed., Table A.1, iron at 300 K, recalled from memory), holds
+// 7870 · π (3 mm)² · 70 mm · 447 = 6.96 J/K, which the lumped heat capacity
+// adds to the copper's; adiabatically the winding then climbs 100 K in
+// C·100/P of the integrated heat balance (the first law). A ferrite rod of
+// stated 750 J/(kg·K) uses its own figure, and a rod without a density
+// adds nothing (its mass is unknown).
+func TestCoreHeatCapacity(t *testing.T) {
+	c, w := copperCoil(0.5)
+	c.Core = Core{Permeability: 1000, Length: 0.07, Diameter: 0.006, Density: 7870}
+	rod := 7870 * math.Pi * 0.003 * 0.003 * 0.07 * 447
+	if math.Abs(rod-6.96) > 0.005 {
+		t.Fatalf("rod %g J/K", rod)
+	}
+	C := HeatCapacity(c, w)
+	checkRel(t, "cored heat capacity", C, w.Mass*385+rod, 1e-12)
+	tp := ThermalFor(c, w, Conditions{Ambient: T20, Cooling: Cooling{HGiven: true, H: 0}})
+	tp.Alpha20, tp.Emissivity, tp.RiseMean, tp.RiseMax = 0, 0, 0, 0
+	P := 0.25 * tp.R20
+	checkRel(t, "adiabatic time to +100 K with the core", tp.TimeToReach(C, T20+100, 1e6), (w.Mass*385+rod)*100/P, 1e-9)
+	c.Core.SpecificHeat = 750
+	checkRel(t, "ferrite rod", HeatCapacity(c, w), w.Mass*385+rod*750/447, 1e-12)
+	c.Core.Density = 0
+	checkRel(t, "rod without density", HeatCapacity(c, w), w.Mass*385, 1e-15)
+}
+
 func TestTransientTendsToSteady(t *testing.T) {
 	// Natural convection, radiation, R(T) and an internal rise: after ten
 	// time constants the warm-up has reached the steady state.
@@ -291,12 +318,13 @@ func TestConvectionShapes(t *testing.T) {
 	if !nc.Ring || math.Abs(nc.Length-2*(0.01+0.005)/math.Pi) > 1e-12 {
 		t.Errorf("ring: %+v", nc)
 	}
-	// A compact solenoid: its outer diameter, or its length with the axis
-	// vertical.
+	// A compact solenoid: its outer diameter as stated, 30 + 5 mm (its 400
+	// turns fill 5 layers, 2.5 mm of the 5 mm build, but the stated
+	// outline is the surface that sheds the heat), or its length with the
+	// axis vertical.
 	sol := Coil{Form: Solenoid, MeanDiameter: 0.03, Length: 0.04, RadialBuild: 0.005, Turns: 400, Wire: w30}
 	ws := LayOut(sol)
-	_, ro, _ := RiseGeometry(sol, ws)
-	if nc := ConvectionFor(sol, ws, Conditions{}); nc.Ring || nc.Shape != HorizontalCylinder || nc.Length != 2*ro {
+	if nc := ConvectionFor(sol, ws, Conditions{}); nc.Ring || nc.Shape != HorizontalCylinder || math.Abs(nc.Length-0.035) > 1e-15 {
 		t.Errorf("solenoid: %+v", nc)
 	}
 	if nc := ConvectionFor(sol, ws, Conditions{AxisVertical: true}); nc.Shape != VerticalSurface || nc.Length != 0.04 {
@@ -386,5 +414,70 @@ func TestOrientedCoolingAgainstLaminarCorrelations(t *testing.T) {
 		if math.Abs(cv.H/own-1) > 0.06 || math.Abs(cv.H-own) >= math.Abs(cv.H-other) {
 			t.Errorf("axis vertical %v: h = %.4g W/m2K, own-orientation form %.4g, other %.4g (Ra %.3g)", up, cv.H, own, other, cv.Ra)
 		}
+	}
+}
+
+// TestUnderfilledRiseOverOccupiedSection: the heat is generated in the
+// copper, so the conduction rise of a winding whose turns fill only the
+// inner part of its stated radial build is that of the same turns with
+// the build stated as the layers they fill: empty space outside the
+// last layer generates no heat and carries none. 1500 turns of AWG 28
+// (outer 0.36 mm estimated) fill 19 layers, 6.9 mm of an 8 mm build. The
+// finite-volume profile over the occupied annulus (an independent
+// method, AnnulusConduction, Incropera & DeWitt §3.5) gives the same rise.
+func TestUnderfilledRiseOverOccupiedSection(t *testing.T) {
+	c := Coil{Form: Solenoid, MeanDiameter: 0.03, Length: 0.03, RadialBuild: 0.008, Turns: 1500,
+		Wire: WireFromGauge(28, Copper()), Axis: Vec{0, 0, 1}}
+	w := LayOut(c)
+	laid := float64(w.LayerCount) * WireOuter(c)
+	if w.Overfull || !(laid < 0.95*c.RadialBuild) {
+		t.Fatalf("%d layers, %.3g mm of the 8 mm build: not underfilled", w.LayerCount, laid*1e3)
+	}
+	full := c
+	full.InnerDiameter = c.MeanDiameter - c.RadialBuild // the same bore
+	full.RadialBuild = laid * (1 + 1e-12)
+	full.MeanDiameter = full.InnerDiameter + full.RadialBuild
+	wf := LayOut(full)
+	if wf.Overfull || wf.LayerCount != w.LayerCount || wf.Layers[0].Radius != w.Layers[0].Radius {
+		t.Fatalf("filled coil: %d layers from %g m (%s)", wf.LayerCount, wf.Layers[0].Radius, wf.Problem)
+	}
+	mean, hot := WindingRise(c, w, 0.3)
+	meanF, hotF := WindingRise(full, wf, 0.3)
+	checkRel(t, "hot-spot rise per watt", hot, hotF, 1e-9)
+	checkRel(t, "mean rise per watt", mean, meanF, 1e-9)
+	ri, ro, l := RiseGeometry(c, w)
+	tp := baseThermal() // 12 W, hA = 0.1 W/K
+	fd := AnnulusConduction(tp, ri, ro, l, 0.3, 1, 400)
+	checkRel(t, "finite-volume hot-spot rise", fd.HotSpot-fd.Surface, 12*hot, 1e-5)
+}
+
+// TestCoveredCoolingRadiatesOnly: a coil under or behind a surface people
+// touch, without a stated h, sheds no heat by convection — the open-air
+// correlations hold for a surface in an extensive quiescent fluid
+// (Incropera & DeWitt, 6th ed., §9.1) — and its steady surface closes the
+// grey-body balance P = ε σ A (Ts⁴ − Ta⁴) (Stefan–Boltzmann law); in open
+// still air the same coil runs cooler. A stated h is the enclosure's and
+// is used as given.
+func TestCoveredCoolingRadiatesOnly(t *testing.T) {
+	c, w := copperCoil(0.5)
+	open := Conditions{Ambient: T20, Cooling: StillAir()}
+	covered := open
+	covered.Cooling.Covered = true
+	tp := ThermalFor(c, w, covered)
+	if tp.Convection != nil || tp.H != 0 {
+		t.Fatalf("covered coil convects: h %g, correlation %v", tp.H, tp.Convection)
+	}
+	st := tp.Steady()
+	ts, ta := st.Surface, tp.Ambient
+	checkRel(t, "radiated power", st.Power, DefaultEmissivity*StefanBoltzmann*tp.Area*(ts*ts*ts*ts-ta*ta*ta*ta), 1e-9)
+	if st.Convected != 0 {
+		t.Errorf("convected %g W", st.Convected)
+	}
+	if air := ThermalFor(c, w, open).Steady(); !(air.Surface < st.Surface-1) {
+		t.Errorf("open air %.2f °C, covered %.2f °C", KelvinToCelsius(air.Surface), KelvinToCelsius(st.Surface))
+	}
+	covered.Cooling.H, covered.Cooling.HGiven = 4, true
+	if tp := ThermalFor(c, w, covered); tp.H != 4 || tp.Convection != nil {
+		t.Errorf("covered with h = 4 W/(m²·K): h %g, correlation %v", tp.H, tp.Convection)
 	}
 }

@@ -3,24 +3,29 @@ package calc
 import "math"
 
 // An independent check of the steady hot spot: a finite-volume solution of
-// radial conduction across the winding section with the same surface
-// boundary condition as the lumped heat balance. The section is the
+// radial conduction across the winding section under the lumped model's
+// own assumptions, against which the closed forms of AnnulusRise and the
+// heat balance's solution (MeanAtSurface) are checked. The section is the
 // annulus of RiseGeometry (inner radius ri, outer ro, length ℓ,
 // conductivity k), its bore and ends adiabatic, divided into n rings of
-// equal thickness. The current is the same in every turn, so each ring
-// generates the block's power in proportion to its own resistance,
+// equal thickness. The heat is generated uniformly, P = duty · PowerOn(T̄)
+// at the volume-mean temperature T̄ of the profile (the lumped model's one
+// resistance at the mean temperature), so each ring generates P in
+// proportion to its volume. The heat generated inside radius r crosses it
+// by conduction, −k 2π r ℓ dT/dr = Q(r) (Fourier's law; Incropera &
+// DeWitt, Fundamentals of Heat and Mass Transfer, 6th ed., §3.5),
+// integrated ring by ring inward from the surface, whose temperature T_s
+// solves HeatOut(T_s) = P by bisection. The profile and the power are
+// iterated to a fixed point. No mean or hot-spot formula is used: the
+// profile itself is computed, and its mean fixes the power.
 //
-//	q_j = P · V_j (1 + α20 (T_j − 20 °C)) / Σ_i V_i (1 + α20 (T_i − 20 °C)),
-//
-// where the block's resistance follows the volume-mean temperature (the
-// resistance law is linear) and P = duty · PowerOn(T̄) under either drive.
-// The heat generated inside radius r crosses it by conduction,
-// −k 2π r ℓ dT/dr = Q(r) (Fourier's law; Incropera & DeWitt, Fundamentals of
-// Heat and Mass Transfer, 6th ed., §3.5), integrated ring by ring inward
-// from the surface, whose temperature T_s solves HeatOut(T_s) = P. The
-// rings' temperatures are iterated to a fixed point. Unlike the lumped
-// balance, no mean or hot-spot formula is used: the profile itself is
-// computed, with the resistance of each ring at its own temperature.
+// Accuracy: the scheme is of second order in the ring thickness. Against
+// the closed form the internal rise (hottest ring and volume mean above
+// the surface) is within 6 × 10⁻⁶ of itself at 400 rings for a solid
+// round bundle and within 2 × 10⁻⁶ for annuli of any thickness
+// (TestAnnulusConductionConverges), so that the hot spot's rise above
+// the ambient, of which the internal rise is a part, is within 10⁻⁵ of
+// itself.
 
 // ConductionResult is the finite-volume solution of the winding section.
 type ConductionResult struct {
@@ -40,7 +45,7 @@ func WindingConduction(c Coil, w Winding, tp ThermalProblem, n int) ConductionRe
 
 // AnnulusConduction is WindingConduction for an annulus ri..ro of length l
 // and conductivity k, counted coils times (a pair's two coils share the
-// power and the surface equally).
+// power and the surface equally), on n rings (n < 2: 400).
 func AnnulusConduction(tp ThermalProblem, ri, ro, l, k, coils float64, n int) ConductionResult {
 	nan := math.NaN()
 	res := ConductionResult{Surface: nan, Mean: nan, HotSpot: nan, Power: nan}
@@ -60,41 +65,35 @@ func AnnulusConduction(tp ThermalProblem, ri, ro, l, k, coils float64, n int) Co
 	for j := range T {
 		T[j] = tp.Ambient
 	}
-	f := func(T float64) float64 { return ResistanceFactor(tp.Alpha20, T) }
+	vsum := sumOf(vol)
+	inside := make([]float64, n+1) // share of the power generated inside face j
+	for j, v := range vol {
+		inside[j+1] = inside[j] + v/vsum
+	}
+	next := make([]float64, n)
 	for it := 1; it <= 500; it++ {
 		// Volume-mean temperature and the block's power at it.
-		vs, fs := 0.0, 0.0
+		vs := 0.0
 		for j, v := range vol {
 			vs += v * T[j]
-			fs += v * f(T[j])
 		}
-		mean := vs / sumOf(vol)
-		P := tp.HeatIn(mean)
+		P := tp.HeatIn(vs / vsum)
 		Ts := tp.surfaceFor(P)
 		if math.IsNaN(Ts) || math.IsNaN(P) {
 			return res
 		}
-		// March inward: the heat generated inside the face at r_j+1/2
-		// (per coil) crosses it; the ring centres' temperatures follow.
-		next := make([]float64, n)
-		Q := 0.0
-		inside := make([]float64, n+1) // heat generated inside face j
-		for j, v := range vol {
-			Q += P / coils * v * f(T[j]) / fs
-			inside[j+1] = Q
-		}
+		Q := func(j int) float64 { return P / coils * inside[j] } // W crossing face j, per coil
 		// Outer half ring: from the surface (face n) to the centre of ring n−1.
 		rc := func(j int) float64 { return ri + (float64(j)+0.5)*dr }
 		face := func(j int) float64 { return ri + float64(j)*dr }
-		// Within ring j the heat crossing radius r is inside[j] plus the
+		// Within ring j the heat crossing radius r is Q(j) plus the
 		// ring's share generated between its inner face and r, taken as
 		// the mean of the two faces' values over each half ring.
-		tc := Ts + (inside[n]+(inside[n-1]+inside[n])/2)/2*math.Log(face(n)/rc(n-1))/(2*math.Pi*k*l)
+		tc := Ts + (Q(n)+(Q(n-1)+Q(n))/2)/2*math.Log(face(n)/rc(n-1))/(2*math.Pi*k*l)
 		next[n-1] = tc
 		for j := n - 2; j >= 0; j-- {
 			// From the centre of ring j+1 to that of ring j, across face j+1.
-			q := inside[j+1]
-			tc += q * math.Log(rc(j+1)/rc(j)) / (2 * math.Pi * k * l)
+			tc += Q(j+1) * math.Log(rc(j+1)/rc(j)) / (2 * math.Pi * k * l)
 			next[j] = tc
 		}
 		diff := 0.0
@@ -119,7 +118,7 @@ func AnnulusConduction(tp ThermalProblem, ri, ro, l, k, coils float64, n int) Co
 	for j, v := range vol {
 		vs += v * T[j]
 	}
-	res.Mean = vs / sumOf(vol)
+	res.Mean = vs / vsum
 	res.HotSpot = T[0]
 	for _, t := range T {
 		res.HotSpot = math.Max(res.HotSpot, t)

@@ -361,6 +361,9 @@ func coolingAssumption(d calc.Design, cool calc.Cooling) string {
 	case d.Conditions.Cooling.HGiven:
 		return fmt.Sprintf("convection with the heat-transfer coefficient stated in the spec, h = %s, plus radiation with surface emissivity %s to surroundings at the ambient temperature%s.",
 			Eng(cool.H, "W/(m²·K)", 3), Sig(cool.Emissivity, 2), mount)
+	case cool.Covered:
+		return fmt.Sprintf("radiation with surface emissivity %s to surroundings at the ambient temperature%s, and no convection: the coils lie under or behind a surface that people touch (enclosure = covered), where the open-air correlations do not hold — on the hot side for the convection left out.",
+			Sig(cool.Emissivity, 2), mount)
 	}
 	return fmt.Sprintf("natural convection in still air, the heat-transfer coefficient h from a published correlation for the coil's outer shape at its surface temperature (so it rises as the coil warms), plus radiation with surface emissivity %s to surroundings at the ambient temperature%s.",
 		Sig(cool.Emissivity, 2), mount)

@@ -192,11 +192,11 @@ type fittedOver struct {
 	*analysis.Suppression
 	corners        int    // how many corners
 	maxAt, worstAt string // MaxCorner and Corner as cornerCode writes them
-	// inCorner is set for a corner's derivation, of corner derived: the
-	// resistor is the one sized over every corner, given, not derived
-	// again, and the limit is the nominal design's.
+	// inCorner is set for a corner's derivation: the resistor is the one
+	// sized over every corner, given, not derived again, and the limit is
+	// the nominal design's (the corner's switching as the analysis fits
+	// it, WorstCase.Derivation).
 	inCorner bool
-	derived  int
 }
 
 // fittedOver is coil block i's resistor sized over the corners; nil
@@ -218,10 +218,6 @@ func fittedOverOf(j *analysis.Study, i int) *fittedOver {
 // switch voltage with it at the worst one.
 func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, fo *fittedOver) []Step {
 	s := cr.Switch
-	if fo != nil && fo.inCorner && fo.derived >= 0 && fo.derived < len(fo.CornerMax) {
-		// the driver's limit is the nominal design's at every corner
-		s.Clamp, s.ClampFromRating, s.ResistorMax = fo.Clamp, fo.ClampFromRating, fo.CornerMax[fo.derived]
-	}
 	L, R, I := Q(cr.Inductance, "H", 4), Q(cr.RHot, "Ω", 4), Q(math.Abs(cr.Current), "A", 4)
 	var steps []Step
 	if math.IsNaN(s.TimeConstant) {

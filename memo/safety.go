@@ -37,7 +37,7 @@ func Cautions(j *analysis.Study) []doc.Callout {
 				Spans: []doc.Span{{Text: leftOnText(co, cr, j.Coils[f.Coil].Heat.Continuous)}}})
 		case analysis.HotSurfaceFound:
 			out = append(out, doc.Callout{Severity: doc.Caution, Title: "Hot surface, " + name,
-				Spans: []doc.Span{{Text: templates.Text("caution-hot", map[string]string{"Temperature": Eng(Celsius(f.Value), "°C", 3)})}}})
+				Spans: []doc.Span{{Text: templates.Text(hotTemplate(j), map[string]string{"Temperature": hotSurfaceWords(j, f)})}}})
 		case analysis.HighDensity:
 			out = append(out, doc.Callout{Severity: doc.Note, Title: "Current density above common practice, " + name,
 				Spans: []doc.Span{{Text: templates.Text("caution-density", map[string]string{"Density": Eng(f.Value, "A/m²", 3),
@@ -70,6 +70,30 @@ func Cautions(j *analysis.Study) []doc.Callout {
 		out = append(out, doc.Callout{Severity: doc.Note, Title: t, Spans: []doc.Span{{Text: p}}})
 	}
 	return out
+}
+
+// hotTemplate is the hot-surface caution's wording: of the winding's own
+// surface, or, for coils under or behind a surface people touch
+// (enclosure = covered), of that surface over the winding.
+func hotTemplate(j *analysis.Study) string {
+	if j.Cooling.Covered {
+		return "caution-hot-covered"
+	}
+	return "caution-hot"
+}
+
+// hotSurfaceWords words the hottest surface of a hot-surface finding:
+// the temperature, over the on/off cycle where that gives it, and at the
+// corner of the tolerances where one does, with the nominal figure.
+func hotSurfaceWords(j *analysis.Study, f analysis.Finding) string {
+	s := Eng(Celsius(f.Value), "°C", 3)
+	if f.Cycle {
+		s += " at the peak of its on/off cycle"
+	}
+	if wc := j.WorstCase; f.AtCorner && wc != nil {
+		s += fmt.Sprintf(" at corner %s of the tolerances (%s), against %s at nominal", cornerCode(wc, f.Corner), wc.CornerName(f.Corner), Eng(Celsius(f.Nominal), "°C", 3))
+	}
+	return s
 }
 
 // implantWhere words where the field reaches 0.5 mT (analysis.ImplantReach):

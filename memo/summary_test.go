@@ -92,7 +92,7 @@ func TestAboveMeltingOnPageOne(t *testing.T) {
 // insulation class carries a mark and the table a note saying the value is
 // extrapolated; one above the conductor's melting point quotes no number.
 func TestSweepMarksBeyondClass(t *testing.T) {
-	j := mustEvaluate(t, "```coil\nname = c1\nform = solenoid\nmean-diameter = 20 mm\nlength = 20 mm\nradial-build = 4 mm\nturns = 400\nwire = AWG 30\ninsulation-class = B\nvoltage = 2 V\n```\n\n```sweep\nvoltage = 2 V .. 62 V step 30 V\n```\n")
+	j := mustEvaluate(t, "```coil\nname = c1\nform = solenoid\nmean-diameter = 20 mm\nlength = 20 mm\nradial-build = 4 mm\nturns = 400\nwire = AWG 30\ninsulation-class = B\nvoltage = 2 V\n```\n\n```sweep\nvoltage = 2 V .. 72 V step 35 V\n```\n")
 	c := &composer{j: j, cautions: Cautions(j)}
 	c.sweep()
 	var cells []string

@@ -39,6 +39,18 @@ func (c *composer) heating() {
 		env = templates.Text("heating-vacuum", map[string]string{"Emissivity": Sig(cool.Emissivity, 2), "Mount": mount})
 	case cool.HGiven:
 		env = templates.Text("heating-given-h", map[string]string{"H": Eng(cool.H, "W/(m²·K)", 3), "Emissivity": Sig(cool.Emissivity, 2)})
+		if cool.Covered {
+			env += " The coils lie under or behind a surface that people touch (enclosure = covered); the stated h is taken as that of the enclosure."
+		}
+	case cool.Covered:
+		lie, mount := "The coils lie", ""
+		if len(c.drivenCoils()) == 1 {
+			lie = "The coil lies"
+		}
+		if d.Conditions.MountResistance > 0 {
+			mount = ", and by conduction to its mount"
+		}
+		env = templates.Text("heating-covered", map[string]string{"Emissivity": Sig(cool.Emissivity, 2), "Lie": lie, "Mount": mount})
 	default:
 		shapes, n := c.convectionShapes()
 		plural, singular := "s", ""
@@ -64,7 +76,7 @@ func (c *composer) heating() {
 		cs := &c.j.Coils[i]
 		c.coilPart(co.Name, capitalise, func() {
 			c.derive(heatSteps(co, cr, cs, c.j.Cooling)...)
-			if p := warmUpText(co, cr); p != "" {
+			if p := warmUpText(co, cr, cs); p != "" {
 				c.para(p)
 			}
 			c.warmUpFigure(co, cr, cs)
@@ -109,9 +121,9 @@ func heatSurfaceSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, 
 	hp := cs.Heat
 	series := cs.Series
 	two := seriesFactor(series)
-	ri := hp.RiseInner
-	ro := hp.RiseOuter
-	length := hp.RiseLength
+	ri := hp.ShedInner
+	ro := hp.ShedOuter
+	length := hp.ShedLength
 	switch {
 	case w.Thin:
 		db := hp.BundleDiameter
@@ -188,7 +200,7 @@ func heatShedSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, coo
 	hval := hp.H
 	var parts []string
 	var nums []string
-	if !cool.Vacuum {
+	if !cool.Vacuum && (!cool.Covered || cool.HGiven) {
 		add(Step{What: "Heat carried away by convection", Symbolic: `Q_c = h A_s (T_s - T_a)`,
 			Numbers: fmt.Sprintf(`%s \cdot %s \cdot %s`, Q(hval, "W/(m²·K)", 3), Q(tp.Area, "m²", 4), Q(Ts-Ta, "K", 4)), Result: Q(st.Convected, "W", 4)})
 		parts, nums = append(parts, "Q_c"), append(nums, Q(st.Convected, "W", 4))
@@ -234,12 +246,21 @@ func conductionSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, c
 	}
 	pc := st.Power / float64(series)
 	q := pc / (math.Pi * (ro*ro - ri*ri) * length)
-	each := ""
+	var notes []string
+	occupied := ""
+	if cs.Underfilled {
+		occupied = fmt.Sprintf(", over the inner %s of the stated %s radial build that its turns occupy", Eng(cs.Laid.R1-cs.Laid.R0, "m", 3), Eng(cs.Envelope.R1-cs.Envelope.R0, "m", 3))
+		notes = append(notes, "the empty outer part generates no heat; the heat leaves through the stated outline's surface")
+	}
 	if series == 2 {
-		each = " (each coil of the pair carries half the power)"
+		notes = append(notes, "each coil of the pair carries half the power")
+	}
+	each := ""
+	if len(notes) > 0 {
+		each = " (" + strings.Join(notes, "; ") + ")"
 	}
 	if ri > 0 {
-		add(Step{What: "Heat generated per unit volume of the winding" + each, Symbolic: `q = \frac{\bar{P}}{\pi \left( r_o^2 - r_i^2 \right) \ell}`,
+		add(Step{What: "Heat generated per unit volume of the winding" + occupied + each, Symbolic: `q = \frac{\bar{P}}{\pi \left( r_o^2 - r_i^2 \right) \ell}`,
 			Numbers: fmt.Sprintf(`\frac{%s}{\pi \left( %s^2 - %s^2 \right) \cdot %s}`, Q(pc, "W", 4), Paren(Q(ro, "m", 4)), Paren(Q(ri, "m", 4)), Q(length, "m", 4)),
 			Result:  Q(q, "W/m³", 3)})
 	} else {
@@ -311,9 +332,15 @@ func heatCapacitySteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy,
 	if series == 2 {
 		conductor = `2 \cdot ` + conductor
 	}
-	add(Step{What: fmt.Sprintf("Heat capacity of the winding (specific heat of %s %s, %s)%s", mat.Name, Eng(mat.SpecificHeat, "J/(kg·K)", 3), specificHeatSource(mat), formerWords(co, cs.Heat.FormerSource)),
-		Symbolic: `C = m_c c_p` + former,
-		Numbers:  fmt.Sprintf(`%s \cdot %s%s`, conductor, Q(mat.SpecificHeat, "J/(kg·K)", 3), fnum), Result: Q(h.HeatCapacity, "J/K", 3)})
+	hp := cs.Heat
+	core, cnum := "", ""
+	if hp.CoreHeatCapacity > 0 {
+		core = ` + m_k c_k`
+		cnum = fmt.Sprintf(` + %s \cdot %s`, Q(hp.CoreMass, "kg", 3), Q(hp.CoreSpecificHeat, "J/(kg·K)", 3))
+	}
+	add(Step{What: fmt.Sprintf("Heat capacity of the winding (specific heat of %s %s, %s)%s%s", mat.Name, Eng(mat.SpecificHeat, "J/(kg·K)", 3), specificHeatSource(mat), formerWords(co, cs.Heat.FormerSource), coreHeatWords(hp)),
+		Symbolic: `C = m_c c_p` + former + core,
+		Numbers:  fmt.Sprintf(`%s \cdot %s%s%s`, conductor, Q(mat.SpecificHeat, "J/(kg·K)", 3), fnum, cnum), Result: Q(h.HeatCapacity, "J/K", 3)})
 	if !math.IsNaN(cr.ThermalTau) {
 		add(Step{What: "Thermal time constant of the approach to the steady state (the heat balance linearised there)",
 			Symbolic: `\tau_{th} = \frac{C}{d(Q_{\mathrm{out}} - \bar{P})/dT}`,
@@ -337,6 +364,24 @@ func formerWords(co calc.Coil, source string) string {
 			src = "; " + source
 		}
 		return fmt.Sprintf(", with the former: %s of %s at %s%s", Eng(f.Mass, "kg", 3), formerName(f.Material), Eng(f.SpecificHeat, "J/(kg·K)", 3), src)
+	}
+	return ""
+}
+
+// coreHeatWords says how a cored coil's rod enters the heat capacity: its
+// mass and specific heat, and the assumption that it warms with the
+// winding; or that it is left out for want of a density; "" without a core.
+func coreHeatWords(hp analysis.HeatParts) string {
+	switch {
+	case hp.CoreHeatCapacity > 0:
+		src := "as stated"
+		if hp.CoreSpecificHeatSource != "" {
+			src = hp.CoreSpecificHeatSource
+		}
+		return fmt.Sprintf(", with the core: %s of rod at %s (%s), warming with the winding as one mass",
+			Eng(hp.CoreMass, "kg", 3), Eng(hp.CoreSpecificHeat, "J/(kg·K)", 3), src)
+	case hp.CoreLeftOut:
+		return "; the core is left out, no core density being stated (its mass is unknown), which makes the warm-up faster than the coil's"
 	}
 	return ""
 }
@@ -384,7 +429,7 @@ func durationQ(t float64) string {
 // warmUpText says how the coil warms from cold: the time to reach its
 // insulation class when energised continuously, and the periodic state
 // of its on/off cycle.
-func warmUpText(co calc.Coil, cr calc.CoilResult) string {
+func warmUpText(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) string {
 	h := cr.Heat
 	var b strings.Builder
 	if co.InsulationClass > 0 {
@@ -397,7 +442,18 @@ func warmUpText(co calc.Coil, cr calc.CoilResult) string {
 		}
 	}
 	if co.Former.Capacity() <= 0 {
-		b.WriteString("The warm-up counts the conductor alone, without a former or bobbin, so it runs somewhat faster than a coil on a former will. ")
+		what := "the conductor alone"
+		if cs.Heat.CoreHeatCapacity > 0 {
+			what = "the conductor and the core"
+		}
+		b.WriteString("The warm-up counts " + what + ", without a former or bobbin, so it runs somewhat faster than a coil on a former will. ")
+	}
+	if cs.Heat.CoreHeatCapacity > 0 {
+		src := ""
+		if cs.Heat.CoreSpecificHeatSource != "" {
+			src = " The core's specific heat is that of pure iron; the nickel–iron and silicon–iron of soft-magnetic cores lie close to it, while a ferrite has more (about 700–800 J/(kg·K)), so for a ferrite rod the warm-up runs faster than computed — state core-specific-heat for it."
+		}
+		b.WriteString("The core is taken to be in thermal contact with the winding's bore and to warm with the winding as one mass (an assumption: the contact is not modelled). A rod held apart from the winding (by an air gap or a thick insulating former) warms later, and the winding then faster than computed." + src + " ")
 	}
 	if cy := h.Cycle; cy.On > 0 {
 		if cy.Settled {
@@ -534,6 +590,8 @@ func (c *composer) thermalTable() doc.Table {
 			s := "radiation"
 			switch {
 			case cool.Vacuum:
+			case cool.Covered && !cool.HGiven:
+				s = "radiation only (covered: no convection counted)"
 			case tp.Convection != nil:
 				s = fmt.Sprintf("natural convection, h = %s; radiation", Eng(cr.Heat.Steady.Convection.H, "W/(m²·K)", 3))
 			default:
@@ -548,7 +606,7 @@ func (c *composer) thermalTable() doc.Table {
 			s := cr.Heat.Steady
 			return Eng(s.Convected, "W", 3) + " / " + Eng(s.Radiated, "W", 3) + " / " + Eng(s.Mounted, "W", 3)
 		}),
-		row("Surface temperature", func(co calc.Coil, cr calc.CoilResult) string { return temp(cr.Heat.Steady.Surface) }),
+		row(surfaceLabel(r), func(co calc.Coil, cr calc.CoilResult) string { return temp(cr.Heat.Steady.Surface) }),
 		row("Mean winding temperature", func(co calc.Coil, cr calc.CoilResult) string { return temp(cr.Heat.Steady.Mean) }),
 		row(hotSpotLabel(r), func(co calc.Coil, cr calc.CoilResult) string { return temp(cr.Heat.Steady.HotSpot) }),
 	}
@@ -566,6 +624,12 @@ func (c *composer) thermalTable() doc.Table {
 				return "no periodic state"
 			}
 			return temp(cy.PeakHot) + " / " + temp(cy.Trough)
+		}))
+		rows = append(rows, row("Duty cycle: hottest surface", func(co calc.Coil, cr calc.CoilResult) string {
+			if cy := cr.Heat.Cycle; cy.On > 0 && cy.Settled {
+				return temp(cy.PeakSurface)
+			}
+			return "—"
 		}))
 	}
 	rows = append(rows,
@@ -668,6 +732,15 @@ func leftOnText(co calc.Coil, cr calc.CoilResult, on calc.ThermalState) string {
 	}
 	return templates.Text("caution-left-on", map[string]string{"Duty": strconv.FormatFloat(100*cr.Duty, 'g', 3, 64) + " %",
 		"Class": format.InsulationClass(co.InsulationClass), "Time": duration(h.TimeToLimit), "Settle": settle})
+}
+
+// surfaceLabel names the steady surface row: duty-averaged only where
+// some coil has a duty cycle.
+func surfaceLabel(r calc.Results) string {
+	if anyDuty(r) {
+		return "Surface temperature, duty-averaged steady state"
+	}
+	return "Surface temperature"
 }
 
 // hotSpotLabel names the steady hottest-point row: duty-averaged only

@@ -353,7 +353,7 @@ func (c *composer) worstDerivation(wc *analysis.WorstCase) {
 	if cr.Switch.SwitchOff > 0 {
 		fo := fittedOverOf(c.j, 0)
 		if fo != nil {
-			fo.inCorner, fo.derived = true, wk.Corner
+			fo.inCorner = true
 		}
 		c.derive(switchingSteps(co, cr, nil, fo)...) // the corner's L·I/t_off, as its limit is judged
 	}

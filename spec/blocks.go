@@ -113,6 +113,17 @@ func (p *parser) conditionsBlock(b *rawBlock) {
 			default:
 				p.errf(e.line, "orientation = %s: want horizontal or vertical (the coil axes, for natural convection)", e.value)
 			}
+		case "enclosure":
+			switch v := strings.ToLower(strings.TrimSpace(e.value)); v {
+			case "open":
+				cond.Cooling.Covered = false
+				si = "open: free air round the coils"
+			case "covered":
+				cond.Cooling.Covered = true
+				si = "covered: under or behind a surface people touch, no free convection"
+			default:
+				p.errf(e.line, "enclosure = %s: want open or covered (under or behind a surface people touch)", e.value)
+			}
 		case "up":
 			a, err := parseAxis(e.value)
 			if err != nil {
@@ -163,7 +174,7 @@ func (p *parser) conditionsBlock(b *rawBlock) {
 		add("cooling", "still-air (natural convection, Churchill–Chu)")
 	}
 	add("emissivity", units.FormatNumber(defaultEmissivity))
-	if !vacuum && hLine == 0 && !given["up"] {
+	if !vacuum && hLine == 0 && !given["up"] && !cond.Cooling.Covered {
 		// orientation enters only the natural-convection correlation
 		add("orientation", "coil axes horizontal")
 	}

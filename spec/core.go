@@ -12,7 +12,7 @@ import (
 // A coil with a core-permeability is cored; a coil with neither current
 // nor voltage but a frequency (or a band) is a receiver.
 var coreKeys = []string{"core-permeability", "core-saturation", "core-length", "core-diameter",
-	"core-density", "core-remanence", "core-coercivity", "core-bh", "band", "load-capacitance"}
+	"core-density", "core-specific-heat", "core-remanence", "core-coercivity", "core-bh", "band", "load-capacitance"}
 
 func init() { coilKeys = append(coilKeys, coreKeys...) }
 
@@ -77,6 +77,13 @@ func (p *parser) coreValue(ci *coilIn, e kv) (si string, ok, mine bool) {
 		}
 		k.Density = v
 		return units.Format(v, units.Density), true, true
+	case "core-specific-heat":
+		v, ok := p.positive(e, units.SpecificHeat)
+		if !ok {
+			return "", false, true
+		}
+		k.SpecificHeat = v
+		return units.Format(v, units.SpecificHeat), true, true
 	case "core-bh":
 		pts, err := parseBH(e.value)
 		if err != nil {
@@ -208,7 +215,7 @@ func (p *parser) checkCore(ci *coilIn) {
 	where := fmt.Sprintf("coil %q", c.Name)
 	first := 0
 	for _, k := range []string{"core-permeability", "core-saturation", "core-length", "core-diameter",
-		"core-density", "core-remanence", "core-coercivity", "core-bh"} {
+		"core-density", "core-specific-heat", "core-remanence", "core-coercivity", "core-bh"} {
 		if l, ok := ci.lines[k]; ok && (first == 0 || l < first) {
 			first = l
 		}
@@ -221,6 +228,9 @@ func (p *parser) checkCore(ci *coilIn) {
 		}
 		if ci.formOK && c.Form != calc.Loop && c.Form != calc.Solenoid {
 			p.errf(first, "%s: a core is modelled only in a loop or solenoid, not a %s", where, ci.given["form"].value)
+		}
+		if ok("core-specific-heat") && !has("core-density") {
+			p.warnf(ci.lines["core-specific-heat"], "%s: core-specific-heat without core-density: the core's mass, and so its heat capacity, is unknown and left out of the warm-up", where)
 		}
 		if ok("core-remanence") && ok("core-saturation") && c.Core.Remanence >= c.Core.Saturation {
 			p.errf(ci.lines["core-remanence"], "%s: core-remanence %s is not below core-saturation %s", where,

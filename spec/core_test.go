@@ -1,6 +1,7 @@
 package spec
 
 import (
+	"math"
 	"strings"
 	"testing"
 )
@@ -74,7 +75,7 @@ func TestCoreKeysBroken(t *testing.T) {
 
 func TestCoreKeysGood(t *testing.T) {
 	src := fenced("coil", rodBody+"core-permeability = 2500\ncore-length = 6 in\ncore-diameter = 10 mm\ncore-saturation = 1.2 T\n"+
-		"core-density = 7.8 g/cm3\ncore-remanence = 0.5 T\ncore-coercivity = 80 A/m\ncore-bh = 50 A/m 0.4 T; 200 A/m 1 T, 2 kA/m 1.3 T\n") +
+		"core-density = 7.8 g/cm3\ncore-specific-heat = 0.46 J/(g K)\ncore-remanence = 0.5 T\ncore-coercivity = 80 A/m\ncore-bh = 50 A/m 0.4 T; 200 A/m 1 T, 2 kA/m 1.3 T\n") +
 		fenced("coil", recvBody+"name = pickup\ncentre = (0, 0, 300) mm\nfrequency = 1 kHz\nband = 10 .. 100 Hz\nload-capacitance = 220 pF\n")
 	s, ds := Parse("g.md", []byte(src))
 	if len(ds) > 0 {
@@ -83,7 +84,7 @@ func TestCoreKeysGood(t *testing.T) {
 	k := s.Design.Coils[0].Core
 	// 6 in = 152.4 mm exactly (the inch is 25.4 mm, 1959); 7.8 g/cm³ = 7800 kg/m³.
 	if k.Permeability != 2500 || k.Length != 0.1524 || k.Diameter != 0.01 || k.Saturation != 1.2 ||
-		k.Density != 7800 || k.Remanence != 0.5 || k.Coercivity != 80 || !k.Present() {
+		k.Density != 7800 || math.Abs(k.SpecificHeat-460) > 1e-12 || k.Remanence != 0.5 || k.Coercivity != 80 || !k.Present() {
 		t.Errorf("core %+v", k)
 	}
 	if len(k.Curve) != 3 || k.Curve[2].H != 2000 || k.Curve[2].B != 1.3 || k.Curve[0].H != 50 {
@@ -93,5 +94,18 @@ func TestCoreKeysGood(t *testing.T) {
 	if r.Current != 0 || r.Voltage != 0 || r.Frequency != 1000 || r.BandLow != 10 || r.BandHigh != 100 ||
 		r.LoadCapacitance < 219.9999e-12 || r.LoadCapacitance > 220.0001e-12 {
 		t.Errorf("receiver %+v", r)
+	}
+}
+
+// A core's specific heat without its density gives no heat capacity: the
+// spec is read, with a warning at the specific heat's line.
+func TestCoreSpecificHeatWithoutDensityWarns(t *testing.T) {
+	src := fenced("coil", rodBody+"core-permeability = 2500\ncore-length = 6 in\ncore-diameter = 10 mm\ncore-specific-heat = 447 J/(kg K)\n")
+	s, ds := Parse("w.md", []byte(src))
+	if len(ds) > 0 {
+		t.Fatal(ds.Error())
+	}
+	if len(s.Warnings) != 1 || !strings.Contains(s.Warnings[0].Msg, "core-specific-heat without core-density") {
+		t.Errorf("warnings %v", s.Warnings)
 	}
 }

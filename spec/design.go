@@ -29,7 +29,7 @@ var (
 		"test-plane", "switch-off", "driver-rating", "frequency", "on-time", "former-mass", "former-material",
 		"former-heat-capacity", "winding-conductivity"}
 	conditionKeys = []string{"ambient", "background-field", "design-angle", "cooling", "h", "emissivity",
-		"field-gradient", "mount-resistance", "orientation", "up"}
+		"field-gradient", "mount-resistance", "orientation", "up", "enclosure"}
 )
 
 // Defaults.

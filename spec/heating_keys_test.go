@@ -67,6 +67,10 @@ func TestHeatingKeysBroken(t *testing.T) {
 			`key "field-gradient" belongs in the conditions block, not the coil block`},
 		{"on-time in conditions", fenced("coil", coilBody) + fenced("conditions", "on-time = 2 s\n"), 8,
 			`key "on-time" belongs in the coil block, not the conditions block`},
+		{"enclosure", fenced("coil", coilBody) + fenced("conditions", "enclosure = boxed\n"), 8,
+			`enclosure = boxed: want open or covered`},
+		{"misspelt enclosure", fenced("coil", coilBody) + fenced("conditions", "enclosur = covered\n"), 8,
+			`unknown key "enclosur" in conditions block; did you mean "enclosure"?`},
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
@@ -107,6 +111,19 @@ func TestHeatingKeysGood(t *testing.T) {
 	for _, e := range s.Entries {
 		if w, ok := want[e.Key]; ok && e.SI != w {
 			t.Errorf("%s: SI %q, want %q", e.Key, e.SI, w)
+		}
+	}
+	// enclosure: covered under a surface people touch, or open (the default)
+	for _, tc := range []struct {
+		cond    string
+		covered bool
+	}{{"enclosure = covered\n", true}, {"enclosure = Open\n", false}, {"ambient = 25 degC\n", false}} {
+		s, ds := Parse("e.md", []byte(fenced("coil", coilBody)+fenced("conditions", tc.cond)))
+		if len(ds) > 0 {
+			t.Fatal(ds.Error())
+		}
+		if s.Design.Conditions.Cooling.Covered != tc.covered {
+			t.Errorf("%q: covered %v", tc.cond, s.Design.Conditions.Cooling.Covered)
 		}
 	}
 	// up with a design-wide orientation that agrees with every axis

@@ -240,6 +240,14 @@ func Build(j *analysis.Study) Report {
 			DipoleAny1: Num(cr.Dipole.Any1), DipoleAny01: Num(cr.Dipole.Any01),
 			CoilHeatSwitch: coilHeatSwitch(co, cr),
 		})
+		if ts, at := j.HottestSurface(i); !math.IsNaN(ts) {
+			c := &rep.Coils[len(rep.Coils)-1]
+			c.SurfaceHottest = Num(format.Celsius(ts))
+			if j.WorstCase != nil {
+				name := j.WorstCase.CornerName(at)
+				c.SurfaceHottestCorner = &name
+			}
+		}
 		if i < len(j.Coils) {
 			rep.Coils[len(rep.Coils)-1].SwitchOffCapacitanceLimit = Num(j.Coils[i].SwitchOff.RingingSwitch)
 			if p := j.Coils[i].Suppression; p != nil {
@@ -391,6 +399,16 @@ type CoilHeatSwitch struct {
 	CurrentAC                     Num     `json:"current_ac_A"`
 	Force                         Num     `json:"force_N"`
 	PairForce                     Num     `json:"pair_force_N"`
+	// CyclePeakSurface is the hottest surface of the periodic on/off state
+	// (calc.Cycle.PeakSurface; null without on-time).
+	CyclePeakSurface Num `json:"cycle_peak_surface_C"`
+	// SurfaceHottest is the hottest surface the hot-surface caution is
+	// judged on: the steady surface or the on/off cycle's, over the
+	// nominal design and, with a tolerances block, every corner, at the
+	// corner named by SurfaceHottestCorner ("nominal" for the nominal
+	// design; null without tolerances).
+	SurfaceHottest       Num     `json:"surface_temperature_hottest_C"`
+	SurfaceHottestCorner *string `json:"surface_temperature_hottest_corner"`
 }
 
 func coilHeatSwitch(co calc.Coil, cr calc.CoilResult) CoilHeatSwitch {
@@ -402,6 +420,7 @@ func coilHeatSwitch(co calc.Coil, cr calc.CoilResult) CoilHeatSwitch {
 	return CoilHeatSwitch{
 		SurfaceTemperature: Num(format.Celsius(h.Steady.Surface)), MeanTemperature: Num(format.Celsius(h.Steady.Mean)),
 		TimeToLimit: Num(h.TimeToLimit), CyclePeak: Num(format.Celsius(h.Cycle.PeakHot)), CycleTrough: Num(format.Celsius(h.Cycle.Trough)),
+		CyclePeakSurface: Num(format.Celsius(h.Cycle.PeakSurface)), SurfaceHottest: Num(math.NaN()),
 		MomentCold: Num(h.ColdMoment), HeatCapacity: Num(h.HeatCapacity),
 		TimeConstant: Num(s.TimeConstant), RiseTime: Num(s.RiseTime), Energy: Num(s.Energy),
 		SwitchOffVoltage: Num(s.Spike), SwitchOffVoltageWorst: Num(s.SpikeWorst), SwitchOffCapacitanceLimit: Num(math.NaN()), SuppressionR: Num(s.ResistorMax), SuppressionE12: Num(s.Resistor),
