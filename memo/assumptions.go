@@ -359,7 +359,7 @@ func coolingAssumption(d calc.Design, cool calc.Cooling) string {
 	case cool.Vacuum:
 		return templates.Text("assume-vacuum", map[string]string{"Emissivity": Sig(cool.Emissivity, 2)})
 	case d.Conditions.Cooling.HGiven:
-		return fmt.Sprintf("convection with the heat-transfer coefficient stated in the spec, h = %s, plus radiation with surface emissivity %s to surroundings at the ambient temperature%s.",
+		return fmt.Sprintf("convection with the heat-transfer coefficient stated for this design, h = %s, plus radiation with surface emissivity %s to surroundings at the ambient temperature%s.",
 			Eng(cool.H, "W/(m²·K)", 3), Sig(cool.Emissivity, 2), mount)
 	case cool.Covered:
 		return fmt.Sprintf("radiation with surface emissivity %s to surroundings at the ambient temperature%s, and no convection: the coils lie under or behind a surface that people touch (enclosure = covered), where the open-air correlations do not hold — on the hot side for the convection left out.",
