@@ -3,6 +3,7 @@ package analysis
 import (
 	"fmt"
 	"math"
+	"strings"
 
 	"gonum.org/v1/gonum/integrate/quad"
 
@@ -60,10 +61,31 @@ func Verify(d calc.Design, r calc.Results) []Check {
 			continue
 		}
 		for _, check := range coilChecks {
-			out = append(out, check(c, cr)...)
+			rows := check(c, cr)
+			if c.Core.Present() {
+				// a cored coil's field rows check its winding in air: named
+				// so, beside the memo's figures with the core
+				for k := range rows {
+					if fieldRow(rows[k].Name) {
+						rows[k].Name += " (winding alone, in air)"
+					}
+				}
+			}
+			out = append(out, rows...)
 		}
 	}
 	return out
+}
+
+// fieldRow reports whether a check of that name is of the winding's field
+// or moment (which a core changes).
+func fieldRow(name string) bool {
+	for _, p := range []string{"magnetic moment", "field at", "|B|", "on-axis field"} {
+		if strings.HasPrefix(name, p) {
+			return true
+		}
+	}
+	return false
 }
 
 // coilChecks are the checks of a circular coil block, in the order the
