@@ -279,46 +279,39 @@ func reachFrom(field func(calc.Vec) calc.Vec, origin, u calc.Vec, level, rmin, r
 	if bmax >= level {
 		return rmax
 	}
-	if guess > rmin && guess < rmax {
-		if b := at(guess); b >= level {
-			lo, blo := guess, b
-			for {
-				hi := math.Min(lo*1.25, rmax)
-				bhi := bmax
-				if hi < rmax {
-					bhi = at(hi)
-				}
-				if bhi < level {
-					return refineReach(at, level, lo, hi, blo, bhi)
-				}
-				lo, blo = hi, bhi
+	// inward from hi (where the level is not reached) by 25 % steps
+	inward := func(hi, bhi float64) float64 {
+		for {
+			lo := math.Max(hi/1.25, rmin)
+			blo := at(lo)
+			if blo >= level {
+				return refineReach(at, level, lo, hi, blo, bhi)
 			}
-		} else {
-			hi, bhi := guess, b
-			for {
-				lo := math.Max(hi/1.25, rmin)
-				blo := at(lo)
-				if blo >= level {
-					return refineReach(at, level, lo, hi, blo, bhi)
-				}
-				if lo == rmin {
-					return 0
-				}
-				hi, bhi = lo, blo
+			if lo == rmin {
+				return 0
 			}
+			hi, bhi = lo, blo
 		}
 	}
-	hi, bhi := rmax, bmax
+	if !(guess > rmin && guess < rmax) {
+		return inward(rmax, bmax)
+	}
+	b := at(guess)
+	if b < level {
+		return inward(guess, b)
+	}
+	// outward from the guess while the level is reached
+	lo, blo := guess, b
 	for {
-		lo := math.Max(hi/1.25, rmin)
-		blo := at(lo)
-		if blo >= level {
+		hi := math.Min(lo*1.25, rmax)
+		bhi := bmax
+		if hi < rmax {
+			bhi = at(hi)
+		}
+		if bhi < level {
 			return refineReach(at, level, lo, hi, blo, bhi)
 		}
-		if lo == rmin {
-			return 0
-		}
-		hi, bhi = lo, blo
+		lo, blo = hi, bhi
 	}
 }
 
