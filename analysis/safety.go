@@ -882,6 +882,96 @@ func ownStretch(os []outline, coil int, at, u calc.Vec, lo, lim float64) float64
 	return lim
 }
 
+// surfacePeak is the largest |B| of fm found just outside (gap) the
+// outer surface of coil block i when its outlines are solid windings (one,
+// or a pair's two; no rod, round bundle or rectangle; else 0): for each,
+// 48 points along the
+// half-perimeter of its section (end face, outer side, end face) in the
+// four half-planes through its axis along ±E1 and ±E2, and a
+// golden-section refinement between the neighbours of the largest (one
+// half-plane when the block is alone in the design, alone). fm is the
+// search's field (levelField), good to far more than the three figures
+// quoted.
+func surfacePeak(fm func(calc.Vec) calc.Vec, co calc.Coil, cs CoilStudy, os []outline, i int, gap float64, alone bool) float64 {
+	var own []outline
+	for _, o := range os {
+		if o.coil == i {
+			own = append(own, o)
+		}
+	}
+	if len(own) == 0 || cs.Kinds.Core != nil {
+		return 0
+	}
+	for _, o := range own {
+		if o.round || o.rect || !(o.r1 > 0) || !(o.z1 > o.z0) {
+			return 0
+		}
+	}
+	best := 0.0
+	for _, o := range own {
+		best = math.Max(best, outlinePeak(fm, o, gap, alone))
+	}
+	return best
+}
+
+// outlinePeak is surfacePeak's walk round one solid outline o.
+func outlinePeak(fm func(calc.Vec) calc.Vec, o outline, gap float64, alone bool) float64 {
+	r1, z0, z1 := o.r1+gap, o.z0-gap, o.z1+gap
+	edge := [3]float64{r1, z1 - z0, r1}
+	total := edge[0] + edge[1] + edge[2]
+	// the point at arc length t along the half-perimeter, in the
+	// half-plane along the unit radial direction e
+	at := func(e calc.Vec, t float64) calc.Vec {
+		var rho, z float64
+		switch {
+		case t <= edge[0]:
+			rho, z = t, z0
+		case t <= edge[0]+edge[1]:
+			rho, z = r1, z0+(t-edge[0])
+		default:
+			rho, z = r1-(t-edge[0]-edge[1]), z1
+		}
+		return o.centre.Add(e.Scale(rho)).Add(o.fr.U.Scale(z))
+	}
+	best := 0.0
+	const n = 48
+	planes := []calc.Vec{o.fr.E1, o.fr.E1.Scale(-1), o.fr.E2, o.fr.E2.Scale(-1)}
+	if alone {
+		planes = planes[:1] // a lone circular coil's field is the same in every half-plane
+	}
+	for _, e := range planes {
+		f := func(t float64) float64 { return fm(at(e, t)).Norm() }
+		k, top := 0, -1.0
+		for j := 0; j <= n; j++ {
+			if b := f(total * float64(j) / n); b > top {
+				k, top = j, b
+			}
+		}
+		// golden section on the bracket about the largest sample
+		a, b := total*float64(max(k-1, 0))/n, total*float64(min(k+1, n))/n
+		const g = 0.6180339887498949
+		x1, x2 := b-g*(b-a), a+g*(b-a)
+		f1, f2 := f(x1), f(x2)
+		for range 20 {
+			if f1 >= f2 {
+				b, x2, f2 = x2, x1, f1
+				x1 = b - g*(b-a)
+				f1 = f(x1)
+			} else {
+				a, x1, f1 = x1, x2, f2
+				x2 = a + g*(b-a)
+				f2 = f(x2)
+			}
+		}
+		for _, v := range []float64{top, f1, f2} {
+			if !math.IsNaN(v) {
+				best = math.Max(best, v)
+			}
+		}
+	}
+	return best
+}
+
 // sampleEveryLine makes windingReaches sample the lines even where one
 // convex outline makes it needless (tests).
 var sampleEveryLine = false
@@ -1040,6 +1130,12 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 	for _, p := range extra {
 		count(p)
 	}
+	// The lines sample the outer surface at a few places only; the field
+	// there peaks near the rims, between them. A solid winding's surface
+	// is also walked in its meridian planes (surfacePeak).
+	eachIndex(len(d.Coils), func(i int) {
+		wr[i].Surface = math.Max(wr[i].Surface, surfacePeak(fast, d.Coils[i], coils[i], os, i, gap, len(d.Coils) == 1))
+	})
 	// The farthest point at the level along a line need not be the one
 	// farthest from every winding: between the coils of a pair the field
 	// at the centre may reach the level far from both. Each line
