@@ -112,7 +112,7 @@ func implantWhere(j *analysis.Study) (where []string, beyond string) {
 	along, _ := reachWords(ir.Axis, len(d.Coils))
 	if ir.Axial > 0 {
 		side, rest := axialSide(ir)
-		s := along + " as far as " + Eng(ir.Axial, "m", 2) + " from the origin" + side + rest
+		s := along + " as far as " + Eng(ir.Axial, "m", 3) + " from the origin" + side + rest
 		// the note on the far end: "there" when one distance is given
 		there, in := "there ", ""
 		if rest != "" {
@@ -177,7 +177,7 @@ func implantWhere(j *analysis.Study) (where []string, beyond string) {
 			what = "every winding and core"
 		}
 		far, _ := reachLength(ir.Distance)
-		beyond = fmt.Sprintf(" Farther than %s from the outer surface of %s the flux density stays below 0.5 mT (the field of all coils counted; searched every 10° outward from the centre of each winding and along the axis from points round the ends of the conductors).", far, what)
+		beyond = fmt.Sprintf(" Farther than %s from the outer surface of %s, its bore counted as part of it, the flux density stays below 0.5 mT; within a bore it may exceed 0.5 mT anywhere (the field of all coils counted; searched every 10° outward from the centre of each winding and along the axis from points round the ends of the conductors).", far, what)
 	}
 	for _, k := range ir.Probes {
 		p := r.Probes[k]
@@ -396,7 +396,7 @@ func hotText(cr calc.CoilResult, T float64) string {
 // side" when the level is reached on the other side too (else ""); far is
 // " on either side" when both read alike.
 func axialSide(ir analysis.ImplantReach) (far, rest string) {
-	up, down := Eng(ir.AxialUp, "m", 2), Eng(ir.AxialDown, "m", 2)
+	up, down := Eng(ir.AxialUp, "m", 3), Eng(ir.AxialDown, "m", 3)
 	if ir.AxialUp > 0 && ir.AxialDown > 0 && up == down {
 		return " on either side", ""
 	}

@@ -215,8 +215,8 @@ func TestImplantReachWordedOnce(t *testing.T) {
 		}
 		for _, m := range num.FindAllStringSubmatch(caution, -1) {
 			v := m[1] + " " + m[2]
-			if m[3] == "the origin" && v != Eng(ir.Axial, "m", 2) {
-				t.Errorf("%s: %q, but the axial reach is %s", f, m[0], Eng(ir.Axial, "m", 2))
+			if m[3] == "the origin" && v != Eng(ir.Axial, "m", 3) {
+				t.Errorf("%s: %q, but the axial reach is %s", f, m[0], Eng(ir.Axial, "m", 3))
 			}
 			if m[3] != "the origin" && !surface[v] {
 				t.Errorf("%s: %q is none of the reaches from the windings' surfaces %v", f, m[0], surface)
