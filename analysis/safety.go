@@ -940,29 +940,13 @@ func outlinePeak(fm func(calc.Vec) calc.Vec, o outline, gap float64, alone bool)
 		planes = planes[:1] // a lone circular coil's field is the same in every half-plane
 	}
 	for _, e := range planes {
-		f := func(t float64) float64 { return fm(at(e, t)).Norm() }
-		k, top := 0, -1.0
-		for j := 0; j <= n; j++ {
-			if b := f(total * float64(j) / n); b > top {
-				k, top = j, b
-			}
+		// the largest |B| is the least of its negative
+		f := func(t float64) float64 { return -fm(at(e, t)).Norm() }
+		top, f1, f2, ok := gridGoldenMin(f, 0, total, n+1, func(_, _ float64, i int) bool { return i < 20 })
+		if !ok {
+			continue
 		}
-		// golden section on the bracket about the largest sample
-		a, b := total*float64(max(k-1, 0))/n, total*float64(min(k+1, n))/n
-		const g = 0.6180339887498949
-		x1, x2 := b-g*(b-a), a+g*(b-a)
-		f1, f2 := f(x1), f(x2)
-		for range 20 {
-			if f1 >= f2 {
-				b, x2, f2 = x2, x1, f1
-				x1 = b - g*(b-a)
-				f1 = f(x1)
-			} else {
-				a, x1, f1 = x1, x2, f2
-				x2 = a + g*(b-a)
-				f2 = f(x2)
-			}
-		}
+		top, f1, f2 = -top, -f1, -f2
 		for _, v := range []float64{top, f1, f2} {
 			if !math.IsNaN(v) {
 				best = math.Max(best, v)

@@ -409,30 +409,7 @@ func (z *sizer) search(d *calc.Design, c *Candidate) int {
 			}
 			return v
 		}
-		step := (r.Hi - r.Lo) / float64(gridPoints-1)
-		gi, gv := -1, math.Inf(1)
-		for i := 0; i < gridPoints; i++ {
-			if v := eval(r.Lo + float64(i)*step); v < gv {
-				gi, gv = i, v
-			}
-		}
-		if gi >= 0 {
-			a, b := r.Lo+float64(max(gi-1, 0))*step, r.Lo+float64(min(gi+1, gridPoints-1))*step
-			const g = 0.6180339887498949
-			x1, x2 := b-g*(b-a), a+g*(b-a)
-			f1, f2 := eval(x1), eval(x2)
-			for b-a > goldenTolerance*(r.Hi-r.Lo) {
-				if f1 <= f2 {
-					b, x2, f2 = x2, x1, f1
-					x1 = b - g*(b-a)
-					f1 = eval(x1)
-				} else {
-					a, x1, f1 = x1, x2, f2
-					x2 = a + g*(b-a)
-					f2 = eval(x2)
-				}
-			}
-		}
+		gridGoldenMin(eval, r.Lo, r.Hi, gridPoints, func(a, b float64, _ int) bool { return b-a > goldenTolerance*(r.Hi-r.Lo) })
 		if math.IsNaN(bestX) {
 			bestX = r.Hi
 		}
