@@ -502,20 +502,6 @@ func levelField(fm func(calc.Vec) calc.Vec, model *calc.FieldModel, fb *fieldBou
 		}
 	}
 	tol := 1e-9 * level
-	series := func(i int, p calc.Vec) (calc.Vec, bool) {
-		if len(mps[i]) == 0 {
-			return calc.Vec{}, false
-		}
-		var b calc.Vec
-		for k := range mps[i] {
-			v, _, ok := mps[i][k].At(p, tol)
-			if !ok {
-				return calc.Vec{}, false
-			}
-			b = b.Add(v)
-		}
-		return b, true
-	}
 	dipole := func(i int, p calc.Vec) (calc.Vec, float64) {
 		if len(mps[i]) > 0 {
 			return calc.Vec{}, -1
@@ -533,7 +519,7 @@ func levelField(fm func(calc.Vec) calc.Vec, model *calc.FieldModel, fb *fieldBou
 			if k == 0 {
 				continue
 			}
-			if v, ok := series(i, p); ok {
+			if v, ok := calc.SeriesSum(mps[i], p, tol); ok {
 				b = b.Add(v)
 				continue
 			}

@@ -167,15 +167,26 @@ func (f *FieldModel) SeriesAt(p Vec, rel float64) Vec {
 	return B
 }
 
-// seriesSum is the sum of the series mps at p, each to rel of its leading
-// term's size; false when there are none or one does not meet it.
+// seriesSum is SeriesSum with each series to rel of its leading term's
+// size (G q³).
 func seriesSum(mps []Multipole, p Vec, rel float64) (Vec, bool) {
+	return sumSeries(mps, p, 0, rel)
+}
+
+// SeriesSum is the sum of the series mps (one block's placements) at p,
+// each to the tolerance tol, T; false when there are none or one does not
+// meet it.
+func SeriesSum(mps []Multipole, p Vec, tol float64) (Vec, bool) {
+	return sumSeries(mps, p, tol, 0)
+}
+
+func sumSeries(mps []Multipole, p Vec, tol, rel float64) (Vec, bool) {
 	if len(mps) == 0 {
 		return Vec{}, false
 	}
 	var B Vec
 	for k := range mps {
-		b, ok := mps[k].atRel(p, rel)
+		b, _, _, ok := mps[k].sum(p, tol, rel, false)
 		if !ok {
 			return Vec{}, false
 		}

@@ -189,13 +189,6 @@ func (mp *Multipole) At(p Vec, tol float64) (B Vec, bound float64, ok bool) {
 	return B, bound, ok
 }
 
-// atRel is At with the tolerance rel·G·q³, rel of the size of the
-// series' leading term at p.
-func (mp *Multipole) atRel(p Vec, rel float64) (B Vec, ok bool) {
-	B, _, _, ok = mp.sum(p, 0, rel, false)
-	return B, ok
-}
-
 // sum is the series at p to the tolerance tol + rel·G·q³, and, when pot
 // is set, the vector potential A, T·m, of the same series,
 //
