@@ -2,7 +2,6 @@ package memo
 
 import (
 	"bytes"
-	"os"
 	"path/filepath"
 	"strings"
 	"testing"
@@ -21,22 +20,10 @@ var recallMarks = []string{"recalled", "from memory"}
 // (those cite their tables in the heating derivation).
 func TestMemoCitesNoRecall(t *testing.T) {
 	memos := map[string]string{}
-	files, _ := filepath.Glob("../examples/*.md")
-	more, _ := filepath.Glob("../testdata/figures/*.md")
-	for _, f := range append(files, more...) {
-		src, err := os.ReadFile(f)
-		if err != nil {
-			t.Fatal(err)
+	for _, f := range designFiles(t) {
+		if j, text := memoOf(t, f, false); j != nil { // nil: a spec that needs its previous revision's file
+			memos[filepath.Base(f)] = text
 		}
-		j, diags := evaluate(filepath.Base(f), src)
-		if len(diags) > 0 {
-			continue // a spec that needs its previous revision's file
-		}
-		var buf bytes.Buffer
-		if err := doc.WriteText(&buf, Document(j)); err != nil {
-			t.Fatal(err)
-		}
-		memos[filepath.Base(f)] = buf.String()
 	}
 	for _, conductor := range []string{"copper", "aluminium"} {
 		for _, m := range calc.FormerMaterials {
