@@ -111,8 +111,10 @@ type ImplantReach struct {
 	AxialCoil  int
 	AxialBore  bool
 	// AxialEnd is set when that far end lies beyond an end face of the
-	// outline, within its outer radius of its axis: AxialClear is then
-	// its distance beyond that face.
+	// outline, within its outer radius of its axis, and the search line
+	// runs along that axis: AxialClear is then its distance beyond that
+	// face. A line across a winding's axis (the design's z axis through an
+	// x-axis pair) never sets it.
 	AxialEnd bool
 	// OriginInside is set when the origin lies inside a winding or rod
 	// (not in a bore): |B| at the origin is then the field in the solid,
@@ -595,7 +597,9 @@ func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach
 		ir.AxialClear, ir.AxialCoil, ir.AxialBore = nearestOutline(os, far)
 		if ir.AxialClear > 0 {
 			for _, o := range os {
-				if v, _ := o.distance(far); o.coil == ir.AxialCoil && v == ir.AxialClear && !o.rect {
+				// "beyond the end, along its axis" only where the search
+				// line is that winding's own axis direction
+				if v, _ := o.distance(far); o.coil == ir.AxialCoil && v == ir.AxialClear && !o.rect && math.Abs(o.fr.U.Dot(f.U)) > 1-1e-9 {
 					l := o.fr.ToLocal(far.Sub(o.centre))
 					ir.AxialEnd = math.Hypot(l[0], l[1]) <= o.r1
 				}
