@@ -899,13 +899,29 @@ func surfacePeak(fm func(calc.Vec) calc.Vec, co calc.Coil, cs CoilStudy, os []ou
 	}
 	best := 0.0
 	for _, o := range own {
-		best = math.Max(best, outlinePeak(fm, o, gap, alone))
+		best = math.Max(best, outlinePeak(fm, o, gap, alone, func(p calc.Vec) bool { return insideOther(os, i, p) }))
 	}
 	return best
 }
 
-// outlinePeak is surfacePeak's walk round one solid outline o.
-func outlinePeak(fm func(calc.Vec) calc.Vec, o outline, gap float64, alone bool) float64 {
+// insideOther reports whether p lies within the winding or rod of a
+// block other than i (not in its bore): a winding's surface, taken across
+// its bore, may pass through another coil's conductors, where the field
+// of the filament model has no bound and no one can be.
+func insideOther(os []outline, i int, p calc.Vec) bool {
+	for _, o := range os {
+		if o.coil != i {
+			if d, bore := o.distance(p); d == 0 && !bore {
+				return true
+			}
+		}
+	}
+	return false
+}
+
+// outlinePeak is surfacePeak's walk round one solid outline o, leaving
+// out the points skip reports (within other coils' windings).
+func outlinePeak(fm func(calc.Vec) calc.Vec, o outline, gap float64, alone bool, skip func(calc.Vec) bool) float64 {
 	r1, z0, z1 := o.r1+gap, o.z0-gap, o.z1+gap
 	edge := [3]float64{r1, z1 - z0, r1}
 	total := edge[0] + edge[1] + edge[2]
@@ -925,23 +941,51 @@ func outlinePeak(fm func(calc.Vec) calc.Vec, o outline, gap float64, alone bool)
 	}
 	best := 0.0
 	const n = 48
-	planes := []calc.Vec{o.fr.E1, o.fr.E1.Scale(-1), o.fr.E2, o.fr.E2.Scale(-1)}
-	if alone {
-		planes = planes[:1] // a lone circular coil's field is the same in every half-plane
+	// the half-plane at angle phi about the axis from E1
+	plane := func(phi float64) calc.Vec {
+		s, c := math.Sincos(phi)
+		return o.fr.E1.Scale(c).Add(o.fr.E2.Scale(s))
 	}
-	for _, e := range planes {
+	var bestT, bestPhi float64
+	value := func(phi, t float64) float64 {
+		p := at(plane(phi), t)
+		if skip(p) {
+			return 0
+		}
+		b := fm(p).Norm()
+		if b > best { // NaN never
+			best, bestT, bestPhi = b, t, phi
+		}
+		return b
+	}
+	phis := []float64{0, math.Pi, math.Pi / 2, 3 * math.Pi / 2}
+	if alone {
+		phis = phis[:1] // a lone circular coil's field is the same in every half-plane
+	}
+	for _, phi := range phis {
 		// the largest |B| is the least of its negative
-		f := func(t float64) float64 { return -fm(at(e, t)).Norm() }
-		top, f1, f2, ok := gridGoldenMin(f, 0, total, n+1, func(_, _ float64, i int) bool { return i < 20 })
-		if !ok {
-			continue
-		}
-		top, f1, f2 = -top, -f1, -f2
-		for _, v := range []float64{top, f1, f2} {
-			if !math.IsNaN(v) {
-				best = math.Max(best, v)
+		gridGoldenMin(func(t float64) float64 { return -value(phi, t) }, 0, total, n+1, func(_, _ float64, i int) bool { return i < 20 })
+	}
+	if alone || !(best > 0) {
+		return best
+	}
+	// Another coil breaks the symmetry about the axis: the largest |B|
+	// may lie between the four half-planes. A compass search in arc
+	// length and azimuth from the best point found (steps of 1/48 of the
+	// walk and 10°, halved eight times) climbs to it.
+	dt, dphi := total/n, math.Pi/18
+	for range 8 {
+		for moved := true; moved; {
+			moved = false
+			t0, phi0, b0 := bestT, bestPhi, best
+			for _, m := range [][2]float64{{dt, 0}, {-dt, 0}, {0, dphi}, {0, -dphi}} {
+				if t := t0 + m[0]; t >= 0 && t <= total {
+					value(phi0+m[1], t)
+				}
 			}
+			moved = best > b0
 		}
+		dt, dphi = dt/2, dphi/2
 	}
 	return best
 }
@@ -971,7 +1015,10 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 	type ray struct {
 		coil    int
 		at, dir calc.Vec
+		centre  calc.Vec // the winding centre a line from reachDirections leaves
+		turn    bool     // such a line, whose direction the refinement may turn
 	}
+	exits := make([]func(c, u calc.Vec) float64, len(d.Coils))
 	var rays []ray
 	// convexAlone marks a block of one convex outline: a solid winding
 	// with its bore filled in, not a thin bundle's ring, a rectangle's
@@ -1028,10 +1075,11 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 				centres = append(centres, co.Centre.Add(fr.U.Scale(z)))
 			}
 		}
+		exits[i] = exit
 		for _, c := range centres {
 			for _, u := range reachDirections(co, fr) {
 				t := exit(c, u)
-				rays = append(rays, ray{i, c.Add(u.Scale(t + gap)), u})
+				rays = append(rays, ray{i, c.Add(u.Scale(t + gap)), u, c, true})
 			}
 		}
 		// From the middle of each end face, at the mean radius, along the
@@ -1045,14 +1093,14 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 					a := float64(k) * math.Pi / 4
 					rim := fr.E1.Scale(rm * math.Cos(a)).Add(fr.E2.Scale(rm * math.Sin(a)))
 					for _, s := range []float64{1, -1} {
-						rays = append(rays, ray{i, c.Add(rim).Add(fr.U.Scale(s * (e.Z1 + gap))), fr.U.Scale(s)})
+						rays = append(rays, ray{coil: i, at: c.Add(rim).Add(fr.U.Scale(s * (e.Z1 + gap))), dir: fr.U.Scale(s)})
 					}
 				}
 			}
 		} else {
 			b := coils[i].Bundle
 			for _, s := range []float64{1, -1} {
-				rays = append(rays, ray{i, co.Centre.Add(fr.E1.Scale(co.Width / 2)).Add(fr.U.Scale(s * (b/2 + gap))), fr.U.Scale(s)})
+				rays = append(rays, ray{coil: i, at: co.Centre.Add(fr.E1.Scale(co.Width / 2)).Add(fr.U.Scale(s * (b/2 + gap))), dir: fr.U.Scale(s)})
 			}
 		}
 	}
@@ -1069,7 +1117,9 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 		if math.IsNaN(b) {
 			return
 		}
-		res[k].surface = b
+		if !insideOther(os, r.coil, r.at) {
+			res[k].surface = b
+		}
 		lim := far
 		if bound > 0 {
 			// beyond the sphere of radius ext about the origin by more than
@@ -1102,6 +1152,27 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 		}
 	}
 	for _, p := range extra {
+		count(p)
+	}
+	for _, p := range turnedReaches(len(d.Coils), func(k int) (calc.Vec, bool) {
+		return res[k].point, res[k].ok && rays[k].turn
+	}, len(rays), func(k int) int { return rays[k].coil }, func(k int, u calc.Vec) (calc.Vec, bool) {
+		r := rays[k]
+		at := r.centre.Add(u.Scale(exits[r.coil](r.centre, u) + gap))
+		b := fast(at).Norm()
+		guess := 0.0
+		if d0 := at.Sub(r.centre).Norm(); b > ImplantField && d0 > 0 {
+			guess = d0 * (math.Cbrt(b/ImplantField) - 1)
+		}
+		lim := far
+		if bound > 0 {
+			lim = math.Min(far, at.Norm()+ext+math.Sqrt(bound/ImplantField))
+		}
+		if t := reachFrom(fast, at, u, ImplantField, gap, lim, guess); t > 0 {
+			return at.Add(u.Scale(t)), true
+		}
+		return calc.Vec{}, false
+	}, func(p calc.Vec) float64 { dd, _, _ := nearestOutline(os, p); return dd }, func(k int) calc.Vec { return rays[k].dir }) {
 		count(p)
 	}
 	// The lines sample the outer surface at a few places only; the field
@@ -1175,4 +1246,73 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 		}
 	}
 	return wr
+}
+
+// turnedReaches refines the search lines that leave the windings'
+// centres. They lie in each winding's meridian planes, where one circular
+// coil's field has all its extremes; where several coils' fields add, the
+// level can lie farther from every winding between those planes (three
+// coils on x, y and z reach farthest along a diagonal). From the line
+// that ended farthest from the windings for each block (up to eight
+// blocks, farthest first), a compass search turns the line about its
+// centre — steps of 5° in eight directions across it, halved to 0.2° — to
+// where its point at the level lies farthest from the nearest outline
+// (TestImplantBoundHoldsOffTheMeridianPlanes). The points it ends at are
+// returned; along(k, u) is line k's point at the level in direction u,
+// dist a point's distance from the nearest outline.
+func turnedReaches(blocks int, found func(k int) (calc.Vec, bool), n int, coil func(k int) int,
+	along func(k int, u calc.Vec) (calc.Vec, bool), dist func(calc.Vec) float64, dir func(k int) calc.Vec) []calc.Vec {
+	if blocks < 2 {
+		return nil // one block: its own planes hold its extremes
+	}
+	best := make([]int, blocks)
+	bestD := make([]float64, blocks)
+	for i := range best {
+		best[i] = -1
+	}
+	for k := range n {
+		if p, ok := found(k); ok {
+			if v := dist(p); v > bestD[coil(k)] {
+				best[coil(k)], bestD[coil(k)] = k, v
+			}
+		}
+	}
+	var seeds []int
+	for i, k := range best {
+		if k >= 0 {
+			seeds = append(seeds, i)
+		}
+	}
+	sort.Slice(seeds, func(a, b int) bool { return bestD[seeds[a]] > bestD[seeds[b]] })
+	if len(seeds) > 8 {
+		seeds = seeds[:8]
+	}
+	out := make([]calc.Vec, len(seeds))
+	eachIndex(len(seeds), func(j int) {
+		k := best[seeds[j]]
+		u := dir(k)
+		p, _ := found(k)
+		top := dist(p)
+		for h := math.Tan(5 * math.Pi / 180); h > math.Tan(0.2*math.Pi/180); {
+			e1, e2 := calc.CoilFrame(u).E1, calc.CoilFrame(u).E2
+			moved := false
+			for a := range 8 {
+				// eight ways across the line: a ridge where the nearest
+				// outline changes stalls a search along two
+				s, c := math.Sincos(float64(a) * math.Pi / 4)
+				v := u.Add(e1.Scale(h * c)).Add(e2.Scale(h * s)).Unit()
+				if q, ok := along(k, v); ok {
+					if dq := dist(q); dq > top {
+						u, p, top, moved = v, q, dq, true
+						break
+					}
+				}
+			}
+			if !moved {
+				h /= 2
+			}
+		}
+		out[j] = p
+	})
+	return out
 }

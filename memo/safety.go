@@ -177,7 +177,11 @@ func implantWhere(j *analysis.Study) (where []string, beyond string) {
 			what = "every winding and core"
 		}
 		far, _ := reachLength(ir.Distance)
-		beyond = fmt.Sprintf(" Farther than %s from the outer surface of %s, its bore counted as part of it, the flux density stays below 0.5 mT; within a bore it may exceed 0.5 mT anywhere (the field of all coils counted; searched every 10° outward from the centre of each winding and along the axis from points round the ends of the conductors).", far, what)
+		turned := ""
+		if len(d.Coils) > 1 {
+			turned = ", turned off those lines where the coils' fields add,"
+		}
+		beyond = fmt.Sprintf(" Farther than %s from the outer surface of %s, its bore counted as part of it, the flux density stays below 0.5 mT; within a bore it may exceed 0.5 mT anywhere (the field of all coils counted; searched every 10° outward from the centre of each winding in two planes through its axis%s and along the axis from points round the ends of the conductors).", far, what, turned)
 	}
 	for _, k := range ir.Probes {
 		p := r.Probes[k]
