@@ -98,6 +98,7 @@ type CoilReport struct {
 	Inductance         Num    `json:"inductance_H"`
 	WindingTemperature Num    `json:"winding_temperature_C"`
 	Runaway            bool   `json:"runaway"`
+	AboveClass         bool   `json:"above_insulation_class"`
 	FieldCenter        [3]Num `json:"field_center_T"`
 	TurnsPerLayer      int    `json:"turns_per_layer"`
 	Layers             int    `json:"layers"`
@@ -233,7 +234,8 @@ func Build(j *analysis.Study) Report {
 			Resistance20C: Num(cr.R20), ResistanceHot: Num(cr.RHot),
 			Current: Num(cr.Current), CurrentCold: Num(cr.ColdCurrent), Voltage: Num(cr.Voltage), Power: Num(cr.Power),
 			WireLength: Num(cr.Length), ConductorMass: Num(cr.Mass), CurrentDensity: Num(cr.Density),
-			Inductance: Num(cr.Inductance), WindingTemperature: Num(format.Celsius(cr.Temperature)), Runaway: cr.Runaway,
+			Inductance: Num(cr.Inductance), WindingTemperature: Num(format.Celsius(cr.Temperature)),
+			Runaway: runaway(co, cr), AboveClass: cr.Verdict.Runaway,
 			FieldCenter: vec(cr.FieldCentre), TurnsPerLayer: cr.Winding.TurnsPerLayer, Layers: cr.Winding.LayerCount,
 			DipoleAxis1: Num(cr.Dipole.Axis1), DipoleAxis01: Num(cr.Dipole.Axis01),
 			DipolePlane1: Num(cr.Dipole.Plane1), DipolePlane01: Num(cr.Dipole.Plane01),
@@ -466,4 +468,14 @@ func interactions(d calc.Design, r calc.Results) Interactions {
 			Coaxial: cp.Coaxial, Mutual: Num(cp.Mutual), K: Num(cp.K), Force: vec(cp.Force), ForceMethod: m})
 	}
 	return out
+}
+
+// runaway is the report's thermal runaway: no steady temperature exists,
+// or — under current drive, where the heat grows with the resistance
+// without the check a voltage drive's falling current gives — none at or
+// below the insulation class. A voltage-driven winding that settles above
+// its class is not in runaway; above_insulation_class says it is too hot.
+func runaway(co calc.Coil, cr calc.CoilResult) bool {
+	v := cr.Verdict
+	return v.NoSolution || (v.Runaway && co.Drive == calc.CurrentDrive)
 }
