@@ -43,6 +43,10 @@ type CoilKinds struct {
 	// ACPower is the heating at R_ac of a driven winding at its r.m.s.
 	// current, W (NaN without a frequency).
 	ACPower float64
+	// DCPower is what the same r.m.s. current would dissipate in R(T),
+	// the d.c. resistance at the winding temperature, duty-averaged, W:
+	// ACPower = F_R · DCPower (NaN without a frequency).
+	DCPower float64
 }
 
 // IsReceiver says whether coil c is a pick-up coil: no current, no
@@ -66,7 +70,7 @@ func kindsOf(d calc.Design, r calc.Results, cored bool) []CoilKinds {
 		}
 		cr := r.Coils[i]
 		w := cr.Winding
-		k := CoilKinds{AirMoment: cr.Moment, AirField: cr.FieldCentre, AirInductance: cr.Inductance, AirMass: cr.Mass, ACPower: math.NaN(), SelfResonance: math.NaN(), SelfCapacitance: math.NaN(), EndField: math.NaN()}
+		k := CoilKinds{AirMoment: cr.Moment, AirField: cr.FieldCentre, AirInductance: cr.Inductance, AirMass: cr.Mass, ACPower: math.NaN(), DCPower: math.NaN(), SelfResonance: math.NaN(), SelfCapacitance: math.NaN(), EndField: math.NaN()}
 		L := cr.Inductance
 		aEff := w.AreaSum
 		if c.Core.Present() {
@@ -108,6 +112,7 @@ func kindsOf(d calc.Design, r calc.Results, cored bool) []CoilKinds {
 			if !IsReceiver(c) {
 				k.AboveResonance = calc.AboveSelfResonance(c.Frequency, k.SelfResonance)
 				k.ACPower = cr.Power // the heat balance takes R_ac (calc.OperatingPoint)
+				k.DCPower = c.Duty * cr.Current * cr.Current * cr.RHot
 			}
 		}
 		out[i] = k
@@ -147,7 +152,7 @@ func coredResults(d calc.Design, r calc.Results, kinds []CoilKinds) calc.Results
 					if !(tm > 0) { // a corner's quick evaluation carries no heat balance
 						tm = cr.Temperature
 					}
-					cr.AC = calc.AC(c, cr.Inductance, cr.RHot, tm, c.Frequency)
+					cr.AC = calc.AC(c, cr.Inductance, cr.RHot*calc.HeatingACFactor(c, cr.Winding, tm), tm, c.Frequency)
 					cr.ACBounds = calc.ACBoundsFor(c.Drive, c.Frequency, cr.RHot, cr.AC.Reactance)
 				}
 			}

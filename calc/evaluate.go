@@ -106,7 +106,9 @@ func evaluateCoil(c Coil, cond Conditions) CoilResult {
 	cr.Switch = SwitchingFor(c, cond, cr.Inductance, op)
 	cr.Reactance = op.Reactance
 	cr.ACBounds = ACBoundsFor(c.Drive, c.Frequency, op.RHot, 2*math.Pi*c.Frequency*cr.Inductance)
-	cr.AC = AC(c, cr.Inductance, op.RHot, op.State.Mean, c.Frequency)
+	// the impedance takes R_ac, the resistance the heat balance and a
+	// voltage drive's current were solved at (OperatingPoint)
+	cr.AC = AC(c, cr.Inductance, op.RHot*op.Thermal.acFactor(), op.State.Mean, c.Frequency)
 	cr.GradientForce = GradientForce(cr.Moment.Norm(), cond.FieldGradient)
 	cr.InsulationMargin = math.NaN()
 	if c.InsulationClass > 0 {

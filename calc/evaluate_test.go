@@ -85,7 +85,7 @@ func TestEvaluateSample(t *testing.T) {
 	for _, n := range []string{"torquer", "probe", "magnet", "helmholtz", "frame"} {
 		for _, f := range []string{"Heat.Cycle.PeakMean", "Heat.Cycle.PeakHot", "Heat.Cycle.PeakSurface", "Heat.Cycle.Trough", "Heat.Cycle.Periods",
 			"Heat.Cycle.AveragePow", "Switch.Spike", "Switch.SpikeWorst", "AC.Reactance", "AC.Impedance", "AC.Phase", "AC.Current",
-			"AC.Voltage", "AC.SkinDepth", "GradientForce", "Heat.TimeToLimit",
+			"AC.Voltage", "AC.SkinDepth", "AC.Resistance", "GradientForce", "Heat.TimeToLimit",
 			// current drive without a driver rating: no clamp to size a resistor for
 			"Switch.Clamp", "Switch.ResistorMax", "Switch.Resistor", "Switch.ResistorDecay", "Switch.ResistorTime10", "Switch.ResistorEnergy", "Switch.ResistorDecayCold", "Switch.ResistorEnergyWorst",
 			// no driver rating: no margin to it

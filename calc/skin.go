@@ -23,9 +23,13 @@ const ReactanceRatio = 0.1
 // ACResult is a coil block driven at a frequency: the series R–L model with
 // the d.c. resistance at the winding's mean temperature.
 type ACResult struct {
-	Frequency  float64 // Hz (0: not given; then everything else is NaN)
-	Reactance  float64 // Ω, X = 2π f L
-	Impedance  float64 // Ω, |Z| = √(R² + X²)
+	Frequency float64 // Hz (0: not given; then everything else is NaN)
+	Reactance float64 // Ω, X = 2π f L
+	Impedance float64 // Ω, |Z| = √(R² + X²), R the Resistance
+	// Resistance is the R the impedance takes, Ω: the a.c. resistance
+	// R_ac = F_R·R(T) where Dowell's factor applies (HeatingACFactor),
+	// else R(T).
+	Resistance float64
 	Phase      float64 // rad, arctan(X/R)
 	Current    float64 // A rms: V/|Z| under voltage drive, the stated current under current drive
 	Voltage    float64 // V rms: the stated voltage, or I·|Z| under current drive
@@ -46,11 +50,12 @@ type ACResult struct {
 // capacitance, so it holds well below the self-resonant frequency.
 func AC(c Coil, L, R, T, f float64) ACResult {
 	n := math.NaN()
-	a := ACResult{Reactance: n, Impedance: n, Phase: n, Current: n, Voltage: n, SkinDepth: n, WireRadius: c.Wire.Bare / 2}
+	a := ACResult{Reactance: n, Impedance: n, Resistance: n, Phase: n, Current: n, Voltage: n, SkinDepth: n, WireRadius: c.Wire.Bare / 2}
 	if !(f > 0) {
 		return a
 	}
 	a.Frequency = f
+	a.Resistance = R
 	a.Reactance = 2 * math.Pi * f * L
 	a.Impedance = math.Hypot(R, a.Reactance)
 	a.Phase = math.Atan2(a.Reactance, R)

@@ -274,9 +274,10 @@ func (tp ThermalProblem) internalRunaway() bool {
 // temperature T. With u = T − Ts and f_s = 1 + α20 (Ts − 20 °C), in closed
 // form:
 //
-//	current drive: u = c f_s / (1 − c α20),            c = RiseMean·duty·I²R20
-//	d.c. voltage:  u = 2c / (f_s + √(f_s² + 4 α20 c)),  c = RiseMean·duty·V²/R20
+//	current drive: u = c f_s / (1 − c α20),            c = RiseMean·duty·I²R20·F
+//	d.c. voltage:  u = 2c / (f_s + √(f_s² + 4 α20 c)),  c = RiseMean·duty·V²/(R20·F)
 //
+// with F the a.c. factor the heat is taken at (ACFactor; 1 for d.c.)
 // (the first from u = c (f_s + α20 u); the second the positive root of
 // α20 u² + f_s u − c = 0, written so that it does not cancel),
 // and by bracketing and bisection otherwise (a.c. voltage drive, or where
@@ -292,14 +293,14 @@ func (tp ThermalProblem) MeanAtSurface(Ts float64) (T float64, ok bool) {
 	fs := 1 + a*(Ts-T20)
 	switch {
 	case tp.Drive == CurrentDrive && fs >= 0.01:
-		c := r * tp.Current * tp.Current * tp.R20
+		c := r * tp.Current * tp.Current * tp.R20 * tp.acFactor()
 		d := 1 - c*a
 		if !(d > 0) {
 			return math.NaN(), false
 		}
 		return Ts + c*fs/d, true
 	case tp.Drive == VoltageDrive && tp.Reactance == 0 && fs >= 0.01 && a >= 0:
-		c := r * tp.Voltage * tp.Voltage / tp.R20
+		c := r * tp.Voltage * tp.Voltage / (tp.R20 * tp.acFactor())
 		return Ts + 2*c/(fs+math.Sqrt(fs*fs+4*a*c)), true
 	}
 	g := func(T float64) float64 { return T - Ts - r*tp.PowerOn(T) }

@@ -223,7 +223,14 @@ func driveFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.
 			v.flagged = true
 			parts = append(parts, fmt.Sprintf("the skin depth $\\delta$ = %s is less than the wire radius %s, so the a.c. resistance and heating exceed the d.c. figures", Eng(ac.SkinDepth, "m", 3), Eng(ac.WireRadius, "m", 3)))
 		} else if !math.IsNaN(ac.SkinDepth) {
-			parts = append(parts, fmt.Sprintf("the skin depth $\\delta$ = %s exceeds the wire radius %s: no skin effect", Eng(ac.SkinDepth, "m", 3), Eng(ac.WireRadius, "m", 3)))
+			s := fmt.Sprintf("the skin depth $\\delta$ = %s exceeds the wire radius %s", Eng(ac.SkinDepth, "m", 3), Eng(ac.WireRadius, "m", 3))
+			if f := acFactor(cs); f >= 1.01 {
+				// the layers' field crowds the current even so
+				s += fmt.Sprintf(", but the field of the other layers crowds the current in each wire (proximity effect): Dowell's method gives $R_{ac}/R_{dc}$ = %s, and the heat and impedance%s are taken at $R_{ac}$", Sig(f, 3), map[bool]string{true: " and the current", false: ""}[co.Drive == calc.VoltageDrive])
+			} else {
+				s += ": no skin effect"
+			}
+			parts = append(parts, s)
 		}
 		v.text = strings.Join(parts, "; ") + "."
 		out = append(out, v)
@@ -367,4 +374,12 @@ func coolingAssumption(d calc.Design, cool calc.Cooling) string {
 	}
 	return fmt.Sprintf("natural convection in still air, the heat-transfer coefficient h from a published correlation for the coil's outer shape at its surface temperature (so it rises as the coil warms), plus radiation with surface emissivity %s to surroundings at the ambient temperature%s.",
 		Sig(cool.Emissivity, 2), mount)
+}
+
+// acFactor is Dowell's R_ac/R_dc of coil study cs, 1 where it has none.
+func acFactor(cs *analysis.CoilStudy) float64 {
+	if cs == nil || cs.Kinds.AC == nil || !(cs.Kinds.AC.Factor >= 1) {
+		return 1
+	}
+	return cs.Kinds.AC.Factor
 }

@@ -371,10 +371,21 @@ func (c *composer) summaryTable() doc.Table {
 		row("Magnetic moment |m|", func(_ int, cr calc.CoilResult) string { return Eng(cr.Moment.Norm(), "A·m²", 3) }),
 		row("Field at own centre |B|", func(_ int, cr calc.CoilResult) string { return Eng(cr.FieldCentre.Norm(), "T", 3) }),
 		row("Current", func(_ int, cr calc.CoilResult) string { return Eng(cr.Current, "A", 3) }),
-		row("Voltage", func(_ int, cr calc.CoilResult) string { return Eng(cr.Voltage, "V", 3) }),
+		row("Voltage", func(i int, cr calc.CoilResult) string {
+			// an a.c. drive needs |Z|·I, not the d.c. I·R (below the
+			// self-resonance, where the impedance is quoted)
+			if cr.AC.Frequency > 0 && !math.IsNaN(cr.AC.Voltage) && !c.j.Coils[i].Kinds.AboveResonance {
+				return Eng(cr.AC.Voltage, "V", 3) + " rms at " + Eng(cr.AC.Frequency, "Hz", 3)
+			}
+			return Eng(cr.Voltage, "V", 3)
+		}),
 		row(powerLabel(r), func(_ int, cr calc.CoilResult) string { return Eng(cr.Power, "W", 3) }),
 		row("Resistance at 20 °C / hot", func(_ int, cr calc.CoilResult) string {
-			return Eng(cr.R20, "Ω", 3) + " / " + Eng(cr.RHot, "Ω", 3)
+			s := Eng(cr.R20, "Ω", 3) + " / " + Eng(cr.RHot, "Ω", 3)
+			if cr.AC.Resistance > cr.RHot*1.01 {
+				s += " (a.c. " + Eng(cr.AC.Resistance, "Ω", 3) + ")"
+			}
+			return s
 		}),
 		row("Winding temperature, hottest point", func(i int, cr calc.CoilResult) string {
 			if cr.Runaway && !cr.Verdict.SettledAboveLimit {

@@ -374,8 +374,7 @@ func acSteps(co calc.Coil, cr calc.CoilResult) []Step {
 	steps := []Step{
 		{What: "Reactance at the drive frequency", Symbolic: `X = 2 \pi f L`,
 			Numbers: fmt.Sprintf(`2\pi \cdot %s \cdot %s`, f, Q(cr.Inductance, "H", 4)), Result: Q(a.Reactance, "Ω", 4)},
-		{What: "Impedance of the series R–L model (d.c. resistance at the winding temperature)", Symbolic: `|Z| = \sqrt{R^2 + X^2}`,
-			Numbers: fmt.Sprintf(`\sqrt{%s^2 + %s^2}`, Paren(Q(cr.RHot, "Ω", 4)), Paren(Q(a.Reactance, "Ω", 4))), Result: Q(a.Impedance, "Ω", 4)},
+		impedanceStep(cr),
 	}
 	if co.Drive == calc.VoltageDrive {
 		steps = append(steps, Step{What: "Current at the stated (rms) voltage", Symbolic: `I_{ac} = \frac{V}{|Z|}`,
@@ -712,4 +711,18 @@ func (c *composer) coredCouplingNote() {
 	}
 	c.para("The rows of a cored coil are those of its winding in air: " + strings.Join(parts, "; ") +
 		". The core carries more of the flux, which raises the mutual inductance and the force to a distant coil by about the ratio of the moments and more near the rod's ends, so these figures are lower bounds there.")
+}
+
+// impedanceStep is the series R–L impedance at the drive frequency, with
+// the resistance it takes: R_ac where Dowell's factor raises it (the
+// resistance the heat and a voltage drive's current were solved at),
+// else the d.c. resistance at the winding temperature.
+func impedanceStep(cr calc.CoilResult) Step {
+	a := cr.AC
+	what, sym := "Impedance of the series R–L model (d.c. resistance at the winding temperature)", `|Z| = \sqrt{R^2 + X^2}`
+	if a.Resistance > cr.RHot*(1+1e-9) {
+		what, sym = "Impedance of the series R–L model (a.c. resistance R_ac at the winding temperature, skin and proximity effect included)", `|Z| = \sqrt{R_{ac}^2 + X^2}`
+	}
+	return Step{What: what, Symbolic: sym,
+		Numbers: fmt.Sprintf(`\sqrt{%s^2 + %s^2}`, Paren(Q(a.Resistance, "Ω", 4)), Paren(Q(a.Reactance, "Ω", 4))), Result: Q(a.Impedance, "Ω", 4)}
 }

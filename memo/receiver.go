@@ -36,9 +36,8 @@ func (c *composer) receiver() {
 		} else {
 			steps := acLossSteps(co, c.j.Results.Coils[i], *k.AC)
 			if !math.IsNaN(k.ACPower) {
-				cr := c.j.Results.Coils[i]
 				steps = append(steps, Step{What: "Heating at the a.c. resistance (duty-averaged)", Symbolic: `P_{ac} = F_R P_{dc}`,
-					Numbers: fmt.Sprintf(`%s \cdot %s`, N(k.AC.Factor, 4), Q(cr.PowerOn*co.Duty, "W", 4)), Result: Q(k.ACPower, "W", 4)})
+					Numbers: fmt.Sprintf(`%s \cdot %s`, N(k.AC.Factor, 4), Q(k.DCPower, "W", 4)), Result: Q(k.ACPower, "W", 4)})
 			}
 			if !math.IsNaN(k.SelfResonance) {
 				steps = append(steps, Step{What: "Self-resonant frequency", Symbolic: `f_{sr} = \frac{1}{2 \pi \sqrt{L C}}`, Result: Q(k.SelfResonance, "Hz", 3)})
