@@ -115,6 +115,13 @@ func Drawer(p *plot.Plot, curves ...plotter.XYs) DrawFunc {
 // The returned function may be called any number of times, at any sizes:
 // the plot's legend backdrop is added once, here, and set per call.
 func drawer(p *plot.Plot, top vg.Length, curves []plotter.XYs) DrawFunc {
+	return drawerClear(p, top, curves, false)
+}
+
+// drawerClear is drawer; with clear set, a legend that would cover some
+// of the curves in every corner of the data area stands instead to the
+// right of it, outside, where it covers nothing.
+func drawerClear(p *plot.Plot, top vg.Length, curves []plotter.XYs, clear bool) DrawFunc {
 	backdrop := &legendBackdrop{}
 	p.Add(backdrop)
 	return func(c vg.Canvas, w, h vg.Length) {
@@ -130,7 +137,7 @@ func drawer(p *plot.Plot, top vg.Length, curves []plotter.XYs) DrawFunc {
 			defer func() { p.Y.Label.Text = label }()
 			dc = draw.Crop(dc, lw, 0, 0, 0)
 		}
-		placeLegend(p, dc, curves)
+		dc = placeLegendClear(p, dc, curves, clear)
 		backdrop.on = p.Legend.Rectangle(dc).Size().X > 0
 		if label != "" {
 			da := p.DataCanvas(dc)
@@ -142,6 +149,26 @@ func drawer(p *plot.Plot, top vg.Length, curves []plotter.XYs) DrawFunc {
 		}
 		p.Draw(dc)
 	}
+}
+
+// placeLegendClear places p's legend on dc (placeLegend) and returns the
+// canvas to draw p on: dc, or, with clear set and some of the curves
+// under the legend in every corner, dc less room on the right where the
+// legend then stands, outside the data area.
+func placeLegendClear(p *plot.Plot, dc draw.Canvas, curves []plotter.XYs, clear bool) draw.Canvas {
+	if n := placeLegend(p, dc, curves); !clear || n == 0 {
+		return dc
+	}
+	// The legend is laid out from the data area's left edge, less the
+	// axis padding.
+	const gap = 8
+	room := p.Legend.Rectangle(dc).Size().X + vg.Points(gap)
+	dc = draw.Crop(dc, 0, -room, 0, 0)
+	da := p.DataCanvas(dc)
+	p.Legend.Top, p.Legend.Left = true, true
+	p.Legend.XOffs = da.Max.X - da.Min.X + 2*p.X.Padding + vg.Points(gap)
+	p.Legend.YOffs = 0
+	return dc
 }
 
 // legendBackdrop clears the area behind the legend (grid lines) just
@@ -158,9 +185,19 @@ func (b *legendBackdrop) Plot(c draw.Canvas, p *plot.Plot) {
 	lc.Max.X += p.X.Padding
 	lc.Min.Y -= p.Y.Padding
 	lc.Max.Y += p.Y.Padding
+	r := legendBox(p, lc)
+	const m = 2
+	r.Max = vg.Point{X: r.Max.X + m, Y: r.Max.Y + m}
+	r.Min = vg.Point{X: r.Min.X - m, Y: r.Min.Y - m}
+	c.SetColor(color.White)
+	c.Fill(r.Path())
+}
+
+// legendBox is where p's legend is drawn on lc, the data area widened by
+// the axis padding.
+func legendBox(p *plot.Plot, lc draw.Canvas) vg.Rectangle {
 	l := p.Legend
 	size := l.Rectangle(lc).Size()
-	const m = 2
 	var r vg.Rectangle
 	if l.Left {
 		r.Min.X = lc.Min.X + l.XOffs
@@ -172,18 +209,18 @@ func (b *legendBackdrop) Plot(c draw.Canvas, p *plot.Plot) {
 	} else {
 		r.Min.Y = lc.Min.Y + l.YOffs
 	}
-	r.Max = vg.Point{X: r.Min.X + size.X + m, Y: r.Min.Y + size.Y + m}
-	r.Min = vg.Point{X: r.Min.X - m, Y: r.Min.Y - m}
-	c.SetColor(color.White)
-	c.Fill(r.Path())
+	r.Max = vg.Point{X: r.Min.X + size.X, Y: r.Min.Y + size.Y}
+	return r
 }
 
-// placeLegend picks the legend corner with the least data under it.
-func placeLegend(p *plot.Plot, dc draw.Canvas, curves []plotter.XYs) {
+// placeLegend picks the legend corner with the least data under it and
+// returns how many of the curves' points (every 2 pt along a line) lie
+// under it there.
+func placeLegend(p *plot.Plot, dc draw.Canvas, curves []plotter.XYs) int {
 	da := p.DataCanvas(dc)
 	size := p.Legend.Rectangle(da).Size()
 	if size.X == 0 {
-		return
+		return 0
 	}
 	trX, trY := p.Transforms(&da)
 	var pts []vg.Point
@@ -255,6 +292,7 @@ func placeLegend(p *plot.Plot, dc draw.Canvas, curves []plotter.XYs) {
 	if best.top {
 		p.Legend.YOffs = -inset
 	}
+	return bestN
 }
 
 // Prefix is an SI prefix with its factor.

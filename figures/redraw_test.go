@@ -33,6 +33,10 @@ func TestDrawAgainSame(t *testing.T) {
 	for name, f := range map[string]DrawFunc{
 		"on-axis": OnAxis("z", z, ex, di),
 		"map":     FieldMap(sampleMap()),
+		"trade":   Trade(sizingTrade(17, 1.7)),
+		"sensitivity": SensitivityFigure(SensitivityData{Tolerances: []string{"supply", "ambient"},
+			Results: []string{"Current"}, Swing: [][]float64{{9, -26.8}},
+			Kelvin: []string{"Hottest winding temperature"}, KelvinSwing: [][]float64{{3.3, 70.3}}}),
 	} {
 		first := record(f, 400, 260)
 		record(f, 300, 200) // another size in between

@@ -41,7 +41,19 @@ type TradeData struct {
 // Trade draws a trade-off figure. An axis whose values span more than a
 // decade and a half is logarithmic, labelled at the decades; SI units get
 // an engineering prefix.
+//
+// The legend goes to a corner of the data area that no point, line or
+// label takes, or, where every corner holds some, to the right of the
+// data area.
 func Trade(d TradeData) DrawFunc {
+	p, curves := tradePlot(d)
+	return drawerClear(p, 0, curves, true)
+}
+
+// tradePlot is Trade's plot and the curves (points, requirement lines,
+// labels' anchors and the choice, in data coordinates) its legend keeps
+// clear of.
+func tradePlot(d TradeData) (*plot.Plot, []plotter.XYs) {
 	d = grams(d)
 	var xs, ys []float64
 	for _, s := range d.Series {
@@ -161,7 +173,7 @@ func Trade(d TradeData) DrawFunc {
 	if chosen != nil {
 		p.Legend.Add("chosen", chosen)
 	}
-	return Drawer(p, curves...)
+	return p, curves
 }
 
 // topPoint is the point of largest Y of segs.
@@ -263,9 +275,11 @@ func scatter(p *plot.Plot, segs []plotter.XYs, c color.Color, radius float64) *p
 	return first
 }
 
-// logAxis makes ax logarithmic, over whole decades, when the positive
-// values v span more than a decade and a half, and sets its range; it
-// reports whether it did.
+// logAxis makes ax logarithmic when the positive values v span more than
+// a decade and a half, and sets its range; it reports whether it did.
+// The range is the values' own, widened by tradeMargin of its span on
+// either side (of the logarithm's span on a log axis), so that no point
+// sits on the frame and no decade is left empty.
 // A log axis's ticks are labelled in engineering units of unit.
 func logAxis(ax *plot.Axis, v []float64, factor float64, unit string) bool {
 	lo, hi, ok := positiveRange(v, nil)
@@ -274,13 +288,14 @@ func logAxis(ax *plot.Axis, v []float64, factor float64, unit string) bool {
 	}
 	if hi/lo > math.Pow(10, 1.5) {
 		ax.Scale = plot.LogScale{}
-		ax.Tick.Marker = engDecadeTicks{unit: unit, factor: factor}
-		ax.Min = math.Pow(10, math.Floor(math.Log10(lo/factor)))
-		ax.Max = math.Pow(10, math.Ceil(math.Log10(hi/factor)))
+		ax.Tick.Marker = tradeLogTicks{unit: unit, factor: factor}
+		pad := tradeMargin * math.Log10(hi/lo)
+		ax.Min = math.Pow(10, math.Log10(lo/factor)-pad)
+		ax.Max = math.Pow(10, math.Log10(hi/factor)+pad)
 		return true
 	}
 	flo, fhi, _ := finiteRange(v)
-	pad := 0.06 * (fhi - flo)
+	pad := tradeMargin * (fhi - flo)
 	if pad == 0 {
 		pad = 0.1 * math.Abs(fhi)
 	}
@@ -289,6 +304,38 @@ func logAxis(ax *plot.Axis, v []float64, factor float64, unit string) bool {
 		ax.Min = (flo - pad) / factor
 	}
 	return false
+}
+
+// tradeMargin is the share of the data's span a trade figure's axis
+// reaches beyond the data on either side.
+const tradeMargin = 0.06
+
+// tradeLogTicks are engDecadeTicks over a range that need not start or end
+// at a decade: where fewer than two decades fall in it, the marks at 2 and
+// 5 times a decade are labelled too, so that the axis always reads.
+type tradeLogTicks struct {
+	unit   string
+	factor float64
+}
+
+func (t tradeLogTicks) Ticks(min, max float64) []plot.Tick {
+	ticks := engDecadeTicks(t).Ticks(min, max)
+	labelled := 0
+	for _, tk := range ticks {
+		if tk.Label != "" {
+			labelled++
+		}
+	}
+	if labelled >= 2 {
+		return ticks
+	}
+	for i, tk := range ticks {
+		m := tk.Value / math.Pow(10, math.Floor(math.Log10(tk.Value)+1e-9))
+		if math.Abs(m-2) < 1e-6 || math.Abs(m-5) < 1e-6 {
+			ticks[i].Label = EngLabel(tk.Value*t.factor, t.unit)
+		}
+	}
+	return ticks
 }
 
 // grams rewrites masses in kilograms as grams, so that a prefix never
@@ -305,7 +352,7 @@ func grams(d TradeData) TradeData {
 		d.XUnit, d.ChosenX, d.XLimits = "g", d.ChosenX*1e3, scale(d.XLimits)
 		var ss []TradeSeries
 		for _, s := range d.Series {
-			ss = append(ss, TradeSeries{X: scale(s.X), Y: s.Y, Feasible: s.Feasible})
+			ss = append(ss, TradeSeries{X: scale(s.X), Y: s.Y, Feasible: s.Feasible, Label: s.Label})
 		}
 		d.Series = ss
 	}
@@ -313,7 +360,7 @@ func grams(d TradeData) TradeData {
 		d.YUnit, d.ChosenY, d.YLimits = "g", d.ChosenY*1e3, scale(d.YLimits)
 		var ss []TradeSeries
 		for _, s := range d.Series {
-			ss = append(ss, TradeSeries{X: s.X, Y: scale(s.Y), Feasible: s.Feasible})
+			ss = append(ss, TradeSeries{X: s.X, Y: scale(s.Y), Feasible: s.Feasible, Label: s.Label})
 		}
 		d.Series = ss
 	}

@@ -97,16 +97,43 @@ func (c *composer) requirementTable(sz *analysis.Sizing) doc.Table {
 				at = marginText(l, sz.Chosen.Margins[m])
 			}
 		}
-		how := "layout, heat balance"
 		if !con.Cheap {
-			how = "full evaluation"
+			what += " (judged in full evaluation only)"
 		}
-		rows = append(rows, []doc.Cell{{Text: what}, {Text: how}, {Text: format.Digits(con.Excluded)}, {Text: at}})
+		if v := c.constraintValue(sz, k); v != "" {
+			at = v + ", " + at
+		}
+		rows = append(rows, []doc.Cell{{Text: what}, {Text: format.Digits(con.Excluded)}, {Text: constraintRole(sz, k)}, {Text: at}})
 	}
-	return doc.Table{Caption: "Requirements the choice must meet: the choices each excludes, and the margin left at the choice",
-		Header: []string{"Requirement", "Decided by", "Choices excluded", "At the choice"},
-		Rows:   rows, Widths: []float64{3.4, 1.3, 1.1, 1.3},
-		Align: []doc.Align{doc.Left, doc.Left, doc.Right, doc.Right}}
+	return doc.Table{Caption: "Requirements the choice must meet: the choices each excludes, which requirement binds the choice, and the value and margin left at the choice",
+		Header: []string{"Requirement", "Choices excluded", "Binds", "At the choice"},
+		Rows:   rows, Widths: []float64{2.8, 0.9, 1.0, 2.4},
+		Align: []doc.Align{doc.Left, doc.Right, doc.Left, doc.Right}}
+}
+
+// constraintRole says whether constraint k binds the choice: the binding
+// one (it stops the most of the choices better than the chosen, as the
+// text after the choice table counts), the next to bind (the least margin
+// besides it), or neither ("—").
+func constraintRole(sz *analysis.Sizing, k int) string {
+	switch k {
+	case sz.Binding:
+		return "binding"
+	case sz.Next:
+		return "next to bind"
+	}
+	return "—"
+}
+
+// constraintValue is the value the choice reaches on constraint k, a
+// requirement's quantity in its display unit; "" for a physical one.
+func (c *composer) constraintValue(sz *analysis.Sizing, k int) string {
+	con := sz.Constraints[k]
+	if con.Limit < 0 || k >= len(sz.Chosen.Quantity) || math.IsNaN(sz.Chosen.Quantity[k]) {
+		return ""
+	}
+	l := c.j.Spec.Design.Limits[con.Limit]
+	return worstValue(l.Quantity, sz.Chosen.Quantity[k], 4)
 }
 
 func relText(l calc.Limit) string {
@@ -268,19 +295,51 @@ func (c *composer) choiceTable(sz *analysis.Sizing) doc.Table {
 		rows = append(rows, row)
 	}
 	align := []doc.Align{doc.Left, doc.Left}
-	widths := []float64{1.2, 1, 0.8}
 	for range head[2:] {
 		align = append(align, doc.Right)
 	}
-	for range sz.Size.Ranges {
-		widths = append(widths, 1)
-	}
-	widths = append(widths, 1.2) // the objective
-	for range ls {
+	head, rows = unitsToHeader(head, rows, 2)
+	// The units in the headers keep the values short enough for one line
+	// each; the headers may take two or three.
+	widths := []float64{1.25, 0.95, 0.7}
+	for range head[3:] {
 		widths = append(widths, 1)
 	}
 	return doc.Table{Caption: "The choice and the best choice of each other wire that meets every requirement, with the margin left on each requirement (a temperature's as the share of the allowed rise)",
 		Header: head, Rows: rows, Widths: widths, Align: align}
+}
+
+// unitsToHeader moves a unit shared by every cell of a column, from
+// column from on, into its header ("Power (mW)"), so that the cells hold
+// numbers alone and the column stays narrow.
+func unitsToHeader(head []string, rows [][]doc.Cell, from int) ([]string, [][]doc.Cell) {
+	for j := from; j < len(head); j++ {
+		unit := ""
+		for i, row := range rows {
+			if j >= len(row) {
+				unit = ""
+				break
+			}
+			k := strings.LastIndex(row[j].Text, " ")
+			u := ""
+			if k > 0 {
+				u = row[j].Text[k+1:]
+			}
+			if u == "" || strings.ContainsAny(u, "0123456789") || (i > 0 && u != unit) {
+				unit = ""
+				break
+			}
+			unit = u
+		}
+		if unit == "" || len(rows) == 0 {
+			continue
+		}
+		head[j] += " (" + unit + ")"
+		for _, row := range rows {
+			row[j].Text = strings.TrimSuffix(row[j].Text, " "+unit)
+		}
+	}
+	return head, rows
 }
 
 func rangeValueOf(r spec.FreeRange, v float64) string {

@@ -11,6 +11,8 @@ import (
 	"coilmemo/doc"
 	"coilmemo/figures"
 	"coilmemo/spec"
+
+	"gonum.org/v1/plot/vg"
 )
 
 // worstNames are the headline results of the worst case as the memo names
@@ -202,29 +204,30 @@ func (c *composer) sensitivity(wc *analysis.WorstCase) {
 	}
 	header := append([]string{"Result"}, names...)
 	var rows [][]doc.Cell
-	var labels []string
-	var swing [][]float64
+	var fd figures.SensitivityData
+	fd.Tolerances = names
 	for r, res := range wc.Results {
 		row := []doc.Cell{{Text: c.worstName(res.Quantity)}}
+		if res.Quantity == "temperature" {
+			// A swing in K against the nominal in °C would mislead: the
+			// temperature's swings stay in kelvin, on an axis of their own.
+			for i := range t.Items {
+				row = append(row, doc.Cell{Text: signed(wc.Swing[r][i], "K")})
+			}
+			rows = append(rows, row)
+			fd.Kelvin = append(fd.Kelvin, c.worstName(res.Quantity))
+			fd.KelvinSwing = append(fd.KelvinSwing, wc.Swing[r])
+			continue
+		}
 		var pct []float64
 		for i := range t.Items {
-			s := wc.Swing[r][i]
-			nom := res.Nominal
-			if res.Quantity == "temperature" {
-				nom = Celsius(nom) // a swing in K against the nominal in °C would mislead: kelvin
-				row = append(row, doc.Cell{Text: signed(s, "K")})
-				pct = append(pct, math.NaN())
-				continue
-			}
-			p := 100 * s / math.Abs(nom)
+			p := 100 * wc.Swing[r][i] / math.Abs(res.Nominal)
 			pct = append(pct, p)
 			row = append(row, doc.Cell{Text: signed(p, "%")})
 		}
 		rows = append(rows, row)
-		if res.Quantity != "temperature" {
-			labels = append(labels, c.worstName(res.Quantity))
-			swing = append(swing, pct)
-		}
+		fd.Results = append(fd.Results, c.worstName(res.Quantity))
+		fd.Swing = append(fd.Swing, pct)
 	}
 	widths := []float64{2.2}
 	align := []doc.Align{doc.Left}
@@ -233,30 +236,101 @@ func (c *composer) sensitivity(wc *analysis.WorstCase) {
 	}
 	c.para("Each tolerance moved alone from its low to its high end, the others at nominal, changes each result by the amount below (per cent of the nominal value; the temperature in kelvin). The largest entry in a row is the tolerance that moves that result most.")
 	c.add(doc.Table{Caption: "Sensitivity: change of each result over each tolerance's range", Header: header, Rows: rows, Widths: widths, Align: align})
-	if len(labels) > 0 {
-		// What to see: the longest bar.
-		bi, bj, big := -1, -1, 0.0
-		for i, row := range swing {
-			for j, v := range row {
-				if math.Abs(v) > big && j < len(names) {
-					bi, bj, big = i, j, math.Abs(v)
-				}
-			}
-		}
-		text := fmt.Sprintf("Figure %d shows the same swings as bars, one group per result.", c.figure+1)
-		if bi >= 0 {
-			what := strings.ToLower(labels[bi][:1]) + labels[bi][1:]
-			hold := "that tolerance is the one to hold tightest"
-			if names[bj] == "ambient" {
-				hold = "the ambient range, which the design cannot hold, is the one to design for"
-			}
-			text += fmt.Sprintf(" The longest bar is the swing of the %s over the %s tolerance, %s %%: %s.", what, names[bj], Sig(big, 2), hold)
-		}
-		c.para(text)
-		c.fig(doc.Figure{Caption: "Sensitivity of each result to each tolerance (swing from low to high end, % of nominal)",
-			Width: figWidth, Height: figHeight * 0.8, Draw: figures.Sensitivity(labels, names, swing),
-			Summary: fmt.Sprintf("Bars for %d results and %d tolerances.", len(labels), len(names))})
+	if len(fd.Results)+len(fd.Kelvin) == 0 {
+		return
 	}
+	text := fmt.Sprintf("Figure %d shows the same swings as bars, one group per result and one bar per tolerance, in the legend's order from the top of each group; a bar right of zero is a result that rises from the tolerance's low end to its high end.", c.figure+1)
+	what, hold := longestBars(fd.Results, names, fd.Swing, "%")
+	if what != "" {
+		text += " " + what + ": " + hold + "."
+	}
+	if kw, kh := longestBars(fd.Kelvin, names, fd.KelvinSwing, "K"); kw != "" {
+		text += " Below, in kelvin: " + lowerFirst(kw)
+		if kh != hold {
+			text += ": " + kh
+		}
+		text += "."
+	}
+	c.para(text)
+	caption := "Sensitivity of each result to each tolerance (swing from low to high end, % of nominal"
+	if len(fd.Kelvin) > 0 {
+		caption += "; the temperature below, in K"
+	}
+	caption += "; one colour per tolerance, as in the legend; right of zero: the result rises with the tolerance)"
+	c.fig(doc.Figure{Caption: caption,
+		Width: figWidth, Height: figHeight * vg.Length(0.8+0.15*float64(len(fd.Kelvin))), Draw: figures.SensitivityFigure(fd),
+		Summary: fmt.Sprintf("Bars for %d results and %d tolerances.", len(fd.Results)+len(fd.Kelvin), len(names))})
+}
+
+// longestBars says which bars of a sensitivity figure's panel are the
+// longest: every swing (results[r] over tolerance names[j]) that reads as
+// the longest at the three figures the sensitivity table shows, so that
+// bars of one length are named together rather than one of them picked;
+// and, in hold, which tolerance to hold or design for. "" without a bar.
+func longestBars(results, names []string, swing [][]float64, unit string) (what, hold string) {
+	big := 0.0
+	for _, row := range swing {
+		for j, v := range row {
+			if j < len(names) && !math.IsNaN(v) {
+				big = math.Max(big, math.Abs(v))
+			}
+		}
+	}
+	if !(big > 0) {
+		return "", ""
+	}
+	shown := Sig(big, 3)
+	// The tied results, per tolerance, tolerances in table order.
+	var tols []int
+	of := map[int][]string{}
+	n := 0
+	for j := range names {
+		for i, row := range swing {
+			if j < len(row) && !math.IsNaN(row[j]) && Sig(math.Abs(row[j]), 3) == shown {
+				if len(of[j]) == 0 {
+					tols = append(tols, j)
+				}
+				of[j] = append(of[j], lowerFirst(results[i]))
+				n++
+			}
+		}
+	}
+	var parts, others []string
+	ambient := false
+	for _, j := range tols {
+		parts = append(parts, fmt.Sprintf("of the %s over the %s tolerance", joinAnd(of[j]), names[j]))
+		if names[j] == "ambient" {
+			ambient = true
+		} else {
+			others = append(others, names[j])
+		}
+	}
+	var h []string
+	switch len(others) {
+	case 0:
+	case 1:
+		h = append(h, "the "+others[0]+" tolerance is the one to hold tightest")
+	default:
+		h = append(h, "the "+joinAnd(others)+" tolerances are the ones to hold tightest")
+	}
+	if ambient {
+		h = append(h, "the ambient range, which the design cannot hold, is the one to design for")
+	}
+	hold = strings.Join(h, "; ")
+	if n == 1 {
+		return fmt.Sprintf("The longest bar is the swing %s, %s %s", parts[0], shown, unit), hold
+	}
+	return fmt.Sprintf("The longest bars tie at %s %s each (to the three figures of the table): the swings %s",
+		shown, unit, joinAnd(parts)), hold
+}
+
+// lowerFirst lowers a result name's first letter ("Current" → "current"),
+// leaving a symbol ("|B| at the origin") as it is.
+func lowerFirst(s string) string {
+	if s == "" {
+		return s
+	}
+	return strings.ToLower(s[:1]) + s[1:]
 }
 
 // signed writes a swing in the sensitivity table to three significant

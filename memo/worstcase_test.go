@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"math"
 	"os"
+	"slices"
 	"strings"
 	"testing"
 
@@ -154,5 +155,70 @@ func TestTorqueCoilPowerWhileOn(t *testing.T) {
 		if !strings.Contains(text, want) {
 			t.Errorf("memo lacks %q", want)
 		}
+	}
+}
+
+// Bars of one length, at the three figures the sensitivity table shows,
+// are named together, not one of them as "the longest"; a bar longer
+// than the rest is named alone.
+func TestLongestBarsTie(t *testing.T) {
+	names := []string{"supply", "ambient", "turns"}
+	results := []string{"Magnetic moment |m|", "Current", "Hot resistance"}
+	tie := [][]float64{{9, -26.81, 0.1}, {9, -26.84, -1.9}, {1, 26.5, 1.9}}
+	what, hold := longestBars(results, names, tie, "%")
+	for _, want := range []string{"bars tie at 26.8 %", "magnetic moment |m| and current over the ambient tolerance"} {
+		if !strings.Contains(what, want) {
+			t.Errorf("tie: %q lacks %q", what, want)
+		}
+	}
+	if strings.Contains(what, "hot resistance") || strings.Contains(what, "The longest bar is") {
+		t.Errorf("tie: %q names a shorter bar or one bar alone", what)
+	}
+	if !strings.Contains(hold, "ambient range") {
+		t.Errorf("tie: hold %q", hold)
+	}
+	// Ties over two tolerances name both, and the one to hold.
+	two := [][]float64{{12, -12, 0.1}}
+	what, hold = longestBars(results[:1], names, two, "%")
+	if !strings.Contains(what, "over the supply tolerance and of the magnetic moment |m| over the ambient tolerance") || !strings.Contains(hold, "supply tolerance is the one to hold tightest") {
+		t.Errorf("two tolerances: %q / %q", what, hold)
+	}
+	one := [][]float64{{9, -26.8, 0.1}, {9, -20, -1.9}}
+	if what, _ := longestBars(results[:2], names, one, "%"); !strings.HasPrefix(what, "The longest bar is the swing of the magnetic moment |m| over the ambient tolerance, 26.8 %") {
+		t.Errorf("one longest: %q", what)
+	}
+}
+
+// The hottest winding temperature, a headline result, has its bars in the
+// sensitivity figure (in kelvin, the Study's swings) and its longest
+// swing named in the text.
+func TestSensitivityFigureHasTemperature(t *testing.T) {
+	j, text := memoOf(t, "../examples/torque-coil.md", true)
+	wc := j.WorstCase
+	r := slices.Index(analysis.HeadlineQuantities, "temperature")
+	if wc == nil || r < 0 || r >= len(wc.Swing) {
+		t.Fatal("no worst case with a temperature")
+	}
+	big, at := 0.0, -1
+	for i, v := range wc.Swing[r] {
+		if math.Abs(v) > big {
+			big, at = math.Abs(v), i
+		}
+	}
+	want := fmt.Sprintf("the swing of the hottest winding temperature over the %s tolerance, %s K", wc.Tolerances.Items[at].Key, Sig(big, 3))
+	if !strings.Contains(strings.Join(strings.Fields(text), " "), want) {
+		t.Errorf("memo lacks %q", want)
+	}
+	found := false
+	for _, b := range Document(j).Blocks {
+		if f, ok := b.(doc.Figure); ok && strings.HasPrefix(f.Caption, "Sensitivity of each result") {
+			found = true
+			if !strings.Contains(f.Caption, "temperature below, in K") || !strings.Contains(f.Caption, "one colour per tolerance") {
+				t.Errorf("caption %q does not say what the panels and colours are", f.Caption)
+			}
+		}
+	}
+	if !found {
+		t.Error("no sensitivity figure")
 	}
 }
