@@ -80,6 +80,9 @@ type Finding struct {
 type Safety struct {
 	Findings []Finding
 	Implant  ImplantReach
+	// Exposure is the time-varying field of each a.c.-driven block
+	// against the ICNIRP (2010) reference levels (exposure.go).
+	Exposure []ACExposure
 }
 
 // ImplantReach is where the field of all coils together reaches
@@ -205,6 +208,7 @@ func assessSafety(d calc.Design, r calc.Results, coils []CoilStudy, wc *WorstCas
 		s.Findings = append(s.Findings, electricalFindings(i, cr, coils[i].SwitchOff)...)
 	}
 	s.Implant = implantReach(d, r, coils)
+	s.Exposure = acExposures(d, r, coils)
 	return s
 }
 
@@ -614,7 +618,7 @@ func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach
 			points = append(points, p)
 		}
 	}
-	ir.Windings = windingReaches(fm, d, r, coils, ext, points, conductorBounds(d, r, coils))
+	ir.Windings = windingReaches(fm, d, r, coils, ext, points, conductorBounds(d, r, coils), ImplantField)
 	for i, w := range ir.Windings {
 		if w.Distance > ir.Distance || (ir.Nearest < 0 && w.Surface >= ImplantField) {
 			ir.Distance, ir.Nearest = w.Distance, i
@@ -994,7 +998,7 @@ func outlinePeak(fm func(calc.Vec) calc.Vec, o outline, gap float64, alone bool,
 // convex outline makes it needless (tests).
 var sampleEveryLine = false
 
-func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, coils []CoilStudy, ext float64, extra []calc.Vec, ks []float64) []WindingReach {
+func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, coils []CoilStudy, ext float64, extra []calc.Vec, ks []float64, lvl float64) []WindingReach {
 	os := outlines(d, coils)
 	bound := 0.0
 	for _, k := range ks {
@@ -1010,7 +1014,7 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 	if ks != nil {
 		model = calc.NewFieldModel(d).ForMaps() // a level search needs no more than the maps' 10⁻⁹
 	}
-	fast := levelField(fm, model, newFieldBound(d, ks, os), moments, ImplantField)
+	fast := levelField(fm, model, newFieldBound(d, ks, os), moments, lvl)
 	gap := 1e-6 * math.Max(ext, 1e-3)
 	type ray struct {
 		coil    int
@@ -1124,7 +1128,7 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 		if bound > 0 {
 			// beyond the sphere of radius ext about the origin by more than
 			// √(bound/level), no conductor is near enough to give the level
-			lim = math.Min(far, r.at.Norm()+ext+math.Sqrt(bound/ImplantField))
+			lim = math.Min(far, r.at.Norm()+ext+math.Sqrt(bound/lvl))
 		}
 		if len(d.Coils) > 1 && convexAlone[r.coil] && !sampleEveryLine {
 			lim = ownStretch(os, r.coil, r.at, r.dir, gap, lim)
@@ -1132,10 +1136,10 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 		// first guess: the surface field falling as a dipole's, as the
 		// cube of the distance from the block's centre
 		guess := 0.0
-		if d0 := r.at.Sub(d.Coils[r.coil].Centre).Norm(); b > ImplantField && d0 > 0 {
-			guess = d0 * (math.Cbrt(b/ImplantField) - 1)
+		if d0 := r.at.Sub(d.Coils[r.coil].Centre).Norm(); b > lvl && d0 > 0 {
+			guess = d0 * (math.Cbrt(b/lvl) - 1)
 		}
-		if t := reachFrom(fast, r.at, r.dir, ImplantField, gap, lim, guess); t > 0 {
+		if t := reachFrom(fast, r.at, r.dir, lvl, gap, lim, guess); t > 0 {
 			res[k].point, res[k].ok = r.at.Add(r.dir.Scale(t)), true
 		}
 	})
@@ -1161,14 +1165,14 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 		at := r.centre.Add(u.Scale(exits[r.coil](r.centre, u) + gap))
 		b := fast(at).Norm()
 		guess := 0.0
-		if d0 := at.Sub(r.centre).Norm(); b > ImplantField && d0 > 0 {
-			guess = d0 * (math.Cbrt(b/ImplantField) - 1)
+		if d0 := at.Sub(r.centre).Norm(); b > lvl && d0 > 0 {
+			guess = d0 * (math.Cbrt(b/lvl) - 1)
 		}
 		lim := far
 		if bound > 0 {
-			lim = math.Min(far, at.Norm()+ext+math.Sqrt(bound/ImplantField))
+			lim = math.Min(far, at.Norm()+ext+math.Sqrt(bound/lvl))
 		}
-		if t := reachFrom(fast, at, u, ImplantField, gap, lim, guess); t > 0 {
+		if t := reachFrom(fast, at, u, lvl, gap, lim, guess); t > 0 {
 			return at.Add(u.Scale(t)), true
 		}
 		return calc.Vec{}, false
@@ -1229,7 +1233,7 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 		part := samples[from:min(from+batch, len(samples))]
 		eachIndex(len(part), func(i int) {
 			s := part[i]
-			level[i] = !done[s.coil] && s.d > wr[s.coil].Distance && fast(s.at).Norm() >= ImplantField
+			level[i] = !done[s.coil] && s.d > wr[s.coil].Distance && fast(s.at).Norm() >= lvl
 		})
 		for i, s := range part {
 			if done[s.coil] {

@@ -2,6 +2,7 @@ package memo
 
 import (
 	"fmt"
+	"math"
 	"slices"
 	"sort"
 	"strings"
@@ -60,6 +61,7 @@ func Cautions(j *analysis.Study) []doc.Callout {
 				Spans: []doc.Span{{Text: templates.Text("caution-implant-none", nil)}}})
 		}
 	}
+	out = append(out, exposureCautions(j)...) // memo/exposure.go
 	out = mergeCautions(out)
 	general := templates.Paragraphs("caution-general", nil)
 	for i, p := range general {
@@ -201,14 +203,17 @@ func surfaceDistance(v float64) string {
 	return "as far as " + l + " from"
 }
 
-// reachLength is a reach from a winding's surface to two figures, or
-// "1 mm" (under set) below a millimetre, where a figure in µm reads as
-// false precision; every sentence of the caution words it so.
+// reachLength is a reach from a winding's surface to two figures,
+// rounded up — a keep-out distance rounded down would claim a field below
+// the level where it is not —, or "1 mm" (under set) below a millimetre,
+// where a figure in µm reads as false precision; every sentence of the
+// caution words it so.
 func reachLength(v float64) (s string, under bool) {
 	if v < 1e-3 {
 		return "1 mm", true
 	}
-	return Eng(v, "m", 2), false
+	step := math.Pow(10, math.Floor(math.Log10(v))-1)
+	return Eng(math.Ceil(v/step*(1-1e-12))*step, "m", 2), false
 }
 
 // windingWord names what a coil's outer surface bounds.

@@ -2,6 +2,7 @@ package memo
 
 import (
 	"bytes"
+	"math"
 	"os"
 	"regexp"
 	"strings"
@@ -209,9 +210,18 @@ func TestImplantReachWordedOnce(t *testing.T) {
 		if strings.Contains(caution, "from it along") || strings.Contains(caution, "from the origin in") {
 			t.Errorf("%s: a reach measured along a search line: %s", f, caution)
 		}
-		surface := map[string]bool{Eng(ir.AxialClear, "m", 2): true, Eng(ir.Distance, "m", 2): true, "1 mm": ir.Distance < 1e-3}
+		// reaches from a surface are stated to two figures rounded up (a
+		// keep-out distance is never understated)
+		up2 := func(v float64) string {
+			if !(v > 0) {
+				return Eng(v, "m", 2)
+			}
+			e := math.Pow(10, math.Floor(math.Log10(v))-1)
+			return Eng(math.Ceil(v/e-1e-9)*e, "m", 2)
+		}
+		surface := map[string]bool{up2(ir.AxialClear): true, up2(ir.Distance): true, "1 mm": ir.Distance < 1e-3}
 		for _, w := range ir.Windings {
-			surface[Eng(w.Distance, "m", 2)] = true
+			surface[up2(w.Distance)] = true
 		}
 		for _, m := range num.FindAllStringSubmatch(caution, -1) {
 			v := m[1] + " " + m[2]
@@ -225,8 +235,8 @@ func TestImplantReachWordedOnce(t *testing.T) {
 		if n, k := len(any.FindAllString(caution, -1)), len(num.FindAllString(caution, -1)); n != k {
 			t.Errorf("%s: %d lengths said to be from something, %d of them in the two forms: %s", f, n, k, caution)
 		}
-		if ir.Distance >= 1e-3 && !strings.Contains(caution, "Farther than "+Eng(ir.Distance, "m", 2)+" from the outer surface of every winding") {
-			t.Errorf("%s: the bound %s is not stated: %s", f, Eng(ir.Distance, "m", 2), caution)
+		if ir.Distance >= 1e-3 && !strings.Contains(caution, "Farther than "+up2(ir.Distance)+" from the outer surface of every winding") {
+			t.Errorf("%s: the bound %s is not stated: %s", f, up2(ir.Distance), caution)
 		}
 		if ir.AxialBore && !strings.Contains(caution, "inside the bore") {
 			t.Errorf("%s: the axial reach ends in the bore, not said: %s", f, caution)
