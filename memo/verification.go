@@ -2,6 +2,7 @@ package memo
 
 import (
 	"slices"
+	"strings"
 
 	"coilmemo/analysis"
 	"coilmemo/doc"
@@ -15,7 +16,11 @@ func (c *composer) verification() {
 	c.heading(1, "Verification")
 	c.para(templates.Text("verification", nil))
 	if coreChecks(c.j.Checks) > 0 {
-		c.para("A cored coil's rows of its winding are those of the winding in air. The rows of its core check the core's model: its demagnetising factor against closed forms (the uniform cylinder in the limit of a vanishing susceptibility and, for a long rod, the prolate spheroid of the same ratio, which must lie between the rod's fluxmetric and magnetometric factors). The figures with the core at the operating point rest on that model; no row recomputes them by an independent method.")
+		withCore := ""
+		if slices.ContainsFunc(c.j.Checks, func(k analysis.Check) bool { return !k.Core && strings.Contains(k.Name, "with the core's") }) {
+			withCore = " (a pick-up coil's rows marked with the core's inductance and effective area check the figures computed from them, not them)"
+		}
+		c.para("A cored coil's rows of its winding are those of the winding in air. The rows of its core check the core's model: its demagnetising factor against closed forms (the uniform cylinder in the limit of a vanishing susceptibility and, for a long rod, the prolate spheroid of the same ratio, which must lie between the rod's fluxmetric and magnetometric factors). The figures with the core at the operating point rest on that model; no row recomputes them by an independent method" + withCore + ".")
 	}
 	if len(c.j.Checks) == 0 {
 		c.para("No independent check applies to this design's forms.")

@@ -159,3 +159,26 @@ func parsePercent(s string) (v, res float64, ok bool) {
 	scale := math.Pow(10, float64(exp))
 	return v * scale, math.Pow(10, float64(-dec)) * scale, true
 }
+
+// Page 1 does not count a pick-up coil's rows of the figures computed
+// with its core among the checks of the winding in air.
+func TestVerdictCountsCoredPickupRows(t *testing.T) {
+	j, _ := memoOf(t, "../examples/search-coil.md", true)
+	with, air := 0, 0
+	for _, k := range j.Checks {
+		switch {
+		case k.Core:
+		case strings.Contains(k.Name, "with the core's"):
+			with++
+		default:
+			air++
+		}
+	}
+	if with == 0 {
+		t.Fatal("search coil: no row with the core's figures")
+	}
+	v := checksVerdict(j.Checks)
+	if !strings.Contains(v, strconv.Itoa(air)+" of the winding in air, "+strconv.Itoa(with)+" of the pick-up figures computed from the core's") {
+		t.Errorf("search coil: %q", v)
+	}
+}
