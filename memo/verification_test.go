@@ -10,7 +10,9 @@ import (
 	"testing"
 
 	"coilmemo/analysis"
+	"coilmemo/calc"
 	"coilmemo/doc"
+	"coilmemo/format"
 )
 
 // Like coils' checks are written once, naming every coil they cover; a
@@ -180,5 +182,19 @@ func TestVerdictCountsCoredPickupRows(t *testing.T) {
 	v := checksVerdict(j.Checks)
 	if !strings.Contains(v, strconv.Itoa(air)+" of the winding in air, "+strconv.Itoa(with)+" of the pick-up figures computed from the core's") {
 		t.Errorf("search coil: %q", v)
+	}
+}
+
+// A tolerance the text restates reads as the verification table writes
+// tolerances (format.Tolerance): "within ±1 %", not "±1.0 %".
+func TestRestatedTolerancesInOneForm(t *testing.T) {
+	_, text := memoOf(t, "../examples/calibration-pair.md", true)
+	want := "(spacing = radius, within ±" + format.Tolerance(calc.HelmholtzTolerance) + ")"
+	if !strings.Contains(text, want) {
+		t.Errorf("calibration pair: no %q", want)
+	}
+	_, text = memoOf(t, "../testdata/figures/gradient-pair.md", true)
+	if want := "stays within ±" + format.Tolerance(calc.GradientTolerance) + " of the centre value"; !strings.Contains(text, want) {
+		t.Errorf("gradient pair: no %q", want)
 	}
 }
