@@ -77,12 +77,12 @@ func kindFindings(d calc.Design, r calc.Results, kinds []CoilKinds, in []Finding
 // model's demagnetising factor at a vanishing susceptibility against the
 // exact uniform-magnetisation factor of the cylinder (Chen, Brug &
 // Goldfarb 1991, from Nagaoka's coefficient); the cylinder's factor for a
-// long rod against the prolate spheroid of the same ratio (Osborn 1945),
-// which it approaches as the ratio grows; and reciprocity: the core's
-// moment per ampere of winding current equals the core's share of the
-// effective area (flux linkage per tesla of a uniform field) — no row, as
-// both are one expression of the slice model. A pick-up coil adds the
-// rows of receiverChecks.
+// long rod as a bracket: the prolate spheroid of the same ratio (Osborn
+// 1945) between the rod's fluxmetric and magnetometric factors. The
+// core's reciprocity (its moment per ampere of winding current equals its
+// share of the effective area) has no row: both are one expression of the
+// slice model, so the comparison would repeat it. A pick-up coil adds the
+// rows of receiverChecks, air-cored or not.
 func kindChecks(d calc.Design, r calc.Results, kinds []CoilKinds) []Check {
 	out := coreChecks(d, r, kinds)
 	for i := range out {
