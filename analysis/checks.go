@@ -28,9 +28,20 @@ type Check struct {
 	// Core is set for a check of a core's model (kindChecks); the others
 	// check the windings, a cored coil's in air.
 	Core bool
+	// Bracket is set for a check that an independent figure (Expected)
+	// lies strictly between two of the design's (Low < Expected < High),
+	// not within a tolerance of one: Pass says whether the ordering holds.
+	// Value, RelDiff and Tolerance keep their meaning for calc --json
+	// (Value is High; Tolerance the bracket's width from it).
+	Bracket   bool
+	Low, High float64
 }
 
+// newCheck compares v with e. A tolerance is rounded up to two
+// significant figures before it is applied (format.CeilSig), so that the
+// figure the memo prints (format.Tolerance) is the one the verdict used.
 func newCheck(coil, name, method, ref string, v, e float64, unit string, tol float64) Check {
+	tol = format.CeilSig(tol, 2)
 	rd := math.Abs(v-e) / math.Abs(e)
 	if e == 0 && v == 0 {
 		rd = 0

@@ -221,26 +221,30 @@ func Margin(v float64, unit string) string {
 
 // RelMargin writes the margin of a requirement as a fraction m of the
 // required value (positive: met with room to spare), the one form every
-// table of margins uses: a signed percent to three figures, "+12.5 %",
-// "−3.10 %", "+0.164 %";
-// a margin of less than 0.05 % in size "< 0.05 %" (met) or "> −0.05 %"
-// (missed), never a bare "0.0 %"; and a value that exceeds an at-least
-// requirement tenfold or more as the ratio of the two, "73-fold",
-// since a percentage of thousands says nothing more.
+// table of margins uses: a signed percent to three significant figures,
+// "+12.5 %", "−3.10 %", "+0.164 %", "+0.0500 %", whatever its size down
+// to 0.001 %; a margin smaller than that in size "< +0.001 %" (met) or
+// "> −0.001 %" (missed), so that the sign is never lost and never a bare
+// "0.0 %"; none at all, exactly at the requirement, "0 %"; and a value
+// that exceeds an at-least requirement tenfold or more as the ratio of
+// the two, "73-fold", since a percentage of thousands says nothing more.
 func RelMargin(m float64) string {
-	switch p := 100 * m; {
+	p := 100 * m
+	switch {
 	case math.IsNaN(m):
 		return "n/a"
 	case math.IsInf(m, 1):
 		return "∞"
 	case m >= 9:
 		return Sig(1+m, 2) + "-fold"
-	case p >= 0 && p < 0.05:
-		return "< 0.05 %"
-	case p < 0 && p > -0.05:
-		return "> −0.05 %"
+	case m == 0:
+		return "0 %"
+	case p > 0 && p < 1e-3:
+		return "< +0.001 %"
+	case p < 0 && p > -1e-3:
+		return "> −0.001 %"
 	}
-	s := Sig(100*m, 3) + " %"
+	s := Sig(p, 3) + " %"
 	if m > 0 {
 		s = "+" + s
 	}
@@ -546,23 +550,87 @@ func Digits(n int) string {
 	return s
 }
 
-// Tolerance is a relative tolerance as it was set, to one significant
-// figure: "1 %", "0.2 %", "0.001 %"; one below 10⁻⁵ reads "1 part in
-// 10¹²" (a power of ten) or "3×10⁻⁸ relative", never a percentage with
-// an exponent, nor "< 0.001 %" as a difference below the printed
-// resolution is.
+// Tolerance is a relative tolerance as a percentage, the one form every
+// tolerance of the verification takes: to at most two significant figures
+// with no trailing zeros, "1 %", "0.2 %", "0.017 %", "0.001 %", and one
+// below 0.001 % as a power of ten, "10⁻⁶ %" or "4×10⁻⁶ %". A tolerance
+// the checks compute is rounded up to two figures before it is applied
+// (analysis.newCheck), so the figure printed is the one applied.
 func Tolerance(v float64) string {
 	switch {
 	case math.IsNaN(v):
 		return "n/a"
 	case !(v > 0):
-		return Percent(v)
-	case v >= 1e-5:
-		return Sig(100*v, 1) + " %"
+		return "0 %"
 	}
-	n := -math.Log10(v)
-	if r := math.Round(n); math.Abs(n-r) < 1e-9 {
-		return "1 part in 10" + superscript(strconv.Itoa(int(r)))
+	return percentText(RoundSig(100*v, 2)) + " %"
+}
+
+// RoundSig rounds v to sig significant figures.
+func RoundSig(v float64, sig int) float64 {
+	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
+		return v
 	}
-	return Sci(v, 1) + " relative"
+	p := math.Pow(10, float64(sig-1-int(math.Floor(math.Log10(math.Abs(v))))))
+	return math.Round(v*p) / p
+}
+
+// CeilSig rounds v > 0 up to sig significant figures (a value that has
+// them already, to within 10⁻⁹ of itself, is kept).
+func CeilSig(v float64, sig int) float64 {
+	if !(v > 0) || math.IsInf(v, 0) {
+		return v
+	}
+	p := math.Pow(10, float64(sig-1-int(math.Floor(math.Log10(v)))))
+	if r := math.Round(v * p); math.Abs(v*p-r) <= 1e-9*r {
+		return r / p
+	}
+	return math.Ceil(v*p) / p
+}
+
+// percentText writes a positive percentage figure without its sign: plain
+// decimals from 0.001 up ("0.017", "12.5"), a power of ten below
+// ("10⁻⁶", "4.2×10⁻⁶").
+func percentText(p float64) string {
+	if p >= 1e-3 {
+		return strconv.FormatFloat(p, 'f', -1, 64)
+	}
+	s := strconv.FormatFloat(p, 'e', -1, 64)
+	mant, exp, _ := strings.Cut(s, "e")
+	e, _ := strconv.Atoi(exp)
+	if mant == "1" {
+		return "10" + superscript(strconv.Itoa(e))
+	}
+	return mant + "×10" + superscript(strconv.Itoa(e))
+}
+
+// CheckDiff writes a check's relative difference d against its relative
+// tolerance tol so that the verdict can be read from the two figures: at a
+// resolution at least ten times finer than the tolerance, and at least
+// two significant figures ("0.48 %" against 0.5 %, "12.0 %" against
+// 1 %); a difference below that resolution, none included, as "< x" with
+// x the resolution — 0.001 % at most, a tenth of the tolerance or less
+// ("< 0.001 %" against 1 %, "< 10⁻⁴ %" against 0.001 %, "< 10⁻⁷ %"
+// against 10⁻⁶ %). Never "0 %" nor a signed zero.
+func CheckDiff(d, tol float64) string {
+	if math.IsNaN(d) || math.IsNaN(tol) || !(tol > 0) {
+		return Percent(d)
+	}
+	d, T := math.Abs(d)*100, RoundSig(100*tol, 2)
+	res := math.Pow(10, math.Floor(math.Log10(T))-1) // ≤ T/10
+	floor := math.Min(res, 1e-3)
+	if d < floor {
+		return "< " + percentText(floor) + " %"
+	}
+	if math.IsInf(d, 0) {
+		return "∞ %"
+	}
+	// significant figures enough for the resolution, two at least
+	sig := max(2, int(math.Floor(math.Log10(d)))-int(math.Round(math.Log10(res)))+1)
+	r := RoundSig(d, sig)
+	if r >= 1e-3 {
+		dec := max(0, sig-1-int(math.Floor(math.Log10(r))))
+		return strconv.FormatFloat(r, 'f', dec, 64) + " %"
+	}
+	return Sci(r, sig) + " %"
 }

@@ -1,6 +1,9 @@
 package format
 
-import "testing"
+import (
+	"math"
+	"testing"
+)
 
 func TestPercentAndMargin(t *testing.T) {
 	for _, c := range []struct{ got, want string }{
@@ -140,7 +143,12 @@ func TestRelMargin(t *testing.T) {
 		m    float64
 		want string
 	}{
-		{0.125, "+12.5 %"}, {-0.031, "−3.10 %"}, {0.00164, "+0.164 %"}, {0.0004, "< 0.05 %"}, {0, "< 0.05 %"}, {-0.0004, "> −0.05 %"},
+		{0.125, "+12.5 %"}, {-0.031, "−3.10 %"}, {0.00164, "+0.164 %"}, {0.0004, "+0.0400 %"}, {-0.0004, "−0.0400 %"},
+		// the old threshold of 0.05 %: a margin there is a margin of 0.05 %
+		{0.0005, "+0.0500 %"}, {0.00049999, "+0.0500 %"}, {0.0005000001, "+0.0500 %"}, {-0.0005, "−0.0500 %"},
+		// the floor, 0.001 %, on either side and at it
+		{1e-5, "+0.00100 %"}, {-1e-5, "−0.00100 %"}, {0.99e-5, "< +0.001 %"}, {-0.99e-5, "> −0.001 %"},
+		{1e-15, "< +0.001 %"}, {-1e-15, "> −0.001 %"}, {0, "0 %"},
 		{1.71, "+171 %"}, {8.99, "+899 %"}, {71.736, "73-fold"}, {9, "10-fold"}, {4.3e8, "4.3×10⁸-fold"},
 	} {
 		if got := RelMargin(c.m); got != c.want {
@@ -169,10 +177,41 @@ func TestTolerance(t *testing.T) {
 		v    float64
 		want string
 	}{
-		{0.01, "1 %"}, {0.002, "0.2 %"}, {1e-5, "0.001 %"}, {1e-8, "1 part in 10⁸"}, {1e-12, "1 part in 10¹²"}, {3e-8, "3×10⁻⁸ relative"}, {0, "0 %"},
+		{0.01, "1 %"}, {0.002, "0.2 %"}, {1e-5, "0.001 %"}, {1e-8, "10⁻⁶ %"}, {1e-12, "10⁻¹⁰ %"}, {3e-8, "3×10⁻⁶ %"}, {0, "0 %"},
+		{0.00018, "0.018 %"}, {0.0001715, "0.017 %"}, {0.3, "30 %"}, {0.02, "2 %"},
 	} {
 		if got := Tolerance(c.v); got != c.want {
 			t.Errorf("Tolerance(%g) = %q, want %q", c.v, got, c.want)
+		}
+	}
+}
+
+// A check's difference is printed at a resolution at least ten times
+// finer than its tolerance, or as "< x" with x a tenth of the tolerance or
+// less; never "0 %".
+func TestCheckDiff(t *testing.T) {
+	for _, c := range []struct {
+		d, tol float64
+		want   string
+	}{
+		{0, 0.01, "< 0.001 %"}, {2.6e-7, 1e-5, "< 10⁻⁴ %"}, {2.6e-16, 1e-8, "< 10⁻⁷ %"},
+		{1.4e-5, 0.00018, "0.0014 %"}, {0.0048, 0.005, "0.48 %"}, {0.12, 0.01, "12.0 %"},
+		{5.2e-5, 0.01, "0.0052 %"}, {3.2e-9, 1e-8, "3.2×10⁻⁷ %"}, {1.06e-5, 0.01, "0.0011 %"},
+		{0.17, 0.3, "17 %"}, {-2e-4, 0.002, "0.020 %"},
+	} {
+		if got := CheckDiff(c.d, c.tol); got != c.want {
+			t.Errorf("CheckDiff(%g, %g) = %q, want %q", c.d, c.tol, got, c.want)
+		}
+	}
+}
+
+// CeilSig rounds up to two figures and keeps a value that has them.
+func TestCeilSig(t *testing.T) {
+	for _, c := range []struct{ v, want float64 }{
+		{0.0001715148888888889, 0.00018}, {0.01, 0.01}, {1e-5, 1e-5}, {0.002, 0.002}, {1.0000000001e-8, 1e-8}, {0.31, 0.31}, {0.3100001, 0.32},
+	} {
+		if got := CeilSig(c.v, 2); math.Abs(got-c.want) > 1e-15*c.want {
+			t.Errorf("CeilSig(%g, 2) = %g, want %g", c.v, got, c.want)
 		}
 	}
 }

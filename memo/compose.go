@@ -294,10 +294,18 @@ func checksVerdict(ks []analysis.Check) string {
 	}
 	model := "the core's model (" + strings.Join(what, ", ") + ")"
 	var parts []string
-	if w := n - core; w > 0 {
+	// a pick-up coil's rows of the figures computed from the core's
+	// inductance and effective area (analysis.receiverChecks)
+	withCore := 0
+	for _, k := range ks {
+		if !k.Core && strings.Contains(k.Name, "with the core's") {
+			withCore++
+		}
+	}
+	if w := n - core - withCore; w > 0 {
 		coils := map[string]bool{}
 		for _, k := range ks {
-			if !k.Core {
+			if !k.Core && !strings.Contains(k.Name, "with the core's") {
 				coils[k.Coil] = true
 			}
 		}
@@ -307,8 +315,11 @@ func checksVerdict(ks []analysis.Check) string {
 		}
 		parts = append(parts, format.Digits(w)+" of the "+windings+" in air")
 	}
+	if withCore > 0 {
+		parts = append(parts, format.Digits(withCore)+" of the pick-up figures computed from the core's inductance and effective area")
+	}
 	parts = append(parts, format.Digits(core)+" of "+model)
-	cover := strings.Join(parts, " and ")
+	cover := joinAnd(parts)
 	if n == 1 {
 		cover = "it is of " + model
 	}

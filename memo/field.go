@@ -10,6 +10,7 @@ import (
 	"coilmemo/calc"
 	"coilmemo/doc"
 	"coilmemo/figures"
+	"coilmemo/format"
 	"coilmemo/templates"
 
 	"gonum.org/v1/plot/vg"
@@ -601,13 +602,13 @@ func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult, cs *analysis.Coi
 	if math.Abs(R/(co.MeanDiameter/2)-1) > 1e-4 {
 		rel += fmt.Sprintf(" of the turns as laid (the stated mean radius is %s)", Eng(co.MeanDiameter/2, "m", 4))
 	}
-	pct := Sig(100*calc.HelmholtzTolerance, 2)
+	pct := format.Tolerance(calc.HelmholtzTolerance) // the one form of a tolerance, as the verification table
 	if !co.Opposing {
 		var cond string
 		if pr.Helmholtz {
-			cond = fmt.Sprintf("; the Helmholtz condition (spacing = radius, within ±%s %%) is met. For thin coils this spacing cancels the second derivative of the axial field at the centre, which makes the field there as flat as two coils can make it.", pct)
+			cond = fmt.Sprintf("; the Helmholtz condition (spacing = radius, within ±%s) is met. For thin coils this spacing cancels the second derivative of the axial field at the centre, which makes the field there as flat as two coils can make it.", pct)
 		} else {
-			cond = fmt.Sprintf("; the Helmholtz condition (spacing = radius, within ±%s %%) is not met: the Helmholtz spacing for this radius would be %s.", pct, Eng(R, "m", 4))
+			cond = fmt.Sprintf("; the Helmholtz condition (spacing = radius, within ±%s) is not met: the Helmholtz spacing for this radius would be %s.", pct, Eng(R, "m", 4))
 		}
 		c.para(rel + cond)
 		c.para(fmt.Sprintf("At the centre of the pair the flux density is %s along the axis. The table gives how far from the centre the field stays within ±1 %% and ±0.1 %% of that value (|B − B0| ≤ tol · |B0|), along the axis and radially in the mid-plane.",
@@ -653,13 +654,13 @@ func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult, cs *analysis.Coi
 	}
 	maxwell := ""
 	if pr.Maxwell {
-		maxwell = fmt.Sprintf(" The spacing is √3 times the mean radius (within ±%s %%): for thin coils this cancels the cubic term of the axial field at the centre, which makes the gradient as uniform as two coils can make it.", pct)
+		maxwell = fmt.Sprintf(" The spacing is √3 times the mean radius (within ±%s): for thin coils this cancels the cubic term of the axial field at the centre, which makes the gradient as uniform as two coils can make it.", pct)
 	}
 	c.para(rel + ". The currents oppose: the field vanishes at the centre and grows linearly away from it, which makes the pair a gradient coil." + maxwell)
 	G := pr.Gradient
 	_, as := axialSymbol(co)
-	c.para(fmt.Sprintf("The axial gradient at the centre is %s = %s (the radial gradient is −½ of it, since ∇·B = 0). The local gradient stays within ±%s %% of the centre value up to %s from the centre along the axis and %s radially in the mid-plane: inside that region B ≈ G·(%s %s − ρ/2 ρ̂) with G the centre gradient and ρ the distance from the axis.",
-		gradientSymbol(co), Eng(G, "T/m", 4), Sig(100*calc.GradientTolerance, 2), Eng(pr.LinearAxial, "m", 3), Eng(pr.LinearRadial, "m", 3), as, unitVector[as]))
+	c.para(fmt.Sprintf("The axial gradient at the centre is %s = %s (the radial gradient is −½ of it, since ∇·B = 0). The local gradient stays within ±%s of the centre value up to %s from the centre along the axis and %s radially in the mid-plane: inside that region B ≈ G·(%s %s − ρ/2 ρ̂) with G the centre gradient and ρ the distance from the axis.",
+		gradientSymbol(co), Eng(G, "T/m", 4), format.Tolerance(calc.GradientTolerance), Eng(pr.LinearAxial, "m", 3), Eng(pr.LinearRadial, "m", 3), as, unitVector[as]))
 	c.add(doc.Table{Caption: fmt.Sprintf("Gradient of pair %q and its linear region", co.Name),
 		Header: []string{"Quantity", "Value"},
 		Rows: [][]doc.Cell{

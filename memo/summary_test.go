@@ -203,7 +203,7 @@ func TestChecksVerdictSaysWhatIsChecked(t *testing.T) {
 	if core == 0 || core == len(ks) {
 		t.Fatalf("torque rod: %d core checks of %d", core, len(ks))
 	}
-	want := fmt.Sprintf("All %d verification checks agree within tolerance: %d of the winding in air and %d of the core's model (demagnetising factor, reciprocity). The figures with the core rest on that model; no check recomputes them by an independent method.",
+	want := fmt.Sprintf("All %d verification checks agree within tolerance: %d of the winding in air and %d of the core's model (demagnetising factor). The figures with the core rest on that model; no check recomputes them by an independent method.",
 		len(ks), len(ks)-core, core)
 	if !strings.Contains(text, want) {
 		t.Errorf("torque rod: page 1 says\n%s\nwant\n%s", text, want)

@@ -16,12 +16,11 @@ func (c *composer) verification() {
 	c.heading(1, "Verification")
 	c.para(templates.Text("verification", nil))
 	if coreChecks(c.j.Checks) > 0 {
-		recip := ""
-		if slices.ContainsFunc(c.j.Checks, func(k analysis.Check) bool { return k.Core && strings.Contains(k.Name, "reciprocity") }) {
-			recip = " and its reciprocity (the core's moment per ampere against its share of the effective area)"
+		withCore := ""
+		if slices.ContainsFunc(c.j.Checks, func(k analysis.Check) bool { return !k.Core && strings.Contains(k.Name, "with the core's") }) {
+			withCore = " (a pick-up coil's rows marked with the core's inductance and effective area check the figures computed from them, not them)"
 		}
-		c.para("A cored coil's rows of its winding are those of the winding in air. The rows of its core check the core's model: its demagnetising factor against closed forms (the uniform cylinder in the limit of a vanishing susceptibility and, for a long rod, the prolate spheroid of the same ratio)" + recip +
-			". The figures with the core at the operating point rest on that model; no row recomputes them by an independent method.")
+		c.para("A cored coil's rows of its winding are those of the winding in air. The rows of its core check the core's model: its demagnetising factor against closed forms (the uniform cylinder in the limit of a vanishing susceptibility and, for a long rod, the prolate spheroid of the same ratio, which must lie between the rod's fluxmetric and magnetometric factors). The figures with the core at the operating point rest on that model; no row recomputes them by an independent method" + withCore + ".")
 	}
 	if len(c.j.Checks) == 0 {
 		c.para("No independent check applies to this design's forms.")
@@ -74,8 +73,14 @@ func checkGroups(ks []analysis.Check) []checkGroup {
 		row := []doc.Cell{
 			{Text: k.Name}, {Text: k.Method + " → " + Eng(k.Value, k.Unit, 6)},
 			{Text: k.Reference + " → " + Eng(k.Expected, k.Unit, 6)},
-			{Text: Percent(k.RelDiff)}, {Text: format.Tolerance(k.Tolerance)},
+			{Text: format.CheckDiff(k.RelDiff, k.Tolerance)}, {Text: format.Tolerance(k.Tolerance)},
 			{Text: st.String(), Status: st, Strong: true},
+		}
+		if k.Bracket {
+			// an ordering, not a difference against a tolerance
+			row[1].Text = k.Method + " → " + Eng(k.Low, k.Unit, 6) + " … " + Eng(k.High, k.Unit, 6)
+			row[3].Text = "in range"
+			row[4].Text = "bracket"
 		}
 		key := "\x00design"
 		if k.Coil != "" {
