@@ -128,10 +128,26 @@ func evaluateCoil(c Coil, cond Conditions) CoilResult {
 // inductance L at its operating point op: SwitchingWorst with the worst
 // current the switch may open the switch-on current (for a voltage drive
 // the cold one, the winding then at the cold resistance).
+//
+// An a.c. drive (a frequency, r.m.s. current and voltage) may be
+// interrupted at the peak of its sine: the currents are then √2 times
+// the r.m.s. ones, and the supply is the drive's peak voltage √2·I·|Z|,
+// |Z| = √(R_ac² + (2πfL)²) (√2 times the stated voltage under voltage
+// drive), so the stored energy ½ L I_pk² and the spike L·I_pk/t_off are
+// the worst the switch can meet.
 func SwitchingFor(c Coil, cond Conditions, L float64, op Operating) SwitchResult {
 	Rcold := ResistanceAt(op.R20, op.Thermal.Alpha20, ColdTemperature(cond))
 	if c.Drive == CurrentDrive {
 		Rcold = op.RHot
 	}
-	return SwitchingWorst(L, op.RHot, Rcold, op.Current, op.SwitchOnCurrent, op.Voltage, c.SwitchOff, c.DriverRating, c.Drive == VoltageDrive)
+	I, Iw, V := op.Current, op.SwitchOnCurrent, op.Voltage
+	if c.Frequency > 0 && !math.IsInf(c.Frequency, 0) {
+		I, Iw = math.Sqrt2*I, math.Sqrt2*Iw
+		if c.Drive == VoltageDrive {
+			V = math.Sqrt2 * c.Voltage
+		} else {
+			V = I * math.Hypot(op.RHot*op.Thermal.acFactor(), 2*math.Pi*c.Frequency*L)
+		}
+	}
+	return SwitchingWorst(L, op.RHot, Rcold, I, Iw, V, c.SwitchOff, c.DriverRating, c.Drive == VoltageDrive)
 }

@@ -37,6 +37,9 @@ type SwitchResult struct {
 	TimeConstant float64 // s, τ = L/R at the hot resistance
 	RiseTime     float64 // s, t₉₀ = τ ln 10 after a voltage step
 	Energy       float64 // J, ½ L I²
+	// Current is I, A, the current the switch opens at the operating
+	// point (an a.c. drive's peak, SwitchingFor).
+	Current float64
 	// Supply is the supply voltage taken, V: the stated voltage under
 	// voltage drive, I·R at the hot resistance under current drive (the
 	// least compliance a current source needs).
@@ -122,7 +125,7 @@ func SwitchingWorst(L, R, Rw, I, Iw, V, tOff, rating float64, stated bool) Switc
 	if !(Rw >= 0) || math.IsInf(Rw, 0) {
 		Rw = R
 	}
-	s.WorstCurrent = Iw
+	s.WorstCurrent, s.Current = Iw, I
 	s.Energy = L * I * I / 2
 	s.EnergyWorst = L * Iw * Iw / 2
 	if R > 0 && !math.IsInf(R, 0) {

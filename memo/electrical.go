@@ -223,6 +223,11 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, fo
 	if math.IsNaN(s.TimeConstant) {
 		return nil
 	}
+	full := "at full current"
+	if ac := co.Frequency > 0; ac {
+		// an a.c. drive may be cut at the peak of its sine (calc.SwitchingFor)
+		I, full = Q(s.Current, "A", 4), "at the peak of the a.c. current, √2 × the r.m.s. value"
+	}
 	supply := "the supply Vₛ (the stated supply voltage)"
 	if co.Drive == calc.CurrentDrive {
 		supply = "the voltage Vₛ the current source must deliver across the coil (I·R, its least compliance voltage)"
@@ -232,10 +237,10 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, fo
 			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, L, R), Result: Q(s.TimeConstant, "s", 3)},
 		Step{What: riseWhat(co), Symbolic: `t_{90} = \tau \ln 10`,
 			Numbers: fmt.Sprintf(`%s \cdot \ln 10`, Q(s.TimeConstant, "s", 3)), Result: Q(s.RiseTime, "s", 3)},
-		Step{What: "Magnetic energy stored at full current", Symbolic: `W = \frac{1}{2} L I^2`,
+		Step{What: "Magnetic energy stored " + full, Symbolic: `W = \frac{1}{2} L I^2`,
 			Numbers: fmt.Sprintf(`\frac{1}{2} \cdot %s \cdot %s^2`, L, Paren(I)), Result: Q(s.Energy, "J", 3)})
 	if s.SwitchOff > 0 {
-		if cold := math.Abs(s.WorstCurrent); cold > math.Abs(cr.Current) {
+		if cold := math.Abs(s.WorstCurrent); cold > math.Abs(s.Current) {
 			// A voltage-driven coil switched off while still cold opens its
 			// larger switch-on current: the worst spike.
 			steps = append(steps, Step{What: fmt.Sprintf("Voltage across a switch that opens in %s with no suppression, at the cold switch-on current (the worst case; at the hot current it is %s): the coil's L·di/dt on top of %s", Eng(s.SwitchOff, "s", 3), Eng(s.Spike, "V", 3), supply),
@@ -251,6 +256,9 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, fo
 	}
 	if cs != nil {
 		steps = append(steps, ringingSteps(co, cr, cs)...)
+	}
+	if co.Frequency > 0 {
+		return steps // a diode would rectify an a.c. drive: the caution words its suppression
 	}
 	steps = append(steps, Step{What: "Freewheeling diode across the coil: the switch sees about " + sourceOf(co) + "; the current decays through the coil's own resistance to 10 %",
 		Symbolic: `t_{10} = \frac{L}{R} \ln 10`, Numbers: fmt.Sprintf(`%s \cdot \ln 10`, Q(s.DiodeDecay, "s", 3)), Result: Q(s.DiodeTime10, "s", 3)})
@@ -310,7 +318,7 @@ func ringingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []St
 	}
 	s := cr.Switch
 	Ic, at := `I`, "½ L I² at full current"
-	if math.Abs(s.WorstCurrent) > math.Abs(cr.Current) {
+	if math.Abs(s.WorstCurrent) > math.Abs(s.Current) {
 		Ic, at = `I_c`, "½ L I² at the cold switch-on current"
 	}
 	steps := capacitanceSteps(co, cs.Kinds.Capacitance, cs.Envelope.Round) // memo/receiver.go
@@ -614,9 +622,17 @@ func switchOffCaution(f analysis.Finding, co calc.Coil, cr calc.CoilResult, p an
 		resistor = fmt.Sprintf("For a faster release, a resistor in series with the diode — %s; the E12 value %s is chosen — holds the switch at %s, within %s, and shortens the decay to %s.",
 			resistorBound(s, fo), Eng(s.Resistor, "Ω", 2), switchHeldAt(s, fo), Eng(s.Clamp, "V", 3), Eng(s.ResistorTime10, "s", 3))
 	}
+	energy := storedText(s)
+	if co.Frequency > 0 {
+		// an a.c. drive: cut at the peak of its sine (calc.SwitchingFor);
+		// a diode across the coil would conduct every other half-cycle
+		energy = Eng(s.Energy, "J", 3) + " in its magnetic field at the peak of its a.c. current (" + Eng(s.Current, "A", 3) + ", √2 × the r.m.s. value), where the drive may be interrupted"
+		diode = fmt.Sprintf("A freewheeling diode would conduct on every other half-cycle and short the drive: across an a.c. coil fit a bidirectional suppressor instead — a pair of TVS diodes or a varistor that clamps above the drive's peak of %s and below the driver's rating, or an RC snubber — sized for that energy.", Eng(s.Supply, "V", 3))
+		resistor = ""
+	}
 	return doc.Callout{Severity: doc.Caution, Title: "Switch-off voltage, " + name,
 		Spans: []doc.Span{{Text: templates.Text("caution-inductive", map[string]string{
-			"Energy": storedText(s), "Spike": spike, "Diode": diode, "Resistor": resistor})}}}
+			"Energy": energy, "Spike": spike, "Diode": diode, "Resistor": resistor})}}}
 }
 
 // resistorBound words the most the series resistor may be: the nominal
