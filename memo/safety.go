@@ -20,6 +20,7 @@ func Cautions(j *analysis.Study) []doc.Callout {
 	d := j.Spec.Design
 	r := j.Results
 	var out []doc.Callout
+	var rodEnds []analysis.Finding // worded in the implant caution where there is one
 	for _, f := range j.Safety.Findings {
 		co, cr := d.Coils[f.Coil], r.Coils[f.Coil]
 		name := fmt.Sprintf("coil %q", co.Name)
@@ -40,25 +41,36 @@ func Cautions(j *analysis.Study) []doc.Callout {
 				Spans: []doc.Span{{Text: templates.Text(hotTemplate(j), map[string]string{"Temperature": hotSurfaceWords(j, f)})}}})
 		case analysis.HighDensity:
 			out = append(out, doc.Callout{Severity: doc.Note, Title: "Current density above common practice, " + name,
-				Spans: []doc.Span{{Text: templates.Text("caution-density", map[string]string{"Density": Eng(f.Value, "A/m²", 3),
+				Spans: []doc.Span{{Text: templates.Text("caution-density", map[string]string{"Density": Eng(f.Value, "A/m²", 3), "Covered": densityCover(j.Cooling),
 					"Temperature": hotText(cr, cr.Temperature)})}}})
 		case analysis.HazardousVoltage:
 			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Hazardous voltage, " + name,
 				Spans: []doc.Span{{Text: templates.Text("caution-voltage", map[string]string{"What": voltageWhat(co), "Voltage": Eng(f.Value, "V", 3)})}}})
 		case analysis.SwitchOffVoltage:
 			out = append(out, switchOffCaution(f, co, cr, j.Coils[f.Coil].SwitchOff, fittedOverOf(j, f.Coil), name))
+		case analysis.RodNearField:
+			rodEnds = append(rodEnds, f)
 		default:
 			out = append(out, kindCautions(j, f)...) // memo/core.go
 		}
 	}
 	if ir := j.Safety.Implant; ir.Searched {
 		if where, beyond := implantWhere(j); len(where) > 0 {
+			// the field at a rod's ends is the same hazard: its figure
+			// joins the region's description
+			for _, f := range rodEnds {
+				where = append(where, rodEndWords(j, f))
+			}
+			rodEnds = nil
 			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Field above 0.5 mT: implanted medical devices",
-				Spans: []doc.Span{{Text: templates.Text("caution-implant", map[string]string{"Where": strings.Join(where, ", "), "Beyond": beyond})}}})
+				Spans: []doc.Span{{Text: templates.Text("caution-implant", map[string]string{"Where": strings.Join(where, ", "), "Beyond": beyond, "Mark": implantMark(j.Cooling)})}}})
 		} else {
 			out = append(out, doc.Callout{Severity: doc.Note, Title: "Field near the winding",
 				Spans: []doc.Span{{Text: templates.Text("caution-implant-none", nil)}}})
 		}
+	}
+	for _, f := range rodEnds { // no implant caution to carry them
+		out = append(out, kindCautions(j, f)...)
 	}
 	out = mergeCautions(out)
 	general := templates.Paragraphs("caution-general", nil)
@@ -70,6 +82,39 @@ func Cautions(j *analysis.Study) []doc.Callout {
 		out = append(out, doc.Callout{Severity: doc.Note, Title: t, Spans: []doc.Span{{Text: p}}})
 	}
 	return out
+}
+
+// densityCover is the density caution's word on a covered coil
+// (enclosure = covered): the still-air rule is for a coil the air can
+// rise past; "" for any other.
+func densityCover(cool calc.Cooling) string {
+	if cool.Covered {
+		return " This coil lies under or behind a surface, where the air cannot rise past it: it sheds less heat than the coils the rule is drawn from."
+	}
+	return ""
+}
+
+// implantMark is the implant caution's instruction to mark the region,
+// worded for where the design says the coil is energised: under a
+// surface people touch (enclosure = covered), in vacuum (where no one is
+// near it, so in integration and test), or in air where it is tested and
+// installed.
+func implantMark(cool calc.Cooling) string {
+	switch {
+	case cool.Covered:
+		return "Mark the region on the surface that covers the coil and around it."
+	case cool.Vacuum:
+		return "The coil works in vacuum, away from people; mark the region wherever it is energised with people near it, in integration and test."
+	}
+	return "Mark the region wherever the coil is energised with people near it, in test and where it is installed."
+}
+
+// rodEndWords words a rod's near-field finding as part of the implant
+// caution's region: the flux density on the axis beyond the core's end.
+func rodEndWords(j *analysis.Study, f analysis.Finding) string {
+	co := j.Spec.Design.Coils[f.Coil]
+	return fmt.Sprintf("on the axis %s beyond each end face of the core of coil %q, where |B| = %s (the core gathers the field to its ends)",
+		Eng(analysis.RodEndPoint*co.Core.Diameter, "m", 2), co.Name, Eng(f.Value, "T", 3))
 }
 
 // hotTemplate is the hot-surface caution's wording: of the winding's own
