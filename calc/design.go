@@ -90,6 +90,11 @@ type Coil struct {
 
 	// Core is a soft-magnetic rod in the winding's bore (zero: air core).
 	Core Core
+	// UnmodelledCore names a ferromagnetic part that sits in the winding's
+	// bore in service but is not modelled (a plunger, an armature): the
+	// figures are the coil's without it ("": none stated). It enters no
+	// calculation.
+	UnmodelledCore string
 	// Receiver: the band over which a pick-up coil's noise is stated, Hz
 	// (zero: not given), and the capacitance of the cable and amplifier
 	// across its terminals, F.

@@ -160,3 +160,43 @@ func TestDensityCautionCovered(t *testing.T) {
 		}
 	}
 }
+
+// A part in the bore that the memo leaves out (unmodelled-core) makes
+// the switch-off and field cautions say their figures are lower bounds
+// for the assembly; without the key they say nothing of it.
+func TestUnmodelledCoreCautions(t *testing.T) {
+	j, _ := memoOf(t, "../examples/valve-actuator.md", true)
+	if got := j.Spec.Design.Coils[0].UnmodelledCore; got != "plunger" {
+		t.Fatalf("unmodelled-core read as %q", got)
+	}
+	seen := map[string]bool{}
+	for _, c := range Cautions(j) {
+		text := spanText(c.Spans)
+		for _, title := range []string{"Switch-off voltage", "Field above 0.5 mT"} {
+			if strings.HasPrefix(c.Title, title) {
+				seen[title] = true
+				if !strings.Contains(text, "plunger") || !strings.Contains(text, "lower bounds for the assembly") {
+					t.Errorf("%s: no lower-bound word on the plunger:\n%s", c.Title, text)
+				}
+			}
+		}
+	}
+	if len(seen) != 2 {
+		t.Errorf("cautions found: %v; want the switch-off and field cautions", seen)
+	}
+	for _, f := range designFiles(t) {
+		j, _ := memoOf(t, f, false)
+		if j == nil {
+			continue
+		}
+		any := false
+		for _, co := range j.Spec.Design.Coils {
+			any = any || co.UnmodelledCore != ""
+		}
+		for _, c := range Cautions(j) {
+			if !any && strings.Contains(spanText(c.Spans), "unmodelled-core") {
+				t.Errorf("%s: %s speaks of an unmodelled part the design does not name", filepath.Base(f), c.Title)
+			}
+		}
+	}
+}

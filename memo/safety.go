@@ -63,7 +63,7 @@ func Cautions(j *analysis.Study) []doc.Callout {
 			}
 			rodEnds = nil
 			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Field above 0.5 mT: implanted medical devices",
-				Spans: []doc.Span{{Text: templates.Text("caution-implant", map[string]string{"Where": strings.Join(where, ", "), "Beyond": beyond, "Mark": implantMark(j.Cooling)})}}})
+				Spans: []doc.Span{{Text: templates.Text("caution-implant", map[string]string{"Where": strings.Join(where, ", "), "Beyond": beyond, "Mark": implantMark(j.Cooling), "Unmodelled": unmodelledField(j)})}}})
 		} else {
 			out = append(out, doc.Callout{Severity: doc.Note, Title: "Field near the winding",
 				Spans: []doc.Span{{Text: templates.Text("caution-implant-none", nil)}}})
@@ -92,6 +92,23 @@ func densityCover(cool calc.Cooling) string {
 		return " This coil lies under or behind a surface, where the air cannot rise past it: it sheds less heat than the coils the rule is drawn from."
 	}
 	return ""
+}
+
+// unmodelledField is the implant caution's word on parts in the coils'
+// bores that the memo leaves out (unmodelled-core): they gather the field,
+// so the flux densities and the distances of the region are lower bounds
+// for the assembly with them. "" when no coil names one.
+func unmodelledField(j *analysis.Study) string {
+	var parts []string
+	for _, co := range j.Spec.Design.Coils {
+		if co.UnmodelledCore != "" {
+			parts = append(parts, fmt.Sprintf("the %s in the bore of coil %q", co.UnmodelledCore, co.Name))
+		}
+	}
+	if len(parts) == 0 {
+		return ""
+	}
+	return fmt.Sprintf(" The field is computed without %s, which is not modelled (unmodelled-core): a ferromagnetic part gathers the field, so the flux densities and distances above are lower bounds for the assembly with it.", joinAnd(parts))
 }
 
 // implantMark is the implant caution's instruction to mark the region,

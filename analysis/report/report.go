@@ -114,6 +114,9 @@ type CoilReport struct {
 	// Plane is a rectangle's field over its plane of interest (the
 	// test-plane key, else the probes' plane); absent for other coils.
 	Plane *PlaneReport `json:"plane,omitempty"`
+	// UnmodelledCore names the part in the bore the figures leave out
+	// (the unmodelled-core key); absent when none is stated.
+	UnmodelledCore string `json:"unmodelled_core,omitempty"`
 	CoilHeatSwitch
 	CoilKindsReport
 }
@@ -228,7 +231,7 @@ func Build(j *analysis.Study) Report {
 	for i, cr := range r.Coils {
 		co := d.Coils[i]
 		rep.Coils = append(rep.Coils, CoilReport{
-			Name: cr.Name, Form: analysis.FormName(co), Turns: co.Turns,
+			Name: cr.Name, Form: analysis.FormName(co), Turns: co.Turns, UnmodelledCore: co.UnmodelledCore,
 			Moment: Num(cr.Moment.Norm()), MomentVector: vec(cr.Moment),
 			Resistance20C: Num(cr.R20), ResistanceHot: Num(cr.RHot),
 			Current: Num(cr.Current), CurrentCold: Num(cr.ColdCurrent), Voltage: Num(cr.Voltage), Power: Num(cr.Power),
