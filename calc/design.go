@@ -155,6 +155,11 @@ type Conditions struct {
 	DesignAngle       float64
 	DesignAngleStated bool
 	Cooling           Cooling
+	// HandlingAmbient is the temperature of the surroundings in which
+	// people handle and touch the coil, K (0: not stated; the analysis
+	// then takes its default, analysis.HandlingFor). Only the hot-surface
+	// judgement uses it.
+	HandlingAmbient float64
 	// FieldGradient is a stated gradient of the background field, T/m: the
 	// rate of change of the field component along a moment, per metre along
 	// it (0: none).

@@ -200,3 +200,40 @@ func TestUnmodelledCoreCautions(t *testing.T) {
 		}
 	}
 }
+
+// The burn hazard is judged where people handle the coil, and the
+// caution says at which ambient; a torquer hot only at its orbit's worst
+// corner gets a note with that figure, not a caution.
+func TestHotSurfaceJudgedWhereHandled(t *testing.T) {
+	for _, f := range designFiles(t) {
+		j, _ := memoOf(t, f, false)
+		if j == nil {
+			continue
+		}
+		amb := Eng(Celsius(j.Safety.Handling.Ambient), "°C", 3)
+		for _, c := range Cautions(j) {
+			if strings.HasPrefix(c.Title, "Hot surface,") || strings.HasPrefix(c.Title, "Hot surface in service only") {
+				text := spanText(c.Spans)
+				if !strings.Contains(text, amb) {
+					t.Errorf("%s: %s does not say the ambient %s it is judged at:\n%s", filepath.Base(f), c.Title, amb, text)
+				}
+			}
+		}
+	}
+	j, _ := memoOf(t, "../examples/torque-coil.md", true)
+	service, _ := j.HottestSurface(0)
+	var note string
+	for _, c := range Cautions(j) {
+		if strings.HasPrefix(c.Title, "Hot surface,") {
+			t.Errorf("torque coil: a hot-surface caution, though handled at %s: %s", Eng(Celsius(j.Safety.Handling.Ambient), "°C", 3), spanText(c.Spans))
+		}
+		if strings.HasPrefix(c.Title, "Hot surface in service only") {
+			note = spanText(c.Spans)
+		}
+	}
+	for _, want := range []string{Eng(Celsius(service), "°C", 3), "in a room at 25.0 °C", Eng(Celsius(j.Safety.Handling.Surface[0].Max), "°C", 3)} {
+		if !strings.Contains(note, want) {
+			t.Errorf("torque coil: the in-service note lacks %q:\n%s", want, note)
+		}
+	}
+}

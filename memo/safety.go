@@ -2,6 +2,7 @@ package memo
 
 import (
 	"fmt"
+	"math"
 	"slices"
 	"sort"
 	"strings"
@@ -38,7 +39,10 @@ func Cautions(j *analysis.Study) []doc.Callout {
 				Spans: []doc.Span{{Text: leftOnText(co, cr, j.Coils[f.Coil].Heat.Continuous)}}})
 		case analysis.HotSurfaceFound:
 			out = append(out, doc.Callout{Severity: doc.Caution, Title: "Hot surface, " + name,
-				Spans: []doc.Span{{Text: templates.Text(hotTemplate(j), map[string]string{"Temperature": hotSurfaceWords(j, f)})}}})
+				Spans: []doc.Span{{Text: templates.Text(hotTemplate(j), map[string]string{"Temperature": hotSurfaceWords(j, f), "Where": handlingWhere(j, f)})}}})
+		case analysis.HotInService:
+			out = append(out, doc.Callout{Severity: doc.Note, Title: "Hot surface in service only, " + name,
+				Spans: []doc.Span{{Text: hotInServiceText(j, f)}}})
 		case analysis.HighDensity:
 			out = append(out, doc.Callout{Severity: doc.Note, Title: "Current density above common practice, " + name,
 				Spans: []doc.Span{{Text: templates.Text("caution-density", map[string]string{"Density": Eng(f.Value, "A/m²", 3), "Covered": densityCover(j.Cooling),
@@ -144,18 +148,100 @@ func hotTemplate(j *analysis.Study) string {
 	return "caution-hot"
 }
 
-// hotSurfaceWords words the hottest surface of a hot-surface finding:
-// the temperature, over the on/off cycle where that gives it, and at the
-// corner of the tolerances where one does, with the nominal figure.
+// hotSurfaceWords words the hottest surface of a hot-surface finding
+// where people handle the coil (analysis.Handling): the temperature, over
+// the on/off cycle where that gives it, and at the corner of the
+// tolerances where one does, with the nominal figure.
 func hotSurfaceWords(j *analysis.Study, f analysis.Finding) string {
 	s := Eng(Celsius(f.Value), "°C", 3)
 	if f.Cycle {
 		s += " at the peak of its on/off cycle"
 	}
 	if wc := j.WorstCase; f.AtCorner && wc != nil {
-		s += fmt.Sprintf(" at corner %s of the tolerances (%s), against %s at nominal", cornerCode(wc, f.Corner), wc.CornerName(f.Corner), Eng(Celsius(f.Nominal), "°C", 3))
+		s += " at " + handlingCorner(j, f.Corner) + ", against " + Eng(Celsius(f.Nominal), "°C", 3) + " at nominal"
 	}
 	return s
+}
+
+// handlingCorner names corner h of the tolerances as the hot surface
+// is judged at it: by its code and values, or, with the ambient held at
+// the handling ambient, by the values of the other tolerances.
+func handlingCorner(j *analysis.Study, h int) string {
+	wc := j.WorstCase
+	if j.Safety.Handling.AmbientHeld {
+		return fmt.Sprintf("corner %s of the other tolerances", wc.CornerNameWithout(h, "ambient"))
+	}
+	return fmt.Sprintf("corner %s of the tolerances (%s)", cornerCode(wc, h), wc.CornerName(h))
+}
+
+// handlingWhere says at which ambient the hot surface was judged
+// (analysis.Handling) and, where the coil runs hotter where it works, that
+// figure, which the insulation meets.
+func handlingWhere(j *analysis.Study, f analysis.Finding) string {
+	hd := j.Safety.Handling
+	amb := Eng(Celsius(hd.Ambient), "°C", 3)
+	var s string
+	switch {
+	case hd.Service && j.WorstCase != nil && hasAmbientTolerance(j):
+		s = "It is judged where the coil works, as people touch it there: at its ambient of " + amb + " and over the tolerances' ambient range."
+	case hd.Service:
+		s = "It is judged where the coil works, as people touch it there: at its ambient of " + amb + "."
+	case hd.Stated:
+		s = "It is judged where people handle the coil, at the handling ambient of " + amb + " (handling-ambient)" + heldWords(hd) + "."
+	default:
+		s = "It is judged where people handle the coil, in a room at " + amb + heldWords(hd) + ": the coil works in vacuum, where no one touches it. The cooling is kept as in vacuum, radiation alone, which in air, with convection besides, only overstates the surface."
+	}
+	if !hd.Service && f.Service > f.Value && !math.IsNaN(f.Service) {
+		s += " Where it works the surface reaches " + serviceSurfaceWords(j, f) + "; no one touches it there."
+	}
+	return " " + s
+}
+
+// heldWords says the ambient tolerance is not applied where the coil is
+// handled; "" without one.
+func heldWords(hd analysis.Handling) string {
+	if hd.AmbientHeld {
+		return ", the ambient tolerance, which describes where the coil works, not applied"
+	}
+	return ""
+}
+
+// serviceSurfaceWords words the hottest surface where the coil works
+// (Finding.Service): the temperature, at the corner of the tolerances
+// where one gives it.
+func serviceSurfaceWords(j *analysis.Study, f analysis.Finding) string {
+	s := Eng(Celsius(f.Service), "°C", 3)
+	if wc := j.WorstCase; f.ServiceCorner >= 0 && wc != nil {
+		s += fmt.Sprintf(" at corner %s of the tolerances (%s)", cornerCode(wc, f.ServiceCorner), wc.CornerName(f.ServiceCorner))
+	} else {
+		s += " at its ambient of " + Eng(Celsius(j.Spec.Design.Conditions.Ambient), "°C", 3)
+	}
+	return s
+}
+
+// hasAmbientTolerance says the tolerances have an ambient line.
+func hasAmbientTolerance(j *analysis.Study) bool {
+	if j.WorstCase == nil || j.WorstCase.Tolerances == nil {
+		return false
+	}
+	for _, t := range j.WorstCase.Tolerances.Items {
+		if t.Key == "ambient" {
+			return true
+		}
+	}
+	return false
+}
+
+// hotInServiceText is the note of a coil whose surface passes the burn
+// level only where it works, not where people handle it.
+func hotInServiceText(j *analysis.Study, f analysis.Finding) string {
+	hd := j.Safety.Handling
+	where := "in a room at " + Eng(Celsius(hd.Ambient), "°C", 3) + " (it works in vacuum, where no one touches it; the cooling kept as in vacuum, which only overstates the surface)"
+	if hd.Stated {
+		where = "at the handling ambient of " + Eng(Celsius(hd.Ambient), "°C", 3) + " (handling-ambient)"
+	}
+	return fmt.Sprintf("Where the coil works its winding surface reaches %s, above the 60 °C at which brief contact can burn (common practice for touchable surfaces of equipment); no one touches it there. Where people handle it, %s, the surface reaches at most %s, below that level. After a run in its working environment, let it cool before handling it.",
+		serviceSurfaceWords(j, f), where, hotSurfaceWords(j, f))
 }
 
 // implantWhere words where the field reaches 0.5 mT (analysis.ImplantReach):

@@ -31,7 +31,7 @@ var (
 		"test-plane", "switch-off", "driver-rating", "frequency", "on-time", "former-mass", "former-material",
 		"former-heat-capacity", "winding-conductivity", "unmodelled-core"}
 	conditionKeys = []string{"ambient", "background-field", "design-angle", "cooling", "h", "emissivity",
-		"field-gradient", "mount-resistance", "orientation", "up", "enclosure"}
+		"field-gradient", "mount-resistance", "orientation", "up", "enclosure", "handling-ambient"}
 )
 
 // Defaults.
