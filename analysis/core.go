@@ -16,6 +16,14 @@ type CoilKinds struct {
 	// EndField is |B| of core and winding on the axis RodEndPoint core
 	// diameters beyond the core's end, T (NaN without a core or current).
 	EndField float64
+	// EndFieldCore and EndFieldWinding are the parts of EndField (on the
+	// axis both point along it, so EndField is their sum): the core's, of
+	// its magnetisation spread along it (the slice model's poles,
+	// calc.CorePoleField), and the winding's own. EndFieldTwoPole is what
+	// the core's two point poles (calc.CoreTwoPoleField: its pole strength
+	// at ± half its pole separation) would give at that point in place of
+	// the spread ones, T; NaN where EndField is.
+	EndFieldCore, EndFieldWinding, EndFieldTwoPole float64
 	// Air is the block's result without its core (the winding alone): the
 	// moment, inductance and mass before the core's share is added;
 	// AirMass is the conductor's mass (the results' Mass adds the core's).
@@ -49,6 +57,13 @@ type CoilKinds struct {
 	DCPower float64
 }
 
+// RodEndAt is the point at which a cored coil's near field is stated: on
+// its axis RodEndPoint core diameters beyond the core's end face (the one
+// the axis points to).
+func RodEndAt(c calc.Coil) calc.Vec {
+	return c.Centre.Add(calc.CoilFrame(c.Axis).U.Scale(c.Core.Length/2 + RodEndPoint*c.Core.Diameter))
+}
+
 // IsReceiver says whether coil c is a pick-up coil: no current, no
 // voltage, and a frequency or a band.
 func IsReceiver(c calc.Coil) bool {
@@ -70,7 +85,8 @@ func kindsOf(d calc.Design, r calc.Results, cored bool) []CoilKinds {
 		}
 		cr := r.Coils[i]
 		w := cr.Winding
-		k := CoilKinds{AirMoment: cr.Moment, AirField: cr.FieldCentre, AirInductance: cr.Inductance, AirMass: cr.Mass, ACPower: math.NaN(), DCPower: math.NaN(), SelfResonance: math.NaN(), SelfCapacitance: math.NaN(), EndField: math.NaN()}
+		k := CoilKinds{AirMoment: cr.Moment, AirField: cr.FieldCentre, AirInductance: cr.Inductance, AirMass: cr.Mass, ACPower: math.NaN(), DCPower: math.NaN(), SelfResonance: math.NaN(), SelfCapacitance: math.NaN(), EndField: math.NaN(),
+			EndFieldCore: math.NaN(), EndFieldWinding: math.NaN(), EndFieldTwoPole: math.NaN()}
 		L := cr.Inductance
 		aEff := w.AreaSum
 		if c.Core.Present() {
@@ -78,6 +94,10 @@ func kindsOf(d calc.Design, r calc.Results, cored bool) []CoilKinds {
 			k.Core = &core
 			if cr.Current != 0 {
 				k.EndField = RodEndField(c, cr, core)
+				p := RodEndAt(c)
+				k.EndFieldCore = calc.CorePoleField(c, core, p).Norm()
+				k.EndFieldWinding = calc.CoilField(c, cr.Winding, cr.Current, p).Norm()
+				k.EndFieldTwoPole = calc.CoreTwoPoleField(c, core, p).Norm()
 			}
 			if !math.IsNaN(core.InductanceAdded) && !cored {
 				L += core.InductanceAdded

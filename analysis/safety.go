@@ -47,6 +47,7 @@ const (
 	HighDensity                         // current density above common practice while running warm
 	HazardousVoltage                    // supply voltage above ELV
 	SwitchOffVoltage                    // unsuppressed switch-off spike above ELV or the driver rating
+	HotInService                        // surface hotter than HotSurface where the coil works, not where it is handled
 )
 
 // Finding is one hazard of one coil block, with the numbers the memo
@@ -68,11 +69,16 @@ type Finding struct {
 	// Corner (an index into WorstCase.Corners), and Nominal is the
 	// nominal design's hottest surface, K. Cycle says the value is the
 	// hottest over the periodic state of the on/off cycle (rather than the
-	// steady surface).
-	AtCorner bool
-	Corner   int
-	Nominal  float64
-	Cycle    bool
+	// steady surface). All are at the handling ambient (Safety.Handling);
+	// Service is the hottest surface where the coil works, over the
+	// nominal design and the corners (HottestSurface), K, at corner
+	// ServiceCorner (−1: nominal), which the insulation meets.
+	AtCorner      bool
+	Corner        int
+	Nominal       float64
+	Cycle         bool
+	Service       float64
+	ServiceCorner int
 }
 
 // Safety holds the findings, most severe first within each coil, and the
@@ -83,6 +89,9 @@ type Safety struct {
 	// Exposure is the time-varying field of each a.c.-driven block
 	// against the ICNIRP (2010) reference levels (exposure.go).
 	Exposure []ACExposure
+	// Handling is where the hot surface is judged: the ambient in which
+	// people touch the coil and the hottest surfaces there.
+	Handling Handling
 }
 
 // ImplantReach is where the field of all coils together reaches
@@ -170,6 +179,15 @@ func (ir ImplantReach) Any() bool {
 // corners too (wc; nil without a tolerances block).
 func assessSafety(d calc.Design, r calc.Results, coils []CoilStudy, wc *WorstCase) Safety {
 	var s Safety
+	nominal := make([]float64, len(coils))
+	nominalCycle := make([]bool, len(coils))
+	for i := range coils {
+		nominal[i] = coils[i].Heat.SurfaceMax
+		if i < len(r.Coils) {
+			_, nominalCycle[i] = surfaceMaxOf(r.Coils[i].Heat)
+		}
+	}
+	s.Handling = handlingFor(d, nominal, nominalCycle, wc)
 	for i, co := range d.Coils {
 		cr := r.Coils[i]
 		add := func(k FindingKind, sev Severity, v float64) {
@@ -192,8 +210,14 @@ func assessSafety(d calc.Design, r calc.Results, coils []CoilStudy, wc *WorstCas
 		if !(cr.Runaway || calc.Duty(co) >= 1 || math.IsNaN(h.TimeToLimit) || !(cr.Temperature <= co.InsulationClass)) {
 			add(ClassIfLeftOn, Warning, coils[i].Heat.Continuous.HotSpot)
 		}
-		if f, ok := hotSurface(i, h, coils[i].Heat.SurfaceMax, wc); ok {
+		if f, ok := handlingSurface(i, s.Handling); ok {
+			f.Service, f.ServiceCorner = hottestSurface(i, h, coils[i].Heat.SurfaceMax, wc)
 			s.Findings = append(s.Findings, f)
+		} else if ts, at := hottestSurface(i, h, coils[i].Heat.SurfaceMax, wc); ts > HotSurface {
+			// hot only where the coil works, not where people touch it
+			hs := Finding{Kind: HotInService, Severity: Note, Coil: i, Value: f.Value, Nominal: f.Nominal, AtCorner: f.AtCorner, Corner: f.Corner, Cycle: f.Cycle,
+				Service: ts, ServiceCorner: at}
+			s.Findings = append(s.Findings, hs)
 		}
 		// The density rule of thumb only where the coil also runs warm: a
 		// small coil sheds its heat easily and the rule is conservative
@@ -212,34 +236,48 @@ func assessSafety(d calc.Design, r calc.Results, coils []CoilStudy, wc *WorstCas
 	return s
 }
 
-// hotSurface is coil block i's hot-surface finding, when its hottest
-// surface passes HotSurface: the nominal design's hottest surface nominal
-// (steady, or over its on/off cycle: surfaceMax of heat h), or a hotter one
-// at a corner of the tolerances (WorstCase.Surface).
-func hotSurface(i int, h calc.HeatResult, nominal float64, wc *WorstCase) (Finding, bool) {
-	_, cycle := surfaceMaxOf(h)
-	f := Finding{Kind: HotSurfaceFound, Severity: Caution, Coil: i, Value: nominal, Nominal: nominal, Cycle: cycle}
-	if wc != nil && i < len(wc.Surface) {
-		if ws := wc.Surface[i]; ws.Corner >= 0 && (ws.Max > nominal || math.IsNaN(nominal)) {
+// handlingSurface is coil block i's hot-surface finding, when its hottest
+// surface where people handle it (Handling) passes HotSurface: the nominal
+// design's there, or a hotter one at a corner of the tolerances.
+func handlingSurface(i int, hd Handling) (Finding, bool) {
+	f := Finding{Kind: HotSurfaceFound, Severity: Caution, Coil: i, Value: math.NaN(), Nominal: math.NaN(), Corner: -1, ServiceCorner: -1}
+	if i >= len(hd.Nominal) {
+		return f, false
+	}
+	f.Value, f.Nominal, f.Cycle = hd.Nominal[i], hd.Nominal[i], hd.NominalCycle[i]
+	if i < len(hd.Surface) {
+		if ws := hd.Surface[i]; ws.Corner >= 0 && (ws.Max > f.Nominal || math.IsNaN(f.Nominal)) {
 			f.Value, f.AtCorner, f.Corner, f.Cycle = ws.Max, true, ws.Corner, ws.Cycle
 		}
 	}
 	return f, f.Value > HotSurface
 }
 
-// HottestSurface is coil block i's hottest surface, K, as the hot-surface
-// caution judges it (hotSurface): the nominal design's steady or cycle
-// surface, or a hotter one at corner `at` of the tolerances (−1: the
-// nominal design); NaN when the heat balance has no solution.
+// hottestSurface is coil block i's hottest surface where it works, K: the
+// nominal design's hottest surface nominal (steady, or over its on/off
+// cycle: surfaceMax of heat h), or a hotter one at corner `at` of the
+// tolerances (WorstCase.Surface; −1: the nominal design).
+func hottestSurface(i int, h calc.HeatResult, nominal float64, wc *WorstCase) (ts float64, at int) {
+	ts, at = nominal, -1
+	if wc != nil && i < len(wc.Surface) {
+		if ws := wc.Surface[i]; ws.Corner >= 0 && (ws.Max > nominal || math.IsNaN(nominal)) {
+			ts, at = ws.Max, ws.Corner
+		}
+	}
+	return ts, at
+}
+
+// HottestSurface is coil block i's hottest surface where it works, K
+// (hottestSurface): the nominal design's steady or cycle surface, or a
+// hotter one at corner `at` of the tolerances (−1: the nominal design);
+// NaN when the heat balance has no solution. The hot-surface caution
+// judges the surface where people handle the coil instead
+// (Safety.Handling).
 func (st *Study) HottestSurface(i int) (ts float64, at int) {
 	if i >= len(st.Coils) || i >= len(st.Results.Coils) || st.Results.Coils[i].Verdict.NoSolution {
 		return math.NaN(), -1
 	}
-	f, _ := hotSurface(i, st.Results.Coils[i].Heat, st.Coils[i].Heat.SurfaceMax, st.WorstCase)
-	if f.AtCorner {
-		return f.Value, f.Corner
-	}
-	return f.Value, -1
+	return hottestSurface(i, st.Results.Coils[i].Heat, st.Coils[i].Heat.SurfaceMax, st.WorstCase)
 }
 
 // electricalFindings are the switch-off spike, at the stated switch-off

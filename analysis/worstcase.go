@@ -522,12 +522,19 @@ func nominalPosition(d calc.Design, tol spec.Tolerance) float64 {
 // CornerName names corner h (−1: the nominal design) by the value
 // each tolerance takes there, e.g. "supply −5 %, ambient 60 °C, wire
 // max".
-func (wc *WorstCase) CornerName(h int) string {
+func (wc *WorstCase) CornerName(h int) string { return wc.CornerNameWithout(h, "") }
+
+// CornerNameWithout is CornerName leaving out the tolerance line of key
+// (one held at another value, as the ambient where the coil is handled).
+func (wc *WorstCase) CornerNameWithout(h int, key string) string {
 	if h < 0 || h >= len(wc.Corners) {
 		return "nominal"
 	}
 	var parts []string
 	for i, tol := range wc.Tolerances.Items {
+		if key != "" && tol.Key == key {
+			continue
+		}
 		hi := wc.Corners[h].High&(1<<i) != 0
 		v := tol.Lo
 		if hi {

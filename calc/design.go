@@ -90,6 +90,11 @@ type Coil struct {
 
 	// Core is a soft-magnetic rod in the winding's bore (zero: air core).
 	Core Core
+	// UnmodelledCore names a ferromagnetic part that sits in the winding's
+	// bore in service but is not modelled (a plunger, an armature): the
+	// figures are the coil's without it ("": none stated). It enters no
+	// calculation.
+	UnmodelledCore string
 	// Receiver: the band over which a pick-up coil's noise is stated, Hz
 	// (zero: not given), and the capacitance of the cable and amplifier
 	// across its terminals, F.
@@ -150,6 +155,11 @@ type Conditions struct {
 	DesignAngle       float64
 	DesignAngleStated bool
 	Cooling           Cooling
+	// HandlingAmbient is the temperature of the surroundings in which
+	// people handle and touch the coil, K (0: not stated; the analysis
+	// then takes its default, analysis.HandlingFor). Only the hot-surface
+	// judgement uses it.
+	HandlingAmbient float64
 	// FieldGradient is a stated gradient of the background field, T/m: the
 	// rate of change of the field component along a moment, per metre along
 	// it (0: none).

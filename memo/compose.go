@@ -359,6 +359,26 @@ func requirementsVerdict(n, failed int) string {
 	return fmt.Sprintf("%d of the %d stated requirements are NOT met.", failed, n)
 }
 
+// centreLabel names the headline row of |B| at each coil's own centre: a
+// cored coil's centre lies in its core (the core is centred on the
+// winding), where the figure is the flux density in the core, μ0 (H + M);
+// an air coil's is the field at its centre.
+func centreLabel(j *analysis.Study, idx []int) string {
+	cored := 0
+	for _, i := range idx {
+		if j.Coils[i].Kinds.Core != nil {
+			cored++
+		}
+	}
+	switch {
+	case cored == 0:
+		return "Field at own centre |B|"
+	case cored == len(idx):
+		return "Flux density in the core, at its centre |B|"
+	}
+	return "Field at own centre |B| (a cored coil: flux density in its core)"
+}
+
 // summaryTable is page 1's table of the driven coils (a pick-up coil has
 // its own, receiverSummary): a column per driven coil block, the totals of
 // all coils below. A cored coil's conductor and core masses are stated
@@ -380,7 +400,7 @@ func (c *composer) summaryTable() doc.Table {
 	}
 	rows := [][]doc.Cell{
 		row("Magnetic moment |m|", func(_ int, cr calc.CoilResult) string { return Eng(cr.Moment.Norm(), "A·m²", 3) }),
-		row("Field at own centre |B|", func(_ int, cr calc.CoilResult) string { return Eng(cr.FieldCentre.Norm(), "T", 3) }),
+		row(centreLabel(c.j, idx), func(_ int, cr calc.CoilResult) string { return Eng(cr.FieldCentre.Norm(), "T", 3) }),
 		row("Current", func(_ int, cr calc.CoilResult) string { return Eng(cr.Current, "A", 3) }),
 		row("Voltage", func(i int, cr calc.CoilResult) string {
 			// an a.c. drive needs |Z|·I, not the d.c. I·R (below the

@@ -95,10 +95,13 @@ func (c *composer) core() {
 			}
 		}
 		c.derive(steps...)
-		if cr.Current != 0 && !math.IsNaN(r.PoleSeparation) {
-			c.para(fmt.Sprintf("Near the rod its field is that of its poles: %s each, %s apart; beyond a few rod lengths it is the dipole field of the moment. On the axis %s beyond the core's end the flux density is %s.",
-				Eng(r.PoleStrength, "A·m", 3), Eng(r.PoleSeparation, "m", 3), Eng(analysis.RodEndPoint*kc.Diameter, "m", 2),
-				Eng(k.EndField, "T", 3)))
+		if cr.Current != 0 && !math.IsNaN(r.PoleSeparation) && !math.IsNaN(k.EndField) {
+			c.para(fmt.Sprintf("The core's magnetisation, and with it its poles, is spread along the rod (the axial slices above), and the field near the rod is computed from that spread: on the axis %s beyond the core's end the flux density is %s, %s of it the core's and %s the winding's. "+
+				"Each half of the core holds a pole strength of %s, the centroids of the two halves %s apart: two point poles of that strength and spacing have the core's moment, %s, and so give its field beyond a few rod lengths, the dipole field of the moment. "+
+				"They are not used near the rod: they sit short of its end faces, which the spread poles reach, and at the same point the pair would give %s in place of the core's %s.",
+				Eng(analysis.RodEndPoint*kc.Diameter, "m", 2), Eng(k.EndField, "T", 3), Eng(k.EndFieldCore, "T", 3), Eng(k.EndFieldWinding, "T", 3),
+				Eng(r.PoleStrength, "A·m", 4), Eng(r.PoleSeparation, "m", 4), Eng(r.CoreMoment, "A·m²", 3),
+				Eng(k.EndFieldTwoPole, "T", 3), Eng(k.EndFieldCore, "T", 3)))
 		}
 	}
 }

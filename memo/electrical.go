@@ -632,7 +632,20 @@ func switchOffCaution(f analysis.Finding, co calc.Coil, cr calc.CoilResult, p an
 	}
 	return doc.Callout{Severity: doc.Caution, Title: "Switch-off voltage, " + name,
 		Spans: []doc.Span{{Text: templates.Text("caution-inductive", map[string]string{
-			"Energy": energy, "Spike": spike, "Diode": diode, "Resistor": resistor})}}}
+			"Energy": energy, "Spike": spike, "Diode": diode, "Resistor": resistor, "Unmodelled": unmodelledSwitching(co)})}}}
+}
+
+// unmodelledSwitching is the switch-off caution's word on a part in the
+// bore that the memo leaves out (unmodelled-core): it raises the
+// inductance, so the stored energy, the unsuppressed spike and the decay
+// times are lower bounds; the voltage a diode or resistor holds the switch
+// at is the supply plus the current times the resistance, which the part
+// does not change. "" without one.
+func unmodelledSwitching(co calc.Coil) string {
+	if co.UnmodelledCore == "" {
+		return ""
+	}
+	return fmt.Sprintf("These figures are for the coil without its %[1]s, which sits in its bore in service and is not modelled (unmodelled-core): the %[1]s raises the inductance, so the stored energy, the unsuppressed spike and the decay times are lower bounds for the assembly with it; the voltages the suppression holds the switch at follow from the current and stand. Measure the assembly's inductance before the suppression is finalised.", co.UnmodelledCore)
 }
 
 // resistorBound words the most the series resistor may be: the nominal

@@ -475,7 +475,7 @@ func (c *composer) receiverSummary() doc.Table {
 			}
 		}),
 		row("Resistance, a.c. at the design frequency", func(i int) string { return orDash(rec(i).Resistance, "Ω", 3) }),
-		row("Inductance (small signal; with the core where there is one)", func(i int) string { return orDash(c.j.Results.Coils[i].Inductance, "H", 3) }),
+		row(smallSignalLabel(c.j, idx), func(i int) string { return orDash(c.j.Results.Coils[i].Inductance, "H", 3) }),
 		row("Capacitance across the terminals (winding + load)", func(i int) string { return orDash(rec(i).Capacitance, "F", 3) }),
 		row("Effective area (flux linkage per tesla)", func(i int) string { return orDash(rec(i).EffectiveArea, "m²", 3) }),
 		row("Wire length / conductor mass", func(i int) string {
@@ -508,4 +508,22 @@ func nonZero(v float64) float64 {
 		return math.NaN()
 	}
 	return v
+}
+
+// smallSignalLabel names the pick-up table's inductance row: with the core
+// for cored coils, said only where one of them has a core.
+func smallSignalLabel(j *analysis.Study, idx []int) string {
+	cored := 0
+	for _, i := range idx {
+		if j.Coils[i].Kinds.Core != nil {
+			cored++
+		}
+	}
+	switch {
+	case cored == 0:
+		return "Inductance (small signal)"
+	case cored == len(idx):
+		return "Inductance (small signal, with the core)"
+	}
+	return "Inductance (small signal; a cored coil's with its core)"
 }

@@ -21,6 +21,7 @@ func Cautions(j *analysis.Study) []doc.Callout {
 	d := j.Spec.Design
 	r := j.Results
 	var out []doc.Callout
+	var rodEnds []analysis.Finding // worded in the implant caution where there is one
 	for _, f := range j.Safety.Findings {
 		co, cr := d.Coils[f.Coil], r.Coils[f.Coil]
 		name := fmt.Sprintf("coil %q", co.Name)
@@ -38,28 +39,42 @@ func Cautions(j *analysis.Study) []doc.Callout {
 				Spans: []doc.Span{{Text: leftOnText(co, cr, j.Coils[f.Coil].Heat.Continuous)}}})
 		case analysis.HotSurfaceFound:
 			out = append(out, doc.Callout{Severity: doc.Caution, Title: "Hot surface, " + name,
-				Spans: []doc.Span{{Text: templates.Text(hotTemplate(j), map[string]string{"Temperature": hotSurfaceWords(j, f)})}}})
+				Spans: []doc.Span{{Text: templates.Text(hotTemplate(j), map[string]string{"Temperature": hotSurfaceWords(j, f), "Where": handlingWhere(j, f)})}}})
+		case analysis.HotInService:
+			out = append(out, doc.Callout{Severity: doc.Note, Title: "Hot surface in service only, " + name,
+				Spans: []doc.Span{{Text: hotInServiceText(j, f)}}})
 		case analysis.HighDensity:
 			out = append(out, doc.Callout{Severity: doc.Note, Title: "Current density above common practice, " + name,
-				Spans: []doc.Span{{Text: templates.Text("caution-density", map[string]string{"Density": Eng(f.Value, "A/m²", 3),
+				Spans: []doc.Span{{Text: templates.Text("caution-density", map[string]string{"Density": Eng(f.Value, "A/m²", 3), "Covered": densityCover(j.Cooling),
 					"Temperature": hotText(cr, cr.Temperature)})}}})
 		case analysis.HazardousVoltage:
 			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Hazardous voltage, " + name,
 				Spans: []doc.Span{{Text: templates.Text("caution-voltage", map[string]string{"What": voltageWhat(co), "Voltage": Eng(f.Value, "V", 3)})}}})
 		case analysis.SwitchOffVoltage:
 			out = append(out, switchOffCaution(f, co, cr, j.Coils[f.Coil].SwitchOff, fittedOverOf(j, f.Coil), name))
+		case analysis.RodNearField:
+			rodEnds = append(rodEnds, f)
 		default:
 			out = append(out, kindCautions(j, f)...) // memo/core.go
 		}
 	}
 	if ir := j.Safety.Implant; ir.Searched {
 		if where, beyond := implantWhere(j); len(where) > 0 {
+			// the field at a rod's ends is the same hazard: its figure
+			// joins the region's description
+			for _, f := range rodEnds {
+				where = append(where, rodEndWords(j, f))
+			}
+			rodEnds = nil
 			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Field above 0.5 mT: implanted medical devices",
-				Spans: []doc.Span{{Text: templates.Text("caution-implant", map[string]string{"Where": strings.Join(where, ", "), "Beyond": beyond})}}})
+				Spans: []doc.Span{{Text: templates.Text("caution-implant", map[string]string{"Where": strings.Join(where, ", "), "Beyond": beyond, "Mark": implantMark(j.Cooling), "Unmodelled": unmodelledField(j)})}}})
 		} else {
 			out = append(out, doc.Callout{Severity: doc.Note, Title: "Field near the winding",
 				Spans: []doc.Span{{Text: templates.Text("caution-implant-none", nil)}}})
 		}
+	}
+	for _, f := range rodEnds { // no implant caution to carry them
+		out = append(out, kindCautions(j, f)...)
 	}
 	out = append(out, exposureCautions(j)...) // memo/exposure.go
 	out = mergeCautions(out)
@@ -74,6 +89,56 @@ func Cautions(j *analysis.Study) []doc.Callout {
 	return out
 }
 
+// densityCover is the density caution's word on a covered coil
+// (enclosure = covered): the still-air rule is for a coil the air can
+// rise past; "" for any other.
+func densityCover(cool calc.Cooling) string {
+	if cool.Covered {
+		return " This coil lies under or behind a surface, where the air cannot rise past it: it sheds less heat than the coils the rule is drawn from."
+	}
+	return ""
+}
+
+// unmodelledField is the implant caution's word on parts in the coils'
+// bores that the memo leaves out (unmodelled-core): they gather the field,
+// so the flux densities and the distances of the region are lower bounds
+// for the assembly with them. "" when no coil names one.
+func unmodelledField(j *analysis.Study) string {
+	var parts []string
+	for _, co := range j.Spec.Design.Coils {
+		if co.UnmodelledCore != "" {
+			parts = append(parts, fmt.Sprintf("the %s in the bore of coil %q", co.UnmodelledCore, co.Name))
+		}
+	}
+	if len(parts) == 0 {
+		return ""
+	}
+	return fmt.Sprintf(" The field is computed without %s, which is not modelled (unmodelled-core): a ferromagnetic part gathers the field, so the flux densities and distances above are lower bounds for the assembly with it.", joinAnd(parts))
+}
+
+// implantMark is the implant caution's instruction to mark the region,
+// worded for where the design says the coil is energised: under a
+// surface people touch (enclosure = covered), in vacuum (where no one is
+// near it, so in integration and test), or in air where it is tested and
+// installed.
+func implantMark(cool calc.Cooling) string {
+	switch {
+	case cool.Covered:
+		return "Mark the region on the surface that covers the coil and around it."
+	case cool.Vacuum:
+		return "The coil works in vacuum, away from people; mark the region wherever it is energised with people near it, in integration and test."
+	}
+	return "Mark the region wherever the coil is energised with people near it, in test and where it is installed."
+}
+
+// rodEndWords words a rod's near-field finding as part of the implant
+// caution's region: the flux density on the axis beyond the core's end.
+func rodEndWords(j *analysis.Study, f analysis.Finding) string {
+	co := j.Spec.Design.Coils[f.Coil]
+	return fmt.Sprintf("on the axis %s beyond each end face of the core of coil %q, where |B| = %s (the core gathers the field to its ends)",
+		Eng(analysis.RodEndPoint*co.Core.Diameter, "m", 2), co.Name, Eng(f.Value, "T", 3))
+}
+
 // hotTemplate is the hot-surface caution's wording: of the winding's own
 // surface, or, for coils under or behind a surface people touch
 // (enclosure = covered), of that surface over the winding.
@@ -84,18 +149,100 @@ func hotTemplate(j *analysis.Study) string {
 	return "caution-hot"
 }
 
-// hotSurfaceWords words the hottest surface of a hot-surface finding:
-// the temperature, over the on/off cycle where that gives it, and at the
-// corner of the tolerances where one does, with the nominal figure.
+// hotSurfaceWords words the hottest surface of a hot-surface finding
+// where people handle the coil (analysis.Handling): the temperature, over
+// the on/off cycle where that gives it, and at the corner of the
+// tolerances where one does, with the nominal figure.
 func hotSurfaceWords(j *analysis.Study, f analysis.Finding) string {
 	s := Eng(Celsius(f.Value), "°C", 3)
 	if f.Cycle {
 		s += " at the peak of its on/off cycle"
 	}
 	if wc := j.WorstCase; f.AtCorner && wc != nil {
-		s += fmt.Sprintf(" at corner %s of the tolerances (%s), against %s at nominal", cornerCode(wc, f.Corner), wc.CornerName(f.Corner), Eng(Celsius(f.Nominal), "°C", 3))
+		s += " at " + handlingCorner(j, f.Corner) + ", against " + Eng(Celsius(f.Nominal), "°C", 3) + " at nominal"
 	}
 	return s
+}
+
+// handlingCorner names corner h of the tolerances as the hot surface
+// is judged at it: by its code and values, or, with the ambient held at
+// the handling ambient, by the values of the other tolerances.
+func handlingCorner(j *analysis.Study, h int) string {
+	wc := j.WorstCase
+	if j.Safety.Handling.AmbientHeld {
+		return fmt.Sprintf("corner %s of the other tolerances", wc.CornerNameWithout(h, "ambient"))
+	}
+	return fmt.Sprintf("corner %s of the tolerances (%s)", cornerCode(wc, h), wc.CornerName(h))
+}
+
+// handlingWhere says at which ambient the hot surface was judged
+// (analysis.Handling) and, where the coil runs hotter where it works, that
+// figure, which the insulation meets.
+func handlingWhere(j *analysis.Study, f analysis.Finding) string {
+	hd := j.Safety.Handling
+	amb := Eng(Celsius(hd.Ambient), "°C", 3)
+	var s string
+	switch {
+	case hd.Service && j.WorstCase != nil && hasAmbientTolerance(j):
+		s = "It is judged where the coil works, as people touch it there: at its ambient of " + amb + " and over the tolerances' ambient range."
+	case hd.Service:
+		s = "It is judged where the coil works, as people touch it there: at its ambient of " + amb + "."
+	case hd.Stated:
+		s = "It is judged where people handle the coil, at the handling ambient of " + amb + " (handling-ambient)" + heldWords(hd) + "."
+	default:
+		s = "It is judged where people handle the coil, in a room at " + amb + heldWords(hd) + ": the coil works in vacuum, where no one touches it. The cooling is kept as in vacuum, radiation alone, which in air, with convection besides, only overstates the surface."
+	}
+	if !hd.Service && f.Service > f.Value && !math.IsNaN(f.Service) {
+		s += " Where it works the surface reaches " + serviceSurfaceWords(j, f) + "; no one touches it there."
+	}
+	return " " + s
+}
+
+// heldWords says the ambient tolerance is not applied where the coil is
+// handled; "" without one.
+func heldWords(hd analysis.Handling) string {
+	if hd.AmbientHeld {
+		return ", the ambient tolerance, which describes where the coil works, not applied"
+	}
+	return ""
+}
+
+// serviceSurfaceWords words the hottest surface where the coil works
+// (Finding.Service): the temperature, at the corner of the tolerances
+// where one gives it.
+func serviceSurfaceWords(j *analysis.Study, f analysis.Finding) string {
+	s := Eng(Celsius(f.Service), "°C", 3)
+	if wc := j.WorstCase; f.ServiceCorner >= 0 && wc != nil {
+		s += fmt.Sprintf(" at corner %s of the tolerances (%s)", cornerCode(wc, f.ServiceCorner), wc.CornerName(f.ServiceCorner))
+	} else {
+		s += " at its ambient of " + Eng(Celsius(j.Spec.Design.Conditions.Ambient), "°C", 3)
+	}
+	return s
+}
+
+// hasAmbientTolerance says the tolerances have an ambient line.
+func hasAmbientTolerance(j *analysis.Study) bool {
+	if j.WorstCase == nil || j.WorstCase.Tolerances == nil {
+		return false
+	}
+	for _, t := range j.WorstCase.Tolerances.Items {
+		if t.Key == "ambient" {
+			return true
+		}
+	}
+	return false
+}
+
+// hotInServiceText is the note of a coil whose surface passes the burn
+// level only where it works, not where people handle it.
+func hotInServiceText(j *analysis.Study, f analysis.Finding) string {
+	hd := j.Safety.Handling
+	where := "in a room at " + Eng(Celsius(hd.Ambient), "°C", 3) + " (it works in vacuum, where no one touches it; the cooling kept as in vacuum, which only overstates the surface)"
+	if hd.Stated {
+		where = "at the handling ambient of " + Eng(Celsius(hd.Ambient), "°C", 3) + " (handling-ambient)"
+	}
+	return fmt.Sprintf("Where the coil works its winding surface reaches %s, above the 60 °C at which brief contact can burn (common practice for touchable surfaces of equipment); no one touches it there. Where people handle it, %s, the surface reaches at most %s, below that level. After a run in its working environment, let it cool before handling it.",
+		serviceSurfaceWords(j, f), where, hotSurfaceWords(j, f))
 }
 
 // implantWhere words where the field reaches 0.5 mT (analysis.ImplantReach):

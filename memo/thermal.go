@@ -677,9 +677,10 @@ func (c *composer) thermalTable() doc.Table {
 
 // densityLabel names the current-density row of the thermal table, with
 // the still-air rule of thumb only where it speaks to the design: a coil
-// energised continuously, not in vacuum.
+// energised continuously, open to still air (not in vacuum, nor under or
+// behind a surface, enclosure = covered, where the air cannot rise past it).
 func densityLabel(r calc.Results, cool calc.Cooling) string {
-	if cool.Vacuum {
+	if cool.Vacuum || cool.Covered {
 		return "Current density"
 	}
 	for _, cr := range r.Coils {

@@ -16,6 +16,11 @@ import (
 // every insulation class, and within the range of the air properties.
 const maxAmbient = 500 + zeroCelsius
 
+// HandlingRoomC is the handling ambient, °C, taken for a coil that works in
+// vacuum when none is stated: a room on the ground, where it is
+// integrated and tested; 25 °C, a reporting choice of ours.
+const HandlingRoomC = 25.0
+
 // conditionsBlock reads the conditions block; b has no lines when the spec
 // has none, and then only the defaults are set.
 func (p *parser) conditionsBlock(b *rawBlock) {
@@ -39,6 +44,15 @@ func (p *parser) conditionsBlock(b *rawBlock) {
 				p.errf(e.line, "ambient: %s is more than 500 degC, the most a spec accepts", e.value)
 			} else {
 				cond.Ambient = q.Value
+				si = q.String()
+			}
+		case "handling-ambient":
+			if q, err := units.ParseAs(e.value, units.Temperature); err != nil {
+				p.errf(e.line, "handling-ambient: %v", err)
+			} else if q.Value > maxAmbient {
+				p.errf(e.line, "handling-ambient: %s is more than 500 degC, the most a spec accepts", e.value)
+			} else {
+				cond.HandlingAmbient = q.Value
 				si = q.String()
 			}
 		case "background-field":
@@ -164,6 +178,11 @@ func (p *parser) conditionsBlock(b *rawBlock) {
 		}
 	}
 	add("ambient", units.Format(cond.Ambient, units.Temperature)+" (20 °C)")
+	if vacuum {
+		add("handling-ambient", units.Format(calc.CelsiusToKelvin(HandlingRoomC), units.Temperature)+" (a room: the coil works in vacuum, where no one touches it)")
+	} else {
+		add("handling-ambient", "the ambient (people touch the coil where it works)")
+	}
 	add("background-field", "(0, 0, 0) T")
 	if cond.BackgroundMagnitudeOnly || cond.BackgroundField.Norm() == 0 {
 		add("design-angle", units.Format(cond.DesignAngle, units.Angle)+" (90°)")

@@ -6,6 +6,8 @@ import (
 	"strconv"
 	"strings"
 	"time"
+	"unicode"
+	"unicode/utf8"
 
 	"coilmemo/calc"
 	"coilmemo/calc/units"
@@ -27,9 +29,9 @@ var (
 		"radial-build", "width", "height", "turns", "wire", "wire-outer-diameter", "conductor",
 		"insulation-class", "current", "voltage", "duty", "spacing", "sense", "axis", "centre",
 		"test-plane", "switch-off", "driver-rating", "frequency", "on-time", "former-mass", "former-material",
-		"former-heat-capacity", "winding-conductivity"}
+		"former-heat-capacity", "winding-conductivity", "unmodelled-core"}
 	conditionKeys = []string{"ambient", "background-field", "design-angle", "cooling", "h", "emissivity",
-		"field-gradient", "mount-resistance", "orientation", "up", "enclosure"}
+		"field-gradient", "mount-resistance", "orientation", "up", "enclosure", "handling-ambient"}
 )
 
 // Defaults.
@@ -498,6 +500,8 @@ func (p *parser) coilValue(ci *coilIn, e kv) (string, bool) {
 		}
 		SetCoilValue(c, e.key, v)
 		return units.Format(v, want), true
+	case "unmodelled-core":
+		return p.unmodelledCore(c, e)
 	case "former-material":
 		m, ok := calc.FormerMaterialByName(e.value)
 		if !ok {
@@ -1094,4 +1098,31 @@ func SetCoilValue(c *calc.Coil, key string, v float64) bool {
 		return false
 	}
 	return true
+}
+
+// maxPartName is the longest name unmodelled-core takes, in characters:
+// the memo's cautions quote it.
+const maxPartName = 60
+
+// unmodelledCore reads unmodelled-core: the free-text name of a
+// ferromagnetic part in the bore that the memo does not model (a
+// plunger). A number is taken as a mistaken core figure.
+func (p *parser) unmodelledCore(c *calc.Coil, e kv) (string, bool) {
+	v := strings.TrimSpace(e.value)
+	if _, err := strconv.ParseFloat(strings.Fields(v)[0], 64); err == nil {
+		p.errf(e.line, "unmodelled-core = %s: name the part that sits in the bore unmodelled (e.g. plunger), not a figure; a core to model takes core-permeability, core-length and core-diameter", e.value)
+		return "", false
+	}
+	if n := utf8.RuneCountInString(v); n > maxPartName {
+		p.errf(e.line, "unmodelled-core: the part's name is %d characters long; give at most %d (the cautions quote it)", n, maxPartName)
+		return "", false
+	}
+	for _, r := range v {
+		if unicode.IsControl(r) || r == utf8.RuneError {
+			p.errf(e.line, "unmodelled-core: the part's name holds a control or invalid character %q", r)
+			return "", false
+		}
+	}
+	c.UnmodelledCore = v
+	return v, true
 }

@@ -120,6 +120,15 @@ func TestBroken(t *testing.T) {
 		{"unterminated quote", fenced("coil", coilBody+"name = \"X coil\n"), 6,
 			`unterminated quote`},
 		{"no value", fenced("coil", coilBody+"name =\n"), 6, `name: no value after "="`},
+		{"handling ambient without unit", fenced("coil", coilBody) + fenced("conditions", "ambient = 60 degC\nhandling-ambient = 25\n"), 9,
+			`handling-ambient: no unit given: 25`},
+		{"handling ambient too hot", fenced("coil", coilBody) + fenced("conditions", "handling-ambient = 600 degC\n"), 8,
+			`handling-ambient: 600 degC is more than 500 degC`},
+		{"unmodelled core as a figure", fenced("coil", coilBody+"unmodelled-core = 5000\n"), 6,
+			`unmodelled-core = 5000: name the part that sits in the bore unmodelled (e.g. plunger), not a figure`},
+		{"unmodelled core name too long", fenced("coil", coilBody+"unmodelled-core = "+strings.Repeat("plunger ", 9)+"\n"), 6,
+			`unmodelled-core: the part's name is 71 characters long; give at most 60`},
+		{"unmodelled core empty", fenced("coil", coilBody+"unmodelled-core =\n"), 6, `unmodelled-core: no value after "="`},
 		{"duplicate coil name", fenced("coil", coilBody+"name = X\n") + fenced("coil", coilBody+"name = X\n"), 13,
 			`coil name "X" is already used by the coil block on line 1`},
 		{"no coil block", "# Nothing here\n\nJust prose.\n", 1, `no coil block`},
@@ -345,10 +354,16 @@ func TestDefaults(t *testing.T) {
 			if e.Line != 0 {
 				t.Errorf("default of absent block on line %d", e.Line)
 			}
+			if e.Key == "handling-ambient" && !strings.Contains(e.SI, "the ambient") {
+				t.Errorf("handling-ambient default in still air: %q, want the ambient", e.SI)
+			}
 		}
 	}
-	if n != 6 {
-		t.Errorf("%d condition defaults, want 6", n)
+	if n != 7 {
+		t.Errorf("%d condition defaults, want 7", n)
+	}
+	if cond.HandlingAmbient != 0 {
+		t.Errorf("handling-ambient unstated, read as %g K", cond.HandlingAmbient)
 	}
 }
 

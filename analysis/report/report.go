@@ -49,6 +49,9 @@ type Report struct {
 	Sweep        *SweepReport  `json:"sweep,omitempty"`
 	LimitsFailed int           `json:"limits_failed"`
 	ChecksFailed int           `json:"checks_failed"`
+	// HandlingAmbient is the ambient at which the hot surface is judged,
+	// where people handle the coil (analysis.Handling), °C.
+	HandlingAmbient Num `json:"handling_ambient_C"`
 	Interactions
 	// WorstCase is each headline result over the tolerances' corners
 	// (worstcase.go); absent without a tolerances block.
@@ -115,6 +118,9 @@ type CoilReport struct {
 	// Plane is a rectangle's field over its plane of interest (the
 	// test-plane key, else the probes' plane); absent for other coils.
 	Plane *PlaneReport `json:"plane,omitempty"`
+	// UnmodelledCore names the part in the bore the figures leave out
+	// (the unmodelled-core key); absent when none is stated.
+	UnmodelledCore string `json:"unmodelled_core,omitempty"`
 	CoilHeatSwitch
 	CoilKindsReport
 }
@@ -220,7 +226,7 @@ func Build(j *analysis.Study) Report {
 	r := j.Results
 	d := j.Spec.Design
 	rep := Report{
-		Tool: "coilmemo " + analysis.Version, Spec: j.Name, SpecSHA256: j.SHA256,
+		Tool: "coilmemo " + analysis.Version, Spec: j.Name, SpecSHA256: j.SHA256, HandlingAmbient: Num(format.Celsius(j.Safety.Handling.Ambient)),
 		FieldCenter: vec(r.FieldCentre), Moment: Num(r.Moment.Norm()), MomentVector: vec(r.Moment),
 		TorqueMax: Num(r.TorqueMax), TorqueDesign: Num(r.TorqueDesign), TorqueAngle: Num(r.TorqueAngle * 180 / math.Pi), TorqueVector: vec(r.Torque),
 		Coils: []CoilReport{}, Probes: []ProbeReport{}, Limits: []LimitReport{}, Checks: []CheckReport{},
@@ -229,7 +235,7 @@ func Build(j *analysis.Study) Report {
 	for i, cr := range r.Coils {
 		co := d.Coils[i]
 		rep.Coils = append(rep.Coils, CoilReport{
-			Name: cr.Name, Form: analysis.FormName(co), Turns: co.Turns,
+			Name: cr.Name, Form: analysis.FormName(co), Turns: co.Turns, UnmodelledCore: co.UnmodelledCore,
 			Moment: Num(cr.Moment.Norm()), MomentVector: vec(cr.Moment),
 			Resistance20C: Num(cr.R20), ResistanceHot: Num(cr.RHot),
 			Current: Num(cr.Current), CurrentCold: Num(cr.ColdCurrent), Voltage: Num(cr.Voltage), Power: Num(cr.Power),
@@ -248,6 +254,19 @@ func Build(j *analysis.Study) Report {
 			if j.WorstCase != nil {
 				name := j.WorstCase.CornerName(at)
 				c.SurfaceHottestCorner = &name
+			}
+		}
+		if hd := j.Safety.Handling; i < len(hd.Nominal) {
+			c := &rep.Coils[len(rep.Coils)-1]
+			c.SurfaceHandling = Num(format.Celsius(hd.Nominal[i]))
+			if i < len(hd.Surface) && j.WorstCase != nil {
+				ws := hd.Surface[i]
+				c.SurfaceHandling = Num(format.Celsius(ws.Max))
+				name := j.WorstCase.CornerName(ws.Corner)
+				if hd.AmbientHeld {
+					name = j.WorstCase.CornerNameWithout(ws.Corner, "ambient")
+				}
+				c.SurfaceHandlingCorner = &name
 			}
 		}
 		if i < len(j.Coils) {
@@ -404,13 +423,21 @@ type CoilHeatSwitch struct {
 	// CyclePeakSurface is the hottest surface of the periodic on/off state
 	// (calc.Cycle.PeakSurface; null without on-time).
 	CyclePeakSurface Num `json:"cycle_peak_surface_C"`
-	// SurfaceHottest is the hottest surface the hot-surface caution is
-	// judged on: the steady surface or the on/off cycle's, over the
-	// nominal design and, with a tolerances block, every corner, at the
-	// corner named by SurfaceHottestCorner ("nominal" for the nominal
-	// design; null without tolerances).
+	// SurfaceHottest is the hottest surface where the coil works: the
+	// steady surface or the on/off cycle's, over the nominal design and,
+	// with a tolerances block, every corner, at the corner named by
+	// SurfaceHottestCorner ("nominal" for the nominal design; null without
+	// tolerances).
 	SurfaceHottest       Num     `json:"surface_temperature_hottest_C"`
 	SurfaceHottestCorner *string `json:"surface_temperature_hottest_corner"`
+	// SurfaceHandling is the hottest surface where people handle the coil,
+	// which the hot-surface caution is judged on (analysis.Handling): at
+	// the handling ambient, over the nominal design and every corner of the
+	// tolerances (the ambient line, if any, held at the handling ambient
+	// unless people touch the coil where it works), at the corner named by
+	// SurfaceHandlingCorner (null without tolerances).
+	SurfaceHandling       Num     `json:"surface_temperature_handling_C"`
+	SurfaceHandlingCorner *string `json:"surface_temperature_handling_corner"`
 }
 
 func coilHeatSwitch(co calc.Coil, cr calc.CoilResult) CoilHeatSwitch {
