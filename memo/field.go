@@ -517,7 +517,7 @@ func (c *composer) dipoleDistances(co calc.Coil, cr calc.CoilResult, cs *analysi
 	dr := cr.Dipole
 	if math.IsNaN(dr.Axis1) {
 		if co.Form == calc.Pair && co.Opposing {
-			c.para("The two coils oppose, so the block has no net dipole moment: far away its field is that of a quadrupole and falls as 1/r⁴. The point-dipole description does not apply.")
+			c.para("The two coils oppose, so the pair has no net dipole moment: far away its field is that of a quadrupole and falls as 1/r⁴. The point-dipole description does not apply.")
 		}
 		return
 	}
