@@ -58,4 +58,3 @@ func sigDigits(s string) int {
 	}
 	return len(d)
 }
-
