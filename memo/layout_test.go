@@ -19,7 +19,7 @@ import (
 // on purpose, the contents page and a page before a new section
 // included), a last page holding more than a few lines, no heading starting in the bottom 15 % of a page's text
 // area, a heading on the page its first block starts on with more than a
-// line of it, a figure's lead-in and a lead-in ending in a colon (page
+// line of it, a figure's or a table's lead-in and a lead-in ending in a colon (page
 // 1's "Cautions raised") on the page of what it introduces, and a table
 // split over pages with its header repeated on every page it continues
 // on and two rows or more on each.
@@ -150,6 +150,11 @@ func pageRuleViolations(l *pdf.Layout) []string {
 	for i, k := range kind {
 		if k == "paragraph" && kind[i+1] == "figure" && last[i] != first[i+1] {
 			out = append(out, fmt.Sprintf("page %d: a figure's lead-in (block %d), its figure on page %d", last[i], i, first[i+1]))
+		}
+		// A paragraph set whole right before a table introduces it: it
+		// ends on the page the table starts on.
+		if k == "paragraph" && kind[i+1] == "table start" && first[i] == last[i] && last[i] != first[i+1] {
+			out = append(out, fmt.Sprintf("page %d: a table's lead-in (block %d), its table on page %d", last[i], i, first[i+1]))
 		}
 	}
 	for i, start := range table {

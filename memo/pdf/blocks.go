@@ -309,10 +309,11 @@ func (r *renderer) paragraph(p doc.Paragraph) {
 			if need > r.room(0) {
 				r.newPage()
 			}
-		} else if leadsIn(p) {
-			// A short paragraph ending in a colon introduces what follows
-			// (a list, a table, an equation): it keeps the start of it —
-			// a list's first three items — on its page.
+		} else if _, table := r.rest[0].(doc.Table); table || leadsIn(p) {
+			// A short paragraph right before a table, or ending in a colon
+			// before a list or an equation, introduces what follows: it
+			// keeps the start of it — a table's caption, header and first
+			// row, a list's first three items — on its page.
 			need := float64(len(lines))*leadBody + after + r.minHeight(r.rest[0])
 			if l, ok := r.rest[0].(doc.List); ok {
 				need = float64(len(lines))*leadBody + after + r.listStart(l, 3)
