@@ -157,6 +157,18 @@ func pageRuleViolations(l *pdf.Layout) []string {
 			out = append(out, fmt.Sprintf("page %d: a table's lead-in (block %d), its table on page %d", last[i], i, first[i+1]))
 		}
 	}
+	// A figure and its lead-in moved to the next page leave no more than
+	// 30 % of the page before blank (page 1 ends on purpose): the figure
+	// shrinks to fit instead.
+	for i, k := range kind {
+		if k == "paragraph" && kind[i+1] == "figure" {
+			if p := first[i]; p > 2 && !slices.Contains(l.Broken, p-1) {
+				if blank := pageBlank(l, bottom[p-1]); blank > 0.30 && firstOnPage(l, p) == i {
+					out = append(out, fmt.Sprintf("page %d: %.0f %% blank before a figure and its lead-in (block %d) moved to page %d", p-1, 100*blank, i, p))
+				}
+			}
+		}
+	}
 	for i, start := range table {
 		if start == last[i] {
 			continue
@@ -188,6 +200,16 @@ func pageRuleViolations(l *pdf.Layout) []string {
 	}
 	slices.Sort(out)
 	return out
+}
+
+// firstOnPage is the block of the first box placed on page p (−1 for none).
+func firstOnPage(l *pdf.Layout, p int) int {
+	for _, b := range l.Boxes {
+		if b.Page == p {
+			return b.Block
+		}
+	}
+	return -1
 }
 
 // lastPageFill is the least part of the text area the last page of a memo
