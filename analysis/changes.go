@@ -3,9 +3,12 @@ package analysis
 import (
 	"fmt"
 	"math"
+	"strconv"
 	"strings"
 
 	"coilmemo/calc"
+	"coilmemo/calc/units"
+	"coilmemo/format"
 	"coilmemo/spec"
 )
 
@@ -71,11 +74,138 @@ func (l LimitChange) Stated() string {
 }
 
 // InputChange is one spec value that differs, as written.
+//
+// Numeric is set when both revisions write it as one number with a unit
+// of the same dimension (a limit with the same relation before it): OldValue
+// and NewValue are then those numbers in SI, Unit their SI unit as the
+// formatter takes it ("°C" for a temperature written in degC or degF, the
+// values in kelvin; "" for a plain number) and Relation the limit's "≤" or
+// "≥" ("" for other keys).
 type InputChange struct {
 	Block, Key string
 	Old, New   string // as written; "" when absent from that revision
 	OldSI      string
 	NewSI      string
+
+	Numeric            bool
+	OldValue, NewValue float64
+	Unit, Relation     string
+}
+
+// Columns writes the change for a reader, as the memo's table and
+// `coilmemo diff` both show it: the old and the new value (numbers in
+// engineering units, to four significant figures like the results; text
+// quoted as written; "(absent)" where a revision has none, "(default …)"
+// for a value left to its default) and what the change was: the relative
+// change or, for a temperature, its change in kelvin; "rewritten, same
+// value" for one written differently; "added", "removed" or "replaced"
+// for the others.
+func (in InputChange) Columns() (from, to, change string) {
+	switch {
+	case in.Old == "":
+		return "(absent)", in.shown(in.New, in.NewSI), "added"
+	case in.New == "":
+		return in.shown(in.Old, in.OldSI), "(absent)", "removed"
+	case in.Numeric:
+		from, to, change = format.Change(in.OldValue, in.NewValue, in.Unit)
+		if in.Unit == "" {
+			from, to = format.Sig(in.OldValue, 4), format.Sig(in.NewValue, 4)
+			switch {
+			case strings.Contains(in.Old, "%") || strings.Contains(in.New, "%"):
+				from, to = format.Percent(in.OldValue), format.Percent(in.NewValue)
+			case isWhole(in.OldValue) && isWhole(in.NewValue):
+				from, to = format.Digits(int(in.OldValue)), format.Digits(int(in.NewValue))
+			}
+		}
+		if !moved(in.OldValue, in.NewValue) {
+			change = "rewritten, same value"
+		}
+		if in.Relation != "" {
+			from, to = in.Relation+" "+from, in.Relation+" "+to
+		}
+		if in.Old == "(default)" {
+			from = "(default) " + from
+		}
+		if in.New == "(default)" {
+			to = "(default) " + to
+		}
+		return from, to, change
+	}
+	from, to = in.shown(in.Old, in.OldSI), in.shown(in.New, in.NewSI)
+	if in.OldSI == in.NewSI && in.OldSI != "" {
+		return from, to, "rewritten, same value"
+	}
+	return from, to, "replaced"
+}
+
+// shown is a value that is not one number: quoted as written, or the
+// default's SI form.
+func (in InputChange) shown(raw, si string) string {
+	if raw == "(default)" {
+		if si == "" {
+			return "(default)"
+		}
+		return "(default " + si + ")"
+	}
+	return strconv.Quote(raw)
+}
+
+func isWhole(v float64) bool {
+	return v == math.Trunc(v) && math.Abs(v) < 1e9
+}
+
+// numericInput fills in's Numeric fields when both revisions write the
+// value as one number with a unit of one dimension.
+func numericInput(in *InputChange) {
+	if in.Old == "" || in.New == "" {
+		return
+	}
+	// A default is read from its SI form's leading value: "0.000781706 m
+	// (heavy-build estimate)", "293.15 K (20 °C)".
+	value := func(raw, si string) string {
+		if raw != "(default)" {
+			return raw
+		}
+		if i := strings.Index(si, " ("); i >= 0 {
+			si = si[:i]
+		}
+		if i := strings.Index(si, " = "); i >= 0 {
+			si = si[:i]
+		}
+		return si
+	}
+	rel := func(s string) (string, string) {
+		s = strings.TrimSpace(s)
+		for _, r := range []struct{ op, sign string }{{"<=", "≤"}, {">=", "≥"}} {
+			if rest, ok := strings.CutPrefix(s, r.op); ok {
+				return r.sign, rest
+			}
+		}
+		return "", s
+	}
+	ro, so := rel(value(in.Old, in.OldSI))
+	rn, sn := rel(value(in.New, in.NewSI))
+	if ro != rn {
+		return
+	}
+	qo, err := units.Parse(so)
+	if err != nil {
+		return
+	}
+	qn, err := units.Parse(sn)
+	if err != nil || qn.Dim != qo.Dim {
+		return
+	}
+	temp := func(s string) bool {
+		_, u, _ := units.Split(s)
+		u = strings.TrimSpace(u)
+		return u == "degC" || u == "degF" || u == "°C" || u == "°F"
+	}
+	unit := qo.Dim.Symbol()
+	if qo.Dim == units.Temperature && (temp(so) || temp(sn)) {
+		unit = "°C"
+	}
+	in.Numeric, in.OldValue, in.NewValue, in.Unit, in.Relation = true, qo.Value, qn.Value, unit, ro
 }
 
 // moved tells a real change from rounding noise (1 part in 10⁹).
@@ -213,7 +343,9 @@ func Compare(old, cur *Study) Changes {
 		case !ok:
 			group(e.Coil).Inputs = append(group(e.Coil).Inputs, InputChange{Block: e.Block, Key: e.Key, New: shown(e), NewSI: e.SI})
 		case o.SI != e.SI || shown(o) != shown(e):
-			group(e.Coil).Inputs = append(group(e.Coil).Inputs, InputChange{Block: e.Block, Key: e.Key, Old: shown(o), OldSI: o.SI, New: shown(e), NewSI: e.SI})
+			in := InputChange{Block: e.Block, Key: e.Key, Old: shown(o), OldSI: o.SI, New: shown(e), NewSI: e.SI}
+			numericInput(&in)
+			group(e.Coil).Inputs = append(group(e.Coil).Inputs, in)
 		}
 	}
 	for _, e := range old.Spec.Entries {

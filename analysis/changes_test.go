@@ -108,3 +108,52 @@ func TestComparePreviousErrors(t *testing.T) {
 		t.Fatalf("changes %+v, %v", st.Changes, diags)
 	}
 }
+
+// Every changed input says what the change was: numbers in engineering
+// units with their relative change (a temperature's in kelvin), a value
+// written differently but equal as such, text quoted, and keys added or
+// removed. The expected changes are worked by hand from the two specs:
+// 22 °C → 30 °C is +8 K; 150 mm → 160 mm is +6.7 %; 15 W → 12 W is −20 %.
+func TestCompareInputColumns(t *testing.T) {
+	a, err := os.ReadFile("../examples/revisions/survey-pair-a.md")
+	if err != nil {
+		t.Fatal(err)
+	}
+	b := strings.NewReplacer(
+		"ambient = 22 degC", "ambient = 30 degC",
+		"spacing             = 150 mm", "spacing             = 160 mm",
+		"wire                = AWG 20", "wire                = AWG 21",
+		"wire-outer-diameter = 0.89 mm", "",
+		"power        <= 15 W", "power        <= 12 W",
+		"current             = 1.5 A", "current             = 1500 mA\nduty                = 50 %",
+	).Replace(string(a))
+	if b == string(a) {
+		t.Fatal("no replacement made")
+	}
+	ch := Compare(mustRun(t, "a.md", string(a)), mustRun(t, "b.md", b))
+	got := map[string]string{}
+	for _, g := range ch.Groups {
+		for _, in := range g.Inputs {
+			from, to, change := in.Columns()
+			got[in.Block+": "+in.Key] = from + " → " + to + " (" + change + ")"
+		}
+	}
+	for k, want := range map[string]string{
+		"conditions: ambient":       "22.00 °C → 30.00 °C (+8.0 K)",
+		"coil: spacing":             "150.0 mm → 160.0 mm (+6.7 %)",
+		"coil: current":             "1.500 A → 1.500 A (rewritten, same value)",
+		"coil: wire":                `"AWG 20" → "AWG 21" (replaced)`,
+		"limits: power":             "≤ 15.00 W → ≤ 12.00 W (−20 %)",
+		"coil: wire-outer-diameter": "890.0 µm → (default) 781.7 µm (−12 %)",
+		"coil: duty":                "(default) 100 % → 50 % (−50 %)",
+	} {
+		if got[k] != want {
+			t.Errorf("%s: %q, want %q", k, got[k], want)
+		}
+	}
+	for k, v := range got {
+		if strings.HasSuffix(v, "(changed)") {
+			t.Errorf("%s: %q says only that it changed", k, v)
+		}
+	}
+}

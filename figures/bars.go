@@ -123,3 +123,37 @@ func (b *barPlot) Thumbnail(c *draw.Canvas) {
 	c.SetColor(b.fill)
 	c.Fill(r.Path())
 }
+
+// Trivial reports whether a grouped bar chart would show nothing beyond
+// what a sentence gives: every group has at most one bar that stands out
+// of zero (none longer than tol of the longest bar of the chart), and those
+// bars are all of the same length within tol of the longest. Such a chart
+// of a set of square coils of equal moments is three equal bars. A chart
+// with no finite bar is trivial too.
+func (d BarGroups) Trivial(tol float64) bool {
+	top := 0.0
+	for _, g := range d.Values {
+		for _, v := range g {
+			if !math.IsNaN(v) {
+				top = math.Max(top, math.Abs(v))
+			}
+		}
+	}
+	if !(top > 0) {
+		return true
+	}
+	lo, hi := math.Inf(1), 0.0
+	for _, g := range d.Values {
+		n := 0
+		for _, v := range g {
+			if a := math.Abs(v); a > tol*top {
+				n++
+				lo, hi = math.Min(lo, a), math.Max(hi, a)
+			}
+		}
+		if n > 1 {
+			return false
+		}
+	}
+	return hi-lo <= tol*top
+}

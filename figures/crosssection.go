@@ -5,6 +5,8 @@ import (
 	"math"
 	"sort"
 
+	"coilmemo/format"
+
 	"gonum.org/v1/plot/vg"
 	"gonum.org/v1/plot/vg/draw"
 )
@@ -28,6 +30,14 @@ type Dimension struct {
 	Kind  DimKind
 	A, B  float64
 	Label string
+}
+
+// LengthLabel writes a length (m) for a dimension label of a sketch, in
+// millimetres to three significant figures ("25.0 mm", "8.25 mm",
+// "0.950 mm"): every dimension of the cross-section and of the plan read
+// alike, whatever the spec wrote.
+func LengthLabel(v float64) string {
+	return format.Sig(v*1e3, 3) + " mm"
 }
 
 // Note is a short text with a leader to a point (m) of the sketch.

@@ -80,17 +80,42 @@ func (c *composer) axisSetFigure() {
 		caption = "Direction of each coil's moment: its components over its own magnitude |m| (the magnitudes differ too much to share a scale; they are given in the text)"
 		what = "moment direction (its components over its own |m|, since the magnitudes differ by more than ten times)"
 	}
-	c.para(fmt.Sprintf("Figure %d shows each coil's %s along x, y and z, one group of bars per coil: in a set whose coils are square to one another each group has one bar, along that coil's axis.", n, what))
-	c.fig(doc.Figure{Caption: caption,
-		Width: figWidth, Height: figHeight * 0.8,
-		Draw:    figures.GroupedBars(bars),
-		Summary: "Moments: " + strings.Join(dirs, "; ") + "."})
-	// The coupling coefficients.
-	worst, wa, wb := math.NaN(), -1, -1
+	// A chart of one bar per coil, all of one height, tells the reader
+	// nothing the sentence above does not: it is said instead.
+	if bars.Trivial(trivialBars) {
+		if bars.Unit == "" {
+			c.para("Each moment lies along one of x, y and z, so a chart of the components over |m| would be one bar of 1 per coil; it is not drawn.")
+		} else {
+			size := fmt.Sprintf("are of one size within %g %%", 100*trivialBars)
+			if mlo, mhi := momentSpread(as.Moments); mhi-mlo <= 1e-3*mhi {
+				size = "are all of one size"
+			}
+			c.para(fmt.Sprintf("Each moment lies along one of x, y and z and the moments %s, so a chart of their components would be one bar of the same height per coil; it is not drawn.", size))
+		}
+	} else {
+		c.para(fmt.Sprintf("Figure %d shows each coil's %s along x, y and z, one group of bars per coil: in a set whose coils are square to one another each group has one bar, along that coil's axis.", n, what))
+		c.fig(doc.Figure{Caption: caption,
+			Width: figWidth, Height: figHeight * 0.8,
+			Draw:    figures.GroupedBars(bars),
+			Summary: "Moments: " + strings.Join(dirs, "; ") + "."})
+	}
+	// The coupling coefficients: the largest |k| off the diagonal, and
+	// every pair whose |k| prints the same (a symmetric set ties).
+	worst := math.NaN()
 	for a := range as.Coils {
 		for b := a + 1; b < len(as.Coils); b++ {
 			if k := as.K[a][b]; !math.IsNaN(k) && !(math.Abs(k) <= worst) {
-				worst, wa, wb = math.Abs(k), a, b
+				worst = math.Abs(k)
+			}
+		}
+	}
+	top := map[[2]int]bool{}
+	var pairs []string
+	for a := range as.Coils {
+		for b := a + 1; b < len(as.Coils); b++ {
+			if k := as.K[a][b]; !math.IsNaN(k) && kText(math.Abs(k)) == kText(worst) {
+				top[[2]int{a, b}], top[[2]int{b, a}] = true, true
+				pairs = append(pairs, fmt.Sprintf("%q with %q", names[a], names[b]))
 			}
 		}
 	}
@@ -107,7 +132,7 @@ func (c *composer) axisSetFigure() {
 			case math.IsNaN(k):
 				row = append(row, doc.Cell{Text: "—"})
 			default:
-				row = append(row, doc.Cell{Text: kText(k), Strong: a == wa && b == wb || a == wb && b == wa})
+				row = append(row, doc.Cell{Text: kText(k), Strong: top[[2]int{a, b}]})
 			}
 		}
 		rows = append(rows, row)
@@ -120,7 +145,14 @@ func (c *composer) axisSetFigure() {
 		if worst < 1e-4 {
 			kt = "< 0.0001"
 		}
-		t += fmt.Sprintf(" The largest cross-coupling is |k| %s, between %q and %q", kt, names[wa], names[wb])
+		switch {
+		case len(pairs) == 1:
+			t += fmt.Sprintf(" The largest cross-coupling is |k| %s, between %s", kt, strings.Replace(pairs[0], " with ", " and ", 1))
+		case worst < 1e-4:
+			t += fmt.Sprintf(" Every computed cross-coupling is |k| %s", kt)
+		default:
+			t += fmt.Sprintf(" The largest cross-coupling, |k| %s, is shared by %d pairs, %s", kt, len(pairs), joinAnd(pairs))
+		}
 		if worst < 0.01 {
 			t += ": under 1 %, so the axes can be driven independently."
 		} else {
@@ -133,6 +165,11 @@ func (c *composer) axisSetFigure() {
 	c.add(doc.Table{Caption: "Coupling coefficients k between the coils of the set (— where no mutual inductance is computed)",
 		Header: append([]string{"k"}, names...), Rows: rows, Widths: widths, Align: align})
 }
+
+// trivialBars is the tolerance, as a fraction of the longest bar, within
+// which the moments chart is one bar per coil of one height and is said in
+// a sentence instead of drawn.
+const trivialBars = 0.03
 
 // momentSpread is the smallest and largest magnitude of the moments that
 // are not zero (an opposing pair has none).

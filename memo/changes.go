@@ -89,11 +89,6 @@ func displayValue(v float64, unit string) float64 {
 }
 
 func inputChangeRow(in analysis.InputChange) []doc.Cell {
-	dash := func(s string) string {
-		if s == "" {
-			return "(absent)"
-		}
-		return s
-	}
-	return []doc.Cell{{Text: "input " + in.Block + ": " + in.Key}, {Text: dash(in.Old)}, {Text: dash(in.New)}, {Text: "changed"}}
+	from, to, change := in.Columns()
+	return []doc.Cell{{Text: "input " + in.Block + ": " + in.Key}, {Text: from}, {Text: to}, {Text: change}}
 }

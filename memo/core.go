@@ -159,8 +159,8 @@ func coreSketch(co calc.Coil, cs *analysis.CoilStudy, mirrored bool) ([]figures.
 	}
 	s := []figures.Section{{X0: -h, X1: h, Y0: y0, Y1: a, Core: true}}
 	dims := []figures.Dimension{
-		{Kind: figures.Diameter, A: a, Label: "Ø " + mmText(k.Diameter) + " core"},
-		{Kind: figures.Axial, A: -h, B: h, Label: mmText(k.Length) + " core"},
+		{Kind: figures.Diameter, A: a, Label: "Ø " + figures.LengthLabel(k.Diameter) + " core"},
+		{Kind: figures.Axial, A: -h, B: h, Label: figures.LengthLabel(k.Length) + " core"},
 	}
 	return s, dims, fmt.Sprintf("; the core, Ø %s × %s, in grey", mmText(k.Diameter), mmText(k.Length))
 }

@@ -174,8 +174,8 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 		c.fig(doc.Figure{Caption: fmt.Sprintf("Coil %q in plan, looking along its axis (to scale; dimensions to the mean turn)", co.Name),
 			Width: figWidth, Height: 70 * vg.Millimeter,
 			Draw: figures.RectangleSketch(figures.RectangleData{Width: co.Width, Height: co.Height, Bundle: b,
-				WidthLabel: mmText(co.Width), HeightLabel: mmText(co.Height),
-				Note: fmt.Sprintf("%d turns, bundle ≈ Ø %s", co.Turns, mmText(b))}),
+				WidthLabel: figures.LengthLabel(co.Width), HeightLabel: figures.LengthLabel(co.Height),
+				Note: fmt.Sprintf("%d turns, bundle ≈ Ø %s", co.Turns, figures.LengthLabel(b))}),
 			Summary: fmt.Sprintf("Plan: %s × %s mean turn, bundle ≈ %s.", mmText(co.Width), mmText(co.Height), mmText(b))})
 		return
 	}
@@ -204,27 +204,27 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 	var desc string
 	switch {
 	case w.Thin:
-		sd.Dimensions = append(sd.Dimensions, figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + mmText(co.MeanDiameter) + " mean"})
-		note := fmt.Sprintf("%d turns, bundle ≈ Ø %s", co.Turns, mmText(e.R1-e.R0))
+		sd.Dimensions = append(sd.Dimensions, figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + figures.LengthLabel(co.MeanDiameter) + " mean"})
+		note := fmt.Sprintf("%d turns, bundle ≈ Ø %s", co.Turns, figures.LengthLabel(e.R1-e.R0))
 		sd.Notes = append(sd.Notes, figures.Note{X: sd.Sections[len(sd.Sections)-1].X1, Y: e.R1, Text: note})
 		desc = fmt.Sprintf("all %d turns in one round bundle of about %s on the mean diameter", co.Turns, mmText(e.R1-e.R0))
 	case co.RadialBuild <= 0:
 		sd.Dimensions = append(sd.Dimensions,
-			figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + mmText(co.MeanDiameter) + " mean"},
-			figures.Dimension{Kind: figures.Axial, A: e.Z0 + cs.Placements[0], B: e.Z1 + cs.Placements[0], Label: mmText(co.Length)})
+			figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + figures.LengthLabel(co.MeanDiameter) + " mean"},
+			figures.Dimension{Kind: figures.Axial, A: e.Z0 + cs.Placements[0], B: e.Z1 + cs.Placements[0], Label: figures.LengthLabel(co.Length)})
 		desc = fmt.Sprintf("%d turns in one layer over %s", co.Turns, mmText(co.Length))
 	default:
 		sd.Dimensions = append(sd.Dimensions,
-			figures.Dimension{Kind: figures.Diameter, A: e.R0, Label: "Ø " + mmText(2*e.R0) + " inner"},
-			figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + mmText(co.MeanDiameter) + " mean"},
-			figures.Dimension{Kind: figures.Diameter, A: e.R1, Label: "Ø " + mmText(2*e.R1) + " outer"},
-			figures.Dimension{Kind: figures.Axial, A: e.Z0 + cs.Placements[0], B: e.Z1 + cs.Placements[0], Label: mmText(e.Z1 - e.Z0)},
-			figures.Dimension{Kind: figures.Radial, A: e.R0, B: e.R1, Label: mmText(co.RadialBuild)})
+			figures.Dimension{Kind: figures.Diameter, A: e.R0, Label: "Ø " + figures.LengthLabel(2*e.R0) + " inner"},
+			figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + figures.LengthLabel(co.MeanDiameter) + " mean"},
+			figures.Dimension{Kind: figures.Diameter, A: e.R1, Label: "Ø " + figures.LengthLabel(2*e.R1) + " outer"},
+			figures.Dimension{Kind: figures.Axial, A: e.Z0 + cs.Placements[0], B: e.Z1 + cs.Placements[0], Label: figures.LengthLabel(e.Z1 - e.Z0)},
+			figures.Dimension{Kind: figures.Radial, A: e.R0, B: e.R1, Label: figures.LengthLabel(co.RadialBuild)})
 		desc = fmt.Sprintf("%d turns in %d layers of up to %d turns, %s long with a radial build of %s",
 			co.Turns, w.LayerCount, w.TurnsPerLayer, mmText(e.Z1-e.Z0), mmText(co.RadialBuild))
 		if cs.Underfilled {
 			used := cs.Laid.R1 - cs.Laid.R0
-			sd.Dimensions[len(sd.Dimensions)-1].Label += ", turns " + mmText(used) // the radial build's
+			sd.Dimensions[len(sd.Dimensions)-1].Label += ", turns " + figures.LengthLabel(used) // the radial build's
 			desc += fmt.Sprintf(", of which the turns fill the inner %s (drawn in copper; the rest of the stated section in dashed outline)", mmText(used))
 		}
 	}
@@ -233,7 +233,7 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 	if co.Form == calc.Pair {
 		s := math.Abs(co.Spacing)
 		sd.CentreLines = []float64{-s / 2, s / 2}
-		sd.Dimensions = append(sd.Dimensions, figures.Dimension{Kind: figures.Axial, A: -s / 2, B: s / 2, Label: "spacing " + mmText(s)})
+		sd.Dimensions = append(sd.Dimensions, figures.Dimension{Kind: figures.Axial, A: -s / 2, B: s / 2, Label: "spacing " + figures.LengthLabel(s)})
 		desc = "each of the two coils holds " + desc + fmt.Sprintf("; their centres are %s apart", mmText(s))
 	}
 	c.para(fmt.Sprintf("Figure %d shows the winding cross-section in the half-plane above the axis, to scale: %s.", n, desc))
@@ -518,7 +518,7 @@ func (c *composer) dipoleDistances(co calc.Coil, cr calc.CoilResult, cs *analysi
 	dr := cr.Dipole
 	if math.IsNaN(dr.Axis1) {
 		if co.Form == calc.Pair && co.Opposing {
-			c.para("The two coils oppose, so the block has no net dipole moment: far away its field is that of a quadrupole and falls as 1/r⁴. The point-dipole description does not apply.")
+			c.para("The two coils oppose, so the pair has no net dipole moment: far away its field is that of a quadrupole and falls as 1/r⁴. The point-dipole description does not apply.")
 		}
 		return
 	}

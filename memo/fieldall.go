@@ -107,9 +107,9 @@ func (c *composer) allCoilsMap() {
 		XLabel: "Position z", YLabel: "Position x"})
 	c.heading(2, "Field of all coils together")
 	n := c.figure + 1
-	all := fmt.Sprintf("all %d coil blocks", len(d.Coils))
+	all := fmt.Sprintf("all %d coils", len(d.Coils))
 	if len(d.Coils) == 2 {
-		all = "both coil blocks"
+		all = "both coils"
 	}
 	text := fmt.Sprintf("Figure %d maps |B| of %s energised together over the xz-plane through the origin, on a logarithmic colour scale with contour lines as in the maps above.", n, all)
 	if c.anyReceiver() {

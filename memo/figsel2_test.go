@@ -58,24 +58,25 @@ func TestPlaneFigureRule(t *testing.T) {
 	}
 }
 
-// TestAxisSetRule: a three-axis set gets the moments figure and the
-// coupling table; a design of parallel coils does not.
+// TestAxisSetRule: a three-axis set gets the moments and the coupling
+// table. Its coils are alike and square to one another, so the chart of
+// the moments would be three equal bars: a sentence says so instead. With
+// one coil driven at two thirds of the current the chart is drawn. The X–Z
+// and Y–Z pairs are placed alike about the Z coil, so their |k| tie and
+// the text names both. A design of parallel coils gets none of this.
 func TestAxisSetRule(t *testing.T) {
 	j, d := figureDesign(t, "three-axis-set")
 	if !axisSetShown(j) {
-		t.Fatal("three-axis set: no moments figure")
+		t.Fatal("three-axis set: no moments section")
 	}
-	caps, texts := captions(d)
-	if !containsPrefix(caps, "Moment vector of each coil of the set") {
-		t.Errorf("no moments figure among %q", caps)
-	}
-	for _, s := range []string{"X coil", "Y coil", "Z coil", "mx", "my", "mz"} {
-		if !strings.Contains("|"+texts+"|", "|"+s+"|") {
-			t.Errorf("the moments figure lacks %q", s)
-		}
+	caps, _ := captions(d)
+	if containsPrefix(caps, "Moment vector of each coil of the set") {
+		t.Errorf("three equal moments along x, y and z drawn as a chart: %q", caps)
 	}
 	p := prose(d)
-	for _, want := range []string{"with nothing along the others", "the moments are 90.0° apart", "The largest cross-coupling is |k| = 0.0641"} {
+	for _, want := range []string{"with nothing along the others", "the moments are 90.0° apart",
+		"the moments are all of one size, so a chart of their components would be one bar of the same height per coil; it is not drawn",
+		`The largest cross-coupling, |k| = 0.0641, is shared by 2 pairs, "X coil" with "Z coil" and "Y coil" with "Z coil"`} {
 		if !strings.Contains(p, want) {
 			t.Errorf("prose lacks %q", want)
 		}
@@ -83,17 +84,55 @@ func TestAxisSetRule(t *testing.T) {
 	var table bool
 	for _, b := range d.Blocks {
 		if tb, ok := b.(doc.Table); ok && strings.HasPrefix(tb.Caption, "Coupling coefficients k between the coils of the set") {
-			table = len(tb.Rows) == 3 && tb.Rows[0][1].Text == "1" && tb.Rows[2][1].Text == "0.0641"
+			r := tb.Rows
+			table = len(r) == 3 && r[0][1].Text == "1" && r[2][1].Text == "0.0641" &&
+				r[0][3].Strong && r[2][1].Strong && r[1][3].Strong && r[2][2].Strong && !r[0][2].Strong
 		}
 	}
 	if !table {
-		t.Error("no coupling table")
+		t.Error("no coupling table with both tied pairs in bold")
 	}
+
+	src, err := os.ReadFile(filepath.Join("..", "testdata", "figures", "three-axis-set.md"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	y := strings.Index(string(src), "name          = Y coil")
+	cur := strings.Index(string(src)[y:], "current       = 60 mA") + y
+	unequal := string(src)[:cur] + "current       = 40 mA" + string(src)[cur+len("current       = 60 mA"):]
+	d = Compose(mustEvaluate(t, unequal))
+	caps, texts := captions(d)
+	if !containsPrefix(caps, "Moment vector of each coil of the set") {
+		t.Errorf("moments of 34.6, 23.1 and 34.6 mA·m²: no chart among %q", caps)
+	}
+	for _, s := range []string{"X coil", "Y coil", "Z coil", "mx", "my", "mz"} {
+		if !strings.Contains("|"+texts+"|", "|"+s+"|") {
+			t.Errorf("the moments figure lacks %q", s)
+		}
+	}
+	if p := prose(d); strings.Contains(p, "it is not drawn") || !strings.Contains(p, "The largest cross-coupling") {
+		t.Errorf("unequal moments: %q", p)
+	}
+
 	for _, name := range []string{"aiding-pair", "thin-loop", "x-axis-coil"} {
 		j, d := figureDesign(t, name)
 		caps, _ := captions(d)
 		if axisSetShown(j) || containsPrefix(caps, "Moment vector of each coil") {
 			t.Errorf("%s: a moments figure for a design without skew coils", name)
+		}
+	}
+}
+
+// TestReaderWords: the memo speaks of coils, windings and pairs, not of
+// the program's "coil blocks".
+func TestReaderWords(t *testing.T) {
+	for _, f := range designFiles(t) {
+		_, text := memoOf(t, f, false)
+		if i := strings.Index(strings.ToLower(text), "coil block"); i >= 0 {
+			t.Errorf("%s: %q", filepath.Base(f), text[max(0, i-60):min(len(text), i+40)])
+		}
+		if strings.Contains(text, "the block has") {
+			t.Errorf("%s: \"the block has\" in the memo", filepath.Base(f))
 		}
 	}
 }
@@ -148,15 +187,16 @@ func containsPrefix(ss []string, p string) bool {
 }
 
 // TestAxisSetDirections: moments of very different sizes are drawn as
-// directions (components over each coil's |m|), so the small one shows.
+// directions (components over each coil's |m|), so the small one shows;
+// when each lies along x, y or z the directions chart is one bar of 1 per
+// coil, and a sentence says so instead.
 func TestAxisSetDirections(t *testing.T) {
-	src := "```coil\nname = big\nmean-diameter = 200 mm\nturns = 200\nwire = AWG 22\ncurrent = 1 A\n```\n" +
-		"```coil\nname = small\nmean-diameter = 30 mm\nturns = 10\nwire = AWG 30\naxis = x\ncentre = (300, 0, 0) mm\ncurrent = 0.1 A\n```\n"
-	j, diags := evaluate("t.md", []byte(src))
-	if len(diags) > 0 {
-		t.Fatal(diags)
+	set := func(axis string) *doc.Document {
+		src := "```coil\nname = big\nmean-diameter = 200 mm\nturns = 200\nwire = AWG 22\ncurrent = 1 A\n```\n" +
+			"```coil\nname = small\nmean-diameter = 30 mm\nturns = 10\nwire = AWG 30\naxis = " + axis + "\ncentre = (300, 0, 0) mm\ncurrent = 0.1 A\n```\n"
+		return Compose(mustEvaluate(t, src))
 	}
-	d := Compose(j)
+	d := set("(1, 1, 0)")
 	caps, texts := captions(d)
 	if !containsPrefix(caps, "Direction of each coil's moment") {
 		t.Fatalf("moments 10⁴ apart drawn on one scale: %q", caps)
@@ -164,8 +204,16 @@ func TestAxisSetDirections(t *testing.T) {
 	if !strings.Contains(texts, "Moment component over |m|") {
 		t.Errorf("the ordinate is not the normalised component: %q", texts)
 	}
-	if p := prose(d); !strings.Contains(p, `"big" 6.28 A·m² along z; "small" 707 µA·m² along x`) || !strings.Contains(p, "The largest cross-coupling is |k| < 0.0001,") {
+	if p := prose(d); !strings.Contains(p, `"big" 6.28 A·m² along z; "small" 707 µA·m² along (0.71, 0.71, 0)`) || !strings.Contains(p, "The largest cross-coupling is |k| < 0.0001,") {
 		t.Errorf("the magnitudes are not in the text: %q", p)
+	}
+	d = set("x")
+	if caps, _ := captions(d); containsPrefix(caps, "Direction of each coil's moment") {
+		t.Errorf("moments along z and x: a chart of one bar of 1 per coil drawn")
+	}
+	if p := prose(d); !strings.Contains(p, `"big" 6.28 A·m² along z; "small" 707 µA·m² along x`) ||
+		!strings.Contains(p, "a chart of the components over |m| would be one bar of 1 per coil; it is not drawn") {
+		t.Errorf("moments along z and x: %q", p)
 	}
 }
 

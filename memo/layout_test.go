@@ -19,7 +19,7 @@ import (
 // on purpose, the contents page and a page before a new section
 // included), a last page holding more than a few lines, no heading starting in the bottom 15 % of a page's text
 // area, a heading on the page its first block starts on with more than a
-// line of it, a figure's lead-in and a lead-in ending in a colon (page
+// line of it, a figure's or a table's lead-in and a lead-in ending in a colon (page
 // 1's "Cautions raised") on the page of what it introduces, and a table
 // split over pages with its header repeated on every page it continues
 // on and two rows or more on each.
@@ -151,6 +151,23 @@ func pageRuleViolations(l *pdf.Layout) []string {
 		if k == "paragraph" && kind[i+1] == "figure" && last[i] != first[i+1] {
 			out = append(out, fmt.Sprintf("page %d: a figure's lead-in (block %d), its figure on page %d", last[i], i, first[i+1]))
 		}
+		// A paragraph set whole right before a table introduces it: it
+		// ends on the page the table starts on.
+		if k == "paragraph" && kind[i+1] == "table start" && first[i] == last[i] && last[i] != first[i+1] {
+			out = append(out, fmt.Sprintf("page %d: a table's lead-in (block %d), its table on page %d", last[i], i, first[i+1]))
+		}
+	}
+	// A figure and its lead-in moved to the next page leave no more than
+	// 30 % of the page before blank (page 1 ends on purpose): the figure
+	// shrinks to fit instead.
+	for i, k := range kind {
+		if k == "paragraph" && kind[i+1] == "figure" {
+			if p := first[i]; p > 2 && !slices.Contains(l.Broken, p-1) {
+				if blank := pageBlank(l, bottom[p-1]); blank > 0.30 && firstOnPage(l, p) == i {
+					out = append(out, fmt.Sprintf("page %d: %.0f %% blank before a figure and its lead-in (block %d) moved to page %d", p-1, 100*blank, i, p))
+				}
+			}
+		}
 	}
 	for i, start := range table {
 		if start == last[i] {
@@ -183,6 +200,16 @@ func pageRuleViolations(l *pdf.Layout) []string {
 	}
 	slices.Sort(out)
 	return out
+}
+
+// firstOnPage is the block of the first box placed on page p (−1 for none).
+func firstOnPage(l *pdf.Layout, p int) int {
+	for _, b := range l.Boxes {
+		if b.Page == p {
+			return b.Block
+		}
+	}
+	return -1
 }
 
 // lastPageFill is the least part of the text area the last page of a memo

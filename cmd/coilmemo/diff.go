@@ -96,14 +96,8 @@ func writeDiff(w io.Writer, oldName, newName string, ch analysis.Changes) {
 			fmt.Fprintf(w, "  %s: %s %s → %s %s  (%s)\n", req, from, verdict(l.OldPass), to, verdict(l.NewPass), note)
 		}
 		for _, in := range g.Inputs {
-			old, nw := in.Old, in.New
-			if old == "" {
-				old = "(absent)"
-			}
-			if nw == "" {
-				nw = "(absent)"
-			}
-			fmt.Fprintf(w, "  input %s: %s: %s → %s\n", in.Block, in.Key, old, nw)
+			from, to, change := in.Columns()
+			fmt.Fprintf(w, "  input %s: %s: %s → %s  (%s)\n", in.Block, in.Key, from, to, change)
 		}
 	}
 }
@@ -172,6 +166,11 @@ type inputJSON struct {
 	New   string `json:"new"`
 	OldSI string `json:"old_si"`
 	NewSI string `json:"new_si"`
+	// For a value written as one number in both revisions: the numbers
+	// in SI (kelvin for a temperature) and their unit.
+	OldValue *float64 `json:"old_value,omitempty"`
+	NewValue *float64 `json:"new_value,omitempty"`
+	Unit     string   `json:"unit,omitempty"`
 }
 
 func writeDiffJSON(w io.Writer, oldName, newName string, ch analysis.Changes) error {
@@ -204,7 +203,15 @@ func writeDiffJSON(w io.Writer, oldName, newName string, ch analysis.Changes) er
 			gj.Limits = append(gj.Limits, lj)
 		}
 		for _, in := range g.Inputs {
-			gj.Inputs = append(gj.Inputs, inputJSON{Block: in.Block, Key: in.Key, Old: in.Old, New: in.New, OldSI: in.OldSI, NewSI: in.NewSI})
+			ij := inputJSON{Block: in.Block, Key: in.Key, Old: in.Old, New: in.New, OldSI: in.OldSI, NewSI: in.NewSI}
+			if in.Numeric {
+				o, n := finite(in.OldValue), finite(in.NewValue)
+				ij.OldValue, ij.NewValue, ij.Unit = &o, &n, in.Unit
+				if in.Unit == "°C" {
+					ij.Unit = "K"
+				}
+			}
+			gj.Inputs = append(gj.Inputs, ij)
 		}
 		out.Groups = append(out.Groups, gj)
 	}

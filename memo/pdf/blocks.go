@@ -309,10 +309,12 @@ func (r *renderer) paragraph(p doc.Paragraph) {
 			if need > r.room(0) {
 				r.newPage()
 			}
-		} else if leadsIn(p) {
-			// A short paragraph ending in a colon introduces what follows
-			// (a list, a table, an equation): it keeps the start of it —
-			// a list's first three items — on its page.
+			r.leadFloor = figureFloor(r.room(0))
+		} else if _, table := r.rest[0].(doc.Table); table || leadsIn(p) {
+			// A short paragraph right before a table, or ending in a colon
+			// before a list or an equation, introduces what follows: it
+			// keeps the start of it — a table's caption, header and first
+			// row, a list's first three items — on its page.
 			need := float64(len(lines))*leadBody + after + r.minHeight(r.rest[0])
 			if l, ok := r.rest[0].(doc.List); ok {
 				need = float64(len(lines))*leadBody + after + r.listStart(l, 3)
@@ -1101,7 +1103,23 @@ func layoutFigureIn(f doc.Figure, num int, colW float64) figureLayout {
 // shrink) — what figure places it in.
 func (r *renderer) leastFigure(f doc.Figure) float64 {
 	fl := r.layoutFigure(f)
-	return minFigureScale*fl.h + (fl.total - fl.h)
+	return figureFloor(r.room(0))*fl.h + (fl.total - fl.h)
+}
+
+// deepFigureScale is how far a figure may shrink when moving it to the
+// next page would leave more than blankRoom of this page's text area
+// blank (a cross-section followed by a profile and its lead-in).
+const (
+	deepFigureScale = 0.64
+	blankRoom       = 0.30
+)
+
+// figureFloor is the least scale of a figure set in room.
+func figureFloor(room float64) float64 {
+	if room > blankRoom*(bodyBottom-bodyTop) {
+		return deepFigureScale
+	}
+	return minFigureScale
 }
 
 // tableStart is the height of a table's start that stays together: the
@@ -1134,9 +1152,14 @@ func (r *renderer) figure(f doc.Figure) {
 	} else {
 		r.fig++
 	}
+	floor := figureFloor(r.room(8))
+	if r.leadFloor > 0 {
+		floor = min(floor, r.leadFloor)
+		r.leadFloor = 0
+	}
 	if room := r.room(8); !r.fresh && fl.total > room {
 		capH := fl.total - fl.h
-		if k := (room - capH) / fl.h; k >= minFigureScale {
+		if k := (room - capH) / fl.h; k >= floor {
 			fl.w *= k
 			fl.h *= k
 			fl.total = fl.h + capH

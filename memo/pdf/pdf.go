@@ -195,6 +195,10 @@ func (r *renderer) lateText(s string, st textStyle, x, y float64) {
 var epoch = time.Date(2000, 1, 1, 0, 0, 0, 0, time.UTC)
 
 type renderer struct {
+	// leadFloor is the least scale of the figure a lead-in just set
+	// introduces, judged by the room above the lead-in (0: none).
+	leadFloor float64
+
 	pdf    *fpdf.Fpdf
 	fonts  *fontSet
 	meta   doc.Meta

@@ -1,0 +1,60 @@
+package memo
+
+import (
+	"path/filepath"
+	"regexp"
+	"strings"
+	"testing"
+
+	"gonum.org/v1/plot/vg/recorder"
+
+	"coilmemo/doc"
+)
+
+// TestSketchLabelsOneRule: every length written on a winding's sketch
+// (cross-section or plan, all designs) has three significant figures, so
+// "12 mm" never stands beside "2.000 mm".
+func TestSketchLabelsOneRule(t *testing.T) {
+	num := regexp.MustCompile(`([0-9][0-9.]*) mm`)
+	for _, f := range designFiles(t) {
+		j, _ := memoOf(t, f, false)
+		if j == nil {
+			continue
+		}
+		for _, b := range Compose(j).Blocks {
+			fig, ok := b.(doc.Figure)
+			if !ok || !(strings.HasPrefix(fig.Caption, "Cross-section of coil") || (strings.HasPrefix(fig.Caption, "Coil ") && strings.Contains(fig.Caption, " in plan,"))) {
+				continue
+			}
+			var c recorder.Canvas
+			fig.Draw(&c, fig.Width, fig.Height)
+			n := 0
+			for _, a := range c.Actions {
+				fs, ok := a.(*recorder.FillString)
+				if !ok {
+					continue
+				}
+				for _, m := range num.FindAllStringSubmatch(fs.String, -1) {
+					n++
+					if sig := sigDigits(m[1]); sig != 3 && !(sig < 3 && !strings.Contains(m[1], ".") && len(m[1]) >= 3) {
+						t.Errorf("%s: %q on the sketch has %d significant figures", filepath.Base(f), fs.String, sig)
+					}
+				}
+			}
+			if n == 0 {
+				t.Errorf("%s: no lengths on %q", filepath.Base(f), fig.Caption)
+			}
+		}
+	}
+}
+
+// sigDigits counts the significant figures of a decimal as written:
+// "0.950" 3, "25.0" 3, "300" 1 (trailing zeros of a whole number are not
+// counted).
+func sigDigits(s string) int {
+	d := strings.TrimLeft(strings.Replace(s, ".", "", 1), "0")
+	if !strings.Contains(s, ".") {
+		d = strings.TrimRight(d, "0")
+	}
+	return len(d)
+}
