@@ -324,6 +324,20 @@ func (r *renderer) paragraph(p doc.Paragraph) {
 			}
 		}
 	}
+	// A longer paragraph before a table that fits here while the table's
+	// start does not: its last two lines go over with the table, so that
+	// the table is not left without its introduction.
+	if r.depth == 0 && !r.fresh && len(r.rest) > 0 && len(lines) > leadInLines {
+		if t, ok := r.rest[0].(doc.Table); ok {
+			body := float64(len(lines)) * leadBody
+			if body <= r.room(0) && body+after+r.minHeight(t) > r.room(0) {
+				r.flowLines(lines[:len(lines)-2], styBody, 0, 0)
+				r.newPage()
+				r.flowLines(lines[len(lines)-2:], styBody, 0, after)
+				return
+			}
+		}
+	}
 	r.flowLines(lines, styBody, 0, after)
 }
 
