@@ -36,3 +36,38 @@ func TestACHeatingStepTakesTheDCPower(t *testing.T) {
 		t.Errorf("a.c. heating step %q does not show the d.c. power %s", line, want)
 	}
 }
+
+// An a.c. coil's implant caution says its 0.5 mT is the static figure
+// applied to the r.m.s. field and points to the time-varying caution,
+// which gives the ICNIRP (2010) levels at its frequency; a d.c. coil's
+// says neither.
+func TestImplantCautionOfAnACCoil(t *testing.T) {
+	dc := strings.Replace(acWinding, "frequency = 50 kHz\n", "", 1)
+	for _, c := range []struct {
+		src string
+		ac  bool
+	}{{acWinding, true}, {dc, false}} {
+		j, diags := evaluate("ac.md", []byte(c.src))
+		if len(diags) > 0 {
+			t.Fatal(diags)
+		}
+		var implant, exposure string
+		for _, co := range Cautions(j) {
+			switch {
+			case strings.HasPrefix(co.Title, "Field above 0.5 mT"):
+				implant = spanText(co.Spans)
+			case strings.HasPrefix(co.Title, "Time-varying field"):
+				exposure = spanText(co.Spans)
+			}
+		}
+		if implant == "" {
+			t.Fatalf("ac %v: no implant caution", c.ac)
+		}
+		if got := strings.Contains(implant, "static figure applied to the r.m.s. field"); got != c.ac {
+			t.Errorf("ac %v: implant caution notes the alternating field: %v", c.ac, got)
+		}
+		if got := strings.Contains(exposure, "27.0 µT") && strings.Contains(exposure, "100 µT"); got != c.ac {
+			t.Errorf("ac %v: time-varying caution with the 50 kHz levels: %v (%q)", c.ac, got, exposure)
+		}
+	}
+}

@@ -44,3 +44,23 @@ func surfaceLength(v float64) string {
 	s, _ := reachLength(v)
 	return s
 }
+
+// alternatingNote is the implant caution's word on a.c.-driven coils: its
+// 0.5 mT is the static-field figure, applied to their r.m.s. field; an
+// implant may respond to a time-varying field at far lower levels, which
+// the time-varying field caution takes up. "" when no coil is driven at a
+// frequency the exposure guidelines cover.
+func alternatingNote(j *analysis.Study) string {
+	var names []string
+	for _, e := range j.Safety.Exposure {
+		names = append(names, fmt.Sprintf("%q", j.Spec.Design.Coils[e.Coil].Name))
+	}
+	if len(names) == 0 {
+		return ""
+	}
+	what := "coil " + names[0] + " alternates"
+	if len(names) > 1 {
+		what = "coils " + joinAnd(names) + " alternate"
+	}
+	return " The field of " + what + ": for it the 0.5 mT is the static figure applied to the r.m.s. field, and implanted devices may respond to a time-varying field at far lower levels (see the time-varying field caution)."
+}

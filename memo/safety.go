@@ -67,7 +67,7 @@ func Cautions(j *analysis.Study) []doc.Callout {
 			}
 			rodEnds = nil
 			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Field above 0.5 mT: implanted medical devices",
-				Spans: []doc.Span{{Text: templates.Text("caution-implant", map[string]string{"Where": strings.Join(where, ", "), "Beyond": beyond, "Mark": implantMark(j.Cooling), "Unmodelled": unmodelledField(j)})}}})
+				Spans: []doc.Span{{Text: templates.Text("caution-implant", map[string]string{"Where": strings.Join(where, ", "), "Beyond": beyond, "Mark": implantMark(j.Cooling), "Unmodelled": unmodelledField(j), "Alternating": alternatingNote(j)})}}})
 		} else {
 			out = append(out, doc.Callout{Severity: doc.Note, Title: "Field near the winding",
 				Spans: []doc.Span{{Text: templates.Text("caution-implant-none", nil)}}})
