@@ -1196,7 +1196,7 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 	for _, p := range extra {
 		count(p)
 	}
-	for _, p := range turnedReaches(len(d.Coils), func(k int) (calc.Vec, bool) {
+	for _, p := range turnedReaches(len(d.Coils), axisymmetric(d), func(k int) (calc.Vec, bool) {
 		return res[k].point, res[k].ok && rays[k].turn
 	}, len(rays), func(k int) int { return rays[k].coil }, func(k int, u calc.Vec) (calc.Vec, bool) {
 		r := rays[k]
@@ -1290,48 +1290,57 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 	return wr
 }
 
+// axisymmetric reports whether d's field is symmetric about one winding's
+// axis: a single circular block (a rectangle's is not, and reaches
+// farthest over its corners, between its search planes).
+func axisymmetric(d calc.Design) bool {
+	return len(d.Coils) == 1 && d.Coils[0].Form != calc.Rectangle
+}
+
 // turnedReaches refines the search lines that leave the windings'
 // centres. They lie in each winding's meridian planes, where one circular
 // coil's field has all its extremes; where several coils' fields add, the
 // level can lie farther from every winding between those planes (three
-// coils on x, y and z reach farthest along a diagonal). From the line
-// that ended farthest from the windings for each block (up to eight
-// blocks, farthest first), a compass search turns the line about its
+// coils on x, y and z reach farthest along a diagonal; a rectangle over
+// its corners). From the line
+// that ended farthest from the windings — each block's three farthest,
+// the twelve farthest of those —, a compass search turns the line about its
 // centre — steps of 5° in eight directions across it, halved to 0.2° — to
 // where its point at the level lies farthest from the nearest outline
 // (TestImplantBoundHoldsOffTheMeridianPlanes). The points it ends at are
 // returned; along(k, u) is line k's point at the level in direction u,
 // dist a point's distance from the nearest outline.
-func turnedReaches(blocks int, found func(k int) (calc.Vec, bool), n int, coil func(k int) int,
+func turnedReaches(blocks int, symmetric bool, found func(k int) (calc.Vec, bool), n int, coil func(k int) int,
 	along func(k int, u calc.Vec) (calc.Vec, bool), dist func(calc.Vec) float64, dir func(k int) calc.Vec) []calc.Vec {
-	if blocks < 2 {
-		return nil // one block: its own planes hold its extremes
+	if symmetric {
+		return nil // one circular block: its own planes hold its extremes
 	}
-	best := make([]int, blocks)
-	bestD := make([]float64, blocks)
-	for i := range best {
-		best[i] = -1
+	// each block's three lines that ended farthest from the windings
+	type seed struct {
+		k int
+		d float64
 	}
+	per := make([][]seed, blocks)
 	for k := range n {
 		if p, ok := found(k); ok {
-			if v := dist(p); v > bestD[coil(k)] {
-				best[coil(k)], bestD[coil(k)] = k, v
-			}
+			i := coil(k)
+			per[i] = append(per[i], seed{k, dist(p)})
 		}
 	}
-	var seeds []int
-	for i, k := range best {
-		if k >= 0 {
-			seeds = append(seeds, i)
-		}
+	var all []seed
+	for _, ss := range per {
+		sort.Slice(ss, func(a, b int) bool { return ss[a].d > ss[b].d })
+		all = append(all, ss[:min(3, len(ss))]...)
 	}
-	sort.Slice(seeds, func(a, b int) bool { return bestD[seeds[a]] > bestD[seeds[b]] })
-	if len(seeds) > 8 {
-		seeds = seeds[:8]
+	sort.SliceStable(all, func(a, b int) bool { return all[a].d > all[b].d })
+	all = all[:min(12, len(all))]
+	seeds := make([]int, len(all))
+	for j, sd := range all {
+		seeds[j] = sd.k
 	}
 	out := make([]calc.Vec, len(seeds))
 	eachIndex(len(seeds), func(j int) {
-		k := best[seeds[j]]
+		k := seeds[j]
 		u := dir(k)
 		p, _ := found(k)
 		top := dist(p)

@@ -102,8 +102,14 @@ func evaluateCoil(c Coil, cond Conditions) CoilResult {
 		cr.Verdict = Judge(ThermalLimit(c), cr.Temperature, cy.Settled, cy.NoSolution).WithMelting(c.Wire.Material, cr.Temperature)
 		cr.Runaway = cr.Verdict.Runaway
 	}
+	cr.VoltagePeak = cr.Voltage
+	if cy := cr.Heat.Cycle; c.Drive == CurrentDrive && !(c.Frequency > 0) && c.OnTime > 0 && cy.Settled && cy.PeakMean > op.State.Mean {
+		cr.VoltagePeak = math.Abs(op.Current) * ResistanceAt(op.R20, op.Thermal.Alpha20, cy.PeakMean)
+	}
 	cr.SwitchOnCurrent = op.SwitchOnCurrent
-	cr.Switch = SwitchingFor(c, cond, cr.Inductance, op)
+	sw := op
+	sw.Voltage = math.Max(op.Voltage, cr.VoltagePeak) // the source's compliance at its highest
+	cr.Switch = SwitchingFor(c, cond, cr.Inductance, sw)
 	cr.Reactance = op.Reactance
 	cr.ACBounds = ACBoundsFor(c.Drive, c.Frequency, op.RHot, 2*math.Pi*c.Frequency*cr.Inductance)
 	// the impedance takes R_ac, the resistance the heat balance and a

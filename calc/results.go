@@ -30,15 +30,20 @@ type CoilResult struct {
 	Name    string
 	Winding Winding
 
-	R20        float64 // Ω at 20 °C, whole coil block (both coils of a pair in series)
-	RHot       float64 // Ω at the steady winding temperature
-	Current    float64 // A at the steady state
-	Voltage    float64 // V across the coil block at the steady state
-	Power      float64 // W dissipated at the steady state (× duty for the average)
-	Density    float64 // A/m², current density in the conductor
-	Mass       float64 // kg, conductor of the coil block
-	Length     float64 // m, wire length of the coil block
-	Inductance float64 // H, NaN when no method applies to the form
+	R20     float64 // Ω at 20 °C, whole coil block (both coils of a pair in series)
+	RHot    float64 // Ω at the steady winding temperature
+	Current float64 // A at the steady state
+	Voltage float64 // V across the coil block at the steady state
+	// VoltagePeak is the most a current source must deliver across the
+	// block, V: I·R at the on/off cycle's peak mean temperature, where the
+	// resistance is highest (d.c. current drive with on-time); else
+	// Voltage.
+	VoltagePeak float64
+	Power       float64 // W dissipated at the steady state (× duty for the average)
+	Density     float64 // A/m², current density in the conductor
+	Mass        float64 // kg, conductor of the coil block
+	Length      float64 // m, wire length of the coil block
+	Inductance  float64 // H, NaN when no method applies to the form
 
 	Moment         Vec     // A·m², m = I·ΣA along the axis (a pair: sum of both, 0 when opposing)
 	MomentMeanArea float64 // A·m², N·I·π·R_mean² per coil, the cross-check

@@ -43,7 +43,15 @@ func (c *composer) assumptions() {
 		forms[map[bool]string{true: "Rect", false: "Round"}[co.Form == calc.Rectangle]] = true
 		forms["Cored"] = forms["Cored"] || (i < len(c.j.Coils) && c.j.Coils[i].Kinds.Core != nil)
 	}
-	general("Filament model", templates.Text("assume-filament", forms))
+	filament := templates.Text("assume-filament", forms)
+	for _, co := range d.Coils {
+		if co.UnmodelledCore != "" {
+			// the surroundings are non-magnetic but for the part the
+			// designer leaves out (unmodelled-core)
+			filament = strings.TrimSuffix(strings.TrimSpace(filament), ".") + fmt.Sprintf(" — except the %[1]s of coil %[2]q, which sits in its bore in service and is not modelled (unmodelled-core): its inductance, stored energy, switching times and field are those of the coil without the %[1]s, lower bounds for the assembly.", co.UnmodelledCore, co.Name)
+		}
+	}
+	general("Filament model", filament)
 	if !c.receiverOnly() { // a pick-up coil is not heated
 		general("Cooling", coolingAssumption(d, c.j.Cooling))
 		general("Thermal model", templates.Text("assume-thermal", nil))
@@ -264,8 +272,8 @@ func thermalFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d cal
 	// Thermal-model range.
 	if st := cr.Heat.Steady; st.Settled && !cr.Verdict.NoSolution {
 		v := validity{what: "Thermal model"}
-		text := fmt.Sprintf("the resistance follows the winding's mean temperature %s linearly ($\\alpha_{20}$ of %s); heat crosses the turns with an effective conductivity of %s, so the hottest point is %s above the surface (%s); the insulation is judged at the hottest point",
-			Eng(Celsius(st.Mean), "°C", 3), co.Wire.Material.Name, Eng(cr.Heat.Conductivity, "W/(m·K)", 2), Eng(st.HotSpot-st.Surface, "K", 3), Eng(Celsius(st.Surface), "°C", 3))
+		text := fmt.Sprintf("the resistance follows the winding's mean temperature %s linearly ($\\alpha_{20}$ of %s); heat crosses the turns with an effective conductivity of %s, so the hottest point is %s above the surface (surface %s, hottest point %s); the insulation is judged at the hottest point",
+			Eng(Celsius(st.Mean), "°C", 3), co.Wire.Material.Name, Eng(cr.Heat.Conductivity, "W/(m·K)", 2), Eng(st.HotSpot-st.Surface, "K", 3), Eng(Celsius(st.Surface), "°C", 4), Eng(Celsius(st.HotSpot), "°C", 4))
 		if cv := st.Convection; cv.Ra > 0 {
 			if cv.InRange {
 				text += fmt.Sprintf("; the natural-convection correlation is used within its range (Rayleigh number %s)", Sci(cv.Ra, 2))

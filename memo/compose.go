@@ -246,6 +246,11 @@ func (c *composer) verdict() doc.Paragraph {
 			}
 		}
 	}
+	for _, co := range c.j.Spec.Design.Coils {
+		if co.UnmodelledCore != "" { // a part in the bore left out of the model
+			s = append(s, doc.Span{Text: fmt.Sprintf("Coil %q is calculated without its %s, which sits in its bore in service: its inductance, stored energy, switching times and field below are lower bounds for the assembly.", co.Name, co.UnmodelledCore)}, doc.Span{Text: " "})
+		}
+	}
 	for _, t := range c.bandShortfalls() { // pick-up coils: receiver.go
 		s = append(s, doc.Span{Text: t, Strong: true}, doc.Span{Text: " "})
 	}
@@ -408,6 +413,10 @@ func (c *composer) summaryTable() doc.Table {
 			if cr.AC.Frequency > 0 && !math.IsNaN(cr.AC.Voltage) && !c.j.Coils[i].Kinds.AboveResonance {
 				return Eng(cr.AC.Voltage, "V", 3) + " rms at " + Eng(cr.AC.Frequency, "Hz", 3)
 			}
+			if cr.VoltagePeak > cr.Voltage*(1+1e-9) {
+				// a current source must deliver the cycle's peak I·R
+				return Eng(cr.Voltage, "V", 3) + " (" + Eng(cr.VoltagePeak, "V", 3) + " at the cycle's peak)"
+			}
 			return Eng(cr.Voltage, "V", 3)
 		}),
 		row(powerLabel(r), func(_ int, cr calc.CoilResult) string { return Eng(cr.Power, "W", 3) }),
@@ -425,7 +434,12 @@ func (c *composer) summaryTable() doc.Table {
 			if cr.Verdict.AboveMelting {
 				return "above melting"
 			}
-			return Eng(Celsius(cr.Temperature), "°C", 3)
+			t := Eng(Celsius(cr.Temperature), "°C", 3)
+			if d.Coils[i].OnTime > 0 && cr.Temperature > cr.SteadyHotSpot*(1+1e-12) {
+				// the cycle's peak, not the duty-averaged steady state
+				t += " (cycle peak; " + Eng(Celsius(cr.SteadyHotSpot), "°C", 3) + " duty-averaged)"
+			}
+			return t
 		}),
 		row("Insulation", func(i int, cr calc.CoilResult) string {
 			return format.InsulationClass(d.Coils[i].InsulationClass)

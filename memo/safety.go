@@ -161,6 +161,13 @@ func hotSurfaceWords(j *analysis.Study, f analysis.Finding) string {
 	if wc := j.WorstCase; f.AtCorner && wc != nil {
 		s += " at " + handlingCorner(j, f.Corner) + ", against " + Eng(Celsius(f.Nominal), "°C", 3) + " at nominal"
 	}
+	if f.Cycle && f.Coil < len(j.Coils) {
+		// the duty cycle's peak is not the worst touch: a stuck driver
+		// leaves the coil on (the insulation caution's fault)
+		if st := j.Coils[f.Coil].Heat.Continuous; st.Settled && st.Surface > f.Value {
+			s += "; energised continuously (a stuck driver) it would settle at " + Eng(Celsius(st.Surface), "°C", 3) + " where it works"
+		}
+	}
 	return s
 }
 
@@ -170,7 +177,7 @@ func hotSurfaceWords(j *analysis.Study, f analysis.Finding) string {
 func handlingCorner(j *analysis.Study, h int) string {
 	wc := j.WorstCase
 	if j.Safety.Handling.AmbientHeld {
-		return fmt.Sprintf("corner %s of the other tolerances", wc.CornerNameWithout(h, "ambient"))
+		return fmt.Sprintf("the corner of the other tolerances (%s)", wc.CornerNameWithout(h, "ambient"))
 	}
 	return fmt.Sprintf("corner %s of the tolerances (%s)", cornerCode(wc, h), wc.CornerName(h))
 }
@@ -327,8 +334,11 @@ func implantWhere(j *analysis.Study) (where []string, beyond string) {
 		}
 		far, _ := reachLength(ir.Distance)
 		turned := ""
-		if len(d.Coils) > 1 {
+		switch {
+		case len(d.Coils) > 1:
 			turned = ", turned off those lines where the coils' fields add,"
+		case d.Coils[0].Form == calc.Rectangle:
+			turned = ", turned off those lines toward the corners,"
 		}
 		beyond = fmt.Sprintf(" Farther than %s from the outer surface of %s, its bore counted as part of it, the flux density stays below 0.5 mT; within a bore it may exceed 0.5 mT anywhere (the field of all coils counted; searched every 10° outward from the centre of each winding in two planes through its axis%s and along the axis from points round the ends of the conductors).", far, what, turned)
 	}

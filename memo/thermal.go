@@ -451,7 +451,7 @@ func warmUpText(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) string
 	if cs.Heat.CoreHeatCapacity > 0 {
 		src := ""
 		if cs.Heat.CoreSpecificHeatSource != "" {
-			src = " The core's specific heat is that of pure iron; the nickel–iron and silicon–iron of soft-magnetic cores lie close to it, while a ferrite has more (about 700–800 J/(kg·K)), so for a ferrite rod the warm-up runs faster than computed — state core-specific-heat for it."
+			src = " The core's specific heat is that of pure iron; the nickel–iron and silicon–iron of soft-magnetic cores lie close to it, while a ferrite has more (about 700–800 J/(kg·K)), so for a ferrite rod the warm-up runs slower than computed — state core-specific-heat for it."
 		}
 		b.WriteString("The core is taken to be in thermal contact with the winding's bore and to warm with the winding as one mass (an assumption: the contact is not modelled). A rod held apart from the winding (by an air gap or a thick insulating former) warms later, and the winding then faster than computed." + src + " ")
 	}

@@ -94,6 +94,7 @@ type CoilReport struct {
 	Current            Num    `json:"current_A"`
 	CurrentCold        Num    `json:"current_cold_A"`
 	Voltage            Num    `json:"voltage_V"`
+	VoltagePeak        Num    `json:"voltage_cycle_peak_V"`
 	Power              Num    `json:"power_W"`
 	WireLength         Num    `json:"wire_length_m"`
 	ConductorMass      Num    `json:"conductor_mass_kg"`
@@ -238,7 +239,7 @@ func Build(j *analysis.Study) Report {
 			Name: cr.Name, Form: analysis.FormName(co), Turns: co.Turns, UnmodelledCore: co.UnmodelledCore,
 			Moment: Num(cr.Moment.Norm()), MomentVector: vec(cr.Moment),
 			Resistance20C: Num(cr.R20), ResistanceHot: Num(cr.RHot),
-			Current: Num(cr.Current), CurrentCold: Num(cr.ColdCurrent), Voltage: Num(cr.Voltage), Power: Num(cr.Power),
+			Current: Num(cr.Current), CurrentCold: Num(cr.ColdCurrent), Voltage: Num(cr.Voltage), VoltagePeak: Num(cr.VoltagePeak), Power: Num(cr.Power),
 			WireLength: Num(cr.Length), ConductorMass: Num(cr.Mass), CurrentDensity: Num(cr.Density),
 			Inductance: Num(cr.Inductance), WindingTemperature: Num(format.Celsius(cr.Temperature)),
 			Runaway: runaway(co, cr), AboveClass: cr.Verdict.Runaway,
