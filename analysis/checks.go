@@ -481,7 +481,11 @@ func heatBalanceCheck(c calc.Coil, cr calc.CoilResult) []Check {
 		return nil
 	}
 	ta := tp.Ambient
-	return []Check{newCheck(c.Name, "rise of the hottest point above ambient", "lumped: surface balance, closed-form conduction rise",
+	state := "steady state"
+	if tp.Duty < 1 {
+		state = "duty-averaged steady state" // not the on/off cycle's peak
+	}
+	return []Check{newCheck(c.Name, "rise of the hottest point above ambient, "+state+" (checks the conduction inside the winding; the surface balance is shared)", "lumped: surface balance, closed-form conduction rise",
 		"finite-volume radial conduction, 400 rings (uniform heating at the mean temperature's resistance, same surface loss)", st.HotSpot-ta, fd.HotSpot-ta, "K", heatCheckTolerance)}
 }
 

@@ -34,9 +34,14 @@ type Dimension struct {
 
 // LengthLabel writes a length (m) for a dimension label of a sketch, in
 // millimetres to three significant figures ("25.0 mm", "8.25 mm",
-// "0.950 mm"): every dimension of the cross-section and of the plan read
-// alike, whatever the spec wrote.
+// "0.950 mm"), and to 0.1 mm from 100 mm up ("304.5 mm"), where three
+// figures would hide a build of a few millimetres between two diameters:
+// every dimension of the cross-section and of the plan read alike,
+// whatever the spec wrote.
 func LengthLabel(v float64) string {
+	if math.Abs(v) >= 0.1 {
+		return format.Sig(v*1e3, 4) + " mm"
+	}
 	return format.Sig(v*1e3, 3) + " mm"
 }
 

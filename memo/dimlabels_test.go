@@ -3,6 +3,7 @@ package memo
 import (
 	"path/filepath"
 	"regexp"
+	"strconv"
 	"strings"
 	"testing"
 
@@ -12,8 +13,10 @@ import (
 )
 
 // TestSketchLabelsOneRule: every length written on a winding's sketch
-// (cross-section or plan, all designs) has three significant figures, so
-// "12 mm" never stands beside "2.000 mm".
+// (cross-section or plan, all designs) has three significant figures
+// below 100 mm and a resolution of 0.1 mm from 100 mm up (so that a 4.45 mm
+// build shows between two 300 mm diameters), so "12 mm" never stands
+// beside "2.000 mm".
 func TestSketchLabelsOneRule(t *testing.T) {
 	num := regexp.MustCompile(`([0-9][0-9.]*) mm`)
 	for _, f := range designFiles(t) {
@@ -36,7 +39,11 @@ func TestSketchLabelsOneRule(t *testing.T) {
 				}
 				for _, m := range num.FindAllStringSubmatch(fs.String, -1) {
 					n++
-					if sig := sigDigits(m[1]); sig != 3 && !(sig < 3 && !strings.Contains(m[1], ".") && len(m[1]) >= 3) {
+					want := 3
+					if v, err := strconv.ParseFloat(m[1], 64); err == nil && v >= 100 {
+						want = 4
+					}
+					if sig := sigDigits(m[1]); sig != want && !(sig < want && !strings.Contains(m[1], ".") && len(m[1]) >= want) {
 						t.Errorf("%s: %q on the sketch has %d significant figures", filepath.Base(f), fs.String, sig)
 					}
 				}

@@ -295,7 +295,7 @@ func momentSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []Ste
 		last.Symbolic = strings.Replace(last.Symbolic, "B_0 = ", "B_w = ", 1)
 		last.What = strings.Replace(last.What, "Field at the centre", "Field of the winding alone at the centre", 1)
 		bw := cs.Kinds.AirField.Norm()
-		steps = append(steps, Step{What: "Field at the centre with the core: the winding's (above) plus the core's by the rod's pole model (core section)",
+		steps = append(steps, Step{What: "Field at the centre with the core: the winding's (above) plus the core's from the slice model's spread poles (core section)",
 			Symbolic: `B_0 = B_w + B_c`, Numbers: fmt.Sprintf(`%s + %s`, Q(bw, "T", 4), Q(cr.FieldCentre.Norm()-bw, "T", 4)),
 			Result: Q(cr.FieldCentre.Norm(), "T", 4)})
 	}

@@ -210,7 +210,7 @@ func (c *composer) tradeFigure(sz *analysis.Sizing) {
 	if gauges {
 		named = "each trace labelled with its wire gauge, AWG, at its top"
 	}
-	c.fig(doc.Figure{Caption: fmt.Sprintf("The choices searched: moment against %s, per wire (%s)", strings.ToLower(yName), named),
+	c.fig(doc.Figure{Caption: fmt.Sprintf("The choices searched: %s against moment, per wire (%s)", strings.ToLower(yName), named),
 		Width: figWidth, Height: figHeight * 0.8, Draw: figures.Trade(td)})
 }
 
