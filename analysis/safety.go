@@ -122,6 +122,10 @@ type ImplantReach struct {
 	AxialClear float64
 	AxialCoil  int
 	AxialBore  bool
+	// Sphere is set when the search lines from each winding's centre also
+	// ran along sphereDirections (a small set of coils, or a rectangle, whose
+	// corners they leave too).
+	Sphere bool
 	// AxialEnd is set when that far end lies beyond an end face of the
 	// outline, within its outer radius of its axis, and the search line
 	// runs along that axis: AxialClear is then its distance beyond that
@@ -657,6 +661,7 @@ func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach
 		}
 	}
 	ir.Windings = windingReaches(fm, d, r, coils, ext, points, conductorBounds(d, r, coils), ImplantField)
+	ir.Sphere = !axisymmetric(d) && len(d.Coils) <= sphereBlocks
 	for i, w := range ir.Windings {
 		if w.Distance > ir.Distance || (ir.Nearest < 0 && w.Surface >= ImplantField) {
 			ir.Distance, ir.Nearest = w.Distance, i
@@ -1119,9 +1124,28 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 		}
 		exits[i] = exit
 		for _, c := range centres {
-			for _, u := range reachDirections(co, fr) {
+			dirs := reachDirections(co, fr)
+			if !axisymmetric(d) && len(d.Coils) <= sphereBlocks {
+				dirs = append(dirs, sphereDirections...)
+			}
+			for _, u := range dirs {
 				t := exit(c, u)
 				rays = append(rays, ray{i, c.Add(u.Scale(t + gap)), u, c, true})
+			}
+		}
+		// A rectangle's field is strongest at its corners, where two sides
+		// add; over the inside of a corner the level reaches farther from
+		// the frame than any line from the centre shows. Lines leave each
+		// corner of the frame's centre line along sphereDirections too.
+		if co.Form == calc.Rectangle && len(d.Coils) <= sphereBlocks {
+			for _, sx := range []float64{1, -1} {
+				for _, sy := range []float64{1, -1} {
+					c := co.Centre.Add(fr.E1.Scale(sx * co.Width / 2)).Add(fr.E2.Scale(sy * co.Height / 2))
+					for _, u := range sphereDirections {
+						t := exit(c, u)
+						rays = append(rays, ray{i, c.Add(u.Scale(t + gap)), u, c, true})
+					}
+				}
 			}
 		}
 		// From the middle of each end face, at the mean radius, along the
@@ -1367,3 +1391,25 @@ func turnedReaches(blocks int, symmetric bool, found func(k int) (calc.Vec, bool
 	})
 	return out
 }
+
+// sphereBlocks is the most coil blocks whose search lines also leave each
+// winding's centre along sphereDirections: in a small set of coils on
+// several axes each block's reach may lie far from its own meridian
+// planes (a three-axis set's reach per coil, not only the set's bound),
+// where the turned search of a few lines may not climb; a large array's
+// blocks are many and alike, and its turned search suffices.
+const sphereBlocks = 4
+
+// sphereDirections are 162 directions spread evenly over the sphere (a
+// Fibonacci lattice, about 16° apart).
+var sphereDirections = func() []calc.Vec {
+	const n = 162
+	g := math.Pi * (3 - math.Sqrt(5))
+	out := make([]calc.Vec, n)
+	for k := range n {
+		z := 1 - (2*float64(k)+1)/n
+		s := math.Sqrt(1 - z*z)
+		out[k] = calc.Vec{s * math.Cos(g*float64(k)), s * math.Sin(g*float64(k)), z}
+	}
+	return out
+}()
