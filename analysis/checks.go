@@ -437,25 +437,7 @@ func numericCoilField(c calc.Coil, w calc.Winding, I float64, p calc.Vec) calc.V
 // started from the complementary modulus k' = u/√(4a² + u²) itself so that
 // close circles (k → 1) keep their precision. Written here, apart from
 // calc's elliptic integrals, so the check is independent of them.
-func ringMutual(a, u float64) float64 {
-	h := math.Sqrt(4*a*a + u*u)
-	k, kc := 2*a/h, u/h
-	an, bn := 1.0, kc
-	sum := 0.5 * k * k // Σ 2^(n−1) c_n², c_0 = k
-	pow := 0.5
-	for range 40 {
-		cn := (an - bn) / 2
-		an, bn = (an+bn)/2, math.Sqrt(an*bn)
-		pow *= 2
-		sum += pow * cn * cn
-		if cn < 1e-17*an {
-			break
-		}
-	}
-	K := math.Pi / (2 * an)
-	E := K * (1 - sum)
-	return calc.Mu0 * a * ((2/k-k)*K - 2/k*E)
-}
+func ringMutual(a, u float64) float64 { return ringMutualAB(a, a, u) }
 
 // heatBalanceCheck verifies the steady hot spot by a different method: a
 // finite-volume solve of the winding section's radial conduction

@@ -369,13 +369,7 @@ func requirementsVerdict(n, failed int) string {
 // winding), where the figure is the flux density in the core, μ0 (H + M);
 // an air coil's is the field at its centre.
 func centreLabel(j *analysis.Study, idx []int) string {
-	cored := 0
-	for _, i := range idx {
-		if j.Coils[i].Kinds.Core != nil {
-			cored++
-		}
-	}
-	switch {
+	switch cored := coredCount(j, idx); {
 	case cored == 0:
 		return "Field at own centre |B|"
 	case cored == len(idx):
@@ -792,4 +786,15 @@ func (c *composer) inputs() {
 		Header: []string{"Block", "Key", "As written", "In SI units", "Line"},
 		Rows:   rows, Widths: []float64{1, 1.5, 2, 2.2, 0.5},
 		Align: []doc.Align{doc.Left, doc.Left, doc.Left, doc.Left, doc.Right}})
+}
+
+// coredCount is how many of the coils idx have a core.
+func coredCount(j *analysis.Study, idx []int) int {
+	n := 0
+	for _, i := range idx {
+		if j.Coils[i].Kinds.Core != nil {
+			n++
+		}
+	}
+	return n
 }

@@ -513,13 +513,7 @@ func nonZero(v float64) float64 {
 // smallSignalLabel names the pick-up table's inductance row: with the core
 // for cored coils, said only where one of them has a core.
 func smallSignalLabel(j *analysis.Study, idx []int) string {
-	cored := 0
-	for _, i := range idx {
-		if j.Coils[i].Kinds.Core != nil {
-			cored++
-		}
-	}
-	switch {
+	switch cored := coredCount(j, idx); {
 	case cored == 0:
 		return "Inductance (small signal)"
 	case cored == len(idx):
