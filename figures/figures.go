@@ -115,7 +115,7 @@ func Drawer(p *plot.Plot, curves ...plotter.XYs) DrawFunc {
 // The returned function may be called any number of times, at any sizes:
 // the plot's legend backdrop is added once, here, and set per call.
 func drawer(p *plot.Plot, top vg.Length, curves []plotter.XYs) DrawFunc {
-	return drawerClear(p, top, curves, false)
+	return drawerClear(p, top, curves, true)
 }
 
 // drawerClear is drawer; with clear set, a legend that would cover some
@@ -274,8 +274,12 @@ func placeLegend(p *plot.Plot, dc draw.Canvas, curves []plotter.XYs) int {
 		}
 		r.Max = vg.Point{X: r.Min.X + size.X, Y: r.Min.Y + size.Y}
 		n := 0
+		// the legend is drawn on the data area widened by the axis
+		// padding (legendBox), so the box may stand that much farther
+		// out: a line along the data area's edge is under it too
+		mx, my := 4+p.X.Padding, 4+p.Y.Padding
 		for _, q := range pts {
-			if q.X >= r.Min.X-4 && q.X <= r.Max.X+4 && q.Y >= r.Min.Y-4 && q.Y <= r.Max.Y+4 {
+			if q.X >= r.Min.X-mx && q.X <= r.Max.X+mx && q.Y >= r.Min.Y-my && q.Y <= r.Max.Y+my {
 				n++
 			}
 		}

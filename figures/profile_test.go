@@ -1,6 +1,7 @@
 package figures
 
 import (
+	"gonum.org/v1/plot/plotter"
 	"image/color"
 	"math"
 	"strings"
@@ -166,5 +167,36 @@ func TestProfileLocalRequirement(t *testing.T) {
 	}
 	if !found {
 		t.Errorf("no bar of %v near the middle of the figure: %v", LocalBarWidth, local)
+	}
+}
+
+// A requirement line along the very top of the data area (the axis range
+// ending at it, as a sweep's temperature limit does) counts as under a
+// top-corner legend: the legend is drawn on the data area widened by the
+// axis padding, so it would stand over the line.
+func TestLegendAvoidsLineAtTheEdge(t *testing.T) {
+	var z, y []float64
+	for i := 0; i <= 60; i++ {
+		x := float64(i) / 60
+		z = append(z, x)
+		y = append(y, 0.9*x*x)
+	}
+	pl := NewPlot("x", "y")
+	curve := make(plotter.XYs, len(z))
+	for i := range z {
+		curve[i] = plotter.XY{X: z[i], Y: y[i]}
+	}
+	limit := plotter.XYs{{X: 0, Y: 1}, {X: 1, Y: 1}}
+	if ln := addCurve(pl, []plotter.XYs{limit}, lineStyle(Highlight, ThinWidth, Dashed)); ln != nil {
+		pl.Legend.Add("requirement", ln)
+	}
+	if ln := addCurve(pl, []plotter.XYs{curve}, lineStyle(Accent, LineWidth, nil)); ln != nil {
+		pl.Legend.Add("curve", ln)
+	}
+	pl.X.Min, pl.X.Max, pl.Y.Min, pl.Y.Max = 0, 1, 0, 1
+	var c recorder.Canvas
+	drawer(pl, 0, []plotter.XYs{curve, limit})(&c, 400, 220)
+	if pl.Legend.Top {
+		t.Errorf("legend top=%v left=%v: over the requirement along the top", pl.Legend.Top, pl.Legend.Left)
 	}
 }
