@@ -225,11 +225,20 @@ func (c *composer) verdict() doc.Paragraph {
 	limits := c.j.Limits
 	failedLimits, failedChecks := c.j.Failed()
 	var s []doc.Span
+	bandSaid := false
 	switch {
 	case len(limits) == 0:
 		s = append(s, doc.Span{Text: "The design is not held to stated requirements; the results below are its calculated performance. "})
 	default:
-		s = append(s, doc.Span{Text: requirementsVerdict(len(limits), failedLimits), Strong: true}, doc.Span{Text: " "})
+		v := requirementsVerdict(len(limits), failedLimits)
+		if sf := c.bandShortfalls(); failedLimits == 0 && len(sf) > 0 {
+			// a pick-up coil that meets its requirements but not its band:
+			// the verdict must not read as a clean pass, so the shortfall
+			// joins it (and is not said again below)
+			v = strings.TrimSuffix(v, ".") + ", but c" + strings.TrimPrefix(strings.Join(sf, " "), "C")
+			bandSaid = true
+		}
+		s = append(s, doc.Span{Text: v, Strong: true}, doc.Span{Text: " "})
 	}
 	if w := c.worstVerdict(); w != "" {
 		s = append(s, doc.Span{Text: w})
@@ -252,7 +261,9 @@ func (c *composer) verdict() doc.Paragraph {
 		}
 	}
 	for _, t := range c.bandShortfalls() { // pick-up coils: receiver.go
-		s = append(s, doc.Span{Text: t, Strong: true}, doc.Span{Text: " "})
+		if !bandSaid {
+			s = append(s, doc.Span{Text: t, Strong: true}, doc.Span{Text: " "})
+		}
 	}
 	for _, cr := range r.Coils {
 		switch {

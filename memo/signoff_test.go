@@ -56,3 +56,15 @@ func TestPlungerCaveatAndStuckSurface(t *testing.T) {
 		t.Errorf("the hot-surface caution does not give the stuck-on surface %q", want)
 	}
 }
+
+// The search coil meets its stated requirements but does not cover its
+// stated band: page 1's bold verdict says both, so it does not read as a
+// clean pass.
+func TestVerdictOfAReceiverShortOfItsBand(t *testing.T) {
+	j, text := memoOf(t, "../examples/search-coil.md", true)
+	failed, _ := j.Failed()
+	page1 := text[:strings.Index(text, "Purpose")]
+	if failed != 0 || !strings.Contains(page1, "requirements are met, but coil \"search coil\" does not cover its stated band") {
+		t.Errorf("%d requirements failed; page 1 verdict: %q", failed, page1[:min(len(page1), 600)])
+	}
+}
