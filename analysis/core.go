@@ -211,15 +211,8 @@ func coredSwitching(c calc.Coil, cr calc.CoilResult, cond calc.Conditions) calc.
 	if c.Drive == calc.VoltageDrive {
 		rCold = calc.ResistanceAt(cr.R20, c.Wire.Material.Alpha20, calc.ColdTemperature(cond))
 	}
-	I, Iw, V := cr.Current, cr.SwitchOnCurrent, cr.Voltage
-	if c.Frequency > 0 && !math.IsInf(c.Frequency, 0) { // at the a.c. peak, as calc.SwitchingFor
-		I, Iw = math.Sqrt2*I, math.Sqrt2*Iw
-		if c.Drive == calc.VoltageDrive {
-			V = math.Sqrt2 * c.Voltage
-		} else {
-			V = I * math.Hypot(cr.RHot*calc.HeatingACFactor(c, cr.Winding, cr.Heat.Steady.Mean), 2*math.Pi*c.Frequency*cr.Inductance)
-		}
-	}
+	// at the a.c. peak, as calc.SwitchingFor
+	I, Iw, V := calc.ACPeak(c, cr.Current, cr.SwitchOnCurrent, cr.Voltage, cr.RHot*calc.HeatingACFactor(c, cr.Winding, cr.Heat.Steady.Mean), cr.Inductance)
 	return calc.SwitchingWorst(cr.Inductance, cr.RHot, rCold, I, Iw, V, c.SwitchOff, c.DriverRating, c.Drive == calc.VoltageDrive)
 }
 

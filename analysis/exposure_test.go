@@ -3,8 +3,6 @@ package analysis
 import (
 	"math"
 	"testing"
-
-	"coilmemo/calc"
 )
 
 // A 50 kHz three-layer drive coil at 0.5 A r.m.s.: its field against the
@@ -28,16 +26,11 @@ func TestACExposureDistances(t *testing.T) {
 	}
 	fm := implantField(st.Spec.Design, st.Coils)
 	os := outlines(st.Spec.Design, st.Coils)
-	golden := math.Pi * (3 - math.Sqrt(5))
 	for _, c := range []struct {
 		level, dist float64
 	}{{e.Public, e.PublicDistance}, {e.Occupational, e.OccupationalDistance}} {
 		beyond, within := 0.0, 0.0
-		const n = 400
-		for k := range n {
-			z := 1 - (2*float64(k)+1)/n
-			s := math.Sqrt(1 - z*z)
-			u := calc.Vec{s * math.Cos(golden*float64(k)), s * math.Sin(golden*float64(k)), z}
+		for _, u := range fibonacciSphere(400) {
 			for r := 0.0005; r <= 1; r += 0.0005 {
 				p := u.Scale(r)
 				d, _, _ := nearestOutline(os, p)

@@ -661,7 +661,7 @@ func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach
 		}
 	}
 	ir.Windings = windingReaches(fm, d, r, coils, ext, points, conductorBounds(d, r, coils), ImplantField)
-	ir.Sphere = !axisymmetric(d) && len(d.Coils) <= sphereBlocks
+	ir.Sphere = sphereSearched(d)
 	for i, w := range ir.Windings {
 		if w.Distance > ir.Distance || (ir.Nearest < 0 && w.Surface >= ImplantField) {
 			ir.Distance, ir.Nearest = w.Distance, i
@@ -1125,7 +1125,7 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 		exits[i] = exit
 		for _, c := range centres {
 			dirs := reachDirections(co, fr)
-			if !axisymmetric(d) && len(d.Coils) <= sphereBlocks {
+			if sphereSearched(d) {
 				dirs = append(dirs, sphereDirections...)
 			}
 			for _, u := range dirs {
@@ -1137,7 +1137,7 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 		// add; over the inside of a corner the level reaches farther from
 		// the frame than any line from the centre shows. Lines leave each
 		// corner of the frame's centre line along sphereDirections too.
-		if co.Form == calc.Rectangle && len(d.Coils) <= sphereBlocks {
+		if co.Form == calc.Rectangle && sphereSearched(d) {
 			for _, sx := range []float64{1, -1} {
 				for _, sy := range []float64{1, -1} {
 					c := co.Centre.Add(fr.E1.Scale(sx * co.Width / 2)).Add(fr.E2.Scale(sy * co.Height / 2))
@@ -1177,6 +1177,29 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 	}
 	res := make([]found, len(rays))
 	far := math.Max(ext, 1e-3) * 1e3
+	// reachLimit is how far along a line from at the level is looked
+	// for: beyond the sphere of radius ext about the origin by more than
+	// √(bound/level), no conductor is near enough to give the level.
+	reachLimit := func(at calc.Vec) float64 {
+		if bound > 0 {
+			return math.Min(far, at.Norm()+ext+math.Sqrt(bound/lvl))
+		}
+		return far
+	}
+	// crossing is the farthest point at the level on the line from at
+	// along u, up to lim, with |B| = b at its start; the first guess is
+	// that field falling as a dipole's, as the cube of the distance from
+	// from, the centre of the block it leaves.
+	crossing := func(at, u, from calc.Vec, b, lim float64) (calc.Vec, bool) {
+		guess := 0.0
+		if d0 := at.Sub(from).Norm(); b > lvl && d0 > 0 {
+			guess = d0 * (math.Cbrt(b/lvl) - 1)
+		}
+		if t := reachFrom(fast, at, u, lvl, gap, lim, guess); t > 0 {
+			return at.Add(u.Scale(t)), true
+		}
+		return calc.Vec{}, false
+	}
 	eachIndex(len(rays), func(k int) {
 		r := rays[k]
 		b := fm(r.at).Norm()
@@ -1186,24 +1209,11 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 		if !insideOther(os, r.coil, r.at) {
 			res[k].surface = b
 		}
-		lim := far
-		if bound > 0 {
-			// beyond the sphere of radius ext about the origin by more than
-			// √(bound/level), no conductor is near enough to give the level
-			lim = math.Min(far, r.at.Norm()+ext+math.Sqrt(bound/lvl))
-		}
+		lim := reachLimit(r.at)
 		if len(d.Coils) > 1 && convexAlone[r.coil] && !sampleEveryLine {
 			lim = ownStretch(os, r.coil, r.at, r.dir, gap, lim)
 		}
-		// first guess: the surface field falling as a dipole's, as the
-		// cube of the distance from the block's centre
-		guess := 0.0
-		if d0 := r.at.Sub(d.Coils[r.coil].Centre).Norm(); b > lvl && d0 > 0 {
-			guess = d0 * (math.Cbrt(b/lvl) - 1)
-		}
-		if t := reachFrom(fast, r.at, r.dir, lvl, gap, lim, guess); t > 0 {
-			res[k].point, res[k].ok = r.at.Add(r.dir.Scale(t)), true
-		}
+		res[k].point, res[k].ok = crossing(r.at, r.dir, d.Coils[r.coil].Centre, b, lim)
 	})
 	wr := make([]WindingReach, len(d.Coils))
 	count := func(p calc.Vec) {
@@ -1220,26 +1230,20 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 	for _, p := range extra {
 		count(p)
 	}
-	for _, p := range turnedReaches(len(d.Coils), axisymmetric(d), func(k int) (calc.Vec, bool) {
-		return res[k].point, res[k].ok && rays[k].turn
-	}, len(rays), func(k int) int { return rays[k].coil }, func(k int, u calc.Vec) (calc.Vec, bool) {
-		r := rays[k]
-		at := r.centre.Add(u.Scale(exits[r.coil](r.centre, u) + gap))
-		b := fast(at).Norm()
-		guess := 0.0
-		if d0 := at.Sub(r.centre).Norm(); b > lvl && d0 > 0 {
-			guess = d0 * (math.Cbrt(b/lvl) - 1)
+	if !axisymmetric(d) {
+		lines := make([]turnLine, len(rays))
+		for k, r := range rays {
+			lines[k] = turnLine{coil: r.coil, dir: r.dir, point: res[k].point, ok: res[k].ok && r.turn}
 		}
-		lim := far
-		if bound > 0 {
-			lim = math.Min(far, at.Norm()+ext+math.Sqrt(bound/lvl))
+		along := func(k int, u calc.Vec) (calc.Vec, bool) {
+			r := rays[k]
+			at := r.centre.Add(u.Scale(exits[r.coil](r.centre, u) + gap))
+			return crossing(at, u, r.centre, fast(at).Norm(), reachLimit(at))
 		}
-		if t := reachFrom(fast, at, u, lvl, gap, lim, guess); t > 0 {
-			return at.Add(u.Scale(t)), true
+		dist := func(p calc.Vec) float64 { dd, _, _ := nearestOutline(os, p); return dd }
+		for _, p := range turnedReaches(len(d.Coils), lines, along, dist) {
+			count(p)
 		}
-		return calc.Vec{}, false
-	}, func(p calc.Vec) float64 { dd, _, _ := nearestOutline(os, p); return dd }, func(k int) calc.Vec { return rays[k].dir }) {
-		count(p)
 	}
 	// The lines sample the outer surface at a few places only; the field
 	// there peaks near the rims, between them. A solid winding's surface
@@ -1314,6 +1318,14 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 	return wr
 }
 
+// turnLine is one search line as turnedReaches takes it: its block, its
+// direction and, when ok, its point at the level.
+type turnLine struct {
+	coil       int
+	dir, point calc.Vec
+	ok         bool
+}
+
 // axisymmetric reports whether d's field is symmetric about one winding's
 // axis: a single circular block (a rectangle's is not, and reaches
 // farthest over its corners, between its search planes).
@@ -1333,22 +1345,18 @@ func axisymmetric(d calc.Design) bool {
 // where its point at the level lies farthest from the nearest outline
 // (TestImplantBoundHoldsOffTheMeridianPlanes). The points it ends at are
 // returned; along(k, u) is line k's point at the level in direction u,
-// dist a point's distance from the nearest outline.
-func turnedReaches(blocks int, symmetric bool, found func(k int) (calc.Vec, bool), n int, coil func(k int) int,
-	along func(k int, u calc.Vec) (calc.Vec, bool), dist func(calc.Vec) float64, dir func(k int) calc.Vec) []calc.Vec {
-	if symmetric {
-		return nil // one circular block: its own planes hold its extremes
-	}
+// dist a point's distance from the nearest outline. (A single circular
+// block is not turned: its own planes hold its extremes.)
+func turnedReaches(blocks int, lines []turnLine, along func(k int, u calc.Vec) (calc.Vec, bool), dist func(calc.Vec) float64) []calc.Vec {
 	// each block's three lines that ended farthest from the windings
 	type seed struct {
 		k int
 		d float64
 	}
 	per := make([][]seed, blocks)
-	for k := range n {
-		if p, ok := found(k); ok {
-			i := coil(k)
-			per[i] = append(per[i], seed{k, dist(p)})
+	for k, l := range lines {
+		if l.ok {
+			per[l.coil] = append(per[l.coil], seed{k, dist(l.point)})
 		}
 	}
 	var all []seed
@@ -1365,8 +1373,7 @@ func turnedReaches(blocks int, symmetric bool, found func(k int) (calc.Vec, bool
 	out := make([]calc.Vec, len(seeds))
 	eachIndex(len(seeds), func(j int) {
 		k := seeds[j]
-		u := dir(k)
-		p, _ := found(k)
+		u, p := lines[k].dir, lines[k].point
 		top := dist(p)
 		for h := math.Tan(5 * math.Pi / 180); h > math.Tan(0.2*math.Pi/180); {
 			e1, e2 := calc.CoilFrame(u).E1, calc.CoilFrame(u).E2
@@ -1400,16 +1407,25 @@ func turnedReaches(blocks int, symmetric bool, found func(k int) (calc.Vec, bool
 // blocks are many and alike, and its turned search suffices.
 const sphereBlocks = 4
 
-// sphereDirections are 162 directions spread evenly over the sphere (a
-// Fibonacci lattice, about 16° apart).
-var sphereDirections = func() []calc.Vec {
-	const n = 162
+// sphereSearched reports whether d's search lines also run along
+// sphereDirections: a small set of coils, or a rectangle, whose field is
+// not symmetric about one axis.
+func sphereSearched(d calc.Design) bool { return !axisymmetric(d) && len(d.Coils) <= sphereBlocks }
+
+// sphereDirections are 162 directions spread evenly over the sphere,
+// about 16° apart.
+var sphereDirections = fibonacciSphere(162)
+
+// fibonacciSphere is n unit vectors spread evenly over the sphere: the
+// Fibonacci lattice, z = 1 − (2k + 1)/n and azimuth k times the golden
+// angle π(3 − √5).
+func fibonacciSphere(n int) []calc.Vec {
 	g := math.Pi * (3 - math.Sqrt(5))
 	out := make([]calc.Vec, n)
 	for k := range n {
-		z := 1 - (2*float64(k)+1)/n
+		z := 1 - (2*float64(k)+1)/float64(n)
 		s := math.Sqrt(1 - z*z)
 		out[k] = calc.Vec{s * math.Cos(g*float64(k)), s * math.Sin(g*float64(k)), z}
 	}
 	return out
-}()
+}

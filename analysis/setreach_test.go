@@ -37,11 +37,7 @@ func checkReachBySweep(t *testing.T, src string, n int, step, rmax float64) {
 	os := outlines(st.Spec.Design, st.Coils)
 	worst, at := 0.0, calc.Vec{}
 	perCoil := make([]float64, len(ir.Windings)) // farthest point at the level nearest each winding
-	golden := math.Pi * (3 - math.Sqrt(5))
-	for k := range n {
-		z := 1 - (2*float64(k)+1)/float64(n)
-		s := math.Sqrt(1 - z*z)
-		u := calc.Vec{s * math.Cos(golden*float64(k)), s * math.Sin(golden*float64(k)), z}
+	for _, u := range fibonacciSphere(n) {
 		for r := step; r <= rmax; r += step {
 			p := u.Scale(r)
 			d, c, _ := nearestOutline(os, p)

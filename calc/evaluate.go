@@ -146,14 +146,23 @@ func SwitchingFor(c Coil, cond Conditions, L float64, op Operating) SwitchResult
 	if c.Drive == CurrentDrive {
 		Rcold = op.RHot
 	}
-	I, Iw, V := op.Current, op.SwitchOnCurrent, op.Voltage
-	if c.Frequency > 0 && !math.IsInf(c.Frequency, 0) {
-		I, Iw = math.Sqrt2*I, math.Sqrt2*Iw
-		if c.Drive == VoltageDrive {
-			V = math.Sqrt2 * c.Voltage
-		} else {
-			V = I * math.Hypot(op.RHot*op.Thermal.acFactor(), 2*math.Pi*c.Frequency*L)
-		}
-	}
+	I, Iw, V := ACPeak(c, op.Current, op.SwitchOnCurrent, op.Voltage, op.RHot*op.Thermal.acFactor(), L)
 	return SwitchingWorst(L, op.RHot, Rcold, I, Iw, V, c.SwitchOff, c.DriverRating, c.Drive == VoltageDrive)
+}
+
+// ACPeak returns the currents I, Iw (A) and supply V (V) a switch meets
+// when it opens coil block c at the peak of an a.c. drive: √2 times the
+// r.m.s. currents, and the drive's peak voltage, √2 times the stated one
+// under voltage drive or I_pk·|Z|, |Z| = √(R_ac² + (2πfL)²), under
+// current drive (R_ac Ω, L H). Without a frequency they are returned as
+// given (d.c.).
+func ACPeak(c Coil, I, Iw, V, rac, L float64) (float64, float64, float64) {
+	if !(c.Frequency > 0) || math.IsInf(c.Frequency, 0) {
+		return I, Iw, V
+	}
+	I, Iw = math.Sqrt2*I, math.Sqrt2*Iw
+	if c.Drive == VoltageDrive {
+		return I, Iw, math.Sqrt2 * c.Voltage
+	}
+	return I, Iw, I * math.Hypot(rac, 2*math.Pi*c.Frequency*L)
 }

@@ -13,6 +13,9 @@ import (
 // level, a note where it stays below it.
 func exposureCautions(j *analysis.Study) []doc.Callout {
 	var out []doc.Callout
+	// distances from a surface read as the implant caution's (two
+	// figures, rounded up)
+	reach := func(v float64) string { s, _ := reachLength(v); return s }
 	for _, e := range j.Safety.Exposure {
 		co, cr := j.Spec.Design.Coils[e.Coil], j.Results.Coils[e.Coil]
 		name := fmt.Sprintf("coil %q", co.Name)
@@ -29,20 +32,13 @@ func exposureCautions(j *analysis.Study) []doc.Callout {
 		}
 		occ := "stays below the occupational level outside the winding"
 		if e.OccupationalDistance > 0 {
-			occ = "exceeds the occupational level as far as " + surfaceLength(e.OccupationalDistance)
+			occ = "exceeds the occupational level as far as " + reach(e.OccupationalDistance)
 		}
 		text := levels + fmt.Sprintf(". At its %s r.m.s. current its own field exceeds the public level as far as %s from the winding's outer surface (at the surface it reaches up to %s) and %s. Keep people who are not occupationally exposed farther than %s from the winding while it is energised; where people work closer, assess their exposure against the guidelines' basic restrictions, for which the reference levels are a conservative screen. Active implanted devices may be affected at lower levels: follow their makers' guidance.%s",
-			Eng(cr.Current, "A", 3), surfaceLength(e.PublicDistance), Eng(e.Surface, "T", 3), occ, surfaceLength(e.PublicDistance), rf)
+			Eng(cr.Current, "A", 3), reach(e.PublicDistance), Eng(e.Surface, "T", 3), occ, reach(e.PublicDistance), rf)
 		out = append(out, doc.Callout{Severity: doc.Warning, Title: "Time-varying field: exposure of people, " + name, Spans: []doc.Span{{Text: text}}})
 	}
 	return out
-}
-
-// surfaceLength words a distance from a winding's surface as the
-// implant caution does (reachLength: two figures, rounded up).
-func surfaceLength(v float64) string {
-	s, _ := reachLength(v)
-	return s
 }
 
 // alternatingNote is the implant caution's word on a.c.-driven coils: its

@@ -341,10 +341,11 @@ func implantWhere(j *analysis.Study) (where []string, beyond string) {
 			turned = ", turned off those lines toward the corners,"
 		}
 		if ir.Sphere {
-			turned = " and along 162 directions spread over the sphere" + turned
+			from := ""
 			if slices.ContainsFunc(d.Coils, func(co calc.Coil) bool { return co.Form == calc.Rectangle }) {
-				turned = " and along 162 directions spread over the sphere from it and from each corner of a rectangle" + strings.TrimPrefix(turned, " and along 162 directions spread over the sphere")
+				from = " from it and from each corner of a rectangle"
 			}
+			turned = " and along 162 directions spread over the sphere" + from + turned
 		}
 		beyond = fmt.Sprintf(" Farther than %s from the outer surface of %s, its bore counted as part of it, the flux density stays below 0.5 mT; within a bore it may exceed 0.5 mT anywhere (the field of all coils counted; searched every 10° outward from the centre of each winding in two planes through its axis%s and along the axis from points round the ends of the conductors).", far, what, turned)
 	}
