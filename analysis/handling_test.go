@@ -16,11 +16,7 @@ import (
 // service worst corner (60 °C ambient) and its rise above the ambient
 // stays close to the nominal design's rise at 20 °C.
 func TestHandlingAmbientVacuum(t *testing.T) {
-	src, err := os.ReadFile("../examples/torque-coil.md")
-	if err != nil {
-		t.Fatal(err)
-	}
-	st := studyOf(t, string(src))
+	st := exampleStudy(t, "torque-coil.md")
 	hd := st.Safety.Handling
 	if hd.Service || hd.Stated || !hd.AmbientHeld || math.Abs(calc.KelvinToCelsius(hd.Ambient)-25) > 1e-9 {
 		t.Fatalf("handling %+v: want a room at 25 °C, the ambient tolerance held", hd)

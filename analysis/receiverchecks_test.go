@@ -2,7 +2,6 @@ package analysis
 
 import (
 	"math"
-	"os"
 	"strings"
 	"testing"
 
@@ -31,14 +30,7 @@ func TestRingMutualAB(t *testing.T) {
 // model read twice), and the receiver has its sensitivity, self-resonance
 // and band-noise rows, each against a method named in its row.
 func TestSearchCoilChecks(t *testing.T) {
-	src, err := os.ReadFile("../examples/search-coil.md")
-	if err != nil {
-		t.Fatal(err)
-	}
-	st, ds := Run("search-coil.md", src, Options{})
-	if len(ds) > 0 {
-		t.Fatal(ds.Error())
-	}
+	st := exampleStudy(t, "search-coil.md")
 	seen := map[string]bool{}
 	for _, k := range st.Checks {
 		switch {
@@ -67,14 +59,7 @@ func TestSearchCoilChecks(t *testing.T) {
 // the self-resonance finds a wrong capacitance's frequency, the loop's
 // flux linkage a wrong area's.
 func TestReceiverChecksCatchAWrongFigure(t *testing.T) {
-	src, err := os.ReadFile("../examples/search-coil.md")
-	if err != nil {
-		t.Fatal(err)
-	}
-	st, ds := Run("search-coil.md", src, Options{})
-	if len(ds) > 0 {
-		t.Fatal(ds.Error())
-	}
+	st := exampleStudy(t, "search-coil.md")
 	d := st.Spec.Design
 	air := calc.Evaluate(d)
 	kinds := studyKinds(d, air)

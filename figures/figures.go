@@ -179,13 +179,7 @@ func (b *legendBackdrop) Plot(c draw.Canvas, p *plot.Plot) {
 	if !b.on {
 		return
 	}
-	// The legend is laid out in the data area without axis padding.
-	lc := c
-	lc.Min.X -= p.X.Padding
-	lc.Max.X += p.X.Padding
-	lc.Min.Y -= p.Y.Padding
-	lc.Max.Y += p.Y.Padding
-	r := legendBox(p, lc)
+	r := legendBox(p, legendCanvas(p, c))
 	const m = 2
 	r.Max = vg.Point{X: r.Max.X + m, Y: r.Max.Y + m}
 	r.Min = vg.Point{X: r.Min.X - m, Y: r.Min.Y - m}
@@ -193,8 +187,18 @@ func (b *legendBackdrop) Plot(c draw.Canvas, p *plot.Plot) {
 	c.Fill(r.Path())
 }
 
+// legendCanvas is the canvas p's legend is laid out on: the data area c
+// widened by the axis padding, which the legend ignores.
+func legendCanvas(p *plot.Plot, c draw.Canvas) draw.Canvas {
+	c.Min.X -= p.X.Padding
+	c.Max.X += p.X.Padding
+	c.Min.Y -= p.Y.Padding
+	c.Max.Y += p.Y.Padding
+	return c
+}
+
 // legendBox is where p's legend is drawn on lc, the data area widened by
-// the axis padding.
+// the axis padding (legendCanvas).
 func legendBox(p *plot.Plot, lc draw.Canvas) vg.Rectangle {
 	l := p.Legend
 	size := l.Rectangle(lc).Size()
@@ -275,7 +279,7 @@ func placeLegend(p *plot.Plot, dc draw.Canvas, curves []plotter.XYs) int {
 		r.Max = vg.Point{X: r.Min.X + size.X, Y: r.Min.Y + size.Y}
 		n := 0
 		// the legend is drawn on the data area widened by the axis
-		// padding (legendBox), so the box may stand that much farther
+		// padding (legendCanvas), so the box may stand that much farther
 		// out: a line along the data area's edge is under it too
 		mx, my := 4+p.X.Padding, 4+p.Y.Padding
 		for _, q := range pts {

@@ -97,12 +97,7 @@ func TestTradeLegendClear(t *testing.T) {
 			dc := draw.Canvas{Canvas: &rc, Rectangle: vg.Rectangle{Max: vg.Point{X: 400, Y: 240}}}
 			pc := placeLegendClear(p, dc, curves, true)
 			da := p.DataCanvas(pc)
-			lc := da
-			lc.Min.X -= p.X.Padding
-			lc.Max.X += p.X.Padding
-			lc.Min.Y -= p.Y.Padding
-			lc.Max.Y += p.Y.Padding
-			box := legendBox(p, lc)
+			box := legendBox(p, legendCanvas(p, da))
 			if in := box.Min.X < da.Max.X; in != tc.inside {
 				t.Errorf("legend inside the data area %v, want %v", in, tc.inside)
 			}
