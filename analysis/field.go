@@ -522,6 +522,9 @@ type DesignStudy struct {
 	// xz-plane through the origin, π/2 for a crossing at right angles;
 	// NaN where it does not cross it, 0 where it lies in it.
 	Crossing []float64
+	// Nested are the windings that lie in another's bore (nested.go),
+	// whose heat balances, each taken alone, understate their temperatures.
+	Nested []Nesting
 }
 
 // planeCrossing is DesignStudy.Crossing of coil co: its mean turn (every

@@ -747,6 +747,7 @@ type outline struct {
 	z0, z1 float64 // axial extent about centre
 	r      float64 // bundle radius (round rim, rectangle)
 	reach  float64 // radius of a sphere about centre that holds the outline
+	core   bool    // a rod's core, not a winding
 }
 
 // distance is the distance, m, from p to the outline (0 inside it), and
@@ -799,7 +800,7 @@ func coilOutlines(i int, co calc.Coil, cs CoilStudy) []outline {
 		}
 		if cs.Kinds.Core != nil && co.Core.Length > 0 && co.Core.Diameter > 0 {
 			out = append(out, outline{coil: i, centre: co.Centre, fr: fr, r1: co.Core.Diameter / 2,
-				z0: -co.Core.Length / 2, z1: co.Core.Length / 2})
+				z0: -co.Core.Length / 2, z1: co.Core.Length / 2, core: true})
 		}
 	}
 	for k := range out {

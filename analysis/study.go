@@ -121,6 +121,7 @@ func Analyse(s *spec.Spec, o Options) *Study {
 		coreStudy(&st.Coils[i], c, &st.Results.Coils[i], kinds[i].Core, o.MapNodes) // the core in the field figures: analysis/core.go
 	}
 	st.Design = analyseDesign(s.Design, st.Results, o.MapNodes)
+	st.Design.Nested = nestings(s.Design, st.Coils)
 	st.Checks = append(Verify(s.Design, air), kindChecks(s.Design, air, kinds)...)
 	st.Sweep = RunSweep(s)
 	st.WorstCase = AnalyseWorstCase(s, st.Results, st.Limits)

@@ -53,7 +53,11 @@ func (c *composer) assumptions() {
 	}
 	general("Filament model", filament)
 	if !c.receiverOnly() { // a pick-up coil is not heated
-		general("Cooling", coolingAssumption(d, c.j.Cooling))
+		cooling := coolingAssumption(d, c.j.Cooling)
+		for _, t := range c.nestedTexts() {
+			cooling += " " + t
+		}
+		general("Cooling", cooling)
 		general("Thermal model", templates.Text("assume-thermal", nil))
 	}
 	c.add(doc.List{Items: items})

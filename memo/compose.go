@@ -260,6 +260,9 @@ func (c *composer) verdict() doc.Paragraph {
 			s = append(s, doc.Span{Text: fmt.Sprintf("Coil %q is calculated without its %s, which sits in its bore in service: its inductance, stored energy, switching times and field below are lower bounds for the assembly.", co.Name, co.UnmodelledCore)}, doc.Span{Text: " "})
 		}
 	}
+	for _, t := range c.nestedTexts() { // nested.go
+		s = append(s, doc.Span{Text: t}, doc.Span{Text: " "})
+	}
 	for _, t := range c.bandShortfalls() { // pick-up coils: receiver.go
 		if !bandSaid {
 			s = append(s, doc.Span{Text: t, Strong: true}, doc.Span{Text: " "})

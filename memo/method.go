@@ -54,6 +54,33 @@ func (c *composer) method() {
 	}
 }
 
+// coldCurrentSteps derives a voltage-driven winding's current when cold:
+// at 20 °C, the reference the moment lost to heating is taken from, which
+// is also the switch-on state in an ambient at or above 20 °C (the winding
+// may be switched on before a warm enclosure has warmed it, and the larger
+// current is the one the switch must open); in a colder ambient the
+// switch-on current at the ambient's resistance follows, the larger one.
+func coldCurrentSteps(co calc.Coil, cr calc.CoilResult) []Step {
+	Ta := cr.Heat.Problem.Ambient
+	what := "Current when cold: switch-on with the winding at 20 °C"
+	switch amb := Eng(Celsius(Ta), "°C", 3); {
+	case Ta > calc.T20+0.05:
+		what += ", before the " + amb + " ambient has warmed it (the larger current, the one the switch must open)"
+	case Ta < calc.T20-0.05:
+		what = "Current at 20 °C, the reference for the moment lost to heating"
+	default:
+		what += ", its ambient"
+	}
+	steps := []Step{{What: what, Symbolic: `I_{20} = \frac{V}{R_{20}}`,
+		Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(co.Voltage, "V", 4), Q(cr.R20, "Ω", 4)), Result: Q(cr.ColdCurrent, "A", 4)}}
+	if Ta < calc.T20-0.05 && cr.Reactance == 0 && cr.Switch.ColdResistance > 0 {
+		steps = append(steps, Step{What: "Current at switch-on in the " + Eng(Celsius(Ta), "°C", 3) + " ambient, at the winding's resistance there: the largest current the switch opens",
+			Symbolic: `I_c = \frac{V}{R(T_a)}`,
+			Numbers:  fmt.Sprintf(`\frac{%s}{%s}`, Q(co.Voltage, "V", 4), Q(cr.Switch.ColdResistance, "Ω", 4)), Result: Q(cr.SwitchOnCurrent, "A", 4)})
+	}
+	return steps
+}
+
 // coilSteps derives one coil block's results: wire and winding, resistance,
 // temperature and operating point, moment and field (the inductance and the
 // heat balance follow in sections of their own).
@@ -76,13 +103,11 @@ func coilSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []Step 
 			Symbolic: `I = \frac{V}{\sqrt{(F_R R(T))^2 + (\omega L)^2}}`,
 			Numbers:  fmt.Sprintf(`\frac{%s}{\sqrt{(%s \cdot %s)^2 + %s^2}}`, Q(co.Voltage, "V", 4), N(F, 5), Q(cr.RHot, "Ω", 4), Paren(Q(cr.Reactance, "Ω", 4))),
 			Result:   Q(cr.Current, "A", 4)})
-		add(Step{What: "Current when cold (switch-on)", Symbolic: `I_{20} = \frac{V}{R_{20}}`,
-			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(co.Voltage, "V", 4), Q(cr.R20, "Ω", 4)), Result: Q(cr.ColdCurrent, "A", 4)})
+		add(coldCurrentSteps(co, cr)...)
 	case co.Drive == calc.VoltageDrive:
 		add(Step{What: "Current under voltage drive, at the hot resistance", Symbolic: `I = \frac{V}{R(T)}`,
 			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(co.Voltage, "V", 4), Q(cr.RHot, "Ω", 4)), Result: Q(cr.Current, "A", 4)})
-		add(Step{What: "Current when cold (switch-on)", Symbolic: `I_{20} = \frac{V}{R_{20}}`,
-			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(co.Voltage, "V", 4), Q(cr.R20, "Ω", 4)), Result: Q(cr.ColdCurrent, "A", 4)})
+		add(coldCurrentSteps(co, cr)...)
 	default:
 		add(Step{What: "Voltage under current drive, at the hot resistance", Symbolic: `V = I\, R(T)`,
 			Numbers: fmt.Sprintf(`%s \cdot %s`, Q(cr.Current, "A", 4), Q(cr.RHot, "Ω", 4)), Result: Q(cr.Voltage, "V", 4)})

@@ -65,6 +65,9 @@ func (c *composer) heating() {
 		c.para(fmt.Sprintf("Each coil is also taken to conduct heat to a mount held at the ambient temperature through a thermal resistance of %s, as stated.", Eng(R, "K/W", 3)))
 	}
 	c.para(templates.Text("heating-model", nil))
+	for _, t := range c.nestedTexts() {
+		c.para(t)
+	}
 	for i, co := range d.Coils {
 		if i >= len(r.Coils) {
 			break
