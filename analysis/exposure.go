@@ -50,7 +50,7 @@ func acExposures(d calc.Design, r calc.Results, coils []CoilStudy) []ACExposure 
 		if !(ext > 0) {
 			continue
 		}
-		fm := implantField(one, cs)
+		fm := implantField(one, res, cs)
 		ks := conductorBounds(one, res, cs)
 		pw := windingReaches(fm, one, res, cs, ext, nil, ks, e.Public)
 		e.Surface, e.PublicDistance = pw[0].Surface, pw[0].Distance

@@ -24,7 +24,7 @@ func TestACExposureDistances(t *testing.T) {
 	if !(e.PublicDistance > e.OccupationalDistance && e.OccupationalDistance > 0) {
 		t.Fatalf("distances %g m (public), %g m (occupational)", e.PublicDistance, e.OccupationalDistance)
 	}
-	fm := implantField(st.Spec.Design, st.Coils)
+	fm := implantField(st.Spec.Design, st.Results, st.Coils)
 	os := outlines(st.Spec.Design, st.Coils)
 	for _, c := range []struct {
 		level, dist float64

@@ -144,6 +144,13 @@ type ImplantReach struct {
 	Farthest float64  // m
 	Toward   calc.Vec // unit vector
 	Probes   []int    // indices of probes at or above the level
+	// ProbeField is |B| at each of Probes, T (the peak where Peak is set).
+	ProbeField []float64
+	// Peak is set when a coil block is driven at a frequency: the search
+	// and every |B| here are then at the instant its current peaks, √2
+	// times the r.m.s. (acPeakResults), the fields of several such blocks
+	// taken in phase.
+	Peak bool
 	Windings []WindingReach
 	// Distance is the largest of the Windings' distances, from the
 	// winding of coil block Nearest (−1 when the level is reached at no
@@ -416,12 +423,13 @@ func refineReach(f func(float64) float64, level, lo, hi, blo, bhi float64) float
 	return a
 }
 
-// implantField is the field, T, of all coils at their operating currents
-// that the implant level is searched in: the windings' (calc.FieldModel)
-// and, for every cored coil block with current, its core's by the rod's
-// pole model (calc.CorePoleField), which dominates near the rod.
-func implantField(d calc.Design, coils []CoilStudy) func(calc.Vec) calc.Vec {
-	fm := calc.NewFieldModel(d)
+// implantField is the field, T, of all coils at the currents r gives
+// them that the implant level is searched in: the windings'
+// (calc.FieldModelAt) and, for every cored coil block with current, its
+// core's by the rod's pole model (calc.CorePoleField), which dominates
+// near the rod.
+func implantField(d calc.Design, r calc.Results, coils []CoilStudy) func(calc.Vec) calc.Vec {
+	fm := calc.FieldModelAt(d, resultCurrents(d, r))
 	type cored struct {
 		c calc.Coil
 		k calc.CoreResult
@@ -612,7 +620,11 @@ func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach
 		return ir // nothing to search, or no current to make a field
 	}
 	ir.Searched = true
-	fm := implantField(d, coils)
+	r, coils, ir.Peak = acPeakResults(d, r, coils)
+	fm := implantField(d, r, coils)
+	if ir.Peak {
+		ir.Origin = fm(calc.Vec{}).Norm()
+	}
 	// Along the axis the search may come close to the origin (a bore holds
 	// no conductor); in the plane it stops outside the windings.
 	f := calc.CoilFrame(reachAxis(d))
@@ -624,8 +636,13 @@ func implantReach(d calc.Design, r calc.Results, coils []CoilStudy) ImplantReach
 	ir.Radial = math.Max(e1, e2)
 	ir.Farthest, ir.Toward = farthestReach(fm, d, r, ext)
 	for i, p := range r.Probes {
-		if p.B.Norm() >= ImplantField {
+		b := p.B.Norm()
+		if ir.Peak {
+			b = fm(p.At).Norm()
+		}
+		if b >= ImplantField {
 			ir.Probes = append(ir.Probes, i)
+			ir.ProbeField = append(ir.ProbeField, b)
 		}
 	}
 	os := outlines(d, coils)
@@ -1056,7 +1073,7 @@ func windingReaches(fm func(calc.Vec) calc.Vec, d calc.Design, r calc.Results, c
 	}
 	var model *calc.FieldModel
 	if ks != nil {
-		model = calc.NewFieldModel(d).ForMaps() // a level search needs no more than the maps' 10⁻⁹
+		model = calc.FieldModelAt(d, resultCurrents(d, r)).ForMaps() // a level search needs no more than the maps' 10⁻⁹
 	}
 	fast := levelField(fm, model, newFieldBound(d, ks, os), moments, lvl)
 	gap := 1e-6 * math.Max(ext, 1e-3)

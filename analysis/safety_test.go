@@ -294,7 +294,7 @@ func TestConductorBoundHoldsTheField(t *testing.T) {
 		if fb == nil {
 			t.Fatalf("%s: no bound", src[:30])
 		}
-		fm := implantField(d, st.Coils)
+		fm := implantField(d, st.Results, st.Coils)
 		model := calc.NewFieldModel(d)
 		worst, worstRem, farRem := 0.0, 0.0, 0.0
 		for i := range 400 {
@@ -352,7 +352,7 @@ func TestImplantReachRoundAnAsymmetricRim(t *testing.T) {
 	if len(diags) > 0 {
 		t.Fatal(diags)
 	}
-	fm := implantField(st.Spec.Design, st.Coils)
+	fm := implantField(st.Spec.Design, st.Results, st.Coils)
 	outs := outlines(st.Spec.Design, st.Coils)
 	grid := 0.0
 	for i := 0; i <= 40; i++ {
@@ -391,7 +391,7 @@ func TestLevelFieldDecidesAsTheFullField(t *testing.T) {
 	for _, cr := range st.Results.Coils {
 		moments = append(moments, cr.Moment)
 	}
-	fm := implantField(d, st.Coils)
+	fm := implantField(d, st.Results, st.Coils)
 	lf := levelField(fm, calc.NewFieldModel(d), newFieldBound(d, ks, os), moments, ImplantField)
 	above, shortcut := 0, 0
 	for i := range 3000 {

@@ -33,7 +33,7 @@ func checkReachBySweep(t *testing.T, src string, n int, step, rmax float64) {
 	if !(bound > 0) {
 		t.Fatalf("no distance found: %+v", ir.Windings)
 	}
-	fm := implantField(st.Spec.Design, st.Coils)
+	fm := implantField(st.Spec.Design, st.Results, st.Coils)
 	os := outlines(st.Spec.Design, st.Coils)
 	worst, at := 0.0, calc.Vec{}
 	perCoil := make([]float64, len(ir.Windings)) // farthest point at the level nearest each winding

@@ -88,14 +88,35 @@ type FieldModel struct {
 // voltage over the hot resistance). The field is that of the energised
 // coil; the duty cycle does not reduce it.
 func NewFieldModel(d Design) *FieldModel {
+	return newFieldModel(d, nil)
+}
+
+// FieldModelAt is NewFieldModel with the current of every coil block
+// given, A (currents[i] for d.Coils[i]), in place of its operating point:
+// the field of results already found, or of their currents scaled (the
+// peak of an a.c. drive). A block without a current in currents has NaN.
+func FieldModelAt(d Design, currents []float64) *FieldModel {
+	if currents == nil {
+		currents = []float64{}
+	}
+	return newFieldModel(d, currents)
+}
+
+func newFieldModel(d Design, currents []float64) *FieldModel {
 	f := &FieldModel{seriesOnce: new(sync.Once)}
-	for _, c := range d.Coils {
+	for i, c := range d.Coils {
 		w := LayOut(c)
-		op := OperatingPoint(c, w, d.Conditions)
+		I := math.NaN()
+		switch {
+		case currents == nil:
+			I = OperatingPoint(c, w, d.Conditions).Current
+		case i < len(currents):
+			I = currents[i]
+		}
 		f.Coils = append(f.Coils, c)
 		f.Windings = append(f.Windings, w)
-		f.Currents = append(f.Currents, op.Current)
-		f.sources = append(f.sources, NewCoilSource(c, w, op.Current))
+		f.Currents = append(f.Currents, I)
+		f.sources = append(f.sources, NewCoilSource(c, w, I))
 	}
 	return f
 }

@@ -37,8 +37,8 @@ func TestACHeatingStepTakesTheDCPower(t *testing.T) {
 	}
 }
 
-// An a.c. coil's implant caution says its 0.5 mT is the static figure
-// applied to the r.m.s. field and points to the time-varying caution,
+// An a.c. coil's implant caution says its region is that of the peak of
+// the current, √2 times the r.m.s., and points to the time-varying caution,
 // which gives the ICNIRP (2010) levels at its frequency; a d.c. coil's
 // says neither.
 func TestImplantCautionOfAnACCoil(t *testing.T) {
@@ -63,7 +63,7 @@ func TestImplantCautionOfAnACCoil(t *testing.T) {
 		if implant == "" {
 			t.Fatalf("ac %v: no implant caution", c.ac)
 		}
-		if got := strings.Contains(implant, "static figure applied to the r.m.s. field"); got != c.ac {
+		if got := strings.Contains(implant, "at the peak of the current, √2 times the r.m.s."); got != c.ac {
 			t.Errorf("ac %v: implant caution notes the alternating field: %v", c.ac, got)
 		}
 		if got := strings.Contains(exposure, "27.0 µT") && strings.Contains(exposure, "100 µT"); got != c.ac {

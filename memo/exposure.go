@@ -41,15 +41,22 @@ func exposureCautions(j *analysis.Study) []doc.Callout {
 	return out
 }
 
-// alternatingNote is the implant caution's word on a.c.-driven coils: its
-// 0.5 mT is the static-field figure, applied to their r.m.s. field; an
+// alternatingNote is the implant caution's word on a.c.-driven coils:
+// the region is searched at the peak of their currents
+// (analysis.ImplantReach.Peak), against the static-field figure; an
 // implant may respond to a time-varying field at far lower levels, which
-// the time-varying field caution takes up. "" when no coil is driven at a
-// frequency the exposure guidelines cover.
+// the time-varying field caution takes up where the exposure guidelines
+// cover the frequency. "" when no coil with current is driven at a
+// frequency.
 func alternatingNote(j *analysis.Study) string {
+	if !j.Safety.Implant.Peak {
+		return ""
+	}
 	var names []string
-	for _, e := range j.Safety.Exposure {
-		names = append(names, fmt.Sprintf("%q", j.Spec.Design.Coils[e.Coil].Name))
+	for i, co := range j.Spec.Design.Coils {
+		if i < len(j.Results.Coils) && co.Frequency > 0 && !analysis.IsReceiver(co) && j.Results.Coils[i].Current != 0 {
+			names = append(names, fmt.Sprintf("%q", co.Name))
+		}
 	}
 	if len(names) == 0 {
 		return ""
@@ -58,5 +65,13 @@ func alternatingNote(j *analysis.Study) string {
 	if len(names) > 1 {
 		what = "coils " + joinAnd(names) + " alternate"
 	}
-	return " The field of " + what + ": for it the 0.5 mT is the static figure applied to the r.m.s. field, and implanted devices may respond to a time-varying field at far lower levels (see the time-varying field caution)."
+	inPhase := ""
+	if len(names) > 1 {
+		inPhase = ", the coils' fields taken in phase"
+	}
+	s := " The field of " + what + ". The region and the flux densities above are at the peak of the current, √2 times the r.m.s." + inPhase + ", against the static-field 0.5 mT."
+	if len(j.Safety.Exposure) == 0 {
+		return s
+	}
+	return s + " Implanted devices may respond to a time-varying field at far lower levels (see the time-varying field caution)."
 }

@@ -67,7 +67,7 @@ func Cautions(j *analysis.Study) []doc.Callout {
 			}
 			rodEnds = nil
 			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Field above 0.5 mT: implanted medical devices",
-				Spans: []doc.Span{{Text: templates.Text("caution-implant", map[string]string{"Where": strings.Join(where, ", "), "Beyond": beyond, "Mark": implantMark(j.Cooling), "Unmodelled": unmodelledField(j), "Alternating": alternatingNote(j)})}}})
+				Spans: []doc.Span{{Text: templates.Text("caution-implant", map[string]string{"Where": implantSentences(where), "Beyond": beyond, "Mark": implantMark(j.Cooling), "Unmodelled": unmodelledField(j), "Alternating": alternatingNote(j)})}}})
 		} else {
 			out = append(out, doc.Callout{Severity: doc.Note, Title: "Field near the winding",
 				Spans: []doc.Span{{Text: templates.Text("caution-implant-none", nil)}}})
@@ -252,6 +252,17 @@ func hotInServiceText(j *analysis.Study, f analysis.Finding) string {
 		serviceSurfaceWords(j, f), where, hotSurfaceWords(j, f))
 }
 
+// implantSentences words the places implantWhere lists, one sentence
+// each after the one that holds for every coil, so that no sentence of a
+// caution runs on.
+func implantSentences(where []string) string {
+	s := "The flux density exceeds 0.5 mT everywhere close to the conductors."
+	for _, w := range where {
+		s += " It also exceeds 0.5 mT " + w + "."
+	}
+	return s
+}
+
 // implantWhere words where the field reaches 0.5 mT (analysis.ImplantReach):
 // at the origin; along the axis, as far from the origin as it reaches and
 // where that point lies against the nearest winding; outside the windings,
@@ -333,25 +344,35 @@ func implantWhere(j *analysis.Study) (where []string, beyond string) {
 			what = "every winding and core"
 		}
 		far, _ := reachLength(ir.Distance)
+		rects := slices.ContainsFunc(d.Coils, func(co calc.Coil) bool { return co.Form == calc.Rectangle })
+		planes := "in two planes through its axis"
+		switch {
+		case rects && len(d.Coils) == 1:
+			planes = "in five planes: two through its axis along its sides, two through its axis and its diagonals, and its own plane"
+		case rects:
+			planes += " (five for a rectangle: also through its diagonals, and its own plane)"
+		}
+		if ir.Sphere {
+			planes += ", and along 162 directions spread over the sphere"
+			if rects {
+				planes += " from it and from each corner of a rectangle"
+			}
+		}
 		turned := ""
 		switch {
 		case len(d.Coils) > 1:
-			turned = ", turned off those lines where the coils' fields add,"
-		case d.Coils[0].Form == calc.Rectangle:
-			turned = ", turned off those lines toward the corners,"
+			turned = " Where the coils' fields add, the lines were also turned off those planes."
+		case rects:
+			turned = " Toward the corners, the lines were also turned off those planes."
 		}
-		if ir.Sphere {
-			from := ""
-			if slices.ContainsFunc(d.Coils, func(co calc.Coil) bool { return co.Form == calc.Rectangle }) {
-				from = " from it and from each corner of a rectangle"
-			}
-			turned = " and along 162 directions spread over the sphere" + from + turned
-		}
-		beyond = fmt.Sprintf(" Farther than %s from the outer surface of %s, its bore counted as part of it, the flux density stays below 0.5 mT; within a bore it may exceed 0.5 mT anywhere (the field of all coils counted; searched every 10° outward from the centre of each winding in two planes through its axis%s and along the axis from points round the ends of the conductors).", far, what, turned)
+		beyond = fmt.Sprintf(" Farther than %s from the outer surface of %s, its bore counted as part of it, the flux density stays below 0.5 mT. Within a bore it may exceed 0.5 mT anywhere. The search counted the field of all coils. It ran every 10° outward from the centre of each winding %s.%s It also ran along the axis from points round the ends of the conductors.", far, what, planes, turned)
 	}
-	for _, k := range ir.Probes {
-		p := r.Probes[k]
-		where = append(where, fmt.Sprintf("at probe %q (%s)", p.Name, Eng(p.B.Norm(), "T", 3)))
+	for n, k := range ir.Probes {
+		b := r.Probes[k].B.Norm()
+		if n < len(ir.ProbeField) {
+			b = ir.ProbeField[n]
+		}
+		where = append(where, fmt.Sprintf("at probe %q (%s)", r.Probes[k].Name, Eng(b, "T", 3)))
 	}
 	return where, beyond
 }
