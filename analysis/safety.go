@@ -150,7 +150,7 @@ type ImplantReach struct {
 	// and every |B| here are then at the instant its current peaks, √2
 	// times the r.m.s. (acPeakResults), the fields of several such blocks
 	// taken in phase.
-	Peak bool
+	Peak     bool
 	Windings []WindingReach
 	// Distance is the largest of the Windings' distances, from the
 	// winding of coil block Nearest (−1 when the level is reached at no
