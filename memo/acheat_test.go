@@ -71,3 +71,35 @@ func TestImplantCautionOfAnACCoil(t *testing.T) {
 		}
 	}
 }
+
+// A voltage-driven a.c. coil is written up as computed: its cold current
+// is V over the impedance at 20 °C, |Z| = √(R20² + (2πfL)²) (the series
+// R–L circuit's impedance of any circuits text, e.g. Hughes Electrical
+// and Electronic Technology, 10th ed. — chapter recalled from memory), the
+// equation shown with the reactance; the
+// body suggests the same bidirectional suppression as the Safety section
+// (no freewheeling diode across an a.c. coil); and the frequency
+// assumption does not call the memo's current a d.c. bound.
+func TestACVoltageCoilWriteUp(t *testing.T) {
+	src := "```coil\nname = ex\nform = solenoid\ninner-diameter = 20 mm\nouter-diameter = 30 mm\nlength = 20 mm\nturns = 300\nwire = AWG 26\nvoltage = 20 V\nfrequency = 10 kHz\n```\n" +
+		"```conditions\nambient = 25 degC\n```\n"
+	j := mustEvaluate(t, src)
+	cr := j.Results.Coils[0]
+	X := 2 * math.Pi * 10e3 * cr.Inductance
+	if want := 20 / math.Hypot(cr.R20, X); math.Abs(cr.ColdCurrent/want-1) > 1e-9 {
+		t.Errorf("cold current %g A, want V/|Z(20 °C)| = %g A", cr.ColdCurrent, want)
+	}
+	text := memoText(t, j)
+	if !strings.Contains(text, `I_{20} = \frac{V}{\sqrt{R_{20}^2 + (\omega L)^2}}`) {
+		t.Error("the cold current of an a.c. coil is not shown over the impedance")
+	}
+	if strings.Contains(text, `I_{20} = \frac{V}{R_{20}}`) {
+		t.Error("the cold current of an a.c. coil is shown as V/R20")
+	}
+	if strings.Contains(text, "a freewheeling diode across the coil rated") || !strings.Contains(text, "Suggested suppression: a bidirectional suppressor") {
+		t.Error("the body's suggested suppression of an a.c. coil is not the bidirectional suppressor")
+	}
+	if strings.Contains(text, "are upper bounds, the a.c. values are lower") {
+		t.Error("the frequency assumption calls the memo's a.c. figures d.c. bounds")
+	}
+}

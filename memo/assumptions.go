@@ -224,7 +224,7 @@ func driveFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d calc.
 		if ac.Reactive {
 			v.flagged = true
 			if co.Drive == calc.VoltageDrive {
-				parts = append(parts, fmt.Sprintf("the current is set by the impedance |Z| = %s, not by R alone: the d.c. current, moment and field of this memo are upper bounds, the a.c. values are lower", Eng(ac.Impedance, "Ω", 3)))
+				parts = append(parts, fmt.Sprintf("the current is set by the impedance |Z| = %s, not by R alone, and this memo takes it so throughout: current, moment, field and heating are r.m.s. values at V/|Z| (the d.c. current V/R would be higher)", Eng(ac.Impedance, "Ω", 3)))
 			} else {
 				parts = append(parts, fmt.Sprintf("the imposed current needs the voltage |Z|·I across the impedance |Z| = %s, not R·I: the d.c. voltage of this memo is a lower bound for the driver; the current, moment and field are as stated", Eng(ac.Impedance, "Ω", 3)))
 			}

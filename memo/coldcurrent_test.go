@@ -17,7 +17,7 @@ func TestColdCurrentAgainstTheAmbient(t *testing.T) {
 			"```conditions\nambient = " + ambient + "\n```\n"
 	}
 	warm := memoText(t, mustEvaluate(t, spec("40 degC")))
-	if !strings.Contains(warm, "with the winding at 20 °C, before the 40.0 °C ambient has warmed it") {
+	if !strings.Contains(warm, "so this bounds the switch-on current in the 40.0 °C ambient") {
 		t.Error("a 40 °C ambient: the cold current does not say why it is taken at 20 °C")
 	}
 	j := mustEvaluate(t, spec("-20 degC"))

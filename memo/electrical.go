@@ -24,7 +24,7 @@ func (c *composer) electrical() {
 		return
 	}
 	c.heading(1, "Inductance and switching")
-	c.para(templates.Text("electrical", nil))
+	c.para(templates.Text("electrical", map[string]string{"Capacitance": c.capacitanceWords()}))
 	if p := c.pickUpNote("it has no switching transient, stored energy or drive figures, and its inductance is derived with its other figures in the Method and results section",
 		"they have no switching transient, stored energy or drive figures, and their inductances are derived with their other figures in the Method and results section"); p != "" {
 		c.para(p)
@@ -44,6 +44,51 @@ func (c *composer) electrical() {
 	}
 	c.couplings()
 	c.gradientForce()
+}
+
+// capacitanceWords end the section's opening on the winding's own
+// capacitance: the bound it sets on the unsuppressed spike where it is
+// estimated (analysis.SwitchOffParts.Capacitance), and the forms for which
+// it is not (pairs, rectangles), whose spike figures it then does not cap.
+func (c *composer) capacitanceWords() string {
+	var with, without []string
+	forms := map[string]bool{}
+	for i, co := range c.j.Spec.Design.Coils {
+		if i >= len(c.j.Coils) || c.pickUp(i) || i >= len(c.j.Results.Coils) || math.IsNaN(c.j.Results.Coils[i].Inductance) {
+			continue
+		}
+		if p := c.j.Coils[i].SwitchOff; p.Capacitance > 0 {
+			with = append(with, fmt.Sprintf("%q", co.Name))
+		} else {
+			without = append(without, fmt.Sprintf("%q", co.Name))
+			switch co.Form {
+			case calc.Pair:
+				forms["a pair"] = true
+			case calc.Rectangle:
+				forms["a rectangle"] = true
+			default:
+				forms["this winding"] = true
+			}
+		}
+	}
+	var kinds []string
+	for _, k := range []string{"a pair", "a rectangle", "this winding"} {
+		if forms[k] {
+			kinds = append(kinds, k)
+		}
+	}
+	const bound = "the winding's own capacitance enters only as the bound it sets on the unsuppressed spike"
+	switch {
+	case len(without) == 0:
+		return bound + "."
+	case len(with) == 0:
+		return "the winding's own capacitance, which would bound the unsuppressed spike, is not estimated for " + strings.Join(kinds, " or ") + " (no published formula for it is applied here), so the spike figures below are those of the switch's speed alone."
+	}
+	coil := "coil " + joinAnd(without) + ", whose"
+	if len(without) > 1 {
+		coil = "coils " + joinAnd(without) + ", whose"
+	}
+	return bound + "; it is not estimated for " + coil + " spike figures are those of the switch's speed alone."
 }
 
 // coilSwitching is coil block i's part of the section: its
@@ -361,6 +406,10 @@ func suppressionText(co calc.Coil, cr calc.CoilResult, p analysis.SwitchOffParts
 		fmt.Fprintf(&b, "The unsuppressed spike depends on how fast the switch opens: about L·I/t above %s for a switch opening in t, some %s for a fast semiconductor switch opening in %s. ",
 			sourceOf(co), Eng(p.Ramp, "V", 3), Eng(p.SwitchOff, "s", 1))
 	}
+	if co.Frequency > 0 { // the drive is cut at the peak of its sine (calc.SwitchingFor)
+		b.WriteString("Suggested suppression: " + acSuppressor(co, s.Supply, "the "+Eng(s.Energy, "J", 3)+" stored at the current's peak", true))
+		return b.String()
+	}
 	fmt.Fprintf(&b, "Suggested suppression: a freewheeling diode across the coil rated for at least %s continuous, which keeps the switch near %s and lets the current decay to 10 %% in %s",
 		Eng(math.Max(math.Abs(cr.Current), math.Abs(s.WorstCurrent)), "A", 3), sourceAt(co, s.Supply), Eng(s.DiodeTime10, "s", 3))
 	switch {
@@ -627,12 +676,30 @@ func switchOffCaution(f analysis.Finding, co calc.Coil, cr calc.CoilResult, p an
 		// an a.c. drive: cut at the peak of its sine (calc.SwitchingFor);
 		// a diode across the coil would conduct every other half-cycle
 		energy = Eng(s.Energy, "J", 3) + " in its magnetic field at the peak of its a.c. current (" + Eng(s.Current, "A", 3) + ", √2 × the r.m.s. value), where the drive may be interrupted"
-		diode = fmt.Sprintf("A freewheeling diode would conduct on every other half-cycle and short the drive: across an a.c. coil fit a bidirectional suppressor instead — a pair of TVS diodes or a varistor that clamps above the drive's peak of %s and below the driver's rating, or an RC snubber — sized for that energy.", Eng(s.Supply, "V", 3))
+		diode = acSuppressor(co, s.Supply, "that energy", false)
 		resistor = ""
 	}
 	return doc.Callout{Severity: doc.Caution, Title: "Switch-off voltage, " + name,
 		Spans: []doc.Span{{Text: templates.Text("caution-inductive", map[string]string{
 			"Energy": energy, "Spike": spike, "Diode": diode, "Resistor": resistor, "Unmodelled": unmodelledSwitching(co)})}}}
+}
+
+// acSuppressor is the suppression of an a.c.-driven coil: a diode across
+// it would conduct every other half-cycle, so a bidirectional clamp above
+// the drive's peak (supply, V: √2 × the stated r.m.s. voltage, or the
+// peak current times |Z| under current drive; calc.ACPeak), sized for
+// energy (words). suggest words it as the memo body's suggestion, which
+// follows "Suggested suppression: ".
+func acSuppressor(co calc.Coil, supply float64, energy string, suggest bool) string {
+	peak := "√2 × the stated r.m.s. voltage"
+	if co.Drive == calc.CurrentDrive {
+		peak = "the peak current times the impedance |Z|"
+	}
+	clamp := fmt.Sprintf("a pair of TVS diodes or a varistor that clamps above the drive's peak of %s (%s) and below the driver's rating, or an RC snubber", Eng(supply, "V", 3), peak)
+	if suggest {
+		return fmt.Sprintf("a bidirectional suppressor across the coil — %s — sized for %s; a freewheeling diode would conduct on every other half-cycle and short the drive.", clamp, energy)
+	}
+	return fmt.Sprintf("A freewheeling diode would conduct on every other half-cycle and short the drive: across an a.c. coil fit a bidirectional suppressor instead — %s — sized for %s.", clamp, energy)
 }
 
 // unmodelledSwitching is the switch-off caution's word on a part in the

@@ -56,23 +56,28 @@ func (c *composer) method() {
 
 // coldCurrentSteps derives a voltage-driven winding's current when cold:
 // at 20 °C, the reference the moment lost to heating is taken from, which
-// is also the switch-on state in an ambient at or above 20 °C (the winding
-// may be switched on before a warm enclosure has warmed it, and the larger
-// current is the one the switch must open); in a colder ambient the
-// switch-on current at the ambient's resistance follows, the larger one.
+// in an ambient at or above 20 °C bounds the switch-on current (the
+// resistance only rises with temperature) and rates the switch; in a
+// colder ambient the switch-on current at the ambient's resistance
+// follows, the larger one. Under an a.c. drive the current is V over the
+// impedance at 20 °C, √(R20² + (ωL)²) (calc.OperatingPoint).
 func coldCurrentSteps(co calc.Coil, cr calc.CoilResult) []Step {
 	Ta := cr.Heat.Problem.Ambient
-	what := "Current when cold: switch-on with the winding at 20 °C"
+	what := "Current when cold (switch-on), the winding at 20 °C"
 	switch amb := Eng(Celsius(Ta), "°C", 3); {
 	case Ta > calc.T20+0.05:
-		what += ", before the " + amb + " ambient has warmed it (the larger current, the one the switch must open)"
+		what = "Current with the winding at 20 °C: its resistance rises with temperature, so this bounds the switch-on current in the " + amb + " ambient, and the switch and its suppression are rated on it"
 	case Ta < calc.T20-0.05:
 		what = "Current at 20 °C, the reference for the moment lost to heating"
 	default:
 		what += ", its ambient"
 	}
-	steps := []Step{{What: what, Symbolic: `I_{20} = \frac{V}{R_{20}}`,
-		Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(co.Voltage, "V", 4), Q(cr.R20, "Ω", 4)), Result: Q(cr.ColdCurrent, "A", 4)}}
+	sym, num := `I_{20} = \frac{V}{R_{20}}`, fmt.Sprintf(`\frac{%s}{%s}`, Q(co.Voltage, "V", 4), Q(cr.R20, "Ω", 4))
+	if cr.Reactance > 0 { // an a.c. drive: the impedance at 20 °C
+		sym = `I_{20} = \frac{V}{\sqrt{R_{20}^2 + (\omega L)^2}}`
+		num = fmt.Sprintf(`\frac{%s}{\sqrt{%s^2 + %s^2}}`, Q(co.Voltage, "V", 4), Paren(Q(cr.R20, "Ω", 4)), Paren(Q(cr.Reactance, "Ω", 4)))
+	}
+	steps := []Step{{What: what, Symbolic: sym, Numbers: num, Result: Q(cr.ColdCurrent, "A", 4)}}
 	if Ta < calc.T20-0.05 && cr.Reactance == 0 && cr.Switch.ColdResistance > 0 {
 		steps = append(steps, Step{What: "Current at switch-on in the " + Eng(Celsius(Ta), "°C", 3) + " ambient, at the winding's resistance there: the largest current the switch opens",
 			Symbolic: `I_c = \frac{V}{R(T_a)}`,

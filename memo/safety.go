@@ -367,12 +367,20 @@ func implantWhere(j *analysis.Study) (where []string, beyond string) {
 		}
 		beyond = fmt.Sprintf(" Farther than %s from the outer surface of %s, its bore counted as part of it, the flux density stays below 0.5 mT. Within a bore it may exceed 0.5 mT anywhere. The search counted the field of all coils. It ran every 10° outward from the centre of each winding %s.%s It also ran along the axis from points round the ends of the conductors.", far, what, planes, turned)
 	}
+	var probes []string
 	for n, k := range ir.Probes {
 		b := r.Probes[k].B.Norm()
 		if n < len(ir.ProbeField) {
 			b = ir.ProbeField[n]
 		}
-		where = append(where, fmt.Sprintf("at probe %q (%s)", r.Probes[k].Name, Eng(b, "T", 3)))
+		probes = append(probes, fmt.Sprintf("%q (%s)", r.Probes[k].Name, Eng(b, "T", 3)))
+	}
+	switch len(probes) {
+	case 0:
+	case 1:
+		where = append(where, "at probe "+probes[0])
+	default:
+		where = append(where, "at probes "+joinAnd(probes))
 	}
 	return where, beyond
 }
@@ -388,17 +396,21 @@ func surfaceDistance(v float64) string {
 	return "as far as " + l + " from"
 }
 
-// reachLength is a reach from a winding's surface to two figures,
-// rounded up — a keep-out distance rounded down would claim a field below
-// the level where it is not —, or "1 mm" (under set) below a millimetre,
+// reachLength is a reach from a winding's surface to three figures (two
+// below 10 mm), rounded up — a keep-out distance rounded down would claim
+// a field below the level where it is not —, or "1 mm" (under set) below a millimetre,
 // where a figure in µm reads as false precision; every sentence of the
 // caution words it so.
 func reachLength(v float64) (s string, under bool) {
 	if v < 1e-3 {
 		return "1 mm", true
 	}
-	step := math.Pow(10, math.Floor(math.Log10(v))-1)
-	return Eng(math.Ceil(v/step*(1-1e-12))*step, "m", 2), false
+	figs := 3.0 // to a tenth of a millimetre or finer, which a tape can set out
+	if v < 0.01 {
+		figs = 2
+	}
+	step := math.Pow(10, math.Floor(math.Log10(v))-(figs-1))
+	return Eng(math.Ceil(v/step*(1-1e-12))*step, "m", int(figs)), false
 }
 
 // windingWord names what a coil's outer surface bounds.

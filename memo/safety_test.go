@@ -210,14 +210,18 @@ func TestImplantReachWordedOnce(t *testing.T) {
 		if strings.Contains(caution, "from it along") || strings.Contains(caution, "from the origin in") {
 			t.Errorf("%s: a reach measured along a search line: %s", f, caution)
 		}
-		// reaches from a surface are stated to two figures rounded up (a
-		// keep-out distance is never understated)
+		// reaches from a surface are stated to three figures (two below
+		// 10 mm) rounded up (a keep-out distance is never understated)
 		up2 := func(v float64) string {
 			if !(v > 0) {
 				return Eng(v, "m", 2)
 			}
-			e := math.Pow(10, math.Floor(math.Log10(v))-1)
-			return Eng(math.Ceil(v/e-1e-9)*e, "m", 2)
+			figs := 3
+			if v < 0.01 {
+				figs = 2
+			}
+			e := math.Pow(10, math.Floor(math.Log10(v))-float64(figs-1))
+			return Eng(math.Ceil(v/e-1e-9)*e, "m", figs)
 		}
 		surface := map[string]bool{up2(ir.AxialClear): true, up2(ir.Distance): true, "1 mm": ir.Distance < 1e-3}
 		for _, w := range ir.Windings {

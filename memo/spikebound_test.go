@@ -1,0 +1,32 @@
+package memo
+
+import (
+	"strings"
+	"testing"
+)
+
+// The switching section says the winding's own capacitance bounds the
+// unsuppressed spike only where the memo estimates that capacitance: a
+// solenoid's, not a pair's or a rectangle's, whose spikes it then says
+// are those of the switch's speed alone.
+func TestSpikeBoundWording(t *testing.T) {
+	for _, c := range []struct {
+		name, src string
+		bounded   bool
+	}{
+		{"solenoid", "```coil\nname = s\nform = solenoid\nmean-diameter = 30 mm\nlength = 30 mm\nradial-build = 4 mm\nturns = 300\nwire = AWG 28\nvoltage = 12 V\n```\n", true},
+		{"pair", "```coil\nname = p\nform = pair\nmean-diameter = 200 mm\nspacing = 100 mm\nlength = 10 mm\nradial-build = 6 mm\nturns = 60\nwire = AWG 22\ncurrent = 2 A\n```\n", false},
+		{"rectangle", "```coil\nname = r\nform = rectangle\nwidth = 300 mm\nheight = 200 mm\nturns = 40\nwire = AWG 22\ncurrent = 2 A\n```\n", false},
+	} {
+		j := mustEvaluate(t, c.src)
+		p := j.Coils[0].SwitchOff
+		text := memoText(t, j)
+		says := strings.Contains(text, "the winding's own capacitance enters only as the bound it sets on the unsuppressed spike")
+		if says != c.bounded || (p.Capacitance > 0) != c.bounded {
+			t.Errorf("%s: capacitance %g F, the memo claims its bound: %v", c.name, p.Capacitance, says)
+		}
+		if !c.bounded && !strings.Contains(text, "is not estimated for a "+c.name) {
+			t.Errorf("%s: the memo does not say the capacitance is not estimated", c.name)
+		}
+	}
+}
