@@ -250,7 +250,8 @@ type MapData struct {
 	X, Z         []float64
 	B            []float64
 	XHalf, ZHalf float64
-	// Peak is the largest |B| of the map's nodes, at the node (PeakX,
+	// Peak is the largest |B| of the map's nodes outside the conductors
+	// (in a coil block's own map; a rod's nodes count), at the node (PeakX,
 	// PeakZ) — of two mirror images, the one at PeakX ≥ 0 and PeakZ ≥ 0,
 	// and PeakMirrored when the node at −PeakZ holds the same value to
 	// 10⁻⁹. For a coil block's own map, PeakNear reports that the node
@@ -265,13 +266,21 @@ type MapData struct {
 }
 
 // setPeak finds m's Peak and its node; near and bore, when given, say
-// where a node of the coil block's own frame lies (coilOutlines).
+// where a node of the coil block's own frame lies (coilOutlines), and
+// nodes inside a winding (not in its bore, not in a rod) are passed over.
 func (m *MapData) setPeak(near func(x, z float64) (dist float64, bore bool), inCore func(x, z float64) bool) {
 	nz := len(m.Z)
 	m.Peak = math.Inf(-1)
 	best := -1
 	for k, v := range m.B {
 		ix, iz := k/nz, k%nz
+		if near != nil && (inCore == nil || !inCore(m.X[ix], m.Z[iz])) {
+			// a node among the conductors, where no one can be and a thin
+			// winding's filaments give no bound, is not the map's peak
+			if d, bore := near(m.X[ix], m.Z[iz]); d == 0 && !bore {
+				continue
+			}
+		}
 		if v > m.Peak || (v == m.Peak && best >= 0 && m.X[ix] >= 0 && m.Z[iz] >= 0 && (m.X[best/nz] < 0 || m.Z[best%nz] < 0)) {
 			m.Peak, best = v, k
 		}

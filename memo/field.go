@@ -490,6 +490,11 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 		n, co.Name, plane)
 	if centre, edge, ok := mapLevels(m); ok {
 		text += " " + mapPeakText(co, m, cored) + fmt.Sprintf("; it is %s at the centre and at most %s on the map's edge.", Eng(centre, "T", 3), Eng(edge, "T", 3))
+		// one block: its map is the design's field, whose largest value on
+		// the winding's outer surface the Safety section's search found
+		if ir := c.j.Safety.Implant; len(c.j.Spec.Design.Coils) == 1 && len(ir.Windings) == 1 && ir.Windings[0].Surface > 0 && !ir.Peak {
+			text += fmt.Sprintf(" On the winding's outer surface, between the map's points, the search of the Safety section finds |B| up to %s.", Eng(ir.Windings[0].Surface, "T", 3))
+		}
 	}
 	coreCap := ""
 	if cored {

@@ -124,3 +124,28 @@ func TestMapPeakWordedAsComputed(t *testing.T) {
 		}
 	}
 }
+
+// A thin or rectangular winding is modelled as filaments, whose field has
+// no bound among the conductors: the map's peak is taken outside them, so
+// for a thin bundle it stays below μ0 N I/(2π r_b), the field at the surface of
+// a straight bundle of radius r_b carrying N I (Ampère's law, e.g.
+// Jackson, Classical Electrodynamics, 3rd ed., §5.3), times 1.5 for the
+// bundle's curvature and the rest of the loop.
+func TestMapPeakOutsideTheConductors(t *testing.T) {
+	for _, src := range []string{
+		"```coil\nname = panel\nform = rectangle\nwidth = 400 mm\nheight = 250 mm\nturns = 40\nwire = AWG 20\ncurrent = 2 A\n```\n",
+		"```coil\nname = loop\nform = loop\nmean-diameter = 150 mm\nturns = 30\nwire = AWG 22\ncurrent = 2 A\n```\n",
+	} {
+		j := mustEvaluate(t, src)
+		m := j.Coils[0].Map
+		cr := j.Results.Coils[0]
+		if m == nil || !cr.Winding.Thin {
+			t.Fatalf("%s: no map or not a thin winding", src[:30])
+		}
+		rb := j.Coils[0].Heat.BundleDiameter / 2
+		ampere := 4e-7 * math.Pi * float64(cr.Winding.TurnCount()) * cr.Current / (2 * math.Pi * rb)
+		if !(m.Peak > 0) || m.Peak > 1.5*ampere {
+			t.Errorf("%s: map peak %g T against the bundle-surface field %g T", src[:30], m.Peak, ampere)
+		}
+	}
+}

@@ -327,15 +327,25 @@ func (r *renderer) paragraph(p doc.Paragraph) {
 	// A longer paragraph before a table that fits here while the table's
 	// start does not: its last two lines go over with the table, so that
 	// the table is not left without its introduction.
+	// So too before a figure: its last two lines go over with the figure
+	// (shrunk as far as figure allows) where that does not fit below it.
 	if r.depth == 0 && !r.fresh && len(r.rest) > 0 && len(lines) > leadInLines {
-		if t, ok := r.rest[0].(doc.Table); ok {
-			body := float64(len(lines)) * leadBody
-			if body <= r.room(0) && body+after+r.minHeight(t) > r.room(0) {
-				r.flowLines(lines[:len(lines)-2], styBody, 0, 0)
-				r.newPage()
-				r.flowLines(lines[len(lines)-2:], styBody, 0, after)
-				return
+		var least float64
+		switch b := r.rest[0].(type) {
+		case doc.Table:
+			least = r.minHeight(b)
+		case doc.Figure:
+			least = 8 + r.leastFigure(b)
+		}
+		body := float64(len(lines)) * leadBody
+		if least > 0 && body <= r.room(0) && body+after+least > r.room(0) {
+			r.flowLines(lines[:len(lines)-2], styBody, 0, 0)
+			r.newPage()
+			r.flowLines(lines[len(lines)-2:], styBody, 0, after)
+			if _, fig := r.rest[0].(doc.Figure); fig {
+				r.leadFloor = figureFloor(r.room(0))
 			}
+			return
 		}
 	}
 	r.flowLines(lines, styBody, 0, after)
