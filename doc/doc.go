@@ -153,8 +153,13 @@ type Code struct {
 	Text string
 }
 
-// PageBreak starts a new page.
-type PageBreak struct{}
+// PageBreak starts a new page. FirstPageOnly takes it only on the first
+// page: a first page that closes there starts the rest on a fresh page,
+// while one whose content ran over lets the rest follow on the page it
+// ran onto rather than leave that page nearly blank.
+type PageBreak struct {
+	FirstPageOnly bool
+}
 
 // Contents is the table of contents: a title and one entry per heading of
 // the document, in order. Backends that paginate add each heading's page

@@ -201,7 +201,7 @@ func (c *composer) titlePage() {
 		c.add(doc.Paragraph{Spans: []doc.Span{{Text: "Cautions raised by this design", Strong: true},
 			{Text: " (details, numbers and remedies in the Safety section):"}}}, list)
 	}
-	c.add(doc.PageBreak{})
+	c.add(doc.PageBreak{FirstPageOnly: true}) // a summary that ran over goes on with the contents
 }
 
 // cautionList names the warnings and cautions (not the general notes) on

@@ -345,6 +345,16 @@ func (r *renderer) run() error {
 }
 
 // newPage starts a page; the current column (list indentation) carries on.
+// pageBreak starts a new page unless the page is fresh or, for a break
+// taken only on the first page, the first page has been left.
+func (r *renderer) pageBreak(b doc.PageBreak) {
+	if r.fresh || (b.FirstPageOnly && r.pdf.PageNo() > 1) {
+		return
+	}
+	r.place("break", r.y, r.y)
+	r.newPage()
+}
+
 func (r *renderer) newPage() {
 	r.pdf.AddPage()
 	r.y = bodyTop
@@ -515,11 +525,10 @@ func (r *renderer) block(b doc.Block, next doc.Block) {
 		r.equation(b)
 	case *doc.Equation:
 		r.equation(*b)
-	case doc.PageBreak, *doc.PageBreak:
-		if !r.fresh {
-			r.place("break", r.y, r.y)
-			r.newPage()
-		}
+	case doc.PageBreak:
+		r.pageBreak(b)
+	case *doc.PageBreak:
+		r.pageBreak(*b)
 	case doc.Contents:
 		r.contents(b)
 	case *doc.Contents:
