@@ -938,13 +938,9 @@ func ownStretch(os []outline, coil int, at, u calc.Vec, lo, lim float64) float64
 }
 
 // surfacePeak is the largest |B| of fm found just outside (gap) the
-// outer surface of coil block i when its outlines are solid windings (one,
-// or a pair's two; no rod, round bundle or rectangle; else 0): for each,
-// 48 points along the
-// half-perimeter of its section (end face, outer side, end face) in the
-// four half-planes through its axis along ±E1 and ±E2, and a
-// golden-section refinement between the neighbours of the largest (one
-// half-plane when the block is alone in the design, alone). fm is the
+// outer surface of coil block i when its outlines are circular windings
+// (one, or a pair's two; solid, or a round bundle's ring with its bore
+// filled in; no rod or rectangle; else 0), by outlinePeak. fm is the
 // search's field (levelField), good to far more than the three figures
 // quoted.
 func surfacePeak(fm func(calc.Vec) calc.Vec, co calc.Coil, cs CoilStudy, os []outline, i int, gap float64, alone bool) float64 {
@@ -958,7 +954,7 @@ func surfacePeak(fm func(calc.Vec) calc.Vec, co calc.Coil, cs CoilStudy, os []ou
 		return 0
 	}
 	for _, o := range own {
-		if o.round || o.rect || !(o.r1 > 0) || !(o.z1 > o.z0) {
+		if o.rect || o.core || !(o.r1 > 0) || !(o.z1 > o.z0) {
 			return 0
 		}
 	}
@@ -984,73 +980,141 @@ func insideOther(os []outline, i int, p calc.Vec) bool {
 	return false
 }
 
-// outlinePeak is surfacePeak's walk round one solid outline o, leaving
-// out the points skip reports (within other coils' windings).
+// Surface walks of outlinePeak: peakSteps points along the
+// half-perimeter of a winding's section, in peakPlanes half-planes about
+// its axis (a multiple of four, so that the half-planes along ±E1 and ±E2
+// are among them and a coil turned by a quarter turn about its axis is
+// walked in the same places), and at most peakStarts of the walk's local
+// maxima climbed from.
+const (
+	peakSteps  = 48
+	peakPlanes = 24
+	peakStarts = 8
+)
+
+// outlinePeak is surfacePeak's largest |B| on one circular outline o,
+// gap outside it, leaving out the points skip reports (within other
+// coils' windings). The outer surface is walked in its meridian
+// half-planes along the half-perimeter of its section — for a solid
+// winding the end face, the outer side and the other end face; for a
+// round bundle the bore's face, the rounded rim and the other face —
+// at peakSteps+1 points in each of peakPlanes half-planes about the axis
+// (one when the block is alone in the design, alone: a lone circular
+// coil's field is the same in every half-plane). From each of the
+// walk's largest local maxima (peakStarts) a compass search in arc length
+// and azimuth — eight moves, the walk's steps halved to 10⁻⁸ of the
+// half-perimeter — climbs to the peak of |B| over the surface, wherever
+// it lies between the half-planes, so the result does not hang on where
+// the walk's points happen to fall.
 func outlinePeak(fm func(calc.Vec) calc.Vec, o outline, gap float64, alone bool, skip func(calc.Vec) bool) float64 {
-	r1, z0, z1 := o.r1+gap, o.z0-gap, o.z1+gap
-	edge := [3]float64{r1, z1 - z0, r1}
-	total := edge[0] + edge[1] + edge[2]
-	// the point at arc length t along the half-perimeter, in the
-	// half-plane along the unit radial direction e
-	at := func(e calc.Vec, t float64) calc.Vec {
-		var rho, z float64
-		switch {
-		case t <= edge[0]:
-			rho, z = t, z0
-		case t <= edge[0]+edge[1]:
-			rho, z = r1, z0+(t-edge[0])
-		default:
-			rho, z = r1-(t-edge[0]-edge[1]), z1
+	var edge [3]float64
+	// section is the point (rho, z) of the half-perimeter at arc length t
+	var section func(t float64) (rho, z float64)
+	if o.round {
+		rc, zc, r := (o.r0+o.r1)/2, (o.z0+o.z1)/2, o.r+gap
+		edge = [3]float64{rc, math.Pi * r, rc}
+		section = func(t float64) (float64, float64) {
+			switch {
+			case t <= edge[0]:
+				return t, zc - r
+			case t <= edge[0]+edge[1]:
+				s, c := math.Sincos((t-edge[0])/r - math.Pi/2)
+				return rc + r*c, zc + r*s
+			default:
+				return rc - (t - edge[0] - edge[1]), zc + r
+			}
 		}
-		return o.centre.Add(e.Scale(rho)).Add(o.fr.U.Scale(z))
+	} else {
+		r1, z0, z1 := o.r1+gap, o.z0-gap, o.z1+gap
+		edge = [3]float64{r1, z1 - z0, r1}
+		section = func(t float64) (float64, float64) {
+			switch {
+			case t <= edge[0]:
+				return t, z0
+			case t <= edge[0]+edge[1]:
+				return r1, z0 + (t - edge[0])
+			default:
+				return r1 - (t - edge[0] - edge[1]), z1
+			}
+		}
 	}
-	best := 0.0
-	const n = 48
-	// the half-plane at angle phi about the axis from E1
-	plane := func(phi float64) calc.Vec {
-		s, c := math.Sincos(phi)
-		return o.fr.E1.Scale(c).Add(o.fr.E2.Scale(s))
-	}
-	var bestT, bestPhi float64
+	total := edge[0] + edge[1] + edge[2]
 	value := func(phi, t float64) float64 {
-		p := at(plane(phi), t)
+		t = math.Min(math.Max(t, 0), total)
+		rho, z := section(t)
+		s, c := math.Sincos(phi)
+		p := o.centre.Add(o.fr.E1.Scale(rho * c)).Add(o.fr.E2.Scale(rho * s)).Add(o.fr.U.Scale(z))
 		if skip(p) {
 			return 0
 		}
-		b := fm(p).Norm()
-		if b > best { // NaN never
-			best, bestT, bestPhi = b, t, phi
+		if b := fm(p).Norm(); b > 0 { // NaN never
+			return b
 		}
-		return b
+		return 0
 	}
-	phis := []float64{0, math.Pi, math.Pi / 2, 3 * math.Pi / 2}
+	planes := peakPlanes
 	if alone {
-		phis = phis[:1] // a lone circular coil's field is the same in every half-plane
+		planes = 1
 	}
-	for _, phi := range phis {
-		// the largest |B| is the least of its negative
-		gridGoldenMin(func(t float64) float64 { return -value(phi, t) }, 0, total, n+1, func(_, _ float64, i int) bool { return i < 20 })
+	dt, dphi := total/peakSteps, 2*math.Pi/float64(planes)
+	grid := make([]float64, planes*(peakSteps+1))
+	eachIndex(len(grid), func(k int) {
+		j, i := k/(peakSteps+1), k%(peakSteps+1)
+		grid[k] = value(float64(j)*dphi, float64(i)*dt)
+	})
+	at := func(j, i int) float64 { return grid[((j+planes)%planes)*(peakSteps+1)+i] }
+	type start struct {
+		j, i int
+		b    float64
 	}
-	if alone || !(best > 0) {
-		return best
-	}
-	// Another coil breaks the symmetry about the axis: the largest |B|
-	// may lie between the four half-planes. A compass search in arc
-	// length and azimuth from the best point found (steps of 1/48 of the
-	// walk and 10°, halved eight times) climbs to it.
-	dt, dphi := total/n, math.Pi/18
-	for range 8 {
-		for moved := true; moved; {
-			moved = false
-			t0, phi0, b0 := bestT, bestPhi, best
-			for _, m := range [][2]float64{{dt, 0}, {-dt, 0}, {0, dphi}, {0, -dphi}} {
-				if t := t0 + m[0]; t >= 0 && t <= total {
-					value(phi0+m[1], t)
+	var starts []start
+	for j := range planes {
+		for i := range peakSteps + 1 {
+			b := at(j, i)
+			if !(b > 0) {
+				continue
+			}
+			top := true
+			for _, m := range [][2]int{{0, 1}, {0, -1}, {1, 0}, {-1, 0}, {1, 1}, {1, -1}, {-1, 1}, {-1, -1}} {
+				if ii := i + m[1]; ii >= 0 && ii <= peakSteps && (planes > 1 || m[0] == 0) && at(j+m[0], ii) > b {
+					top = false
 				}
 			}
-			moved = best > b0
+			if top {
+				starts = append(starts, start{j, i, b})
+			}
 		}
-		dt, dphi = dt/2, dphi/2
+	}
+	sort.SliceStable(starts, func(a, b int) bool { return starts[a].b > starts[b].b })
+	starts = starts[:min(peakStarts, len(starts))]
+	peaks := make([]float64, len(starts))
+	eachIndex(len(starts), func(k int) {
+		phi, t, b := float64(starts[k].j)*dphi, float64(starts[k].i)*dt, starts[k].b
+		ht, hp := dt, dphi
+		if alone {
+			hp = 0
+		}
+		for ht > 1e-8*total {
+			moved := false
+			for _, m := range [][2]float64{{1, 0}, {-1, 0}, {0, 1}, {0, -1}, {1, 1}, {1, -1}, {-1, 1}, {-1, -1}} {
+				if hp == 0 && m[1] != 0 {
+					continue
+				}
+				tt, pp := math.Min(math.Max(t+m[0]*ht, 0), total), phi+m[1]*hp
+				if v := value(pp, tt); v > b {
+					phi, t, b, moved = pp, tt, v, true
+					break
+				}
+			}
+			if !moved {
+				ht, hp = ht/2, hp/2
+			}
+		}
+		peaks[k] = b
+	})
+	best := 0.0
+	for _, b := range peaks {
+		best = math.Max(best, b)
 	}
 	return best
 }

@@ -13,6 +13,7 @@ package figures
 import (
 	"image/color"
 	"math"
+	"sync"
 
 	"gonum.org/v1/plot"
 	"gonum.org/v1/plot/plotter"
@@ -112,8 +113,11 @@ func Drawer(p *plot.Plot, curves ...plotter.XYs) DrawFunc {
 // room for it at the arithmetic midpoint of the axis range — far off
 // centre on a log axis — and so squeezes the data area.
 //
-// The returned function may be called any number of times, at any sizes:
-// the plot's legend backdrop is added once, here, and set per call.
+// The returned function may be called any number of times, at any sizes,
+// from any goroutine: the plot's legend backdrop is added once, here, and
+// set per call, and calls take turns, since each sets the plot's legend
+// and y label for its size (the memo's figures drawn ahead on one
+// goroutine may meet the same figure drawn on the spot on another).
 func drawer(p *plot.Plot, top vg.Length, curves []plotter.XYs) DrawFunc {
 	return drawerClear(p, top, curves, true)
 }
@@ -124,7 +128,10 @@ func drawer(p *plot.Plot, top vg.Length, curves []plotter.XYs) DrawFunc {
 func drawerClear(p *plot.Plot, top vg.Length, curves []plotter.XYs, clear bool) DrawFunc {
 	backdrop := &legendBackdrop{}
 	p.Add(backdrop)
+	var mu sync.Mutex
 	return func(c vg.Canvas, w, h vg.Length) {
+		mu.Lock()
+		defer mu.Unlock()
 		dc := draw.Canvas{Canvas: c, Rectangle: vg.Rectangle{Max: vg.Point{X: w, Y: h}}}
 		// Keep a little room so the outermost tick labels are not clipped.
 		dc = draw.Crop(dc, vg.Points(1), -vg.Points(8), vg.Points(1), -vg.Points(4)-top)
