@@ -38,9 +38,58 @@ type ConductionResult struct {
 // WindingConduction solves the winding section of coil c (winding w, heat
 // balance tp) on n rings (n < 2: 400). NaN figures when the data are
 // missing or no steady state is found.
+//
+// A multilayer winding, whose end faces are cooled too (RiseEndsCooled),
+// is solved over its two-dimensional section instead (SectionConduction,
+// n across the smaller of its depth and half length): its rises per watt
+// are fixed by the conduction alone, and the power at the profile's mean
+// temperature and the surface temperature at that power are iterated to
+// a fixed point as for the rings.
 func WindingConduction(c Coil, w Winding, tp ThermalProblem, n int) ConductionResult {
 	ri, ro, l := RiseGeometry(c, w)
+	if RiseEndsCooled(c, w) {
+		if n < 16 {
+			n = 100
+		}
+		mean, max := SectionConduction(ri, ro, l, WindingConductivity(c), n)
+		return sectionBalance(tp, mean, max, float64(SeriesCoils(c)))
+	}
 	return AnnulusConduction(tp, ri, ro, l, WindingConductivity(c), float64(SeriesCoils(c)), n)
+}
+
+// sectionBalance iterates the power P = HeatIn(T̄) at the mean
+// temperature T̄ = T_s(P) + mean·P/coils, T_s the surface temperature at
+// which HeatOut(T_s) = P, to a fixed point, the rises mean and max in K/W
+// of one coil's power.
+func sectionBalance(tp ThermalProblem, mean, max, coils float64) ConductionResult {
+	nan := math.NaN()
+	res := ConductionResult{Surface: nan, Mean: nan, HotSpot: nan, Power: nan}
+	if math.IsNaN(mean) || math.IsNaN(max) || !(coils >= 1) {
+		return res
+	}
+	T := tp.Ambient
+	for it := 1; it <= 500; it++ {
+		P := tp.HeatIn(T)
+		Ts := tp.surfaceFor(P)
+		if math.IsNaN(Ts) || math.IsNaN(P) {
+			return res
+		}
+		next := Ts + mean*P/coils
+		if math.IsNaN(next) || next > runawayCeiling {
+			return res
+		}
+		diff := math.Abs(next - T)
+		T = next
+		res.Iterations = it
+		if diff <= 1e-10*math.Max(1, T-tp.Ambient) {
+			P = tp.HeatIn(T)
+			Ts = tp.surfaceFor(P)
+			res.Converged = true
+			res.Surface, res.Power, res.Mean, res.HotSpot = Ts, P, Ts+mean*P/coils, Ts+max*P/coils
+			return res
+		}
+	}
+	return ConductionResult{Surface: nan, Mean: nan, HotSpot: nan, Power: nan, Iterations: res.Iterations}
 }
 
 // AnnulusConduction is WindingConduction for an annulus ri..ro of length l
