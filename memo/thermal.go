@@ -290,9 +290,11 @@ func conductionSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, c
 	if hp.EndsCooled {
 		add(Step{What: fmt.Sprintf("For comparison, the long-winding limit: the rise of the hottest point (at the bore) above the surface if all the heat left by radial conduction through the outer cylinder, bore and ends adiabatic, effective conductivity across the turns %s (%s)", Eng(kw, "W/(m·K)", 2), src),
 			Symbolic: `\Delta T_{\mathrm{r}} = ` + radial, Numbers: radialNumbers(), Result: Q(hp.RadialMax, "K", 3)})
+		add(Step{What: "The series' axial wave numbers, coefficients and radial ratios (I and K the modified Bessel functions)",
+			Symbolic: `\lambda_n = \frac{(2n+1)\pi}{\ell},\qquad c_n = \frac{4 (-1)^n}{(2n+1)\pi},\qquad \rho_n = \frac{I_1(\lambda_n r_i)}{K_1(\lambda_n r_i)}`})
 		add(Step{What: fmt.Sprintf("Rise of the hottest point (on the bore, in the mid-plane) above the surface: the end faces shed heat too (the heat-shedding surface above), so the heat is conducted across the winding's section radially and axially, out through the outer cylinder and both end faces, taken at the surface temperature; the bore is adiabatic, and the conductivity the same radially and axially (both cross the turns). The solution is a series of axial cosines with modified Bessel functions of order 0 radially, summed until its terms are negligible (Carslaw & Jaeger, Conduction of Heat in Solids, 2nd ed., 1959, §8.3); %s of the long-winding limit",
 			Sig(rise/hp.RadialMax, 3)),
-			Symbolic: `\Delta T_{\mathrm{max}} = \frac{q}{k_w} \left[ \frac{\ell^2}{8} - \sum_{n \ge 0} \frac{c_n}{\lambda_n^2} \frac{I_0(\lambda_n r_i) + \rho_n K_0(\lambda_n r_i)}{I_0(\lambda_n r_o) + \rho_n K_0(\lambda_n r_o)} \right], \quad \lambda_n = \frac{(2n+1)\pi}{\ell}, \quad c_n = \frac{4 (-1)^n}{(2n+1)\pi}, \quad \rho_n = \frac{I_1(\lambda_n r_i)}{K_1(\lambda_n r_i)}`,
+			Symbolic: `\Delta T_{\mathrm{max}} = \frac{q}{k_w} \left[ \frac{\ell^2}{8} - \sum_{n \ge 0} \frac{c_n}{\lambda_n^2} \frac{I_0(\lambda_n r_i) + \rho_n K_0(\lambda_n r_i)}{I_0(\lambda_n r_o) + \rho_n K_0(\lambda_n r_o)} \right]`,
 			Numbers:  fmt.Sprintf(`\frac{%s}{%s} \left[ \frac{%s^2}{8} - %s \right]`, Q(q, "W/m³", 4), Q(kw, "W/(m·K)", 2), Paren(Q(length, "m", 4)), Q(hp.SeriesMax, "m²", sumDigits(length*length/8, hp.SeriesMax))),
 			Result:   Q(rise, "K", 3)})
 		add(Step{What: "Rise of the winding's mean temperature above the surface, at which its resistance is taken: the volume mean of the same solution",
