@@ -440,11 +440,14 @@ func numericCoilField(c calc.Coil, w calc.Winding, I float64, p calc.Vec) calc.V
 func ringMutual(a, u float64) float64 { return ringMutualAB(a, a, u) }
 
 // heatBalanceCheck verifies the steady hot spot by a different method: a
-// finite-volume solve of the winding section's radial conduction
-// (calc.WindingConduction, 400 rings) under the lumped model's own
+// finite-volume solve of the winding section's conduction
+// (calc.WindingConduction: 400 rings of radial conduction, or for a
+// multilayer winding cooled at its ends too the two-dimensional section,
+// calc.SectionConduction, within 10⁻⁶ of the series) under the lumped model's own
 // assumptions — heat generated uniformly at the resistance of the mean
 // temperature, the same surface heat loss — against the lumped model's
-// closed forms (the conduction rise of calc.AnnulusRise and the mean
+// closed forms (the conduction rise of calc.AnnulusRise or the series of
+// calc.SectionRise, and the mean
 // temperature of calc.ThermalProblem.MeanAtSurface). The finite-volume
 // scheme is of second order in the ring thickness and within 10⁻⁵ of the
 // closed form at 400 rings (its doc comment and test); the tolerance,
@@ -467,8 +470,13 @@ func heatBalanceCheck(c calc.Coil, cr calc.CoilResult) []Check {
 	if tp.Duty < 1 {
 		state = "duty-averaged steady state" // not the on/off cycle's peak
 	}
-	return []Check{newCheck(c.Name, "rise of the hottest point above ambient, "+state+" (checks the conduction inside the winding; the surface balance is shared)", "lumped: surface balance, closed-form conduction rise",
-		"finite-volume radial conduction, 400 rings (uniform heating at the mean temperature's resistance, same surface loss)", st.HotSpot-ta, fd.HotSpot-ta, "K", heatCheckTolerance)}
+	lumped, other := "lumped: surface balance, closed-form conduction rise", "finite-volume radial conduction, 400 rings (uniform heating at the mean temperature's resistance, same surface loss)"
+	if calc.RiseEndsCooled(c, cr.Winding) {
+		lumped = "lumped: surface balance, series solution of the section's conduction"
+		other = "finite volumes over the winding's section, ends and outer cylinder held (uniform heating at the mean temperature's resistance, same surface loss)"
+	}
+	return []Check{newCheck(c.Name, "rise of the hottest point above ambient, "+state+" (checks the conduction inside the winding; the surface balance is shared)", lumped,
+		other, st.HotSpot-ta, fd.HotSpot-ta, "K", heatCheckTolerance)}
 }
 
 // heatCheckTolerance is the hot-spot check's tolerance: ten times the

@@ -235,6 +235,20 @@ type HeatParts struct {
 	// conduction rise inside the winding (calc.RiseGeometry: the section
 	// the turns occupy), m.
 	RiseInner, RiseOuter, RiseLength float64
+	// EndsCooled says the rise is the two-dimensional conduction of
+	// calc.SectionRise (a multilayer winding cooled through its outer
+	// cylinder and both end faces; calc.RiseEndsCooled), else the radial
+	// conduction of calc.AnnulusRise.
+	EndsCooled bool
+	// RadialMax is the rise, K, of the hottest point above the surface
+	// that radial conduction alone (calc.AnnulusRise, bore and ends
+	// adiabatic) would give at the steady power: the long-winding limit
+	// the memo compares with (NaN without a steady state).
+	RadialMax float64
+	// SeriesMax and SeriesMean are the sums, m², of calc.SectionRise's
+	// series at the steady state: ΔT_max = (q/k)(ℓ²/8 − SeriesMax) and
+	// ΔT_mean = (q/k)(ℓ²/12 − SeriesMean) (NaN unless EndsCooled).
+	SeriesMax, SeriesMean float64
 	// ShedInner, ShedOuter and ShedLength are the winding's outline as
 	// stated (calc.WindingEnvelope), whose surface sheds the heat
 	// (calc.Winding.SurfaceArea), m; a winding that does not fill its
@@ -304,6 +318,21 @@ func heatParts(co calc.Coil, cr calc.CoilResult, cond calc.Conditions, outer flo
 	hp := HeatParts{AirViscosity: n, AirConductivity: n, AirPrandtl: n, H: n, ContinuousTau: n, LossSlope: n}
 	w := cr.Winding
 	hp.RiseInner, hp.RiseOuter, hp.RiseLength = calc.RiseGeometry(co, w)
+	hp.EndsCooled = calc.RiseEndsCooled(co, w)
+	hp.RadialMax, hp.SeriesMax, hp.SeriesMean = n, n, n
+	if st.Settled {
+		ri, ro, l := hp.RiseInner, hp.RiseOuter, hp.RiseLength
+		k := h.Conductivity
+		pc := st.Power / float64(calc.SeriesCoils(co)) // one coil's share
+		_, radial := calc.AnnulusRise(ri, ro, l, k)
+		hp.RadialMax = radial * pc
+		if hp.EndsCooled {
+			// k/q times the rises per watt: ℓ²/8 − S and ℓ²/12 − S̄.
+			mean, max := calc.SectionRise(ri, ro, l, k)
+			vk := math.Pi * (ro*ro - ri*ri) * l * k
+			hp.SeriesMax, hp.SeriesMean = l*l/8-max*vk, l*l/12-mean*vk
+		}
+	}
 	e := calc.WindingEnvelope(co, w)
 	hp.ShedInner, hp.ShedOuter, hp.ShedLength = math.Max(e.R0, 0), e.R1, e.Z1-e.Z0
 	hp.AxisVertical = calc.AxisIsVertical(co, cond)

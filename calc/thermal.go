@@ -18,7 +18,9 @@ import "math"
 // with P(T) = I² R(T) under current drive and P(T) = V²/R(T) under voltage
 // drive; in vacuum h = 0. Inside the winding the heat flows out by
 // conduction, so the mean and the hottest point lie above the surface by
-// RiseMean·P̄ and RiseMax·P̄ (see WindingRise). The duty cycle enters as the
+// RiseMean·P̄ and RiseMax·P̄ (see WindingRise: two-dimensional conduction
+// to the outer cylinder and the end faces of a multilayer winding, radial
+// conduction in a thin or single-layer one). The duty cycle enters as the
 // average power P̄ = duty · P, valid when the on/off period is short against
 // the thermal time constant (see PeriodicCycle for long periods).
 //
@@ -447,8 +449,8 @@ const DefaultWindingConductivity = 0.3
 //
 // which for ri = 0 (a solid round bundle) are q ro²/(4k) and q ro²/(8k).
 // Routing all the heat out through the outer cylinder makes these upper
-// bounds for a winding that also loses heat from its ends. NaN for bad
-// data.
+// bounds for a winding that also loses heat from its ends (SectionRise,
+// of which they are the limit ℓ → ∞). NaN for bad data.
 func AnnulusRise(ri, ro, l, k float64) (mean, max float64) {
 	if !(ri >= 0) || !(ro > ri) || !(l > 0) || !(k > 0) {
 		return math.NaN(), math.NaN()
@@ -467,14 +469,23 @@ func AnnulusRise(ri, ro, l, k float64) (mean, max float64) {
 // WindingRise returns the internal rises, K/W of the block's power, of the
 // mean and the hottest winding temperature above the winding surface for
 // coil c with winding w and effective conductivity k (W/(m·K)) across the
-// turns: AnnulusRise over RiseGeometry. A pair's two coils share the
-// block's power. Zero rises when the data are missing.
+// turns, over the section of RiseGeometry: a multilayer coil, which sheds
+// heat from its end faces too (Winding.SurfaceArea), by the
+// two-dimensional conduction of SectionRise, its outer cylinder and both
+// ends at the surface temperature and the bore adiabatic (RiseEndsCooled);
+// a thin or single-layer coil, which sheds heat from the tube or the outer
+// cylinder alone, by the radial conduction of AnnulusRise. A pair's two
+// coils share the block's power. Zero rises when the data are missing.
 func WindingRise(c Coil, w Winding, k float64) (mean, max float64) {
 	ri, ro, l := RiseGeometry(c, w)
 	if !(ro > 0) {
 		return 0, 0
 	}
-	mean, max = AnnulusRise(ri, ro, l, k)
+	if RiseEndsCooled(c, w) {
+		mean, max = SectionRise(ri, ro, l, k)
+	} else {
+		mean, max = AnnulusRise(ri, ro, l, k)
+	}
 	if math.IsNaN(mean) || math.IsNaN(max) {
 		return 0, 0
 	}
@@ -482,8 +493,19 @@ func WindingRise(c Coil, w Winding, k float64) (mean, max float64) {
 	return mean / s, max / s
 }
 
-// RiseGeometry returns the annulus (inner and outer radius, length, m)
-// through which the heat of one coil of c is taken to leave its winding: a
+// RiseEndsCooled reports whether WindingRise takes coil c's winding w as
+// cooled through its end faces as well as its outer cylinder
+// (SectionRise): a multilayer coil (or one whose radial build is stated),
+// whose end annuli are part of its heat-shedding surface. A thin coil (the
+// round bundle) and a single-layer coil (one wire deep, its ends a wire's
+// section) are not.
+func RiseEndsCooled(c Coil, w Winding) bool {
+	return w.TurnCount() > 0 && WireOuter(c) > 0 && !w.Thin && !(w.LayerCount <= 1 && c.RadialBuild <= 0)
+}
+
+// RiseGeometry returns the section (inner and outer radius, length, m) in
+// which the heat of one coil of c is generated and across which it is
+// conducted to the winding's surface (WindingRise): a
 // thin coil is a solid round bundle of the hexagonal-packing diameter along
 // its mean turn (ri = 0); a single-layer coil an annulus one overall wire
 // diameter deep over its length; a multilayer coil the annulus its turns

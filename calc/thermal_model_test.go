@@ -423,8 +423,8 @@ func TestOrientedCoolingAgainstLaminarCorrelations(t *testing.T) {
 // the build stated as the layers they fill: empty space outside the
 // last layer generates no heat and carries none. 1500 turns of AWG 28
 // (outer 0.36 mm estimated) fill 19 layers, 6.9 mm of an 8 mm build. The
-// finite-volume profile over the occupied annulus (an independent
-// method, AnnulusConduction, Incropera & DeWitt §3.5) gives the same rise.
+// finite-volume solution over the occupied section (an independent
+// method, SectionConduction) gives the same rise.
 func TestUnderfilledRiseOverOccupiedSection(t *testing.T) {
 	c := Coil{Form: Solenoid, MeanDiameter: 0.03, Length: 0.03, RadialBuild: 0.008, Turns: 1500,
 		Wire: WireFromGauge(28, Copper()), Axis: Vec{0, 0, 1}}
@@ -446,9 +446,8 @@ func TestUnderfilledRiseOverOccupiedSection(t *testing.T) {
 	checkRel(t, "hot-spot rise per watt", hot, hotF, 1e-9)
 	checkRel(t, "mean rise per watt", mean, meanF, 1e-9)
 	ri, ro, l := RiseGeometry(c, w)
-	tp := baseThermal() // 12 W, hA = 0.1 W/K
-	fd := AnnulusConduction(tp, ri, ro, l, 0.3, 1, 400)
-	checkRel(t, "finite-volume hot-spot rise", fd.HotSpot-fd.Surface, 12*hot, 1e-5)
+	_, fdHot := SectionConduction(ri, ro, l, 0.3, 100)
+	checkRel(t, "finite-volume hot-spot rise", fdHot, hot, 1e-5)
 }
 
 // TestCoveredCoolingRadiatesOnly: a coil under or behind a surface people

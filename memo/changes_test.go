@@ -31,7 +31,7 @@ func TestChangesSection(t *testing.T) {
 	for _, want := range []string{
 		"## 2 Changes since revision A",
 		"| requirement field-center ≥ 500 µT | 449.6 µT FAIL | 584.5 µT PASS | FAIL → PASS [PASS] |",
-		"| winding temperature, hottest point | 42.27 °C | 44.95 °C | +2.7 K |",
+		"| winding temperature, hottest point | 40.82 °C | 44.00 °C | +3.2 K |",
 		"| input coil: turns | 50 | 65 | +30 % |",
 		"| input coil: length | 8.900 mm | 11.60 mm | +30 % |",
 		"\n2 Changes since revision A\n",

@@ -262,7 +262,7 @@ func conductionSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, c
 	if len(notes) > 0 {
 		each = " (" + strings.Join(notes, "; ") + ")"
 	}
-	if ri > 0 {
+	if ri > 0 || hp.EndsCooled {
 		add(Step{What: "Heat generated per unit volume of the winding" + occupied + each, Symbolic: `q = \frac{\bar{P}}{\pi \left( r_o^2 - r_i^2 \right) \ell}`,
 			Numbers: fmt.Sprintf(`\frac{%s}{\pi \left( %s^2 - %s^2 \right) \cdot %s}`, Q(pc, "W", 4), Paren(Q(ro, "m", 4)), Paren(Q(ri, "m", 4)), Q(length, "m", 4)),
 			Result:  Q(q, "W/m³", 3)})
@@ -272,12 +272,38 @@ func conductionSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, c
 			Result:  Q(q, "W/m³", 3)})
 	}
 	rise := st.HotSpot - st.Surface
-	if ri > 0 {
+	radial := `\frac{q}{4 k_w} \left[ r_o^2 - r_i^2 - 2 r_i^2 \ln\frac{r_o}{r_i} \right]`
+	radialNumbers := func() string {
+		return fmt.Sprintf(`\frac{%s}{4 \cdot %s} \left[ %s^2 - %s^2 - 2 \cdot %s^2 \ln\frac{%s}{%s} \right]`, Q(q, "W/m³", 4), Q(kw, "W/(m·K)", 2),
+			Paren(Q(ro, "m", 4)), Paren(Q(ri, "m", 4)), Paren(Q(ri, "m", 4)), Q(ro, "m", 4), Q(ri, "m", 4))
+	}
+	// The series sums are written with the figures their difference from
+	// ℓ²/8 or ℓ²/12 needs to keep four of its own (long windings: the two
+	// are close).
+	sumDigits := func(whole, sum float64) int {
+		d := 4
+		if diff := whole - sum; diff > 0 && whole > diff {
+			d += int(math.Ceil(math.Log10(whole / diff)))
+		}
+		return min(d, 12)
+	}
+	if hp.EndsCooled {
+		add(Step{What: fmt.Sprintf("For comparison, the long-winding limit: the rise of the hottest point (at the bore) above the surface if all the heat left by radial conduction through the outer cylinder, bore and ends adiabatic, effective conductivity across the turns %s (%s)", Eng(kw, "W/(m·K)", 2), src),
+			Symbolic: `\Delta T_{\mathrm{r}} = ` + radial, Numbers: radialNumbers(), Result: Q(hp.RadialMax, "K", 3)})
+		add(Step{What: "The series' axial wave numbers, coefficients and radial ratios (I and K the modified Bessel functions)",
+			Symbolic: `\lambda_n = \frac{(2n+1)\pi}{\ell},\qquad c_n = \frac{4 (-1)^n}{(2n+1)\pi},\qquad \rho_n = \frac{I_1(\lambda_n r_i)}{K_1(\lambda_n r_i)}`})
+		add(Step{What: fmt.Sprintf("Rise of the hottest point (on the bore, in the mid-plane) above the surface: the end faces shed heat too (the heat-shedding surface above), so the heat is conducted across the winding's section radially and axially, out through the outer cylinder and both end faces, taken at the surface temperature; the bore is adiabatic, and the conductivity the same radially and axially (both cross the turns). The solution is a series of axial cosines with modified Bessel functions of order 0 radially, summed until its terms are negligible (Carslaw & Jaeger, Conduction of Heat in Solids, 2nd ed., 1959, §8.3); %s of the long-winding limit",
+			Sig(rise/hp.RadialMax, 3)),
+			Symbolic: `\Delta T_{\mathrm{max}} = \frac{q}{k_w} \left[ \frac{\ell^2}{8} - \sum_{n \ge 0} \frac{c_n}{\lambda_n^2} \frac{I_0(\lambda_n r_i) + \rho_n K_0(\lambda_n r_i)}{I_0(\lambda_n r_o) + \rho_n K_0(\lambda_n r_o)} \right]`,
+			Numbers:  fmt.Sprintf(`\frac{%s}{%s} \left[ \frac{%s^2}{8} - %s \right]`, Q(q, "W/m³", 4), Q(kw, "W/(m·K)", 2), Paren(Q(length, "m", 4)), Q(hp.SeriesMax, "m²", sumDigits(length*length/8, hp.SeriesMax))),
+			Result:   Q(rise, "K", 3)})
+		add(Step{What: "Rise of the winding's mean temperature above the surface, at which its resistance is taken: the volume mean of the same solution",
+			Symbolic: `\Delta T_{\mathrm{mean}} = \frac{q}{k_w} \left[ \frac{\ell^2}{12} - \sum_{n \ge 0} \frac{c_n^2}{2 \lambda_n^2} \frac{2 r_o}{\lambda_n \left( r_o^2 - r_i^2 \right)} \frac{I_1(\lambda_n r_o) - \rho_n K_1(\lambda_n r_o)}{I_0(\lambda_n r_o) + \rho_n K_0(\lambda_n r_o)} \right]`,
+			Numbers:  fmt.Sprintf(`\frac{%s}{%s} \left[ \frac{%s^2}{12} - %s \right]`, Q(q, "W/m³", 4), Q(kw, "W/(m·K)", 2), Paren(Q(length, "m", 4)), Q(hp.SeriesMean, "m²", sumDigits(length*length/12, hp.SeriesMean))),
+			Result:   Q(st.Mean-st.Surface, "K", 3)})
+	} else if ri > 0 {
 		add(Step{What: fmt.Sprintf("Rise of the hottest point (at the bore) above the surface: radial conduction out through the outer cylinder, bore and ends taken as adiabatic, effective conductivity across the turns %s (%s)", Eng(kw, "W/(m·K)", 2), src),
-			Symbolic: `\Delta T_{\mathrm{max}} = \frac{q}{4 k_w} \left[ r_o^2 - r_i^2 - 2 r_i^2 \ln\frac{r_o}{r_i} \right]`,
-			Numbers: fmt.Sprintf(`\frac{%s}{4 \cdot %s} \left[ %s^2 - %s^2 - 2 \cdot %s^2 \ln\frac{%s}{%s} \right]`, Q(q, "W/m³", 4), Q(kw, "W/(m·K)", 2),
-				Paren(Q(ro, "m", 4)), Paren(Q(ri, "m", 4)), Paren(Q(ri, "m", 4)), Q(ro, "m", 4), Q(ri, "m", 4)),
-			Result: Q(rise, "K", 3)})
+			Symbolic: `\Delta T_{\mathrm{max}} = ` + radial, Numbers: radialNumbers(), Result: Q(rise, "K", 3)})
 	} else {
 		add(Step{What: fmt.Sprintf("Rise of the hottest point (the bundle's centre) above its surface: radial conduction in a round bundle, effective conductivity across the turns %s (%s)", Eng(kw, "W/(m·K)", 2), src),
 			Symbolic: `\Delta T_{\mathrm{max}} = \frac{q r_b^2}{4 k_w}`,

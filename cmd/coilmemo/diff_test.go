@@ -33,7 +33,7 @@ func TestDiffGroupsAndUnits(t *testing.T) {
 	}
 	for _, want := range []string{
 		"requirement field-center ≥ 500 µT: 449.6 µT FAIL → 584.5 µT PASS  (FAIL → PASS)",
-		"winding temperature, hottest point: 42.27 °C → 44.95 °C  (+2.7 K)",
+		"winding temperature, hottest point: 40.82 °C → 44.00 °C  (+3.2 K)",
 		"inductance: 4.143 mH → 6.709 mH",
 		"input coil: length: 8.900 mm → 11.60 mm  (+30 %)",
 		"input coil: turns: 50 → 65  (+30 %)",
