@@ -149,7 +149,7 @@ func TestRelMargin(t *testing.T) {
 		// the floor, 0.001 %, on either side and at it
 		{1e-5, "+0.00100 %"}, {-1e-5, "−0.00100 %"}, {0.99e-5, "< +0.001 %"}, {-0.99e-5, "> −0.001 %"},
 		{1e-15, "< +0.001 %"}, {-1e-15, "> −0.001 %"}, {0, "0 %"},
-		{1.71, "+171 %"}, {8.99, "+899 %"}, {71.736, "73-fold"}, {9, "10-fold"}, {4.3e8, "4.3×10⁸-fold"},
+		{1.71, "+171 %"}, {8.99, "+899 %"}, {71.736, "×73"}, {9, "×10"}, {4.3e8, "×4.3×10⁸"},
 	} {
 		if got := RelMargin(c.m); got != c.want {
 			t.Errorf("RelMargin(%v) = %q, want %q", c.m, got, c.want)
@@ -177,7 +177,9 @@ func TestTolerance(t *testing.T) {
 		v    float64
 		want string
 	}{
-		{0.01, "1 %"}, {0.002, "0.2 %"}, {1e-5, "0.001 %"}, {1e-8, "10⁻⁶ %"}, {1e-12, "10⁻¹⁰ %"}, {3e-8, "3×10⁻⁶ %"}, {0, "0 %"},
+		{0.01, "1 %"}, {0.002, "0.2 %"}, {1e-5, "0.001 %"}, {0, "0 %"},
+		// below 0.001 % in parts per million, never a power of ten
+		{1e-8, "0.01 ppm"}, {1e-12, "0.000001 ppm"}, {3e-8, "0.03 ppm"}, {4.3e-6, "4.3 ppm"}, {9.94e-6, "9.9 ppm"},
 		{0.00018, "0.018 %"}, {0.0001715, "0.017 %"}, {0.3, "30 %"}, {0.02, "2 %"},
 	} {
 		if got := Tolerance(c.v); got != c.want {
@@ -186,17 +188,19 @@ func TestTolerance(t *testing.T) {
 	}
 }
 
-// A check's difference is printed at a resolution at least ten times
-// finer than its tolerance, or as "< x" with x a tenth of the tolerance or
-// less; never "0 %".
+// A check's difference is printed in its tolerance's unit at a
+// resolution at least ten times finer than the tolerance, or as "< x"
+// with x a tenth of the tolerance or less; never "0 %" nor a power of
+// ten.
 func TestCheckDiff(t *testing.T) {
 	for _, c := range []struct {
 		d, tol float64
 		want   string
 	}{
-		{0, 0.01, "< 0.001 %"}, {2.6e-7, 1e-5, "< 10⁻⁴ %"}, {2.6e-16, 1e-8, "< 10⁻⁷ %"},
+		{0, 0.01, "< 0.001 %"}, {2.6e-7, 1e-5, "< 0.0001 %"}, {2.6e-16, 1e-8, "< 0.001 ppm"},
 		{1.4e-5, 0.00018, "0.0014 %"}, {0.0048, 0.005, "0.48 %"}, {0.12, 0.01, "12.0 %"},
-		{5.2e-5, 0.01, "0.0052 %"}, {3.2e-9, 1e-8, "3.2×10⁻⁷ %"}, {1.06e-5, 0.01, "0.0011 %"},
+		{5.2e-5, 0.01, "0.0052 %"}, {3.2e-9, 1e-8, "0.0032 ppm"}, {1.06e-5, 0.01, "0.0011 %"},
+		{4.7e-7, 4.3e-6, "0.47 ppm"}, {2e-5, 1e-8, "20.000 ppm"}, {1.2e-3, 2e-6, "1200.0 ppm"},
 		{0.17, 0.3, "17 %"}, {-2e-4, 0.002, "0.020 %"},
 	} {
 		if got := CheckDiff(c.d, c.tol); got != c.want {

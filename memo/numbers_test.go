@@ -1,30 +1,53 @@
 package memo
 
 import (
+	"path/filepath"
 	"regexp"
+	"sort"
 	"strings"
 	"testing"
+
+	"golang.org/x/tools/txtar"
 
 	"coilmemo/doc"
 )
 
-// The memo's numbers and counts, over every example and figure-test
-// design: no power of ten on a percentage, no signed zero, no raw SI in
-// exponent form or in ten-thousandths of a metre, no "All 2" or "All 1"
-// counts, no plural after a count of one nor a hedged "(s)", and probe
-// positions written alike.
-func TestNumberForms(t *testing.T) {
-	bad := map[string]*regexp.Regexp{
-		"power of ten on a percentage": regexp.MustCompile(`×10[⁻⁰¹²³⁴⁵⁶⁷⁸⁹]+ ?%`),
-		"signed zero":                  regexp.MustCompile(`[−+-]0(\.0+)? (%|K|°C)`),
-		"raw SI exponent":              regexp.MustCompile(`\b\d(\.\d+)?e-?\d+ [a-zA-Z]`),
-		"raw SI small metres":          regexp.MustCompile(`\b0\.000\d+ m\b`),
-		"count grammar":                regexp.MustCompile(`All [12] |(^|[^0-9.,×])1 (requirements|checks|turns|layers|coils|corners|samples|cautions|warnings|tolerances|gaps|probes|choices|wires)\b|[a-z]\(s\)`),
-		"position with trailing zeros": regexp.MustCompile(`\(\S*\.\d*0, .*\) mm`),
+// memoSources are the specs the number tests read: every example, every
+// figure-test design and every golden case, by name.
+func memoSources(t *testing.T) map[string][]byte {
+	t.Helper()
+	out := designsForTests(t)
+	files, _ := filepath.Glob("../testdata/golden/*.txtar")
+	if len(files) == 0 {
+		t.Fatal("no golden cases")
 	}
-	designs := designsForTests(t)
-	for f, src := range designs {
-		j, diags := evaluate(f, src)
+	for _, f := range files {
+		ar, err := txtar.ParseFile(f)
+		if err != nil {
+			t.Fatal(err)
+		}
+		for _, a := range ar.Files {
+			if a.Name == "spec.md" {
+				out["golden/"+strings.TrimSuffix(filepath.Base(f), ".txtar")] = a.Data
+			}
+		}
+	}
+	return out
+}
+
+// allMemoTexts is the text rendering of the memo of every spec of
+// memoSources, by name.
+func allMemoTexts(t *testing.T) map[string]string {
+	t.Helper()
+	out := map[string]string{}
+	srcs := memoSources(t)
+	names := make([]string, 0, len(srcs))
+	for n := range srcs {
+		names = append(names, n)
+	}
+	sort.Strings(names)
+	for _, f := range names {
+		j, diags := evaluate(f, srcs[f])
 		if len(diags) > 0 {
 			t.Fatal(f, diags)
 		}
@@ -32,7 +55,28 @@ func TestNumberForms(t *testing.T) {
 		if err := doc.WriteText(&text, Compose(j)); err != nil {
 			t.Fatal(err)
 		}
-		for _, line := range strings.Split(text.String(), "\n") {
+		out[strings.ReplaceAll(f, "/", "-")] = text.String()
+	}
+	return out
+}
+
+// The memo's numbers and counts, over every example, figure-test design
+// and golden case: no power of ten on a percentage ("< 10⁻⁷ %",
+// "4.7×10⁻⁵ %"), no signed zero, no raw SI in
+// exponent form or in ten-thousandths of a metre, no "All 2" or "All 1"
+// counts, no plural after a count of one nor a hedged "(s)", and probe
+// positions written alike.
+func TestNumberForms(t *testing.T) {
+	bad := map[string]*regexp.Regexp{
+		"power of ten on a percentage": regexp.MustCompile(`10[⁻⁰¹²³⁴⁵⁶⁷⁸⁹]+ ?(%|ppm)`),
+		"signed zero":                  regexp.MustCompile(`[−+-]0(\.0+)? (%|K|°C)`),
+		"raw SI exponent":              regexp.MustCompile(`\b\d(\.\d+)?e-?\d+ [a-zA-Z]`),
+		"raw SI small metres":          regexp.MustCompile(`\b0\.000\d+ m\b`),
+		"count grammar":                regexp.MustCompile(`All [12] |(^|[^0-9.,×])1 (requirements|checks|turns|layers|coils|corners|samples|cautions|warnings|tolerances|gaps|probes|choices|wires)\b|[a-z]\(s\)`),
+		"position with trailing zeros": regexp.MustCompile(`\(\S*\.\d*0, .*\) mm`),
+	}
+	for f, text := range allMemoTexts(t) {
+		for _, line := range strings.Split(text, "\n") {
 			if strings.HasPrefix(line, "    ") || strings.Contains(line, "\\") {
 				continue // carried-over code, equation notation
 			}
