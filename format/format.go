@@ -341,6 +341,8 @@ var (
 	siScalar = regexp.MustCompile(`^(-?[0-9.]+(?:e[-+]?[0-9]+)?) (\S+)(.*)$`)
 	siVector = regexp.MustCompile(`^\((-?[0-9.e+-]+), (-?[0-9.e+-]+), (-?[0-9.e+-]+)\) (\S+)(.*)$`)
 	siRange  = regexp.MustCompile(`^(-?[0-9.]+(?:e[-+]?[0-9]+)?) (\S+) \.\. (-?[0-9.]+(?:e[-+]?[0-9]+)?) (\S+)(.*)$`)
+	siStep   = regexp.MustCompile(`^ step (-?[0-9.]+(?:e[-+]?[0-9]+)?) (\S+)(.*)$`)
+	siBare   = regexp.MustCompile(`^(.*)\(bare ([0-9.]+) mm\)(.*)$`)
 )
 
 // SIText rewrites a value as the spec reader states it in SI ("0.000237217
@@ -348,8 +350,12 @@ var (
 // Hz") in engineering units, keeping every digit it has (up to 6) and
 // any remark after it: "237.217 µm (heavy-build estimate)", "2 µs",
 // "(0, 30, 0) µT", "10 Hz .. 10 kHz". A vector's components share one
-// prefix; an angle in radians takes none. Anything else (kelvin, counts,
-// dates) is returned as it is.
+// prefix; an angle in radians takes none. A position or length of zero is
+// in mm, as every other ("(0, 0, 0) mm"); a mass below 1 kg in grams; a
+// range's step in the range's prefix ("100 mA … 1 A step 100 mA"); a
+// gauge's bare diameter in engineering units ("AWG 28 (bare 321 µm)"); a
+// range without a unit with the same "…" ("20 … 60 step 20"). Anything
+// else (kelvin, counts, dates) is returned as it is.
 func SIText(s string) string { return SITextSig(s, 6) }
 
 // SITextSig is SIText to at most sig significant figures, trailing zeros
@@ -369,7 +375,13 @@ func SITextSig(s string, sig int) string {
 		switch {
 		case errA != nil || errB != nil:
 		case engUnits[m[2]]:
-			return rangeText(a, b, m[2], sig) + m[5]
+			rest := m[5]
+			if st := siStep.FindStringSubmatch(rest); st != nil && st[2] == m[2] {
+				if v, err := strconv.ParseFloat(st[1], 64); err == nil {
+					rest = " step " + EngTrim(v, m[2], sig) + st[3]
+				}
+			}
+			return rangeText(a, b, m[2], sig) + rest
 		default: // kelvin and the rest as they are, the unit once
 			return strings.Replace(m[1], "-", "−", 1) + " … " + strings.Replace(m[3], "-", "−", 1) + " " + m[2] + m[5]
 		}
@@ -386,14 +398,31 @@ func SITextSig(s string, sig int) string {
 			big = max(big, math.Abs(x))
 		}
 		exp := engExp(big)
+		if big == 0 && m[4] == "m" {
+			exp = -3 // a position at the origin in mm, as every position
+		}
 		parts := make([]string, 3)
 		for i, x := range v {
 			parts[i] = trimmed(x, exp, sig)
 		}
 		return "(" + strings.Join(parts, ", ") + ") " + prefix(exp) + m[4] + m[5]
 	}
+	if m := siBare.FindStringSubmatch(s); m != nil {
+		// a gauge with its bare diameter, which the reader gives in mm
+		if v, err := strconv.ParseFloat(m[2], 64); err == nil {
+			return m[1] + "(bare " + EngTrim(v*1e-3, "m", sig) + ")" + m[3]
+		}
+	}
+	if m := siScalar.FindStringSubmatch(s); m != nil && m[2] == "kg" {
+		if v, err := strconv.ParseFloat(m[1], 64); err == nil && v != 0 && math.Abs(v) < 1 {
+			return trimmed(v*1e3, 0, sig) + " g" + m[3]
+		}
+	}
 	if m := siScalar.FindStringSubmatch(s); m != nil && (engUnits[m[2]] || m[2] == "rad") {
 		if v, err := strconv.ParseFloat(m[1], 64); err == nil {
+			if v == 0 && m[2] == "m" {
+				return "0 mm" + m[3]
+			}
 			if m[2] == "rad" {
 				if v == 0 {
 					return "0 rad" + m[3]
@@ -402,6 +431,9 @@ func SITextSig(s string, sig int) string {
 			}
 			return EngTrim(v, m[2], sig) + m[3]
 		}
+	}
+	if a, b, ok := strings.Cut(s, " .. "); ok {
+		return a + " … " + b // a range without a unit (turns, gauges) as every range
 	}
 	return s
 }

@@ -35,7 +35,9 @@ func TestChangeUnits(t *testing.T) {
 }
 
 // Raw SI from the spec reader is written in engineering units without
-// losing or inventing digits.
+// losing or inventing digits: no "(0, 0, 0) m" beside positions in mm, no
+// "0.04 kg", no range step left in SI, no bare diameter in mm beside
+// overall diameters in µm, one range sign.
 func TestSIText(t *testing.T) {
 	for in, want := range map[string]string{
 		"0.000237217 m (heavy-build estimate)": "237.217 µm (heavy-build estimate)",
@@ -43,21 +45,28 @@ func TestSIText(t *testing.T) {
 		"2e-6 s":                               "2 µs",
 		"0.12 m":                               "120 mm",
 		"0.003 m = (outer-diameter − inner-diameter)/2": "3 mm = (outer-diameter − inner-diameter)/2",
-		"(0, 3e-05, 0) T":        "(0, 30, 0) µT",
-		"(0.01, 0, 0.01) m":      "(10, 0, 10) mm",
-		"(0, 0, 0) m":            "(0, 0, 0) m",
-		"10 Hz .. 10000 Hz":      "10 Hz … 10 kHz",
-		"0 m .. 0.012 m":         "0 … 12 mm",
-		"0.002 m .. 0.012 m":     "2 … 12 mm",
-		"253.15 K .. 333.15 K":   "253.15 … 333.15 K",
-		"1.5e-10 F":              "150 pF",
-		"1 A":                    "1 A",
-		"293.15 K (20 °C)":       "293.15 K (20 °C)",
-		"0.85":                   "0.85",
-		"2026-12-01":             "2026-12-01",
-		"AWG 28 (bare 0.321 mm)": "AWG 28 (bare 0.321 mm)",
-		"1.5708 rad (90°)":       "1.5708 rad (90°)",
-		"-0.02 m":                "−20 mm",
+		"(0, 3e-05, 0) T":            "(0, 30, 0) µT",
+		"(0.01, 0, 0.01) m":          "(10, 0, 10) mm",
+		"(0, 0, 0) m":                "(0, 0, 0) mm", // a position in mm, as every other
+		"0 m":                        "0 mm",
+		"0.04 kg":                    "40 g",
+		"0.008 kg":                   "8 g",
+		"1.5 kg":                     "1.5 kg",
+		"0.1 A .. 1 A step 0.1 A":    "100 mA … 1 A step 100 mA",
+		"20 .. 60 step 20":           "20 … 60 step 20",
+		"AWG 26 .. AWG 34 (9 wires)": "AWG 26 … AWG 34 (9 wires)",
+		"10 Hz .. 10000 Hz":          "10 Hz … 10 kHz",
+		"0 m .. 0.012 m":             "0 … 12 mm",
+		"0.002 m .. 0.012 m":         "2 … 12 mm",
+		"253.15 K .. 333.15 K":       "253.15 … 333.15 K",
+		"1.5e-10 F":                  "150 pF",
+		"1 A":                        "1 A",
+		"293.15 K (20 °C)":           "293.15 K (20 °C)",
+		"0.85":                       "0.85",
+		"2026-12-01":                 "2026-12-01",
+		"AWG 28 (bare 0.321 mm)":     "AWG 28 (bare 321 µm)",
+		"1.5708 rad (90°)":           "1.5708 rad (90°)",
+		"-0.02 m":                    "−20 mm",
 	} {
 		if got := SIText(in); got != want {
 			t.Errorf("SIText(%q) = %q, want %q", in, got, want)

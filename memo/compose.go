@@ -795,8 +795,10 @@ func (c *composer) inputs() {
 		raw, line, si := e.Raw, fmt.Sprint(e.Line), format.SIText(e.SI)
 		if e.Default {
 			// a default or a value derived from others: no digits of the
-			// author's to keep, so engineering units to four figures
-			raw, line, si = "(default)", "", format.SITextSig(e.SI, 4)
+			// author's to keep, so engineering units to three figures,
+			// as the memo writes the value where it uses it (the heavy-build
+			// estimate of 237 µm in the Assumptions)
+			raw, line, si = "(default)", "", format.SITextSig(e.SI, 3)
 		}
 		rows = append(rows, []doc.Cell{
 			{Text: e.Block}, {Text: e.Key}, {Text: raw}, {Text: si}, {Text: line},

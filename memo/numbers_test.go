@@ -88,3 +88,47 @@ func TestNumberForms(t *testing.T) {
 		}
 	}
 }
+
+// The inputs table's SI column writes every value in engineering units,
+// as the rest of the memo: no position or length of zero in metres beside
+// positions in mm, no fractions of a kilogram, no value below 1 or from
+// 1000 up of a unit that takes a prefix, no exponent, no bare diameter in
+// mm beside overall diameters in µm, and one range sign ("…").
+func TestInputsInEngineeringUnits(t *testing.T) {
+	units := `(m|A|V|T|Hz|s|W|Ω|H|F|kg|N|N·m|A·m²|T/m)`
+	bad := map[string]*regexp.Regexp{
+		"metres at the origin":     regexp.MustCompile(`\([0, ]+\) m\b|(^|[^.\d])0 m\b`),
+		"fraction of a unit":       regexp.MustCompile(`(^|[^.\d])0\.\d+ ` + units + `(\s|$|\))`),
+		"a thousand units or more": regexp.MustCompile(`(^|[^.\d])\d{4,}(\.\d+)? ` + units + `(\s|$|\))`),
+		"exponent":                 regexp.MustCompile(`\de[-+]?\d`),
+		"bare diameter in mm":      regexp.MustCompile(`bare 0\.\d+ mm`),
+		"range sign":               regexp.MustCompile(` \.\. `),
+	}
+	rows := 0
+	for f, text := range allMemoTexts(t) {
+		in := false
+		for _, line := range strings.Split(text, "\n") {
+			switch {
+			case strings.HasPrefix(line, "Table: Spec parameters as written and in SI units"):
+				in = true
+				continue
+			case !strings.HasPrefix(line, "| "):
+				in = false
+			}
+			cells := strings.Split(line, " | ")
+			if !in || len(cells) < 5 || cells[0] == "| Block" {
+				continue
+			}
+			rows++
+			si := cells[3]
+			for what, re := range bad {
+				if m := re.FindString(si); m != "" {
+					t.Errorf("%s: SI column: %s %q in %q", f, what, m, line)
+				}
+			}
+		}
+	}
+	if rows < 200 {
+		t.Errorf("only %d inputs rows read", rows)
+	}
+}
