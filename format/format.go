@@ -678,3 +678,42 @@ func CheckDiff(d, tol float64) string {
 	dec := max(0, sig-1-int(math.Floor(math.Log10(r))))
 	return strconv.FormatFloat(r, 'f', dec, 64) + unit
 }
+
+// EngColumn writes the values of one table column (or of the components
+// of one vector) in one unit: the engineering prefix of the largest in
+// size, each to sig significant figures, a zero (or rounding noise below
+// 10⁻¹⁸) as "0" in that unit: {0, 92.53e-9, 433.0e-6} T to 4 is "0 µT",
+// "0.09253 µT", "433.0 µT". A column of zeros takes the prefix of ref, the
+// value it stands beside (the magnitude of the vector), or none.
+func EngColumn(vals []float64, ref float64, unit string, sig int) []string {
+	big := 0.0
+	for _, v := range vals {
+		if !math.IsNaN(v) && !math.IsInf(v, 0) && math.Abs(v) >= 1e-18 {
+			big = math.Max(big, math.Abs(v))
+		}
+	}
+	if big == 0 && math.Abs(ref) >= 1e-18 && !math.IsInf(ref, 0) {
+		big = math.Abs(ref)
+	}
+	exp := 0
+	if big > 0 {
+		exp = engExp(big)
+		if r, _ := strconv.ParseFloat(Sig(big/math.Pow(10, float64(exp)), sig), 64); r >= 1000 && exp < 12 {
+			exp += 3 // rounding carries into the next prefix: 999.96 → 1.000 k
+		}
+	}
+	out := make([]string, len(vals))
+	for i, v := range vals {
+		switch {
+		case math.IsNaN(v):
+			out[i] = "n/a"
+		case math.IsInf(v, 0):
+			out[i] = Eng(v, unit, sig)
+		case math.Abs(v) < 1e-18:
+			out[i] = "0 " + prefix(exp) + unit
+		default:
+			out[i] = Sig(v/math.Pow(10, float64(exp)), sig) + " " + prefix(exp) + unit
+		}
+	}
+	return out
+}

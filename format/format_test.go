@@ -2,6 +2,7 @@ package format
 
 import (
 	"math"
+	"strings"
 	"testing"
 )
 
@@ -225,6 +226,28 @@ func TestCeilSig(t *testing.T) {
 	} {
 		if got := CeilSig(c.v, 2); math.Abs(got-c.want) > 1e-15*c.want {
 			t.Errorf("CeilSig(%g, 2) = %g, want %g", c.v, got, c.want)
+		}
+	}
+}
+
+// A column of values is written in one unit, zeros included: a table of
+// probe fields does not put "0 T" or "92.53 nT" beside µT.
+func TestEngColumn(t *testing.T) {
+	for _, c := range []struct {
+		vals []float64
+		ref  float64
+		want []string
+	}{
+		{[]float64{0, 92.53e-9, 433.0e-6}, 0, []string{"0 µT", "0.09253 µT", "433.0 µT"}},
+		{[]float64{0, 0}, 433.0e-6, []string{"0 µT", "0 µT"}},
+		{[]float64{0, 1e-20}, 0, []string{"0 T", "0 T"}},
+		{[]float64{-106.5e-6, 177.7e-6}, 0, []string{"−106.5 µT", "177.7 µT"}},
+		{[]float64{999.96e-6, 1e-6}, 0, []string{"1.000 mT", "0.001000 mT"}},
+		{[]float64{369.9e-9, 0, 10.22e-3}, 10.22e-3, []string{"0.0003699 mT", "0 mT", "10.22 mT"}},
+	} {
+		got := EngColumn(c.vals, c.ref, "T", 4)
+		if strings.Join(got, "|") != strings.Join(c.want, "|") {
+			t.Errorf("EngColumn(%v) = %q, want %q", c.vals, got, c.want)
 		}
 	}
 }

@@ -28,8 +28,11 @@ func (c *composer) field() {
 	if c.anyReceiver() {
 		every = "every driven coil"
 	}
+	// a component of zero in the unit of the magnitude ("Bx = 0 µT"
+	// beside "Bz = 433.0 µT"), every other in its own
+	comp := func(v float64) string { return format.EngColumn([]float64{v}, B0.Norm(), "T", 4)[0] }
 	c.para(fmt.Sprintf("With %s at its steady operating current, the flux density at the origin is |B| = %s (Bx = %s, By = %s, Bz = %s). The background field is not included in these figures.",
-		every, Eng(B0.Norm(), "T", 4), Eng(B0[0], "T", 4), Eng(B0[1], "T", 4), Eng(B0[2], "T", 4)))
+		every, Eng(B0.Norm(), "T", 4), comp(B0[0]), comp(B0[1]), comp(B0[2])))
 	if p := c.pickUpNote(
 		"it makes no field of its own and has no figures here; the field figures are the driven coils', and its response to a field is in the section Pick-up and a.c. figures",
 		"they make no field of their own and have no figures here; the field figures are the driven coils', and their response to a field is in the section Pick-up and a.c. figures"); p != "" {
@@ -49,12 +52,20 @@ func (c *composer) field() {
 	}
 	c.para("Fields are computed from the exact field of " + from + ", superposed. For maps and profiles the turns of a thick winding are grouped by Gauss quadrature over the winding cross-section, which reproduces the turn-by-turn sum to better than one part in 10⁹ and falls back to the individual turns near the winding.")
 	if len(r.Probes) > 0 {
-		var rows [][]doc.Cell
+		// every field of the table in one unit, that of the largest, so
+		// that a zero or a small component reads against the others
+		var all []float64
 		for _, p := range r.Probes {
+			all = append(all, p.B[0], p.B[1], p.B[2], p.B.Norm())
+		}
+		txt := format.EngColumn(all, 0, "T", 4)
+		var rows [][]doc.Cell
+		for i, p := range r.Probes {
+			b := txt[4*i : 4*i+4]
 			rows = append(rows, []doc.Cell{{Text: p.Name},
 				{Text: fmt.Sprintf("(%s, %s, %s) mm", mmNum(p.At[0]), mmNum(p.At[1]), mmNum(p.At[2]))},
-				{Text: Eng(p.B[0], "T", 4)}, {Text: Eng(p.B[1], "T", 4)}, {Text: Eng(p.B[2], "T", 4)},
-				{Text: Eng(p.B.Norm(), "T", 4), Strong: true}})
+				{Text: b[0]}, {Text: b[1]}, {Text: b[2]},
+				{Text: b[3], Strong: true}})
 		}
 		c.add(doc.Table{Caption: "Flux density at the probe points (all coils)",
 			Header: []string{"Probe", "Position", "Bx", "By", "Bz", "|B|"}, Rows: rows,
@@ -426,7 +437,7 @@ func (c *composer) pairProfileFigure(co calc.Coil, cs *analysis.CoilStudy) {
 	c.para(text)
 	c.fig(doc.Figure{Caption: fmt.Sprintf("Axial flux density %s along the axis of pair %q (exact field; shaded: the windings)", bs, co.Name),
 		Width: figWidth, Height: figHeight * 0.8, Draw: figures.Profile(d),
-		Summary: fmt.Sprintf("%s on axis: %s at the centre; largest %s at %s.", bs, Eng(bp.Centre, "T", 3), Eng(math.Abs(bp.Peak), "T", 3), Eng(bp.PeakZ, "m", 3))})
+		Summary: fmt.Sprintf("%s on axis: %s at the centre; largest %s at %s.", bs, format.EngColumn([]float64{bp.Centre}, bp.Peak, "T", 3)[0], Eng(math.Abs(bp.Peak), "T", 3), Eng(bp.PeakZ, "m", 3))})
 }
 
 // fieldMap adds the map of |B| over the meridian plane; afterPlane says a
@@ -489,7 +500,7 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 	text := fmt.Sprintf("Figure %d maps the magnitude of the flux density of coil %q alone over %s, on a logarithmic colour scale with contour lines at 1–2–5 steps per decade; the winding cross-sections are drawn in.",
 		n, co.Name, plane)
 	if centre, edge, ok := mapLevels(m); ok {
-		text += " " + mapPeakText(co, m, cored) + fmt.Sprintf("; it is %s at the centre and at most %s on the map's edge.", Eng(centre, "T", 3), Eng(edge, "T", 3))
+		text += " " + mapPeakText(co, m, cored) + fmt.Sprintf("; it is %s at the centre and at most %s on the map's edge.", format.EngColumn([]float64{centre}, edge, "T", 3)[0], Eng(edge, "T", 3))
 	}
 	coreCap := ""
 	if cored {

@@ -132,3 +132,49 @@ func TestInputsInEngineeringUnits(t *testing.T) {
 		t.Errorf("only %d inputs rows read", rows)
 	}
 }
+
+// A field of zero is written in the unit of the fields beside it: no "0 T"
+// in a probe table of µT, nor "Bx = 0 T" beside "Bz = 433.0 µT"; and a
+// probe table's fields are in one unit.
+func TestZeroFieldInItsNeighboursUnit(t *testing.T) {
+	zero := regexp.MustCompile(`(^|[^.\d])0 T\b`)
+	cell := regexp.MustCompile(`^−?[\d.]+ (\S*T)$`)
+	probeRows := 0
+	for f, text := range allMemoTexts(t) {
+		probes := false
+		for _, line := range strings.Split(text, "\n") {
+			if strings.HasPrefix(line, "    ") || strings.Contains(line, "\\") {
+				continue
+			}
+			if zero.MatchString(line) && regexp.MustCompile(`[\d.]+ [µnmk]T\b`).MatchString(line) {
+				t.Errorf("%s: a zero field in tesla beside prefixed ones: %q", f, line)
+			}
+			switch {
+			case strings.HasPrefix(line, "Table: Flux density at the probe points"):
+				probes = true
+				continue
+			case !strings.HasPrefix(line, "| "):
+				probes = false
+			}
+			cells := strings.Split(strings.Trim(line, "| "), " | ")
+			if !probes || len(cells) != 6 || cells[0] == "Probe" {
+				continue
+			}
+			probeRows++
+			units := map[string]bool{}
+			for _, c := range cells[2:] {
+				if m := cell.FindStringSubmatch(c); m != nil {
+					units[m[1]] = true
+				} else {
+					t.Errorf("%s: probe field %q", f, c)
+				}
+			}
+			if len(units) != 1 {
+				t.Errorf("%s: probe row in %d units: %q", f, len(units), line)
+			}
+		}
+	}
+	if probeRows < 10 {
+		t.Errorf("only %d probe rows", probeRows)
+	}
+}
