@@ -178,3 +178,57 @@ func TestZeroFieldInItsNeighboursUnit(t *testing.T) {
 		t.Errorf("only %d probe rows", probeRows)
 	}
 }
+
+// A sweep's table gives its swept values to one number of decimals
+// ("1.0" below "0.9", not "1") and each result column in one unit (no
+// "862 mA·m²" above "1.01 A·m²").
+func TestSweepColumnsInOneForm(t *testing.T) {
+	value := regexp.MustCompile(`^−?[\d.]+ (\S+)$`)
+	tables := 0
+	for f, text := range allMemoTexts(t) {
+		var rows [][]string
+		in := false
+		for _, line := range strings.Split(text, "\n") {
+			switch {
+			case strings.HasPrefix(line, "Table: Results at each step of the sweep"):
+				in, rows = true, nil
+				continue
+			case in && strings.HasPrefix(line, "| "):
+				rows = append(rows, strings.Split(strings.Trim(line, "| "), " | "))
+				continue
+			case !in:
+				continue
+			}
+			in = false
+			tables++
+			if len(rows) < 3 {
+				t.Errorf("%s: sweep table of %d rows", f, len(rows))
+				continue
+			}
+			decimals, units := map[int]bool{}, map[int]map[string]bool{}
+			for _, r := range rows[1:] {
+				_, frac, _ := strings.Cut(r[0], ".")
+				decimals[len(frac)] = true
+				for k, c := range r[1:] {
+					if m := value.FindStringSubmatch(c); m != nil && m[1] != "°C" {
+						if units[k] == nil {
+							units[k] = map[string]bool{}
+						}
+						units[k][m[1]] = true
+					}
+				}
+			}
+			if len(decimals) != 1 {
+				t.Errorf("%s: swept values with %d numbers of decimals: %v", f, len(decimals), rows)
+			}
+			for k, u := range units {
+				if len(u) != 1 {
+					t.Errorf("%s: sweep column %q in %d units", f, rows[0][k+1], len(u))
+				}
+			}
+		}
+	}
+	if tables == 0 {
+		t.Error("no sweep table")
+	}
+}
