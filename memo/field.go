@@ -230,13 +230,13 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 			figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + figures.LengthLabel(co.MeanDiameter) + " mean"},
 			figures.Dimension{Kind: figures.Diameter, A: e.R1, Label: "Ø " + figures.LengthLabel(2*e.R1) + " outer"},
 			figures.Dimension{Kind: figures.Axial, A: e.Z0 + cs.Placements[0], B: e.Z1 + cs.Placements[0], Label: figures.LengthLabel(e.Z1 - e.Z0)},
-			figures.Dimension{Kind: figures.Radial, A: e.R0, B: e.R1, Label: figures.LengthLabel(co.RadialBuild)})
+			figures.Dimension{Kind: figures.Radial, A: e.R0, B: e.R1, Label: buildText(co.RadialBuild)})
 		desc = fmt.Sprintf("%d turns in %d layers of up to %d turns, %s long with a radial build of %s",
-			co.Turns, w.LayerCount, w.TurnsPerLayer, mmText(e.Z1-e.Z0), mmText(co.RadialBuild))
+			co.Turns, w.LayerCount, w.TurnsPerLayer, mmText(e.Z1-e.Z0), buildText(co.RadialBuild))
 		if cs.Underfilled {
 			used := cs.Laid.R1 - cs.Laid.R0
-			sd.Dimensions[len(sd.Dimensions)-1].Label += ", turns " + figures.LengthLabel(used) // the radial build's
-			desc += fmt.Sprintf(", of which the turns fill the inner %s (drawn in copper; the rest of the stated section in dashed outline)", mmText(used))
+			sd.Dimensions[len(sd.Dimensions)-1].Label += ", turns " + buildText(used) // the radial build's
+			desc += fmt.Sprintf(", of which the turns fill the inner %s (drawn in copper; the rest of the stated section in dashed outline)", buildText(used))
 		}
 	}
 	sd.Dimensions = append(sd.Dimensions, coreDims...)
@@ -244,8 +244,9 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 	if co.Form == calc.Pair {
 		s := math.Abs(co.Spacing)
 		sd.CentreLines = []float64{-s / 2, s / 2}
-		sd.Dimensions = append(sd.Dimensions, figures.Dimension{Kind: figures.Axial, A: -s / 2, B: s / 2, Label: "spacing " + figures.LengthLabel(s)})
-		desc = "each of the two coils holds " + desc + fmt.Sprintf("; their centres are %s apart", mmText(s))
+		sd.Dimensions = append(sd.Dimensions, figures.Dimension{Kind: figures.Axial, A: -s / 2, B: s / 2, Label: "spacing " + Eng(s, "m", 4)})
+		// the spacing as the pair's section writes it ("60.00 mm apart")
+		desc = "each of the two coils holds " + desc + fmt.Sprintf("; their centres are %s apart", Eng(s, "m", 4))
 	}
 	c.para(fmt.Sprintf("Figure %d shows the winding cross-section in the half-plane above the axis, to scale: %s.", n, desc))
 	h := sketchHeight(co, e)

@@ -232,3 +232,47 @@ func TestSweepColumnsInOneForm(t *testing.T) {
 		t.Error("no sweep table")
 	}
 }
+
+// A winding's radial build, the depth its turns fill and a pair's spacing
+// are written one way in a memo of one coil — page 1, the Assumptions, the
+// heat, the cross-section's text — so that no memo says "the inner
+// 0.95 mm" beside "the inner 949 µm", or "60 mm apart" beside "60.00 mm
+// apart".
+func TestBuildWrittenOneWay(t *testing.T) {
+	phrases := map[string]*regexp.Regexp{
+		"filled depth": regexp.MustCompile(`(?:fill(?: only)? the inner|over the inner|layers) ([\d.]+ [µm]m)`),
+		"radial build": regexp.MustCompile(`([\d.]+ [µm]m) radial build|radial build of ([\d.]+ [µm]m)`),
+		"spacing":      regexp.MustCompile(`centres are ([\d.]+ [µm]m) apart`),
+	}
+	seen := 0
+	for f, src := range memoSources(t) {
+		j, diags := evaluate(f, src)
+		if len(diags) > 0 {
+			t.Fatal(f, diags)
+		}
+		if len(j.Spec.Design.Coils) != 1 {
+			continue
+		}
+		var text strings.Builder
+		if err := doc.WriteText(&text, Compose(j)); err != nil {
+			t.Fatal(err)
+		}
+		for what, re := range phrases {
+			forms := map[string]bool{}
+			for _, m := range re.FindAllStringSubmatch(text.String(), -1) {
+				for _, g := range m[1:] {
+					if g != "" {
+						forms[g] = true
+					}
+				}
+			}
+			seen += len(forms)
+			if len(forms) > 1 {
+				t.Errorf("%s: %s written %d ways: %v", f, what, len(forms), forms)
+			}
+		}
+	}
+	if seen < 10 {
+		t.Errorf("only %d forms seen", seen)
+	}
+}

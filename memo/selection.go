@@ -389,6 +389,9 @@ func rangeValueOf(r spec.FreeRange, v float64) string {
 	if u := map[string]string{"current": "A", "voltage": "V", "switch-off": "s", "on-time": "s", "frequency": "Hz"}[r.Key]; u != "" {
 		return Eng(v, u, 4)
 	}
+	if r.Key == "radial-build" {
+		return buildText(v) // as the cross-section and page 1 write it
+	}
 	return Eng(v, "m", 4)
 }
 
