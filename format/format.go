@@ -227,7 +227,9 @@ func Margin(v float64, unit string) string {
 // "> −0.001 %" (missed), so that the sign is never lost and never a bare
 // "0.0 %"; none at all, exactly at the requirement, "0 %"; and a value
 // that exceeds an at-least requirement tenfold or more as the ratio of
-// the two, "73-fold", since a percentage of thousands says nothing more.
+// the two to two significant figures, "×73", since a percentage of
+// thousands says nothing more. Every table with such a margin says so
+// (RatioMarginNote).
 func RelMargin(m float64) string {
 	p := 100 * m
 	switch {
@@ -235,8 +237,8 @@ func RelMargin(m float64) string {
 		return "n/a"
 	case math.IsInf(m, 1):
 		return "∞"
-	case m >= 9:
-		return Sig(1+m, 2) + "-fold"
+	case m >= RatioMargin:
+		return "×" + Sci(1+m, 2)
 	case m == 0:
 		return "0 %"
 	case p > 0 && p < 1e-3:
@@ -250,6 +252,15 @@ func RelMargin(m float64) string {
 	}
 	return s
 }
+
+// RatioMargin is the relative margin from which RelMargin writes the
+// ratio of value to requirement rather than a percentage: a value ten
+// times an at-least requirement.
+const RatioMargin = 9
+
+// RatioMarginNote is the words a table or text with a margin written as a
+// ratio ("×73") adds to say what it is.
+const RatioMarginNote = "×n: n times the requirement"
 
 // InsulationClass writes an insulation thermal class, given in kelvin,
 // the one way the memo names it: "class F (155 °C)" for a class of IEC
@@ -330,6 +341,8 @@ var (
 	siScalar = regexp.MustCompile(`^(-?[0-9.]+(?:e[-+]?[0-9]+)?) (\S+)(.*)$`)
 	siVector = regexp.MustCompile(`^\((-?[0-9.e+-]+), (-?[0-9.e+-]+), (-?[0-9.e+-]+)\) (\S+)(.*)$`)
 	siRange  = regexp.MustCompile(`^(-?[0-9.]+(?:e[-+]?[0-9]+)?) (\S+) \.\. (-?[0-9.]+(?:e[-+]?[0-9]+)?) (\S+)(.*)$`)
+	siStep   = regexp.MustCompile(`^ step (-?[0-9.]+(?:e[-+]?[0-9]+)?) (\S+)(.*)$`)
+	siBare   = regexp.MustCompile(`^(.*)\(bare ([0-9.]+) mm\)(.*)$`)
 )
 
 // SIText rewrites a value as the spec reader states it in SI ("0.000237217
@@ -337,8 +350,12 @@ var (
 // Hz") in engineering units, keeping every digit it has (up to 6) and
 // any remark after it: "237.217 µm (heavy-build estimate)", "2 µs",
 // "(0, 30, 0) µT", "10 Hz .. 10 kHz". A vector's components share one
-// prefix; an angle in radians takes none. Anything else (kelvin, counts,
-// dates) is returned as it is.
+// prefix; an angle in radians takes none. A position or length of zero is
+// in mm, as every other ("(0, 0, 0) mm"); a mass below 1 kg in grams; a
+// range's step in the range's prefix ("100 mA … 1 A step 100 mA"); a
+// gauge's bare diameter in engineering units ("AWG 28 (bare 321 µm)"); a
+// range without a unit with the same "…" ("20 … 60 step 20"). Anything
+// else (kelvin, counts, dates) is returned as it is.
 func SIText(s string) string { return SITextSig(s, 6) }
 
 // SITextSig is SIText to at most sig significant figures, trailing zeros
@@ -358,7 +375,13 @@ func SITextSig(s string, sig int) string {
 		switch {
 		case errA != nil || errB != nil:
 		case engUnits[m[2]]:
-			return rangeText(a, b, m[2], sig) + m[5]
+			rest := m[5]
+			if st := siStep.FindStringSubmatch(rest); st != nil && st[2] == m[2] {
+				if v, err := strconv.ParseFloat(st[1], 64); err == nil {
+					rest = " step " + EngTrim(v, m[2], sig) + st[3]
+				}
+			}
+			return rangeText(a, b, m[2], sig) + rest
 		default: // kelvin and the rest as they are, the unit once
 			return strings.Replace(m[1], "-", "−", 1) + " … " + strings.Replace(m[3], "-", "−", 1) + " " + m[2] + m[5]
 		}
@@ -375,14 +398,31 @@ func SITextSig(s string, sig int) string {
 			big = max(big, math.Abs(x))
 		}
 		exp := engExp(big)
+		if big == 0 && m[4] == "m" {
+			exp = -3 // a position at the origin in mm, as every position
+		}
 		parts := make([]string, 3)
 		for i, x := range v {
 			parts[i] = trimmed(x, exp, sig)
 		}
 		return "(" + strings.Join(parts, ", ") + ") " + prefix(exp) + m[4] + m[5]
 	}
+	if m := siBare.FindStringSubmatch(s); m != nil {
+		// a gauge with its bare diameter, which the reader gives in mm
+		if v, err := strconv.ParseFloat(m[2], 64); err == nil {
+			return m[1] + "(bare " + EngTrim(v*1e-3, "m", sig) + ")" + m[3]
+		}
+	}
+	if m := siScalar.FindStringSubmatch(s); m != nil && m[2] == "kg" {
+		if v, err := strconv.ParseFloat(m[1], 64); err == nil && v != 0 && math.Abs(v) < 1 {
+			return trimmed(v*1e3, 0, sig) + " g" + m[3]
+		}
+	}
 	if m := siScalar.FindStringSubmatch(s); m != nil && (engUnits[m[2]] || m[2] == "rad") {
 		if v, err := strconv.ParseFloat(m[1], 64); err == nil {
+			if v == 0 && m[2] == "m" {
+				return "0 mm" + m[3]
+			}
 			if m[2] == "rad" {
 				if v == 0 {
 					return "0 rad" + m[3]
@@ -391,6 +431,9 @@ func SITextSig(s string, sig int) string {
 			}
 			return EngTrim(v, m[2], sig) + m[3]
 		}
+	}
+	if a, b, ok := strings.Cut(s, " .. "); ok {
+		return a + " … " + b // a range without a unit (turns, gauges) as every range
 	}
 	return s
 }
@@ -550,12 +593,13 @@ func Digits(n int) string {
 	return s
 }
 
-// Tolerance is a relative tolerance as a percentage, the one form every
-// tolerance of the verification takes: to at most two significant figures
-// with no trailing zeros, "1 %", "0.2 %", "0.017 %", "0.001 %", and one
-// below 0.001 % as a power of ten, "10⁻⁶ %" or "4×10⁻⁶ %". A tolerance
-// the checks compute is rounded up to two figures before it is applied
-// (analysis.newCheck), so the figure printed is the one applied.
+// Tolerance is a relative tolerance, the one form every tolerance of the
+// verification takes: to at most two significant figures with no
+// trailing zeros and never a power of ten; as a percentage from 0.001 %
+// up, "1 %", "0.2 %", "0.017 %", "0.001 %", and below that in parts per
+// million, "0.01 ppm", "4.3 ppm". A tolerance the checks compute is
+// rounded up to two figures before it is applied (analysis.newCheck), so
+// the figure printed is the one applied.
 func Tolerance(v float64) string {
 	switch {
 	case math.IsNaN(v):
@@ -563,8 +607,15 @@ func Tolerance(v float64) string {
 	case !(v > 0):
 		return "0 %"
 	}
-	return percentText(RoundSig(100*v, 2)) + " %"
+	if perMillion(v) {
+		return decimalText(RoundSig(1e6*v, 2)) + " ppm"
+	}
+	return decimalText(RoundSig(100*v, 2)) + " %"
 }
+
+// perMillion reports whether a relative tolerance is written in parts per
+// million: below 0.001 % once rounded to two figures.
+func perMillion(tol float64) bool { return RoundSig(100*tol, 2) < 1e-3 }
 
 // RoundSig rounds v to sig significant figures.
 func RoundSig(v float64, sig int) float64 {
@@ -588,49 +639,81 @@ func CeilSig(v float64, sig int) float64 {
 	return math.Ceil(v*p) / p
 }
 
-// percentText writes a positive percentage figure without its sign: plain
-// decimals from 0.001 up ("0.017", "12.5"), a power of ten below
-// ("10⁻⁶", "4.2×10⁻⁶").
-func percentText(p float64) string {
-	if p >= 1e-3 {
-		return strconv.FormatFloat(p, 'f', -1, 64)
-	}
-	s := strconv.FormatFloat(p, 'e', -1, 64)
-	mant, exp, _ := strings.Cut(s, "e")
-	e, _ := strconv.Atoi(exp)
-	if mant == "1" {
-		return "10" + superscript(strconv.Itoa(e))
-	}
-	return mant + "×10" + superscript(strconv.Itoa(e))
+// decimalText writes a positive figure in plain decimals without
+// trailing zeros: "0.017", "12.5", "0.0001".
+func decimalText(p float64) string {
+	return strconv.FormatFloat(p, 'f', -1, 64)
 }
 
 // CheckDiff writes a check's relative difference d against its relative
-// tolerance tol so that the verdict can be read from the two figures: at a
-// resolution at least ten times finer than the tolerance, and at least
-// two significant figures ("0.48 %" against 0.5 %, "12.0 %" against
-// 1 %); a difference below that resolution, none included, as "< x" with
-// x the resolution — 0.001 % at most, a tenth of the tolerance or less
-// ("< 0.001 %" against 1 %, "< 10⁻⁴ %" against 0.001 %, "< 10⁻⁷ %"
-// against 10⁻⁶ %). Never "0 %" nor a signed zero.
+// tolerance tol so that the verdict can be read from the two figures, in
+// the unit of the tolerance (Tolerance: per cent, or parts per million
+// below 0.001 %): at a resolution at least ten times finer than the
+// tolerance, and at least two significant figures ("0.48 %" against
+// 0.5 %, "12.0 %" against 1 %); a difference below that resolution, none
+// included, as "< x" with x the resolution — 0.001 % at most, a tenth of
+// the tolerance or less ("< 0.001 %" against 1 %, "< 0.0001 %" against
+// 0.001 %, "< 0.001 ppm" against 0.01 ppm). Plain decimals, never a power
+// of ten, "0 %" nor a signed zero.
 func CheckDiff(d, tol float64) string {
 	if math.IsNaN(d) || math.IsNaN(tol) || !(tol > 0) {
 		return Percent(d)
 	}
-	d, T := math.Abs(d)*100, RoundSig(100*tol, 2)
+	scale, unit, floor := 100.0, " %", 1e-3
+	if perMillion(tol) {
+		scale, unit, floor = 1e6, " ppm", math.Inf(1)
+	}
+	d, T := math.Abs(d)*scale, RoundSig(scale*tol, 2)
 	res := math.Pow(10, math.Floor(math.Log10(T))-1) // ≤ T/10
-	floor := math.Min(res, 1e-3)
+	floor = math.Min(res, floor)
 	if d < floor {
-		return "< " + percentText(floor) + " %"
+		return "< " + decimalText(floor) + unit
 	}
 	if math.IsInf(d, 0) {
-		return "∞ %"
+		return "∞" + unit
 	}
 	// significant figures enough for the resolution, two at least
 	sig := max(2, int(math.Floor(math.Log10(d)))-int(math.Round(math.Log10(res)))+1)
 	r := RoundSig(d, sig)
-	if r >= 1e-3 {
-		dec := max(0, sig-1-int(math.Floor(math.Log10(r))))
-		return strconv.FormatFloat(r, 'f', dec, 64) + " %"
+	dec := max(0, sig-1-int(math.Floor(math.Log10(r))))
+	return strconv.FormatFloat(r, 'f', dec, 64) + unit
+}
+
+// EngColumn writes the values of one table column (or of the components
+// of one vector) in one unit: the engineering prefix of the largest in
+// size, each to sig significant figures, a zero (or rounding noise below
+// 10⁻¹⁸) as "0" in that unit: {0, 92.53e-9, 433.0e-6} T to 4 is "0 µT",
+// "0.09253 µT", "433.0 µT". A column of zeros takes the prefix of ref, the
+// value it stands beside (the magnitude of the vector), or none.
+func EngColumn(vals []float64, ref float64, unit string, sig int) []string {
+	big := 0.0
+	for _, v := range vals {
+		if !math.IsNaN(v) && !math.IsInf(v, 0) && math.Abs(v) >= 1e-18 {
+			big = math.Max(big, math.Abs(v))
+		}
 	}
-	return Sci(r, sig) + " %"
+	if big == 0 && math.Abs(ref) >= 1e-18 && !math.IsInf(ref, 0) {
+		big = math.Abs(ref)
+	}
+	exp := 0
+	if big > 0 {
+		exp = engExp(big)
+		if r, _ := strconv.ParseFloat(Sig(big/math.Pow(10, float64(exp)), sig), 64); r >= 1000 && exp < 12 {
+			exp += 3 // rounding carries into the next prefix: 999.96 → 1.000 k
+		}
+	}
+	out := make([]string, len(vals))
+	for i, v := range vals {
+		switch {
+		case math.IsNaN(v):
+			out[i] = "n/a"
+		case math.IsInf(v, 0):
+			out[i] = Eng(v, unit, sig)
+		case math.Abs(v) < 1e-18:
+			out[i] = "0 " + prefix(exp) + unit
+		default:
+			out[i] = Sig(v/math.Pow(10, float64(exp)), sig) + " " + prefix(exp) + unit
+		}
+	}
+	return out
 }

@@ -2,6 +2,7 @@ package format
 
 import (
 	"math"
+	"strings"
 	"testing"
 )
 
@@ -35,7 +36,9 @@ func TestChangeUnits(t *testing.T) {
 }
 
 // Raw SI from the spec reader is written in engineering units without
-// losing or inventing digits.
+// losing or inventing digits: no "(0, 0, 0) m" beside positions in mm, no
+// "0.04 kg", no range step left in SI, no bare diameter in mm beside
+// overall diameters in µm, one range sign.
 func TestSIText(t *testing.T) {
 	for in, want := range map[string]string{
 		"0.000237217 m (heavy-build estimate)": "237.217 µm (heavy-build estimate)",
@@ -43,21 +46,28 @@ func TestSIText(t *testing.T) {
 		"2e-6 s":                               "2 µs",
 		"0.12 m":                               "120 mm",
 		"0.003 m = (outer-diameter − inner-diameter)/2": "3 mm = (outer-diameter − inner-diameter)/2",
-		"(0, 3e-05, 0) T":        "(0, 30, 0) µT",
-		"(0.01, 0, 0.01) m":      "(10, 0, 10) mm",
-		"(0, 0, 0) m":            "(0, 0, 0) m",
-		"10 Hz .. 10000 Hz":      "10 Hz … 10 kHz",
-		"0 m .. 0.012 m":         "0 … 12 mm",
-		"0.002 m .. 0.012 m":     "2 … 12 mm",
-		"253.15 K .. 333.15 K":   "253.15 … 333.15 K",
-		"1.5e-10 F":              "150 pF",
-		"1 A":                    "1 A",
-		"293.15 K (20 °C)":       "293.15 K (20 °C)",
-		"0.85":                   "0.85",
-		"2026-12-01":             "2026-12-01",
-		"AWG 28 (bare 0.321 mm)": "AWG 28 (bare 0.321 mm)",
-		"1.5708 rad (90°)":       "1.5708 rad (90°)",
-		"-0.02 m":                "−20 mm",
+		"(0, 3e-05, 0) T":            "(0, 30, 0) µT",
+		"(0.01, 0, 0.01) m":          "(10, 0, 10) mm",
+		"(0, 0, 0) m":                "(0, 0, 0) mm", // a position in mm, as every other
+		"0 m":                        "0 mm",
+		"0.04 kg":                    "40 g",
+		"0.008 kg":                   "8 g",
+		"1.5 kg":                     "1.5 kg",
+		"0.1 A .. 1 A step 0.1 A":    "100 mA … 1 A step 100 mA",
+		"20 .. 60 step 20":           "20 … 60 step 20",
+		"AWG 26 .. AWG 34 (9 wires)": "AWG 26 … AWG 34 (9 wires)",
+		"10 Hz .. 10000 Hz":          "10 Hz … 10 kHz",
+		"0 m .. 0.012 m":             "0 … 12 mm",
+		"0.002 m .. 0.012 m":         "2 … 12 mm",
+		"253.15 K .. 333.15 K":       "253.15 … 333.15 K",
+		"1.5e-10 F":                  "150 pF",
+		"1 A":                        "1 A",
+		"293.15 K (20 °C)":           "293.15 K (20 °C)",
+		"0.85":                       "0.85",
+		"2026-12-01":                 "2026-12-01",
+		"AWG 28 (bare 0.321 mm)":     "AWG 28 (bare 321 µm)",
+		"1.5708 rad (90°)":           "1.5708 rad (90°)",
+		"-0.02 m":                    "−20 mm",
 	} {
 		if got := SIText(in); got != want {
 			t.Errorf("SIText(%q) = %q, want %q", in, got, want)
@@ -149,7 +159,7 @@ func TestRelMargin(t *testing.T) {
 		// the floor, 0.001 %, on either side and at it
 		{1e-5, "+0.00100 %"}, {-1e-5, "−0.00100 %"}, {0.99e-5, "< +0.001 %"}, {-0.99e-5, "> −0.001 %"},
 		{1e-15, "< +0.001 %"}, {-1e-15, "> −0.001 %"}, {0, "0 %"},
-		{1.71, "+171 %"}, {8.99, "+899 %"}, {71.736, "73-fold"}, {9, "10-fold"}, {4.3e8, "4.3×10⁸-fold"},
+		{1.71, "+171 %"}, {8.99, "+899 %"}, {71.736, "×73"}, {9, "×10"}, {4.3e8, "×4.3×10⁸"},
 	} {
 		if got := RelMargin(c.m); got != c.want {
 			t.Errorf("RelMargin(%v) = %q, want %q", c.m, got, c.want)
@@ -177,7 +187,9 @@ func TestTolerance(t *testing.T) {
 		v    float64
 		want string
 	}{
-		{0.01, "1 %"}, {0.002, "0.2 %"}, {1e-5, "0.001 %"}, {1e-8, "10⁻⁶ %"}, {1e-12, "10⁻¹⁰ %"}, {3e-8, "3×10⁻⁶ %"}, {0, "0 %"},
+		{0.01, "1 %"}, {0.002, "0.2 %"}, {1e-5, "0.001 %"}, {0, "0 %"},
+		// below 0.001 % in parts per million, never a power of ten
+		{1e-8, "0.01 ppm"}, {1e-12, "0.000001 ppm"}, {3e-8, "0.03 ppm"}, {4.3e-6, "4.3 ppm"}, {9.94e-6, "9.9 ppm"},
 		{0.00018, "0.018 %"}, {0.0001715, "0.017 %"}, {0.3, "30 %"}, {0.02, "2 %"},
 	} {
 		if got := Tolerance(c.v); got != c.want {
@@ -186,17 +198,19 @@ func TestTolerance(t *testing.T) {
 	}
 }
 
-// A check's difference is printed at a resolution at least ten times
-// finer than its tolerance, or as "< x" with x a tenth of the tolerance or
-// less; never "0 %".
+// A check's difference is printed in its tolerance's unit at a
+// resolution at least ten times finer than the tolerance, or as "< x"
+// with x a tenth of the tolerance or less; never "0 %" nor a power of
+// ten.
 func TestCheckDiff(t *testing.T) {
 	for _, c := range []struct {
 		d, tol float64
 		want   string
 	}{
-		{0, 0.01, "< 0.001 %"}, {2.6e-7, 1e-5, "< 10⁻⁴ %"}, {2.6e-16, 1e-8, "< 10⁻⁷ %"},
+		{0, 0.01, "< 0.001 %"}, {2.6e-7, 1e-5, "< 0.0001 %"}, {2.6e-16, 1e-8, "< 0.001 ppm"},
 		{1.4e-5, 0.00018, "0.0014 %"}, {0.0048, 0.005, "0.48 %"}, {0.12, 0.01, "12.0 %"},
-		{5.2e-5, 0.01, "0.0052 %"}, {3.2e-9, 1e-8, "3.2×10⁻⁷ %"}, {1.06e-5, 0.01, "0.0011 %"},
+		{5.2e-5, 0.01, "0.0052 %"}, {3.2e-9, 1e-8, "0.0032 ppm"}, {1.06e-5, 0.01, "0.0011 %"},
+		{4.7e-7, 4.3e-6, "0.47 ppm"}, {2e-5, 1e-8, "20.000 ppm"}, {1.2e-3, 2e-6, "1200.0 ppm"},
 		{0.17, 0.3, "17 %"}, {-2e-4, 0.002, "0.020 %"},
 	} {
 		if got := CheckDiff(c.d, c.tol); got != c.want {
@@ -212,6 +226,28 @@ func TestCeilSig(t *testing.T) {
 	} {
 		if got := CeilSig(c.v, 2); math.Abs(got-c.want) > 1e-15*c.want {
 			t.Errorf("CeilSig(%g, 2) = %g, want %g", c.v, got, c.want)
+		}
+	}
+}
+
+// A column of values is written in one unit, zeros included: a table of
+// probe fields does not put "0 T" or "92.53 nT" beside µT.
+func TestEngColumn(t *testing.T) {
+	for _, c := range []struct {
+		vals []float64
+		ref  float64
+		want []string
+	}{
+		{[]float64{0, 92.53e-9, 433.0e-6}, 0, []string{"0 µT", "0.09253 µT", "433.0 µT"}},
+		{[]float64{0, 0}, 433.0e-6, []string{"0 µT", "0 µT"}},
+		{[]float64{0, 1e-20}, 0, []string{"0 T", "0 T"}},
+		{[]float64{-106.5e-6, 177.7e-6}, 0, []string{"−106.5 µT", "177.7 µT"}},
+		{[]float64{999.96e-6, 1e-6}, 0, []string{"1.000 mT", "0.001000 mT"}},
+		{[]float64{369.9e-9, 0, 10.22e-3}, 10.22e-3, []string{"0.0003699 mT", "0 mT", "10.22 mT"}},
+	} {
+		got := EngColumn(c.vals, c.ref, "T", 4)
+		if strings.Join(got, "|") != strings.Join(c.want, "|") {
+			t.Errorf("EngColumn(%v) = %q, want %q", c.vals, got, c.want)
 		}
 	}
 }

@@ -159,7 +159,7 @@ func radialBuildFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d
 		{
 			out = append(out, validity{what: "Radial build", flagged: true, text: fmt.Sprintf(
 				"the %d turns lie in %d layers %s deep, less than the stated radial build of %s; the turns' mean radius is %s against the stated %s. The resistance, field, moment and inductance are those of the turns as laid from the bore%s. A coil wound to fill the stated build would have more turns or a larger mean radius than these results assume.",
-				co.Turns, w.LayerCount, Eng(used, "m", 3), Eng(co.RadialBuild, "m", 3), Eng(cs.MeanRadius, "m", 4), Eng(R, "m", 4), heatLeaves(co))})
+				co.Turns, w.LayerCount, buildText(used), buildText(co.RadialBuild), Eng(cs.MeanRadius, "m", 4), Eng(R, "m", 4), heatLeaves(co))})
 		}
 	}
 	return out

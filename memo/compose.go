@@ -609,6 +609,7 @@ func perCoilColumns(coils int, first, each float64) ([]doc.Align, []float64) {
 func (c *composer) limitsTable() doc.Table {
 	var rows [][]doc.Cell
 	wc := c.j.WorstCase
+	ratio := false // a margin written as a ratio, "×73"
 	for i, l := range c.j.Limits {
 		q := spec.LimitQuantities[l.Limit.Quantity]
 		unit := displayUnit(q.Unit)
@@ -640,6 +641,7 @@ func (c *composer) limitsTable() doc.Table {
 				mg = -mg
 			}
 			margin = format.RelMargin(mg)
+			ratio = ratio || mg >= format.RatioMargin
 		}
 		st := doc.Pass
 		if !l.Pass {
@@ -660,13 +662,17 @@ func (c *composer) limitsTable() doc.Table {
 			{Text: st.String(), Status: st, Strong: true},
 		})
 	}
+	note, room := "", "positive means met with room to spare"
+	if ratio {
+		note, room = "; "+format.RatioMarginNote, "positive where met"
+	}
 	if wc != nil {
-		return doc.Table{Caption: "Requirements compliance over the tolerances (worst: the corner closest to failing, signs as in the Worst case section; margin at that corner)",
+		return doc.Table{Caption: "Requirements compliance over the tolerances (worst: the corner closest to failing, signs as in the Worst case section; margin at that corner" + note + ")",
 			Header: []string{"Requirement", "Required", "Nominal", "Worst", "Corner", "Margin", "Status"},
 			Rows:   rows, Widths: []float64{2.3, 1.3, 1.25, 1.25, 0.85, 0.85, 0.75},
 			Align: []doc.Align{doc.Left, doc.Right, doc.Right, doc.Right, doc.Center, doc.Right, doc.Center}}
 	}
-	return doc.Table{Caption: "Requirements compliance (margin: positive means met with room to spare)",
+	return doc.Table{Caption: "Requirements compliance (margin: " + room + note + ")",
 		Header: []string{"Requirement", "Required", "Computed", "Margin", "Status"},
 		Rows:   rows, Widths: []float64{3.2, 1.4, 1.4, 1, 0.9},
 		Align: []doc.Align{doc.Left, doc.Right, doc.Right, doc.Right, doc.Center}}
@@ -789,8 +795,10 @@ func (c *composer) inputs() {
 		raw, line, si := e.Raw, fmt.Sprint(e.Line), format.SIText(e.SI)
 		if e.Default {
 			// a default or a value derived from others: no digits of the
-			// author's to keep, so engineering units to four figures
-			raw, line, si = "(default)", "", format.SITextSig(e.SI, 4)
+			// author's to keep, so engineering units to three figures,
+			// as the memo writes the value where it uses it (the heavy-build
+			// estimate of 237 µm in the Assumptions)
+			raw, line, si = "(default)", "", format.SITextSig(e.SI, 3)
 		}
 		rows = append(rows, []doc.Cell{
 			{Text: e.Block}, {Text: e.Key}, {Text: raw}, {Text: si}, {Text: line},

@@ -28,8 +28,11 @@ func (c *composer) field() {
 	if c.anyReceiver() {
 		every = "every driven coil"
 	}
+	// a component of zero in the unit of the magnitude ("Bx = 0 µT"
+	// beside "Bz = 433.0 µT"), every other in its own
+	comp := func(v float64) string { return format.EngColumn([]float64{v}, B0.Norm(), "T", 4)[0] }
 	c.para(fmt.Sprintf("With %s at its steady operating current, the flux density at the origin is |B| = %s (Bx = %s, By = %s, Bz = %s). The background field is not included in these figures.",
-		every, Eng(B0.Norm(), "T", 4), Eng(B0[0], "T", 4), Eng(B0[1], "T", 4), Eng(B0[2], "T", 4)))
+		every, Eng(B0.Norm(), "T", 4), comp(B0[0]), comp(B0[1]), comp(B0[2])))
 	if p := c.pickUpNote(
 		"it makes no field of its own and has no figures here; the field figures are the driven coils', and its response to a field is in the section Pick-up and a.c. figures",
 		"they make no field of their own and have no figures here; the field figures are the driven coils', and their response to a field is in the section Pick-up and a.c. figures"); p != "" {
@@ -49,12 +52,20 @@ func (c *composer) field() {
 	}
 	c.para("Fields are computed from the exact field of " + from + ", superposed. For maps and profiles the turns of a thick winding are grouped by Gauss quadrature over the winding cross-section, which reproduces the turn-by-turn sum to better than one part in 10⁹ and falls back to the individual turns near the winding.")
 	if len(r.Probes) > 0 {
-		var rows [][]doc.Cell
+		// every field of the table in one unit, that of the largest, so
+		// that a zero or a small component reads against the others
+		var all []float64
 		for _, p := range r.Probes {
+			all = append(all, p.B[0], p.B[1], p.B[2], p.B.Norm())
+		}
+		txt := format.EngColumn(all, 0, "T", 4)
+		var rows [][]doc.Cell
+		for i, p := range r.Probes {
+			b := txt[4*i : 4*i+4]
 			rows = append(rows, []doc.Cell{{Text: p.Name},
 				{Text: fmt.Sprintf("(%s, %s, %s) mm", mmNum(p.At[0]), mmNum(p.At[1]), mmNum(p.At[2]))},
-				{Text: Eng(p.B[0], "T", 4)}, {Text: Eng(p.B[1], "T", 4)}, {Text: Eng(p.B[2], "T", 4)},
-				{Text: Eng(p.B.Norm(), "T", 4), Strong: true}})
+				{Text: b[0]}, {Text: b[1]}, {Text: b[2]},
+				{Text: b[3], Strong: true}})
 		}
 		c.add(doc.Table{Caption: "Flux density at the probe points (all coils)",
 			Header: []string{"Probe", "Position", "Bx", "By", "Bz", "|B|"}, Rows: rows,
@@ -219,13 +230,13 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 			figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + figures.LengthLabel(co.MeanDiameter) + " mean"},
 			figures.Dimension{Kind: figures.Diameter, A: e.R1, Label: "Ø " + figures.LengthLabel(2*e.R1) + " outer"},
 			figures.Dimension{Kind: figures.Axial, A: e.Z0 + cs.Placements[0], B: e.Z1 + cs.Placements[0], Label: figures.LengthLabel(e.Z1 - e.Z0)},
-			figures.Dimension{Kind: figures.Radial, A: e.R0, B: e.R1, Label: figures.LengthLabel(co.RadialBuild)})
+			figures.Dimension{Kind: figures.Radial, A: e.R0, B: e.R1, Label: buildText(co.RadialBuild)})
 		desc = fmt.Sprintf("%d turns in %d layers of up to %d turns, %s long with a radial build of %s",
-			co.Turns, w.LayerCount, w.TurnsPerLayer, mmText(e.Z1-e.Z0), mmText(co.RadialBuild))
+			co.Turns, w.LayerCount, w.TurnsPerLayer, mmText(e.Z1-e.Z0), buildText(co.RadialBuild))
 		if cs.Underfilled {
 			used := cs.Laid.R1 - cs.Laid.R0
-			sd.Dimensions[len(sd.Dimensions)-1].Label += ", turns " + figures.LengthLabel(used) // the radial build's
-			desc += fmt.Sprintf(", of which the turns fill the inner %s (drawn in copper; the rest of the stated section in dashed outline)", mmText(used))
+			sd.Dimensions[len(sd.Dimensions)-1].Label += ", turns " + buildText(used) // the radial build's
+			desc += fmt.Sprintf(", of which the turns fill the inner %s (drawn in copper; the rest of the stated section in dashed outline)", buildText(used))
 		}
 	}
 	sd.Dimensions = append(sd.Dimensions, coreDims...)
@@ -233,8 +244,9 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 	if co.Form == calc.Pair {
 		s := math.Abs(co.Spacing)
 		sd.CentreLines = []float64{-s / 2, s / 2}
-		sd.Dimensions = append(sd.Dimensions, figures.Dimension{Kind: figures.Axial, A: -s / 2, B: s / 2, Label: "spacing " + figures.LengthLabel(s)})
-		desc = "each of the two coils holds " + desc + fmt.Sprintf("; their centres are %s apart", mmText(s))
+		sd.Dimensions = append(sd.Dimensions, figures.Dimension{Kind: figures.Axial, A: -s / 2, B: s / 2, Label: "spacing " + Eng(s, "m", 4)})
+		// the spacing as the pair's section writes it ("60.00 mm apart")
+		desc = "each of the two coils holds " + desc + fmt.Sprintf("; their centres are %s apart", Eng(s, "m", 4))
 	}
 	c.para(fmt.Sprintf("Figure %d shows the winding cross-section in the half-plane above the axis, to scale: %s.", n, desc))
 	h := sketchHeight(co, e)
@@ -426,7 +438,7 @@ func (c *composer) pairProfileFigure(co calc.Coil, cs *analysis.CoilStudy) {
 	c.para(text)
 	c.fig(doc.Figure{Caption: fmt.Sprintf("Axial flux density %s along the axis of pair %q (exact field; shaded: the windings)", bs, co.Name),
 		Width: figWidth, Height: figHeight * 0.8, Draw: figures.Profile(d),
-		Summary: fmt.Sprintf("%s on axis: %s at the centre; largest %s at %s.", bs, Eng(bp.Centre, "T", 3), Eng(math.Abs(bp.Peak), "T", 3), Eng(bp.PeakZ, "m", 3))})
+		Summary: fmt.Sprintf("%s on axis: %s at the centre; largest %s at %s.", bs, format.EngColumn([]float64{bp.Centre}, bp.Peak, "T", 3)[0], Eng(math.Abs(bp.Peak), "T", 3), Eng(bp.PeakZ, "m", 3))})
 }
 
 // fieldMap adds the map of |B| over the meridian plane; afterPlane says a
@@ -489,7 +501,7 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 	text := fmt.Sprintf("Figure %d maps the magnitude of the flux density of coil %q alone over %s, on a logarithmic colour scale with contour lines at 1–2–5 steps per decade; the winding cross-sections are drawn in.",
 		n, co.Name, plane)
 	if centre, edge, ok := mapLevels(m); ok {
-		text += " " + mapPeakText(co, m, cored) + fmt.Sprintf("; it is %s at the centre and at most %s on the map's edge.", Eng(centre, "T", 3), Eng(edge, "T", 3))
+		text += " " + mapPeakText(co, m, cored) + fmt.Sprintf("; it is %s at the centre and at most %s on the map's edge.", format.EngColumn([]float64{centre}, edge, "T", 3)[0], Eng(edge, "T", 3))
 		// one block: its map is the design's field, whose largest value on
 		// the winding's outer surface the Safety section's search found
 		if ir := c.j.Safety.Implant; len(c.j.Spec.Design.Coils) == 1 && len(ir.Windings) == 1 && ir.Windings[0].Surface > 0 && !ir.Peak {

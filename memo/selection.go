@@ -94,7 +94,7 @@ func (c *composer) requirementTable(sz *analysis.Sizing) doc.Table {
 			l := c.j.Spec.Design.Limits[con.Limit]
 			what = limitName(analysis.LimitResult{LimitResult: calc.LimitResult{Limit: l}}) + " " + relText(l) + " " + worstValue(l.Quantity, l.Required, 3)
 			if m := k - analysis.ConsPhysical; m < len(sz.Chosen.Margins) {
-				at = marginText(l, sz.Chosen.Margins[m])
+				at = marginText(l, sz.Chosen.Margins[m], quantityAt(sz.Chosen, k))
 			}
 		}
 		if !con.Cheap {
@@ -105,7 +105,7 @@ func (c *composer) requirementTable(sz *analysis.Sizing) doc.Table {
 		}
 		rows = append(rows, []doc.Cell{{Text: what}, {Text: format.Digits(con.Excluded)}, {Text: constraintRole(sz, k)}, {Text: at}})
 	}
-	return doc.Table{Caption: "Requirements the choice must meet: the choices each excludes, which requirement binds the choice, and the value and margin left at the choice",
+	return doc.Table{Caption: "Requirements the choice must meet: the choices each excludes, which requirement binds the choice, and the value and margin left at the choice" + ratioNote(rows, "; "),
 		Header: []string{"Requirement", "Choices excluded", "Binds", "At the choice"},
 		Rows:   rows, Widths: []float64{2.8, 0.9, 1.0, 2.4},
 		Align: []doc.Align{doc.Left, doc.Right, doc.Left, doc.Right}}
@@ -143,17 +143,57 @@ func relText(l calc.Limit) string {
 	return "≥"
 }
 
-// marginText writes a margin: a temperature's as the share of the allowed
-// rise left, the others as a percentage of the requirement.
-func marginText(l calc.Limit, m float64) string {
+// marginText writes a margin m, relative to the requirement, as every
+// table of margins does (format.RelMargin), and a temperature's as the
+// difference in kelvin between the requirement and the value v (K).
+func marginText(l calc.Limit, m, v float64) string {
+	if l.Quantity == "temperature" || l.Quantity == "surface-temperature" {
+		if math.IsNaN(v) {
+			return "—"
+		}
+		d := l.Required - v
+		if l.Relation == calc.AtLeast {
+			d = -d
+		}
+		return format.Margin(d, "K")
+	}
 	if math.IsNaN(m) {
 		return "—"
 	}
-	s := format.RelMargin(m)
-	if l.Quantity == "temperature" || l.Quantity == "surface-temperature" {
-		return s + " of the rise"
+	return format.RelMargin(m)
+}
+
+// ratioNote is sep and format.RatioMarginNote when a cell of rows holds a
+// margin written as a ratio ("×73", "72.74 kV/T, ×73"), "" otherwise.
+func ratioNote(rows [][]doc.Cell, sep string) string {
+	for _, r := range rows {
+		for _, c := range r {
+			if strings.HasPrefix(c.Text, "×") || strings.Contains(c.Text, ", ×") {
+				return sep + format.RatioMarginNote
+			}
+		}
 	}
-	return s
+	return ""
+}
+
+// quantityAt is the value candidate cd reaches on constraint k (SI), NaN
+// when undecided.
+func quantityAt(cd analysis.Candidate, k int) float64 {
+	if k < 0 || k >= len(cd.Quantity) {
+		return math.NaN()
+	}
+	return cd.Quantity[k]
+}
+
+// limitConstraint is the constraint of sz that judges limit k, -1 for
+// none.
+func limitConstraint(sz *analysis.Sizing, k int) int {
+	for i, con := range sz.Constraints {
+		if i >= analysis.ConsPhysical && con.Limit == k {
+			return i
+		}
+	}
+	return -1
 }
 
 // tradeFigure plots every choice, moment against power (or conductor
@@ -290,7 +330,7 @@ func (c *composer) choiceTable(sz *analysis.Sizing) doc.Table {
 			if k < len(cd.Margins) {
 				m = cd.Margins[k]
 			}
-			row = append(row, doc.Cell{Text: strings.TrimSuffix(marginText(l, m), " of the rise")})
+			row = append(row, doc.Cell{Text: marginText(l, m, quantityAt(cd, limitConstraint(sz, k)))})
 		}
 		rows = append(rows, row)
 	}
@@ -305,7 +345,7 @@ func (c *composer) choiceTable(sz *analysis.Sizing) doc.Table {
 	for range head[3:] {
 		widths = append(widths, 1)
 	}
-	return doc.Table{Caption: "The choice and the best choice of each other wire that meets every requirement, with the margin left on each requirement (a temperature's as the share of the allowed rise)",
+	return doc.Table{Caption: "The choice and the best choice of each other wire that meets every requirement, with the margin left on each requirement (a temperature's in kelvin" + ratioNote(rows, "; ") + ")",
 		Header: head, Rows: rows, Widths: widths, Align: align}
 }
 
@@ -349,6 +389,9 @@ func rangeValueOf(r spec.FreeRange, v float64) string {
 	if u := map[string]string{"current": "A", "voltage": "V", "switch-off": "s", "on-time": "s", "frequency": "Hz"}[r.Key]; u != "" {
 		return Eng(v, u, 4)
 	}
+	if r.Key == "radial-build" {
+		return buildText(v) // as the cross-section and page 1 write it
+	}
 	return Eng(v, "m", 4)
 }
 
@@ -374,7 +417,7 @@ func (c *composer) whyText(sz *analysis.Sizing) string {
 	if sz.Next >= 0 {
 		con := sz.Constraints[sz.Next]
 		l := c.j.Spec.Design.Limits[con.Limit]
-		fmt.Fprintf(&b, " The next requirement to bind is %s, with %s left.", c.constraintName(con, sz.Next), marginText(l, sz.Chosen.Margins[sz.Next-analysis.ConsPhysical]))
+		fmt.Fprintf(&b, " The next requirement to bind is %s, with %s left.", c.constraintName(con, sz.Next), marginText(l, sz.Chosen.Margins[sz.Next-analysis.ConsPhysical], quantityAt(sz.Chosen, sz.Next)))
 	}
 	return b.String()
 }

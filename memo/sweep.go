@@ -11,6 +11,7 @@ import (
 	"coilmemo/calc/units"
 	"coilmemo/doc"
 	"coilmemo/figures"
+	"coilmemo/format"
 	"coilmemo/spec"
 )
 
@@ -47,6 +48,30 @@ func sweepUnit(sw *spec.Sweep) (unit string, scale float64) {
 		return "MHz", 1e-6
 	}
 	return "", 1
+}
+
+// sweepNum writes a swept value (in the shown unit) with the one number
+// of decimals that the start, end and step need, so that the column of
+// swept values and the text agree: 0.1, 0.2, … 1.0, never "1" beside
+// "0.9".
+func sweepNum(sw *spec.Sweep, scale float64) func(float64) string {
+	dec := 0
+	for _, v := range []float64{sw.From * scale, sw.To * scale, sw.Step * scale} {
+		for dec < 6 {
+			p := math.Pow(10, float64(dec))
+			if math.Abs(v*p-math.Round(v*p)) <= 1e-9*math.Max(1, math.Abs(v*p)) {
+				break
+			}
+			dec++
+		}
+	}
+	return func(v float64) string {
+		s := strconv.FormatFloat(v, 'f', dec, 64)
+		if strings.Trim(s, "-0.") == "" {
+			s = strings.TrimPrefix(s, "-")
+		}
+		return strings.Replace(s, "-", "−", 1)
+	}
 }
 
 // sweepView is what a sweep shows besides the standard columns: a column
@@ -161,7 +186,7 @@ func (c *composer) sweep() {
 		target = fmt.Sprintf("coil %q", sw.Coil)
 	}
 	c.heading(1, "Parameter sweep")
-	num := func(v float64) string { return strings.Replace(strconv.FormatFloat(v, 'g', 6, 64), "-", "−", 1) }
+	num := sweepNum(sw, scale)
 	withUnit := func(v float64) string {
 		if unit == "" {
 			return num(v)
@@ -177,6 +202,9 @@ func (c *composer) sweep() {
 	extraHead, extra, plotValue := v.extraHead, v.extra, v.plotValue
 	var rows [][]doc.Cell
 	var x, first, temp []float64
+	// the value columns, each written in one unit (format.EngColumn)
+	var colRows []int
+	var cols [4][]float64
 	marked := false // a temperature above a coil's insulation class
 	for _, st := range c.j.Sweep {
 		cells := []doc.Cell{{Text: num(st.Value * scale)}}
@@ -216,10 +244,19 @@ func (c *composer) sweep() {
 			cells = append(cells, doc.Cell{Text: extra(r)})
 		}
 		cells = append(cells, status)
+		colRows = append(colRows, len(rows))
+		for k, v := range []float64{r.Moment.Norm(), r.FieldCentre.Norm(), cur, pw} {
+			cols[k] = append(cols[k], v)
+		}
 		rows = append(rows, cells)
 		x = append(x, st.Value*scale)
 		first = append(first, plotValue(r))
 		temp = append(temp, Celsius(hot))
+	}
+	for k, unit := range []string{"A·m²", "T", "A", "W"} {
+		for i, txt := range format.EngColumn(cols[k], 0, unit, 3) {
+			rows[colRows[i]][1+k].Text = txt
+		}
 	}
 	header := []string{label, "|m|", "|B| at origin", "Current", "Power", "Hottest winding"}
 	align := []doc.Align{doc.Right, doc.Right, doc.Right, doc.Right, doc.Right, doc.Right}
@@ -274,7 +311,8 @@ func (c *composer) sweepMet(q, label string, x, vals []float64) string {
 		}
 		what := map[string]string{"field-center": "centre-field", "moment": "moment", "temperature": "temperature"}[q]
 		name := strings.SplitN(label, " (", 2)[0]
-		num := func(v float64) string { return strconv.FormatFloat(v, 'g', 6, 64) }
+		_, scale := sweepUnit(c.j.Spec.Sweep)
+		num := sweepNum(c.j.Spec.Sweep, scale)
 		unit := ""
 		if i := strings.Index(label, "("); i >= 0 {
 			unit = " " + strings.TrimSuffix(label[i+1:], ")")

@@ -252,7 +252,7 @@ func conductionSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, c
 	var notes []string
 	occupied := ""
 	if cs.Underfilled {
-		occupied = fmt.Sprintf(", over the inner %s of the stated %s radial build that its turns occupy", Eng(cs.Laid.R1-cs.Laid.R0, "m", 3), Eng(cs.Envelope.R1-cs.Envelope.R0, "m", 3))
+		occupied = fmt.Sprintf(", over the inner %s of the stated %s radial build that its turns occupy", buildText(cs.Laid.R1-cs.Laid.R0), buildText(cs.Envelope.R1-cs.Envelope.R0))
 		notes = append(notes, "the empty outer part generates no heat; the heat leaves through the stated outline's surface")
 	}
 	if series == 2 {

@@ -7,6 +7,12 @@ import (
 	"coilmemo/calc"
 )
 
+// buildText is the one form of a winding's radial build and of the depth
+// its turns fill, in every sentence, on the cross-section's label (three
+// figures, as every length on a sketch) and for a sized build in the
+// Design selection: "949 µm", "2.00 mm", "2.90 mm".
+func buildText(v float64) string { return Eng(v, "m", 3) }
+
 // laidWords qualifies a formula's dimensions as those of the turns as
 // laid, for a winding that does not fill its stated radial build; "" for
 // one that does.
@@ -15,7 +21,7 @@ func laidWords(cs *analysis.CoilStudy) string {
 		return ""
 	}
 	return fmt.Sprintf(" of the turns as laid (they fill the inner %s of the stated %s radial build)",
-		Eng(cs.Laid.R1-cs.Laid.R0, "m", 3), Eng(cs.Envelope.R1-cs.Envelope.R0, "m", 3))
+		buildText(cs.Laid.R1-cs.Laid.R0), buildText(cs.Envelope.R1-cs.Envelope.R0))
 }
 
 // underfillText is page 1's sentence on a coil whose turns fill less of
@@ -28,5 +34,5 @@ func underfillText(co calc.Coil, cs *analysis.CoilStudy, statedFill float64) str
 	}
 	laid, stated := cs.Laid.R1-cs.Laid.R0, cs.Envelope.R1-cs.Envelope.R0
 	return fmt.Sprintf("The turns of coil %q fill only the inner %s (%s %%) of its %s radial build: copper fill factor %s of the section they occupy, %s of the stated section.",
-		co.Name, Eng(laid, "m", 3), Sig(100*laid/stated, 2), Eng(stated, "m", 3), Sig(cs.LaidFill, 2), Sig(statedFill, 2))
+		co.Name, buildText(laid), Sig(100*laid/stated, 2), buildText(stated), Sig(cs.LaidFill, 2), Sig(statedFill, 2))
 }

@@ -54,8 +54,9 @@ func TestLikeCoilsShareTheirCheckRows(t *testing.T) {
 // Every row of every example and figure-test design prints its difference
 // so that its verdict can be read from the figures: at a resolution at
 // least ten times finer than the tolerance, or as "< x" with x at most a
-// tenth of it; never "0 %" or a signed zero; the tolerance as a
-// percentage equal to the one the verdict applied; and the printed
+// tenth of it; never "0 %", a signed zero or a power of ten; the
+// tolerance as a percentage (parts per million below 0.001 %, the
+// difference in the same unit) equal to the one the verdict applied; and the printed
 // difference against the printed tolerance gives the row's status. A
 // bracket row shows its three figures and passes when they are ordered.
 func TestCheckRowsReadTheirVerdict(t *testing.T) {
@@ -96,6 +97,9 @@ func TestCheckRowsReadTheirVerdict(t *testing.T) {
 				continue
 			}
 			d := r[3].Text
+			if strings.HasSuffix(d, " ppm") != strings.HasSuffix(r[4].Text, " ppm") {
+				t.Errorf("%s: difference %q and tolerance %q in different units", where, d, r[4].Text)
+			}
 			if d == "0 %" || strings.Contains(d, "−") || strings.HasPrefix(d, "-") {
 				t.Errorf("%s: difference printed %q", where, d)
 			}
@@ -122,33 +126,20 @@ func TestCheckRowsReadTheirVerdict(t *testing.T) {
 	}
 }
 
-// parsePercent reads "0.0014 %", "12.0 %", "3.2×10⁻⁷ %" or "10⁻⁷ %": the
-// value and the resolution it is printed to, both in percent.
+// parsePercent reads a relative figure in plain decimals, "0.0014 %",
+// "12.0 %" or "0.47 ppm": the value and the resolution it is printed to,
+// both in percent, and its unit. A power of ten is no such figure.
 func parsePercent(s string) (v, res float64, ok bool) {
+	scale := 1.0
 	s, found := strings.CutSuffix(s, " %")
 	if !found {
-		return 0, 0, false
-	}
-	exp := 0
-	if m, e, sci := strings.Cut(s, "10"); sci && (strings.HasSuffix(m, "×") || m == "") && e != "" && strings.ContainsAny(e, "⁰¹²³⁴⁵⁶⁷⁸⁹") {
-		var b strings.Builder
-		for _, r := range e {
-			switch {
-			case r == '⁻':
-				b.WriteByte('-')
-			case slices.Contains([]rune("⁰¹²³⁴⁵⁶⁷⁸⁹"), r):
-				b.WriteByte(byte('0' + slices.Index([]rune("⁰¹²³⁴⁵⁶⁷⁸⁹"), r)))
-			}
-		}
-		n, err := strconv.Atoi(b.String())
-		if err != nil {
+		if s, found = strings.CutSuffix(s, " ppm"); !found {
 			return 0, 0, false
 		}
-		exp = n
-		s = strings.TrimSuffix(m, "×")
-		if s == "" {
-			s = "1"
-		}
+		scale = 1e-4 // 1 ppm = 10⁻⁴ %
+	}
+	if strings.ContainsAny(s, "×⁰¹²³⁴⁵⁶⁷⁸⁹e") {
+		return 0, 0, false
 	}
 	v, err := strconv.ParseFloat(s, 64)
 	if err != nil {
@@ -158,7 +149,6 @@ func parsePercent(s string) (v, res float64, ok bool) {
 	if _, frac, f := strings.Cut(s, "."); f {
 		dec = len(frac)
 	}
-	scale := math.Pow(10, float64(exp))
 	return v * scale, math.Pow(10, float64(-dec)) * scale, true
 }
 

@@ -1154,11 +1154,17 @@ func figureFloor(room float64) float64 {
 func tableStart(tl *tableLayout) float64 {
 	first := tl.capH + tl.headH
 	if len(tl.rowH) > 0 {
-		first += min(tl.rowH[0], 3*leadTable+2*cellPadY)
+		// the whole first row where it is short enough to keep the second
+		// with it, else its first three lines (the rest may follow over)
+		if r0 := tl.rowH[0]; len(tl.rowH) > 1 && r0+tl.rowH[1] < (bodyBottom-bodyTop)/4 {
+			first += r0
+		} else {
+			first += min(r0, 3*leadTable+2*cellPadY)
+		}
 	}
 	if len(tl.rowH) > 1 && tl.rowH[0]+tl.rowH[1] < (bodyBottom-bodyTop)/4 {
 		first += tl.rowH[1]
-		if len(tl.rowH) == 3 && tl.rowH[0]+tl.rowH[1]+tl.rowH[2] < (bodyBottom-bodyTop)/4 {
+		if len(tl.rowH) == 3 && tl.rowH[0]+tl.rowH[1]+tl.rowH[2] < (bodyBottom-bodyTop)/2 {
 			first += tl.rowH[2]
 		}
 	}
