@@ -748,14 +748,35 @@ func (c *composer) purpose() {
 		c.para(templates.Text("purpose-default", map[string]string{"Coils": joinAnd(coils)}))
 		return
 	}
-	for _, b := range narrative {
+	for i, b := range narrative {
 		// The spec's own headings sit below the memo's section heading.
 		if h, ok := b.(doc.Heading); ok {
 			h.Level = min(h.Level+1, 3)
 			b = h
 		}
+		if kind, ok := c.j.Spec.LeadIns[i]; ok {
+			b = leadInPointer(b, kind)
+		}
 		c.add(b)
 	}
+}
+
+// leadInPointer is narrative paragraph b, which a parameter block of kind
+// followed in the spec, with a pointer to where the memo gives that
+// block when b introduces it (ends "as follows." or "below.", or in a
+// colon): the memo reproduces the prose, not the block.
+func leadInPointer(b doc.Block, kind string) doc.Block {
+	p, ok := b.(doc.Paragraph)
+	if !ok || len(p.Spans) == 0 {
+		return b
+	}
+	text := strings.TrimSpace(spanText(p.Spans))
+	if !strings.HasSuffix(text, ":") && !strings.HasSuffix(text, "follows.") && !strings.HasSuffix(text, "below.") {
+		return b
+	}
+	spans := slices.Clone(p.Spans)
+	spans = append(spans, doc.Span{Text: fmt.Sprintf(" (The spec's %s block is given with every input in the Inputs section.)", kind)})
+	return doc.Paragraph{Spans: spans}
 }
 
 // drivenOnlyDefaults are the keys whose defaults serve only a driven

@@ -149,6 +149,11 @@ type Spec struct {
 	File      string
 	Memo      Memo
 	Narrative []doc.Block // the prose, parameter blocks removed
+	// LeadIns are the narrative's top-level paragraphs that a parameter
+	// block followed in the spec: Narrative index → the block's name
+	// ("tolerances"), so that prose which introduced the block ("… as
+	// follows.") can point to where the memo gives it.
+	LeadIns map[int]string
 	Design    calc.Design
 	Entries   []Entry
 	Sweep     *Sweep // nil without a sweep block
@@ -270,6 +275,14 @@ func Parse(file string, src []byte) (*Spec, Diagnostics) {
 
 // blocksOf converts the block children of n to document blocks, collecting
 // parameter blocks on the way. inQuote turns headings into paragraphs.
+// lastBlock is the last of bs, nil when there is none.
+func lastBlock(bs []doc.Block) doc.Block {
+	if len(bs) == 0 {
+		return nil
+	}
+	return bs[len(bs)-1]
+}
+
 func (p *parser) blocksOf(n ast.Node, inQuote bool) []doc.Block {
 	var out []doc.Block
 	for c := n.FirstChild(); c != nil; c = c.NextSibling() {
@@ -302,6 +315,12 @@ func (p *parser) blocksOf(n ast.Node, inQuote bool) []doc.Block {
 		case *ast.FencedCodeBlock:
 			if b := p.paramBlock(c); b != nil {
 				p.blocks = append(p.blocks, b)
+				if _, para := lastBlock(out).(doc.Paragraph); para && !inQuote && n.Kind() == ast.KindDocument {
+					if p.spec.LeadIns == nil {
+						p.spec.LeadIns = map[int]string{}
+					}
+					p.spec.LeadIns[len(out)-1] = b.kind
+				}
 				continue
 			}
 			out = append(out, doc.Code{Text: p.codeText(c)})
