@@ -392,6 +392,13 @@ func centreLabel(j *analysis.Study, idx []int) string {
 	return "Field at own centre |B| (a cored coil: flux density in its core)"
 }
 
+// judged is the significant figures of page 1's headline results that
+// requirements judge (moment, field, current, power, temperature): those
+// of the requirements compliance table beside them, so that a figure a
+// requirement just misses does not read as meeting it (60.0 mA·m² beside
+// 59.99 mA·m² FAIL).
+const judged = 4
+
 // summaryTable is page 1's table of the driven coils (a pick-up coil has
 // its own, receiverSummary): a column per driven coil block, the totals of
 // all coils below. A cored coil's conductor and core masses are stated
@@ -412,9 +419,9 @@ func (c *composer) summaryTable() doc.Table {
 		return cells
 	}
 	rows := [][]doc.Cell{
-		row("Magnetic moment |m|", func(_ int, cr calc.CoilResult) string { return Eng(cr.Moment.Norm(), "A·m²", 3) }),
-		row(centreLabel(c.j, idx), func(_ int, cr calc.CoilResult) string { return Eng(cr.FieldCentre.Norm(), "T", 3) }),
-		row("Current", func(_ int, cr calc.CoilResult) string { return Eng(cr.Current, "A", 3) }),
+		row("Magnetic moment |m|", func(_ int, cr calc.CoilResult) string { return Eng(cr.Moment.Norm(), "A·m²", judged) }),
+		row(centreLabel(c.j, idx), func(_ int, cr calc.CoilResult) string { return Eng(cr.FieldCentre.Norm(), "T", judged) }),
+		row("Current", func(_ int, cr calc.CoilResult) string { return Eng(cr.Current, "A", judged) }),
 		row("Voltage", func(i int, cr calc.CoilResult) string {
 			// an a.c. drive needs |Z|·I, not the d.c. I·R (below the
 			// self-resonance, where the impedance is quoted)
@@ -427,7 +434,7 @@ func (c *composer) summaryTable() doc.Table {
 			}
 			return Eng(cr.Voltage, "V", 3)
 		}),
-		row(powerLabel(r), func(_ int, cr calc.CoilResult) string { return Eng(cr.Power, "W", 3) }),
+		row(powerLabel(r), func(_ int, cr calc.CoilResult) string { return Eng(cr.Power, "W", judged) }),
 		row("Resistance at 20 °C / hot", func(_ int, cr calc.CoilResult) string {
 			s := Eng(cr.R20, "Ω", 3) + " / " + Eng(cr.RHot, "Ω", 3)
 			if cr.AC.Resistance > cr.RHot*1.01 {
@@ -442,7 +449,7 @@ func (c *composer) summaryTable() doc.Table {
 			if cr.Verdict.AboveMelting {
 				return "above melting"
 			}
-			t := Eng(Celsius(cr.Temperature), "°C", 3)
+			t := Eng(Celsius(cr.Temperature), "°C", judged)
 			if d.Coils[i].OnTime > 0 && cr.Temperature > cr.SteadyHotSpot*(1+1e-12) {
 				// the cycle's peak, not the duty-averaged steady state
 				t += " (cycle peak; " + Eng(Celsius(cr.SteadyHotSpot), "°C", 3) + " duty-averaged)"
@@ -497,8 +504,8 @@ func (c *composer) totalsTable() (doc.Table, bool) {
 		return doc.Table{}, false // one coil's results are its own (summaryTable)
 	}
 	rows := [][]doc.Cell{
-		{{Text: "Moment |m| of all coils together"}, {Text: Eng(r.Moment.Norm(), "A·m²", 3), Strong: true}},
-		{{Text: "|B| at the origin, all coils energised"}, {Text: Eng(r.FieldCentre.Norm(), "T", 3), Strong: true}},
+		{{Text: "Moment |m| of all coils together"}, {Text: Eng(r.Moment.Norm(), "A·m²", judged), Strong: true}},
+		{{Text: "|B| at the origin, all coils energised"}, {Text: Eng(r.FieldCentre.Norm(), "T", judged), Strong: true}},
 	}
 	if d.Conditions.BackgroundField.Norm() > 0 {
 		rows = append(rows, []doc.Cell{{Text: "Torque in the background field (max / design angle)"}, {Text: Eng(r.TorqueMax, "N·m", 3) + " / " + Eng(r.TorqueDesign, "N·m", 3)}})
@@ -547,7 +554,7 @@ func (c *composer) gradientRows(idx []int, rows [][]doc.Cell, row func(string, f
 		}
 	}
 	add := [][]doc.Cell{
-		row(label, pair(func(_ int, cr calc.CoilResult) string { return Eng(cr.Pair.Gradient, "T/m", 3) })),
+		row(label, pair(func(_ int, cr calc.CoilResult) string { return Eng(cr.Pair.Gradient, "T/m", judged) })),
 		row("Gradient within ±1 %: along the axis / radially", pair(func(_ int, cr calc.CoilResult) string {
 			pm := func(v float64) string {
 				if math.IsNaN(v) {

@@ -154,9 +154,9 @@ type Spec struct {
 	// ("tolerances"), so that prose which introduced the block ("… as
 	// follows.") can point to where the memo gives it.
 	LeadIns map[int]string
-	Design    calc.Design
-	Entries   []Entry
-	Sweep     *Sweep // nil without a sweep block
+	Design  calc.Design
+	Entries []Entry
+	Sweep   *Sweep // nil without a sweep block
 	// Tolerances is the tolerances block; nil without one.
 	Tolerances *Tolerances
 	// Size is the size block; nil without one.
