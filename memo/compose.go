@@ -393,7 +393,7 @@ func centreLabel(j *analysis.Study, idx []int) string {
 }
 
 // judged is the significant figures of page 1's headline results that
-// requirements judge (moment, field, current, power, temperature): those
+// requirements judge (moment, field, current, power, temperature, mass): those
 // of the requirements compliance table beside them, so that a figure a
 // requirement just misses does not read as meeting it (60.0 mA·m² beside
 // 59.99 mA·m² FAIL).
@@ -461,7 +461,7 @@ func (c *composer) summaryTable() doc.Table {
 		}),
 		row("Inductance", func(_ int, cr calc.CoilResult) string { return Eng(cr.Inductance, "H", 3) }),
 		row("Wire length / conductor mass", func(i int, cr calc.CoilResult) string {
-			return Eng(cr.Length, "m", 3) + " / " + Eng(c.j.Coils[i].Kinds.AirMass, "kg", 3)
+			return Eng(cr.Length, "m", 3) + " / " + Eng(c.j.Coils[i].Kinds.AirMass, "kg", judged)
 		}),
 	}
 	anyCore := false
@@ -477,7 +477,7 @@ func (c *composer) summaryTable() doc.Table {
 			case math.IsNaN(k.Mass):
 				return "no core density stated"
 			}
-			return Eng(k.Mass, "kg", 3) + " / " + Eng(cr.Mass, "kg", 3)
+			return Eng(k.Mass, "kg", judged) + " / " + Eng(cr.Mass, "kg", judged)
 		}))
 	}
 	rows = c.gradientRows(idx, rows, row)

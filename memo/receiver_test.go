@@ -207,10 +207,10 @@ func TestCoredMassOnPageOne(t *testing.T) {
 	for _, row := range tb.Rows {
 		cells[row[0].Text] = row[1].Text
 	}
-	if got, want := cells["Wire length / conductor mass"], Eng(cr.Length, "m", 3)+" / "+Eng(k.AirMass, "kg", 3); got != want {
+	if got, want := cells["Wire length / conductor mass"], Eng(cr.Length, "m", 3)+" / "+Eng(k.AirMass, "kg", judged); got != want {
 		t.Errorf("conductor mass cell %q, want %q", got, want)
 	}
-	if got, want := cells["Core mass / total mass (conductor and core)"], Eng(k.Core.Mass, "kg", 3)+" / "+Eng(cr.Mass, "kg", 3); got != want {
+	if got, want := cells["Core mass / total mass (conductor and core)"], Eng(k.Core.Mass, "kg", judged)+" / "+Eng(cr.Mass, "kg", judged); got != want {
 		t.Errorf("core mass cell %q, want %q", got, want)
 	}
 	// The method's conductor mass is the conductor's too.

@@ -279,7 +279,7 @@ func implantWhere(j *analysis.Study) (where []string, beyond string) {
 	along, _ := reachWords(ir.Axis, len(d.Coils))
 	if ir.Axial > 0 {
 		side, rest := axialSide(ir)
-		s := along + " as far as " + Eng(ir.Axial, "m", 3) + " from the origin" + side + rest
+		s := along + " as far as " + axialLength(ir.Axial) + " from the origin" + side + rest
 		// the note on the far end: "there" when one distance is given
 		there, in := "there ", ""
 		if rest != "" {
@@ -405,12 +405,25 @@ func reachLength(v float64) (s string, under bool) {
 	if v < 1e-3 {
 		return "1 mm", true
 	}
-	figs := 3.0 // to a tenth of a millimetre or finer, which a tape can set out
+	figs := 3 // to a tenth of a millimetre or finer, which a tape can set out
 	if v < 0.01 {
 		figs = 2
 	}
-	step := math.Pow(10, math.Floor(math.Log10(v))-(figs-1))
-	return Eng(math.Ceil(v/step*(1-1e-12))*step, "m", int(figs)), false
+	return Eng(roundUp(v, figs), "m", figs), false
+}
+
+// axialLength is the axial reach from the origin, to three figures
+// rounded up as every reach of the caution is, so that the reach beyond a
+// winding's end (reachLength) and the end's distance add up to it.
+func axialLength(v float64) string { return Eng(roundUp(v, 3), "m", 3) }
+
+// roundUp is v > 0 rounded up to figs significant figures.
+func roundUp(v float64, figs int) float64 {
+	if !(v > 0) || math.IsInf(v, 0) {
+		return v
+	}
+	step := math.Pow(10, math.Floor(math.Log10(v))-float64(figs-1))
+	return math.Ceil(v/step*(1-1e-12)) * step
 }
 
 // windingWord names what a coil's outer surface bounds.
@@ -578,7 +591,11 @@ func spanText(ss []doc.Span) string {
 
 func (c *composer) safety() {
 	c.heading(1, "Safety")
-	c.para(templates.Text("safety", nil))
+	intro := "The cautions below are raised by this design's results."
+	if !slices.ContainsFunc(c.cautions, func(co doc.Callout) bool { return co.Severity != doc.Note }) {
+		intro = "This design's results raise no warning or caution; the notes below record what was checked and the general precautions."
+	}
+	c.para(templates.Text("safety", map[string]string{"Intro": intro}))
 	for _, co := range c.cautions {
 		c.add(co)
 	}
@@ -602,7 +619,7 @@ func hotText(cr calc.CoilResult, T float64) string {
 // side" when the level is reached on the other side too (else ""); far is
 // " on either side" when both read alike.
 func axialSide(ir analysis.ImplantReach) (far, rest string) {
-	up, down := Eng(ir.AxialUp, "m", 3), Eng(ir.AxialDown, "m", 3)
+	up, down := axialLength(ir.AxialUp), axialLength(ir.AxialDown)
 	if ir.AxialUp > 0 && ir.AxialDown > 0 && up == down {
 		return " on either side", ""
 	}

@@ -229,8 +229,8 @@ func TestImplantReachWordedOnce(t *testing.T) {
 		}
 		for _, m := range num.FindAllStringSubmatch(caution, -1) {
 			v := m[1] + " " + m[2]
-			if m[3] == "the origin" && v != Eng(ir.Axial, "m", 3) {
-				t.Errorf("%s: %q, but the axial reach is %s", f, m[0], Eng(ir.Axial, "m", 3))
+			if m[3] == "the origin" && v != Eng(math.Ceil(ir.Axial/roundStep(ir.Axial)-1e-9)*roundStep(ir.Axial), "m", 3) {
+				t.Errorf("%s: %q, but the axial reach is %s (to three figures rounded up)", f, m[0], Eng(ir.Axial, "m", 4))
 			}
 			if m[3] != "the origin" && !surface[v] {
 				t.Errorf("%s: %q is none of the reaches from the windings' surfaces %v", f, m[0], surface)
@@ -303,3 +303,6 @@ func TestAxialReachNamesItsSides(t *testing.T) {
 		}
 	}
 }
+
+// roundStep is the step of the third significant figure of v > 0.
+func roundStep(v float64) float64 { return math.Pow(10, math.Floor(math.Log10(v))-2) }
