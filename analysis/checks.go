@@ -35,6 +35,10 @@ type Check struct {
 	// (Value is High; Tolerance the bracket's width from it).
 	Bracket   bool
 	Low, High float64
+	// Point is where a check at a point is taken, in the coil's own frame
+	// from its centre (components along CoilFrame's E1, E2 and the
+	// axis U), m; nil for a check that is not at a point off the axis.
+	Point *calc.Vec
 }
 
 // newCheck compares v with e. A tolerance is rounded up to two
@@ -188,9 +192,17 @@ func offAxisCheck(c calc.Coil, cr calc.CoilResult) []Check {
 	w, what := verifiedLayers(cr.Winding)
 	exact := calc.CoilField(c, w, cr.Current, p)
 	num := numericCoilField(c, w, cr.Current, p)
-	return []Check{newCheck(c.Name, "|B| at an off-axis test point"+what,
+	k := newCheck(c.Name, "|B| at an off-axis test point"+what,
 		"Σ exact loop fields (elliptic integrals)", "numerical Biot–Savart line integral (gonum quad)",
-		exact.Norm(), num.Norm(), "T", 1e-8)}
+		exact.Norm(), num.Norm(), "T", 1e-8)
+	k.Point = localPoint(fr, c.Centre, p)
+	return []Check{k}
+}
+
+// localPoint is point p in frame fr with its origin at centre.
+func localPoint(fr calc.Frame, centre, p calc.Vec) *calc.Vec {
+	d := p.Sub(centre)
+	return &calc.Vec{d.Dot(fr.E1), d.Dot(fr.E2), d.Dot(fr.U)}
 }
 
 // verifyTurns bounds the turns the off-axis check integrates one by one.

@@ -41,6 +41,9 @@ type CoilKinds struct {
 	AboveResonance  bool
 	SelfResonance   float64
 	SelfCapacitance float64 // F, the winding's (with a pick-up coil's load)
+	// ResonanceInductance is the inductance SelfResonance is taken with,
+	// H: the winding's, with a core's share where it has one.
+	ResonanceInductance float64
 	// Capacitance is how the winding's own self-capacitance was found (its
 	// formula and figures; without a pick-up coil's load).
 	Capacitance calc.CapacitanceParts
@@ -117,6 +120,7 @@ func kindsOf(d calc.Design, r calc.Results, cored bool) []CoilKinds {
 		}
 		k.Temperature = T
 		k.Capacitance = calc.SelfCapacitanceParts(c, w)
+		k.ResonanceInductance = L
 		if IsReceiver(c) {
 			rec := calc.EvaluateReceiver(c, w, aEff, cr.RHot, L, T)
 			k.Receiver = &rec

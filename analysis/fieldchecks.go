@@ -33,9 +33,11 @@ func rectangleChecks(c calc.Coil, cr calc.CoilResult) []Check {
 	p := c.Centre.Add(fr.E1.Scale(0.31 * W)).Add(fr.E2.Scale(-0.17 * H)).Add(fr.U.Scale(0.23 * math.Max(W, H)))
 	exact := src.At(p)
 	num := numericRectangleField(fr, c.Centre, W, H, N*I, p)
-	out = append(out, newCheck(c.Name, "|B| at an off-axis test point",
+	off := newCheck(c.Name, "|B| at an off-axis test point",
 		"Σ straight-segment Biot–Savart closed forms", "numerical Biot–Savart line integral (gonum quad)",
-		exact.Norm(), num.Norm(), "T", 1e-8))
+		exact.Norm(), num.Norm(), "T", 1e-8)
+	off.Point = localPoint(fr, c.Centre, p)
+	out = append(out, off)
 	z := 20 * math.Hypot(W, H) / 2
 	ex := src.At(c.Centre.Add(fr.U.Scale(z))).Norm()
 	dip := calc.DipoleField(cr.Moment, fr.U.Scale(z)).Norm()

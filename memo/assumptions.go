@@ -1,6 +1,7 @@
 package memo
 
 import (
+	"coilmemo/format"
 	"fmt"
 	"math"
 	"strings"
@@ -158,8 +159,8 @@ func radialBuildFlag(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, d
 		used := cs.Laid.R1 - cs.Laid.R0
 		{
 			out = append(out, validity{what: "Radial build", flagged: true, text: fmt.Sprintf(
-				"the %d turns lie in %d layers %s deep, less than the stated radial build of %s; the turns' mean radius is %s against the stated %s. The resistance, field, moment and inductance are those of the turns as laid from the bore%s. A coil wound to fill the stated build would have more turns or a larger mean radius than these results assume.",
-				co.Turns, w.LayerCount, buildText(used), buildText(co.RadialBuild), Eng(cs.MeanRadius, "m", 4), Eng(R, "m", 4), heatLeaves(co))})
+				"the %s lie in %s %s deep, less than the stated radial build of %s; the turns' mean radius is %s against the stated %s. The resistance, field, moment and inductance are those of the turns as laid from the bore%s. A coil wound to fill the stated build would have more turns or a larger mean radius than these results assume.",
+				format.Count(co.Turns, "turn", "turns"), format.Count(w.LayerCount, "layer", "layers"), buildText(used), buildText(co.RadialBuild), Eng(cs.MeanRadius, "m", 4), Eng(R, "m", 4), heatLeaves(co))})
 		}
 	}
 	return out

@@ -88,7 +88,24 @@ func displayValue(v float64, unit string) float64 {
 	return v
 }
 
+// inputChangeRow is the row of a changed input: a coil's input under the
+// quantity name the memo gives it elsewhere (the table is the coil's),
+// another block's with its block, both marked as inputs.
 func inputChangeRow(in analysis.InputChange) []doc.Cell {
 	from, to, change := in.Columns()
-	return []doc.Cell{{Text: "input " + in.Block + ": " + in.Key}, {Text: from}, {Text: to}, {Text: change}}
+	name := inputWords(in.Key)
+	if in.Block != "coil" {
+		name = in.Block + " " + name
+	}
+	return []doc.Cell{{Text: name + " (input)"}, {Text: from}, {Text: to}, {Text: change}}
+}
+
+// inputWords is a spec key as the quantity the memo names elsewhere:
+// "winding length" for a coil's length, else the key in words.
+func inputWords(key string) string {
+	switch key {
+	case "length":
+		return "winding length"
+	}
+	return keyWords(key)
 }

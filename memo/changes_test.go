@@ -32,8 +32,8 @@ func TestChangesSection(t *testing.T) {
 		"## 2 Changes since revision A",
 		"| requirement field-center ≥ 500 µT | 449.6 µT FAIL | 584.5 µT PASS | FAIL → PASS [PASS] |",
 		"| winding temperature, hottest point | 40.82 °C | 44.00 °C | +3.2 K |",
-		"| input coil: turns | 50 | 65 | +30 % |",
-		"| input coil: length | 8.900 mm | 11.60 mm | +30 % |",
+		"| turns (input) | 50 | 65 | +30 % |",
+		"| winding length (input) | 8.900 mm | 11.60 mm | +30 % |",
 		"\n2 Changes since revision A\n",
 	} {
 		if !strings.Contains(out, want) {

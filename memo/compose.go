@@ -750,7 +750,7 @@ func (c *composer) purpose() {
 	if !prose {
 		var coils []string
 		for _, co := range c.j.Spec.Design.Coils {
-			coils = append(coils, fmt.Sprintf("coil %q (%s, %d turns, %s)", co.Name, analysis.FormName(co), co.Turns, wireName(co.Wire)))
+			coils = append(coils, fmt.Sprintf("coil %q (%s, %s, %s)", co.Name, analysis.FormName(co), format.Count(co.Turns, "turn", "turns"), wireName(co.Wire)))
 		}
 		c.para(templates.Text("purpose-default", map[string]string{"Coils": joinAnd(coils)}))
 		return

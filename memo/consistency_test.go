@@ -79,6 +79,9 @@ func TestOneValuePerQuantity(t *testing.T) {
 			for _, ch := range j.Checks {
 				if ch.Coil == co.Name {
 					others = append(others, ch.Value, ch.Expected)
+					if p := ch.Point; p != nil { // a check's test point, its coordinates printed
+						others = append(others, p[0], p[1], p[2])
+					}
 				}
 			}
 			var qs []quantity

@@ -2,6 +2,7 @@ package memo
 
 import (
 	"coilmemo/analysis"
+	"coilmemo/format"
 	"fmt"
 	"math"
 	"strings"
@@ -24,7 +25,7 @@ func (c *composer) electrical() {
 		return
 	}
 	c.heading(1, "Inductance and switching")
-	c.para(templates.Text("electrical", map[string]string{"Capacitance": c.capacitanceWords()}))
+	c.para(templates.Text("electrical", map[string]string{"Capacitance": c.capacitanceWords(), "Rise": c.riseWords()}))
 	if p := c.pickUpNote("it has no switching transient, stored energy or drive figures, and its inductance is derived with its other figures in the Method and results section",
 		"they have no switching transient, stored energy or drive figures, and their inductances are derived with their other figures in the Method and results section"); p != "" {
 		c.para(p)
@@ -44,6 +45,27 @@ func (c *composer) electrical() {
 	}
 	c.couplings()
 	c.gradientForce()
+}
+
+// riseWords name in the section's opening what the time constant gives
+// for the design's drives: the rise after a voltage step for d.c., the
+// settling after switch-on for an a.c. drive.
+func (c *composer) riseWords() string {
+	var dc, ac bool
+	for _, i := range c.drivenCoils() {
+		if c.j.Spec.Design.Coils[i].Frequency > 0 {
+			ac = true
+		} else {
+			dc = true
+		}
+	}
+	switch {
+	case ac && dc:
+		return "the rise time after a voltage step (for an a.c. drive, the time its current takes to settle after switch-on)"
+	case ac:
+		return "the time the a.c. current takes to settle after switch-on"
+	}
+	return "the rise time after a voltage step"
 }
 
 // capacitanceWords end the section's opening on the winding's own
@@ -168,7 +190,7 @@ func selfInductanceSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStud
 		add(Step{What: "Rosa's first correction: a round wire of bare diameter d against a strip of the sheet one pitch p wide (Rosa 1906; Grover 1946, ch. 16)",
 			Symbolic: `A_{\mathrm{R}} = \frac{5}{4} - \ln\frac{2p}{d}`,
 			Numbers:  fmt.Sprintf(`\frac{5}{4} - \ln\frac{2 \cdot %s}{%s}`, Q(p, "m", 4), Q(co.Wire.Bare, "m", 4)), Result: N(A, 4)})
-		add(Step{What: fmt.Sprintf("Rosa's second correction, for the mutual inductances of %d round turns against the sheet's strips (Rosa 1906; tabulated by Grover 1946)", n),
+		add(Step{What: fmt.Sprintf("Rosa's second correction, for the mutual inductances of %s against the sheet's strips (Rosa 1906; tabulated by Grover 1946)", format.Count(n, "round turn", "round turns")),
 			Symbolic: `B_{\mathrm{R}} = \frac{2}{N} \sum_{k=1}^{N-1} (N - k)\, f(k)`, Result: N(B, 4)})
 		add(Step{What: "Self-inductance of the single-layer winding" + one,
 			Symbolic: `L_1 = L_s - \mu_0 a N (A_{\mathrm{R}} + B_{\mathrm{R}})`,
@@ -192,8 +214,8 @@ func selfInductanceSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStud
 		if ip.ByCells {
 			pairs = "the pairs of distinct turns, summed by cells, give the rest"
 		}
-		add(Step{What: fmt.Sprintf("Self-inductance of the multilayer winding (%d layers of up to %d turns): Maxwell's mutual inductance of every pair of turn filaments i ≠ j, and each turn's own round-wire inductance μ0 r (ln(8r/ρ) − 7/4) for i = j (Maxwell 1873; Grover 1946, ch. 1); %s%s. The N turns' own inductances come to %s; %s",
-			w.LayerCount, w.TurnsPerLayer, method, one, Eng(ip.SelfTerms, "H", 4), pairs),
+		add(Step{What: fmt.Sprintf("Self-inductance of the multilayer winding (%s of up to %s): Maxwell's mutual inductance of every pair of turn filaments i ≠ j, and each turn's own round-wire inductance μ0 r (ln(8r/ρ) − 7/4) for i = j (Maxwell 1873; Grover 1946, ch. 1); %s%s. The N turns' own inductances come to %s; %s",
+			format.Count(w.LayerCount, "layer", "layers"), format.Count(w.TurnsPerLayer, "turn", "turns"), method, one, Eng(ip.SelfTerms, "H", 4), pairs),
 			Symbolic: `L_1 = \sum_{i=1}^{N} \sum_{j=1}^{N} M_{ij} = \sum_{i} M_{ii} + \sum_{i \ne j} M_{ij}`,
 			Numbers:  fmt.Sprintf(`%s + %s`, Q(ip.SelfTerms, "H", 4), Q(L1-ip.SelfTerms, "H", 4)), Result: Q(L1, "H", 4)})
 		b := co.Length
@@ -237,6 +259,9 @@ type fittedOver struct {
 	*analysis.Suppression
 	corners        int    // how many corners
 	maxAt, worstAt string // MaxCorner and Corner as cornerCode writes them
+	// maxName and worstName name the same corners by their values
+	// (WorstCase.CornerName), for where a code is first used
+	maxName, worstName string
 	// inCorner is set for a corner's derivation: the resistor is the one
 	// sized over every corner, given, not derived again, and the limit is
 	// the nominal design's (the corner's switching as the analysis fits
@@ -252,7 +277,8 @@ func fittedOverOf(j *analysis.Study, i int) *fittedOver {
 		return nil
 	}
 	p := wc.Suppression[i]
-	return &fittedOver{Suppression: p, corners: len(wc.Corners), maxAt: cornerCode(wc, p.MaxCorner), worstAt: cornerCode(wc, p.Corner)}
+	return &fittedOver{Suppression: p, corners: len(wc.Corners), maxAt: cornerCode(wc, p.MaxCorner), worstAt: cornerCode(wc, p.Corner),
+		maxName: wc.CornerName(p.MaxCorner), worstName: wc.CornerName(p.Corner)}
 }
 
 // switchingSteps derive the time constant, rise time, energy, the
@@ -280,7 +306,7 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, fo
 	steps = append(steps,
 		Step{What: "Electrical time constant at the hot resistance", Symbolic: `\tau = \frac{L}{R}`,
 			Numbers: fmt.Sprintf(`\frac{%s}{%s}`, L, R), Result: Q(s.TimeConstant, "s", 3)},
-		Step{What: riseWhat(co), Symbolic: `t_{90} = \tau \ln 10`,
+		Step{What: riseWhat(co), Symbolic: riseSymbol(co) + ` = \tau \ln 10`,
 			Numbers: fmt.Sprintf(`%s \cdot \ln 10`, Q(s.TimeConstant, "s", 3)), Result: Q(s.RiseTime, "s", 3)},
 		Step{What: "Magnetic energy stored " + full, Symbolic: `W = \frac{1}{2} L I^2`,
 			Numbers: fmt.Sprintf(`\frac{1}{2} \cdot %s \cdot %s^2`, L, Paren(I)), Result: Q(s.Energy, "J", 3)})
@@ -330,7 +356,7 @@ func switchingSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, fo
 		default:
 			a := fo.MaxAt
 			steps = append(steps,
-				Step{What: fmt.Sprintf("Largest resistor over the tolerances: the same quotient is smallest at corner %s of the %d (see Worst case), where the switch opens %s from %s", fo.maxAt, fo.corners, Eng(a.Current, "A", 4), Eng(a.Supply, "V", 3)),
+				Step{What: fmt.Sprintf("Largest resistor over the tolerances: the same quotient is smallest at corner %s of the %d (%s; signs as in the Worst case section: one per tolerance line, − its low end, + its high end), where the switch opens %s from %s", fo.maxAt, fo.corners, fo.maxName, Eng(a.Current, "A", 4), Eng(a.Supply, "V", 3)),
 					Symbolic: `R_{s,\mathrm{tol}} = \min \frac{V_{\mathrm{max}} - V_s}{I_c}`,
 					Numbers:  fmt.Sprintf(`\frac{%s - %s}{%s}`, Q(fo.Clamp, "V", 3), Q(a.Supply, "V", 3), Q(a.Current, "A", 4)), Result: Q(fo.ResistorMax, "Ω", 3)},
 				Step{What: fittedWords(fo), Symbolic: `R_s`, Numbers: Words("E12 value at or below") + `\ ` + Q(fo.ResistorMax, "Ω", 3), Result: rs})
@@ -417,7 +443,7 @@ func suppressionText(co calc.Coil, cr calc.CoilResult, p analysis.SwitchOffParts
 		fmt.Fprintf(&b, "; where a faster release matters, a resistor in series with the diode — %s; the E12 value %s is chosen — shortens the decay to %s and holds the switch at %s, within %s (the diode drop of about 0.7 V is neglected).",
 			resistorBound(s, fo), Eng(s.Resistor, "Ω", 2), Eng(s.ResistorTime10, "s", 3), switchHeldAt(s, fo), Eng(s.Clamp, "V", 3))
 	case math.IsNaN(s.Clamp):
-		fmt.Fprintf(&b, ". A resistor Rₛ in series with the diode would speed the decay; the switch then sees %s plus I·Rₛ, so Rₛ is at most (Vₘₐₓ − Vₛ)/I for a driver that withstands Vₘₐₓ, and the E12 value at or below that is fitted.", sourceOf(co))
+		fmt.Fprintf(&b, ". A resistor Rₛ in series with the diode would speed the decay; %s", unratedResistor(co, s))
 	default:
 		b.WriteString(".")
 	}
@@ -474,8 +500,8 @@ func acText(co calc.Coil, cr calc.CoilResult, k analysis.CoilKinds) string {
 	F := cr.Heat.Problem.ACFactor
 	switch {
 	case F > 1 && k.AC != nil:
-		fmt.Fprintf(&b, "The skin depth is %s against a wire radius of %s; over the winding's %d layers Dowell's method gives R_ac/R_dc = %s for skin and proximity effects together, and the power and temperatures of this memo are at that a.c. resistance. ",
-			Eng(a.SkinDepth, "m", 3), Eng(a.WireRadius, "m", 3), k.AC.Layers, factorText(F))
+		fmt.Fprintf(&b, "The skin depth is %s against a wire radius of %s; over the winding's %s Dowell's method gives R_ac/R_dc = %s for skin and proximity effects together, and the power and temperatures of this memo are at that a.c. resistance. ",
+			Eng(a.SkinDepth, "m", 3), Eng(a.WireRadius, "m", 3), format.Count(k.AC.Layers, "layer", "layers"), factorText(F))
 	case a.SkinLimited:
 		fmt.Fprintf(&b, "The skin depth %s is less than the wire radius %s: the current crowds to the wire's surface and the a.c. resistance exceeds the d.c. value (the proximity effect of neighbouring turns raises it further; no layered model applies to this form), so the losses are higher than computed here. ",
 			Eng(a.SkinDepth, "m", 3), Eng(a.WireRadius, "m", 3))
@@ -626,6 +652,9 @@ func cornerOf(fo *fittedOver, h int) string {
 // the corner where it is largest.
 func cornerRatingWords(fo *fittedOver) string {
 	where := fmt.Sprintf("at corner %s, where it is largest", fo.worstAt)
+	if fo.Corner != fo.MaxCorner {
+		where = fmt.Sprintf("at corner %s (%s), where it is largest", fo.worstAt, fo.worstName)
+	}
 	if fo.Corner < 0 {
 		where = "largest at the nominal design, above every corner's"
 	}
@@ -665,7 +694,7 @@ func switchOffCaution(f analysis.Finding, co calc.Coil, cr calc.CoilResult, p an
 		Eng(math.Max(math.Abs(cr.Current), math.Abs(s.WorstCurrent)), "A", 3), sourceAt(co, s.Supply), Eng(s.DiodeTime10, "s", 3))
 	resistor := ""
 	if math.IsNaN(s.Clamp) {
-		resistor = fmt.Sprintf("A resistor Rₛ in series with the diode speeds the decay; the switch then sees %s plus the current times Rₛ, so Rₛ is at most the driver's rating less that voltage, divided by the current.", sourceOf(co))
+		resistor = "A resistor Rₛ in series with the diode speeds the decay; " + unratedResistor(co, s)
 	}
 	if !math.IsNaN(s.Resistor) {
 		resistor = fmt.Sprintf("For a faster release, a resistor in series with the diode — %s; the E12 value %s is chosen — holds the switch at %s, within %s, and shortens the decay to %s.",
@@ -721,7 +750,7 @@ func resistorBound(s calc.SwitchResult, fo *fittedOver) string {
 	if fo == nil {
 		return "at most " + Eng(s.ResistorMax, "Ω", 3)
 	}
-	return fmt.Sprintf("at most %s at nominal and %s at corner %s of the tolerances", Eng(s.ResistorMax, "Ω", 3), Eng(fo.ResistorMax, "Ω", 3), fo.maxAt)
+	return fmt.Sprintf("at most %s at nominal and %s at corner %s of the tolerances (%s)", Eng(s.ResistorMax, "Ω", 3), Eng(fo.ResistorMax, "Ω", 3), fo.maxAt, fo.maxName)
 }
 
 // switchHeldAt words the switch voltage with the fitted resistor: at
@@ -748,10 +777,34 @@ func largestCurrent(co calc.Coil) string {
 // gives, the slowest it can be (a source that forces the current faster
 // sets its own rise).
 func riseWhat(co calc.Coil) string {
+	if co.Frequency > 0 {
+		// an a.c. drive has no final d.c. current to rise to: what τ sets
+		// is how soon the sine settles after it is switched on
+		return "Settling after switch-on of the a.c. drive: a sine switched on at the worst instant of its cycle starts with a d.c. offset of up to the steady amplitude, which decays as exp(−t/τ) while the current settles to its steady sine; the time for that offset to fall to 10 %"
+	}
 	if co.Drive == calc.CurrentDrive {
 		return "Rise time to 90 % of the final current if the current source applies a step of its compliance voltage I·R (the slowest rise; a source that drives harder sets its own), i(t) = I (1 − exp(−t/τ))"
 	}
 	return "Rise time to 90 % of the final current after a voltage step, i(t) = I (1 − exp(−t/τ))"
+}
+
+// unratedResistor words the bound on a series resistor where no driver
+// rating is known to size it (a current source, whose compliance voltage
+// is no rating): the switch sees the source's voltage Vₛ plus I·Rₛ, so
+// the bound with Vₛ and the current substituted, for the rating of the
+// driver chosen. The memo body and the switch-off caution both use it.
+func unratedResistor(co calc.Coil, s calc.SwitchResult) string {
+	return fmt.Sprintf("the switch then sees %s plus I·Rₛ, so with a driver that withstands Vₘₐₓ, Rₛ is at most (Vₘₐₓ − %s)/%s; the E12 value at or below that is fitted, and the driver's rating is the figure the resistor needs.",
+		sourceOf(co), Eng(s.Supply, "V", 3), Eng(math.Abs(s.WorstCurrent), "A", 3))
+}
+
+// riseSymbol is the rise-time step's symbol: t₉₀ for the rise to 90 %
+// of a d.c. current, t_s for an a.c. drive's settling.
+func riseSymbol(co calc.Coil) string {
+	if co.Frequency > 0 {
+		return `t_s`
+	}
+	return `t_{90}`
 }
 
 // sourceOf names the voltage the switch sees beside the coil's own

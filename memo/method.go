@@ -1,6 +1,7 @@
 package memo
 
 import (
+	"coilmemo/format"
 	"fmt"
 	"math"
 	"strings"
@@ -42,7 +43,7 @@ func (c *composer) method() {
 			what += ", pick-up"
 		}
 		title := func(names string) string {
-			return fmt.Sprintf("%s (%s, %d turns, %s)", capitalise(names), what, co.Turns, wireName(co.Wire))
+			return fmt.Sprintf("%s (%s, %s, %s)", capitalise(names), what, format.Count(co.Turns, "turn", "turns"), wireName(co.Wire))
 		}
 		c.coilPart(co.Name, title, func() {
 			if c.pickUp(i) {
@@ -281,7 +282,7 @@ func momentSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []Ste
 	if w.Thin || w.LayerCount <= 1 {
 		mom.Numbers = fmt.Sprintf(`%s%d \cdot %s \cdot \pi \cdot %s^2`, pair, co.Turns, I, Paren(Q(R, "m", 4)))
 	} else {
-		mom.What = fmt.Sprintf("Magnetic moment: current times the area of every turn, Σπrᵢ² = %s over the %d turns", Eng(w.AreaSum, "m²", 5), co.Turns)
+		mom.What = fmt.Sprintf("Magnetic moment: current times the area of every turn, Σπrᵢ² = %s over the %s", Eng(w.AreaSum, "m²", 5), format.Count(co.Turns, "turn", "turns"))
 		mom.Numbers = fmt.Sprintf(`%s%s \cdot %s`, pair, I, Q(w.AreaSum, "m²", 5))
 	}
 	if core != nil {
@@ -312,9 +313,9 @@ func momentSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy) []Ste
 		steps = append(steps, Step{What: "Field at the centre of a thin coil", Symbolic: `B_0 = \frac{\mu_0 N I}{2 r}`,
 			Numbers: fmt.Sprintf(`\frac{\mu_0 \cdot %d \cdot %s}{2 \cdot %s}`, co.Turns, I, Q(R, "m", 4)), Result: B})
 	default:
-		turns := fmt.Sprintf("the %d turns", co.Turns)
+		turns := "the " + format.Count(co.Turns, "turn", "turns")
 		if co.Form == calc.Pair {
-			turns = fmt.Sprintf("the %d turns of both coils", 2*co.Turns)
+			turns = "the " + format.Count(2*co.Turns, "turn", "turns") + " of both coils"
 		}
 		steps = append(steps, Step{What: fmt.Sprintf("Field at the centre: the on-axis field of every turn (radius rᵢ, axial distance zᵢ from the centre), summed; Σ rᵢ²/(2 (rᵢ² + zᵢ²)·√(rᵢ² + zᵢ²)) = %s m⁻¹ over %s", Sig(cs.CentreSum, 5), turns),
 			Symbolic: `B_0 = \sum_{i} \frac{\mu_0 I r_i^2}{2 \left( r_i^2 + z_i^2 \right)^{3/2}}`,

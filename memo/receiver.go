@@ -26,8 +26,9 @@ func (c *composer) receiver() {
 			continue
 		}
 		if first {
-			c.heading(1, "Pick-up and a.c. figures")
-			c.para("A pick-up coil is stated by its sensitivity to a field along its axis, the thermal noise of its winding and the field that noise is equivalent to, and its self-resonance, above which the lumped model does not hold. An a.c. winding's resistance includes the skin and proximity effects of its layers by Dowell's method.")
+			title, intro := c.receiverIntro()
+			c.heading(1, title)
+			c.para(intro)
 			first = false
 		}
 		c.heading(2, fmt.Sprintf("Coil %q", co.Name))
@@ -40,7 +41,14 @@ func (c *composer) receiver() {
 					Numbers: fmt.Sprintf(`%s \cdot %s`, N(k.AC.Factor, 4), Q(k.DCPower, "W", 4)), Result: Q(k.ACPower, "W", 4)})
 			}
 			if !math.IsNaN(k.SelfResonance) {
-				steps = append(steps, Step{What: "Self-resonant frequency", Symbolic: `f_{sr} = \frac{1}{2 \pi \sqrt{L C}}`, Result: Q(k.SelfResonance, "Hz", 3)})
+				cs := &c.j.Coils[i]
+				where := " (derived in Inductance and switching)"
+				if math.IsNaN(cs.SwitchOff.Ringing) {
+					where = " (above)"
+					steps = append(steps, capacitanceSteps(co, k.Capacitance, cs.Envelope.Round)...)
+				}
+				steps = append(steps, Step{What: "Self-resonant frequency: the inductance with the winding's own capacitance Cₛ" + where, Symbolic: `f_{sr} = \frac{1}{2 \pi \sqrt{L C_s}}`,
+					Numbers: fmt.Sprintf(`\frac{1}{2 \pi \sqrt{%s \cdot %s}}`, Q(k.ResonanceInductance, "H", 4), Q(k.SelfCapacitance, "F", 3)), Result: Q(k.SelfResonance, "Hz", 3)})
 			}
 			c.derive(steps...)
 		}
@@ -91,6 +99,40 @@ func (c *composer) receiver() {
 				Summary: fmt.Sprintf("Peak near %s.", Eng(r.SelfResonance, "Hz", 3))})
 		}
 	}
+}
+
+// receiverIntro is the title of the section on pick-up and a.c. figures
+// ("A.c. figures" without a pick-up coil) and its opening, which says what
+// it states: a pick-up coil's figures where the design has a pick-up coil,
+// a driven winding's a.c. resistance where one is written up here.
+func (c *composer) receiverIntro() (title, intro string) {
+	var pickUp, driven bool
+	for i, co := range c.j.Spec.Design.Coils {
+		if i >= len(c.j.Coils) {
+			break
+		}
+		k := c.j.Coils[i].Kinds
+		switch {
+		case analysis.IsReceiver(co) && k.Receiver != nil:
+			pickUp = true
+		case k.AC != nil && k.AC.Factor >= 1.01:
+			driven = true
+		}
+	}
+	var s []string
+	if pickUp {
+		s = append(s, "A pick-up coil is stated by its sensitivity to a field along its axis, the thermal noise of its winding and the field that noise is equivalent to, and its self-resonance, above which the lumped model does not hold.")
+	}
+	if driven {
+		s = append(s, "A winding driven at a frequency is stated by its a.c. resistance, which includes the skin and proximity effects of its layers by Dowell's method and sets its heating, and by its self-resonance, below which its series R–L model holds.")
+	} else {
+		s = append(s, "An a.c. winding's resistance includes the skin and proximity effects of its layers by Dowell's method.")
+	}
+	title = "A.c. figures"
+	if pickUp {
+		title = "Pick-up and a.c. figures"
+	}
+	return title, strings.Join(s, " ")
 }
 
 // responseLeadIn says what to read from the response figure n of
@@ -265,9 +307,9 @@ func (c *composer) pickUpSteps(i int) []Step {
 // coil's round bundle (round) is taken as that many layers of its turns.
 func layersWords(round bool, n int) string {
 	if round {
-		return fmt.Sprintf("the bundle taken as %d layers of its turns", n)
+		return "the bundle taken as " + format.Count(n, "layer", "layers") + " of its turns"
 	}
-	return fmt.Sprintf("%d layers", n)
+	return format.Count(n, "layer", "layers")
 }
 
 // capacitanceSteps derive a winding's self-capacitance by the formula the
@@ -278,8 +320,8 @@ func capacitanceSteps(co calc.Coil, p calc.CapacitanceParts, round bool) []Step 
 		return []Step{{What: "Self-capacitance of the winding: not modelled for this form", Symbolic: `C_s = ` + Words("not computed")}}
 	case p.Layered:
 		return []Step{
-			{What: fmt.Sprintf("Capacitance between adjacent layers: the turn-to-turn capacitances of the turns facing the next layer, through the enamel (relative permittivity %s, common practice) and the air beside the contact, summed (Massarini & Kazimierczuk, IEEE Trans. Power Electron. 12 (1997) 671), the mean over the %d gaps: the capacitance per metre of two touching turns times the length of the turns of a layer that face the next",
-				Sig(calc.EnamelPermittivity, 2), p.Layers-1),
+			{What: fmt.Sprintf("Capacitance between adjacent layers: the turn-to-turn capacitances of the turns facing the next layer, through the enamel (relative permittivity %s, common practice) and the air beside the contact, summed (Massarini & Kazimierczuk, IEEE Trans. Power Electron. 12 (1997) 671), the mean over the %s: the capacitance per metre of two touching turns times the length of the turns of a layer that face the next",
+				Sig(calc.EnamelPermittivity, 2), format.Count(p.Layers-1, "gap", "gaps")),
 				Symbolic: `C_l = \sum C_{tt} = c_{tt}\, \ell_f`,
 				Numbers:  fmt.Sprintf(`%s \cdot %s`, Q(p.PerLength, "F/m", 4), Q(p.Facing, "m", 4)),
 				Result:   Q(p.LayerCapacitance, "F", 3)},

@@ -67,7 +67,7 @@ func Cautions(j *analysis.Study) []doc.Callout {
 			}
 			rodEnds = nil
 			out = append(out, doc.Callout{Severity: doc.Warning, Title: "Field above 0.5 mT: implanted medical devices",
-				Spans: []doc.Span{{Text: templates.Text("caution-implant", map[string]string{"Where": implantSentences(where), "Beyond": beyond, "Mark": implantMark(j.Cooling), "Unmodelled": unmodelledField(j), "Alternating": alternatingNote(j)})}}})
+				Spans: []doc.Span{{Text: templates.Text("caution-implant", map[string]string{"Where": implantSentences(where), "Beyond": beyond, "Mark": implantMark(j.Cooling, severalCoils(j)), "Energised": energisedWords(j), "Unmodelled": unmodelledField(j), "Alternating": alternatingNote(j)})}}})
 		} else {
 			out = append(out, doc.Callout{Severity: doc.Note, Title: "Field near the winding",
 				Spans: []doc.Span{{Text: templates.Text("caution-implant-none", nil)}}})
@@ -78,7 +78,11 @@ func Cautions(j *analysis.Study) []doc.Callout {
 	}
 	out = append(out, exposureCautions(j)...) // memo/exposure.go
 	out = mergeCautions(out)
-	general := templates.Paragraphs("caution-general", nil)
+	coils := map[string]string{"Coil": "coil", "Is": "is", "Its": "its"}
+	if severalCoils(j) {
+		coils = map[string]string{"Coil": "coils", "Is": "are", "Its": "their"}
+	}
+	general := templates.Paragraphs("caution-general", coils)
 	for i, p := range general {
 		t := "Limits of this memo"
 		if i > 0 {
@@ -121,14 +125,45 @@ func unmodelledField(j *analysis.Study) string {
 // surface people touch (enclosure = covered), in vacuum (where no one is
 // near it, so in integration and test), or in air where it is tested and
 // installed.
-func implantMark(cool calc.Cooling) string {
+func implantMark(cool calc.Cooling, several bool) string {
 	switch {
+	case cool.Covered && several:
+		return "Mark the region on the surface that covers the coils and around it."
 	case cool.Covered:
 		return "Mark the region on the surface that covers the coil and around it."
+	case cool.Vacuum && several:
+		return "The coils work in vacuum, away from people; mark the region wherever they are energised with people near them, in integration and test."
 	case cool.Vacuum:
 		return "The coil works in vacuum, away from people; mark the region wherever it is energised with people near it, in integration and test."
+	case several:
+		return "Mark the region wherever the coils are energised with people near them, in test and where they are installed."
 	}
 	return "Mark the region wherever the coil is energised with people near it, in test and where it is installed."
+}
+
+// severalCoils says whether the design drives more than one coil (a pair
+// counts as two): the safety wording then speaks of the coils.
+func severalCoils(j *analysis.Study) bool {
+	n := 0
+	for i, co := range j.Spec.Design.Coils {
+		if analysis.IsReceiver(co) {
+			continue
+		}
+		n++
+		if i < len(j.Coils) && j.Coils[i].Series > 1 {
+			n++
+		}
+	}
+	return n > 1
+}
+
+// energisedWords is when the implant caution's region holds: while the
+// coil, or any of the coils, is energised.
+func energisedWords(j *analysis.Study) string {
+	if severalCoils(j) {
+		return "any of the coils is"
+	}
+	return "the coil is"
 }
 
 // rodEndWords words a rod's near-field finding as part of the implant

@@ -57,7 +57,7 @@ func freeList(sz *analysis.Sizing) string {
 		parts = append(parts, fmt.Sprintf("the turns (%d to %d)", s.TurnsLo, s.TurnsHi))
 	}
 	if s.WireLine > 0 {
-		parts = append(parts, fmt.Sprintf("the wire (%d wires, %s to %s)", len(s.Wires), s.Wires[0].Name(), s.Wires[len(s.Wires)-1].Name()))
+		parts = append(parts, fmt.Sprintf("the wire (%s, %s to %s)", format.Count(len(s.Wires), "wire", "wires"), s.Wires[0].Name(), s.Wires[len(s.Wires)-1].Name()))
 	}
 	for _, r := range s.Ranges {
 		parts = append(parts, fmt.Sprintf("the %s (%s to %s)", keyWords(r.Key), rangeValueOf(r, r.Lo), rangeValueOf(r, r.Hi)))
@@ -403,11 +403,11 @@ func (c *composer) whyText(sz *analysis.Sizing) string {
 	if sz.Objective.Maximise() {
 		word, what = "most", strings.TrimPrefix(sz.Objective.String(), "maximum ")
 	}
-	fmt.Fprintf(&b, "The choice, %s with %d turns, has the %s %s of all the choices that meet every requirement: %s.",
-		ch.Wire.Name(), ch.Turns, word, what, objectiveValue(sz.Objective, ch.Objective))
+	fmt.Fprintf(&b, "The choice, %s with %s, has the %s %s of all the choices that meet every requirement: %s.",
+		ch.Wire.Name(), format.Count(ch.Turns, "turn", "turns"), word, what, objectiveValue(sz.Objective, ch.Objective))
 	if len(sz.RunnersUp) > 0 {
 		r := sz.RunnersUp[0]
-		fmt.Fprintf(&b, " The best of the other wires, %s with %d turns, reaches %s.", r.Wire.Name(), r.Turns, objectiveValue(sz.Objective, r.Objective))
+		fmt.Fprintf(&b, " The best of the other wires, %s with %s, reaches %s.", r.Wire.Name(), format.Count(r.Turns, "turn", "turns"), objectiveValue(sz.Objective, r.Objective))
 	}
 	if sz.Binding >= 0 {
 		con := sz.Constraints[sz.Binding]
@@ -482,7 +482,7 @@ func (c *composer) sizingSummary() (doc.Paragraph, bool) {
 	for k, r := range sz.Size.Ranges {
 		vals = append(vals, keyPhrase(r.Key)+" of "+rangeValueOf(r, ch.Values[k]))
 	}
-	what := fmt.Sprintf("%s, %d turns", ch.Wire.Name(), ch.Turns)
+	what := ch.Wire.Name() + ", " + format.Count(ch.Turns, "turn", "turns")
 	if len(vals) > 0 {
 		what += ", " + strings.Join(vals, ", ")
 	}

@@ -33,10 +33,18 @@ func (c *composer) heating() {
 	switch {
 	case cool.Vacuum:
 		mount := "No mount resistance is stated, so no heat is taken to be conducted to the structure, which errs on the hot side."
-		if d.Conditions.MountResistance > 0 {
-			mount = "It also conducts heat to its mount, as stated below."
+		if R := d.Conditions.MountResistance; R > 0 {
+			who := "It also conducts"
+			if len(c.drivenCoils()) > 1 {
+				who = "Each coil also conducts"
+			}
+			mount = fmt.Sprintf("%s heat to a mount held at the ambient temperature through a thermal resistance of %s, as stated.", who, Eng(R, "K/W", 3))
 		}
-		env = templates.Text("heating-vacuum", map[string]string{"Emissivity": Sig(cool.Emissivity, 2), "Mount": mount})
+		winding := "the winding"
+		if len(c.drivenCoils()) > 1 {
+			winding = "each winding"
+		}
+		env = templates.Text("heating-vacuum", map[string]string{"Emissivity": Sig(cool.Emissivity, 2), "Mount": mount, "Winding": winding})
 	case cool.HGiven:
 		env = templates.Text("heating-given-h", map[string]string{"H": Eng(cool.H, "W/(m²·K)", 3), "Emissivity": Sig(cool.Emissivity, 2)})
 		if cool.Covered {
@@ -47,8 +55,8 @@ func (c *composer) heating() {
 		if len(c.drivenCoils()) == 1 {
 			lie = "The coil lies"
 		}
-		if d.Conditions.MountResistance > 0 {
-			mount = ", and by conduction to its mount"
+		if R := d.Conditions.MountResistance; R > 0 {
+			mount = fmt.Sprintf(", and by conduction to a mount held at the ambient temperature through a thermal resistance of %s, as stated", Eng(R, "K/W", 3))
 		}
 		env = templates.Text("heating-covered", map[string]string{"Emissivity": Sig(cool.Emissivity, 2), "Lie": lie, "Mount": mount})
 	default:
@@ -57,14 +65,19 @@ func (c *composer) heating() {
 		if n == 1 {
 			plural, singular = "", "s"
 		}
+		ends := ""
+		if c.anyShedsEnds() {
+			ends = " The correlation for the outer shape is applied to the whole heat-shedding surface, end faces included."
+		}
 		env = templates.Text("heating-still-air", map[string]string{"Emissivity": Sig(cool.Emissivity, 2), "Placement": c.stillAirPlacement(),
-			"RaMax": "10¹²", "Table": calc.AirTableSource, "Shapes": shapes, "Plural": plural, "Singular": singular})
+			"RaMax": "10¹²", "Table": calc.AirTableSource, "Shapes": shapes, "Plural": plural, "Singular": singular, "Ends": ends})
 	}
 	c.para(env)
-	if R := d.Conditions.MountResistance; R > 0 {
+	if R := d.Conditions.MountResistance; R > 0 && !cool.Vacuum && !(cool.Covered && !cool.HGiven) {
+		// in vacuum and under a cover the environment's words state the mount
 		c.para(fmt.Sprintf("Each coil is also taken to conduct heat to a mount held at the ambient temperature through a thermal resistance of %s, as stated.", Eng(R, "K/W", 3)))
 	}
-	c.para(templates.Text("heating-model", nil))
+	c.para(templates.Text("heating-model", map[string]string{"Conduction": c.conductionWords()}))
 	for _, t := range c.nestedTexts() {
 		c.para(t)
 	}
@@ -112,6 +125,76 @@ func seriesFactor(series int) string {
 		return `2 \cdot `
 	}
 	return ""
+}
+
+// Heat models of a winding's inside, as conductionSteps derive them.
+const (
+	sectionModel = iota // multilayer: across the section, out through the outer cylinder and end faces
+	layerModel          // single layer: radially across its one wire's depth, ends adiabatic
+	bundleModel         // thin coil: radially in the round bundle
+)
+
+// heatModelOf is the model of coil study cs's rise inside its winding.
+func heatModelOf(cs *analysis.CoilStudy) int {
+	switch {
+	case cs.Heat.EndsCooled:
+		return sectionModel
+	case cs.Heat.RiseInner > 0:
+		return layerModel
+	}
+	return bundleModel
+}
+
+// shedsEnds says whether a winding's heat-shedding surface includes its
+// end faces (heatSurfaceSteps' multilayer case).
+func shedsEnds(co calc.Coil, w calc.Winding) bool {
+	return !w.Thin && !(w.LayerCount <= 1 && co.RadialBuild <= 0)
+}
+
+// anyShedsEnds says whether a driven coil's heat-shedding surface
+// includes end faces.
+func (c *composer) anyShedsEnds() bool {
+	for _, i := range c.drivenCoils() {
+		if shedsEnds(c.j.Spec.Design.Coils[i], c.j.Results.Coils[i].Winding) {
+			return true
+		}
+	}
+	return false
+}
+
+// conductionWords state the model of the rise inside the windings for
+// the models the design's driven coils use, each once.
+func (c *composer) conductionWords() string {
+	var used []int
+	for _, i := range c.drivenCoils() {
+		if m := heatModelOf(&c.j.Coils[i]); !slices.Contains(used, m) {
+			used = append(used, m)
+		}
+	}
+	slices.Sort(used)
+	lead := map[int]string{
+		sectionModel: "Inside a multilayer winding the heat has to cross the turns to reach the surface",
+		layerModel:   "Inside a single-layer winding the heat has to cross the wire's depth to reach the surface",
+		bundleModel:  "Inside a thin coil's round bundle the heat has to cross the turns to reach the bundle's surface",
+	}
+	how := map[int]string{
+		sectionModel: "across the winding's section, out through the outer cylinder and both end faces (which shed heat too), the bore on the former taken as adiabatic",
+		layerModel:   "radially out through the outer cylinder, with the bore on the former and the ends taken as adiabatic",
+		bundleModel:  "radially from the bundle's centre to its surface",
+	}
+	in := map[int]string{sectionModel: "in a multilayer winding", layerModel: "in a single layer", bundleModel: "in a thin coil's round bundle"}
+	const found = ", so the hottest point lies above the surface temperature. It is found from conduction with uniform heating through an effective conductivity of the winding"
+	switch len(used) {
+	case 0:
+		return "Inside a winding the heat has to cross the turns to reach the surface" + found + "."
+	case 1:
+		return lead[used[0]] + found + ", " + how[used[0]] + "."
+	}
+	var parts []string
+	for _, m := range used {
+		parts = append(parts, in[m]+" "+how[m])
+	}
+	return "Inside a winding the heat has to cross the turns to reach the surface" + found + ": " + strings.Join(parts, "; ") + "."
 }
 
 // heatSurfaceSteps derive the heat-shedding surface of the winding.

@@ -1,10 +1,13 @@
 package memo
 
 import (
+	"fmt"
+	"math"
 	"slices"
 	"strings"
 
 	"coilmemo/analysis"
+	"coilmemo/calc"
 	"coilmemo/doc"
 	"coilmemo/format"
 	"coilmemo/templates"
@@ -71,7 +74,7 @@ func checkGroups(ks []analysis.Check) []checkGroup {
 			st = doc.Fail
 		}
 		row := []doc.Cell{
-			{Text: k.Name}, {Text: k.Method + " → " + Eng(k.Value, k.Unit, 6)},
+			{Text: k.Name + checkPointWords(k.Point)}, {Text: k.Method + " → " + Eng(k.Value, k.Unit, 6)},
 			{Text: k.Reference + " → " + Eng(k.Expected, k.Unit, 6)},
 			{Text: format.CheckDiff(k.RelDiff, k.Tolerance)}, {Text: format.Tolerance(k.Tolerance)},
 			{Text: st.String(), Status: st, Strong: true},
@@ -110,6 +113,20 @@ func checkGroups(ks []analysis.Check) []checkGroup {
 		out[j].coils = append(out[j].coils, g.coils...)
 	}
 	return out
+}
+
+// checkPointWords say where a check at a point is taken, in the coil's
+// own frame from its centre: off a round coil's axis and along it, or a
+// rectangle's coordinates across its width and height and along its axis;
+// "" for a check not at a point.
+func checkPointWords(p *calc.Vec) string {
+	if p == nil {
+		return ""
+	}
+	if math.Abs(p[1]) <= 1e-9*p.Norm() { // a round coil's point lies in the plane of E1
+		return fmt.Sprintf(", %s from the axis and %s along it from the centre", Eng(p[0], "m", 3), Eng(p[2], "m", 3))
+	}
+	return fmt.Sprintf(", (%s, %s, %s) from the centre across the width, across the height and along the axis", Eng(p[0], "m", 3), Eng(p[1], "m", 3), Eng(p[2], "m", 3))
 }
 
 // sameRows reports whether two coils' check rows print the same, cell by

@@ -76,7 +76,7 @@ func TestCheckRowsReadTheirVerdict(t *testing.T) {
 			printed = append(printed, g.rows...)
 		}
 		for _, k := range j.Checks {
-			i := slices.IndexFunc(printed, func(r []doc.Cell) bool { return r[0].Text == k.Name })
+			i := slices.IndexFunc(printed, func(r []doc.Cell) bool { return r[0].Text == k.Name+checkPointWords(k.Point) })
 			if i < 0 {
 				t.Fatalf("%s: no printed row for %q", file, k.Name)
 			}

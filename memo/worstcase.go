@@ -1,6 +1,7 @@
 package memo
 
 import (
+	"coilmemo/format"
 	"fmt"
 	"math"
 	"strings"
@@ -100,8 +101,8 @@ func (c *composer) worstCase() {
 	d := c.j.Spec.Design
 	t := wc.Tolerances
 	c.heading(1, "Worst case")
-	c.para(fmt.Sprintf("The design is evaluated at every combination of the extremes of its %d tolerance lines: %d corners, each a complete evaluation — winding, steady temperature with the resistance following it, operating point, moment, field, switching and every requirement. Temperature stays coupled: a hot winding has more resistance, so under voltage drive less current and moment; a cold one draws more current and gives a larger switch-off spike. A corner is written as one sign per tolerance line in the order of the table below (− low end, + high end). The corners bound a result where it moves monotonically with each tolerance over its range.",
-		len(t.Items), len(wc.Corners)))
+	c.para(fmt.Sprintf("The design is evaluated at every combination of the extremes of its %s: %d corners, each a complete evaluation — winding, steady temperature with the resistance following it, operating point, moment, field, switching and every requirement. Temperature stays coupled: a hot winding has more resistance, so under voltage drive less current and moment; a cold one draws more current and gives a larger switch-off spike. A corner is written as one sign per tolerance line in the order of the table below (− low end, + high end). The corners bound a result where it moves monotonically with each tolerance over its range.",
+		format.Count(len(t.Items), "tolerance line", "tolerance lines"), len(wc.Corners)))
 	var rows [][]doc.Cell
 	for _, it := range t.Items {
 		lo, hi := tolEnds(it, d)
@@ -259,7 +260,7 @@ func (c *composer) sensitivity(wc *analysis.WorstCase) {
 	caption += "; one colour per tolerance, as in the legend; right of zero: the result rises with the tolerance)"
 	c.fig(doc.Figure{Caption: caption,
 		Width: figWidth, Height: figHeight * vg.Length(0.8+0.15*float64(len(fd.Kelvin))), Draw: figures.SensitivityFigure(fd),
-		Summary: fmt.Sprintf("Bars for %d results and %d tolerances.", len(fd.Results)+len(fd.Kelvin), len(names))})
+		Summary: fmt.Sprintf("Bars for %s and %s.", format.Count(len(fd.Results)+len(fd.Kelvin), "result", "results"), format.Count(len(names), "tolerance", "tolerances"))})
 }
 
 // longestBars says which bars of a sensitivity figure's panel are the
@@ -314,7 +315,7 @@ func longestBars(results, names []string, swing [][]float64, unit string) (what,
 		h = append(h, "the "+joinAnd(others)+" tolerances are the ones to hold tightest")
 	}
 	if ambient {
-		h = append(h, "the ambient range, which the design cannot hold, is the one to design for")
+		h = append(h, "the ambient range is set by where the coil works, not by how it is made, so it cannot be held tighter: the design has to meet its requirements over the whole of it")
 	}
 	hold = strings.Join(h, "; ")
 	if n == 1 {

@@ -179,9 +179,9 @@ func (p *parser) conditionsBlock(b *rawBlock) {
 	}
 	add("ambient", units.Format(cond.Ambient, units.Temperature)+" (20 °C)")
 	if vacuum {
-		add("handling-ambient", units.Format(calc.CelsiusToKelvin(HandlingRoomC), units.Temperature)+" (a room: the coil works in vacuum, where no one touches it)")
+		add("handling-ambient", units.Format(calc.CelsiusToKelvin(HandlingRoomC), units.Temperature)+" (a room: the design works in vacuum, where no one touches it)")
 	} else {
-		add("handling-ambient", "the ambient (people touch the coil where it works)")
+		add("handling-ambient", "the ambient (people touch the design where it works)")
 	}
 	add("background-field", "(0, 0, 0) T")
 	if cond.BackgroundMagnitudeOnly || cond.BackgroundField.Norm() == 0 {

@@ -10,7 +10,7 @@ import (
 
 // Paragraph breaks survive; line breaks inside a paragraph fold to spaces.
 func TestTextFoldsParagraphs(t *testing.T) {
-	got := Paragraphs("caution-general", nil)
+	got := Paragraphs("caution-general", map[string]string{"Coil": "coil", "Is": "is", "Its": "its"})
 	if len(got) != 2 {
 		t.Fatalf("caution-general has %d paragraphs, want 2", len(got))
 	}
