@@ -319,7 +319,7 @@ func (c *composer) axisFigure(co calc.Coil, cr calc.CoilResult, cs *analysis.Coi
 			Eng(hi, "T", 3), Eng(lo, "T", 3), Eng(p.Z[len(p.Z)-1], "m", 3))
 	}
 	c.para(text)
-	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight,
+	c.fig(doc.Figure{Caption: caption + frameNote(co), Width: figWidth, Height: figHeight,
 		Draw: figures.OnAxis(axisName(co), p.Z, p.Exact, p.Dipole, marks...), Summary: summary})
 }
 
@@ -353,7 +353,7 @@ func (c *composer) boreFigure(co calc.Coil, cs *analysis.CoilStudy, i int) {
 	caption := fmt.Sprintf("Axial flux density %s along the bore of coil %q (exact field; dotted: the winding's ends)", bs, co.Name)
 	caption, text = c.drawCentreRequirement(i, bp.Centre, &d, caption, text)
 	c.para(text)
-	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight * 0.85, Draw: figures.Profile(d),
+	c.fig(doc.Figure{Caption: caption + frameNote(co), Width: figWidth, Height: figHeight * 0.85, Draw: figures.Profile(d),
 		Summary: fmt.Sprintf("%s on axis: %s at the centre, within 1 %% over ±%s.", bs, Eng(bp.Centre, "T", 3), Eng(bp.Flat, "m", 3))})
 }
 
@@ -375,7 +375,7 @@ func (c *composer) nearFigure(co calc.Coil, cs *analysis.CoilStudy, i int) {
 	caption := fmt.Sprintf("Axial flux density %s along the axis of coil %q (exact field; dotted: the coil's plane)", bs, co.Name)
 	caption, text = c.drawCentreRequirement(i, bp.Centre, &d, caption, text)
 	c.para(text)
-	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight * 0.8, Draw: figures.Profile(d),
+	c.fig(doc.Figure{Caption: caption + frameNote(co), Width: figWidth, Height: figHeight * 0.8, Draw: figures.Profile(d),
 		Summary: fmt.Sprintf("%s on axis: %s at the centre, half of it at ±%s.", bs, Eng(bp.Centre, "T", 3), Eng(bp.Half, "m", 3))})
 }
 
@@ -436,7 +436,7 @@ func (c *composer) pairProfileFigure(co calc.Coil, cs *analysis.CoilStudy) {
 	}
 	text += axialNote(co)
 	c.para(text)
-	c.fig(doc.Figure{Caption: fmt.Sprintf("Axial flux density %s along the axis of pair %q (exact field; shaded: the windings)", bs, co.Name),
+	c.fig(doc.Figure{Caption: fmt.Sprintf("Axial flux density %s along the axis of pair %q (exact field; shaded: the windings)", bs, co.Name) + frameNote(co),
 		Width: figWidth, Height: figHeight * 0.8, Draw: figures.Profile(d),
 		Summary: fmt.Sprintf("%s on axis: %s at the centre; largest %s at %s.", bs, format.EngColumn([]float64{bp.Centre}, bp.Peak, "T", 3)[0], Eng(math.Abs(bp.Peak), "T", 3), Eng(bp.PeakZ, "m", 3))})
 }
@@ -453,14 +453,17 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 		return
 	}
 	var sections []figures.Section
-	// The map is in the coil's own frame: its axis named, z or not.
-	xLabel, yLabel := figures.AxialLabel(axisName(co)), "Radial position ρ"
+	// The map is in the coil's own frame: its axis named, z or not, and
+	// the coordinates in the frame's letters (z and x for a coil along z,
+	// else w and u), never two axes with one letter.
+	along, across, _ := figures.FrameLetters(axisName(co))
+	xLabel, yLabel, yName := figures.AxialLabel(axisName(co)), "Radial position ρ", "ρ"
 	if co.Form == calc.Rectangle {
 		b := cs.Bundle
 		for _, x := range []float64{-co.Width / 2, co.Width / 2} {
 			sections = append(sections, figures.Section{X0: -b / 2, X1: b / 2, Y0: x - b/2, Y1: x + b/2, Round: true})
 		}
-		yLabel = "Position across the width x"
+		yLabel, yName = "Position "+across+" across the width", across
 	} else {
 		e := cs.Envelope
 		sections, _, _ = coreSketch(co, cs, true) // memo/core.go
@@ -521,10 +524,10 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 	}
 	c.para(text)
 	c.fig(doc.Figure{
-		Caption: fmt.Sprintf("|B| of coil %q over %s (coil frame; colour scale: viridis, van der Walt & Smith 2015, logarithmic; contours at the values marked on the colour bar%s)", co.Name, plane, coreCap),
+		Caption: fmt.Sprintf("|B| of coil %q over %s (coil frame%s; colour scale: viridis, van der Walt & Smith 2015, logarithmic; contours at the values marked on the colour bar%s)", co.Name, strings.Replace(plane, " (through the axis)", " through the axis", 1), frameNote(co), coreCap),
 		Width:   figWidth, Height: h, Draw: drawMap,
-		Summary: fmt.Sprintf("Map of |B|: z from %s to %s, %s from %s to %s, %d × %d points.",
-			Eng(-zHalf, "m", 3), Eng(zHalf, "m", 3), map[bool]string{true: "x", false: "ρ"}[co.Form == calc.Rectangle],
+		Summary: fmt.Sprintf("Map of |B|: %s from %s to %s, %s from %s to %s, %d × %d points.",
+			along, Eng(-zHalf, "m", 3), Eng(zHalf, "m", 3), yName,
 			Eng(-xHalf, "m", 3), Eng(xHalf, "m", 3), len(m.Z), len(m.X)),
 	})
 }
@@ -713,7 +716,7 @@ func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult, cs *analysis.Coi
 		text += fmt.Sprintf(" The required gradient, %s %s (the short bar at the centre), is %s at the centre.", relText(l), Eng(g, "T/m", 3), map[bool]string{true: "met", false: "not met"}[met])
 	}
 	c.para(text)
-	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight * 0.85, Draw: figures.Profile(d),
+	c.fig(doc.Figure{Caption: caption + frameNote(co), Width: figWidth, Height: figHeight * 0.85, Draw: figures.Profile(d),
 		Summary: fmt.Sprintf("Gradient %s; within ±1 %%: ±%s axially, %s radially.", Eng(G, "T/m", 4), Eng(pr.LinearAxial, "m", 3), Eng(pr.LinearRadial, "m", 3))})
 }
 
