@@ -225,9 +225,16 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 			figures.Dimension{Kind: figures.Axial, A: e.Z0 + cs.Placements[0], B: e.Z1 + cs.Placements[0], Label: figures.LengthLabel(co.Length)})
 		desc = fmt.Sprintf("%d turns in one layer over %s", co.Turns, mmText(co.Length))
 	default:
+		mean := figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + figures.LengthLabel(co.MeanDiameter) + " mean"}
+		if cs.Underfilled {
+			// The turns lie nearer the bore than the stated mean diameter:
+			// the dimension is that of the turns as laid, as the
+			// assumptions' radial-build note gives their mean radius.
+			mean = figures.Dimension{Kind: figures.Diameter, A: cs.MeanRadius, Label: "Ø " + figures.LengthLabel(2*cs.MeanRadius) + " turns' mean"}
+		}
 		sd.Dimensions = append(sd.Dimensions,
 			figures.Dimension{Kind: figures.Diameter, A: e.R0, Label: "Ø " + figures.LengthLabel(2*e.R0) + " inner"},
-			figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + figures.LengthLabel(co.MeanDiameter) + " mean"},
+			mean,
 			figures.Dimension{Kind: figures.Diameter, A: e.R1, Label: "Ø " + figures.LengthLabel(2*e.R1) + " outer"},
 			figures.Dimension{Kind: figures.Axial, A: e.Z0 + cs.Placements[0], B: e.Z1 + cs.Placements[0], Label: figures.LengthLabel(e.Z1 - e.Z0)},
 			figures.Dimension{Kind: figures.Radial, A: e.R0, B: e.R1, Label: buildText(co.RadialBuild)})
@@ -469,6 +476,14 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 		sections, _, _ = coreSketch(co, cs, true) // memo/core.go
 		for _, z := range cs.Placements {
 			for _, s := range []float64{1, -1} {
+				if cs.Underfilled {
+					// As the cross-section draws it (memo/underfill.go):
+					// the stated section in dashed outline, the turns as
+					// laid filled.
+					sections = append(sections, figures.Section{X0: z + e.Z0, X1: z + e.Z1, Y0: s * e.R0, Y1: s * e.R1, Outline: true},
+						figures.Section{X0: z + e.Z0, X1: z + e.Z1, Y0: s * cs.Laid.R0, Y1: s * cs.Laid.R1})
+					continue
+				}
 				sections = append(sections, figures.Section{X0: z + e.Z0, X1: z + e.Z1, Y0: s * e.R0, Y1: s * e.R1, Round: e.Round})
 			}
 		}
@@ -501,8 +516,15 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 	if co.Form == calc.Rectangle {
 		plane = "the plane through the axis and across the width"
 	}
-	text := fmt.Sprintf("Figure %d maps the magnitude of the flux density of coil %q alone over %s, on a logarithmic colour scale with contour lines at 1–2–5 steps per decade; the winding cross-sections are drawn in.",
-		n, co.Name, plane)
+	// A winding whose turns do not fill the stated build is drawn as on
+	// its cross-section (memo/underfill.go).
+	underText, underCap := "", ""
+	if cs.Underfilled && co.Form != calc.Rectangle {
+		underText = fmt.Sprintf(", the turns as laid in copper (the inner %s of the radial build) and the rest of the stated section in dashed outline", buildText(cs.Laid.R1-cs.Laid.R0))
+		underCap = "; dashed: the stated winding section beyond the turns"
+	}
+	text := fmt.Sprintf("Figure %d maps the magnitude of the flux density of coil %q alone over %s, on a logarithmic colour scale with contour lines at 1–2–5 steps per decade; the winding cross-sections are drawn in%s.",
+		n, co.Name, plane, underText)
 	if centre, edge, ok := mapLevels(m); ok {
 		text += " " + mapPeakText(co, m, cored) + fmt.Sprintf("; it is %s at the centre and at most %s on the map's edge.", format.EngColumn([]float64{centre}, edge, "T", 3)[0], Eng(edge, "T", 3))
 		// one block: its map is the design's field, whose largest value on
@@ -524,7 +546,7 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 	}
 	c.para(text)
 	c.fig(doc.Figure{
-		Caption: fmt.Sprintf("|B| of coil %q over %s (coil frame%s; colour scale: viridis, van der Walt & Smith 2015, logarithmic; contours at the values marked on the colour bar%s)", co.Name, strings.Replace(plane, " (through the axis)", " through the axis", 1), frameNote(co), coreCap),
+		Caption: fmt.Sprintf("|B| of coil %q over %s (coil frame%s; colour scale: viridis, van der Walt & Smith 2015, logarithmic; contours at the values marked on the colour bar%s%s)", co.Name, strings.Replace(plane, " (through the axis)", " through the axis", 1), frameNote(co), underCap, coreCap),
 		Width:   figWidth, Height: h, Draw: drawMap,
 		Summary: fmt.Sprintf("Map of |B|: %s from %s to %s, %s from %s to %s, %d × %d points.",
 			along, Eng(-zHalf, "m", 3), Eng(zHalf, "m", 3), yName,
