@@ -38,17 +38,33 @@ func OnAxis(axis string, z, exact, dipole []float64, marks ...Mark) DrawFunc {
 }
 
 // AxialLabel is the label of an abscissa along a coil's axis: "Axial
-// position z" for a coil whose axis is z, and the axis named for any
-// other: "Axial position along the coil's axis x", or for a direction
-// "Axial position along the coil's axis û = (0.71, 0.71, 0)".
+// position z" for a coil whose axis is z; for any other the coordinate is
+// the coil frame's w, from the coil's centre, and the axis is named when
+// it is one of the global axes: "Axial position w along the coil's axis
+// x"; for a direction (a tilted coil, "(0.71, 0.71, 0)") "Axial position
+// w along the coil's axis", the caption giving the direction (a second
+// parenthesised group before the unit's would read badly).
 func AxialLabel(axis string) string {
 	switch {
 	case axis == "" || axis == "z":
 		return "Axial position z"
 	case strings.HasPrefix(axis, "("):
-		return "Axial position along the coil's axis û = " + axis
+		return "Axial position w along the coil's axis"
 	}
-	return "Axial position along the coil's axis " + axis
+	return "Axial position w along the coil's axis " + axis
+}
+
+// FrameLetters are the coordinate letters of a coil-frame figure of a
+// coil whose axis is axis (as AxialLabel takes it): along the axis, across
+// the width (or radially) and along the height. A coil along z keeps the
+// global letters z, x, y (its frame's directions); any other takes w, u,
+// v, so that no two axes of a figure carry the same letter and none
+// reads as a global coordinate it is not.
+func FrameLetters(axis string) (along, width, height string) {
+	if axis == "" || axis == "z" {
+		return "z", "x", "y"
+	}
+	return "w", "u", "v"
 }
 
 func onAxisPlot(axis string, z, exact, dipole []float64, marks []Mark) (*plot.Plot, vg.Length, []plotter.XYs) {

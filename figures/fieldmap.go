@@ -159,8 +159,14 @@ func sectionMask(x, y []float64, ss []Section) []bool {
 	return m
 }
 
+// inSections reports whether (x, y) lies in one of the sections drawn
+// filled: an outline (a stated section the turns do not fill) holds free
+// space, whose field the map shows.
 func inSections(ss []Section, x, y float64) bool {
 	for _, s := range ss {
+		if s.Outline {
+			continue
+		}
 		x0, x1 := math.Min(s.X0, s.X1), math.Max(s.X0, s.X1)
 		y0, y1 := math.Min(s.Y0, s.Y1), math.Max(s.Y0, s.Y1)
 		if s.Round {

@@ -123,8 +123,9 @@ func drawer(p *plot.Plot, top vg.Length, curves []plotter.XYs) DrawFunc {
 }
 
 // drawerClear is drawer; with clear set, a legend that would cover some
-// of the curves in every corner of the data area stands instead to the
-// right of it, outside, where it covers nothing.
+// of the curves in every corner of the data area stands instead outside
+// it, where it covers nothing: to the right, or below when beside the
+// data it would take more than a quarter of the width.
 func drawerClear(p *plot.Plot, top vg.Length, curves []plotter.XYs, clear bool) DrawFunc {
 	backdrop := &legendBackdrop{}
 	p.Add(backdrop)
@@ -144,8 +145,9 @@ func drawerClear(p *plot.Plot, top vg.Length, curves []plotter.XYs, clear bool) 
 			defer func() { p.Y.Label.Text = label }()
 			dc = draw.Crop(dc, lw, 0, 0, 0)
 		}
-		dc = placeLegendClear(p, dc, curves, clear)
-		backdrop.on = p.Legend.Rectangle(dc).Size().X > 0
+		dc, outside := placeLegendClear(p, dc, curves, clear)
+		// Outside the data area there are no grid lines to clear.
+		backdrop.on = !outside && p.Legend.Rectangle(dc).Size().X > 0
 		if label != "" {
 			da := p.DataCanvas(dc)
 			sty.Rotation = math.Pi / 2
@@ -159,24 +161,48 @@ func drawerClear(p *plot.Plot, top vg.Length, curves []plotter.XYs, clear bool) 
 }
 
 // placeLegendClear places p's legend on dc (placeLegend) and returns the
-// canvas to draw p on: dc, or, with clear set and some of the curves
-// under the legend in every corner, dc less room on the right where the
-// legend then stands, outside the data area.
-func placeLegendClear(p *plot.Plot, dc draw.Canvas, curves []plotter.XYs, clear bool) draw.Canvas {
+// canvas to draw p on and whether the legend stands outside the data
+// area: dc, or, with clear set and some of the curves under the legend
+// in every corner, dc less room where the legend then stands outside the
+// data area — on the right when that takes at most a quarter of the
+// width (sideShare), else below, under the x-axis label, from the data
+// area's left edge, so that the data area keeps its width.
+func placeLegendClear(p *plot.Plot, dc draw.Canvas, curves []plotter.XYs, clear bool) (draw.Canvas, bool) {
 	if n := placeLegend(p, dc, curves); !clear || n == 0 {
-		return dc
+		return dc, false
 	}
 	// The legend is laid out from the data area's left edge, less the
 	// axis padding.
 	const gap = 8
-	room := p.Legend.Rectangle(dc).Size().X + vg.Points(gap)
-	dc = draw.Crop(dc, 0, -room, 0, 0)
+	size := p.Legend.Rectangle(dc).Size()
+	if room := size.X + vg.Points(gap); room <= sideShare*dc.Size().X {
+		dc = draw.Crop(dc, 0, -room, 0, 0)
+		da := p.DataCanvas(dc)
+		p.Legend.Top, p.Legend.Left = true, true
+		p.Legend.XOffs = da.Max.X - da.Min.X + 2*p.X.Padding + vg.Points(gap)
+		p.Legend.YOffs = 0
+		return dc, true
+	}
+	// Below: the legend's canvas reaches the top of dc, so it is set from
+	// there, its foot on dc's.
+	// The last entry's descenders reach below its thumbnail's foot.
+	const below = 6
+	full := dc
+	h := size.Y + p.Legend.TextStyle.FontExtents().Descent
+	dc = draw.Crop(dc, 0, 0, h+vg.Points(below), 0)
 	da := p.DataCanvas(dc)
+	// From the data area's left edge, or as far left as keeps it inside
+	// the figure.
+	x := max(dc.Min.X, min(da.Min.X, dc.Max.X-size.X))
 	p.Legend.Top, p.Legend.Left = true, true
-	p.Legend.XOffs = da.Max.X - da.Min.X + 2*p.X.Padding + vg.Points(gap)
-	p.Legend.YOffs = 0
-	return dc
+	p.Legend.XOffs = x - (da.Min.X - p.X.Padding)
+	p.Legend.YOffs = full.Min.Y + h - full.Max.Y
+	return dc, true
 }
+
+// sideShare is the largest share of a figure's width that a legend
+// beside the data area may take; a wider one goes below it.
+const sideShare = 0.25
 
 // legendBackdrop clears the area behind the legend (grid lines) just
 // before the legend is drawn, when on; it must be the last plotter added.

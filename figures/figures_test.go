@@ -137,13 +137,14 @@ func TestLegendCorner(t *testing.T) {
 	}
 }
 
-// The abscissa along a coil's axis names the axis unless it is z.
+// The abscissa along a coil's axis names the axis unless it is z, in the
+// coil frame's letter w.
 func TestAxialLabel(t *testing.T) {
 	for axis, want := range map[string]string{
 		"z": "Axial position z", "": "Axial position z",
-		"x":               "Axial position along the coil's axis x",
-		"−y":              "Axial position along the coil's axis −y",
-		"(0.71, 0.71, 0)": "Axial position along the coil's axis û = (0.71, 0.71, 0)",
+		"x":               "Axial position w along the coil's axis x",
+		"−y":              "Axial position w along the coil's axis −y",
+		"(0.71, 0.71, 0)": "Axial position w along the coil's axis",
 	} {
 		if got := AxialLabel(axis); got != want {
 			t.Errorf("AxialLabel(%q) = %q, want %q", axis, got, want)

@@ -8,6 +8,7 @@ import (
 
 	"gonum.org/v1/plot"
 	"gonum.org/v1/plot/plotter"
+	"gonum.org/v1/plot/text"
 	"gonum.org/v1/plot/vg"
 	"gonum.org/v1/plot/vg/draw"
 )
@@ -223,6 +224,8 @@ func (o *planeOverlay) Plot(c draw.Canvas, p *plot.Plot) {
 	trX, trY := p.Transforms(&c)
 	pt := func(q [2]float64) vg.Point { return vg.Point{X: trX(q[0] / o.scale), Y: trY(q[1] / o.scale)} }
 	ls := draw.LineStyle{Color: contourInk, Width: vg.Points(0.5)}
+	// The lines drawn, which the probes' names keep clear of.
+	var lines [][]vg.Point
 	for _, lv := range o.levels {
 		for _, line := range PlaneContours(o.d, lv) {
 			pts := make([]vg.Point, len(line))
@@ -230,6 +233,7 @@ func (o *planeOverlay) Plot(c draw.Canvas, p *plot.Plot) {
 				pts[i] = pt(q)
 			}
 			c.StrokeLines(ls, pts)
+			lines = append(lines, pts)
 		}
 	}
 	if n := len(o.d.Outline); n > 1 {
@@ -239,11 +243,21 @@ func (o *planeOverlay) Plot(c draw.Canvas, p *plot.Plot) {
 		}
 		pts = append(pts, pts[0])
 		c.StrokeLines(draw.LineStyle{Color: Copper, Width: vg.Points(1.1), Dashes: Dashed}, pts)
+		lines = append(lines, pts)
 	}
 	sty := style(markLabelSize, Ink)
 	sty.XAlign, sty.YAlign = draw.XLeft, draw.YBottom
+	var dots []vg.Point
 	for _, q := range o.d.Points {
-		a := pt([2]float64{q.X, q.Y})
+		dots = append(dots, pt([2]float64{q.X, q.Y}))
+	}
+	labels := placePlaneLabels(o.d.Points, dots, lines, c.Rectangle, sty)
+	for _, b := range labels {
+		if b.leader {
+			c.StrokeLine2(draw.LineStyle{Color: Ink, Width: vg.Points(0.4)}, b.dot.X, b.dot.Y, b.foot.X, b.foot.Y)
+		}
+	}
+	for _, a := range dots {
 		var path vg.Path
 		r := vg.Points(2.2)
 		path.Move(vg.Point{X: a.X + r, Y: a.Y})
@@ -255,17 +269,122 @@ func (o *planeOverlay) Plot(c draw.Canvas, p *plot.Plot) {
 		c.SetLineWidth(vg.Points(0.6))
 		c.SetLineDash(nil, 0)
 		c.Stroke(path)
-		if q.Label != "" {
-			at := vg.Point{X: a.X + vg.Points(3), Y: a.Y + vg.Points(2)}
-			// A white backing keeps the name legible over any colour.
-			wd, ht := sty.Width(q.Label), sty.Height(q.Label)
-			bg := vg.Rectangle{Min: vg.Point{X: at.X - vg.Points(0.8), Y: at.Y - vg.Points(0.5)},
-				Max: vg.Point{X: at.X + wd + vg.Points(0.8), Y: at.Y + ht}}
-			c.SetColor(color.NRGBA{R: 0xff, G: 0xff, B: 0xff, A: 0xd0})
-			c.Fill(bg.Path())
-			c.FillText(sty, at, q.Label)
+	}
+	for _, b := range labels {
+		// A white backing keeps the name legible over any colour.
+		c.SetColor(color.NRGBA{R: 0xff, G: 0xff, B: 0xff, A: 0xd0})
+		c.Fill(b.box.Path())
+		c.FillText(sty, b.at, b.label)
+	}
+}
+
+// planeLabel is where a probe's name is set on a plane map: its text's
+// origin, its backing box, and a leader from the dot when it stands off.
+type planeLabel struct {
+	label     string
+	at        vg.Point
+	box       vg.Rectangle
+	dot, foot vg.Point
+	leader    bool
+}
+
+// placePlaneLabels sets each named probe's name beside its dot where its
+// box, widened by a margin, crosses the fewest of the lines drawn (the
+// contours and the outline), no other dot and no name already set, and
+// stays inside the data area r: first close by in the eight directions
+// (above right first), then farther off with a leader line.
+func placePlaneLabels(pts []PlanePoint, dots []vg.Point, lines [][]vg.Point, r vg.Rectangle, sty text.Style) []planeLabel {
+	const margin = 2.0
+	// Points every pt along the lines.
+	var along []vg.Point
+	for _, l := range lines {
+		for i := 0; i+1 < len(l); i++ {
+			a, b := l[i], l[i+1]
+			n := int(math.Ceil(float64(math.Hypot(float64(b.X-a.X), float64(b.Y-a.Y)))))
+			n = min(max(n, 1), 4000)
+			for k := 0; k < n; k++ {
+				t := vg.Length(k) / vg.Length(n)
+				along = append(along, vg.Point{X: a.X + (b.X-a.X)*t, Y: a.Y + (b.Y-a.Y)*t})
+			}
 		}
 	}
+	var out []planeLabel
+	for i, q := range pts {
+		if q.Label == "" {
+			continue
+		}
+		a := dots[i]
+		wd, ht := sty.Width(q.Label), sty.Height(q.Label)
+		bw, bh := wd+vg.Points(1.6), ht+vg.Points(0.5)
+		best, bestCost := planeLabel{}, math.Inf(1)
+		for ring, d := range []vg.Length{vg.Points(3.5), vg.Points(9), vg.Points(16)} {
+			// above right, right, below right, above, below, above left,
+			// left, below left
+			for _, dir := range [][2]float64{{1, 1}, {1, 0}, {1, -1}, {0, 1}, {0, -1}, {-1, 1}, {-1, 0}, {-1, -1}} {
+				var box vg.Rectangle
+				switch dir[0] {
+				case 1:
+					box.Min.X = a.X + d
+				case 0:
+					box.Min.X = a.X - bw/2
+				default:
+					box.Min.X = a.X - d - bw
+				}
+				switch dir[1] {
+				case 1:
+					box.Min.Y = a.Y + d*0.6
+				case 0:
+					box.Min.Y = a.Y - bh/2
+				default:
+					box.Min.Y = a.Y - d*0.6 - bh
+				}
+				box.Max = vg.Point{X: box.Min.X + bw, Y: box.Min.Y + bh}
+				if box.Min.X < r.Min.X || box.Max.X > r.Max.X || box.Min.Y < r.Min.Y || box.Max.Y > r.Max.Y {
+					continue
+				}
+				wide := vg.Rectangle{Min: vg.Point{X: box.Min.X - margin, Y: box.Min.Y - margin}, Max: vg.Point{X: box.Max.X + margin, Y: box.Max.Y + margin}}
+				cost := 0.0
+				for _, p := range along {
+					if inRect(p, wide) {
+						cost++
+					}
+				}
+				for j, o := range dots {
+					if j != i && inRect(o, wide) {
+						cost += 100
+					}
+				}
+				for _, o := range out {
+					if overlaps(o.box, wide) {
+						cost += 1000
+					}
+				}
+				// Nearer rings first, among equally clear places.
+				cost += 0.5 * float64(ring)
+				if cost < bestCost {
+					best, bestCost = planeLabel{label: q.Label, box: box, dot: a, leader: ring > 0}, cost
+					best.at = vg.Point{X: box.Min.X + vg.Points(0.8), Y: box.Min.Y + vg.Points(0.5)}
+					best.foot = vg.Point{X: max(box.Min.X, min(a.X, box.Max.X)), Y: max(box.Min.Y, min(a.Y, box.Max.Y))}
+				}
+			}
+		}
+		if math.IsInf(bestCost, 1) {
+			// No room inside: beside the dot, as before.
+			box := vg.Rectangle{Min: vg.Point{X: a.X + vg.Points(3) - vg.Points(0.8), Y: a.Y + vg.Points(2) - vg.Points(0.5)}}
+			box.Max = vg.Point{X: box.Min.X + bw, Y: box.Min.Y + bh}
+			best = planeLabel{label: q.Label, box: box, dot: a, at: vg.Point{X: a.X + vg.Points(3), Y: a.Y + vg.Points(2)}}
+		}
+		out = append(out, best)
+	}
+	return out
+}
+
+func inRect(p vg.Point, r vg.Rectangle) bool {
+	return p.X >= r.Min.X && p.X <= r.Max.X && p.Y >= r.Min.Y && p.Y <= r.Max.Y
+}
+
+func overlaps(a, b vg.Rectangle) bool {
+	return a.Min.X < b.Max.X && b.Min.X < a.Max.X && a.Min.Y < b.Max.Y && b.Min.Y < a.Max.Y
 }
 
 // drawLinearBar draws a plane map's colour bar in r: the gradient from lo

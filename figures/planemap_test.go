@@ -1,10 +1,12 @@
 package figures
 
 import (
+	"image/color"
 	"math"
 	"strings"
 	"testing"
 
+	"gonum.org/v1/plot/vg"
 	"gonum.org/v1/plot/vg/recorder"
 )
 
@@ -146,6 +148,77 @@ func TestPlaneMapBarLabels(t *testing.T) {
 	for _, v := range bt.Values {
 		if !bar[bt.Label(v)] {
 			t.Errorf("tick %q not drawn (drawn: %v)", bt.Label(v), bar)
+		}
+	}
+}
+
+// A probe's name stands clear of the lines drawn: over a panel whose
+// field falls steeply at its edge (a crowded contour band there) a probe
+// on the edge itself, one inside and one at the centre each have a name
+// whose box, with a margin, crosses no contour and not the dashed outline.
+func TestPlaneLabelsClearOfLines(t *testing.T) {
+	var x []float64
+	for k := range 61 {
+		x = append(x, -0.3+0.01*float64(k))
+	}
+	const ref = 3e-4
+	d := PlaneData{X: x, Y: x, Ref: ref, Steps: ContourSteps, Quantity: "Bz",
+		Outline: [][2]float64{{-0.2, -0.12}, {0.2, -0.12}, {0.2, 0.12}, {-0.2, 0.12}},
+		Points:  []PlanePoint{{X: 0.2, Y: 0, Label: "panel edge"}, {X: 0.06, Y: 0.04, Label: "module, corner"}, {X: 0, Y: 0, Label: "module"}}}
+	edge := func(v, a float64) float64 { return 1 / (1 + math.Exp((math.Abs(v)-a)/0.008)) }
+	for _, yv := range x {
+		for _, xv := range x {
+			d.V = append(d.V, ref*(1+0.02*(xv*xv+yv*yv)/0.04)*edge(xv, 0.19)*edge(yv, 0.11))
+		}
+	}
+	var c recorder.Canvas
+	PlaneMap(d)(&c, 420, 260)
+	var col color.Color
+	var lines [][]vg.Point
+	texts := map[string]vg.Point{}
+	for _, a := range c.Actions {
+		switch a := a.(type) {
+		case *recorder.SetColor:
+			col = a.Color
+		case *recorder.Stroke:
+			if col != contourInk && col != Copper {
+				continue
+			}
+			var l []vg.Point
+			for _, cp := range a.Path {
+				l = append(l, cp.Pos)
+			}
+			lines = append(lines, l)
+		case *recorder.FillString:
+			texts[a.String] = a.Point
+		}
+	}
+	if len(lines) < 5 {
+		t.Fatalf("%d lines drawn, want the contours and the outline", len(lines))
+	}
+	sty := style(markLabelSize, Ink)
+	for _, q := range d.Points {
+		at, ok := texts[q.Label]
+		if !ok {
+			t.Fatalf("%q not drawn", q.Label)
+		}
+		// The name's extent and 1.5 pt round it: clear, not touching.
+		const m = 1.5
+		box := vg.Rectangle{Min: vg.Point{X: at.X - m, Y: at.Y - m}, Max: vg.Point{X: at.X + sty.Width(q.Label) + m, Y: at.Y + sty.Height(q.Label) + m}}
+		n := 0
+		for _, l := range lines {
+			for i := 0; i+1 < len(l); i++ {
+				for k := range 40 {
+					f := vg.Length(k) / 40
+					p := vg.Point{X: l[i].X + (l[i+1].X-l[i].X)*f, Y: l[i].Y + (l[i+1].Y-l[i].Y)*f}
+					if p.X >= box.Min.X && p.X <= box.Max.X && p.Y >= box.Min.Y && p.Y <= box.Max.Y {
+						n++
+					}
+				}
+			}
+		}
+		if n > 0 {
+			t.Errorf("%q at %v: %d points of the lines under its name", q.Label, at, n)
 		}
 	}
 }

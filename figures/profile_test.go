@@ -41,7 +41,7 @@ func TestProfile(t *testing.T) {
 		t.Errorf("one-signed profile: y from %g to %g mT, want from 0", p.Y.Min, p.Y.Max)
 	}
 	all := drawnTexts(Profile(d), 400, 220)
-	for _, want := range []string{"Axial position along the coil's axis x (mm)", "Axial flux density Bx (mT)", "end", "required ≥ 800 µT"} {
+	for _, want := range []string{"Axial position w along the coil's axis x (mm)", "Axial flux density Bx (mT)", "end", "required ≥ 800 µT"} {
 		if !strings.Contains(all, want) {
 			t.Errorf("profile lacks %q: %s", want, all)
 		}

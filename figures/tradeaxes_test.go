@@ -95,7 +95,7 @@ func TestTradeLegendClear(t *testing.T) {
 			p, curves := tradePlot(tc.d)
 			var rc recorder.Canvas
 			dc := draw.Canvas{Canvas: &rc, Rectangle: vg.Rectangle{Max: vg.Point{X: 400, Y: 240}}}
-			pc := placeLegendClear(p, dc, curves, true)
+			pc, _ := placeLegendClear(p, dc, curves, true)
 			da := p.DataCanvas(pc)
 			box := legendBox(p, legendCanvas(p, da))
 			if in := box.Min.X < da.Max.X; in != tc.inside {

@@ -225,9 +225,16 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 			figures.Dimension{Kind: figures.Axial, A: e.Z0 + cs.Placements[0], B: e.Z1 + cs.Placements[0], Label: figures.LengthLabel(co.Length)})
 		desc = fmt.Sprintf("%d turns in one layer over %s", co.Turns, mmText(co.Length))
 	default:
+		mean := figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + figures.LengthLabel(co.MeanDiameter) + " mean"}
+		if cs.Underfilled {
+			// The turns lie nearer the bore than the stated mean diameter:
+			// the dimension is that of the turns as laid, as the
+			// assumptions' radial-build note gives their mean radius.
+			mean = figures.Dimension{Kind: figures.Diameter, A: cs.MeanRadius, Label: "Ø " + figures.LengthLabel(2*cs.MeanRadius) + " turns' mean"}
+		}
 		sd.Dimensions = append(sd.Dimensions,
 			figures.Dimension{Kind: figures.Diameter, A: e.R0, Label: "Ø " + figures.LengthLabel(2*e.R0) + " inner"},
-			figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + figures.LengthLabel(co.MeanDiameter) + " mean"},
+			mean,
 			figures.Dimension{Kind: figures.Diameter, A: e.R1, Label: "Ø " + figures.LengthLabel(2*e.R1) + " outer"},
 			figures.Dimension{Kind: figures.Axial, A: e.Z0 + cs.Placements[0], B: e.Z1 + cs.Placements[0], Label: figures.LengthLabel(e.Z1 - e.Z0)},
 			figures.Dimension{Kind: figures.Radial, A: e.R0, B: e.R1, Label: buildText(co.RadialBuild)})
@@ -319,7 +326,7 @@ func (c *composer) axisFigure(co calc.Coil, cr calc.CoilResult, cs *analysis.Coi
 			Eng(hi, "T", 3), Eng(lo, "T", 3), Eng(p.Z[len(p.Z)-1], "m", 3))
 	}
 	c.para(text)
-	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight,
+	c.fig(doc.Figure{Caption: caption + frameNote(co), Width: figWidth, Height: figHeight,
 		Draw: figures.OnAxis(axisName(co), p.Z, p.Exact, p.Dipole, marks...), Summary: summary})
 }
 
@@ -353,7 +360,7 @@ func (c *composer) boreFigure(co calc.Coil, cs *analysis.CoilStudy, i int) {
 	caption := fmt.Sprintf("Axial flux density %s along the bore of coil %q (exact field; dotted: the winding's ends)", bs, co.Name)
 	caption, text = c.drawCentreRequirement(i, bp.Centre, &d, caption, text)
 	c.para(text)
-	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight * 0.85, Draw: figures.Profile(d),
+	c.fig(doc.Figure{Caption: caption + frameNote(co), Width: figWidth, Height: figHeight * 0.85, Draw: figures.Profile(d),
 		Summary: fmt.Sprintf("%s on axis: %s at the centre, within 1 %% over ±%s.", bs, Eng(bp.Centre, "T", 3), Eng(bp.Flat, "m", 3))})
 }
 
@@ -375,7 +382,7 @@ func (c *composer) nearFigure(co calc.Coil, cs *analysis.CoilStudy, i int) {
 	caption := fmt.Sprintf("Axial flux density %s along the axis of coil %q (exact field; dotted: the coil's plane)", bs, co.Name)
 	caption, text = c.drawCentreRequirement(i, bp.Centre, &d, caption, text)
 	c.para(text)
-	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight * 0.8, Draw: figures.Profile(d),
+	c.fig(doc.Figure{Caption: caption + frameNote(co), Width: figWidth, Height: figHeight * 0.8, Draw: figures.Profile(d),
 		Summary: fmt.Sprintf("%s on axis: %s at the centre, half of it at ±%s.", bs, Eng(bp.Centre, "T", 3), Eng(bp.Half, "m", 3))})
 }
 
@@ -436,7 +443,7 @@ func (c *composer) pairProfileFigure(co calc.Coil, cs *analysis.CoilStudy) {
 	}
 	text += axialNote(co)
 	c.para(text)
-	c.fig(doc.Figure{Caption: fmt.Sprintf("Axial flux density %s along the axis of pair %q (exact field; shaded: the windings)", bs, co.Name),
+	c.fig(doc.Figure{Caption: fmt.Sprintf("Axial flux density %s along the axis of pair %q (exact field; shaded: the windings)", bs, co.Name) + frameNote(co),
 		Width: figWidth, Height: figHeight * 0.8, Draw: figures.Profile(d),
 		Summary: fmt.Sprintf("%s on axis: %s at the centre; largest %s at %s.", bs, format.EngColumn([]float64{bp.Centre}, bp.Peak, "T", 3)[0], Eng(math.Abs(bp.Peak), "T", 3), Eng(bp.PeakZ, "m", 3))})
 }
@@ -453,19 +460,30 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 		return
 	}
 	var sections []figures.Section
-	// The map is in the coil's own frame: its axis named, z or not.
-	xLabel, yLabel := figures.AxialLabel(axisName(co)), "Radial position ρ"
+	// The map is in the coil's own frame: its axis named, z or not, and
+	// the coordinates in the frame's letters (z and x for a coil along z,
+	// else w and u), never two axes with one letter.
+	along, across, _ := figures.FrameLetters(axisName(co))
+	xLabel, yLabel, yName := figures.AxialLabel(axisName(co)), "Radial position ρ", "ρ"
 	if co.Form == calc.Rectangle {
 		b := cs.Bundle
 		for _, x := range []float64{-co.Width / 2, co.Width / 2} {
 			sections = append(sections, figures.Section{X0: -b / 2, X1: b / 2, Y0: x - b/2, Y1: x + b/2, Round: true})
 		}
-		yLabel = "Position across the width x"
+		yLabel, yName = "Position "+across+" across the width", across
 	} else {
 		e := cs.Envelope
 		sections, _, _ = coreSketch(co, cs, true) // memo/core.go
 		for _, z := range cs.Placements {
 			for _, s := range []float64{1, -1} {
+				if cs.Underfilled {
+					// As the cross-section draws it (memo/underfill.go):
+					// the stated section in dashed outline, the turns as
+					// laid filled.
+					sections = append(sections, figures.Section{X0: z + e.Z0, X1: z + e.Z1, Y0: s * e.R0, Y1: s * e.R1, Outline: true},
+						figures.Section{X0: z + e.Z0, X1: z + e.Z1, Y0: s * cs.Laid.R0, Y1: s * cs.Laid.R1})
+					continue
+				}
 				sections = append(sections, figures.Section{X0: z + e.Z0, X1: z + e.Z1, Y0: s * e.R0, Y1: s * e.R1, Round: e.Round})
 			}
 		}
@@ -498,8 +516,15 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 	if co.Form == calc.Rectangle {
 		plane = "the plane through the axis and across the width"
 	}
-	text := fmt.Sprintf("Figure %d maps the magnitude of the flux density of coil %q alone over %s, on a logarithmic colour scale with contour lines at 1–2–5 steps per decade; the winding cross-sections are drawn in.",
-		n, co.Name, plane)
+	// A winding whose turns do not fill the stated build is drawn as on
+	// its cross-section (memo/underfill.go).
+	underText, underCap := "", ""
+	if cs.Underfilled && co.Form != calc.Rectangle {
+		underText = fmt.Sprintf(", the turns as laid in copper (the inner %s of the radial build) and the rest of the stated section in dashed outline", buildText(cs.Laid.R1-cs.Laid.R0))
+		underCap = "; dashed: the stated winding section beyond the turns"
+	}
+	text := fmt.Sprintf("Figure %d maps the magnitude of the flux density of coil %q alone over %s, on a logarithmic colour scale with contour lines at 1–2–5 steps per decade; the winding cross-sections are drawn in%s.",
+		n, co.Name, plane, underText)
 	if centre, edge, ok := mapLevels(m); ok {
 		text += " " + mapPeakText(co, m, cored) + fmt.Sprintf("; it is %s at the centre and at most %s on the map's edge.", format.EngColumn([]float64{centre}, edge, "T", 3)[0], Eng(edge, "T", 3))
 		// one block: its map is the design's field, whose largest value on
@@ -521,10 +546,10 @@ func (c *composer) fieldMap(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilS
 	}
 	c.para(text)
 	c.fig(doc.Figure{
-		Caption: fmt.Sprintf("|B| of coil %q over %s (coil frame; colour scale: viridis, van der Walt & Smith 2015, logarithmic; contours at the values marked on the colour bar%s)", co.Name, plane, coreCap),
+		Caption: fmt.Sprintf("|B| of coil %q over %s (coil frame%s; colour scale: viridis, van der Walt & Smith 2015, logarithmic; contours at the values marked on the colour bar%s%s)", co.Name, strings.Replace(plane, " (through the axis)", " through the axis", 1), frameNote(co), underCap, coreCap),
 		Width:   figWidth, Height: h, Draw: drawMap,
-		Summary: fmt.Sprintf("Map of |B|: z from %s to %s, %s from %s to %s, %d × %d points.",
-			Eng(-zHalf, "m", 3), Eng(zHalf, "m", 3), map[bool]string{true: "x", false: "ρ"}[co.Form == calc.Rectangle],
+		Summary: fmt.Sprintf("Map of |B|: %s from %s to %s, %s from %s to %s, %d × %d points.",
+			along, Eng(-zHalf, "m", 3), Eng(zHalf, "m", 3), yName,
 			Eng(-xHalf, "m", 3), Eng(xHalf, "m", 3), len(m.Z), len(m.X)),
 	})
 }
@@ -713,7 +738,7 @@ func (c *composer) pairRegion(co calc.Coil, cr calc.CoilResult, cs *analysis.Coi
 		text += fmt.Sprintf(" The required gradient, %s %s (the short bar at the centre), is %s at the centre.", relText(l), Eng(g, "T/m", 3), map[bool]string{true: "met", false: "not met"}[met])
 	}
 	c.para(text)
-	c.fig(doc.Figure{Caption: caption, Width: figWidth, Height: figHeight * 0.85, Draw: figures.Profile(d),
+	c.fig(doc.Figure{Caption: caption + frameNote(co), Width: figWidth, Height: figHeight * 0.85, Draw: figures.Profile(d),
 		Summary: fmt.Sprintf("Gradient %s; within ±1 %%: ±%s axially, %s radially.", Eng(G, "T/m", 4), Eng(pr.LinearAxial, "m", 3), Eng(pr.LinearRadial, "m", 3))})
 }
 

@@ -149,6 +149,16 @@ func axisName(co calc.Coil) string {
 	return fmt.Sprintf("(%s)", strings.Join(parts, ", "))
 }
 
+// frameNote is what a coil-frame figure's caption adds for a tilted
+// coil, whose axis label (figures.AxialLabel) cannot name the direction:
+// "; w: position along the coil's axis (0.71, 0.71, 0) from its centre".
+func frameNote(co calc.Coil) string {
+	if a := axisName(co); strings.HasPrefix(a, "(") {
+		return "; w: position along the coil's axis " + a + " from its centre"
+	}
+	return ""
+}
+
 // uniformRequirement finds the uniform-radius requirement on coil block
 // i: its required radius (m) and tolerance, ok false when there is none.
 func uniformRequirement(j *analysis.Study, i int) (r, tol float64, ok bool) {

@@ -19,7 +19,17 @@ import (
 // of interest (memo/figsel.go says which coils get one).
 func (c *composer) planeFigure(co calc.Coil, pm *analysis.PlaneMap) {
 	bs, _ := axialSymbol(co)
-	u, v := axisName(calc.Coil{Axis: pm.E1}), axisName(calc.Coil{Axis: pm.E2})
+	// The plane's coordinates are the coil frame's, from the foot of the
+	// axis: x and y for a coil along z, else u and v (the global
+	// direction, where it is one, in the caption).
+	_, u, v := figures.FrameLetters(axisName(co))
+	frame := fmt.Sprintf("coil frame from where the axis crosses the plane: %s along the width, %s along the height", u, v)
+	if u != "x" {
+		gu, gv := axisName(calc.Coil{Axis: pm.E1}), axisName(calc.Coil{Axis: pm.E2})
+		if !strings.HasPrefix(gu, "(") && !strings.HasPrefix(gv, "(") {
+			frame = fmt.Sprintf("coil frame from where the axis crosses the plane: %s along the width, in the global %s direction, and %s along the height, in the global %s direction", u, gu, v, gv)
+		}
+	}
 	var pts []figures.PlanePoint
 	for _, p := range pm.Probes {
 		pts = append(pts, figures.PlanePoint{X: p.U, Y: p.V, Label: p.Name})
@@ -27,7 +37,7 @@ func (c *composer) planeFigure(co calc.Coil, pm *analysis.PlaneMap) {
 	w, h := co.Width/2, co.Height/2
 	d := figures.PlaneData{X: pm.U, Y: pm.V, V: pm.Bn, Ref: pm.Centre, Steps: figures.ContourSteps,
 		Outline: [][2]float64{{-w, -h}, {w, -h}, {w, h}, {-w, h}}, Points: pts,
-		XLabel: "Position " + u + " (along the width)", YLabel: "Position " + v + " (along the height)", Quantity: bs}
+		XLabel: "Position " + u + " along the width", YLabel: "Position " + v + " along the height", Quantity: bs}
 	n := c.figure + 1
 	where := fmt.Sprintf("the plane %s from it along its axis", Eng(math.Abs(pm.Dist), "m", 3))
 	if pm.Dist == 0 {
@@ -137,7 +147,7 @@ func (c *composer) planeFigure(co calc.Coil, pm *analysis.PlaneMap) {
 	fh := vg.Length(100*pm.VHalf/pm.UHalf)*vg.Millimeter + 22*vg.Millimeter
 	fh = max(min(fh, 110*vg.Millimeter), 55*vg.Millimeter)
 	c.fig(doc.Figure{
-		Caption: fmt.Sprintf("%s of coil %q over %s (colour scale: viridis, van der Walt & Smith 2015, linear%s%s; dashed: the coil's mean turn%s)", bs, co.Name, where, clipped, contoursCap, dots),
+		Caption: fmt.Sprintf("%s of coil %q over %s (%s; colour scale: viridis, van der Walt & Smith 2015, linear%s%s; dashed: the coil's mean turn%s)", bs, co.Name, where, frame, clipped, contoursCap, dots),
 		Width:   figWidth, Height: fh, Draw: figures.PlaneMap(d),
 		Summary: fmt.Sprintf("Map of %s over %s: %s at the centre, from %s to %s over %s, %d × %d points.",
 			bs, where, Eng(pm.Centre, "T", 3), Eng(pm.Min, "T", 3), Eng(pm.Max, "T", 3), sizeText(2*pm.UHalf, 2*pm.VHalf), len(pm.U), len(pm.V)),
