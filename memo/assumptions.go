@@ -59,7 +59,7 @@ func (c *composer) assumptions() {
 			cooling += " " + t
 		}
 		general("Cooling", cooling)
-		general("Thermal model", templates.Text("assume-thermal", nil))
+		general("Thermal model", templates.Text("assume-thermal", thermalMassWords(d, c.j.Coils)))
 	}
 	c.add(doc.List{Items: items})
 	items = nil
@@ -395,4 +395,32 @@ func acFactor(cs *analysis.CoilStudy) float64 {
 		return 1
 	}
 	return cs.Kinds.AC.Factor
+}
+
+// thermalMassWords fill the thermal-model assumption for design d: what
+// the warm-up lumps into one thermal mass (the conductor, with a former
+// or a core where one is lumped with it, analysis.HeatParts), and the duty
+// cycle's sentence where a coil states a duty below 100 % without an
+// on-time.
+func thermalMassWords(d calc.Design, coils []analysis.CoilStudy) map[string]string {
+	former, core, duty := false, false, false
+	for i, co := range d.Coils {
+		former = former || co.Former.Mass > 0 || co.Former.HeatCapacity > 0
+		core = core || (i < len(coils) && coils[i].Heat.CoreHeatCapacity > 0)
+		duty = duty || (co.Duty > 0 && co.Duty < 1 && !(co.OnTime > 0))
+	}
+	mass := "the conductor"
+	switch {
+	case former && core:
+		mass = "the conductor, its former and its core, where stated,"
+	case former:
+		mass = "the conductor and its former, where stated,"
+	case core:
+		mass = "the conductor and its core"
+	}
+	out := map[string]string{"Mass": mass, "Duty": ""}
+	if duty {
+		out["Duty"] = " A stated duty cycle without an on-time enters as the average power."
+	}
+	return out
 }

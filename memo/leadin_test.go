@@ -25,3 +25,20 @@ func TestNarrativeLeadInPointsToTheInputs(t *testing.T) {
 		t.Error("a paragraph that does not introduce the coil block was given a pointer")
 	}
 }
+
+// The thermal-model assumption names what the warm-up lumps (the
+// conductor, a former or a core only where the design has one) and speaks
+// of a duty cycle without an on-time only where a coil states one; the
+// heat-shedding surface says the bore is taken as adiabatic rather than
+// naming a former the design may not have.
+func TestThermalAssumptionFitsDesign(t *testing.T) {
+	coil := "```coil\nname = s\nform = solenoid\nmean-diameter = 30 mm\nlength = 30 mm\nradial-build = 4 mm\nturns = 300\nwire = AWG 28\nvoltage = 12 V\n"
+	bare := memoText(t, mustEvaluate(t, coil+"```\n"))
+	if !strings.Contains(bare, "The warm-up treats the conductor as one thermal mass.") || strings.Contains(bare, "without an on-time") || strings.Contains(bare, "sits on the former") {
+		t.Error("a coil without former or duty: the thermal assumption names them")
+	}
+	both := memoText(t, mustEvaluate(t, coil+"former-mass = 8 g\nformer-material = nylon\nduty = 50 %\n```\n"))
+	if !strings.Contains(both, "the conductor and its former, where stated, as one thermal mass") || !strings.Contains(both, "A stated duty cycle without an on-time enters as the average power.") {
+		t.Error("a coil with a former and a duty without on-time: the thermal assumption leaves them out")
+	}
+}

@@ -495,15 +495,15 @@ func (c *composer) receiverSummary() doc.Table {
 	rows := [][]doc.Cell{
 		row("Design frequency", func(i int) string { return orDash(nonZero(rec(i).Frequency), "Hz", 3) }),
 		row("Sensitivity (open circuit, at the design frequency)", func(i int) string { return orDash(nonZero(rec(i).Sensitivity), "V/T", 4) }),
-		row("Noise-equivalent field at the design frequency", func(i int) string { return orDash(nonZero(rec(i).NoiseField), "T/√Hz", 3) }),
+		row("Noise-equivalent field at the design frequency", func(i int) string { return orDash(nonZero(rec(i).NoiseField), "T/√Hz", judged) }),
 		row("Noise-equivalent field, rms over the band", func(i int) string {
 			co := d.Coils[i]
 			if math.IsNaN(rec(i).BandNoiseField) {
 				return "—"
 			}
-			return fmt.Sprintf("%s (%s to %s)", Eng(rec(i).BandNoiseField, "T", 3), Eng(co.BandLow, "Hz", 3), Eng(co.BandHigh, "Hz", 3))
+			return fmt.Sprintf("%s (%s to %s)", Eng(rec(i).BandNoiseField, "T", judged), Eng(co.BandLow, "Hz", 3), Eng(co.BandHigh, "Hz", 3))
 		}),
-		row("Self-resonance, with the load", func(i int) string { return orDash(rec(i).SelfResonance, "Hz", 3) }),
+		row("Self-resonance, with the load", func(i int) string { return orDash(rec(i).SelfResonance, "Hz", judged) }),
 		row("Working band: sensitivity within 10 % of 2π f A", func(i int) string {
 			switch top := rec(i).WorkingBandTop; {
 			case math.IsNaN(top):
@@ -521,7 +521,7 @@ func (c *composer) receiverSummary() doc.Table {
 		row("Capacitance across the terminals (winding + load)", func(i int) string { return orDash(rec(i).Capacitance, "F", 3) }),
 		row("Effective area (flux linkage per tesla)", func(i int) string { return orDash(rec(i).EffectiveArea, "m²", 3) }),
 		row("Wire length / conductor mass", func(i int) string {
-			return Eng(c.j.Results.Coils[i].Length, "m", 3) + " / " + Eng(c.j.Coils[i].Kinds.AirMass, "kg", 3)
+			return Eng(c.j.Results.Coils[i].Length, "m", 3) + " / " + Eng(c.j.Coils[i].Kinds.AirMass, "kg", judged)
 		}),
 	}
 	anyCore := false

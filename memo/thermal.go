@@ -217,11 +217,11 @@ func heatSurfaceSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, 
 			Symbolic: `A_s = ` + two + `\pi d_b \ell_t`,
 			Numbers:  fmt.Sprintf(`%s\pi \cdot %s \cdot %s`, two, Q(db, "m", 4), Q(w.MeanTurn, "m", 4)), Result: Q(tp.Area, "m²", 4)})
 	case w.LayerCount <= 1 && co.RadialBuild <= 0:
-		add(Step{What: "Heat-shedding surface: the outer cylinder of the winding (the bore sits on the former)",
+		add(Step{What: "Heat-shedding surface: the outer cylinder of the winding (none through the bore, taken as adiabatic)",
 			Symbolic: `A_s = ` + two + `\pi D_o \ell`,
 			Numbers:  fmt.Sprintf(`%s\pi \cdot %s \cdot %s`, two, Q(2*ro, "m", 4), Q(co.Length, "m", 4)), Result: Q(tp.Area, "m²", 4)})
 	default:
-		add(Step{What: "Heat-shedding surface: the outer cylinder and both end faces of the winding (the bore sits on the former)",
+		add(Step{What: "Heat-shedding surface: the outer cylinder and both end faces of the winding (none through the bore, taken as adiabatic)",
 			Symbolic: `A_s = ` + two + `\left[ \pi D_o \ell + 2\pi \left( r_o^2 - r_i^2 \right) \right]`,
 			Numbers: fmt.Sprintf(`%s\left[ \pi \cdot %s \cdot %s + 2\pi \left( %s^2 - %s^2 \right) \right]`, two, Q(2*ro, "m", 4), Q(length, "m", 4),
 				Paren(Q(ro, "m", 4)), Paren(Q(ri, "m", 4))),
@@ -348,11 +348,11 @@ func conductionSteps(co calc.Coil, cr calc.CoilResult, cs *analysis.CoilStudy, c
 	if ri > 0 || hp.EndsCooled {
 		add(Step{What: "Heat generated per unit volume of the winding" + occupied + each, Symbolic: `q = \frac{\bar{P}}{\pi \left( r_o^2 - r_i^2 \right) \ell}`,
 			Numbers: fmt.Sprintf(`\frac{%s}{\pi \left( %s^2 - %s^2 \right) \cdot %s}`, Q(pc, "W", 4), Paren(Q(ro, "m", 4)), Paren(Q(ri, "m", 4)), Q(length, "m", 4)),
-			Result:  Q(q, "W/m³", 3)})
+			Result:  Q(q, "W/m³", 4)})
 	} else {
 		add(Step{What: "Heat generated per unit volume of the round bundle along the mean turn" + each, Symbolic: `q = \frac{\bar{P}}{\pi r_b^2 \ell_t}`,
 			Numbers: fmt.Sprintf(`\frac{%s}{\pi \cdot %s^2 \cdot %s}`, Q(pc, "W", 4), Paren(Q(ro, "m", 4)), Q(length, "m", 4)),
-			Result:  Q(q, "W/m³", 3)})
+			Result:  Q(q, "W/m³", 4)})
 	}
 	rise := st.HotSpot - st.Surface
 	radial := `\frac{q}{4 k_w} \left[ r_o^2 - r_i^2 - 2 r_i^2 \ln\frac{r_o}{r_i} \right]`
