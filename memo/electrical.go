@@ -426,8 +426,12 @@ func suppressionText(co calc.Coil, cr calc.CoilResult, p analysis.SwitchOffParts
 	case !p.Assumed:
 		fmt.Fprintf(&b, "Unsuppressed, a switch opening in %s would see about %s. ", Eng(p.SwitchOff, "s", 3), Eng(p.Peak, "V", 3))
 	case ring:
-		fmt.Fprintf(&b, "The unsuppressed spike depends on how fast the switch opens: about L·I/t above %s for a switch opening in t, and never more than about %s, where the winding's own capacitance takes up the stored energy (reached by a switch opening faster than %s). ",
-			sourceOf(co), Eng(p.RingingSwitch, "V", 3), Eng(p.Crossover, "s", 3))
+		fast := "" // the figure the Safety section quotes, where the capacitance does not cap it
+		if !p.Bounded {
+			fast = fmt.Sprintf(" (some %s for a fast semiconductor switch opening in %s)", Eng(p.Ramp, "V", 3), Eng(p.SwitchOff, "s", 1))
+		}
+		fmt.Fprintf(&b, "The unsuppressed spike depends on how fast the switch opens: about L·I/t above %s for a switch opening in t%s, and never more than about %s, where the winding's own capacitance takes up the stored energy (reached by a switch opening faster than %s). ",
+			sourceOf(co), fast, Eng(p.RingingSwitch, "V", 3), Eng(p.Crossover, "s", 3))
 	default:
 		fmt.Fprintf(&b, "The unsuppressed spike depends on how fast the switch opens: about L·I/t above %s for a switch opening in t, some %s for a fast semiconductor switch opening in %s. ",
 			sourceOf(co), Eng(p.Ramp, "V", 3), Eng(p.SwitchOff, "s", 1))

@@ -276,7 +276,7 @@ func (c *composer) pickUpSteps(i int) []Step {
 			R, name = `R(T)`, "resistance"
 		}
 		add(Step{What: fmt.Sprintf("Thermal noise of the winding's %s (Nyquist, Phys. Rev. 32 (1928) 110)", name), Symbolic: `e_n = \sqrt{4 k T ` + R + `}`,
-			Numbers: fmt.Sprintf(`\sqrt{4 k \cdot %s \cdot %s}`, Q(k.Temperature, "K", 4), Q(r.Resistance, "Ω", 4)), Result: Q(r.NoiseVoltage, "V/√Hz", 3)},
+			Numbers: fmt.Sprintf(`\sqrt{4 k \cdot %s \cdot %s}`, Q(k.Temperature, "K", 5), Q(r.Resistance, "Ω", 4)), Result: Q(r.NoiseVoltage, "V/√Hz", 3)},
 			Step{What: "Noise-equivalent field: the field whose e.m.f. equals the thermal noise", Symbolic: `B_n = \frac{e_n}{S}`,
 				Numbers: fmt.Sprintf(`\frac{%s}{%s}`, Q(r.NoiseVoltage, "V/√Hz", 3), Q(r.Sensitivity, "V/T", 4)), Result: Q(r.NoiseField, "T/√Hz", 3)})
 	}
@@ -284,7 +284,7 @@ func (c *composer) pickUpSteps(i int) []Step {
 		add(Step{What: fmt.Sprintf("Noise-equivalent field over the band %s to %s, with the resistance at each frequency (Gauss–Legendre quadrature in ln f); near the self-resonance too, since the induced voltage and the thermal noise are both in series with the winding and the capacitance divides them alike", Eng(co.BandLow, "Hz", 3), Eng(co.BandHigh, "Hz", 3)),
 			Symbolic: `B_{rms} = \sqrt{\int_{f_1}^{f_2} \left( \frac{\sqrt{4 k T R_{ac}(f)}}{2 \pi f A_{eff}} \right)^2 df}`,
 			Numbers: fmt.Sprintf(`\sqrt{\int_{%s}^{%s} \left( \frac{\sqrt{4 k \cdot %s \cdot R_{ac}(f)}}{2 \pi f \cdot %s} \right)^2 df}`,
-				Q(co.BandLow, "Hz", 3), Q(co.BandHigh, "Hz", 3), Q(k.Temperature, "K", 4), Q(r.EffectiveArea, "m²", 4)),
+				Q(co.BandLow, "Hz", 3), Q(co.BandHigh, "Hz", 3), Q(k.Temperature, "K", 5), Q(r.EffectiveArea, "m²", 4)),
 			Result: Q(r.BandNoiseField, "T", 3)})
 	}
 	add(selfInductanceSteps(co, cr, cs)...) // memo/electrical.go

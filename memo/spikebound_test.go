@@ -3,6 +3,8 @@ package memo
 import (
 	"strings"
 	"testing"
+
+	"coilmemo/analysis"
 )
 
 // The switching section says the winding's own capacitance bounds the
@@ -28,5 +30,31 @@ func TestSpikeBoundWording(t *testing.T) {
 		if !c.bounded && !strings.Contains(text, "is not estimated for a "+c.name) {
 			t.Errorf("%s: the memo does not say the capacitance is not estimated", c.name)
 		}
+	}
+}
+
+// The spike the Safety section's switch-off caution quotes is the one the
+// Inductance and switching section derives or states: over every example
+// and golden design, the caution's figure appears in that section.
+func TestSwitchOffFigureInTheBody(t *testing.T) {
+	checked := 0
+	for name, src := range specsForTests(t) {
+		j, diags := evaluate(name, src)
+		if len(diags) > 0 {
+			continue // a revision that needs its previous file
+		}
+		body := sectionsByName(t, j)["electrical"]
+		for _, f := range j.Safety.Findings {
+			if f.Kind != analysis.SwitchOffVoltage {
+				continue
+			}
+			checked++
+			if v := Eng(f.Value, "V", 3); !strings.Contains(body, v) {
+				t.Errorf("%s: the caution's spike %s is not in the switching section", name, v)
+			}
+		}
+	}
+	if checked < 3 {
+		t.Fatalf("only %d switch-off cautions checked", checked)
 	}
 }
