@@ -50,7 +50,17 @@ func (c *composer) field() {
 	case !round:
 		from = "each straight side of every rectangular turn (closed-form Biot–Savart integral)"
 	}
-	c.para("Fields are computed from the exact field of " + from + ", superposed. For maps and profiles the turns of a thick winding are grouped by Gauss quadrature over the winding cross-section, which reproduces the turn-by-turn sum to better than one part in 10⁹ and falls back to the individual turns near the winding.")
+	text := "Fields are computed from the exact field of " + from + ", superposed."
+	layered := false // a circular winding of several layers, whose turns the maps group
+	for i, co := range d.Coils {
+		if i < len(r.Coils) && co.Form != calc.Rectangle && !r.Coils[i].Winding.Thin && r.Coils[i].Winding.LayerCount > 1 {
+			layered = true
+		}
+	}
+	if layered {
+		text += " For maps and profiles the turns of a winding of several layers are grouped by Gauss quadrature over its cross-section, which reproduces the turn-by-turn sum to better than one part in 10⁹ and falls back to the individual turns near the winding."
+	}
+	c.para(text)
 	if len(r.Probes) > 0 {
 		// every field of the table in one unit, that of the largest, so
 		// that a zero or a small component reads against the others
@@ -180,13 +190,13 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 	n := c.figure + 1
 	if co.Form == calc.Rectangle {
 		b := cs.Bundle
-		c.para(fmt.Sprintf("Figure %d shows the coil in plan, to scale: %d turns in a bundle of about %s on a mean turn of %s × %s.",
-			n, co.Turns, mmText(b), mmText(co.Width), mmText(co.Height)))
+		c.para(fmt.Sprintf("Figure %d shows the coil in plan, to scale: %s in a bundle of about %s on a mean turn of %s × %s.",
+			n, format.Count(co.Turns, "turn", "turns"), mmText(b), mmText(co.Width), mmText(co.Height)))
 		c.fig(doc.Figure{Caption: fmt.Sprintf("Coil %q in plan, looking along its axis (to scale; dimensions to the mean turn)", co.Name),
 			Width: figWidth, Height: 70 * vg.Millimeter,
 			Draw: figures.RectangleSketch(figures.RectangleData{Width: co.Width, Height: co.Height, Bundle: b,
 				WidthLabel: figures.LengthLabel(co.Width), HeightLabel: figures.LengthLabel(co.Height),
-				Note: fmt.Sprintf("%d turns, bundle ≈ Ø %s", co.Turns, figures.LengthLabel(b))}),
+				Note: fmt.Sprintf("%s, bundle ≈ Ø %s", format.Count(co.Turns, "turn", "turns"), figures.LengthLabel(b))}),
 			Summary: fmt.Sprintf("Plan: %s × %s mean turn, bundle ≈ %s.", mmText(co.Width), mmText(co.Height), mmText(b))})
 		return
 	}
@@ -196,8 +206,8 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 	}
 	if !f.Sketch {
 		// At the coil's scale a thin coil's section is a dot: say it.
-		c.para(fmt.Sprintf("The winding of coil %q is thin: all %d turns lie in one round bundle about %s across on the mean diameter of %s, a section too small against the coil to be worth a sketch.",
-			co.Name, co.Turns, mmText(e.R1-e.R0), mmText(co.MeanDiameter)))
+		c.para(fmt.Sprintf("The winding of coil %q is thin: %s in one round bundle about %s across on the mean diameter of %s, a section too small against the coil to be worth a sketch.",
+			co.Name, allTurnsLie(co.Turns), mmText(e.R1-e.R0), mmText(co.MeanDiameter)))
 		return
 	}
 	var sd figures.SketchData
@@ -216,14 +226,14 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 	switch {
 	case w.Thin:
 		sd.Dimensions = append(sd.Dimensions, figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + figures.LengthLabel(co.MeanDiameter) + " mean"})
-		note := fmt.Sprintf("%d turns, bundle ≈ Ø %s", co.Turns, figures.LengthLabel(e.R1-e.R0))
+		note := fmt.Sprintf("%s, bundle ≈ Ø %s", format.Count(co.Turns, "turn", "turns"), figures.LengthLabel(e.R1-e.R0))
 		sd.Notes = append(sd.Notes, figures.Note{X: sd.Sections[len(sd.Sections)-1].X1, Y: e.R1, Text: note})
-		desc = fmt.Sprintf("all %d turns in one round bundle of about %s on the mean diameter", co.Turns, mmText(e.R1-e.R0))
+		desc = fmt.Sprintf("%s in one round bundle of about %s on the mean diameter", strings.TrimSuffix(strings.TrimSuffix(allTurnsLie(co.Turns), " lie"), " lies"), mmText(e.R1-e.R0))
 	case co.RadialBuild <= 0:
 		sd.Dimensions = append(sd.Dimensions,
 			figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + figures.LengthLabel(co.MeanDiameter) + " mean"},
 			figures.Dimension{Kind: figures.Axial, A: e.Z0 + cs.Placements[0], B: e.Z1 + cs.Placements[0], Label: figures.LengthLabel(co.Length)})
-		desc = fmt.Sprintf("%d turns in one layer over %s", co.Turns, mmText(co.Length))
+		desc = fmt.Sprintf("%s in one layer over %s", format.Count(co.Turns, "turn", "turns"), mmText(co.Length))
 	default:
 		mean := figures.Dimension{Kind: figures.Diameter, A: rm, Label: "Ø " + figures.LengthLabel(co.MeanDiameter) + " mean"}
 		if cs.Underfilled {
@@ -238,8 +248,8 @@ func (c *composer) crossSection(co calc.Coil, cr calc.CoilResult, cs *analysis.C
 			figures.Dimension{Kind: figures.Diameter, A: e.R1, Label: "Ø " + figures.LengthLabel(2*e.R1) + " outer"},
 			figures.Dimension{Kind: figures.Axial, A: e.Z0 + cs.Placements[0], B: e.Z1 + cs.Placements[0], Label: figures.LengthLabel(e.Z1 - e.Z0)},
 			figures.Dimension{Kind: figures.Radial, A: e.R0, B: e.R1, Label: buildText(co.RadialBuild)})
-		desc = fmt.Sprintf("%d turns in %d layers of up to %d turns, %s long with a radial build of %s",
-			co.Turns, w.LayerCount, w.TurnsPerLayer, mmText(e.Z1-e.Z0), buildText(co.RadialBuild))
+		desc = fmt.Sprintf("%s in %s of up to %s, %s long with a radial build of %s",
+			format.Count(co.Turns, "turn", "turns"), format.Count(w.LayerCount, "layer", "layers"), format.Count(w.TurnsPerLayer, "turn", "turns"), mmText(e.Z1-e.Z0), buildText(co.RadialBuild))
 		if cs.Underfilled {
 			used := cs.Laid.R1 - cs.Laid.R0
 			sd.Dimensions[len(sd.Dimensions)-1].Label += ", turns " + buildText(used) // the radial build's
@@ -861,4 +871,13 @@ func mapLevels(m *analysis.MapData) (centre, edge float64, ok bool) {
 		}
 	}
 	return centre, edge, !math.IsNaN(centre) && !math.IsInf(edge, 0)
+}
+
+// allTurnsLie words where a thin winding's turns lie: "all 30 turns lie",
+// or "its single turn lies".
+func allTurnsLie(n int) string {
+	if n == 1 {
+		return "its single turn lies"
+	}
+	return "all " + format.Digits(n) + " turns lie"
 }
