@@ -271,7 +271,13 @@ func (r *renderer) minHeight(b doc.Block) float64 {
 	case doc.List:
 		return 2 * leadBody
 	case doc.Table:
-		return 8 + tableStart(r.layoutTable(b, 0))
+		// laid out with the number it will carry: "Table 12 – …" may
+		// wrap where an unnumbered caption does not
+		n := 0
+		if b.Caption != "" {
+			n = r.tab + 1
+		}
+		return 8 + tableStart(r.layoutTable(b, n))
 	case doc.Figure:
 		fl := r.layoutFigure(b)
 		return fl.total
