@@ -12,6 +12,24 @@ import (
 	"coilmemo/doc"
 )
 
+// drawFigure draws fig at its size and returns the calls it made.
+func drawFigure(fig doc.Figure) []recorder.Action {
+	var c recorder.Canvas
+	fig.Draw(&c, fig.Width, fig.Height)
+	return c.Actions
+}
+
+// drawnTexts are the strings among a drawing's calls, in order.
+func drawnTexts(actions []recorder.Action) []string {
+	var texts []string
+	for _, a := range actions {
+		if fs, ok := a.(*recorder.FillString); ok {
+			texts = append(texts, fs.String)
+		}
+	}
+	return texts
+}
+
 // figureTexts draws every figure of the memo of each design and hands
 // over the texts set in it.
 func figureTexts(t *testing.T, files []string, each func(file, caption string, texts []string)) {
@@ -26,15 +44,7 @@ func figureTexts(t *testing.T, files []string, each func(file, caption string, t
 			if !ok {
 				continue
 			}
-			var c recorder.Canvas
-			fig.Draw(&c, fig.Width, fig.Height)
-			var texts []string
-			for _, a := range c.Actions {
-				if fs, ok := a.(*recorder.FillString); ok {
-					texts = append(texts, fs.String)
-				}
-			}
-			each(filepath.Base(f), fig.Caption, texts)
+			each(filepath.Base(f), fig.Caption, drawnTexts(drawFigure(fig)))
 		}
 	}
 }

@@ -7,8 +7,6 @@ import (
 	"strings"
 	"testing"
 
-	"gonum.org/v1/plot/vg/recorder"
-
 	"coilmemo/doc"
 )
 
@@ -29,22 +27,16 @@ func TestSketchLabelsOneRule(t *testing.T) {
 			if !ok || !(strings.HasPrefix(fig.Caption, "Cross-section of coil") || (strings.HasPrefix(fig.Caption, "Coil ") && strings.Contains(fig.Caption, " in plan,"))) {
 				continue
 			}
-			var c recorder.Canvas
-			fig.Draw(&c, fig.Width, fig.Height)
 			n := 0
-			for _, a := range c.Actions {
-				fs, ok := a.(*recorder.FillString)
-				if !ok {
-					continue
-				}
-				for _, m := range num.FindAllStringSubmatch(fs.String, -1) {
+			for _, text := range drawnTexts(drawFigure(fig)) {
+				for _, m := range num.FindAllStringSubmatch(text, -1) {
 					n++
 					want := 3
 					if v, err := strconv.ParseFloat(m[1], 64); err == nil && v >= 100 {
 						want = 4
 					}
 					if sig := sigDigits(m[1]); sig != want && !(sig < want && !strings.Contains(m[1], ".") && len(m[1]) >= want) {
-						t.Errorf("%s: %q on the sketch has %d significant figures", filepath.Base(f), fs.String, sig)
+						t.Errorf("%s: %q on the sketch has %d significant figures", filepath.Base(f), text, sig)
 					}
 				}
 			}

@@ -7,8 +7,6 @@ import (
 	"strings"
 	"testing"
 
-	"gonum.org/v1/plot/vg/recorder"
-
 	"coilmemo/analysis"
 	"coilmemo/doc"
 )
@@ -39,13 +37,7 @@ func captions(d *doc.Document) (caps []string, texts string) {
 			continue
 		}
 		caps = append(caps, f.Caption)
-		var c recorder.Canvas
-		f.Draw(&c, f.Width, f.Height)
-		for _, a := range c.Actions {
-			if fs, ok := a.(*recorder.FillString); ok {
-				all = append(all, fs.String)
-			}
-		}
+		all = append(all, drawnTexts(drawFigure(f))...)
 	}
 	return caps, strings.Join(all, "|")
 }

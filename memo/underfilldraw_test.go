@@ -53,20 +53,15 @@ func TestUnderfilledDrawnAsLaid(t *testing.T) {
 			if !ok {
 				continue
 			}
-			var c recorder.Canvas
-			fig.Draw(&c, fig.Width, fig.Height)
+			actions := drawFigure(fig)
 			switch {
 			case strings.HasPrefix(fig.Caption, "Cross-section of coil"):
 				found := false
-				for _, a := range c.Actions {
-					fs, ok := a.(*recorder.FillString)
-					if !ok {
-						continue
+				for _, s := range drawnTexts(actions) {
+					if strings.HasSuffix(s, " mean") && !meanLabel.MatchString(s) {
+						t.Errorf("%s: cross-section labelled %q, the stated mean", filepath.Base(f), s)
 					}
-					if strings.HasSuffix(fs.String, " mean") && !meanLabel.MatchString(fs.String) {
-						t.Errorf("%s: cross-section labelled %q, the stated mean", filepath.Base(f), fs.String)
-					}
-					if l := meanLabel.FindStringSubmatch(fs.String); l != nil {
+					if l := meanLabel.FindStringSubmatch(s); l != nil {
 						found = true
 						d, _ := strconv.ParseFloat(l[1], 64)
 						// the sketch's rule (TestSketchLabelsOneRule): three
@@ -84,7 +79,7 @@ func TestUnderfilledDrawnAsLaid(t *testing.T) {
 					t.Errorf("%s: no mean diameter of the turns on the cross-section", filepath.Base(f))
 				}
 			case strings.HasPrefix(fig.Caption, "|B| of coil"):
-				filled, outlined := sectionHeights(c.Actions)
+				filled, outlined := sectionHeights(actions)
 				if len(filled) == 0 || len(outlined) == 0 {
 					t.Errorf("%s: map draws %d filled and %d outlined winding sections, want both", filepath.Base(f), len(filled), len(outlined))
 					continue
