@@ -90,8 +90,12 @@ func sectionTerm(ri, ro, lam, r float64) (f, fbar float64) {
 	d := ro - ri
 	xo := lam * ro
 	e2 := math.Exp(-2 * lam * d) // e^(−2λ(ro−ri)): K against I over the depth
-	rho := 0.0                   // ρ_n e^(−2λ ri), the scaled ratio
-	if ri > 0 {
+	// Where e2 is below 10⁻²⁰ the bore's terms, ρ_n K(λ ro) e2 against
+	// I(λ ro) (both ratios of order one), are far below the last bit of
+	// the sums at ro; only F_n inside the section still needs ρ_n.
+	bore := ri > 0 && (e2 >= 1e-20 || r < ro)
+	rho := 0.0 // ρ_n e^(−2λ ri), the scaled ratio
+	if bore {
 		rho = besselIe(1, lam*ri) / besselKe(1, lam*ri)
 	}
 	den := besselIe(0, xo)
@@ -101,6 +105,9 @@ func sectionTerm(ri, ro, lam, r float64) (f, fbar float64) {
 		num -= rho * besselKe(1, xo) * e2
 	}
 	fbar = 2 * ro / (lam * (ro*ro - ri*ri)) * num / den
+	if r >= ro {
+		return 1, fbar // F_n(ro) = 1 by its definition
+	}
 	if er := math.Exp(-lam * (ro - r)); er > 0 {
 		top := besselIe(0, lam*r)
 		if rho > 0 {
@@ -109,6 +116,17 @@ func sectionTerm(ri, ro, lam, r float64) (f, fbar float64) {
 		f = er * top / den
 	}
 	return f, fbar
+}
+
+// sectionWave is term n of SectionRise's series over a section ℓ long:
+// its wave number λ_n = (2n+1)π/ℓ and coefficient c_n = 4(−1)ⁿ/((2n+1)π).
+func sectionWave(n int, l float64) (lam, c float64) {
+	m := float64(2*n + 1)
+	c = 4 / (m * math.Pi)
+	if n%2 == 1 {
+		c = -c
+	}
+	return m * math.Pi / l, c
 }
 
 // sectionSeries sums SectionRise's series: k/q times the mean and the
@@ -120,12 +138,7 @@ func sectionSeries(ri, ro, l float64) (mean, max float64) {
 	tail := 2 * ro * l * l * l / (math.Pow(math.Pi, 5) * a2) // × M⁻⁴: bound of the mean's neglected tail
 	maxDone := false
 	for n := 0; n < 1_000_000; n++ {
-		m := float64(2*n + 1)
-		lam := m * math.Pi / l
-		c := 4 / (m * math.Pi)
-		if n%2 == 1 {
-			c = -c
-		}
+		lam, c := sectionWave(n, l)
 		var fi, fbar float64
 		if maxDone {
 			_, fbar = sectionTerm(ri, ro, lam, ro) // F_n(ri) no longer needed
@@ -139,7 +152,7 @@ func sectionSeries(ri, ro, l float64) (mean, max float64) {
 		if !maxDone && lam*d > 2 && math.Abs(tMax) <= 1e-16*max {
 			maxDone = true
 		}
-		if maxDone && tail/(m*m*m*m) <= 1e-11*mean {
+		if m := float64(2*n + 1); maxDone && tail/(m*m*m*m) <= 1e-11*mean {
 			break
 		}
 	}
@@ -153,12 +166,7 @@ func sectionSeries(ri, ro, l float64) (mean, max float64) {
 func sectionRiseAt(ri, ro, l, k, r, z float64) float64 {
 	sum := 0.0
 	for n := 0; n < 20000; n++ {
-		m := float64(2*n + 1)
-		lam := m * math.Pi / l
-		c := 4 / (m * math.Pi)
-		if n%2 == 1 {
-			c = -c
-		}
+		lam, c := sectionWave(n, l)
 		f, _ := sectionTerm(ri, ro, lam, r)
 		t := c / (lam * lam) * f * math.Cos(lam*z)
 		sum += t

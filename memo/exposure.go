@@ -61,13 +61,9 @@ func alternatingNote(j *analysis.Study) string {
 	if len(names) == 0 {
 		return ""
 	}
-	what := "coil " + names[0] + " alternates"
+	what, inPhase := "coil "+names[0]+" alternates", ""
 	if len(names) > 1 {
-		what = "coils " + joinAnd(names) + " alternate"
-	}
-	inPhase := ""
-	if len(names) > 1 {
-		inPhase = ", the coils' fields taken in phase"
+		what, inPhase = "coils "+joinAnd(names)+" alternate", ", the coils' fields taken in phase"
 	}
 	s := " The field of " + what + ". The region and the flux densities above are at the peak of the current, √2 times the r.m.s." + inPhase + ", against the static-field 0.5 mT."
 	if len(j.Safety.Exposure) == 0 {
